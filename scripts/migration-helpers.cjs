@@ -11,7 +11,8 @@ const companyId = () => ({
   onDelete: 'CASCADE',
 });
 
-const ref = (table, { allowNull = false, onDelete = 'RESTRICT' } = {}) => ({
+// NO ACTION (checked at statement end) still refuses deleting a referenced row, yet lets a whole company cascade away.
+const ref = (table, { allowNull = false, onDelete = 'NO ACTION' } = {}) => ({
   type: DataTypes.UUID,
   allowNull,
   references: { model: table, key: 'id' },

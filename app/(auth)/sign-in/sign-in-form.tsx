@@ -1,0 +1,70 @@
+'use client';
+
+import { zodResolver } from '@hookform/resolvers/zod';
+import { signIn } from 'next-auth/react';
+import { useRouter, useSearchParams } from 'next/navigation';
+import { useState } from 'react';
+import { useForm } from 'react-hook-form';
+import { Button } from '@/components/ui/button';
+import { signInSchema, type SignInInput } from '@/lib/validation/auth';
+
+// One message for every failure, so the form never tells whether an e-mail has an account.
+const BAD_CREDENTIALS = 'That e-mail and password do not match an active account.';
+
+export function SignInForm() {
+  const router = useRouter();
+  const params = useSearchParams();
+  const [failure, setFailure] = useState<string | null>(null);
+  const { register, handleSubmit, formState } = useForm<SignInInput>({ resolver: zodResolver(signInSchema) });
+
+  const onSubmit = handleSubmit(async (values) => {
+    setFailure(null);
+    const result = await signIn('credentials', { ...values, redirect: false });
+    if (!result || result.error) {
+      setFailure(result?.status === 401 || result?.error === 'CredentialsSignin' ? BAD_CREDENTIALS : 'Sign-in failed. Check your connection and try again.');
+      return;
+    }
+    const next = params.get('callbackUrl');
+    router.replace(next && next.startsWith('/') && !next.startsWith('//') ? next : '/');
+    router.refresh();
+  });
+
+  const { errors, isSubmitting } = formState;
+  return (
+    <form onSubmit={onSubmit} noValidate className="space-y-5">
+      <div>
+        <label htmlFor="email" className="block text-base font-medium">E-mail</label>
+        <input
+          id="email"
+          type="email"
+          autoComplete="username"
+          inputMode="email"
+          className="mt-1 block min-h-touch w-full rounded-md border border-slate-300 px-3 text-lg"
+          aria-invalid={!!errors.email}
+          aria-describedby={errors.email ? 'email-error' : undefined}
+          {...register('email')}
+        />
+        {errors.email && <p id="email-error" className="mt-1 text-sm text-missed-700">{errors.email.message}</p>}
+      </div>
+      <div>
+        <label htmlFor="password" className="block text-base font-medium">Password</label>
+        <input
+          id="password"
+          type="password"
+          autoComplete="current-password"
+          className="mt-1 block min-h-touch w-full rounded-md border border-slate-300 px-3 text-lg"
+          aria-invalid={!!errors.password}
+          aria-describedby={errors.password ? 'password-error' : undefined}
+          {...register('password')}
+        />
+        {errors.password && <p id="password-error" className="mt-1 text-sm text-missed-700">{errors.password.message}</p>}
+      </div>
+      <div role="alert" aria-live="assertive">
+        {failure && <p className="rounded-md bg-missed-100 px-3 py-2 text-base text-missed-700">{failure}</p>}
+      </div>
+      <Button type="submit" size="field" className="w-full" disabled={isSubmitting}>
+        {isSubmitting ? 'Signing in…' : 'Sign in'}
+      </Button>
+    </form>
+  );
+}

@@ -1,0 +1,31 @@
+'use client';
+
+import type { ColumnDef } from '@tanstack/react-table';
+import Link from 'next/link';
+import { StatusBadge } from '@/components/ui/badge';
+import { DataTable } from '@/components/ui/data-table';
+import type { JobListResponse } from '@/app/api/jobs/route';
+
+type Row = JobListResponse['items'][number];
+
+const columns: ColumnDef<Row, unknown>[] = [
+  {
+    id: 'number',
+    header: 'Job',
+    enableSorting: true,
+    cell: ({ row }) => (
+      <Link href={`/jobs/${row.original.id}`} className="font-semibold text-brand-700 hover:underline">{row.original.number}</Link>
+    ),
+  },
+  { id: 'customer', header: 'Customer', cell: ({ row }) => row.original.customer?.name },
+  { id: 'site', header: 'Site', cell: ({ row }) => `${row.original.site?.addressLine}, ${row.original.site?.city}` },
+  { id: 'status', header: 'Status', enableSorting: true, cell: ({ row }) => <StatusBadge status={row.original.status} /> },
+  { id: 'scheduledDate', header: 'Scheduled', enableSorting: true, cell: ({ row }) => row.original.scheduledDate ?? '—' },
+  { id: 'crew', header: 'Crew', cell: ({ row }) => row.original.crew?.name ?? '—' },
+];
+
+export function JobsTable({ list, sort, dir }: { list: JobListResponse; sort: string; dir: 'asc' | 'desc' }) {
+  return (
+    <DataTable caption="Jobs" columns={columns} data={list.items} page={list.page} pageCount={list.pageCount} total={list.total} sort={sort} dir={dir} />
+  );
+}

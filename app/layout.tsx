@@ -1,0 +1,21 @@
+import type { Metadata, Viewport } from 'next';
+import '@fontsource/inter/400.css';
+import '@fontsource/inter/500.css';
+import '@fontsource/inter/600.css';
+import '@fontsource/inter/700.css';
+import './globals.css';
+
+export const metadata: Metadata = {
+  title: { default: 'Setline', template: '%s · Setline' },
+  description: 'Point-repair jobs, install clocks and repair reports.',
+};
+
+export const viewport: Viewport = { themeColor: '#115e59', width: 'device-width', initialScale: 1 };
+
+export default function RootLayout({ children }: { children: React.ReactNode }) {
+  return (
+    <html lang="en">
+      <body className="min-h-screen font-sans">{children}</body>
+    </html>
+  );
+}

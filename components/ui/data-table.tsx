@@ -1,0 +1,101 @@
+'use client';
+
+import { flexRender, getCoreRowModel, useReactTable, type ColumnDef } from '@tanstack/react-table';
+import { usePathname, useRouter, useSearchParams } from 'next/navigation';
+
+/**
+ * A desk table whose sorting and paging live in the URL (?sort=&dir=&page=) and are done by the server.
+ * Columns with `enableSorting` send their id as the sort key.
+ */
+export function DataTable<Row>({
+  columns,
+  data,
+  page,
+  pageCount,
+  total,
+  sort,
+  dir,
+  caption,
+}: {
+  columns: ColumnDef<Row, unknown>[];
+  data: Row[];
+  page: number;
+  pageCount: number;
+  total: number;
+  sort?: string;
+  dir?: 'asc' | 'desc';
+  caption: string;
+}) {
+  const router = useRouter();
+  const pathname = usePathname();
+  const params = useSearchParams();
+  const table = useReactTable({ data, columns, getCoreRowModel: getCoreRowModel(), manualPagination: true, manualSorting: true, pageCount });
+
+  const go = (changes: Record<string, string>) => {
+    const next = new URLSearchParams(params.toString());
+    for (const [key, value] of Object.entries(changes)) next.set(key, value);
+    router.push(`${pathname}?${next.toString()}`);
+  };
+
+  return (
+    <div className="overflow-hidden rounded-lg bg-white ring-1 ring-slate-200">
+      <table className="min-w-full text-sm">
+        <caption className="sr-only">{caption}</caption>
+        <thead className="bg-slate-100 text-left text-xs uppercase tracking-wide text-slate-600">
+          {table.getHeaderGroups().map((group) => (
+            <tr key={group.id}>
+              {group.headers.map((header) => {
+                const sortable = header.column.columnDef.enableSorting;
+                const active = sort === header.column.id;
+                const ariaSort = active ? (dir === 'asc' ? 'ascending' : 'descending') : undefined;
+                return (
+                  <th key={header.id} scope="col" aria-sort={ariaSort} className="px-3 py-2 font-semibold">
+                    {sortable ? (
+                      <button
+                        type="button"
+                        className="inline-flex items-center gap-1 uppercase hover:text-slate-900"
+                        onClick={() => go({ sort: header.column.id, dir: active && dir === 'asc' ? 'desc' : 'asc', page: '1' })}
+                      >
+                        {flexRender(header.column.columnDef.header, header.getContext())}
+                        <span aria-hidden="true">{active ? (dir === 'asc' ? '▲' : '▼') : '↕'}</span>
+                      </button>
+                    ) : (
+                      flexRender(header.column.columnDef.header, header.getContext())
+                    )}
+                  </th>
+                );
+              })}
+            </tr>
+          ))}
+        </thead>
+        <tbody className="divide-y divide-slate-100">
+          {table.getRowModel().rows.map((row) => (
+            <tr key={row.id} className="hover:bg-slate-50">
+              {row.getVisibleCells().map((cell) => (
+                <td key={cell.id} className="px-3 py-2 align-top">
+                  {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                </td>
+              ))}
+            </tr>
+          ))}
+          {data.length === 0 && (
+            <tr>
+              <td colSpan={columns.length} className="px-3 py-8 text-center text-slate-500">Nothing matches.</td>
+            </tr>
+          )}
+        </tbody>
+      </table>
+      <div className="flex items-center justify-between border-t border-slate-200 px-3 py-2 text-sm text-slate-600">
+        <span>{total} in all · page {page} of {pageCount}</span>
+        <div className="flex gap-2">
+          <button type="button" className="rounded px-2 py-1 ring-1 ring-slate-300 disabled:opacity-40" disabled={page <= 1} onClick={() => go({ page: String(page - 1) })}>
+            Previous
+          </button>
+          <button type="button" className="rounded px-2 py-1 ring-1 ring-slate-300 disabled:opacity-40" disabled={page >= pageCount} onClick={() => go({ page: String(page + 1) })}>
+            Next
+          </button>
+        </div>
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,143 @@
+import { formatPressure, formatTemperature } from '@/lib/units';
+import { addMinutes, cureMinutes, workingWindowMinutes } from './clock';
+import { CureInputError } from './errors';
+import { calendarDay } from './expiry';
+import { DEFAULT_PREP_MINUTES, DEFAULT_SAFETY_MARGIN } from './limits';
+import { noDryRunText, slowPullText } from './reasons';
+import type { InstallRecord, QualityFlag } from './types';
+import {
+  requireDate,
+  requireNonNegative,
+  requireNumber,
+  requireSafetyMargin,
+  requireTemperature,
+  validateEventOrder,
+  validatePacker,
+  validateResin,
+} from './validate';
+
+function timeText(at: Date): string {
+  // ISO in UTC: the flag is stored with the install; the page shows it in the company's zone.
+  return at.toISOString().replace('.000Z', 'Z');
+}
+
+/**
+ * The quality flags of a running or finished install, in a fixed order. Each flag is raised
+ * only from fields that are known; a missing field never raises a flag except 'no-dry-run'.
+ */
+export function flagsFor(install: InstallRecord): QualityFlag[] {
+  if (typeof install !== 'object' || install === null) throw new CureInputError('flagsFor needs an install.');
+  const resin = validateResin(install.resin);
+  const { mixedAt, inflatedAt, deflatedAt } = install;
+  validateEventOrder(mixedAt, inflatedAt, deflatedAt);
+  const now = install.now == null ? undefined : requireDate(install.now, 'Current time');
+  const mixTempC = install.mixTempC == null ? undefined : requireTemperature(install.mixTempC, 'Mixing temperature');
+  const pipeTempC = install.pipeTempC == null ? undefined : requireTemperature(install.pipeTempC, 'Pipe temperature');
+  const dryRunSeconds = install.dryRunSeconds == null ? undefined : requireNonNegative(install.dryRunSeconds, 'Dry run time');
+  const prepMinutes = install.prepMinutes == null ? DEFAULT_PREP_MINUTES : requireNonNegative(install.prepMinutes, 'Preparation time');
+  const safetyMargin = install.safetyMargin == null ? DEFAULT_SAFETY_MARGIN : requireSafetyMargin(install.safetyMargin);
+  const packer = install.packer == null ? undefined : validatePacker(install.packer);
+  const pressures = install.pressuresKpa == null ? [] : install.pressuresKpa;
+  if (!Array.isArray(pressures)) throw new CureInputError('Pressures must be a list of kPa readings.');
+  pressures.forEach((p, i) => requireNumber(p, `Pressure reading ${i + 1}`));
+  const system = install.unitSystem ?? 'metric';
+
+  const flags: QualityFlag[] = [];
+  const workingWindowMin = mixTempC === undefined ? undefined : workingWindowMinutes(resin, mixTempC);
+
+  // late-inflate: inflated after inflate-by, or still not inflated when inflate-by has passed.
+  if (mixedAt != null && workingWindowMin !== undefined) {
+    const inflateBy = addMinutes(mixedAt, workingWindowMin);
+    if (inflatedAt != null && inflatedAt.getTime() > inflateBy.getTime()) {
+      flags.push({
+        kind: 'late-inflate',
+        severity: 'critical',
+        message: `Inflated at ${timeText(inflatedAt)}, after the inflate-by time ${timeText(inflateBy)}: the resin may have begun to set before the patch was pressed home.`,
+      });
+    } else if (inflatedAt == null && now !== undefined && now.getTime() > inflateBy.getTime()) {
+      flags.push({
+        kind: 'late-inflate',
+        severity: 'critical',
+        message: `Not inflated and the inflate-by time ${timeText(inflateBy)} has passed: the working window of this mix is over.`,
+      });
+    }
+  }
+
+  const cure = pipeTempC === undefined ? undefined : cureMinutes(resin, pipeTempC);
+
+  // early-deflate: the bladder came off before the hold time at the pipe temperature was up.
+  if (inflatedAt != null && deflatedAt != null && cure !== undefined) {
+    const deflateAfter = addMinutes(inflatedAt, cure.holdMin);
+    if (deflatedAt.getTime() < deflateAfter.getTime()) {
+      flags.push({
+        kind: 'early-deflate',
+        severity: 'critical',
+        message: `Deflated at ${timeText(deflatedAt)}, before the deflate-after time ${timeText(deflateAfter)}: the patch may not have held its shape.`,
+      });
+    }
+  }
+
+  // Outside the resin's rated range the published times do not apply and the cure is uncertain.
+  if (pipeTempC !== undefined && pipeTempC < resin.minTempC) {
+    flags.push({
+      kind: 'cold-cure',
+      severity: 'critical',
+      message: `Cured in a pipe at ${formatTemperature(pipeTempC, system)}, below the resin's minimum of ${formatTemperature(resin.minTempC, system)}.`,
+    });
+  }
+  if (pipeTempC !== undefined && pipeTempC > resin.maxTempC) {
+    flags.push({
+      kind: 'hot-cure',
+      severity: 'critical',
+      message: `Cured in a pipe at ${formatTemperature(pipeTempC, system)}, above the resin's maximum of ${formatTemperature(resin.maxTempC, system)}.`,
+    });
+  }
+
+  if (dryRunSeconds === undefined) {
+    flags.push({ kind: 'no-dry-run', severity: 'warning', message: noDryRunText() });
+  } else if (workingWindowMin !== undefined && mixTempC !== undefined) {
+    const safeWindowMin = workingWindowMin * (1 - safetyMargin);
+    const neededMin = prepMinutes + dryRunSeconds / 60;
+    if (neededMin > safeWindowMin) {
+      flags.push({
+        kind: 'slow-dry-run',
+        severity: 'warning',
+        message: slowPullText({ dryRunSeconds, prepMinutes, neededMin, safeWindowMin, safetyMargin, mixTempC, system }),
+      });
+    }
+  }
+
+  // Too little pressure leaves the patch loose against the wall; too much risks the bladder and the host pipe.
+  if (packer !== undefined && pressures.length > 0) {
+    const outside = pressures.filter((p) => p < packer.minPressureKpa || p > packer.maxPressureKpa);
+    if (outside.length > 0) {
+      // reduce, not Math.min(...list): a long logger series would overflow the call stack.
+      const low = pressures.reduce((a, b) => Math.min(a, b));
+      const high = pressures.reduce((a, b) => Math.max(a, b));
+      flags.push({
+        kind: 'pressure-out-of-range',
+        severity: 'critical',
+        message:
+          `${outside.length} of ${pressures.length} pressure readings outside the packer's rating of ` +
+          `${formatPressure(packer.minPressureKpa, system)}–${formatPressure(packer.maxPressureKpa, system)} ` +
+          `(readings from ${formatPressure(low, system)} to ${formatPressure(high, system)}).`,
+      });
+    }
+  }
+
+  // The kit is judged on the day it was mixed, or today when it is not mixed yet.
+  const usedOn = mixedAt ?? now;
+  const expires = install.resinKitExpiresOn == null ? undefined : calendarDay(install.resinKitExpiresOn, 'Resin kit expiry');
+  if (expires !== undefined && usedOn != null) {
+    const used = calendarDay(usedOn, 'Mix date');
+    if (expires < used) {
+      flags.push({
+        kind: 'expired-resin',
+        severity: 'critical',
+        message: `The resin kit expired on ${expires}, before it was ${mixedAt != null ? 'mixed' : 'to be mixed'} on ${used}.`,
+      });
+    }
+  }
+
+  return flags;
+}

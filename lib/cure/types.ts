@@ -1,0 +1,111 @@
+import type { UnitSystem } from '@/lib/units';
+
+/**
+ * How strongly a resin's times shorten with warmth.
+ * - `doublingC`: every `doublingC` degrees warmer halves the time (the trade's rule of thumb).
+ * - `activationEnergyKJ`: Arrhenius, rate ∝ exp(−Ea/RT) with Ea in kJ/mol.
+ */
+export type CureSensitivity = { doublingC: number } | { activationEnergyKJ: number };
+
+/** The clock data of a resin system, as its data sheet gives them at one reference temperature. */
+export interface ResinClockSpec {
+  /** Temperature at which the three times below were measured, °C. */
+  refTempC: number;
+  /** Working time of the mixed resin at refTempC, minutes. */
+  potLifeMin: number;
+  /** Inflate → earliest deflate at refTempC, minutes. */
+  holdMin: number;
+  /** Inflate → return to service at refTempC, minutes. */
+  fullCureMin: number;
+  /** Lowest and highest pipe temperature the resin is rated to cure at, °C. */
+  minTempC: number;
+  maxTempC: number;
+  sensitivity: CureSensitivity;
+}
+
+export interface CurePlanInput {
+  mixedAt: Date;
+  /** Temperature where the resin is mixed and the patch wetted out, °C; sets the working window. */
+  mixTempC: number;
+  /** Temperature inside the host pipe, °C; sets hold and full cure. */
+  pipeTempC: number;
+  inflatedAt?: Date | null;
+  deflatedAt?: Date | null;
+  /** Length of the dry pull of the packer to the damage, seconds; stands for the loaded pull. */
+  dryRunSeconds?: number | null;
+  /** Wet-out and loading time after mixing, minutes (default 0). */
+  prepMinutes?: number | null;
+  /** Share of the working window held back, 0–0.9 (default 0.2). */
+  safetyMargin?: number | null;
+  /** Units used in the words of `reasons` (default 'metric'); the numbers returned stay SI. */
+  unitSystem?: UnitSystem;
+}
+
+export interface CurePlan {
+  /** Pot life corrected to the mixing temperature, minutes. */
+  workingWindowMin: number;
+  /** The working window less the safety margin, minutes. */
+  safeWorkingWindowMin: number;
+  /** mixedAt + workingWindowMin: the packer must be inflated by then. */
+  inflateBy: Date;
+  /** mixedAt + working window × (1 − safetyMargin): the time to plan against. */
+  safeInflateBy: Date;
+  /** Hold corrected to the pipe temperature, minutes. */
+  holdMin: number;
+  /** Full cure corrected to the pipe temperature, minutes. */
+  fullCureMin: number;
+  /** Preparation plus dry-run time, minutes; absent without a dry run. */
+  neededMin?: number;
+  deflateAfter?: Date;
+  returnToService?: Date;
+  go: boolean;
+  /** Why not, in words, with what would help; empty when go. */
+  reasons: string[];
+}
+
+export type FlagKind =
+  | 'late-inflate'
+  | 'early-deflate'
+  | 'cold-cure'
+  | 'hot-cure'
+  | 'no-dry-run'
+  | 'slow-dry-run'
+  | 'pressure-out-of-range'
+  | 'expired-resin';
+
+export type FlagSeverity = 'critical' | 'warning';
+
+export interface QualityFlag {
+  kind: FlagKind;
+  severity: FlagSeverity;
+  message: string;
+}
+
+export interface PackerPressureRating {
+  minPressureKpa: number;
+  maxPressureKpa: number;
+}
+
+/**
+ * A running or finished install, as far as it is known. Every field but `resin` may be
+ * missing (or null, as a database row gives it); a flag is raised only from what is known.
+ */
+export interface InstallRecord {
+  resin: ResinClockSpec;
+  mixedAt?: Date | null;
+  mixTempC?: number | null;
+  pipeTempC?: number | null;
+  inflatedAt?: Date | null;
+  deflatedAt?: Date | null;
+  dryRunSeconds?: number | null;
+  prepMinutes?: number | null;
+  safetyMargin?: number | null;
+  /** Pressures logged while inflated, kPa. */
+  pressuresKpa?: number[] | null;
+  packer?: PackerPressureRating | null;
+  /** Last day the resin kit may be used: a Date or a calendar date "YYYY-MM-DD". */
+  resinKitExpiresOn?: Date | string | null;
+  /** The present moment, for a running install; without it no "overdue" flag is raised. */
+  now?: Date | null;
+  unitSystem?: UnitSystem;
+}

@@ -1,0 +1,54 @@
+// The closed vocabularies of the job, shared by models, zod schemas and the UI.
+// The database enforces the same lists with CHECK constraints (see migrations/).
+
+export const ROLES = ['admin', 'office', 'foreman', 'technician'] as const;
+export type Role = (typeof ROLES)[number];
+export const DESK_ROLES: readonly Role[] = ['admin', 'office'];
+export const FIELD_ROLES: readonly Role[] = ['foreman', 'technician'];
+
+export const UNIT_SYSTEMS = ['imperial', 'metric'] as const;
+export type UnitSystemName = (typeof UNIT_SYSTEMS)[number];
+
+export const CUSTOMER_KINDS = ['homeowner', 'property_manager', 'municipality', 'contractor', 'business', 'other'] as const;
+export const ACCESS_POINT_KINDS = ['manhole', 'cleanout', 'other'] as const;
+export const PIPE_MATERIALS = [
+  'vitrified_clay', 'concrete', 'pvc', 'hdpe', 'cast_iron', 'ductile_iron', 'asbestos_cement', 'bituminous_fibre', 'brick', 'other',
+] as const;
+
+export const JOB_STATUSES = [
+  'draft', 'scheduled', 'in_progress', 'awaiting_review', 'sent_back', 'approved', 'reported', 'closed', 'cancelled',
+] as const;
+export type JobStatus = (typeof JOB_STATUSES)[number];
+
+export const DEFECT_TYPES = [
+  'crack_longitudinal', 'crack_circumferential', 'crack_multiple', 'fracture', 'broken', 'hole', 'joint_offset',
+  'joint_separated', 'root_intrusion', 'infiltration', 'deformation', 'corrosion', 'lateral_intrusion', 'other',
+] as const;
+export const REPAIR_STATUSES = ['planned', 'installed', 'failed', 'cancelled'] as const;
+
+export const RESIN_CHEMISTRIES = ['epoxy', 'silicate', 'polyester', 'vinyl_ester', 'other'] as const;
+export const SENSITIVITY_KINDS = ['doubling', 'arrhenius'] as const;
+
+export const INSTALL_STATUSES = ['not_started', 'in_progress', 'awaiting_review', 'approved', 'sent_back', 'abandoned'] as const;
+export type InstallStatus = (typeof INSTALL_STATUSES)[number];
+
+export const INSTALL_EVENT_TYPES = [
+  'safety_acknowledged', 'checks_done', 'dry_run_started', 'dry_run_finished', 'conditions_recorded',
+  'go_decision', 'resin_mixed', 'patch_loaded', 'packer_in_position', 'bladder_inflated', 'pressure_reading',
+  'bladder_deflated', 'inspection_recorded', 'signed_off', 'note', 'correction',
+] as const;
+export type InstallEventType = (typeof INSTALL_EVENT_TYPES)[number];
+
+export const ATTACHMENT_KINDS = ['before', 'after', 'inspection', 'document', 'other'] as const;
+export const REVIEW_DECISIONS = ['approved', 'sent_back'] as const;
+
+/** Words shown to people for the codes above. */
+export const LABELS: Record<string, string> = {
+  admin: 'Admin', office: 'Office', foreman: 'Foreman', technician: 'Technician',
+  draft: 'Draft', scheduled: 'Scheduled', in_progress: 'In progress', awaiting_review: 'Awaiting review',
+  sent_back: 'Sent back', approved: 'Approved', reported: 'Report sent', closed: 'Closed', cancelled: 'Cancelled',
+  not_started: 'Not started', abandoned: 'Abandoned', planned: 'Planned', installed: 'Installed', failed: 'Failed',
+  manhole: 'Manhole', cleanout: 'Cleanout', other: 'Other',
+};
+
+export const label = (code: string) => LABELS[code] ?? code.replace(/_/g, ' ').replace(/^./, (c) => c.toUpperCase());

@@ -1,0 +1,53 @@
+import { requireFinite } from './errors';
+import {
+  forceFromSi,
+  lengthFromSi,
+  pressureFromSi,
+  temperatureFromSi,
+  unitLabels,
+  volumeFromSi,
+  type LengthKind,
+  type UnitSystem,
+} from './system';
+
+export interface FormatOptions {
+  /** Digits after the decimal point; each quantity has a default suited to a crew's reading. */
+  decimals?: number;
+}
+
+/** A number with fixed decimals, never "-0" (a rounded −0.001 is just zero on a report). */
+export function formatNumber(value: number, decimals: number): string {
+  requireFinite(value, 'value');
+  const digits = Math.min(10, Math.max(0, Math.trunc(requireFinite(decimals, 'decimals'))));
+  const text = value.toFixed(digits);
+  return Number(text) === 0 ? (0).toFixed(digits) : text;
+}
+
+// Default decimals: whole millimetres, hundredths of an inch/foot/metre; whole kPa, tenths of
+// a psi; whole degrees; hundredths of a litre or gallon; tenths of a kN, whole lbf.
+const LENGTH_DECIMALS = { mm: 0, in: 2, m: 2, ft: 2 } as const;
+
+export function formatLength(mm: number, system: UnitSystem, kind: LengthKind = 'short', options: FormatOptions = {}): string {
+  const value = lengthFromSi(mm, system, kind);
+  const labels = unitLabels(system);
+  const unit = kind === 'short' ? labels.shortLength : labels.longLength;
+  return `${formatNumber(value, options.decimals ?? LENGTH_DECIMALS[unit])} ${unit}`;
+}
+
+export function formatPressure(kPa: number, system: UnitSystem, options: FormatOptions = {}): string {
+  const unit = unitLabels(system).pressure;
+  return `${formatNumber(pressureFromSi(kPa, system), options.decimals ?? (unit === 'psi' ? 1 : 0))} ${unit}`;
+}
+
+export function formatTemperature(celsius: number, system: UnitSystem, options: FormatOptions = {}): string {
+  return `${formatNumber(temperatureFromSi(celsius, system), options.decimals ?? 0)} ${unitLabels(system).temperature}`;
+}
+
+export function formatVolume(litres: number, system: UnitSystem, options: FormatOptions = {}): string {
+  return `${formatNumber(volumeFromSi(litres, system), options.decimals ?? 2)} ${unitLabels(system).volume}`;
+}
+
+export function formatForce(newtons: number, system: UnitSystem, options: FormatOptions = {}): string {
+  const unit = unitLabels(system).force;
+  return `${formatNumber(forceFromSi(newtons, system), options.decimals ?? (unit === 'kN' ? 1 : 0))} ${unit}`;
+}

@@ -1,0 +1,11 @@
+import { z } from 'zod';
+
+export const uuidSchema = z.uuid('Not a valid id');
+
+/** Page and size from a query string, with sane bounds. */
+export const paginationSchema = z.object({
+  page: z.coerce.number().int().min(1, 'page starts at 1').default(1),
+  pageSize: z.coerce.number().int().min(1).max(100, 'pageSize is at most 100').default(25),
+});
+
+export const isoDateSchema = z.iso.date('Use a date like 2026-12-01');

@@ -1,0 +1,31 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { UNIT_SYSTEMS, type UnitSystemName } from '@/lib/domain';
+
+export class Company extends Model<InferAttributes<Company>, InferCreationAttributes<Company>> {
+  declare id: CreationOptional<string>;
+  declare name: string;
+  /** IANA zone; all times are stored in UTC and shown in this zone. */
+  declare timeZone: CreationOptional<string>;
+  declare unitSystem: CreationOptional<UnitSystemName>;
+  declare minOverlapPerEndMm: CreationOptional<number>;
+  /** Fraction of the working window kept in reserve (0.2 = inflate with 20 % of the pot life left). */
+  declare workingWindowSafetyMargin: CreationOptional<number>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+export function initCompany(sequelize: Sequelize) {
+  Company.init(
+    {
+      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+      name: { type: DataTypes.STRING(200), allowNull: false },
+      timeZone: { type: DataTypes.STRING(64), allowNull: false, defaultValue: 'UTC' },
+      unitSystem: { type: DataTypes.STRING(16), allowNull: false, defaultValue: 'imperial', validate: { isIn: [UNIT_SYSTEMS] } },
+      minOverlapPerEndMm: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 305 },
+      workingWindowSafetyMargin: { type: DataTypes.DECIMAL(4, 3), allowNull: false, defaultValue: 0.2 },
+      createdAt: DataTypes.DATE,
+      updatedAt: DataTypes.DATE,
+    },
+    { sequelize, tableName: 'companies', underscored: true },
+  );
+}

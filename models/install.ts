@@ -1,0 +1,92 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { INSTALL_EVENT_TYPES, INSTALL_STATUSES, type InstallEventType, type InstallStatus } from '@/lib/domain';
+
+/** One attempt at installing the patch of one repair. */
+export class Install extends Model<InferAttributes<Install>, InferCreationAttributes<Install>> {
+  declare id: CreationOptional<string>;
+  declare companyId: string;
+  declare repairId: string;
+  declare jobId: string;
+  declare crewId: CreationOptional<string | null>;
+  declare status: CreationOptional<InstallStatus>;
+  declare resinSystemId: CreationOptional<string | null>;
+  declare resinKitId: CreationOptional<string | null>;
+  declare packerId: CreationOptional<string | null>;
+  declare checklistTemplateId: CreationOptional<string | null>;
+  declare mixTempC: CreationOptional<number | null>;
+  declare pipeTempC: CreationOptional<number | null>;
+  declare patchLengthMm: CreationOptional<number | null>;
+  declare dryRunSeconds: CreationOptional<number | null>;
+  declare noGoOverrideReason: CreationOptional<string | null>;
+  declare inspectionResult: CreationOptional<'pass' | 'fail' | null>;
+  declare inspectionNotes: CreationOptional<string | null>;
+  declare signedOffById: CreationOptional<string | null>;
+  declare signedOffAt: CreationOptional<Date | null>;
+  declare startedAt: CreationOptional<Date | null>;
+  declare finishedAt: CreationOptional<Date | null>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+/** Append-only evidence: what was tapped on the device and when the server heard of it. */
+export class InstallEvent extends Model<InferAttributes<InstallEvent>, InferCreationAttributes<InstallEvent>> {
+  declare id: CreationOptional<string>;
+  declare companyId: string;
+  declare installId: string;
+  /** Made on the device; a replay of the same tap carries the same id. */
+  declare clientEventId: string;
+  declare type: InstallEventType;
+  declare deviceTime: Date;
+  declare receivedAt: CreationOptional<Date>;
+  declare userId: string;
+  declare payload: CreationOptional<Record<string, unknown>>;
+  declare correctsEventId: CreationOptional<string | null>;
+  declare createdAt: CreationOptional<Date>;
+}
+
+export function initInstall(sequelize: Sequelize) {
+  Install.init(
+    {
+      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+      companyId: { type: DataTypes.UUID, allowNull: false },
+      repairId: { type: DataTypes.UUID, allowNull: false },
+      jobId: { type: DataTypes.UUID, allowNull: false },
+      crewId: DataTypes.UUID,
+      status: { type: DataTypes.STRING(20), allowNull: false, defaultValue: 'not_started', validate: { isIn: [INSTALL_STATUSES] } },
+      resinSystemId: DataTypes.UUID,
+      resinKitId: DataTypes.UUID,
+      packerId: DataTypes.UUID,
+      checklistTemplateId: DataTypes.UUID,
+      mixTempC: DataTypes.DECIMAL(5, 2),
+      pipeTempC: DataTypes.DECIMAL(5, 2),
+      patchLengthMm: DataTypes.INTEGER,
+      dryRunSeconds: DataTypes.INTEGER,
+      noGoOverrideReason: DataTypes.TEXT,
+      inspectionResult: DataTypes.STRING(8),
+      inspectionNotes: DataTypes.TEXT,
+      signedOffById: DataTypes.UUID,
+      signedOffAt: DataTypes.DATE,
+      startedAt: DataTypes.DATE,
+      finishedAt: DataTypes.DATE,
+      createdAt: DataTypes.DATE,
+      updatedAt: DataTypes.DATE,
+    },
+    { sequelize, tableName: 'installs', underscored: true },
+  );
+  InstallEvent.init(
+    {
+      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+      companyId: { type: DataTypes.UUID, allowNull: false },
+      installId: { type: DataTypes.UUID, allowNull: false },
+      clientEventId: { type: DataTypes.UUID, allowNull: false },
+      type: { type: DataTypes.STRING(24), allowNull: false, validate: { isIn: [INSTALL_EVENT_TYPES] } },
+      deviceTime: { type: DataTypes.DATE, allowNull: false },
+      receivedAt: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
+      userId: { type: DataTypes.UUID, allowNull: false },
+      payload: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
+      correctsEventId: DataTypes.UUID,
+      createdAt: DataTypes.DATE,
+    },
+    { sequelize, tableName: 'install_events', underscored: true, updatedAt: false },
+  );
+}

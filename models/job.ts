@@ -1,0 +1,87 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { DEFECT_TYPES, JOB_STATUSES, REPAIR_STATUSES, type JobStatus } from '@/lib/domain';
+
+export class Job extends Model<InferAttributes<Job>, InferCreationAttributes<Job>> {
+  declare id: CreationOptional<string>;
+  declare companyId: string;
+  /** "YYYY-NNNN", unique per company, never reused (see job_number_sequences). */
+  declare number: string;
+  declare customerId: string;
+  declare siteId: string;
+  declare crewId: CreationOptional<string | null>;
+  declare status: CreationOptional<JobStatus>;
+  /** Calendar day in the company's time zone. */
+  declare scheduledDate: CreationOptional<string | null>;
+  declare title: CreationOptional<string | null>;
+  declare notes: CreationOptional<string | null>;
+  /** The office's latest send-back comment, shown to the crew on /today. */
+  declare reviewComment: CreationOptional<string | null>;
+  declare archivedAt: CreationOptional<Date | null>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+/** One defect to be fixed with one patch. */
+export class Repair extends Model<InferAttributes<Repair>, InferCreationAttributes<Repair>> {
+  declare id: CreationOptional<string>;
+  declare companyId: string;
+  declare jobId: string;
+  declare segmentId: string;
+  /** The access point the distance is measured from (the segment's upstream end when null). */
+  declare fromAccessPointId: CreationOptional<string | null>;
+  declare position: CreationOptional<number>;
+  declare distanceMm: number;
+  declare defectType: (typeof DEFECT_TYPES)[number];
+  declare conditionGrade: number;
+  declare defectLengthMm: number;
+  /** Clock position looking downstream, "3" or a span "10-2". */
+  declare clockPosition: CreationOptional<string | null>;
+  declare plannedPatchLengthMm: CreationOptional<number | null>;
+  declare status: CreationOptional<(typeof REPAIR_STATUSES)[number]>;
+  declare notes: CreationOptional<string | null>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+export function initJob(sequelize: Sequelize) {
+  Job.init(
+    {
+      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+      companyId: { type: DataTypes.UUID, allowNull: false },
+      number: { type: DataTypes.STRING(20), allowNull: false },
+      customerId: { type: DataTypes.UUID, allowNull: false },
+      siteId: { type: DataTypes.UUID, allowNull: false },
+      crewId: DataTypes.UUID,
+      status: { type: DataTypes.STRING(20), allowNull: false, defaultValue: 'draft', validate: { isIn: [JOB_STATUSES] } },
+      scheduledDate: DataTypes.DATEONLY,
+      title: DataTypes.STRING(200),
+      notes: DataTypes.TEXT,
+      reviewComment: DataTypes.TEXT,
+      archivedAt: DataTypes.DATE,
+      createdAt: DataTypes.DATE,
+      updatedAt: DataTypes.DATE,
+    },
+    { sequelize, tableName: 'jobs', underscored: true },
+  );
+  Repair.init(
+    {
+      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+      companyId: { type: DataTypes.UUID, allowNull: false },
+      jobId: { type: DataTypes.UUID, allowNull: false },
+      segmentId: { type: DataTypes.UUID, allowNull: false },
+      fromAccessPointId: DataTypes.UUID,
+      position: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
+      distanceMm: { type: DataTypes.INTEGER, allowNull: false },
+      defectType: { type: DataTypes.STRING(32), allowNull: false, validate: { isIn: [DEFECT_TYPES] } },
+      conditionGrade: { type: DataTypes.SMALLINT, allowNull: false, validate: { min: 1, max: 5 } },
+      defectLengthMm: { type: DataTypes.INTEGER, allowNull: false },
+      clockPosition: DataTypes.STRING(5),
+      plannedPatchLengthMm: DataTypes.INTEGER,
+      status: { type: DataTypes.STRING(16), allowNull: false, defaultValue: 'planned', validate: { isIn: [REPAIR_STATUSES] } },
+      notes: DataTypes.TEXT,
+      createdAt: DataTypes.DATE,
+      updatedAt: DataTypes.DATE,
+    },
+    { sequelize, tableName: 'repairs', underscored: true },
+  );
+}
