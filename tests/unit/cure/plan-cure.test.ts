@@ -112,9 +112,6 @@ const inputArb = fc.record({
   safetyMargin: fc.option(fc.double({ min: 0, max: 0.9, noNaN: true }), { nil: undefined }),
 });
 
-function toInput(i: fc.Arbitrary<unknown> extends never ? never : Parameters<typeof buildInput>[0]) {
-  return buildInput(i);
-}
 function buildInput(i: {
   mixedAt: Date;
   mixTempC: number;
@@ -145,7 +142,7 @@ describe('planCure — properties', () => {
   it('inflate-by is after the mix, safe inflate-by not after inflate-by, deflate-after after the inflate', () => {
     fc.assert(
       fc.property(resinArb, inputArb, (resin, raw) => {
-        const input = toInput(raw);
+        const input = buildInput(raw);
         const plan = planCure(resin, input);
         expect(plan.inflateBy.getTime()).toBeGreaterThan(input.mixedAt.getTime());
         expect(plan.safeInflateBy.getTime()).toBeLessThanOrEqual(plan.inflateBy.getTime());
@@ -161,7 +158,7 @@ describe('planCure — properties', () => {
   it('no valid input gives NaN or an Invalid Date', () => {
     fc.assert(
       fc.property(resinArb, inputArb, (resin, raw) => {
-        const plan = planCure(resin, toInput(raw));
+        const plan = planCure(resin, buildInput(raw));
         for (const n of [plan.workingWindowMin, plan.safeWorkingWindowMin, plan.holdMin, plan.fullCureMin]) {
           expect(Number.isFinite(n)).toBe(true);
         }

@@ -24,7 +24,11 @@ describe('timeFactor — facts of the trade', () => {
 
 describe('timeFactor — properties', () => {
   it('is exactly 1 at the reference temperature', () => {
-    fc.assert(fc.property(sensitivity, temp, (s, ref) => expect(timeFactor(s, ref, ref)).toBe(1)));
+    fc.assert(
+      fc.property(sensitivity, temp, (s, ref) => {
+        expect(timeFactor(s, ref, ref)).toBe(1);
+      }),
+    );
   });
 
   it('with { doublingC }, doublingC warmer halves the time', () => {
