@@ -6,7 +6,13 @@ import path from 'node:path';
 // (route handlers and models against the real PostgreSQL started by scripts/test.sh).
 export default defineConfig({
   plugins: [react()],
-  resolve: { alias: { '@': path.resolve(__dirname, '.') } },
+  resolve: {
+    alias: {
+      '@': path.resolve(__dirname, '.'),
+      // Outside Next's react-server build the real module throws on import; the guard is Next's job.
+      'server-only': path.resolve(__dirname, 'tests/fixtures/server-only.ts'),
+    },
+  },
   test: {
     projects: [
       {

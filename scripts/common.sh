@@ -1,0 +1,37 @@
+#!/usr/bin/env bash
+# Shared by scripts/demo.sh, scripts/test.sh and scripts/seed.sh: install what is missing, start the database.
+ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
+cd "$ROOT"
+export PATH="$ROOT/node_modules/.bin:$PATH"
+
+say() { printf '\033[1;36m[setline]\033[0m %s\n' "$*" >&2; }
+
+# npm ci when node_modules is missing or older than the lock file.
+ensure_dependencies() {
+  if [ ! -d node_modules ] || [ ! -f node_modules/.package-lock.json ] || [ package-lock.json -nt node_modules/.package-lock.json ]; then
+    say "installing npm dependencies (npm ci)"
+    npm ci --no-audit --no-fund
+  fi
+}
+
+# Starts our PostgreSQL cluster and sets DATABASE_URL for the named database.
+start_database() {
+  local name="$1"
+  DATABASE_URL="$(DB_NAME="$name" bash scripts/db.sh start)"
+  export DATABASE_URL
+}
+
+# Drops and re-creates the named database, then applies every migration.
+fresh_database() {
+  local name="$1"
+  start_database "$name"
+  DB_NAME="$name" bash scripts/db.sh reset
+  sequelize-cli db:migrate >/dev/null
+}
+
+# A random secret kept under .data so sessions survive a demo restart.
+session_secret() {
+  mkdir -p .data
+  [ -s .data/nextauth-secret ] || node -e "process.stdout.write(require('crypto').randomBytes(32).toString('base64url'))" > .data/nextauth-secret
+  cat .data/nextauth-secret
+}

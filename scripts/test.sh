@@ -1,0 +1,60 @@
+#!/usr/bin/env bash
+# npm test: installs what is missing, starts PostgreSQL, makes fresh test databases and runs
+# every suite (unit, integration, e2e). `npm test -- unit|integration|e2e` runs one suite.
+# Exits non-zero when any suite fails.
+set -uo pipefail
+source "$(dirname "${BASH_SOURCE[0]}")/common.sh"
+set -e
+
+if [ $# -eq 0 ]; then SUITES=(unit integration e2e); else SUITES=("$@"); fi
+REPORTS="$ROOT/.data/test-reports"
+rm -rf "$REPORTS"; mkdir -p "$REPORTS"
+
+ensure_dependencies
+
+ensure_chromium() {
+  local path="${CHROMIUM_PATH:-/usr/bin/chromium}"
+  [ -x "$path" ] && return 0
+  if [ "$(id -u)" = 0 ]; then
+    say "installing Debian's chromium for the browser tests (apt-get)"
+    DEBIAN_FRONTEND=noninteractive apt-get update -qq
+    DEBIAN_FRONTEND=noninteractive apt-get install -y -qq chromium >/dev/null
+  else
+    say "Chromium is missing: run  sudo apt-get install -y chromium  (or set CHROMIUM_PATH)"
+    return 1
+  fi
+}
+
+failed=0
+run_suite() {
+  local suite="$1"
+  set +e
+  case "$suite" in
+    unit)
+      vitest run --project unit --reporter=default --reporter=json --outputFile.json="$REPORTS/unit.json"
+      ;;
+    integration)
+      fresh_database "${TEST_DB_NAME:-setline_test}" &&
+        vitest run --project integration --reporter=default --reporter=json --outputFile.json="$REPORTS/integration.json"
+      ;;
+    e2e)
+      ensure_chromium &&
+        fresh_database "${E2E_DB_NAME:-setline_e2e}" &&
+        sequelize-cli db:seed:all >/dev/null &&
+        say "building for the browser tests (next build)" &&
+        next build >/dev/null &&
+        PLAYWRIGHT_JSON_OUTPUT_NAME="$REPORTS/e2e.json" playwright test --reporter=list,json
+      ;;
+    *)
+      say "unknown suite: $suite (unit | integration | e2e)"; false ;;
+  esac
+  local status=$?
+  set -e
+  if [ $status -ne 0 ]; then failed=1; say "suite $suite FAILED"; else say "suite $suite passed"; fi
+}
+
+for suite in "${SUITES[@]}"; do run_suite "$suite"; done
+
+# One closing line with the test counts of every suite that ran.
+node scripts/test-summary.cjs "$REPORTS" || true
+exit $failed

@@ -1,0 +1,11 @@
+/** Calls a route handler as Next would: a Request and, for dynamic segments, a params promise. */
+export async function call(
+  handler: (request: Request, context: { params: Promise<Record<string, string>> }) => Promise<Response>,
+  url: string,
+  params: Record<string, string> = {},
+  init?: RequestInit,
+) {
+  const response = await handler(new Request(new URL(url, 'http://localhost'), init), { params: Promise.resolve(params) });
+  const body = response.headers.get('content-type')?.includes('json') ? await response.json() : await response.text();
+  return { status: response.status, body };
+}
