@@ -4,9 +4,6 @@ import { Sequelize } from 'sequelize';
 import { env } from '@/lib/env';
 
 // One Sequelize instance per process; kept on globalThis so dev hot reloads do not open new pools.
-// NUMERIC columns (temperatures, pressures, minutes) hold small decimals: read them as numbers, not strings.
-pg.types.setTypeParser(pg.types.builtins.NUMERIC, (value: string) => Number.parseFloat(value));
-
 const globalForDb = globalThis as unknown as { setlineSequelize?: Sequelize };
 
 function createSequelize() {

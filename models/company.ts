@@ -1,4 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { decimal } from './columns';
 import { UNIT_SYSTEMS, type UnitSystemName } from '@/lib/domain';
 
 export class Company extends Model<InferAttributes<Company>, InferCreationAttributes<Company>> {
@@ -22,10 +23,10 @@ export function initCompany(sequelize: Sequelize) {
       timeZone: { type: DataTypes.STRING(64), allowNull: false, defaultValue: 'UTC' },
       unitSystem: { type: DataTypes.STRING(16), allowNull: false, defaultValue: 'imperial', validate: { isIn: [UNIT_SYSTEMS] } },
       minOverlapPerEndMm: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 305 },
-      workingWindowSafetyMargin: { type: DataTypes.DECIMAL(4, 3), allowNull: false, defaultValue: 0.2 },
+      workingWindowSafetyMargin: decimal(4, 3, { allowNull: false, defaultValue: 0.2 }),
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },
-    { sequelize, tableName: 'companies', underscored: true },
+    { sequelize, modelName: 'Company', tableName: 'companies', underscored: true },
   );
 }

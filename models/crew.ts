@@ -31,7 +31,7 @@ export function initCrew(sequelize: Sequelize) {
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },
-    { sequelize, tableName: 'crews', underscored: true },
+    { sequelize, modelName: 'Crew', tableName: 'crews', underscored: true },
   );
   CrewMember.init(
     {
@@ -42,6 +42,6 @@ export function initCrew(sequelize: Sequelize) {
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },
-    { sequelize, tableName: 'crew_members', underscored: true },
+    { sequelize, modelName: 'CrewMember', tableName: 'crew_members', underscored: true },
   );
 }

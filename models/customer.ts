@@ -32,6 +32,6 @@ export function initCustomer(sequelize: Sequelize) {
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },
-    { sequelize, tableName: 'customers', underscored: true },
+    { sequelize, modelName: 'Customer', tableName: 'customers', underscored: true },
   );
 }

@@ -21,13 +21,13 @@ if (!initialised.setlineModelsReady || !Company.sequelize) {
 }
 
 function associate() {
-  Company.hasMany(User, { foreignKey: 'companyId' });
-  User.belongsTo(Company, { foreignKey: 'companyId' });
+  Company.hasMany(User, { foreignKey: 'companyId', as: 'users' });
+  User.belongsTo(Company, { foreignKey: 'companyId', as: 'company' });
 
   Crew.belongsToMany(User, { through: CrewMember, foreignKey: 'crewId', otherKey: 'userId', as: 'members' });
   User.belongsToMany(Crew, { through: CrewMember, foreignKey: 'userId', otherKey: 'crewId', as: 'crews' });
-  CrewMember.belongsTo(Crew, { foreignKey: 'crewId' });
-  CrewMember.belongsTo(User, { foreignKey: 'userId' });
+  CrewMember.belongsTo(Crew, { foreignKey: 'crewId', as: 'crew' });
+  CrewMember.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 
   Customer.hasMany(Site, { foreignKey: 'customerId', as: 'sites' });
   Site.belongsTo(Customer, { foreignKey: 'customerId', as: 'customer' });

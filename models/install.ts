@@ -1,4 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { decimal } from './columns';
 import { INSTALL_EVENT_TYPES, INSTALL_STATUSES, type InstallEventType, type InstallStatus } from '@/lib/domain';
 
 /** One attempt at installing the patch of one repair. */
@@ -57,8 +58,8 @@ export function initInstall(sequelize: Sequelize) {
       resinKitId: DataTypes.UUID,
       packerId: DataTypes.UUID,
       checklistTemplateId: DataTypes.UUID,
-      mixTempC: DataTypes.DECIMAL(5, 2),
-      pipeTempC: DataTypes.DECIMAL(5, 2),
+      mixTempC: decimal(5, 2),
+      pipeTempC: decimal(5, 2),
       patchLengthMm: DataTypes.INTEGER,
       dryRunSeconds: DataTypes.INTEGER,
       noGoOverrideReason: DataTypes.TEXT,
@@ -71,7 +72,7 @@ export function initInstall(sequelize: Sequelize) {
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },
-    { sequelize, tableName: 'installs', underscored: true },
+    { sequelize, modelName: 'Install', tableName: 'installs', underscored: true },
   );
   InstallEvent.init(
     {
@@ -87,6 +88,6 @@ export function initInstall(sequelize: Sequelize) {
       correctsEventId: DataTypes.UUID,
       createdAt: DataTypes.DATE,
     },
-    { sequelize, tableName: 'install_events', underscored: true, updatedAt: false },
+    { sequelize, modelName: 'InstallEvent', tableName: 'install_events', underscored: true, updatedAt: false },
   );
 }

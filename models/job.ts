@@ -61,7 +61,7 @@ export function initJob(sequelize: Sequelize) {
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },
-    { sequelize, tableName: 'jobs', underscored: true },
+    { sequelize, modelName: 'Job', tableName: 'jobs', underscored: true },
   );
   Repair.init(
     {
@@ -82,6 +82,6 @@ export function initJob(sequelize: Sequelize) {
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },
-    { sequelize, tableName: 'repairs', underscored: true },
+    { sequelize, modelName: 'Repair', tableName: 'repairs', underscored: true },
   );
 }

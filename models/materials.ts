@@ -1,4 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { decimal } from './columns';
 import { RESIN_CHEMISTRIES, SENSITIVITY_KINDS } from '@/lib/domain';
 
 /** A resin product's clock at its reference temperature, as its data sheet gives it. */
@@ -77,18 +78,18 @@ export function initMaterials(sequelize: Sequelize) {
       ...base,
       name: { type: DataTypes.STRING(120), allowNull: false },
       chemistry: { type: DataTypes.STRING(16), allowNull: false, defaultValue: 'epoxy', validate: { isIn: [RESIN_CHEMISTRIES] } },
-      refTempC: { type: DataTypes.DECIMAL(5, 2), allowNull: false },
-      potLifeMin: { type: DataTypes.DECIMAL(7, 2), allowNull: false },
-      holdMin: { type: DataTypes.DECIMAL(7, 2), allowNull: false },
-      fullCureMin: { type: DataTypes.DECIMAL(8, 2), allowNull: false },
-      minTempC: { type: DataTypes.DECIMAL(5, 2), allowNull: false },
-      maxTempC: { type: DataTypes.DECIMAL(5, 2), allowNull: false },
+      refTempC: decimal(5, 2, { allowNull: false }),
+      potLifeMin: decimal(7, 2, { allowNull: false }),
+      holdMin: decimal(7, 2, { allowNull: false }),
+      fullCureMin: decimal(8, 2, { allowNull: false }),
+      minTempC: decimal(5, 2, { allowNull: false }),
+      maxTempC: decimal(5, 2, { allowNull: false }),
       sensitivityKind: { type: DataTypes.STRING(16), allowNull: false, defaultValue: 'doubling', validate: { isIn: [SENSITIVITY_KINDS] } },
-      doublingC: DataTypes.DECIMAL(5, 2),
-      activationEnergyKj: { type: DataTypes.DECIMAL(6, 2), field: 'activation_energy_kj' },
+      doublingC: decimal(5, 2),
+      activationEnergyKj: decimal(6, 2, { field: 'activation_energy_kj' }),
       archivedAt: DataTypes.DATE,
     },
-    { sequelize, tableName: 'resin_systems', underscored: true },
+    { sequelize, modelName: 'ResinSystem', tableName: 'resin_systems', underscored: true },
   );
   ResinKit.init(
     {
@@ -96,10 +97,10 @@ export function initMaterials(sequelize: Sequelize) {
       resinSystemId: { type: DataTypes.UUID, allowNull: false },
       lot: { type: DataTypes.STRING(60), allowNull: false },
       expiresOn: { type: DataTypes.DATEONLY, allowNull: false },
-      quantityL: { type: DataTypes.DECIMAL(8, 2), allowNull: false, field: 'quantity_l' },
+      quantityL: decimal(8, 2, { allowNull: false, field: 'quantity_l' }),
       receivedOn: DataTypes.DATEONLY,
     },
-    { sequelize, tableName: 'resin_kits', underscored: true },
+    { sequelize, modelName: 'ResinKit', tableName: 'resin_kits', underscored: true },
   );
   Packer.init(
     {
@@ -110,11 +111,11 @@ export function initMaterials(sequelize: Sequelize) {
       maxDiameterMm: { type: DataTypes.INTEGER, allowNull: false },
       bladderLengthMm: { type: DataTypes.INTEGER, allowNull: false },
       endMarginMm: { type: DataTypes.INTEGER, allowNull: false },
-      minPressureKpa: { type: DataTypes.DECIMAL(7, 1), allowNull: false },
-      maxPressureKpa: { type: DataTypes.DECIMAL(7, 1), allowNull: false },
+      minPressureKpa: decimal(7, 1, { allowNull: false }),
+      maxPressureKpa: decimal(7, 1, { allowNull: false }),
       archivedAt: DataTypes.DATE,
     },
-    { sequelize, tableName: 'packers', underscored: true },
+    { sequelize, modelName: 'Packer', tableName: 'packers', underscored: true },
   );
   ChecklistTemplate.init(
     {
@@ -123,6 +124,6 @@ export function initMaterials(sequelize: Sequelize) {
       items: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
       active: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
     },
-    { sequelize, tableName: 'checklist_templates', underscored: true },
+    { sequelize, modelName: 'ChecklistTemplate', tableName: 'checklist_templates', underscored: true },
   );
 }

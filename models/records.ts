@@ -63,7 +63,7 @@ export function initRecords(sequelize: Sequelize) {
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },
-    { sequelize, tableName: 'attachments', underscored: true },
+    { sequelize, modelName: 'Attachment', tableName: 'attachments', underscored: true },
   );
   Review.init(
     {
@@ -75,7 +75,7 @@ export function initRecords(sequelize: Sequelize) {
       comment: DataTypes.TEXT,
       createdAt: DataTypes.DATE,
     },
-    { sequelize, tableName: 'reviews', underscored: true, updatedAt: false },
+    { sequelize, modelName: 'Review', tableName: 'reviews', underscored: true, updatedAt: false },
   );
   AuditEntry.init(
     {
@@ -89,6 +89,6 @@ export function initRecords(sequelize: Sequelize) {
       reason: DataTypes.TEXT,
       createdAt: DataTypes.DATE,
     },
-    { sequelize, tableName: 'audit_entries', underscored: true, updatedAt: false },
+    { sequelize, modelName: 'AuditEntry', tableName: 'audit_entries', underscored: true, updatedAt: false },
   );
 }

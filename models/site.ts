@@ -1,4 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { decimal } from './columns';
 import { ACCESS_POINT_KINDS, PIPE_MATERIALS } from '@/lib/domain';
 
 export class Site extends Model<InferAttributes<Site>, InferCreationAttributes<Site>> {
@@ -62,7 +63,7 @@ export function initSite(sequelize: Sequelize) {
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },
-    { sequelize, tableName: 'sites', underscored: true },
+    { sequelize, modelName: 'Site', tableName: 'sites', underscored: true },
   );
   AccessPoint.init(
     {
@@ -76,7 +77,7 @@ export function initSite(sequelize: Sequelize) {
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },
-    { sequelize, tableName: 'access_points', underscored: true },
+    { sequelize, modelName: 'AccessPoint', tableName: 'access_points', underscored: true },
   );
   Segment.init(
     {
@@ -88,13 +89,13 @@ export function initSite(sequelize: Sequelize) {
       label: { type: DataTypes.STRING(60), allowNull: false },
       material: { type: DataTypes.STRING(24), allowNull: false, validate: { isIn: [PIPE_MATERIALS] } },
       nominalSizeMm: { type: DataTypes.INTEGER, allowNull: false },
-      insideDiameterMm: { type: DataTypes.DECIMAL(7, 1), allowNull: false },
+      insideDiameterMm: decimal(7, 1, { allowNull: false }),
       lengthMm: { type: DataTypes.INTEGER, allowNull: false },
       depthMm: DataTypes.INTEGER,
       archivedAt: DataTypes.DATE,
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },
-    { sequelize, tableName: 'segments', underscored: true },
+    { sequelize, modelName: 'Segment', tableName: 'segments', underscored: true },
   );
 }

@@ -29,6 +29,6 @@ export function initUser(sequelize: Sequelize) {
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },
-    { sequelize, tableName: 'users', underscored: true, defaultScope: { attributes: { exclude: ['passwordHash'] } } },
+    { sequelize, modelName: 'User', tableName: 'users', underscored: true, defaultScope: { attributes: { exclude: ['passwordHash'] } } },
   );
 }

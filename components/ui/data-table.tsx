@@ -29,6 +29,7 @@ export function DataTable<Row>({
   const router = useRouter();
   const pathname = usePathname();
   const params = useSearchParams();
+  // eslint-disable-next-line react-hooks/incompatible-library -- the app does not use the React Compiler
   const table = useReactTable({ data, columns, getCoreRowModel: getCoreRowModel(), manualPagination: true, manualSorting: true, pageCount });
 
   const go = (changes: Record<string, string>) => {

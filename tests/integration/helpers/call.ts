@@ -1,8 +1,8 @@
 /** Calls a route handler as Next would: a Request and, for dynamic segments, a params promise. */
-export async function call(
-  handler: (request: Request, context: { params: Promise<Record<string, string>> }) => Promise<Response>,
+export async function call<P extends Record<string, string>>(
+  handler: (request: Request, context: { params: Promise<P> }) => Promise<Response>,
   url: string,
-  params: Record<string, string> = {},
+  params: P = {} as P,
   init?: RequestInit,
 ) {
   const response = await handler(new Request(new URL(url, 'http://localhost'), init), { params: Promise.resolve(params) });
