@@ -5,7 +5,7 @@ import type { z } from 'zod';
 import { AppError } from '@/lib/errors';
 
 /**
- * Wraps a route handler: expected failures become their status with a message;
+ * Wraps a route handler: expected failures become their status with `{ error: { message, fields? } }`;
  * anything else is logged with a request id and answered with a generic 500.
  */
 export function handle<Args extends unknown[]>(fn: (...args: Args) => Promise<Response>) {
@@ -14,11 +14,11 @@ export function handle<Args extends unknown[]>(fn: (...args: Args) => Promise<Re
       return await fn(...args);
     } catch (error) {
       if (error instanceof AppError) {
-        return NextResponse.json({ error: error.message, ...(error.fields ? { fields: error.fields } : {}) }, { status: error.status });
+        return NextResponse.json({ error: { message: error.message, ...(error.fields ? { fields: error.fields } : {}) } }, { status: error.status });
       }
       const requestId = randomUUID();
       console.error(`[${requestId}]`, error);
-      return NextResponse.json({ error: 'Something went wrong on our side.', requestId }, { status: 500 });
+      return NextResponse.json({ error: { message: 'Something went wrong on our side.', requestId } }, { status: 500 });
     }
   };
 }

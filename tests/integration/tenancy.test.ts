@@ -50,7 +50,8 @@ describe('jobs API and tenant isolation', () => {
     await signInAs(a.office);
     const { status, body } = await call(listJobsRoute, '/api/jobs?page=0&status=nonsense');
     expect(status).toBe(400);
-    expect(body.error).toMatch(/page|status/);
+    expect(body.error.message).toMatch(/page|status/);
+    expect(Object.keys(body.error.fields)).toEqual(expect.arrayContaining(['page', 'status']));
   });
 
   it('scopes the data layer itself: a user of one company reads nothing of the other', async () => {
