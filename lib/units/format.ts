@@ -23,9 +23,10 @@ export function formatNumber(value: number, decimals: number): string {
   return Number(text) === 0 ? (0).toFixed(digits) : text;
 }
 
-// Default decimals: whole millimetres, hundredths of an inch/foot/metre; whole kPa, tenths of
+// Default decimals: whole millimetres, tenths of an inch or foot (as a footage counter reads),
+// hundredths of a metre; whole kPa, tenths of
 // a psi; whole degrees; hundredths of a litre or gallon; tenths of a kN, whole lbf.
-const LENGTH_DECIMALS = { mm: 0, in: 2, m: 2, ft: 2 } as const;
+const LENGTH_DECIMALS = { mm: 0, in: 1, m: 2, ft: 1 } as const;
 
 export function formatLength(mm: number, system: UnitSystem, kind: LengthKind = 'short', options: FormatOptions = {}): string {
   const value = lengthFromSi(mm, system, kind);

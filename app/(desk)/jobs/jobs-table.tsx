@@ -14,7 +14,7 @@ const columns: ColumnDef<Row, unknown>[] = [
     header: 'Job',
     enableSorting: true,
     cell: ({ row }) => (
-      <Link href={`/jobs/${row.original.id}`} className="font-semibold text-brand-700 hover:underline">{row.original.number}</Link>
+      <Link href={`/jobs/${row.original.id}`} className="whitespace-nowrap font-semibold text-brand-700 hover:underline">{row.original.number}</Link>
     ),
   },
   { id: 'customer', header: 'Customer', cell: ({ row }) => row.original.customer?.name },

@@ -57,9 +57,9 @@ describe('parseDuration', () => {
 describe('quantity formatting', () => {
   it('labels lengths per system and kind', () => {
     expect(formatLength(150, 'metric')).toBe('150 mm');
-    expect(formatLength(152.4, 'imperial')).toBe('6.00 in');
+    expect(formatLength(152.4, 'imperial')).toBe('6.0 in');
     expect(formatLength(1500, 'metric', 'long')).toBe('1.50 m');
-    expect(formatLength(3048, 'imperial', 'long')).toBe('10.00 ft');
+    expect(formatLength(3048, 'imperial', 'long')).toBe('10.0 ft');
     expect(formatLength(150, 'metric', 'short', { decimals: 1 })).toBe('150.0 mm');
   });
 
