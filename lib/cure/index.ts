@@ -4,6 +4,7 @@ export { CureInputError } from './errors';
 export { timeFactor } from './time-factor';
 export { planCure } from './plan-cure';
 export { flagsFor } from './flags';
+export { resinClockSpec, type ResinSystemRow } from './resin-spec';
 export {
   DEFAULT_PREP_MINUTES,
   DEFAULT_SAFETY_MARGIN,
