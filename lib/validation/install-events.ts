@@ -51,13 +51,37 @@ export const eventBodySchema = z.object({
 
 export type EventBody = z.infer<typeof eventBodySchema>;
 
+// Only a correction names another event, and it must name one and change something (the
+// database refuses the first two otherwise; the third would be a correction of nothing).
+const correctionLinkSchema = z
+  .object({ type: z.string(), correctsEventId: z.string().optional(), payload: z.record(z.string(), z.unknown()) })
+  .superRefine((body, ctx) => {
+    const isCorrection = body.type === 'correction';
+    if (isCorrection && !body.correctsEventId) {
+      ctx.addIssue({ code: 'custom', path: ['correctsEventId'], message: 'Say which event this corrects' });
+    }
+    if (!isCorrection && body.correctsEventId) {
+      ctx.addIssue({ code: 'custom', path: ['correctsEventId'], message: 'Only a correction names another event' });
+    }
+    if (isCorrection && body.payload.deviceTime === undefined && body.payload.payload === undefined) {
+      ctx.addIssue({ code: 'custom', path: ['payload'], message: 'Give the corrected time or values' });
+    }
+  });
+
 /** Validates the body and then its payload against the schema of its type. */
 export function parseEventBody(input: unknown) {
   const body = eventBodySchema.safeParse(input);
   if (!body.success) return body;
+  const link = correctionLinkSchema.safeParse(body.data);
+  if (!link.success) return { success: false as const, error: link.error };
   const payload = eventPayloadSchemas[body.data.type].safeParse(body.data.payload);
   if (!payload.success) {
     return { success: false as const, error: payload.error, path: 'payload' };
   }
   return { success: true as const, data: { ...body.data, payload: payload.data as Record<string, unknown> } };
 }
+
+/** The body of POST /api/installs: the id is made on the device, so a retried create finds the first. */
+export const createInstallSchema = z.object({ id: uuidSchema, repairId: uuidSchema });
+
+export type CreateInstallInput = z.infer<typeof createInstallSchema>;

@@ -1,0 +1,224 @@
+import 'server-only';
+import { Op, UniqueConstraintError, type Transaction } from 'sequelize';
+import type { z } from 'zod';
+import { AuditEntry, Install, InstallEvent, Job, Packer, Repair, ResinKit, sequelize } from '@/models';
+import type { SessionUser } from '@/lib/auth/session';
+import { AppError, forbidden } from '@/lib/errors';
+import { mayDecide } from '@/lib/install/access';
+import { isSameEvent } from '@/lib/install/same-event';
+import { correctionTarget, deriveInstallState, orderProblem, type InstallState } from '@/lib/install/state';
+import { eventPayloadSchemas, parseEventBody } from '@/lib/validation/install-events';
+import { getCompany } from './company';
+import { findInstallFor, type InstallEventRow } from './installs';
+import { dayInZone } from './today';
+
+type ParsedEvent = Extract<ReturnType<typeof parseEventBody>, { success: true }>['data'];
+
+/**
+ * Records one tap of the crew. A replay of the same tap (same clientEventId and body) answers with
+ * the stored event and writes nothing; the same id with another body is a 409; an event that cannot
+ * have happened now is a 422. Taps on one install are serialised by a lock on its row.
+ */
+export async function recordEvent(user: SessionUser, installId: string, input: unknown): Promise<{ event: InstallEventRow; created: boolean }> {
+  await findInstallFor(user, installId);
+  const body = parseBodyOrThrow(input);
+  if (body.type === 'signed_off' && !mayDecide(user)) throw forbidden('Only the foreman can sign off an install.');
+  if (body.type === 'go_decision' && body.payload.overrideReason !== undefined && !mayDecide(user)) {
+    throw forbidden('Only the foreman can override a no-go.');
+  }
+  // Read before the transaction: inside it, every query must use its connection, or ten taps
+  // waiting on the lock could hold the whole pool while the eleventh query waits for one.
+  const today = dayInZone(new Date(), (await getCompany(user)).timeZone);
+  const run = () => sequelize.transaction((t) => recordInTransaction(user, installId, body, today, t));
+  try {
+    return await run();
+  } catch (error) {
+    // The same id sent to two installs at once is not serialised by either lock: the unique index
+    // refuses the second insert, and a second pass finds the first one and answers as for a replay.
+    if (!(error instanceof UniqueConstraintError)) throw error;
+    return run();
+  }
+}
+
+async function recordInTransaction(user: SessionUser, installId: string, body: ParsedEvent, today: string, t: Transaction) {
+  const install = await Install.findOne({ where: { id: installId, companyId: user.companyId }, lock: t.LOCK.UPDATE, transaction: t });
+  if (!install) throw new AppError(404, 'Install was not found.');
+
+  const stored = await InstallEvent.findAll({ where: { installId, companyId: user.companyId }, transaction: t });
+  const state = deriveInstallState(stored.map((e) => e.get({ plain: true })));
+  // A correction may name its event by the id the device gave it; the row keeps the server id.
+  const target = body.type === 'correction' ? correctionTarget(state, body.correctsEventId) : undefined;
+  const correctsEventId = target?.id ?? body.correctsEventId ?? null;
+
+  const existing = await InstallEvent.findOne({ where: { companyId: user.companyId, clientEventId: body.clientEventId }, transaction: t });
+  if (existing) {
+    const same = isSameEvent(existing, { ...body, installId, correctsEventId });
+    if (!same) throw new AppError(409, 'That event id was already used for a different event');
+    return { event: existing.get({ plain: true }), created: false };
+  }
+
+  const problem = orderProblem(state, { ...body, correctsEventId });
+  if (problem) throw new AppError(422, problem);
+  if (target) checkCorrectedPayload(target.type, { ...target.payload, ...correctionChanges(body.payload) });
+  if (body.type === 'conditions_recorded') await checkConditions(user, body.payload, today, t);
+  if (target?.type === 'conditions_recorded') {
+    const changes = correctionChanges(body.payload);
+    // Correcting a temperature after the kit expired overnight is fine; choosing an expired kit is not.
+    const kitChanged = changes.resinKitId !== undefined && changes.resinKitId !== target.payload.resinKitId;
+    await checkConditions(user, { ...target.payload, ...changes }, kitChanged ? today : null, t);
+  }
+
+  const event = await InstallEvent.create(
+    {
+      companyId: user.companyId,
+      installId,
+      clientEventId: body.clientEventId,
+      type: body.type,
+      deviceTime: new Date(body.deviceTime),
+      receivedAt: new Date(),
+      userId: user.id,
+      payload: body.payload,
+      correctsEventId: target?.id ?? null,
+    },
+    { transaction: t },
+  );
+  const next = deriveInstallState([...stored.map((e) => e.get({ plain: true })), event.get({ plain: true })]);
+  await updateSummary(user, install, next, body, t);
+  await writeAudit(user, install, body, target, t);
+  return { event: event.get({ plain: true }), created: true };
+}
+
+/** The install row keeps a summary of its log for lists and reports; the job and repair follow it. */
+async function updateSummary(user: SessionUser, install: Install, state: InstallState, body: ParsedEvent, t: Transaction) {
+  const firstEvent = install.status === 'not_started';
+  const kitId = state.conditions?.resinKitId ?? null;
+  const kit =
+    kitId === null ? null
+    : kitId === install.resinKitId ? { id: kitId, resinSystemId: install.resinSystemId }
+    : await ResinKit.findOne({ where: { id: kitId, companyId: user.companyId }, transaction: t });
+  const signedOff = body.type === 'signed_off';
+  await install.update(
+    {
+      status: signedOff ? 'awaiting_review' : firstEvent ? 'in_progress' : install.status,
+      startedAt: state.startedAt,
+      mixTempC: state.conditions?.mixTempC ?? null,
+      pipeTempC: state.conditions?.pipeTempC ?? null,
+      resinKitId: kit?.id ?? null,
+      resinSystemId: kit?.resinSystemId ?? null,
+      packerId: state.conditions?.packerId ?? null,
+      patchLengthMm: state.conditions?.patchLengthMm ?? null,
+      dryRunSeconds: state.dryRunSeconds === null ? null : Math.round(state.dryRunSeconds),
+      noGoOverrideReason: state.goDecision?.overrideReason ?? null,
+      inspectionResult: state.inspection?.result ?? null,
+      inspectionNotes: state.inspection?.notes ?? null,
+      signedOffById: signedOff ? user.id : install.signedOffById,
+      signedOffAt: state.signedOffAt,
+      finishedAt: state.signedOffAt,
+    },
+    { transaction: t },
+  );
+  if (!firstEvent && !signedOff) return;
+
+  const job = await Job.findOne({ where: { id: install.jobId, companyId: user.companyId }, lock: t.LOCK.UPDATE, transaction: t });
+  if (!job) return;
+  if (firstEvent && ['draft', 'scheduled', 'sent_back', 'awaiting_review'].includes(job.status)) {
+    await job.update({ status: 'in_progress' }, { transaction: t });
+  }
+  if (signedOff) {
+    await Repair.update({ status: 'installed' }, { where: { id: install.repairId, companyId: user.companyId }, transaction: t });
+    if (job.status === 'in_progress' && (await allRepairsAwaitReview(user, job.id, t))) {
+      await job.update({ status: 'awaiting_review' }, { transaction: t });
+    }
+  }
+}
+
+/** True when the latest install of every live repair of the job is signed off (or already approved). */
+async function allRepairsAwaitReview(user: SessionUser, jobId: string, t: Transaction) {
+  const repairs = await Repair.findAll({ where: { jobId, companyId: user.companyId, status: { [Op.ne]: 'cancelled' } }, transaction: t });
+  const installs = await Install.findAll({ where: { jobId, companyId: user.companyId }, order: [['createdAt', 'DESC']], transaction: t });
+  return repairs.every((repair) => {
+    const latest = installs.find((i) => i.repairId === repair.id);
+    return latest !== undefined && (latest.status === 'awaiting_review' || latest.status === 'approved');
+  });
+}
+
+/**
+ * The kit and packer of recorded conditions must be the company's (422 otherwise, the same answer
+ * as for an id that does not exist), and the screen refuses a kit past its date (`today` in the
+ * company's time zone; null skips it). Checked only when conditions are recorded or corrected, so
+ * a kit that expires overnight does not stop the crew from finishing the install.
+ */
+async function checkConditions(user: SessionUser, conditions: Record<string, unknown>, today: string | null, t: Transaction) {
+  const [kit, packer] = await Promise.all([
+    ResinKit.findOne({ where: { id: String(conditions.resinKitId), companyId: user.companyId }, transaction: t }),
+    Packer.findOne({ where: { id: String(conditions.packerId), companyId: user.companyId }, transaction: t }),
+  ]);
+  if (!kit) throw new AppError(422, 'That resin kit was not found; choose one from the list.', { 'payload.resinKitId': ['Unknown resin kit'] });
+  if (!packer) throw new AppError(422, 'That packer was not found; choose one from the list.', { 'payload.packerId': ['Unknown packer'] });
+  if (today !== null && kit.expiresOn < today) {
+    throw new AppError(422, `Resin kit lot ${kit.lot} expired on ${kit.expiresOn}; choose another kit`, { 'payload.resinKitId': ['Expired kit'] });
+  }
+}
+
+async function writeAudit(user: SessionUser, install: Install, body: ParsedEvent, target: InstallState['log'][number] | undefined, t: Transaction) {
+  const base = { companyId: user.companyId, userId: user.id };
+  if (body.type === 'correction' && target) {
+    const changes = correctionChanges(body.payload);
+    await AuditEntry.create(
+      {
+        ...base,
+        action: 'install_event.corrected',
+        entityType: 'install_event',
+        entityId: target.id,
+        changes: {
+          installId: install.id,
+          type: target.type,
+          ...(typeof body.payload.deviceTime === 'string' ? { deviceTime: { from: target.deviceTime.toISOString(), to: body.payload.deviceTime } } : {}),
+          ...(Object.keys(changes).length ? { payload: { from: pick(target.payload, Object.keys(changes)), to: changes } } : {}),
+        },
+        reason: String(body.payload.reason),
+      },
+      { transaction: t },
+    );
+  }
+  if (body.type === 'signed_off') {
+    await AuditEntry.create(
+      { ...base, action: 'install.signed_off', entityType: 'install', entityId: install.id, changes: { status: { to: 'awaiting_review' }, name: body.payload.name } },
+      { transaction: t },
+    );
+  }
+  if (body.type === 'go_decision' && typeof body.payload.overrideReason === 'string') {
+    await AuditEntry.create(
+      { ...base, action: 'install.no_go_overridden', entityType: 'install', entityId: install.id, changes: { go: body.payload.go }, reason: body.payload.overrideReason },
+      { transaction: t },
+    );
+  }
+}
+
+/** The body or a 400 naming each bad field by its path in the body (`payload.pressureKpa`). */
+function parseBodyOrThrow(input: unknown): ParsedEvent {
+  const result = parseEventBody(input);
+  if (result.success) return result.data;
+  throw badRequest(result.error, 'path' in result ? result.path : undefined);
+}
+
+/** A correction's merged payload must still be a valid payload of the event it corrects. */
+function checkCorrectedPayload(type: keyof typeof eventPayloadSchemas, merged: Record<string, unknown>) {
+  const result = eventPayloadSchemas[type].safeParse(merged);
+  if (!result.success) throw badRequest(result.error, 'payload.payload');
+}
+
+function badRequest(error: z.ZodError, prefix?: string) {
+  const fields: Record<string, string[]> = {};
+  for (const issue of error.issues) {
+    const key = [prefix, ...issue.path.map(String)].filter(Boolean).join('.') || '_';
+    (fields[key] ??= []).push(issue.message);
+  }
+  const first = Object.entries(fields)[0];
+  return new AppError(400, `Invalid input — ${first[0] === '_' ? '' : `${first[0]}: `}${first[1][0]}`, fields);
+}
+
+const correctionChanges = (payload: Record<string, unknown>) =>
+  typeof payload.payload === 'object' && payload.payload !== null ? (payload.payload as Record<string, unknown>) : {};
+
+const pick = (from: Record<string, unknown>, keys: string[]) => Object.fromEntries(keys.map((k) => [k, from[k] ?? null]));

@@ -1,0 +1,71 @@
+import { CureInputError, flagsFor, planCure, type CurePlan, type PackerPressureRating, type QualityFlag, type ResinClockSpec } from '@/lib/cure';
+import type { UnitSystem } from '@/lib/units';
+import type { InstallState } from './state';
+
+export type InstallClockInput = {
+  state: InstallState;
+  /** The resin of the recorded kit; null before conditions are recorded. */
+  resin: ResinClockSpec | null;
+  packer: PackerPressureRating | null;
+  resinKitExpiresOn: string | null;
+  safetyMargin: number;
+  unitSystem: UnitSystem;
+  now: Date;
+};
+
+/** The plan; `preview` when the resin is not mixed yet and the clock is started at `now`. */
+export type InstallPlan = CurePlan & { preview: boolean };
+
+export type InstallClock = {
+  plan: InstallPlan | null;
+  flags: QualityFlag[];
+  /** Why the clock could not be worked out from what is recorded; null when it could. */
+  problem: string | null;
+};
+
+/**
+ * The cure plan and quality flags of an install as far as it is recorded. Before mixing the plan
+ * starts the clock now, so the crew sees GO/NO-GO while there is still time to choose.
+ * Never throws on a half-recorded install: what cannot be computed is left out.
+ */
+export function installClock(input: InstallClockInput): InstallClock {
+  const { state, resin, now } = input;
+  if (!resin) return { plan: null, flags: [], problem: null };
+  try {
+    const conditions = state.conditions;
+    const plan: InstallPlan | null = conditions
+      ? {
+          ...planCure(resin, {
+            mixedAt: state.mixedAt ?? now,
+            mixTempC: conditions.mixTempC,
+            pipeTempC: conditions.pipeTempC,
+            inflatedAt: state.mixedAt ? state.inflatedAt : null,
+            deflatedAt: state.mixedAt && state.inflatedAt ? state.deflatedAt : null,
+            dryRunSeconds: state.dryRunSeconds,
+            safetyMargin: input.safetyMargin,
+            unitSystem: input.unitSystem,
+          }),
+          preview: state.mixedAt === null,
+        }
+      : null;
+    const flags = flagsFor({
+      resin,
+      mixedAt: state.mixedAt,
+      mixTempC: conditions?.mixTempC,
+      pipeTempC: conditions?.pipeTempC,
+      inflatedAt: state.inflatedAt,
+      deflatedAt: state.deflatedAt,
+      dryRunSeconds: state.dryRunSeconds,
+      safetyMargin: input.safetyMargin,
+      pressuresKpa: state.pressuresKpa,
+      packer: input.packer,
+      resinKitExpiresOn: input.resinKitExpiresOn,
+      now,
+      unitSystem: input.unitSystem,
+    });
+    return { plan, flags, problem: null };
+  } catch (error) {
+    if (error instanceof CureInputError) return { plan: null, flags: [], problem: error.message };
+    throw error;
+  }
+}
