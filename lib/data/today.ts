@@ -1,9 +1,12 @@
 import 'server-only';
 import { Op } from 'sequelize';
-import { AccessPoint, Customer, Job, Repair, Segment, Site } from '@/models';
+import { AccessPoint, Customer, Install, InstallEvent, Job, Packer, Repair, ResinKit, ResinSystem, Segment, Site } from '@/models';
 import type { SessionUser } from '@/lib/auth/session';
-import type { JobDetail } from './jobs';
+import { resinClockSpec } from '@/lib/cure';
+import { installClock } from '@/lib/install/clock';
+import { deriveInstallState, type InstallStep } from '@/lib/install/state';
 import { getCompany } from './company';
+import type { JobDetail } from './jobs';
 
 /** A calendar day (YYYY-MM-DD) in a time zone, `offsetDays` from the given instant. */
 export function dayInZone(instant: Date, timeZone: string, offsetDays = 0): string {
@@ -12,12 +15,22 @@ export function dayInZone(instant: Date, timeZone: string, offsetDays = 0): stri
   return new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).format(shifted);
 }
 
-/** Jobs of the caller's crews scheduled for today and tomorrow in the company's time zone. */
+/** What the list shows of a repair's latest install: where it stands and the clock that runs now. */
+export type InstallSummary = {
+  id: string;
+  status: string;
+  step: InstallStep;
+  deadline: { label: string; start: string; at: string } | null;
+};
+
+export type TodayJob = Omit<JobDetail, 'crew' | 'repairs'> & { repairs: (JobDetail['repairs'][number] & { install: InstallSummary | null })[] };
+
+/** Jobs of the caller's crews scheduled for today and tomorrow in the company's time zone, with any running install. */
 export async function listTodayJobs(user: SessionUser, now = new Date()) {
   const company = await getCompany(user);
   const today = dayInZone(now, company.timeZone);
   const tomorrow = dayInZone(now, company.timeZone, 1);
-  if (user.crewIds.length === 0) return { today, tomorrow, jobs: [] as Omit<JobDetail, 'crew'>[] };
+  if (user.crewIds.length === 0) return { today, tomorrow, jobs: [] as TodayJob[] };
   const jobs = await Job.findAll({
     where: {
       companyId: user.companyId,
@@ -33,5 +46,48 @@ export async function listTodayJobs(user: SessionUser, now = new Date()) {
     ],
     order: [['scheduledDate', 'ASC'], ['number', 'ASC'], [{ model: Repair, as: 'repairs' }, 'position', 'ASC']],
   });
-  return { today, tomorrow, jobs: jobs.map((job) => job.get({ plain: true }) as Omit<JobDetail, 'crew'>) };
+  const repairIds = jobs.flatMap((job) => (job.get('repairs') as Repair[]).map((r) => r.id));
+  const installs = await latestInstalls(user, repairIds, now, company);
+  return {
+    today,
+    tomorrow,
+    jobs: jobs.map((job) => {
+      const plain = job.get({ plain: true }) as Omit<JobDetail, 'crew'>;
+      return { ...plain, repairs: plain.repairs.map((repair) => ({ ...repair, install: installs.get(repair.id) ?? null })) };
+    }),
+  };
+}
+
+async function latestInstalls(user: SessionUser, repairIds: string[], now: Date, company: { workingWindowSafetyMargin: number; unitSystem: 'imperial' | 'metric' }) {
+  const rows = repairIds.length
+    ? await Install.findAll({
+        where: { companyId: user.companyId, repairId: { [Op.in]: repairIds }, status: { [Op.ne]: 'abandoned' } },
+        include: [
+          { model: InstallEvent, as: 'events' },
+          { model: ResinSystem, as: 'resinSystem' },
+          { model: ResinKit, as: 'resinKit', attributes: ['expiresOn'] },
+          { model: Packer, as: 'packer', attributes: ['minPressureKpa', 'maxPressureKpa'] },
+        ],
+        order: [['createdAt', 'ASC']],
+      })
+    : [];
+  const byRepair = new Map<string, InstallSummary>();
+  for (const row of rows) {
+    const install = row.get({ plain: true }) as Install & { events: InstallEvent[]; resinSystem: ResinSystem | null; resinKit: ResinKit | null; packer: Packer | null };
+    const state = deriveInstallState(install.events);
+    const { plan } = installClock({
+      state,
+      resin: install.resinSystem ? resinClockSpec(install.resinSystem) : null,
+      packer: install.packer,
+      resinKitExpiresOn: install.resinKit?.expiresOn ?? null,
+      safetyMargin: company.workingWindowSafetyMargin,
+      unitSystem: company.unitSystem,
+      now,
+    });
+    let deadline: InstallSummary['deadline'] = null;
+    if (plan && state.mixedAt && !state.inflatedAt) deadline = { label: 'Inflate by', start: state.mixedAt.toISOString(), at: plan.inflateBy.toISOString() };
+    else if (plan?.deflateAfter && state.inflatedAt && !state.deflatedAt) deadline = { label: 'Deflate after', start: state.inflatedAt.toISOString(), at: plan.deflateAfter.toISOString() };
+    byRepair.set(install.repairId, { id: install.id, status: install.status, step: state.step, deadline });
+  }
+  return byRepair;
 }

@@ -51,7 +51,9 @@ describe('jobs API and tenant isolation', () => {
     const { status, body } = await call(listJobsRoute, '/api/jobs?page=0&status=nonsense');
     expect(status).toBe(400);
     expect(body.error.message).toMatch(/page|status/);
-    expect(Object.keys(body.error.fields)).toEqual(expect.arrayContaining(['page', 'status']));
+    const fields = Object.keys(body.error.fields);
+    expect(fields).toContain('page');
+    expect(fields.some((key) => key.startsWith('status'))).toBe(true);
   });
 
   it('scopes the data layer itself: a user of one company reads nothing of the other', async () => {
