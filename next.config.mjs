@@ -1,8 +1,16 @@
+import { withSerwist } from '@serwist/turbopack';
+
 /** @type {import('next').NextConfig} */
 const nextConfig = {
   // Sequelize loads its dialect with a dynamic require that the bundler cannot follow.
   serverExternalPackages: ['sequelize', 'pg', 'pg-hstore'],
   poweredByHeader: false,
+  async headers() {
+    // The worker keeps one address across builds: a shared cache holding it for the default
+    // year would keep tablets on an old worker. Browsers revalidate it; so must any CDN.
+    return [{ source: '/serwist/:path*', headers: [{ key: 'Cache-Control', value: 'no-cache' }] }];
+  },
 };
 
-export default nextConfig;
+// Adds esbuild to serverExternalPackages: the service worker route (app/serwist) runs it.
+export default withSerwist(nextConfig);

@@ -4,6 +4,7 @@ import '@fontsource/inter/500.css';
 import '@fontsource/inter/600.css';
 import '@fontsource/inter/700.css';
 import './globals.css';
+import { OfflineProvider } from '@/components/shell/offline-provider';
 
 export const metadata: Metadata = {
   title: { default: 'Setline', template: '%s · Setline' },
@@ -15,7 +16,9 @@ export const viewport: Viewport = { themeColor: '#115e59', width: 'device-width'
 export default function RootLayout({ children }: { children: React.ReactNode }) {
   return (
     <html lang="en">
-      <body className="min-h-screen font-sans">{children}</body>
+      <body className="min-h-screen font-sans">
+        <OfflineProvider>{children}</OfflineProvider>
+      </body>
     </html>
   );
 }

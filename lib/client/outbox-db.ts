@@ -1,0 +1,54 @@
+import { Dexie, type EntityTable } from 'dexie';
+
+// The IndexedDB database behind lib/client/outbox.ts. Only the outbox modules use it.
+
+export type OutboxStatus = 'pending' | 'synced' | 'rejected';
+
+export type OutboxEntry = {
+  clientEventId: string;
+  installId: string;
+  type: string;
+  deviceTime: string;
+  payload: Record<string, unknown>;
+  correctsEventId?: string;
+  /** Insertion order, monotonic: IndexedDB's key generator never hands a number out twice. */
+  seq: number;
+  status: OutboxStatus;
+  attempts: number;
+  lastError?: string;
+  syncedAt?: string;
+};
+
+const DB_NAME = 'setline-outbox';
+
+class OutboxDb extends Dexie {
+  entries!: EntityTable<OutboxEntry, 'seq'>;
+
+  constructor() {
+    super(DB_NAME);
+    // A schema change is a new version() with an upgrade, never an edit of this one: tablets
+    // in the field hold unsent entries in it.
+    this.version(1).stores({
+      entries: '++seq, &clientEventId, status, [status+seq], [installId+seq], [installId+status]',
+    });
+  }
+}
+
+// Opened on first use, so importing the outbox during a server render touches nothing.
+let database: OutboxDb | null = null;
+
+export function outboxDb(): OutboxDb {
+  database ??= new OutboxDb();
+  return database;
+}
+
+/** The first pending entry in insertion order. */
+export function firstPending(): Promise<OutboxEntry | undefined> {
+  return outboxDb().entries.where('[status+seq]').between(['pending', Dexie.minKey], ['pending', Dexie.maxKey]).first();
+}
+
+export async function deleteOutboxDb(): Promise<void> {
+  database?.close();
+  database = null;
+  await Dexie.delete(DB_NAME);
+}
