@@ -1,0 +1,164 @@
+'use client';
+
+import Link from 'next/link';
+import { useEffect, useMemo, useState } from 'react';
+import type { InstallViewResponse } from '@/app/api/installs/[id]/route';
+import { useNow } from '@/components/install/countdown';
+import { resinClockSpec, type CurePlan } from '@/lib/cure';
+import { installClock } from '@/lib/install/clock';
+import { requestNotificationPermission, unlockAudio } from '@/lib/client/alarm';
+import { startOutboxSync } from '@/lib/client/outbox';
+import { useWakeLock } from '@/lib/client/wake-lock';
+import { label } from '@/lib/domain';
+import type { InstallState } from '@/lib/install/state';
+import { formatLength } from '@/lib/units';
+import { ClockStrip, deadlinesOf } from './clock-strip';
+import { EventLog } from './event-log';
+import { StepChecks } from './step-checks';
+import { StepHold, StepInflate, StepTap } from './step-clock';
+import { StepConditions } from './step-conditions';
+import { StepDryRun } from './step-dry-run';
+import { StepDone, StepInspect, StepSignOff } from './step-finish';
+import { StepGo } from './step-go';
+import { StepSafety } from './step-safety';
+import { SyncStatus } from './sync-status';
+import { useInstall } from './use-install';
+
+type Viewer = { name: string; role: string };
+
+/** The timed install at the manhole: one primary action at a time, every step an install event. */
+export function InstallScreen({ initial, viewer }: { initial: InstallViewResponse; viewer: Viewer }) {
+  const { view, state, queued, rejected, tap } = useInstall(initial.install.id, initial);
+  const now = useNow(1000);
+  const [skipDryRun, setSkipDryRun] = useState(false);
+  const [editingConditions, setEditingConditions] = useState(false);
+  const unitSystem = view.company.unitSystem;
+  const plan = useMemo(() => livePlan(view, state, now), [view, state, now]);
+  const clockRunning = !!state.mixedAt && !state.deflatedAt;
+  useWakeLock(clockRunning);
+  useEffect(() => startOutboxSync(), []);
+
+  const kits = view.options.resinKits.map((k) => ({ id: k.id, lot: k.lot, expiresOn: k.expiresOn, expired: k.expired, resinName: k.resinSystem.name }));
+  const packers = view.options.packers.map((p) => ({ id: p.id, name: p.name, fits: p.fits, reasons: p.reasons }));
+  const packer = view.options.packers.find((p) => p.id === state.conditions?.packerId) ?? null;
+  const rating = packer ? { minPressureKpa: packer.minPressureKpa, maxPressureKpa: packer.maxPressureKpa } : null;
+  const canDecide = viewer.role !== 'technician';
+  const first = async (fn: () => Promise<void>) => {
+    unlockAudio();
+    void requestNotificationPermission();
+    await fn();
+  };
+
+  let step: string = state.step;
+  if (step === 'dry_run' && (skipDryRun || state.conditions)) step = state.conditions ? 'mix' : 'conditions';
+  if (editingConditions && !state.mixedAt) step = 'conditions';
+
+  const synced = new Set(view.events.map((e) => e.clientEventId));
+  const logged = [
+    ...view.events.map((e) => ({ clientEventId: e.clientEventId, type: e.type, deviceTime: String(e.deviceTime), synced: true, userName: e.userName })),
+    ...queued.filter((e) => !synced.has(e.clientEventId)).map((e) => ({ clientEventId: e.clientEventId, type: e.type, deviceTime: e.deviceTime, synced: false })),
+  ].sort((a, b) => Date.parse(a.deviceTime) - Date.parse(b.deviceTime));
+
+  return (
+    <div className="space-y-4">
+      <header>
+        <Link href="/today" className="text-base font-semibold text-brand-700 underline">← Today</Link>
+        <h1 className="mt-1 text-3xl font-bold">Repair {view.repair.position} · Job {view.job.number}</h1>
+        <p className="text-lg text-slate-700">
+          {view.job.site.addressLine} · {label(view.repair.defectType)} at {formatLength(view.repair.distanceMm, unitSystem, 'long')} in {view.repair.segment.label}
+          {view.repair.clockPosition ? ` · ${view.repair.clockPosition} o'clock` : ''}
+        </p>
+      </header>
+      <SyncStatus queued={queued} rejected={rejected} />
+      <ClockStrip deadlines={deadlinesOf(state, plan)} now={now} timeZone={view.company.timeZone} />
+      {renderStep()}
+      <EventLog events={logged} timeZone={view.company.timeZone} />
+    </div>
+  );
+
+  function renderStep() {
+    switch (step) {
+      case 'safety':
+        return <StepSafety onAcknowledge={() => void first(() => tap('safety_acknowledged'))} />;
+      case 'checks':
+        return <StepChecks items={view.options.checklist?.items ?? [{ id: 'ready', label: 'Site and equipment ready', required: true }]} onDone={(items) => void tap('checks_done', { items })} />;
+      case 'dry_run':
+        return (
+          <StepDryRun
+            startedAt={state.dryRunStartedAt}
+            now={now}
+            onStart={() => void tap('dry_run_started')}
+            onFinish={(seconds) => void tap('dry_run_finished', { seconds })}
+            onSkip={() => setSkipDryRun(true)}
+          />
+        );
+      case 'conditions':
+        return (
+          <StepConditions
+            unitSystem={unitSystem}
+            kits={kits}
+            packers={packers}
+            plannedPatchLengthMm={view.repair.plannedPatchLengthMm}
+            initial={state.conditions}
+            onSave={(conditions) => {
+              setEditingConditions(false);
+              void tap('conditions_recorded', conditions);
+            }}
+          />
+        );
+      case 'mix':
+        if (!state.goDecision && plan) {
+          return (
+            <StepGo
+              plan={plan}
+              canOverride={canDecide}
+              onGo={() => void tap('go_decision', { go: true })}
+              onOverride={(overrideReason) => void tap('go_decision', { go: false, overrideReason })}
+              onChangeConditions={() => setEditingConditions(true)}
+            />
+          );
+        }
+        return <StepTap testId="step-mix" title="Mix the resin" hint="The working window starts the moment both parts meet." label="Resin mixed" onTap={() => void first(() => tap('resin_mixed'))} />;
+      case 'load':
+        return <StepTap testId="step-load" title="Load the patch" label="Patch loaded" onTap={() => void tap('patch_loaded')} />;
+      case 'position':
+        return <StepTap testId="step-position" title="Pull to the damage" hint="Keep to the marked distance; nobody in line with the packer." label="Packer in position" onTap={() => void tap('packer_in_position')} />;
+      case 'inflate':
+        return <StepInflate unitSystem={unitSystem} rating={rating} onInflate={(pressureKpa, confirmedOutOfRange) => void tap('bladder_inflated', { pressureKpa, ...(confirmedOutOfRange ? { confirmedOutOfRange } : {}) })} />;
+      case 'hold':
+        return (
+          <StepHold
+            unitSystem={unitSystem}
+            rating={rating}
+            deflateAfter={plan?.deflateAfter ?? null}
+            now={now}
+            onPressure={(pressureKpa, confirmedOutOfRange) => void tap('pressure_reading', { pressureKpa, ...(confirmedOutOfRange ? { confirmedOutOfRange } : {}) })}
+            onDeflate={(early) => void tap('bladder_deflated', early ? { reason: early.reason, confirmedEarly: true } : {})}
+          />
+        );
+      case 'inspect':
+        return <StepInspect onRecord={(result, notes) => void tap('inspection_recorded', { result, ...(notes ? { notes } : {}) })} />;
+      case 'sign_off':
+        return <StepSignOff canSign={canDecide} defaultName={viewer.name} onSign={(name) => void tap('signed_off', { name })} />;
+      default:
+        return <StepDone status={view.install.status} />;
+    }
+  }
+}
+
+/** The plan recomputed on the tablet (the server's own rule), so it is right offline too: before mixing it previews a mix now. */
+function livePlan(view: InstallViewResponse, state: InstallState, now: Date): CurePlan | null {
+  const conditions = state.conditions;
+  const kit = conditions ? view.options.resinKits.find((k) => k.id === conditions.resinKitId) : undefined;
+  const packer = conditions ? view.options.packers.find((p) => p.id === conditions.packerId) : undefined;
+  if (!kit) return null;
+  return installClock({
+    state,
+    resin: resinClockSpec(kit.resinSystem),
+    packer: packer ? { minPressureKpa: packer.minPressureKpa, maxPressureKpa: packer.maxPressureKpa } : null,
+    resinKitExpiresOn: kit.expiresOn,
+    safetyMargin: view.company.workingWindowSafetyMargin,
+    unitSystem: view.company.unitSystem,
+    now,
+  }).plan;
+}

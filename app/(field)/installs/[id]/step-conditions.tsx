@@ -1,0 +1,114 @@
+'use client';
+
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useForm } from 'react-hook-form';
+import { z } from 'zod';
+import { lengthFromSi, lengthToSi, temperatureToSi, unitLabels, type UnitSystem } from '@/lib/units';
+import { eventPayloadSchemas } from '@/lib/validation/install-events';
+import { FieldInput, PrimaryAction, StepCard } from './field-ui';
+
+export type KitOption = { id: string; lot: string; expiresOn: string; expired: boolean; resinName: string };
+export type PackerOption = { id: string; name: string; fits: boolean; reasons: string[] };
+export type Conditions = z.infer<(typeof eventPayloadSchemas)['conditions_recorded']>;
+
+// Entered in the company's units; converted to SI once, then checked against the event's own schema.
+const formSchema = z.object({
+  mixTemp: z.coerce.number({ error: 'Enter the air temperature where you mix' }),
+  pipeTemp: z.coerce.number({ error: 'Enter the pipe or flow temperature' }),
+  resinKitId: z.uuid('Choose the resin kit by its lot'),
+  packerId: z.uuid('Choose the packer'),
+  patchLength: z.coerce.number({ error: 'Enter the patch length' }).positive('Enter the patch length'),
+});
+type FormInput = z.input<typeof formSchema>;
+type FormValues = z.output<typeof formSchema>;
+
+/** Conditions and materials: temperatures, resin kit by lot (expired ones refused), packer that fits, patch length. */
+export function StepConditions({
+  unitSystem,
+  kits,
+  packers,
+  plannedPatchLengthMm,
+  initial,
+  onSave,
+}: {
+  unitSystem: UnitSystem;
+  kits: KitOption[];
+  packers: PackerOption[];
+  plannedPatchLengthMm: number | null;
+  initial: Conditions | null;
+  onSave: (conditions: Conditions) => void;
+}) {
+  const units = unitLabels(unitSystem);
+  const { register, handleSubmit, setError, formState } = useForm<FormInput, unknown, FormValues>({
+    resolver: zodResolver(formSchema),
+    defaultValues: {
+      resinKitId: initial?.resinKitId ?? '',
+      packerId: initial?.packerId ?? packers.find((p) => p.fits)?.id ?? '',
+      patchLength: plannedPatchLengthMm ? Number(lengthFromSi(initial?.patchLengthMm ?? plannedPatchLengthMm, unitSystem).toFixed(1)) : undefined,
+    },
+  });
+  const { errors } = formState;
+
+  const submit = handleSubmit((values) => {
+    const kit = kits.find((k) => k.id === values.resinKitId);
+    if (kit?.expired) {
+      setError('resinKitId', { message: `Lot ${kit.lot} expired on ${kit.expiresOn}: it cannot be used. Choose another kit.` });
+      return;
+    }
+    const conditions = {
+      mixTempC: round(temperatureToSi(values.mixTemp, unitSystem), 1),
+      pipeTempC: round(temperatureToSi(values.pipeTemp, unitSystem), 1),
+      resinKitId: values.resinKitId,
+      packerId: values.packerId,
+      patchLengthMm: Math.round(lengthToSi(values.patchLength, unitSystem)),
+    };
+    const checked = eventPayloadSchemas.conditions_recorded.safeParse(conditions);
+    if (!checked.success) {
+      for (const issue of checked.error.issues) {
+        const field = ({ mixTempC: 'mixTemp', pipeTempC: 'pipeTemp', patchLengthMm: 'patchLength' } as const)[issue.path[0] as 'mixTempC'] ?? 'mixTemp';
+        setError(field, { message: `Out of range: ${issue.message}` });
+      }
+      return;
+    }
+    onSave(checked.data);
+  });
+
+  return (
+    <StepCard title="Conditions and materials" testId="step-conditions">
+      <form onSubmit={submit} noValidate className="space-y-4">
+        <div className="grid gap-4 sm:grid-cols-2">
+          <FieldInput id="mixTemp" label={`Air at the mixing place (${units.temperature})`} inputMode="decimal" error={errors.mixTemp?.message} {...register('mixTemp')} />
+          <FieldInput id="pipeTemp" label={`Pipe / flow at the repair (${units.temperature})`} inputMode="decimal" error={errors.pipeTemp?.message} {...register('pipeTemp')} />
+        </div>
+        <div>
+          <label htmlFor="resinKitId" className="block text-lg font-semibold">Resin kit (lot)</label>
+          <select id="resinKitId" className="mt-1 block min-h-touch w-full rounded-md border-2 border-slate-400 px-3 text-xl" aria-describedby={errors.resinKitId ? 'resinKitId-error' : undefined} {...register('resinKitId')}>
+            <option value="">Choose…</option>
+            {kits.map((kit) => (
+              <option key={kit.id} value={kit.id}>
+                {kit.lot} · {kit.resinName} · {kit.expired ? `EXPIRED ${kit.expiresOn}` : `use by ${kit.expiresOn}`}
+              </option>
+            ))}
+          </select>
+          {errors.resinKitId && <p id="resinKitId-error" role="alert" className="mt-1 text-base font-medium text-missed-700">{errors.resinKitId.message}</p>}
+        </div>
+        <div>
+          <label htmlFor="packerId" className="block text-lg font-semibold">Packer</label>
+          <select id="packerId" className="mt-1 block min-h-touch w-full rounded-md border-2 border-slate-400 px-3 text-xl" {...register('packerId')}>
+            <option value="">Choose…</option>
+            {packers.map((packer) => (
+              <option key={packer.id} value={packer.id}>
+                {packer.name}{packer.fits ? ' · fits' : ` · does not fit: ${packer.reasons.join('; ')}`}
+              </option>
+            ))}
+          </select>
+          {errors.packerId && <p className="mt-1 text-base font-medium text-missed-700">{errors.packerId.message}</p>}
+        </div>
+        <FieldInput id="patchLength" label={`Patch length (${units.shortLength})`} inputMode="decimal" error={errors.patchLength?.message} {...register('patchLength')} />
+        <PrimaryAction onClick={() => void submit()}>Save conditions</PrimaryAction>
+      </form>
+    </StepCard>
+  );
+}
+
+const round = (value: number, decimals: number) => Math.round(value * 10 ** decimals) / 10 ** decimals;

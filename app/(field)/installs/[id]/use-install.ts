@@ -1,0 +1,68 @@
+'use client';
+
+import { useCallback, useEffect, useMemo, useState } from 'react';
+import useSWR from 'swr';
+import type { InstallViewResponse } from '@/app/api/installs/[id]/route';
+import { deriveInstallState, type InstallEventInput } from '@/lib/install/state';
+import { fetchJson } from '@/lib/client/fetch-json';
+import { enqueueEvent, flushOutbox, listEntries, subscribe, type OutboxEntry } from '@/lib/client/outbox';
+import { serverNow } from '@/lib/client/server-clock';
+import type { InstallEventType } from '@/lib/domain';
+
+/**
+ * The install as this tablet knows it: the server's view (SWR, revalidated every few seconds so a
+ * second tablet shows the same clock) merged with taps still waiting in the on-device outbox.
+ */
+export function useInstall(id: string, fallbackData: InstallViewResponse) {
+  const { data, mutate } = useSWR<InstallViewResponse>(`/api/installs/${id}`, (url: string) => fetchJson<InstallViewResponse>(url), {
+    fallbackData,
+    refreshInterval: 5000,
+    revalidateOnFocus: true,
+  });
+  const view = data ?? fallbackData;
+  const [entries, setEntries] = useState<OutboxEntry[]>([]);
+
+  useEffect(() => {
+    let alive = true;
+    const refresh = () => {
+      void listEntries(id).then((list) => alive && setEntries(list));
+    };
+    refresh();
+    const unsubscribe = subscribe(() => {
+      refresh();
+      void mutate();
+    });
+    return () => {
+      alive = false;
+      unsubscribe();
+    };
+  }, [id, mutate]);
+
+  const serverIds = useMemo(() => new Set(view.events.map((e) => e.clientEventId)), [view.events]);
+  // Taps not yet on the server count as happened: the crew's screen must move on at once.
+  const queued = entries.filter((e) => e.status === 'pending' && !serverIds.has(e.clientEventId));
+  const rejected = entries.filter((e) => e.status === 'rejected');
+  const state = useMemo(() => {
+    const fromServer: InstallEventInput[] = view.events.map((e) => ({ ...e }));
+    const fromDevice: InstallEventInput[] = queued.map((e) => ({
+      id: e.clientEventId,
+      clientEventId: e.clientEventId,
+      type: e.type as InstallEventType,
+      deviceTime: e.deviceTime,
+      payload: e.payload,
+      correctsEventId: e.correctsEventId ?? null,
+    }));
+    return deriveInstallState([...fromServer, ...fromDevice]);
+  }, [view.events, queued]);
+
+  const tap = useCallback(
+    async (type: InstallEventType, payload: Record<string, unknown> = {}, correctsEventId?: string) => {
+      await enqueueEvent({ installId: id, clientEventId: crypto.randomUUID(), type, deviceTime: serverNow().toISOString(), payload, correctsEventId });
+      // Sending is best effort: the outbox keeps the tap and the sync loop retries.
+      void flushOutbox().then(() => mutate());
+    },
+    [id, mutate],
+  );
+
+  return { view, state, queued, rejected, entries, tap };
+}
