@@ -4,7 +4,7 @@ import Link from 'next/link';
 import { useEffect, useMemo, useState } from 'react';
 import type { InstallViewResponse } from '@/app/api/installs/[id]/route';
 import { useNow } from '@/components/install/countdown';
-import { resinClockSpec, type CurePlan } from '@/lib/cure';
+import { resinClockSpec, type CurePlan, type QualityFlag } from '@/lib/cure';
 import { installClock } from '@/lib/install/clock';
 import { requestNotificationPermission, unlockAudio } from '@/lib/client/alarm';
 import { startOutboxSync } from '@/lib/client/outbox';
@@ -28,12 +28,12 @@ type Viewer = { name: string; role: string };
 
 /** The timed install at the manhole: one primary action at a time, every step an install event. */
 export function InstallScreen({ initial, viewer }: { initial: InstallViewResponse; viewer: Viewer }) {
-  const { view, state, queued, rejected, tap } = useInstall(initial.install.id, initial);
+  const { view, state, local, queued, rejected, tap } = useInstall(initial.install.id, initial);
   const now = useNow(1000);
   const [skipDryRun, setSkipDryRun] = useState(false);
   const [editingConditions, setEditingConditions] = useState(false);
   const unitSystem = view.company.unitSystem;
-  const plan = useMemo(() => livePlan(view, state, now), [view, state, now]);
+  const { plan, flags } = useMemo(() => liveClock(view, state, now), [view, state, now]);
   const clockRunning = !!state.mixedAt && !state.deflatedAt;
   useWakeLock(clockRunning);
   useEffect(() => startOutboxSync(), []);
@@ -56,7 +56,7 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
   const synced = new Set(view.events.map((e) => e.clientEventId));
   const logged = [
     ...view.events.map((e) => ({ clientEventId: e.clientEventId, type: e.type, deviceTime: String(e.deviceTime), synced: true, userName: e.userName })),
-    ...queued.filter((e) => !synced.has(e.clientEventId)).map((e) => ({ clientEventId: e.clientEventId, type: e.type, deviceTime: e.deviceTime, synced: false })),
+    ...local.filter((e) => !synced.has(e.clientEventId)).map((e) => ({ clientEventId: e.clientEventId, type: e.type, deviceTime: e.deviceTime, synced: e.status === 'synced' })),
   ].sort((a, b) => Date.parse(a.deviceTime) - Date.parse(b.deviceTime));
 
   return (
@@ -71,6 +71,15 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
       </header>
       <SyncStatus queued={queued} rejected={rejected} />
       <ClockStrip deadlines={deadlinesOf(state, plan)} now={now} timeZone={view.company.timeZone} />
+      {flags.length > 0 && (
+        <ul className="space-y-2" data-testid="flags">
+          {flags.map((flag) => (
+            <li key={flag.kind} data-kind={flag.kind} className={`rounded-lg px-4 py-2 text-lg font-semibold ${flag.severity === 'critical' ? 'bg-missed-100 text-missed-700' : 'bg-near-100 text-near-700'}`}>
+              {flag.message}
+            </li>
+          ))}
+        </ul>
+      )}
       {renderStep()}
       <EventLog events={logged} timeZone={view.company.timeZone} />
     </div>
@@ -146,13 +155,14 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
   }
 }
 
-/** The plan recomputed on the tablet (the server's own rule), so it is right offline too: before mixing it previews a mix now. */
-function livePlan(view: InstallViewResponse, state: InstallState, now: Date): CurePlan | null {
+/** Plan and flags recomputed on the tablet by the server's own rule, so they are right offline too. */
+function liveClock(view: InstallViewResponse, state: InstallState, now: Date): { plan: CurePlan | null; flags: QualityFlag[] } {
   const conditions = state.conditions;
   const kit = conditions ? view.options.resinKits.find((k) => k.id === conditions.resinKitId) : undefined;
   const packer = conditions ? view.options.packers.find((p) => p.id === conditions.packerId) : undefined;
-  if (!kit) return null;
-  return installClock({
+  if (!kit) return { plan: null, flags: [] };
+  // Before the resin is mixed nothing can be late yet: the no-dry-run warning waits for the mix.
+  const clock = installClock({
     state,
     resin: resinClockSpec(kit.resinSystem),
     packer: packer ? { minPressureKpa: packer.minPressureKpa, maxPressureKpa: packer.maxPressureKpa } : null,
@@ -160,5 +170,6 @@ function livePlan(view: InstallViewResponse, state: InstallState, now: Date): Cu
     safetyMargin: view.company.workingWindowSafetyMargin,
     unitSystem: view.company.unitSystem,
     now,
-  }).plan;
+  });
+  return { plan: clock.plan, flags: state.mixedAt ? clock.flags : [] };
 }

@@ -39,12 +39,14 @@ export function useInstall(id: string, fallbackData: InstallViewResponse) {
   }, [id, mutate]);
 
   const serverIds = useMemo(() => new Set(view.events.map((e) => e.clientEventId)), [view.events]);
-  // Taps not yet on the server count as happened: the crew's screen must move on at once.
-  const queued = entries.filter((e) => e.status === 'pending' && !serverIds.has(e.clientEventId));
+  // Taps the server's view does not show yet count as happened, the crew's screen must move on at
+  // once: those still queued, and those just sent whose echo has not come back through SWR.
+  const local = entries.filter((e) => e.status !== 'rejected' && !serverIds.has(e.clientEventId));
+  const queued = entries.filter((e) => e.status === 'pending');
   const rejected = entries.filter((e) => e.status === 'rejected');
   const state = useMemo(() => {
     const fromServer: InstallEventInput[] = view.events.map((e) => ({ ...e }));
-    const fromDevice: InstallEventInput[] = queued.map((e) => ({
+    const fromDevice: InstallEventInput[] = local.map((e) => ({
       id: e.clientEventId,
       clientEventId: e.clientEventId,
       type: e.type as InstallEventType,
@@ -53,7 +55,7 @@ export function useInstall(id: string, fallbackData: InstallViewResponse) {
       correctsEventId: e.correctsEventId ?? null,
     }));
     return deriveInstallState([...fromServer, ...fromDevice]);
-  }, [view.events, queued]);
+  }, [view.events, local]);
 
   const tap = useCallback(
     async (type: InstallEventType, payload: Record<string, unknown> = {}, correctsEventId?: string) => {
@@ -64,5 +66,5 @@ export function useInstall(id: string, fallbackData: InstallViewResponse) {
     [id, mutate],
   );
 
-  return { view, state, queued, rejected, entries, tap };
+  return { view, state, local, queued, rejected, tap };
 }

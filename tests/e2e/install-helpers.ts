@@ -1,0 +1,89 @@
+import { randomUUID } from 'node:crypto';
+import { expect, type Page } from '@playwright/test';
+
+/** A new install on a repair of the seeded job whose number ends with `suffix`; returns its id. */
+export async function newInstall(page: Page, suffix: string, repairIndex = 0): Promise<string> {
+  await expect(page).toHaveURL(/\/(today|jobs|admin)/);
+  const list = await (await page.request.get(`/api/jobs?pageSize=100&q=${encodeURIComponent(suffix)}`)).json();
+  const job = list.items.find((j: { number: string }) => j.number.endsWith(suffix));
+  const detail = await (await page.request.get(`/api/jobs/${job.id}`)).json();
+  const id = randomUUID();
+  const created = await page.request.post('/api/installs', { data: { id, repairId: detail.repairs[repairIndex].id } });
+  expect(created.status()).toBe(201);
+  return id;
+}
+
+/**
+ * Moves time forward for the page: Playwright's fake clock, and the Date header of API answers
+ * moved by the same amount, so the tablet's server-clock correction sees a world that moved on.
+ */
+export async function controlTime(page: Page) {
+  let advancedMs = 0;
+  await page.clock.install();
+  await page.route('**/api/**', async (route) => {
+    const response = await route.fetch();
+    await route.fulfill({ response, headers: { ...response.headers(), date: new Date(Date.now() + advancedMs).toUTCString() } });
+  });
+  return {
+    advance: async (minutes: number) => {
+      advancedMs += minutes * 60_000;
+      await page.clock.fastForward(minutes * 60_000);
+    },
+  };
+}
+
+export async function tap(page: Page, name: string | RegExp) {
+  await page.getByRole('button', { name }).click();
+}
+
+/** Safety, checks, a dry run of `dryRunMinutes`, conditions (68 °F / 57 °F, the good kit) and GO. */
+export async function prepareToMix(page: Page, advance: (minutes: number) => Promise<void>, dryRunMinutes = 3) {
+  await acknowledgeAndCheck(page);
+  await tap(page, 'Start dry run');
+  await advance(dryRunMinutes);
+  await tap(page, 'Packer back — stop');
+  await recordConditions(page);
+  await expect(page.getByTestId('go-verdict')).toHaveText('GO');
+  await tap(page, 'Ready to mix');
+}
+
+/** Mixed → loaded → in position → inflated at 15 psi, with a few minutes between each. */
+export async function mixAndInflate(page: Page, advance: (minutes: number) => Promise<void>) {
+  await tap(page, 'Resin mixed');
+  await expect(page.getByTestId('countdown').first()).toBeVisible();
+  await advance(5);
+  await tap(page, 'Patch loaded');
+  await advance(5);
+  await tap(page, 'Packer in position');
+  await advance(4);
+  await page.getByLabel(/Gauge pressure/).fill('15');
+  await tap(page, 'Bladder inflated');
+  await expect(page.getByTestId('step-hold')).toBeVisible();
+}
+
+export async function serverView(page: Page, installId: string) {
+  const response = await page.request.get(`/api/installs/${installId}`);
+  expect(response.status()).toBe(200);
+  return response.json();
+}
+
+export async function waitForSync(page: Page) {
+  await expect(page.getByTestId('sync-status')).toHaveText('All taps synced', { timeout: 20_000 });
+}
+
+export async function acknowledgeAndCheck(page: Page) {
+  await tap(page, 'Understood — start');
+  await expect(page.getByTestId('step-checks')).toBeVisible();
+  for (const box of await page.getByRole('checkbox').all()) await box.check();
+  await tap(page, 'Checks done');
+  await expect(page.getByTestId('step-dry-run')).toBeVisible();
+}
+
+/** 68 °F at the mixing place, 57 °F in the pipe, the good kit, the first packer that fits. */
+export async function recordConditions(page: Page) {
+  await page.getByLabel(/Air at the mixing place/).fill('68');
+  await page.getByLabel(/Pipe \/ flow/).fill('57');
+  const lot = await page.locator('#resinKitId option', { hasText: 'SAE-2610-014' }).getAttribute('value');
+  await page.locator('#resinKitId').selectOption(lot!);
+  await tap(page, 'Save conditions');
+}
