@@ -8,9 +8,9 @@ export default defineConfig({
   plugins: [react()],
   resolve: {
     alias: {
-      '@': path.resolve(__dirname, '.'),
+      '@': path.resolve(import.meta.dirname, '.'),
       // Outside Next's react-server build the real module throws on import; the guard is Next's job.
-      'server-only': path.resolve(__dirname, 'tests/fixtures/server-only.ts'),
+      'server-only': path.resolve(import.meta.dirname, 'tests/fixtures/server-only.ts'),
     },
   },
   test: {
