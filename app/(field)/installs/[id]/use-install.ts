@@ -57,13 +57,17 @@ export function useInstall(id: string, fallbackData: InstallViewResponse) {
     return deriveInstallState([...fromServer, ...fromDevice]);
   }, [view.events, local]);
 
+  // The clock correction can move by a fraction of a second when fresh samples arrive; a tap must
+  // still never be stamped before one already recorded, or the log would reorder what was done.
+  const latestMs = state.log.reduce((max, e) => Math.max(max, e.deviceTime.getTime()), 0);
   const tap = useCallback(
     async (type: InstallEventType, payload: Record<string, unknown> = {}, correctsEventId?: string) => {
-      await enqueueEvent({ installId: id, clientEventId: crypto.randomUUID(), type, deviceTime: serverNow().toISOString(), payload, correctsEventId });
+      const deviceTime = new Date(Math.max(serverNow().getTime(), latestMs + 1)).toISOString();
+      await enqueueEvent({ installId: id, clientEventId: crypto.randomUUID(), type, deviceTime, payload, correctsEventId });
       // Sending is best effort: the outbox keeps the tap and the sync loop retries.
       void flushOutbox().then(() => mutate());
     },
-    [id, mutate],
+    [id, mutate, latestMs],
   );
 
   return { view, state, local, queued, rejected, tap };
