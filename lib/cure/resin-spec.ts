@@ -1,13 +1,7 @@
 import type { ResinClockSpec } from './types';
 
 /** The columns of a stored resin system that the clock needs (models/materials.ts ResinSystem). */
-export type ResinSystemRow = {
-  refTempC: number;
-  potLifeMin: number;
-  holdMin: number;
-  fullCureMin: number;
-  minTempC: number;
-  maxTempC: number;
+export type ResinSystemRow = Omit<ResinClockSpec, 'sensitivity'> & {
   sensitivityKind: 'doubling' | 'arrhenius';
   doublingC: number | null;
   activationEnergyKj: number | null;
