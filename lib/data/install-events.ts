@@ -10,7 +10,7 @@ import { correctionTarget, deriveInstallState, orderProblem, type InstallState }
 import { eventPayloadSchemas, parseEventBody } from '@/lib/validation/install-events';
 import { getCompany } from './company';
 import { findInstallFor, type InstallEventRow } from './installs';
-import { dayInZone } from './today';
+import { dayInZone } from '@/lib/dates';
 
 type ParsedEvent = Extract<ReturnType<typeof parseEventBody>, { success: true }>['data'];
 

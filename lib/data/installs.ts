@@ -12,7 +12,7 @@ import { deriveInstallState } from '@/lib/install/state';
 import { SizingInputError, fittingPackers, patchLength } from '@/lib/sizing';
 import type { CreateInstallInput } from '@/lib/validation/install-events';
 import { getCompany } from './company';
-import { dayInZone } from './today';
+import { dayInZone } from '@/lib/dates';
 
 type Plain<M extends Model> = InferAttributes<M>;
 

@@ -5,15 +5,9 @@ import type { SessionUser } from '@/lib/auth/session';
 import { resinClockSpec } from '@/lib/cure';
 import { installClock } from '@/lib/install/clock';
 import { deriveInstallState, type InstallStep } from '@/lib/install/state';
+import { dayInZone } from '@/lib/dates';
 import { getCompany } from './company';
 import type { JobDetail } from './jobs';
-
-/** A calendar day (YYYY-MM-DD) in a time zone, `offsetDays` from the given instant. */
-export function dayInZone(instant: Date, timeZone: string, offsetDays = 0): string {
-  const shifted = new Date(instant.getTime() + offsetDays * 86_400_000);
-  // en-CA formats as YYYY-MM-DD.
-  return new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).format(shifted);
-}
 
 /** What the list shows of a repair's latest install: where it stands and the clock that runs now. */
 export type InstallSummary = {
