@@ -39,3 +39,25 @@ export function parseOrThrow<S extends z.ZodType>(schema: S, input: unknown, sta
 
 /** Query-string parameters as a plain object for zod. */
 export const searchParamsOf = (request: Request) => Object.fromEntries(new URL(request.url).searchParams);
+
+/** The JSON body of a request; a body that is not JSON is a 400, never a 500. */
+export async function bodyOf(request: Request): Promise<unknown> {
+  const text = await request.text();
+  if (!text.trim()) throw new AppError(400, 'Send a JSON body.');
+  try {
+    return JSON.parse(text);
+  } catch {
+    throw new AppError(400, 'The body is not valid JSON.');
+  }
+}
+
+/** The `[id]` of a dynamic route; a malformed id cannot name a row of this company, so it is a plain 404. */
+export async function idOf(params: Promise<Record<string, string>>, what = 'That record', key = 'id'): Promise<string> {
+  const id = (await params)[key];
+  if (!UUID.test(id ?? '')) throw new AppError(404, `${what} was not found.`);
+  return id;
+}
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+/** True when a list request asks for its CSV export (`?format=csv`) rather than a JSON page. */
+export const wantsCsv = (request: Request) => new URL(request.url).searchParams.get('format') === 'csv';

@@ -6,7 +6,13 @@ import { DESK_ROLES, label } from '@/lib/domain';
 
 export const dynamic = 'force-dynamic';
 
-const OFFICE_ITEMS: NavItem[] = [{ href: '/jobs', label: 'Jobs' }];
+const OFFICE_ITEMS: NavItem[] = [
+  { href: '/jobs', label: 'Jobs' },
+  { href: '/customers', label: 'Customers' },
+  { href: '/sites', label: 'Sites' },
+  { href: '/schedule', label: 'Schedule' },
+  { href: '/reviews', label: 'Review' },
+];
 const ADMIN_ITEMS: NavItem[] = [{ href: '/admin', label: 'Company' }];
 
 /** Desk mode: dense screens for the office. The layout's check is for navigation only; every page and handler checks again. */

@@ -9,3 +9,7 @@ export const paginationSchema = z.object({
 });
 
 export const isoDateSchema = z.iso.date('Use a date like 2026-12-01');
+
+/** Free text that may be left empty: '' and null both store NULL; undefined leaves a PATCH field alone. */
+export const optionalText = (max: number) =>
+  z.string().trim().max(max, `At most ${max} characters`).transform((value) => value || null).nullish();

@@ -9,3 +9,10 @@ export async function call<P extends Record<string, string>>(
   const body = response.headers.get('content-type')?.includes('json') ? await response.json() : await response.text();
   return { status: response.status, body };
 }
+
+/** A RequestInit carrying a JSON body. */
+export const jsonBody = (method: 'POST' | 'PATCH' | 'PUT' | 'DELETE', body: unknown): RequestInit => ({
+  method,
+  headers: { 'content-type': 'application/json' },
+  body: typeof body === 'string' ? body : JSON.stringify(body),
+});

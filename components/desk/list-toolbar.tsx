@@ -1,0 +1,65 @@
+import Link from 'next/link';
+import type { ReactNode } from 'react';
+import { buttonClass } from '@/components/ui/button';
+
+/**
+ * The bar above every desk list: a GET form (so the filter lives in the URL and survives a reload),
+ * the list's own filters as children, an "Export CSV" link carrying the same filter, and the "New" button.
+ */
+export function ListToolbar({
+  search,
+  placeholder,
+  exportHref,
+  newHref,
+  newLabel,
+  children,
+}: {
+  search?: string;
+  placeholder: string;
+  exportHref: string;
+  newHref?: string;
+  newLabel?: string;
+  children?: ReactNode;
+}) {
+  return (
+    <div className="flex flex-wrap items-end justify-between gap-3">
+      <form className="flex flex-wrap items-end gap-3 text-sm" role="search">
+        <label className="flex flex-col">
+          <span className="font-medium">Search</span>
+          <input name="q" type="search" defaultValue={search ?? ''} placeholder={placeholder} className="h-9 w-64 rounded-md border border-slate-300 px-2" />
+        </label>
+        {children}
+        <button type="submit" className={buttonClass('secondary')}>Filter</button>
+      </form>
+      <div className="flex gap-2">
+        <a href={exportHref} className={buttonClass('secondary')} download>Export CSV</a>
+        {newHref && <Link href={newHref} className={buttonClass('primary')}>{newLabel ?? 'New'}</Link>}
+      </div>
+    </div>
+  );
+}
+
+/** The CSV link of an API list with the page's current filter (paging dropped: the export takes every match). */
+export function exportHrefOf(apiPath: string, params: Record<string, string | string[] | undefined>) {
+  const query = new URLSearchParams();
+  for (const [key, value] of Object.entries(params)) {
+    if (typeof value === 'string' && value && key !== 'page' && key !== 'pageSize') query.set(key, value);
+  }
+  query.set('format', 'csv');
+  return `${apiPath}?${query.toString()}`;
+}
+
+/** A <select> filter for a ListToolbar. */
+export function FilterSelect({ name, label, value, options }: { name: string; label: string; value?: string; options: { value: string; label: string }[] }) {
+  return (
+    <label className="flex flex-col">
+      <span className="font-medium">{label}</span>
+      <select name={name} defaultValue={value ?? ''} className="h-9 rounded-md border border-slate-300 px-2">
+        <option value="">Any</option>
+        {options.map((option) => (
+          <option key={option.value} value={option.value}>{option.label}</option>
+        ))}
+      </select>
+    </label>
+  );
+}
