@@ -35,3 +35,18 @@ session_secret() {
   [ -s .data/nextauth-secret ] || node -e "process.stdout.write(require('crypto').randomBytes(32).toString('base64url'))" > .data/nextauth-secret
   cat .data/nextauth-secret
 }
+
+# Starts the local service fakes (S3 storage, SMTP, payments) and exports what the app needs to reach them.
+# $1 names the state directory (.data/fakes-<name>); FAKES_PORT_BASE picks the ports.
+start_fakes() {
+  local env_file
+  env_file="$(FAKES_NAME="$1" bash scripts/fakes.sh start)"
+  set -a
+  # shellcheck disable=SC1090
+  source "$env_file"
+  set +a
+}
+
+stop_fakes() {
+  FAKES_NAME="$1" bash scripts/fakes.sh stop || true
+}

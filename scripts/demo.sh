@@ -9,6 +9,8 @@ start_database "${DB_NAME:-setline}"
 say "migrating"
 sequelize-cli db:migrate >/dev/null
 bash scripts/seed.sh
+say "starting the local service fakes (storage, mail, payments)"
+FAKES_PORT_BASE="${FAKES_PORT_BASE:-54390}" start_fakes demo
 say "building (next build)"
 next build >/dev/null
 
@@ -26,8 +28,10 @@ cat <<BANNER
       foreman@demo.test   today's jobs and the install clock
       tech@demo.test      install clock on the crew's jobs
       office@second.test / foreman@second.test   a second company
-    Ctrl-C stops the server (the database keeps running:
-    npm run db:stop stops it).
+    E-mail sent by the demo lands in the local mailbox:
+      ${MAIL_WEB_URL:-}
+    Ctrl-C stops the server (the database and the service fakes
+    keep running: npm run db:stop / bash scripts/fakes.sh stop).
   └──────────────────────────────────────────────────────────────┘
 
 BANNER

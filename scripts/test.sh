@@ -12,6 +12,12 @@ rm -rf "$REPORTS"; mkdir -p "$REPORTS"
 
 ensure_dependencies
 
+# Fresh service fakes for every run, on their own ports so a running demo is left alone.
+stop_fakes test
+rm -rf "$ROOT/.data/fakes-test"
+FAKES_PORT_BASE="${TEST_FAKES_PORT_BASE:-54490}" start_fakes test
+trap 'stop_fakes test' EXIT
+
 ensure_chromium() {
   local path="${CHROMIUM_PATH:-/usr/bin/chromium}"
   [ -x "$path" ] && return 0
