@@ -41,6 +41,7 @@ export type InstallEventType = (typeof INSTALL_EVENT_TYPES)[number];
 
 export const ATTACHMENT_KINDS = ['before', 'after', 'inspection', 'document', 'other'] as const;
 export const REVIEW_DECISIONS = ['approved', 'sent_back'] as const;
+export const INVOICE_STATUSES = ['draft', 'issued', 'paid', 'void'] as const;
 
 /** Words shown to people for the codes above. */
 export const LABELS: Record<string, string> = {
@@ -48,6 +49,7 @@ export const LABELS: Record<string, string> = {
   draft: 'Draft', scheduled: 'Scheduled', in_progress: 'In progress', awaiting_review: 'Awaiting review',
   sent_back: 'Sent back', approved: 'Approved', reported: 'Report sent', closed: 'Closed', cancelled: 'Cancelled',
   not_started: 'Not started', abandoned: 'Abandoned', planned: 'Planned', installed: 'Installed', failed: 'Failed',
+  issued: 'Issued', paid: 'Paid', void: 'Void',
   manhole: 'Manhole', cleanout: 'Cleanout', other: 'Other',
 };
 

@@ -9,11 +9,12 @@ import { Job, Repair, initJob } from './job';
 import { ChecklistTemplate, Packer, ResinKit, ResinSystem, initMaterials } from './materials';
 import { Install, InstallEvent, initInstall } from './install';
 import { Attachment, AuditEntry, Review, initRecords } from './records';
+import { Invoice, InvoiceLine, PaymentEvent, initInvoice } from './invoice';
 
 // Initialise once per process (the module may be evaluated again by dev hot reload).
 const initialised = globalThis as unknown as { setlineModelsReady?: boolean };
 if (!initialised.setlineModelsReady || !Company.sequelize) {
-  for (const init of [initCompany, initUser, initCrew, initCustomer, initSite, initJob, initMaterials, initInstall, initRecords]) {
+  for (const init of [initCompany, initUser, initCrew, initCustomer, initSite, initJob, initMaterials, initInstall, initRecords, initInvoice]) {
     init(sequelize);
   }
   associate();
@@ -66,9 +67,16 @@ function associate() {
   InstallEvent.belongsTo(InstallEvent, { foreignKey: 'correctsEventId', as: 'corrects' });
   Review.belongsTo(User, { foreignKey: 'reviewerId', as: 'reviewer' });
   AuditEntry.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+
+  Job.hasMany(Invoice, { foreignKey: 'jobId', as: 'invoices' });
+  Invoice.belongsTo(Job, { foreignKey: 'jobId', as: 'job' });
+  Invoice.hasMany(InvoiceLine, { foreignKey: 'invoiceId', as: 'lines' });
+  InvoiceLine.belongsTo(Invoice, { foreignKey: 'invoiceId', as: 'invoice' });
+  InvoiceLine.belongsTo(Repair, { foreignKey: 'repairId', as: 'repair' });
+  Invoice.hasMany(PaymentEvent, { foreignKey: 'invoiceId', as: 'paymentEvents' });
 }
 
 export {
   sequelize, Company, User, Crew, CrewMember, Customer, Site, AccessPoint, Segment, Job, Repair,
-  ResinSystem, ResinKit, Packer, ChecklistTemplate, Install, InstallEvent, Attachment, Review, AuditEntry,
+  ResinSystem, ResinKit, Packer, ChecklistTemplate, Install, InstallEvent, Attachment, Review, AuditEntry, Invoice, InvoiceLine, PaymentEvent,
 };
