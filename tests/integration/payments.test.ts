@@ -85,11 +85,11 @@ describe('online payment of an invoice (payment fake over sockets)', () => {
 
     const job = await Job.create({ companyId: a.company.id, number: `S-${a.job.number}`.slice(0, 20), customerId: a.customer.id, siteId: a.site.id, status: 'approved' });
     const other = await Invoice.create({ companyId: a.company.id, jobId: job.id, number: 'INV-SHORT', status: 'issued', dueOn: '2026-12-31', subtotalCents: 10_000, taxCents: 0, totalCents: 10_000 });
-    const short = JSON.stringify({ id: 'evt_short', object: 'event', type: 'checkout.session.completed', data: { object: { ...session, id: 'cs_short', amount_total: 1, metadata: { invoiceId: other.id, companyId: a.company.id } } } });
+    const short = JSON.stringify({ id: `evt_short_${randomUUID()}`, object: 'event', type: 'checkout.session.completed', data: { object: { ...session, id: 'cs_short', amount_total: 1, metadata: { invoiceId: other.id, companyId: a.company.id } } } });
     expect(await (await post(short, sign(short))).json()).toEqual({ received: true, outcome: 'mismatch' });
     expect((await other.reload()).status).toBe('issued');
     // An event naming another company for the invoice is ignored.
-    const foreign = JSON.stringify({ id: 'evt_foreign', object: 'event', type: 'checkout.session.completed', data: { object: { ...session, id: 'cs_f', amount_total: 10_000, metadata: { invoiceId: other.id, companyId: a.otherCrew.id } } } });
+    const foreign = JSON.stringify({ id: `evt_foreign_${randomUUID()}`, object: 'event', type: 'checkout.session.completed', data: { object: { ...session, id: 'cs_f', amount_total: 10_000, metadata: { invoiceId: other.id, companyId: a.otherCrew.id } } } });
     expect(await (await post(foreign, sign(foreign))).json()).toEqual({ received: true, outcome: 'ignored' });
     expect((await other.reload()).status).toBe('issued');
   });
