@@ -12,6 +12,7 @@ const OFFICE_ITEMS: NavItem[] = [
   { href: '/sites', label: 'Sites' },
   { href: '/schedule', label: 'Schedule' },
   { href: '/reviews', label: 'Review' },
+  { href: '/invoices', label: 'Invoices' },
 ];
 const ADMIN_ITEMS: NavItem[] = [{ href: '/admin', label: 'Company' }];
 

@@ -17,6 +17,7 @@ export function Badge({ tone = 'neutral', children }: { tone?: Tone; children: R
 const STATUS_TONES: Record<string, Tone> = {
   draft: 'neutral', scheduled: 'brand', in_progress: 'near', awaiting_review: 'near', sent_back: 'missed',
   approved: 'safe', reported: 'safe', closed: 'neutral', cancelled: 'neutral',
+  issued: 'brand', paid: 'safe', void: 'neutral',
 };
 
 export function StatusBadge({ status }: { status: string }) {

@@ -1,0 +1,27 @@
+'use client';
+
+import type { ColumnDef } from '@tanstack/react-table';
+import Link from 'next/link';
+import { StatusBadge } from '@/components/ui/badge';
+import { DataTable } from '@/components/ui/data-table';
+import { formatMoney } from '@/lib/invoice/money';
+import type { InvoiceListResponse } from '@/app/api/invoices/route';
+
+type Row = InvoiceListResponse['items'][number];
+
+const columns: ColumnDef<Row, unknown>[] = [
+  { id: 'number', header: 'Invoice', enableSorting: true, cell: ({ row }) => <span className="font-semibold">{row.original.number}</span> },
+  {
+    id: 'job',
+    header: 'Job',
+    cell: ({ row }) => <Link href={`/jobs/${row.original.jobId}`} className="text-brand-700 hover:underline">{row.original.job?.number}</Link>,
+  },
+  { id: 'customer', header: 'Customer', cell: ({ row }) => row.original.job?.customer?.name },
+  { id: 'status', header: 'Status', enableSorting: true, cell: ({ row }) => <StatusBadge status={row.original.status} /> },
+  { id: 'totalCents', header: 'Total', enableSorting: true, cell: ({ row }) => <span className="tabular-nums">{formatMoney(row.original.totalCents, row.original.currency)}</span> },
+  { id: 'dueOn', header: 'Due', enableSorting: true, cell: ({ row }) => row.original.dueOn },
+];
+
+export function InvoicesTable({ list, sort, dir }: { list: InvoiceListResponse; sort: string; dir: 'asc' | 'desc' }) {
+  return <DataTable caption="Invoices" columns={columns} data={list.items} page={list.page} pageCount={list.pageCount} total={list.total} sort={sort} dir={dir} />;
+}
