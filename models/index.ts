@@ -66,6 +66,9 @@ function associate() {
   InstallEvent.belongsTo(InstallEvent, { foreignKey: 'correctsEventId', as: 'corrects' });
   Review.belongsTo(User, { foreignKey: 'reviewerId', as: 'reviewer' });
   AuditEntry.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+  Attachment.belongsTo(User, { foreignKey: 'uploadedById', as: 'uploadedBy' });
+  Attachment.belongsTo(Install, { foreignKey: 'installId', as: 'install' });
+  Attachment.belongsTo(Job, { foreignKey: 'jobId', as: 'job' });
 }
 
 export {
