@@ -59,8 +59,7 @@ describe('uploadRequestSchema', () => {
   });
 
   it('wants exactly one of a repair or an install', () => {
-    const { installId: _, ...none } = good;
-    expect(uploadRequestSchema.safeParse(none).success).toBe(false);
+    expect(uploadRequestSchema.safeParse({ ...good, installId: undefined }).success).toBe(false);
     expect(uploadRequestSchema.safeParse({ ...good, repairId: job }).success).toBe(false);
   });
 
