@@ -31,6 +31,13 @@ export const ALLOWED_SUMMARY = `JPEG, PNG or WebP images up to ${MAX_BYTES.image
 
 export const allowedType = (mime: string): AllowedType | undefined => ALLOWED_TYPES.find((t) => t.mime === mime.toLowerCase());
 
+/** The type to declare for a file the browser could not type: by its extension (the server checks the bytes anyway). */
+export function typeOfFile(file: { name: string; type: string }): string {
+  if (file.type) return file.type.toLowerCase();
+  const ext = file.name.toLowerCase().match(/\.(\w+)$/)?.[1];
+  return ALLOWED_TYPES.find((t) => t.ext === ext || (ext === 'jpeg' && t.ext === 'jpg'))?.mime ?? '';
+}
+
 export const formatBytes = (bytes: number) =>
   bytes >= MB ? `${(bytes / MB).toFixed(1).replace(/\.0$/, '')} MB` : bytes >= 1024 ? `${Math.round(bytes / 1024)} KB` : `${bytes} bytes`;
 
