@@ -40,6 +40,7 @@ export const INSTALL_EVENT_TYPES = [
 export type InstallEventType = (typeof INSTALL_EVENT_TYPES)[number];
 
 export const ATTACHMENT_KINDS = ['before', 'after', 'inspection', 'document', 'other'] as const;
+export const ATTACHMENT_STATUSES = ['pending', 'ready'] as const;
 export const REVIEW_DECISIONS = ['approved', 'sent_back'] as const;
 export const INVOICE_STATUSES = ['draft', 'issued', 'paid', 'void'] as const;
 

@@ -9,6 +9,13 @@ export const envSchema = z.object({
   NEXTAUTH_SECRET: z.string().min(16, 'NEXTAUTH_SECRET must be at least 16 characters').optional(),
   NEXTAUTH_URL: z.url('NEXTAUTH_URL must be a URL').optional(),
   NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
+  // Object storage for evidence (S3 or any S3-compatible service): see storageEnv below.
+  S3_ENDPOINT: z.url('S3_ENDPOINT must be a URL').optional(),
+  S3_REGION: z.string().min(1).optional(),
+  S3_BUCKET: z.string().min(3, 'S3_BUCKET must name a bucket').optional(),
+  S3_ACCESS_KEY_ID: z.string().min(1).optional(),
+  S3_SECRET_ACCESS_KEY: z.string().min(1).optional(),
+  S3_FORCE_PATH_STYLE: z.enum(['true', 'false'], { error: 'S3_FORCE_PATH_STYLE is true or false' }).optional(),
 });
 
 export type Env = z.infer<typeof envSchema>;
@@ -44,4 +51,39 @@ export function env(): Env {
   }
   cached = parseEnv(process.env);
   return cached;
+}
+
+/** The storage fake of `bash scripts/fakes.sh start` at the demo's ports, with its one built-in key pair. */
+export const S3_FAKE_DEFAULTS = {
+  endpoint: 'http://127.0.0.1:54393',
+  region: 'us-east-1',
+  bucket: 'setline-evidence',
+  accessKeyId: 'S3RVER',
+  secretAccessKey: 'S3RVER',
+} as const;
+
+export type StorageEnv = { endpoint?: string; region: string; bucket: string; accessKeyId: string; secretAccessKey: string; forcePathStyle: boolean };
+
+/**
+ * Where evidence is stored. In production S3_REGION, S3_BUCKET and the key pair are required (S3_ENDPOINT
+ * only for a non-AWS service); development and tests fall back to the local fake. Checked when storage is
+ * first used, so pages that never touch it keep working while it is being set up.
+ */
+export function storageEnv(e: Env = env()): StorageEnv {
+  const given = { region: e.S3_REGION, bucket: e.S3_BUCKET, accessKeyId: e.S3_ACCESS_KEY_ID, secretAccessKey: e.S3_SECRET_ACCESS_KEY };
+  if (e.NODE_ENV === 'production') {
+    const names = { region: 'S3_REGION', bucket: 'S3_BUCKET', accessKeyId: 'S3_ACCESS_KEY_ID', secretAccessKey: 'S3_SECRET_ACCESS_KEY' } as const;
+    const missing = (Object.keys(names) as (keyof typeof names)[]).filter((key) => !given[key]).map((key) => `- ${names[key]}: required in production (object storage for evidence)`);
+    if (missing.length) throw new EnvError(`Evidence storage is not set up:\n${missing.join('\n')}`);
+  }
+  const endpoint = e.S3_ENDPOINT ?? (e.NODE_ENV === 'production' ? undefined : S3_FAKE_DEFAULTS.endpoint);
+  return {
+    endpoint,
+    region: given.region ?? S3_FAKE_DEFAULTS.region,
+    bucket: given.bucket ?? S3_FAKE_DEFAULTS.bucket,
+    accessKeyId: given.accessKeyId ?? S3_FAKE_DEFAULTS.accessKeyId,
+    secretAccessKey: given.secretAccessKey ?? S3_FAKE_DEFAULTS.secretAccessKey,
+    // Path-style addressing for S3-compatible services and the fake (no bucket sub-domains on loopback).
+    forcePathStyle: e.S3_FORCE_PATH_STYLE ? e.S3_FORCE_PATH_STYLE === 'true' : !!endpoint,
+  };
 }

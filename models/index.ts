@@ -74,6 +74,9 @@ function associate() {
   InvoiceLine.belongsTo(Invoice, { foreignKey: 'invoiceId', as: 'invoice' });
   InvoiceLine.belongsTo(Repair, { foreignKey: 'repairId', as: 'repair' });
   Invoice.hasMany(PaymentEvent, { foreignKey: 'invoiceId', as: 'paymentEvents' });
+  Attachment.belongsTo(User, { foreignKey: 'uploadedById', as: 'uploadedBy' });
+  Attachment.belongsTo(Install, { foreignKey: 'installId', as: 'install' });
+  Attachment.belongsTo(Job, { foreignKey: 'jobId', as: 'job' });
 }
 
 export {

@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import { ATTACHMENT_KINDS, REVIEW_DECISIONS } from '@/lib/domain';
+import { ATTACHMENT_KINDS, ATTACHMENT_STATUSES, REVIEW_DECISIONS } from '@/lib/domain';
 
 /** A stored file (inspection image, document); the bytes live in object storage under storageKey. */
 export class Attachment extends Model<InferAttributes<Attachment>, InferCreationAttributes<Attachment>> {
@@ -16,6 +16,10 @@ export class Attachment extends Model<InferAttributes<Attachment>, InferCreation
   declare originalName: CreationOptional<string | null>;
   declare caption: CreationOptional<string | null>;
   declare uploadedById: CreationOptional<string | null>;
+  /** 'pending' until the server has checked the uploaded bytes. */
+  declare status: CreationOptional<(typeof ATTACHMENT_STATUSES)[number]>;
+  declare width: CreationOptional<number | null>;
+  declare height: CreationOptional<number | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -60,6 +64,9 @@ export function initRecords(sequelize: Sequelize) {
       originalName: DataTypes.STRING(255),
       caption: DataTypes.STRING(300),
       uploadedById: DataTypes.UUID,
+      status: { type: DataTypes.STRING(10), allowNull: false, defaultValue: 'pending', validate: { isIn: [ATTACHMENT_STATUSES] } },
+      width: DataTypes.INTEGER,
+      height: DataTypes.INTEGER,
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },

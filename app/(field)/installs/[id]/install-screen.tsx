@@ -3,6 +3,7 @@
 import Link from 'next/link';
 import { useEffect, useMemo, useState } from 'react';
 import type { InstallViewResponse } from '@/app/api/installs/[id]/route';
+import { EvidencePanel } from '@/components/evidence/evidence-panel';
 import { useNow } from '@/components/install/countdown';
 import { resinClockSpec, type CurePlan, type QualityFlag } from '@/lib/cure';
 import { installClock } from '@/lib/install/clock';
@@ -25,6 +26,9 @@ import { SyncStatus } from './sync-status';
 import { useInstall } from './use-install';
 
 type Viewer = { name: string; role: string };
+
+/** Inspection images are taken once the bladder is down: while inspecting, before and after sign-off. */
+const AFTER_DEFLATE = ['inspect', 'sign_off', 'done'];
 
 /** The timed install at the manhole: one primary action at a time, every step an install event. */
 export function InstallScreen({ initial, viewer }: { initial: InstallViewResponse; viewer: Viewer }) {
@@ -81,6 +85,9 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
         </ul>
       )}
       {renderStep()}
+      {AFTER_DEFLATE.includes(step) && (
+        <EvidencePanel target={{ installId: view.install.id }} size="field" title="Inspection images" defaultKind="inspection" />
+      )}
       <EventLog events={logged} timeZone={view.company.timeZone} />
     </div>
   );

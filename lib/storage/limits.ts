@@ -1,0 +1,65 @@
+// What evidence may be uploaded, and how large: the one place these limits are stated.
+// Shared by the zod schema (request time), the server's check of the stored bytes and the browser.
+
+const MB = 1024 * 1024;
+
+export type MediaKind = 'image' | 'video';
+type AllowedType = { mime: string; ext: string; kind: MediaKind; name: string };
+
+export const MAX_BYTES: Record<MediaKind, number> = { image: 15 * MB, video: 200 * MB };
+
+export const ALLOWED_TYPES: readonly AllowedType[] = [
+  { mime: 'image/jpeg', ext: 'jpg', kind: 'image', name: 'JPEG' },
+  { mime: 'image/png', ext: 'png', kind: 'image', name: 'PNG' },
+  { mime: 'image/webp', ext: 'webp', kind: 'image', name: 'WebP' },
+  { mime: 'video/mp4', ext: 'mp4', kind: 'video', name: 'MP4' },
+  { mime: 'video/webm', ext: 'webm', kind: 'video', name: 'WebM' },
+  { mime: 'video/quicktime', ext: 'mov', kind: 'video', name: 'QuickTime' },
+];
+
+/** How long a presigned upload or a signed download link stays valid. */
+export const UPLOAD_URL_SECONDS = 5 * 60;
+export const DOWNLOAD_URL_SECONDS = 5 * 60;
+/** Uploads never completed within this time may be swept away. */
+export const PENDING_UPLOAD_MAX_AGE_MS = 24 * 60 * 60 * 1000;
+/** Bytes read from the start of a stored file to tell its real type. */
+export const SNIFF_BYTES = 4100;
+export const THUMBNAIL_WIDTH = 320;
+
+/** The sentence shown wherever a type is refused. */
+export const ALLOWED_SUMMARY = `JPEG, PNG or WebP images up to ${MAX_BYTES.image / MB} MB, MP4, WebM or QuickTime videos up to ${MAX_BYTES.video / MB} MB`;
+
+export const allowedType = (mime: string): AllowedType | undefined => ALLOWED_TYPES.find((t) => t.mime === mime.toLowerCase());
+
+/** The type to declare for a file the browser could not type: by its extension (the server checks the bytes anyway). */
+export function typeOfFile(file: { name: string; type: string }): string {
+  if (file.type) return file.type.toLowerCase();
+  const ext = file.name.toLowerCase().match(/\.(\w+)$/)?.[1];
+  return ALLOWED_TYPES.find((t) => t.ext === ext || (ext === 'jpeg' && t.ext === 'jpg'))?.mime ?? '';
+}
+
+export const formatBytes = (bytes: number) =>
+  bytes >= MB ? `${(bytes / MB).toFixed(1).replace(/\.0$/, '')} MB` : bytes >= 1024 ? `${Math.round(bytes / 1024)} KB` : `${bytes} bytes`;
+
+/** Why a declared file may not be uploaded (type or size), or null when it may. */
+export function uploadRefusal(contentType: string, byteSize: number): string | null {
+  const type = allowedType(contentType);
+  if (!type) return `Files of type ${contentType || 'unknown'} cannot be uploaded: send ${ALLOWED_SUMMARY}.`;
+  if (byteSize > MAX_BYTES[type.kind]) {
+    return `This ${type.kind} is ${formatBytes(byteSize)}; ${type.kind === 'image' ? 'images' : 'videos'} may be at most ${formatBytes(MAX_BYTES[type.kind])}.`;
+  }
+  return null;
+}
+
+/**
+ * The storage key of an upload, made by the server only: `<companyId>/<jobId>/<uuid>.<ext>`.
+ * Nothing of the user's file name goes into it.
+ */
+export function objectKey(companyId: string, jobId: string, id: string, mime: string): string {
+  const type = allowedType(mime);
+  if (!type) throw new Error(`no storage key for type ${mime}`);
+  return `${companyId}/${jobId}/${id}.${type.ext}`;
+}
+
+/** The key of an upload's thumbnail, beside it. */
+export const thumbnailKey = (companyId: string, jobId: string, id: string) => `${companyId}/${jobId}/thumbs/${id}.webp`;
