@@ -12,14 +12,15 @@ const base = Number(process.env.FAKES_PORT_BASE ?? 54390);
 const dataDir = process.env.FAKES_DATA_DIR ?? path.join(root, '.data/fakes');
 
 const modules = readdirSync(here).filter((file) => file.endsWith('.fake.mjs')).sort();
+// Fixed offsets, so adding a fake never moves another one's port (each gets two: the second for a web view).
+const OFFSETS = { mail: 1, s3: 3, payments: 5 };
 const running = [];
 const env = {};
-let offset = 1;
+let spare = 11;
 for (const file of modules) {
   const mod = await import(pathToFileURL(path.join(here, file)).href);
-  // Each fake gets two ports (the second for a web view or webhook side, if it has one).
+  const offset = OFFSETS[file.replace('.fake.mjs', '')] ?? (spare += 2);
   const fake = await mod.start({ dataDir, port: base + offset, webPort: base + offset + 1, root });
-  offset += 2;
   running.push(fake);
   Object.assign(env, fake.env);
   console.error(`[fakes] ${fake.name} ready`);
