@@ -31,6 +31,8 @@ export class ResinKit extends Model<InferAttributes<ResinKit>, InferCreationAttr
   declare expiresOn: string;
   declare quantityL: number;
   declare receivedOn: CreationOptional<string | null>;
+  declare notes: CreationOptional<string | null>;
+  declare archivedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -99,6 +101,8 @@ export function initMaterials(sequelize: Sequelize) {
       expiresOn: { type: DataTypes.DATEONLY, allowNull: false },
       quantityL: decimal(8, 2, { allowNull: false, field: 'quantity_l' }),
       receivedOn: DataTypes.DATEONLY,
+      notes: DataTypes.TEXT,
+      archivedAt: DataTypes.DATE,
     },
     { sequelize, modelName: 'ResinKit', tableName: 'resin_kits', underscored: true },
   );

@@ -85,7 +85,7 @@ export async function getInstallView(user: SessionUser, id: string, now = new Da
       order: [['deviceTime', 'ASC'], ['receivedAt', 'ASC']],
     }),
     ResinKit.findAll({
-      where: { companyId: user.companyId },
+      where: { companyId: user.companyId, archivedAt: null },
       include: [{ model: ResinSystem, as: 'resinSystem', where: { archivedAt: null } }],
       order: [['expiresOn', 'ASC'], ['lot', 'ASC']],
     }),

@@ -30,6 +30,7 @@ export {
   type LengthKind,
   type UnitLabels,
 } from './system';
+export { temperatureDifferenceToSi, temperatureDifferenceFromSi } from './difference';
 export { formatDuration, parseDuration, MINUS_SIGN } from './duration';
 export {
   formatNumber,

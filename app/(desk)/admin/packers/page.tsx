@@ -1,0 +1,28 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { FilterSelect, ListToolbar, exportHrefOf } from '@/components/desk/list-toolbar';
+import { requirePageUser } from '@/lib/auth/session';
+import { getCompany } from '@/lib/data/company';
+import { listPackers } from '@/lib/data/packers';
+import { packerListQuerySchema } from '@/lib/validation/packers';
+import { PackersTable } from './packers-table';
+
+export const metadata: Metadata = { title: 'Packers' };
+
+export default async function Page({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
+  const user = await requirePageUser(['admin']);
+  const raw = await searchParams;
+  const parsed = packerListQuerySchema.safeParse(raw);
+  const query = parsed.success ? parsed.data : packerListQuerySchema.parse({});
+  const [list, company] = await Promise.all([listPackers(user, query), getCompany(user)]);
+  return (
+    <div className="space-y-4">
+      <Link href="/admin" className="text-sm text-brand-700 hover:underline">← Company</Link>
+      <h1 className="text-2xl font-bold">Packers</h1>
+      <ListToolbar search={query.q} placeholder="Name or serial" exportHref={exportHrefOf('/api/packers', raw)} newHref="/admin/packers/new" newLabel="New packer">
+        <FilterSelect name="archived" label="Archived" value={query.archived === 'false' ? '' : query.archived} options={[{ value: 'true', label: 'Include archived' }, { value: 'only', label: 'Only archived' }]} />
+      </ListToolbar>
+      <PackersTable list={list} sort={query.sort} dir={query.dir} units={company.unitSystem} />
+    </div>
+  );
+}

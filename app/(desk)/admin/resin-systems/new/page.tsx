@@ -1,0 +1,19 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { requirePageUser } from '@/lib/auth/session';
+import { getCompany } from '@/lib/data/company';
+import { ResinSystemForm } from '../resin-system-form';
+
+export const metadata: Metadata = { title: 'New resin system' };
+
+export default async function Page() {
+  const user = await requirePageUser(['admin']);
+  const { unitSystem } = await getCompany(user);
+  return (
+    <div className="space-y-4">
+      <Link href="/admin/resin-systems" className="text-sm text-brand-700 hover:underline">← Resin systems</Link>
+      <h1 className="text-2xl font-bold">New resin system</h1>
+      <ResinSystemForm unitSystem={unitSystem} />
+    </div>
+  );
+}

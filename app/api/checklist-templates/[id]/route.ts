@@ -1,0 +1,12 @@
+import { archiveChecklistTemplate, getChecklistTemplate, updateChecklistTemplate } from '@/lib/data/checklist-templates';
+import { settingsRecord } from '@/lib/settings-routes';
+import { checklistTemplatePatchSchema } from '@/lib/validation/checklist-templates';
+
+export type ChecklistTemplateResponse = Awaited<ReturnType<typeof getChecklistTemplate>>;
+
+/** PATCH with `items` replaces the whole ordered list; items keep the ids they come with. */
+const routes = settingsRecord({ what: 'Check-list template', patchSchema: checklistTemplatePatchSchema, get: getChecklistTemplate, update: updateChecklistTemplate, archive: archiveChecklistTemplate });
+export const GET = routes.GET;
+export const PATCH = routes.PATCH;
+/** Makes a template past installs used inactive, deletes an unused one. */
+export const DELETE = routes.DELETE;

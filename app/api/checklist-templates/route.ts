@@ -1,0 +1,21 @@
+import { createChecklistTemplate, listChecklistTemplates } from '@/lib/data/checklist-templates';
+import { settingsCollection } from '@/lib/settings-routes';
+import { checklistTemplateInputSchema, checklistTemplateListQuerySchema } from '@/lib/validation/checklist-templates';
+
+export type ChecklistTemplateListResponse = Awaited<ReturnType<typeof listChecklistTemplates>>;
+
+/** Check-list templates with their ordered items `{ id, label, required }`; `archived` filters on inactive ones. */
+const routes = settingsCollection({
+  csvName: 'checklist-templates',
+  querySchema: checklistTemplateListQuerySchema,
+  inputSchema: checklistTemplateInputSchema,
+  list: listChecklistTemplates,
+  create: createChecklistTemplate,
+  csv: [
+    { header: 'Name', value: (t) => t.name },
+    { header: 'Items', value: (t) => t.items.map((item) => `${item.label}${item.required ? '' : ' (optional)'}`).join(' | ') },
+    { header: 'Active', value: (t) => (t.active ? 'yes' : 'no') },
+  ],
+});
+export const GET = routes.GET;
+export const POST = routes.POST;

@@ -1,0 +1,11 @@
+import { archivePacker, getPacker, updatePacker } from '@/lib/data/packers';
+import { settingsRecord } from '@/lib/settings-routes';
+import { packerPatchSchema } from '@/lib/validation/packers';
+
+export type PackerResponse = Awaited<ReturnType<typeof getPacker>>;
+
+const routes = settingsRecord({ what: 'Packer', patchSchema: packerPatchSchema, get: getPacker, update: updatePacker, archive: archivePacker });
+export const GET = routes.GET;
+export const PATCH = routes.PATCH;
+/** Archives a packer an install used, deletes an unused one. */
+export const DELETE = routes.DELETE;

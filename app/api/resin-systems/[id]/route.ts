@@ -1,0 +1,11 @@
+import { archiveResinSystem, getResinSystem, updateResinSystem } from '@/lib/data/resin-systems';
+import { settingsRecord } from '@/lib/settings-routes';
+import { resinSystemPatchSchema } from '@/lib/validation/resin-systems';
+
+export type ResinSystemResponse = Awaited<ReturnType<typeof getResinSystem>>;
+
+const routes = settingsRecord({ what: 'Resin system', patchSchema: resinSystemPatchSchema, get: getResinSystem, update: updateResinSystem, archive: archiveResinSystem });
+export const GET = routes.GET;
+export const PATCH = routes.PATCH;
+/** Archives a resin system that kits or installs name, deletes an unused one. */
+export const DELETE = routes.DELETE;

@@ -1,0 +1,110 @@
+import { z } from 'zod';
+import { MAX_TEMP_C, MIN_TEMP_C } from '@/lib/cure';
+import { RESIN_CHEMISTRIES, SENSITIVITY_KINDS } from '@/lib/domain';
+import { temperatureDifferenceFromSi, temperatureDifferenceToSi, temperatureFromSi, temperatureToSi, type UnitSystem } from '@/lib/units';
+import { listQuerySchema } from './list';
+import { addProblems, ifFinite, inCompanyUnits, quantity, roundTo, type Problems } from './rules';
+
+// Project limits. Temperatures: the range the cure clock models (lib/cure/limits.ts), −20…60 °C = −4…140 °F.
+// Times: a day of pot life, a week of hold, a month of full cure — past that it is a typo (minutes for hours).
+// Sensitivity: a doubling step of 1–50 °C, an activation energy of 1–300 kJ/mol (epoxies sit near 40–90, from memory).
+const TEMP_BOUNDS = `Between ${MIN_TEMP_C} and ${MAX_TEMP_C} °C (−4 and 140 °F)`;
+const temperature = () => quantity({ min: MIN_TEMP_C, max: MAX_TEMP_C, scale: 2, bounds: TEMP_BOUNDS });
+const minutes = (max: number) => quantity({ min: 0, max, scale: 2, above: true, bounds: `More than 0 and at most ${max} minutes` });
+
+// No defaults here: a PATCH must leave out what it does not change.
+const resinSystemFields = {
+  name: z.string().trim().min(1, 'Enter the resin system’s name').max(120, 'At most 120 characters'),
+  chemistry: z.enum(RESIN_CHEMISTRIES, { error: 'Pick a chemistry' }),
+  refTempC: temperature(),
+  potLifeMin: minutes(1440),
+  holdMin: minutes(10080),
+  fullCureMin: minutes(43200),
+  minTempC: temperature(),
+  maxTempC: temperature(),
+  sensitivityKind: z.enum(SENSITIVITY_KINDS, { error: 'Pick how the times change with temperature' }),
+  doublingC: quantity({ min: 1, max: 50, scale: 2, bounds: 'A step of 1 to 50 °C (1.8 to 90 °F)' }).nullish(),
+  activationEnergyKj: quantity({ min: 1, max: 300, scale: 2, bounds: 'Between 1 and 300 kJ/mol' }).nullish(),
+};
+
+export type ResinSystemValues = {
+  refTempC: number; potLifeMin: number; holdMin: number; fullCureMin: number; minTempC: number; maxTempC: number;
+  sensitivityKind: (typeof SENSITIVITY_KINDS)[number]; doublingC?: number | null; activationEnergyKj?: number | null;
+};
+
+/** What a careful hand checks on a data sheet before trusting the clock with it. */
+export function resinSystemProblems(v: ResinSystemValues): Problems {
+  const problems: Problems = {};
+  if (v.minTempC >= v.maxTempC) problems.maxTempC = 'The maximum temperature must be above the minimum';
+  else if (v.refTempC < v.minTempC || v.refTempC > v.maxTempC) problems.refTempC = 'The reference temperature must lie between the minimum and the maximum';
+  if (v.potLifeMin >= v.holdMin) problems.holdMin = 'The hold must be longer than the pot life';
+  if (v.holdMin > v.fullCureMin) problems.fullCureMin = 'Full cure cannot be shorter than the hold';
+  if (v.sensitivityKind === 'doubling' && !v.doublingC) problems.doublingC = 'Enter the step that halves the times';
+  if (v.sensitivityKind === 'arrhenius' && !v.activationEnergyKj) problems.activationEnergyKj = 'Enter the activation energy';
+  return problems;
+}
+
+/** A resin system as the admin enters it, in SI; POST /api/resin-systems and the form (after conversion) use it. */
+export const resinSystemInputSchema = z
+  .object({
+    ...resinSystemFields,
+    chemistry: resinSystemFields.chemistry.default('epoxy'),
+    sensitivityKind: resinSystemFields.sensitivityKind.default('doubling'),
+  })
+  .superRefine((values, ctx) => addProblems(ctx, resinSystemProblems(values)));
+export type ResinSystemInput = z.output<typeof resinSystemInputSchema>;
+
+/** Partial; the cross-field rules run in lib/data on the record as it will be after the change. */
+export const resinSystemPatchSchema = z.object(resinSystemFields).partial().strict();
+
+export const RESIN_SYSTEM_SORT_KEYS = ['name', 'chemistry', 'refTempC', 'potLifeMin', 'createdAt'] as const;
+export const resinSystemListQuerySchema = listQuerySchema(RESIN_SYSTEM_SORT_KEYS, { sort: 'name' }).and(
+  z.object({ chemistry: z.enum(RESIN_CHEMISTRIES, { error: 'Unknown chemistry' }).optional() }),
+);
+export type ResinSystemListQuery = z.infer<typeof resinSystemListQuerySchema>;
+
+// ——— The desk form: the same fields in the company's units (°F and °F steps for imperial) ———
+
+/** What the form holds: numbers in the company's units (NaN while a box is empty). */
+export type ResinSystemFormValues = {
+  name: string; chemistry: string; refTempC: number; potLifeMin: number; holdMin: number; fullCureMin: number;
+  minTempC: number; maxTempC: number; sensitivityKind: string; doublingC: number | null; activationEnergyKj: number | null;
+};
+
+export const resinSystemFormSchema = (system: UnitSystem) =>
+  inCompanyUnits<ResinSystemInput, ResinSystemFormValues>((v) => resinSystemToSi(v, system), resinSystemInputSchema);
+
+/** Entered values → SI body. Absolute temperatures take the 32 °F offset; the doubling step is a difference and does not. */
+export function resinSystemToSi(v: ResinSystemFormValues, system: UnitSystem) {
+  const abs = ifFinite((value) => roundTo(temperatureToSi(value, system), 2));
+  const step = ifFinite((value) => roundTo(temperatureDifferenceToSi(value, system), 2));
+  return {
+    ...v,
+    refTempC: abs(v.refTempC),
+    minTempC: abs(v.minTempC),
+    maxTempC: abs(v.maxTempC),
+    doublingC: noneIfEmpty(step(v.doublingC)),
+    activationEnergyKj: noneIfEmpty(v.activationEnergyKj),
+  };
+}
+
+/** A stored resin system → the form's values in the company's units (one decimal of a degree). */
+export function resinSystemToForm(row: ResinSystemValues & { name: string; chemistry: string }, system: UnitSystem): ResinSystemFormValues {
+  const abs = (celsius: number) => roundTo(temperatureFromSi(celsius, system), 1);
+  return {
+    name: row.name,
+    chemistry: row.chemistry,
+    refTempC: abs(row.refTempC),
+    potLifeMin: row.potLifeMin,
+    holdMin: row.holdMin,
+    fullCureMin: row.fullCureMin,
+    minTempC: abs(row.minTempC),
+    maxTempC: abs(row.maxTempC),
+    sensitivityKind: row.sensitivityKind,
+    doublingC: row.doublingC == null ? null : roundTo(temperatureDifferenceFromSi(row.doublingC, system), 1),
+    activationEnergyKj: row.activationEnergyKj ?? null,
+  };
+}
+
+// An optional box left empty is "none", not a wrong number.
+const noneIfEmpty = (value: unknown) => (typeof value === 'number' && Number.isNaN(value)) || value === undefined ? null : value;
