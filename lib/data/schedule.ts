@@ -9,7 +9,7 @@ import { label, type JobStatus } from '@/lib/domain';
 import { AppError, notFound } from '@/lib/errors';
 import { currentWeekStart, shiftWeek, weekDays, weekStartOf } from '@/lib/schedule/week';
 import type { SessionUser } from '@/lib/auth/session';
-import type { ScheduleInput } from '@/lib/validation/schedule';
+import { SCHEDULABLE_STATUSES, type ScheduleInput } from '@/lib/validation/schedule';
 import { getCompany } from './company';
 import { allOf } from './list';
 import { assertOfficeWriter } from './scope';
@@ -18,8 +18,6 @@ const ENTITY = 'job';
 
 /** Jobs in these states are done with (or never to be done): the schedule leaves them alone. */
 const SETTLED: readonly JobStatus[] = ['cancelled', 'closed', 'reported'];
-/** The office has the crew's work in hand: moving the job would rewrite what happened. */
-const WORKED: readonly JobStatus[] = ['awaiting_review', 'approved'];
 /** Installs past these states have started on site. */
 const NOT_STARTED = ['not_started', 'abandoned'];
 const UNSCHEDULED_LIMIT = 200;
@@ -147,7 +145,8 @@ async function lockMovableJob(user: SessionUser, jobId: string, verb: 'scheduled
   const job = await Job.findOne({ where: { id: jobId, companyId: user.companyId }, transaction, lock: transaction.LOCK.UPDATE });
   if (!job) throw notFound('Job');
   if (job.archivedAt) throw new AppError(409, `Job ${job.number} is archived: restore it before it is ${verb}.`);
-  if (SETTLED.includes(job.status) || WORKED.includes(job.status)) {
+  // Past these the office has the crew's work in hand (or the job is settled): moving it would rewrite what happened.
+  if (!SCHEDULABLE_STATUSES.includes(job.status)) {
     throw new AppError(409, `Job ${job.number} is ${label(job.status).toLowerCase()}: it can no longer be ${verb}.`);
   }
   const started = await Install.count({ where: { jobId: job.id, companyId: user.companyId, status: { [Op.notIn]: NOT_STARTED } }, transaction });

@@ -1,4 +1,8 @@
 import { z } from 'zod';
+import type { JobStatus } from '@/lib/domain';
+
+/** Statuses the schedule may still move (the server also refuses once an install has started on site). */
+export const SCHEDULABLE_STATUSES: readonly JobStatus[] = ['draft', 'scheduled', 'in_progress', 'sent_back'];
 
 /** `?week=YYYY-MM-DD`: any day of the week wanted (the board snaps it to its Monday); none means this week. */
 export const scheduleQuerySchema = z.object({

@@ -242,6 +242,7 @@ describe('crew schedule', () => {
         mkJob(a, { status: 'closed', crewId: a.crew.id, scheduledDate: '2026-11-20' }),
         mkJob(a, { status: 'reported', crewId: a.crew.id, scheduledDate: '2026-11-20' }),
         mkJob(a, { status: 'approved', crewId: a.crew.id, scheduledDate: '2026-11-20' }),
+        mkJob(a, { status: 'awaiting_review', crewId: a.crew.id, scheduledDate: '2026-11-20' }),
         mkJob(a, { archivedAt: new Date() }),
       ]);
       const underway = await mkJob(a, { status: 'in_progress', crewId: a.crew.id, scheduledDate: '2026-11-20' });
