@@ -53,9 +53,9 @@ export function ScheduleForm({ jobs, crews, defaultDay }: { jobs: JobOption[]; c
   return (
     <section aria-labelledby="schedule-form-heading" className="rounded-lg bg-white p-4 ring-1 ring-slate-200">
       <h2 id="schedule-form-heading" className="mb-3 font-semibold">Schedule a job</h2>
-      <form onSubmit={onSubmit} noValidate className="grid items-start gap-3 md:grid-cols-[2fr_1fr_1fr_auto]">
+      <form onSubmit={onSubmit} noValidate className="grid items-start gap-3 md:grid-cols-[minmax(0,2fr)_minmax(0,1fr)_minmax(0,1fr)_auto]">
         <FormField id="jobId" label="Job" error={errors.jobId?.message}>
-          <select {...jobField} {...errorProps('jobId', errors.jobId?.message)} className={inputClass}>
+          <select {...jobField} {...errorProps('jobId', errors.jobId?.message)} className={`${inputClass} w-full`}>
             <option value="">Pick a job…</option>
             {groups.map((group) => (
               <optgroup key={group} label={group}>
@@ -69,7 +69,7 @@ export function ScheduleForm({ jobs, crews, defaultDay }: { jobs: JobOption[]; c
           </select>
         </FormField>
         <FormField id="crewId" label="Crew" error={errors.crewId?.message}>
-          <select {...register('crewId')} {...errorProps('crewId', errors.crewId?.message)} className={inputClass}>
+          <select {...register('crewId')} {...errorProps('crewId', errors.crewId?.message)} className={`${inputClass} w-full`}>
             <option value="">Pick a crew…</option>
             {crews.map((crew) => <option key={crew.id} value={crew.id}>{crew.name} ({crew.dailyCapacity} jobs a day)</option>)}
           </select>
