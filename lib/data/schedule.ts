@@ -18,6 +18,8 @@ const ENTITY = 'job';
 
 /** Jobs in these states are done with (or never to be done): the schedule leaves them alone. */
 const SETTLED: readonly JobStatus[] = ['cancelled', 'closed', 'reported'];
+/** Not on a crew's day (and not counted against its capacity): drafts wait on the side list. */
+const OFF_BOARD: readonly JobStatus[] = ['cancelled', 'draft'];
 /** Installs past these states have started on site. */
 const NOT_STARTED = ['not_started', 'abandoned'];
 const UNSCHEDULED_LIMIT = 200;
@@ -40,7 +42,8 @@ export type ScheduleBoard = Awaited<ReturnType<typeof getScheduleBoard>>;
 /**
  * The crew schedule for the week holding `week` (default: this week in the company's zone): the company's
  * active crews (and any archived crew still holding a job that week) × the seven days, with each day's jobs
- * and whether they exceed the crew's daily capacity, and the jobs still waiting for a crew or a day.
+ * and whether they exceed the crew's daily capacity, and the jobs still waiting for a crew or a day (a draft
+ * is waiting even when a crew and day are pencilled in, so it shows once, on the side list).
  * Field users see only their own crews and no unscheduled list.
  */
 export async function getScheduleBoard(user: SessionUser, week?: string, now = new Date()) {
@@ -52,7 +55,7 @@ export async function getScheduleBoard(user: SessionUser, week?: string, now = n
   const crewScope: WhereOptions | undefined = isDeskRole(user.role) ? undefined : { crewId: { [Op.in]: user.crewIds } };
 
   const weekJobs = await findBoardJobs(allOf(
-    { companyId: user.companyId, archivedAt: null, crewId: { [Op.ne]: null }, scheduledDate: { [Op.between]: [start, end] }, status: { [Op.ne]: 'cancelled' } },
+    { companyId: user.companyId, archivedAt: null, crewId: { [Op.ne]: null }, scheduledDate: { [Op.between]: [start, end] }, status: { [Op.notIn]: OFF_BOARD } },
     crewScope,
   ));
   const bookedCrewIds = [...new Set(weekJobs.map((job) => job.crewId as string))];
@@ -107,7 +110,7 @@ export async function scheduleJob(user: SessionUser, jobId: string, input: Sched
     const changes = changedFields(job.get({ plain: true }), patch);
     if (Object.keys(changes).length) await job.update(patch, { transaction });
     const jobsThatDay = await Job.count({
-      where: { companyId: user.companyId, crewId: crew.id, scheduledDate: input.date, archivedAt: null, status: { [Op.ne]: 'cancelled' } },
+      where: { companyId: user.companyId, crewId: crew.id, scheduledDate: input.date, archivedAt: null, status: { [Op.notIn]: OFF_BOARD } },
       transaction,
     });
     const overCapacity = jobsThatDay > crew.dailyCapacity;

@@ -111,14 +111,18 @@ describe('crew schedule', () => {
     it('lists the jobs still waiting for a crew or a day, never settled or archived ones', async () => {
       const draft = await mkJob(a);
       const noDay = await mkJob(a, { crewId: a.crew.id, status: 'scheduled' });
+      const pencilled = await mkJob(a, { crewId: a.crew.id, scheduledDate: '2026-12-02' });
       const closed = await mkJob(a, { status: 'closed' });
       const cancelled = await mkJob(a, { status: 'cancelled' });
       const archived = await mkJob(a, { archivedAt: new Date() });
       await signInAs(a.office);
-      const ids = (await board()).body.unscheduled.map((j: { id: string }) => j.id);
-      expect(ids).toEqual(expect.arrayContaining([draft.job.id, noDay.job.id]));
+      const { body } = await board('?week=2026-11-30');
+      const ids = body.unscheduled.map((j: { id: string }) => j.id);
+      expect(ids).toEqual(expect.arrayContaining([draft.job.id, noDay.job.id, pencilled.job.id]));
+      // A draft with a crew and day pencilled in is still waiting: on the side list, not on the board.
+      expect(cell(body.crews, a.crew.id, '2026-12-02').jobs).toEqual([]);
       for (const gone of [closed, cancelled, archived, { job: a.job }]) expect(ids).not.toContain(gone.job.id);
-      await Job.destroy({ where: { id: [draft, noDay, closed, cancelled, archived].map((m) => m.job.id) } });
+      await Job.destroy({ where: { id: [draft, noDay, pencilled, closed, cancelled, archived].map((m) => m.job.id) } });
     });
 
     it('keeps an archived crew off the board unless it still holds a job that week', async () => {
