@@ -4,7 +4,7 @@ export class Crew extends Model<InferAttributes<Crew>, InferCreationAttributes<C
   declare id: CreationOptional<string>;
   declare companyId: string;
   declare name: string;
-  /** Repairs the crew can install in a day; the schedule marks days booked beyond it. */
+  /** Jobs the crew can take on in a day; the schedule marks days booked beyond it. */
   declare dailyCapacity: CreationOptional<number>;
   declare archivedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
