@@ -42,6 +42,9 @@ export type InstallEventType = (typeof INSTALL_EVENT_TYPES)[number];
 export const ATTACHMENT_KINDS = ['before', 'after', 'inspection', 'document', 'other'] as const;
 export const REVIEW_DECISIONS = ['approved', 'sent_back'] as const;
 
+export const REPORT_SEND_STATUSES = ['queued', 'sent', 'failed'] as const;
+export type ReportSendStatus = (typeof REPORT_SEND_STATUSES)[number];
+
 /** Words shown to people for the codes above. */
 export const LABELS: Record<string, string> = {
   admin: 'Admin', office: 'Office', foreman: 'Foreman', technician: 'Technician',

@@ -9,11 +9,12 @@ import { Job, Repair, initJob } from './job';
 import { ChecklistTemplate, Packer, ResinKit, ResinSystem, initMaterials } from './materials';
 import { Install, InstallEvent, initInstall } from './install';
 import { Attachment, AuditEntry, Review, initRecords } from './records';
+import { ReportSend, initReportSend } from './report-send';
 
 // Initialise once per process (the module may be evaluated again by dev hot reload).
 const initialised = globalThis as unknown as { setlineModelsReady?: boolean };
 if (!initialised.setlineModelsReady || !Company.sequelize) {
-  for (const init of [initCompany, initUser, initCrew, initCustomer, initSite, initJob, initMaterials, initInstall, initRecords]) {
+  for (const init of [initCompany, initUser, initCrew, initCustomer, initSite, initJob, initMaterials, initInstall, initRecords, initReportSend]) {
     init(sequelize);
   }
   associate();
@@ -66,9 +67,11 @@ function associate() {
   InstallEvent.belongsTo(InstallEvent, { foreignKey: 'correctsEventId', as: 'corrects' });
   Review.belongsTo(User, { foreignKey: 'reviewerId', as: 'reviewer' });
   AuditEntry.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+  ReportSend.belongsTo(Job, { foreignKey: 'jobId', as: 'job' });
+  ReportSend.belongsTo(User, { foreignKey: 'sentById', as: 'sentBy' });
 }
 
 export {
   sequelize, Company, User, Crew, CrewMember, Customer, Site, AccessPoint, Segment, Job, Repair,
-  ResinSystem, ResinKit, Packer, ChecklistTemplate, Install, InstallEvent, Attachment, Review, AuditEntry,
+  ResinSystem, ResinKit, Packer, ChecklistTemplate, Install, InstallEvent, Attachment, Review, AuditEntry, ReportSend,
 };
