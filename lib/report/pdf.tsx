@@ -142,6 +142,7 @@ function Images({ images }: { images: ReportImage[] }) {
     <View style={s.images}>
       {images.map((image) => (
         <View key={image.id} style={s.image}>
+          {/* eslint-disable-next-line jsx-a11y/alt-text -- a PDF image, not an HTML one: react-pdf has no alt */}
           <Image src={{ data: image.data, format: image.format }} style={{ width: 160, maxHeight: 120, objectFit: 'contain' }} />
           <Text style={[s.muted, { fontSize: 7.5 }]}>{pdfText(`${image.kind === 'before' ? 'Before' : image.kind === 'after' ? 'After' : 'Inspection'}${image.caption ? `: ${image.caption}` : ''}`)}</Text>
         </View>
