@@ -23,7 +23,7 @@ const s = StyleSheet.create({
   page: { padding: 36, fontSize: 9.5, fontFamily: 'Helvetica', color: '#0f172a', lineHeight: 1.35 },
   header: { borderBottomWidth: 2, borderBottomColor: BRAND, paddingBottom: 8, marginBottom: 12 },
   company: { fontSize: 10, color: BRAND, fontFamily: 'Helvetica-Bold' },
-  title: { fontSize: 18, fontFamily: 'Helvetica-Bold', marginTop: 2 },
+  title: { fontSize: 18, fontFamily: 'Helvetica-Bold', marginTop: 2, marginBottom: 4, lineHeight: 1.2 },
   muted: { color: MUTED },
   h2: { fontSize: 12, fontFamily: 'Helvetica-Bold', color: BRAND, marginTop: 12, marginBottom: 4 },
   h3: { fontSize: 10.5, fontFamily: 'Helvetica-Bold', marginBottom: 3 },
