@@ -44,6 +44,9 @@ export const ATTACHMENT_STATUSES = ['pending', 'ready'] as const;
 export const REVIEW_DECISIONS = ['approved', 'sent_back'] as const;
 export const INVOICE_STATUSES = ['draft', 'issued', 'paid', 'void'] as const;
 
+export const REPORT_SEND_STATUSES = ['queued', 'sent', 'failed'] as const;
+export type ReportSendStatus = (typeof REPORT_SEND_STATUSES)[number];
+
 /** Words shown to people for the codes above. */
 export const LABELS: Record<string, string> = {
   admin: 'Admin', office: 'Office', foreman: 'Foreman', technician: 'Technician',

@@ -10,11 +10,12 @@ import { ChecklistTemplate, Packer, ResinKit, ResinSystem, initMaterials } from 
 import { Install, InstallEvent, initInstall } from './install';
 import { Attachment, AuditEntry, Review, initRecords } from './records';
 import { Invoice, InvoiceLine, PaymentEvent, initInvoice } from './invoice';
+import { ReportSend, initReportSend } from './report-send';
 
 // Initialise once per process (the module may be evaluated again by dev hot reload).
 const initialised = globalThis as unknown as { setlineModelsReady?: boolean };
 if (!initialised.setlineModelsReady || !Company.sequelize) {
-  for (const init of [initCompany, initUser, initCrew, initCustomer, initSite, initJob, initMaterials, initInstall, initRecords, initInvoice]) {
+  for (const init of [initCompany, initUser, initCrew, initCustomer, initSite, initJob, initMaterials, initInstall, initRecords, initInvoice, initReportSend]) {
     init(sequelize);
   }
   associate();
@@ -77,9 +78,11 @@ function associate() {
   Attachment.belongsTo(User, { foreignKey: 'uploadedById', as: 'uploadedBy' });
   Attachment.belongsTo(Install, { foreignKey: 'installId', as: 'install' });
   Attachment.belongsTo(Job, { foreignKey: 'jobId', as: 'job' });
+  ReportSend.belongsTo(Job, { foreignKey: 'jobId', as: 'job' });
+  ReportSend.belongsTo(User, { foreignKey: 'sentById', as: 'sentBy' });
 }
 
 export {
   sequelize, Company, User, Crew, CrewMember, Customer, Site, AccessPoint, Segment, Job, Repair,
-  ResinSystem, ResinKit, Packer, ChecklistTemplate, Install, InstallEvent, Attachment, Review, AuditEntry, Invoice, InvoiceLine, PaymentEvent,
+  ResinSystem, ResinKit, Packer, ChecklistTemplate, Install, InstallEvent, Attachment, Review, AuditEntry, Invoice, InvoiceLine, PaymentEvent, ReportSend,
 };

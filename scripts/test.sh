@@ -31,6 +31,19 @@ ensure_chromium() {
   fi
 }
 
+# pdftotext (poppler-utils) reads the text of the repair report PDFs in the integration tests.
+ensure_pdftotext() {
+  command -v pdftotext >/dev/null && return 0
+  if [ "$(id -u)" = 0 ]; then
+    say "installing poppler-utils for the PDF checks (apt-get)"
+    DEBIAN_FRONTEND=noninteractive apt-get update -qq
+    DEBIAN_FRONTEND=noninteractive apt-get install -y -qq poppler-utils >/dev/null
+  else
+    say "pdftotext is missing: run  sudo apt-get install -y poppler-utils"
+    return 1
+  fi
+}
+
 failed=0
 run_suite() {
   local suite="$1"
@@ -40,7 +53,8 @@ run_suite() {
       vitest run --project unit --reporter=default --reporter=json --outputFile.json="$REPORTS/unit.json"
       ;;
     integration)
-      fresh_database "${TEST_DB_NAME:-setline_test}" &&
+      ensure_pdftotext &&
+        fresh_database "${TEST_DB_NAME:-setline_test}" &&
         vitest run --project integration --reporter=default --reporter=json --outputFile.json="$REPORTS/integration.json"
       ;;
     e2e)

@@ -2,6 +2,7 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { StatusBadge } from '@/components/ui/badge';
+import { ReportPanel } from '@/components/report/report-panel';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { getJob } from '@/lib/data/jobs';
@@ -70,6 +71,8 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
           ))}
         </ul>
       </section>
+      {/* Repair report (send + send log) */}
+      <ReportPanel job={job} />
     </div>
   );
 }

@@ -1,0 +1,205 @@
+import 'server-only';
+import { Op } from 'sequelize';
+import {
+  AccessPoint, Attachment, Company, Customer, Install, InstallEvent, Job, Packer, Repair, ResinKit, ResinSystem, Segment, Site,
+} from '@/models';
+import type { SessionUser } from '@/lib/auth/session';
+import { resinClockSpec } from '@/lib/cure';
+import { formatInZone } from '@/lib/dates';
+import { label } from '@/lib/domain';
+import { installClock } from '@/lib/install/clock';
+import { deriveInstallState, type InstallState } from '@/lib/install/state';
+import { SAFETY_DEFERRAL, SAFETY_REMINDERS } from '@/lib/safety';
+import { formatLength, formatPressure, formatTemperature, type UnitSystem } from '@/lib/units';
+import { loadReportImages, type ReportImage } from './images';
+import type { TimelineBand, TimelineMark } from './timeline';
+
+// Everything the customer's repair report shows, built once for the PDF, the e-mail and the /r page.
+// What it leaves out on purpose: job and repair notes (gate codes, office remarks), crew and user
+// names, review comments, internal flags. Quantities are formatted in the company's units.
+
+/** Jobs whose report may be shown: every install approved (and the states after it). */
+export const REPORTABLE_JOB_STATUSES = ['approved', 'reported', 'closed'] as const;
+
+/** Cautions of the report: the install screen's reminders that concern the work the customer had done. */
+const REPORT_CAUTION_IDS = ['atmosphere', 'pressure', 'resin', 'exotherm'] as const;
+export const REPORT_DEFERRAL =
+  'This report describes the work done; it does not replace your local codes and permits, the resin maker\u2019s instructions, or an assessment by a licensed professional.';
+
+/** The report of a job of the caller's company; null when there is no such job. */
+export async function getReportData(user: SessionUser, jobId: string, options: { images?: boolean } = {}) {
+  return buildReportData(user.companyId, jobId, options);
+}
+
+/** The report behind a verified customer link: only that job, only once every install is approved. */
+export async function getReportDataForLink(claims: { jobId: string; companyId: string }, options: { images?: boolean } = {}) {
+  const data = await buildReportData(claims.companyId, claims.jobId, options);
+  if (!data || !(REPORTABLE_JOB_STATUSES as readonly string[]).includes(data.job.status)) return null;
+  return data;
+}
+
+/** The company's name, for the page that turns away an expired (but genuine) link. */
+export async function companyNameOf(companyId: string): Promise<string | null> {
+  return (await Company.findByPk(companyId, { attributes: ['name'] }))?.name ?? null;
+}
+
+export type ReportData = NonNullable<Awaited<ReturnType<typeof buildReportData>>>;
+export type ReportRepair = ReportData['repairs'][number];
+
+export async function buildReportData(companyId: string, jobId: string, { images = true }: { images?: boolean } = {}) {
+  const job = await Job.findOne({
+    where: { id: jobId, companyId },
+    include: [
+      { model: Customer, as: 'customer', attributes: ['name', 'contactName', 'email'] },
+      { model: Site, as: 'site', attributes: ['name', 'addressLine', 'city', 'region', 'postalCode'] },
+      {
+        model: Repair,
+        as: 'repairs',
+        where: { status: { [Op.ne]: 'cancelled' } },
+        required: false,
+        include: [
+          { model: Segment, as: 'segment', include: [{ model: AccessPoint, as: 'fromAccessPoint', attributes: ['label', 'kind'] }] },
+          { model: AccessPoint, as: 'fromAccessPoint', attributes: ['label', 'kind'] },
+        ],
+      },
+    ],
+    order: [[{ model: Repair, as: 'repairs' }, 'position', 'ASC']],
+  });
+  if (!job) return null;
+  const company = await Company.findByPk(companyId);
+  if (!company) return null;
+  const plain = job.get({ plain: true }) as unknown as JobRow;
+  const system = company.unitSystem;
+  const zone = company.timeZone;
+  const when = (at: Date | null | undefined) => (at ? formatInZone(at, zone) : null);
+
+  const installs = await Install.findAll({
+    where: { companyId, jobId, status: 'approved' },
+    include: [
+      { model: ResinSystem, as: 'resinSystem' },
+      { model: ResinKit, as: 'resinKit', attributes: ['lot', 'expiresOn'] },
+      { model: Packer, as: 'packer', attributes: ['minPressureKpa', 'maxPressureKpa'] },
+      { model: InstallEvent, as: 'events' },
+    ],
+    order: [['finishedAt', 'DESC']],
+  });
+  const attachments = await Attachment.findAll({
+    where: { companyId, jobId, kind: { [Op.in]: ['before', 'after', 'inspection'] } },
+    order: [['createdAt', 'ASC']],
+  });
+  const loaded = images ? await loadReportImages(attachments.map((a) => a.get({ plain: true }))) : [];
+
+  const repairs = plain.repairs.map((repair) => {
+    // The newest approved install of the repair is the one that stands.
+    const install = installs.find((i) => i.repairId === repair.id) ?? null;
+    const accessPoint = repair.fromAccessPoint ?? repair.segment.fromAccessPoint;
+    const patchLengthMm = install?.patchLengthMm ?? repair.plannedPatchLengthMm ?? null;
+    const repairImages = loaded.filter((image) => image.repairId === repair.id || (image.installId && image.installId === install?.id));
+    return {
+      id: repair.id,
+      position: repair.position,
+      segment: {
+        label: repair.segment.label,
+        material: label(repair.segment.material),
+        insideDiameter: formatLength(repair.segment.insideDiameterMm, system),
+      },
+      accessPoint: accessPoint ? `${accessPoint.label} (${label(accessPoint.kind).toLowerCase()})` : 'the upstream access point',
+      distance: formatLength(repair.distanceMm, system, 'long'),
+      clockPosition: repair.clockPosition ? `${repair.clockPosition} o\u2019clock` : null,
+      defect: label(repair.defectType),
+      defectLength: formatLength(repair.defectLengthMm, system),
+      conditionGrade: repair.conditionGrade,
+      patchLengthMm,
+      patchLength: patchLengthMm === null ? null : formatLength(patchLengthMm, system),
+      install: install ? installSummary(install, system, when) : null,
+      images: repairImages,
+    };
+  });
+  const placed = new Set(repairs.flatMap((r) => r.images));
+  const site = plain.site;
+
+  return {
+    company: { name: company.name, unitSystem: system, timeZone: zone },
+    job: { id: plain.id, number: plain.number, title: plain.title, status: plain.status, scheduledDate: plain.scheduledDate },
+    customer: { name: plain.customer.name, contactName: plain.customer.contactName, email: plain.customer.email },
+    site: {
+      name: site.name,
+      address: [site.addressLine, site.city, [site.region, site.postalCode].filter(Boolean).join(' ')].filter(Boolean).join(', '),
+    },
+    repairs,
+    /** Images of the job not tied to one repair. */
+    jobImages: loaded.filter((image) => !placed.has(image)),
+    allApproved: repairs.length > 0 && repairs.every((r) => r.install !== null),
+    cautions: SAFETY_REMINDERS.filter((r) => (REPORT_CAUTION_IDS as readonly string[]).includes(r.id)).map(({ title, text }) => ({ title, text })),
+    deferral: `${REPORT_DEFERRAL} ${SAFETY_DEFERRAL}`,
+    preparedAt: formatInZone(new Date(), zone),
+  };
+}
+
+/** What was installed and when, from the install row and its evidence log. */
+function installSummary(install: Install, system: UnitSystem, when: (at: Date | null) => string | null) {
+  const row = install as Install & { resinSystem: ResinSystem | null; resinKit: ResinKit | null; packer: Packer | null; events: InstallEvent[] };
+  const state = deriveInstallState(row.events.map((e) => e.get({ plain: true })));
+  const { plan } = installClock({
+    state,
+    resin: row.resinSystem ? resinClockSpec(row.resinSystem) : null,
+    packer: row.packer ? { minPressureKpa: row.packer.minPressureKpa, maxPressureKpa: row.packer.maxPressureKpa } : null,
+    resinKitExpiresOn: row.resinKit?.expiresOn ?? null,
+    safetyMargin: 0,
+    unitSystem: system,
+    now: row.finishedAt ?? new Date(),
+  });
+  const mixTempC = state.conditions?.mixTempC ?? row.mixTempC;
+  const pipeTempC = state.conditions?.pipeTempC ?? row.pipeTempC;
+  const timeline = timelineOf(state, plan && !plan.preview ? plan : null);
+  return {
+    resinSystem: row.resinSystem?.name ?? null,
+    kitLot: row.resinKit?.lot ?? null,
+    mixTemperature: mixTempC == null ? null : formatTemperature(mixTempC, system),
+    pipeTemperature: pipeTempC == null ? null : formatTemperature(pipeTempC, system),
+    inflatePressure: state.inflatePressureKpa == null ? null : formatPressure(state.inflatePressureKpa, system),
+    inspection: state.inspection ?? (row.inspectionResult ? { result: row.inspectionResult, notes: row.inspectionNotes, at: null } : null),
+    steps: timeline.marks.map((mark) => ({ label: mark.label, at: when(mark.at) })),
+    returnToService: when(plan?.returnToService ?? null),
+    signedOffAt: when(state.signedOffAt ?? row.signedOffAt),
+    timeline,
+  };
+}
+
+const STEP_LABELS: [keyof InstallState, string][] = [
+  ['mixedAt', 'Resin mixed'],
+  ['patchLoadedAt', 'Patch loaded'],
+  ['inPositionAt', 'Packer in position'],
+  ['inflatedAt', 'Bladder inflated'],
+  ['deflatedAt', 'Bladder deflated'],
+];
+
+function timelineOf(state: InstallState, plan: { inflateBy: Date; deflateAfter?: Date; returnToService?: Date } | null) {
+  const marks: TimelineMark[] = [];
+  for (const [key, text] of STEP_LABELS) {
+    const at = state[key];
+    if (at instanceof Date) marks.push({ id: String(key), label: text, at });
+  }
+  if (state.inspection) marks.push({ id: 'inspection', label: 'Inspected', at: state.inspection.at });
+  const bands: TimelineBand[] = [];
+  if (state.mixedAt && plan) bands.push({ id: 'window', label: 'Working window', from: state.mixedAt, to: plan.inflateBy });
+  if (state.inflatedAt) {
+    bands.push({ id: 'held', label: 'Bladder held', from: state.inflatedAt, to: state.deflatedAt ?? state.inflatedAt });
+    if (plan?.returnToService) bands.push({ id: 'cure', label: 'Full cure', from: state.inflatedAt, to: plan.returnToService });
+  }
+  return { marks, bands };
+}
+
+type JobRow = {
+  id: string; number: string; title: string | null; status: string; scheduledDate: string | null;
+  customer: { name: string; contactName: string | null; email: string | null };
+  site: { name: string; addressLine: string; city: string; region: string | null; postalCode: string | null };
+  repairs: {
+    id: string; position: number; distanceMm: number; defectType: string; conditionGrade: number; defectLengthMm: number;
+    clockPosition: string | null; plannedPatchLengthMm: number | null;
+    fromAccessPoint: { label: string; kind: string } | null;
+    segment: { label: string; material: string; insideDiameterMm: number; fromAccessPoint: { label: string; kind: string } | null };
+  }[];
+};
+
+export type { ReportImage };

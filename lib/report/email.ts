@@ -1,0 +1,40 @@
+import type { ReportData } from './data';
+
+// The e-mail that carries the report: plain, inline-styled HTML (mail clients drop <style>) and a
+// text part saying the same. The PDF is attached by the sender; the link opens the web copy.
+
+export type ReportEmail = { subject: string; html: string; text: string };
+
+export function reportEmail(data: ReportData, options: { link: string; expiresOn: string; message?: string | null }): ReportEmail {
+  const { company, job, site } = data;
+  const subject = `Repair report for ${site.address} (job ${job.number})`;
+  const count = data.repairs.length === 1 ? 'one repair' : `${data.repairs.length} repairs`;
+  const lines = data.repairs.map(
+    (r) => `Repair ${r.position}: ${r.defect.toLowerCase()} ${r.distance} from ${r.accessPoint}${r.patchLength ? `, ${r.patchLength} patch` : ''}${r.install?.inspection ? ` (inspection: ${r.install.inspection.result === 'pass' ? 'passed' : 'did not pass'})` : ''}`,
+  );
+  const greeting = `Hello ${data.customer.contactName ?? data.customer.name},`;
+  const intro = `${company.name} has finished the work at ${site.address}: ${count}. The full report is attached as a PDF.`;
+  const linkLine = `You can also read it online until ${options.expiresOn}:`;
+  const closing = `If you have questions about the work, reply to this e-mail or contact ${company.name}.`;
+
+  const text = [
+    greeting, '', intro, '', ...(options.message ? [options.message, ''] : []), ...lines, '', linkLine, options.link, '', data.deferral, '', closing,
+  ].join('\n');
+
+  const p = (content: string, style = '') => `<p style="margin:0 0 12px;${style}">${content}</p>`;
+  const html = `<!doctype html><html><body style="margin:0;padding:24px;background:#f8fafc;font-family:Arial,Helvetica,sans-serif;font-size:15px;line-height:1.5;color:#0f172a">
+<div style="max-width:560px;margin:0 auto;background:#ffffff;border:1px solid #e2e8f0;border-radius:6px;padding:24px">
+${p(escapeHtml(company.name), 'font-weight:bold;color:#115e59')}
+${p(escapeHtml(greeting))}
+${p(escapeHtml(intro))}
+${options.message ? p(escapeHtml(options.message).replace(/\n/g, '<br>'), 'padding:8px 12px;border-left:3px solid #115e59;background:#f1f5f9') : ''}
+<ul style="margin:0 0 12px;padding-left:20px">${lines.map((line) => `<li>${escapeHtml(line)}</li>`).join('')}</ul>
+${p(escapeHtml(linkLine))}
+${p(`<a href="${escapeHtml(options.link)}" style="display:inline-block;background:#115e59;color:#ffffff;text-decoration:none;padding:10px 16px;border-radius:4px">Open the repair report</a>`)}
+${p(escapeHtml(data.deferral), 'font-size:13px;color:#475569')}
+${p(escapeHtml(closing), 'font-size:13px;color:#475569')}
+</div></body></html>`;
+  return { subject, html, text };
+}
+
+export const escapeHtml = (value: string) => value.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);

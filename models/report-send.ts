@@ -1,0 +1,43 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { REPORT_SEND_STATUSES, type ReportSendStatus } from '@/lib/domain';
+
+/** One request to e-mail a job's repair report; the worker updates it on every try. */
+export class ReportSend extends Model<InferAttributes<ReportSend>, InferCreationAttributes<ReportSend>> {
+  declare id: CreationOptional<string>;
+  declare companyId: string;
+  declare jobId: string;
+  declare toAddress: string;
+  declare message: CreationOptional<string | null>;
+  declare status: CreationOptional<ReportSendStatus>;
+  declare attempts: CreationOptional<number>;
+  declare lastError: CreationOptional<string | null>;
+  declare messageId: CreationOptional<string | null>;
+  /** When the customer link in this e-mail stops working. */
+  declare linkExpiresAt: Date;
+  declare sentById: CreationOptional<string | null>;
+  declare sentAt: CreationOptional<Date | null>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+export function initReportSend(sequelize: Sequelize) {
+  ReportSend.init(
+    {
+      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+      companyId: { type: DataTypes.UUID, allowNull: false },
+      jobId: { type: DataTypes.UUID, allowNull: false },
+      toAddress: { type: DataTypes.STRING(254), allowNull: false },
+      message: DataTypes.TEXT,
+      status: { type: DataTypes.STRING(12), allowNull: false, defaultValue: 'queued', validate: { isIn: [REPORT_SEND_STATUSES] } },
+      attempts: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+      lastError: DataTypes.TEXT,
+      messageId: DataTypes.STRING(300),
+      linkExpiresAt: { type: DataTypes.DATE, allowNull: false },
+      sentById: DataTypes.UUID,
+      sentAt: DataTypes.DATE,
+      createdAt: DataTypes.DATE,
+      updatedAt: DataTypes.DATE,
+    },
+    { sequelize, modelName: 'ReportSend', tableName: 'report_sends', underscored: true },
+  );
+}

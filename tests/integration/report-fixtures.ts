@@ -1,0 +1,49 @@
+import { execFile } from 'node:child_process';
+import { mkdtemp, rm, writeFile } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { promisify } from 'node:util';
+import { Install, Job } from '@/models';
+import { cleanInstall, postAll, startInstall } from './helpers/installs';
+import { signInAs } from './helpers/session';
+import { makeInstallWorld } from './helpers/world';
+
+/**
+ * A company whose job has one finished install, approved by the office (set on the rows: the review
+ * screen is not part of this branch), and whose customer has the given e-mail.
+ */
+export async function makeApprovedJob(customerEmail: string | null) {
+  const w = await makeInstallWorld('Report');
+  await w.customer.update({ email: customerEmail });
+  await signInAs(w.foreman);
+  const installId = await startInstall(w);
+  await postAll(installId, cleanInstall(w));
+  await Install.update({ status: 'approved' }, { where: { id: installId } });
+  await Job.update({ status: 'approved' }, { where: { id: w.job.id } });
+  await w.job.reload();
+  return { ...w, installId };
+}
+
+/** The text of a PDF, as poppler's pdftotext reads it (whitespace folded to single spaces). */
+export async function pdfText(pdf: Buffer): Promise<string> {
+  const dir = await mkdtemp(path.join(tmpdir(), 'setline-pdf-'));
+  try {
+    const file = path.join(dir, 'report.pdf');
+    await writeFile(file, pdf);
+    const { stdout } = await promisify(execFile)('pdftotext', ['-enc', 'UTF-8', file, '-']);
+    return stdout.replace(/\s+/g, ' ');
+  } finally {
+    await rm(dir, { recursive: true, force: true });
+  }
+}
+
+/** Waits until `probe` returns a value that is not undefined, or fails after `ms`. */
+export async function eventually<T>(probe: () => Promise<T | undefined>, ms = 20_000, what = 'the condition'): Promise<T> {
+  const until = Date.now() + ms;
+  for (;;) {
+    const value = await probe();
+    if (value !== undefined) return value;
+    if (Date.now() > until) throw new Error(`Timed out waiting for ${what}`);
+    await new Promise((resolve) => setTimeout(resolve, 250));
+  }
+}

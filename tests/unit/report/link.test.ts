@@ -1,0 +1,45 @@
+import { describe, expect, it } from 'vitest';
+import { DEFAULT_LINK_DAYS, linkExpiry, signReportLink, verifyReportLink } from '@/lib/report/link';
+
+const SECRET = 'unit-test-secret-0123456789';
+const JOB = '3f2b8c1e-9a4d-4e6f-8b1a-2c3d4e5f6a7b';
+const COMPANY = '7a6b5c4d-3e2f-4a1b-9c8d-7e6f5a4b3c2d';
+const NOW = new Date('2026-12-01T12:00:00Z');
+const claims = { jobId: JOB, companyId: COMPANY, expiresAt: linkExpiry(NOW) };
+
+describe('report links', () => {
+  it('verifies what it signed, until the expiry (30 days by default)', () => {
+    const token = signReportLink(claims, SECRET);
+    expect(verifyReportLink(token, NOW, SECRET)).toEqual({ ok: true, ...claims });
+    expect(claims.expiresAt.getTime() - NOW.getTime()).toBe(DEFAULT_LINK_DAYS * 86_400_000);
+    const justBefore = new Date(claims.expiresAt.getTime() - 1000);
+    expect(verifyReportLink(token, justBefore, SECRET).ok).toBe(true);
+    expect(verifyReportLink(token, claims.expiresAt, SECRET)).toEqual({ ok: false, reason: 'expired', ...claims });
+  });
+
+  it('refuses another secret, a changed signature, a changed payload and junk', () => {
+    const token = signReportLink(claims, SECRET);
+    const [payload, signature] = token.split('.');
+    expect(verifyReportLink(token, NOW, 'another-secret-0123456789')).toEqual({ ok: false, reason: 'signature' });
+    const flipped = signature[0] === 'A' ? `B${signature.slice(1)}` : `A${signature.slice(1)}`;
+    expect(verifyReportLink(`${payload}.${flipped}`, NOW, SECRET)).toEqual({ ok: false, reason: 'signature' });
+    const later = Buffer.from(Buffer.from(payload, 'base64url').toString().replace(/\d+$/, '9999999999')).toString('base64url');
+    expect(verifyReportLink(`${later}.${signature}`, NOW, SECRET)).toEqual({ ok: false, reason: 'signature' });
+    expect(verifyReportLink(`${payload}.${signature.slice(0, -4)}`, NOW, SECRET)).toEqual({ ok: false, reason: 'signature' });
+    for (const junk of ['', '.', 'abc', `${payload}.${signature}.x`, `${payload}.sig+/=`, 'a'.repeat(400)]) {
+      expect(verifyReportLink(junk, NOW, SECRET)).toEqual({ ok: false, reason: 'malformed' });
+    }
+  });
+
+  it('refuses a well-signed payload that is not a report claim', async () => {
+    const { createHmac } = await import('node:crypto');
+    const payload = Buffer.from(`r1:not-a-uuid:${COMPANY}:9999999999`).toString('base64url');
+    const signature = createHmac('sha256', SECRET).update(payload).digest('base64url');
+    expect(verifyReportLink(`${payload}.${signature}`, NOW, SECRET)).toEqual({ ok: false, reason: 'malformed' });
+  });
+
+  it('only signs ids and real dates', () => {
+    expect(() => signReportLink({ ...claims, jobId: 'x' }, SECRET)).toThrow();
+    expect(() => signReportLink({ ...claims, expiresAt: new Date(Number.NaN) }, SECRET)).toThrow();
+  });
+});
