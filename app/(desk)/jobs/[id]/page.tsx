@@ -3,6 +3,7 @@ import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { StatusBadge } from '@/components/ui/badge';
 import { ReportPanel } from '@/components/report/report-panel';
+import { InvoicePanel } from '@/components/invoice/invoice-panel';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { getJob } from '@/lib/data/jobs';
@@ -73,6 +74,7 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
       </section>
       {/* Repair report (send + send log) */}
       <ReportPanel job={job} />
+      <InvoicePanel user={user} job={job} unitSystem={unitSystem} />
     </div>
   );
 }
