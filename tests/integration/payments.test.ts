@@ -94,3 +94,27 @@ describe('online payment of an invoice (payment fake over sockets)', () => {
     expect((await other.reload()).status).toBe('issued');
   });
 });
+
+describe('"Pay now" behind the customer link', () => {
+  it('sends a valid link to the hosted checkout, refuses a tampered one, and returns a paid one to the report', async () => {
+    const { POST: payRoute } = await import('@/app/r/[token]/pay/route');
+    const { signReportLink, linkExpiry } = await import('@/lib/report/link');
+    const world = await makeWorld('Link');
+    const invoice = await Invoice.create({ companyId: world.company.id, jobId: world.job.id, number: 'INV-LINK', status: 'issued', dueOn: '2026-12-31', subtotalCents: 5000, totalCents: 5000 });
+    const token = signReportLink({ jobId: world.job.id, companyId: world.company.id, expiresAt: linkExpiry() });
+    const pay = (t: string) => payRoute(new Request(`http://localhost/r/${t}/pay`, { method: 'POST' }), { params: Promise.resolve({ token: t }) });
+
+    const ok = await pay(token);
+    expect(ok.status).toBe(303);
+    expect(ok.headers.get('location')).toMatch(/\/pay\/cs_test_/);
+    expect((await invoice.reload()).paymentSessionId).toMatch(/^cs_test_/);
+
+    const tampered = `${token.slice(0, -2)}${token.endsWith('A') ? 'B' : 'A'}A`;
+    expect((await pay(tampered)).status).toBe(404);
+
+    await invoice.update({ status: 'paid' });
+    const back = await pay(token);
+    expect(back.status).toBe(303);
+    expect(back.headers.get('location')).toContain(`/r/${token}`);
+  });
+});
