@@ -22,3 +22,15 @@ const ISO_INSTANT = /\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(?::\d{2}(?:\.\d+)?)?Z/g;
 export function localiseSentence(sentence: string, format: (at: Date) => string): string {
   return sentence.replace(ISO_INSTANT, (iso) => format(new Date(iso)));
 }
+
+/** Short names of the flags for badges; the full sentence goes beside them. */
+export const FLAG_LABELS: Record<QualityFlag['kind'], string> = {
+  'late-inflate': 'Late inflate',
+  'early-deflate': 'Early deflate',
+  'cold-cure': 'Cold cure',
+  'hot-cure': 'Hot cure',
+  'no-dry-run': 'No dry run',
+  'slow-dry-run': 'Slow dry run',
+  'pressure-out-of-range': 'Pressure outside rating',
+  'expired-resin': 'Expired resin',
+};

@@ -2,8 +2,9 @@ import { randomUUID } from 'node:crypto';
 import { beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { GET as listRoute } from '@/app/api/installs/route';
 import { POST as reviewRoute } from '@/app/api/installs/[id]/review/route';
+import { listTodayJobs } from '@/lib/data/today';
 import type { InstallEventType } from '@/lib/domain';
-import { AuditEntry, Customer, Install, InstallEvent, Job, Repair, Review } from '@/models';
+import { AuditEntry, Customer, Install, InstallEvent, Job, Repair, Review, type User } from '@/models';
 import { call, jsonBody } from './helpers/call';
 import { body, cleanInstall, postAll, postEvent, startInstall } from './helpers/installs';
 import { signInAs, signOut } from './helpers/session';
@@ -11,6 +12,8 @@ import { makeInstallWorld, type InstallWorld } from './helpers/world';
 
 const list = (query = '') => call(listRoute, `/api/installs${query}`);
 const review = (id: string, payload: unknown) => call(reviewRoute, `/api/installs/${id}/review`, { id }, jsonBody('POST', payload));
+
+const asSessionUser = (u: User, crewIds: string[]) => ({ id: u.id, companyId: u.companyId, role: u.role, name: u.name, email: u.email, crewIds });
 
 type Bend = Partial<Record<InstallEventType, number>>;
 
@@ -156,6 +159,10 @@ describe('POST /api/installs/:id/review', () => {
     const { job, repairs } = await newJob(a);
     const id = await finishedInstall(a, repairs[0], { bend: LATE_INFLATE });
     expect((await Job.findByPk(job.id))!.status).toBe('awaiting_review');
+    // Done weeks ago: off the crew's Today list until the office sends it back.
+    await job.update({ scheduledDate: '2020-01-06' });
+    const crewToday = async () => (await listTodayJobs(asSessionUser(a.foreman, [a.crew.id]))).jobs.find((j) => j.id === job.id);
+    expect(await crewToday()).toBeUndefined();
     await signInAs(a.office);
     const comment = 'Inflated late: add the gauge photo and call the office before the next mix.';
     const { status, body: answer } = await review(id, { decision: 'sent_back', comment: `  ${comment} ` });
@@ -164,6 +171,7 @@ describe('POST /api/installs/:id/review', () => {
     expect(await Review.findAll({ where: { installId: id }, raw: true })).toEqual([expect.objectContaining({ decision: 'sent_back', comment, companyId: a.company.id })]);
     expect((await Install.findByPk(id))!.status).toBe('sent_back');
     expect(await Job.findByPk(job.id)).toMatchObject({ status: 'sent_back', reviewComment: comment });
+    expect(await crewToday()).toMatchObject({ status: 'sent_back', reviewComment: comment });
     const audit = await AuditEntry.findOne({ where: { entityId: id, action: 'install.sent_back' } });
     expect(audit).toMatchObject({ entityType: 'install', userId: a.office.id, reason: comment });
     expect(audit!.changes).toMatchObject({ status: { from: 'awaiting_review', to: 'sent_back' } });
