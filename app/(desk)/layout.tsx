@@ -3,6 +3,7 @@ import { DeskNav, type NavItem } from '@/components/shell/desk-nav';
 import { SignOutButton } from '@/components/shell/sign-out-button';
 import { requirePageUser } from '@/lib/auth/session';
 import { DESK_ROLES, label } from '@/lib/domain';
+import { REVIEW_COUNT_URL } from '@/lib/review/queue';
 
 export const dynamic = 'force-dynamic';
 
@@ -11,7 +12,7 @@ const OFFICE_ITEMS: NavItem[] = [
   { href: '/customers', label: 'Customers' },
   { href: '/sites', label: 'Sites' },
   { href: '/schedule', label: 'Schedule' },
-  { href: '/reviews', label: 'Review' },
+  { href: '/reviews', label: 'Review', countUrl: REVIEW_COUNT_URL },
   { href: '/invoices', label: 'Invoices' },
 ];
 const ADMIN_ITEMS: NavItem[] = [{ href: '/admin', label: 'Company' }];

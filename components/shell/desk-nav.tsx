@@ -2,8 +2,11 @@
 
 import Link from 'next/link';
 import { usePathname } from 'next/navigation';
+import useSWR from 'swr';
+import { fetchJson } from '@/lib/client/fetch-json';
 
-export type NavItem = { href: string; label: string };
+/** `countUrl`: a list API whose `total` is shown beside the label (kept fresh on focus and every minute). */
+export type NavItem = { href: string; label: string; countUrl?: string };
 
 export function DeskNav({ items }: { items: NavItem[] }) {
   const pathname = usePathname();
@@ -16,12 +19,24 @@ export function DeskNav({ items }: { items: NavItem[] }) {
             key={item.href}
             href={item.href}
             aria-current={active ? 'page' : undefined}
-            className={`rounded-md px-3 py-2 text-sm font-medium ${active ? 'bg-brand-700 text-white' : 'text-slate-200 hover:bg-slate-800'}`}
+            className={`flex items-center justify-between rounded-md px-3 py-2 text-sm font-medium ${active ? 'bg-brand-700 text-white' : 'text-slate-200 hover:bg-slate-800'}`}
           >
             {item.label}
+            {item.countUrl && <NavCount url={item.countUrl} label={item.label} />}
           </Link>
         );
       })}
     </nav>
+  );
+}
+
+function NavCount({ url, label }: { url: string; label: string }) {
+  const { data } = useSWR<{ total: number }>(url, fetchJson, { refreshInterval: 60_000, revalidateOnFocus: true });
+  if (!data?.total) return null;
+  return (
+    <span data-testid={`nav-count-${label.toLowerCase()}`} className="ml-2 rounded-full bg-near-500 px-2 text-xs font-bold text-slate-900">
+      {data.total}
+      <span className="sr-only"> waiting</span>
+    </span>
   );
 }

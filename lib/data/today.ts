@@ -19,7 +19,7 @@ export type InstallSummary = {
 
 export type TodayJob = Omit<JobDetail, 'crew' | 'repairs'> & { repairs: (JobDetail['repairs'][number] & { install: InstallSummary | null })[] };
 
-/** Jobs of the caller's crews scheduled for today and tomorrow in the company's time zone, with any running install. */
+/** Jobs of the caller's crews scheduled for today and tomorrow in the company's time zone (and any sent back), with any running install. */
 export async function listTodayJobs(user: SessionUser, now = new Date()) {
   const company = await getCompany(user);
   const today = dayInZone(now, company.timeZone);
@@ -29,8 +29,9 @@ export async function listTodayJobs(user: SessionUser, now = new Date()) {
     where: {
       companyId: user.companyId,
       crewId: { [Op.in]: user.crewIds },
-      scheduledDate: { [Op.in]: [today, tomorrow] },
       status: { [Op.notIn]: ['cancelled', 'draft'] },
+      // A job the office sent back stays on the list, whatever its day, until the crew has dealt with it.
+      [Op.or]: [{ scheduledDate: { [Op.in]: [today, tomorrow] } }, { status: 'sent_back' }],
       archivedAt: null,
     },
     include: [

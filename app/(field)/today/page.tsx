@@ -13,7 +13,7 @@ export const metadata: Metadata = { title: 'Today' };
 
 export default async function Page() {
   const user = await requirePageUser(FIELD_ROLES);
-  const [{ today, jobs }, company] = await Promise.all([listTodayJobs(user), getCompany(user)]);
+  const [{ today, tomorrow, jobs }, company] = await Promise.all([listTodayJobs(user), getCompany(user)]);
   const units = company.unitSystem;
   return (
     <div className="space-y-4">
@@ -21,7 +21,7 @@ export default async function Page() {
       {jobs.length === 0 && <p className="rounded-xl bg-white p-6 text-slate-700">No jobs for your crew today or tomorrow.</p>}
       {jobs.map((job) => (
         <article key={job.id} className="rounded-xl bg-white p-5 shadow-sm ring-1 ring-slate-200" data-testid={`job-${job.number}`}>
-          <p className="text-sm font-semibold uppercase tracking-wide text-brand-700">{job.scheduledDate === today ? 'Today' : 'Tomorrow'} · Job {job.number}</p>
+          <p className="text-sm font-semibold uppercase tracking-wide text-brand-700">{job.scheduledDate === today ? 'Today' : job.scheduledDate === tomorrow ? 'Tomorrow' : label(job.status)} · Job {job.number}</p>
           <h2 className="text-2xl font-bold">{job.site?.addressLine}, {job.site?.city}</h2>
           <p className="text-slate-700">{job.customer?.name}{job.customer?.phone ? ` · ${job.customer.phone}` : ''}</p>
           {job.reviewComment && <p className="mt-2 rounded-md bg-near-100 p-3 text-near-700" data-testid="review-comment">Office: {job.reviewComment}</p>}

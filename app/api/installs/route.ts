@@ -1,10 +1,36 @@
 import { NextResponse } from 'next/server';
 import { requireUser } from '@/lib/auth/session';
+import { csvResponse, toCsv } from '@/lib/csv';
 import { createInstall, type InstallRow } from '@/lib/data/installs';
-import { handle, parseOrThrow } from '@/lib/http';
+import { listInstalls } from '@/lib/data/reviews';
+import { label } from '@/lib/domain';
+import { handle, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/http';
 import { createInstallSchema } from '@/lib/validation/install-events';
+import { installListQuerySchema } from '@/lib/validation/reviews';
 
 export type CreateInstallResponse = { install: InstallRow };
+export type InstallListResponse = Awaited<ReturnType<typeof listInstalls>>;
+
+/**
+ * A page of installs with their quality flags (`?status=awaiting_review` is the office's queue;
+ * `sort=severity` puts the worst flags first), or with `?format=csv` every install the filter matches.
+ */
+export const GET = handle(async (request: Request) => {
+  const user = await requireUser();
+  const query = parseOrThrow(installListQuerySchema, searchParamsOf(request));
+  if (!wantsCsv(request)) return NextResponse.json(await listInstalls(user, query));
+  const { items } = await listInstalls(user, query, true);
+  return csvResponse('installs', toCsv(items, [
+    { header: 'Job', value: (i) => i.job.number },
+    { header: 'Customer', value: (i) => i.customer.name },
+    { header: 'Site', value: (i) => `${i.site.addressLine}, ${i.site.city}` },
+    { header: 'Crew', value: (i) => i.crew?.name },
+    { header: 'Repair', value: (i) => i.repair.position },
+    { header: 'Status', value: (i) => label(i.status) },
+    { header: 'Finished', value: (i) => i.finishedAt?.toISOString() },
+    { header: 'Flags', value: (i) => i.flags.map((f) => `${f.severity}: ${f.message}`).join(' | ') },
+  ]));
+});
 
 /** Starts an install; a retried create (same id and repair) answers 200 with the first one. */
 export const POST = handle(async (request: Request) => {

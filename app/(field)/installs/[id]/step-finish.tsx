@@ -46,7 +46,11 @@ export function StepSignOff({ canSign, defaultName, onSign }: { canSign: boolean
 export function StepDone({ status }: { status: string }) {
   return (
     <StepCard title="Install finished" testId="step-done">
-      <Callout tone="safe">{status === 'approved' ? 'Approved by the office.' : 'Signed off. The office will review it.'}</Callout>
+      {status === 'sent_back' ? (
+        <Callout tone="near">Sent back by the office: their comment is on the Today screen. Everything recorded here is kept.</Callout>
+      ) : (
+        <Callout tone="safe">{status === 'approved' ? 'Approved by the office.' : 'Signed off. The office will review it.'}</Callout>
+      )}
     </StepCard>
   );
 }
