@@ -49,6 +49,7 @@ export const LABELS: Record<string, string> = {
   sent_back: 'Sent back', approved: 'Approved', reported: 'Report sent', closed: 'Closed', cancelled: 'Cancelled',
   not_started: 'Not started', abandoned: 'Abandoned', planned: 'Planned', installed: 'Installed', failed: 'Failed',
   manhole: 'Manhole', cleanout: 'Cleanout', other: 'Other',
+  pvc: 'PVC', hdpe: 'HDPE',
 };
 
 export const label = (code: string) => LABELS[code] ?? code.replace(/_/g, ' ').replace(/^./, (c) => c.toUpperCase());
