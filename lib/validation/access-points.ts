@@ -1,5 +1,7 @@
 import { z } from 'zod';
 import { ACCESS_POINT_KINDS } from '@/lib/domain';
+import { enteredToMm } from '@/lib/units/entry';
+import type { UnitSystem } from '@/lib/units';
 import { optionalText } from './common';
 
 /** Depth from the rim to the invert; 30 m is far beyond any sewer access a crew would enter for a point repair. */
@@ -22,3 +24,21 @@ export const accessPointInputSchema = z.object({ ...accessPointFields, kind: acc
 export type AccessPointInput = z.input<typeof accessPointInputSchema>;
 
 export const accessPointPatchSchema = z.object(accessPointFields).partial().strict();
+
+/** A number input of a desk form: blank (or NaN) is "not entered", anything else must read as a number. */
+export const enteredNumber = z.preprocess(
+  (value) => (value === '' || value === null || value === undefined || (typeof value === 'number' && Number.isNaN(value)) ? undefined : Number(value)),
+  z.number({ error: 'Enter a number' }).optional(),
+);
+
+/** The desk form: depth in the company's long unit (ft or m), converted once and checked by the API's schema. */
+export function accessPointFormSchema(system: UnitSystem) {
+  return z
+    .object({ label: z.string(), kind: z.string(), depthMm: enteredNumber })
+    .transform((form): AccessPointInput => ({
+      label: form.label,
+      kind: form.kind as AccessPointInput['kind'],
+      depthMm: enteredToMm(form.depthMm, system, 'long') ?? null,
+    }))
+    .pipe(accessPointInputSchema);
+}

@@ -4,7 +4,7 @@ import { enteredToMm } from '@/lib/units/entry';
 import type { UnitSystem } from '@/lib/units';
 import { uuidSchema } from './common';
 import { listQuerySchema } from './list';
-import { MAX_ACCESS_DEPTH_MM } from './access-points';
+import { MAX_ACCESS_DEPTH_MM, enteredNumber as entered } from './access-points';
 
 /*
  * Nominal size is a trade designation, not a measurement, so the measured inside diameter may sit
@@ -64,12 +64,6 @@ export const segmentListQuerySchema = listQuerySchema(SEGMENT_SORT_KEYS, { sort:
   z.object({ siteId: uuidSchema.optional() }),
 );
 export type SegmentListQuery = z.infer<typeof segmentListQuerySchema>;
-
-// A number input: blank (or NaN from valueAsNumber) is "not entered", anything else must be a number.
-const entered = z.preprocess(
-  (value) => (value === '' || value === null || value === undefined || (typeof value === 'number' && Number.isNaN(value)) ? undefined : Number(value)),
-  z.number({ error: 'Enter a number' }).optional(),
-);
 
 /**
  * The desk form: sizes in the company's short unit (in or mm), length and depth in its long unit
