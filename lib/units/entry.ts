@@ -21,3 +21,12 @@ export function mmToEntered(mm: number | null | undefined, system: UnitSystem, k
   const unit = (system === 'metric' ? (kind === 'short' ? 'mm' : 'm') : kind === 'short' ? 'in' : 'ft') as keyof typeof ENTRY_DECIMALS;
   return Number(value.toFixed(ENTRY_DECIMALS[unit]));
 }
+
+/**
+ * A stored nominal (trade) size → the number its form field starts with. Inch trade sizes come in
+ * eighths at the finest (1-1/4, 2-1/2, 8), so 203 mm shows as 8, not 7.992; metric shows whole mm.
+ */
+export function nominalToEntered(mm: number | null | undefined, system: UnitSystem): number | null {
+  if (mm === null || mm === undefined) return null;
+  return system === 'imperial' ? Math.round(lengthFromSi(mm, system, 'short') * 8) / 8 : Math.round(mm);
+}

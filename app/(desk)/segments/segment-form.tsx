@@ -10,7 +10,7 @@ import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
 import { PIPE_MATERIALS, label } from '@/lib/domain';
 import { unitLabels, type UnitSystem } from '@/lib/units';
-import { mmToEntered } from '@/lib/units/entry';
+import { mmToEntered, nominalToEntered } from '@/lib/units/entry';
 import { segmentFormSchema } from '@/lib/validation/segments';
 
 type Point = { id: string; label: string };
@@ -28,13 +28,13 @@ export function SegmentForm({ siteId, accessPoints, unitSystem, segment }: { sit
   const [message, setMessage] = useState<string>();
   const schema = useMemo(() => segmentFormSchema(unitSystem), [unitSystem]);
   const units = unitLabels(unitSystem);
-  const { register, handleSubmit, setError, formState: { errors, isSubmitting } } = useForm<z.input<typeof schema>, unknown, z.output<typeof schema>>({
+  const { register, handleSubmit, setError, formState: { errors, isSubmitting, dirtyFields } } = useForm<z.input<typeof schema>, unknown, z.output<typeof schema>>({
     resolver: zodResolver(schema),
     defaultValues: segment
       ? {
           ...segment,
           toAccessPointId: segment.toAccessPointId ?? '',
-          nominalSizeMm: mmToEntered(segment.nominalSizeMm, unitSystem, 'short'),
+          nominalSizeMm: nominalToEntered(segment.nominalSizeMm, unitSystem),
           insideDiameterMm: mmToEntered(segment.insideDiameterMm, unitSystem, 'short'),
           lengthMm: mmToEntered(segment.lengthMm, unitSystem, 'long'),
           depthMm: mmToEntered(segment.depthMm, unitSystem, 'long') ?? '',
@@ -43,9 +43,10 @@ export function SegmentForm({ siteId, accessPoints, unitSystem, segment }: { sit
   });
 
   const onSubmit = handleSubmit(async (values) => {
-    // The site is fixed once the segment exists (undefined drops out of the JSON).
+    // An edit sends only what the user changed: a size shown rounded (8 in for 203 mm) and left alone stays as stored.
+    const patch = Object.fromEntries(Object.entries(values).filter(([field]) => field !== 'siteId' && dirtyFields[field as keyof typeof dirtyFields]));
     const result = segment
-      ? await submitJson<{ id: string }>(`/api/segments/${segment.id}`, 'PATCH', { ...values, siteId: undefined })
+      ? await submitJson<{ id: string }>(`/api/segments/${segment.id}`, 'PATCH', patch)
       : await submitJson<{ id: string }>('/api/segments', 'POST', values);
     if (!result.ok) return setMessage(applyServerErrors(result.error, setError));
     router.push(`/segments/${result.data.id}`);

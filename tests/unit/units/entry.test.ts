@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { enteredToMm, mmToEntered } from '@/lib/units/entry';
+import { enteredToMm, mmToEntered, nominalToEntered } from '@/lib/units/entry';
 import { segmentFormSchema } from '@/lib/validation/segments';
 
 // Check values from the exact definitions 1 in = 25.4 mm and 1 ft = 304.8 mm (NIST SP 811, App. B).
@@ -29,6 +29,21 @@ describe('length entry in desk forms', () => {
     for (const tenths of [1000, 1016, 1485, 2032, 6096]) {
       const mm = tenths / 10;
       expect(enteredToMm(mmToEntered(mm, 'imperial', 'short'), 'imperial', 'short', 1)).toBe(mm);
+    }
+  });
+});
+
+describe('nominal sizes in the form', () => {
+  it('shows an inch trade size to the nearest eighth and metric sizes in whole millimetres', () => {
+    expect(nominalToEntered(203, 'imperial')).toBe(8); // 7.992 in
+    expect(nominalToEntered(32, 'imperial')).toBe(1.25); // 1.260 in
+    expect(nominalToEntered(64, 'imperial')).toBe(2.5); // 2.520 in
+    expect(nominalToEntered(150, 'metric')).toBe(150);
+    expect(nominalToEntered(null, 'imperial')).toBeNull();
+    // Typed back unchanged, an inch trade size lands on the same millimetres.
+    for (const inches of [1.25, 2.5, 4, 6, 8, 10, 12, 15, 18, 24, 36]) {
+      const mm = enteredToMm(inches, 'imperial', 'short');
+      expect(enteredToMm(nominalToEntered(mm, 'imperial'), 'imperial', 'short')).toBe(mm);
     }
   });
 });
