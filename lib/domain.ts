@@ -55,6 +55,7 @@ export const LABELS: Record<string, string> = {
   not_started: 'Not started', abandoned: 'Abandoned', planned: 'Planned', installed: 'Installed', failed: 'Failed',
   issued: 'Issued', paid: 'Paid', void: 'Void',
   manhole: 'Manhole', cleanout: 'Cleanout', other: 'Other',
+  pvc: 'PVC', hdpe: 'HDPE',
 };
 
 export const label = (code: string) => LABELS[code] ?? code.replace(/_/g, ' ').replace(/^./, (c) => c.toUpperCase());
