@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { UNIT_SYSTEMS } from '@/lib/domain';
+import { lengthFromSi, lengthToSi, type UnitSystem } from '@/lib/units';
 
 // Intl lists canonical zone names only and leaves out UTC, the column's default, so it is added here.
 let zones: Set<string> | undefined;
@@ -49,3 +50,29 @@ export const companyFormSchema = z.object({
     .max(MAX_SAFETY_MARGIN * 100, `At most ${MAX_SAFETY_MARGIN * 100} %`),
 });
 export type CompanyFormValues = z.infer<typeof companyFormSchema>;
+
+type StoredSettings = { name: string; timeZone: string; unitSystem: UnitSystem; minOverlapPerEndMm: number; workingWindowSafetyMargin: number };
+
+/** Stored settings → what the form shows: the overlap in the company's short-length unit (2 decimals), the reserve in per cent. */
+export function companyToForm(company: StoredSettings): CompanyFormValues {
+  return {
+    name: company.name,
+    timeZone: company.timeZone,
+    unitSystem: company.unitSystem,
+    minOverlapPerEnd: round(lengthFromSi(company.minOverlapPerEndMm, company.unitSystem), 2),
+    safetyMarginPercent: round(company.workingWindowSafetyMargin * 100, 1),
+  };
+}
+
+/** The form's values → the PATCH body in SI: the overlap converted from the unit system chosen in the same form. */
+export function formToCompanyPatch(values: CompanyFormValues) {
+  return {
+    name: values.name,
+    timeZone: values.timeZone,
+    unitSystem: values.unitSystem,
+    minOverlapPerEndMm: Math.round(lengthToSi(values.minOverlapPerEnd, values.unitSystem)),
+    workingWindowSafetyMargin: round(values.safetyMarginPercent / 100, 3),
+  };
+}
+
+const round = (value: number, decimals: number) => Math.round(value * 10 ** decimals) / 10 ** decimals;
