@@ -78,7 +78,7 @@ function PasswordForm({ user, onDone }: { user: Target; onDone: (message: string
         aria-describedby={error ? `${id}-error` : undefined}
         className={inputClass}
       />
-      <Button type="submit" disabled={isSubmitting}>{isSubmitting ? 'Setting…' : 'Set password'}</Button>
+      <Button type="submit" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : 'Save password'}</Button>
       {error && <p id={`${id}-error`} role="alert" className="w-full text-xs font-medium text-missed-700">{error}</p>}
     </form>
   );
