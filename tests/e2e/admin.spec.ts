@@ -13,7 +13,7 @@ test('an admin creates a user, deactivates them, and their open session is refus
   const person = await userContext.newPage();
 
   await signIn(admin, 'admin@demo.test');
-  await expect(admin).toHaveURL('/admin');
+  await expect(admin).toHaveURL('/admin', { timeout: 30_000 }); // the run's first sign-in may meet a cold server
   await admin.getByRole('link', { name: /^Users/ }).click();
   await expect(admin.getByRole('heading', { level: 1 })).toHaveText('Users');
   await admin.getByRole('link', { name: 'New user' }).click();
