@@ -1,7 +1,13 @@
 import 'server-only';
 import { ChecklistTemplate, Company, Crew, Packer, ResinKit, ResinSystem, User } from '@/models';
+import { sequelize } from '@/lib/db';
+import { changedFields, recordAudit } from '@/lib/audit';
 import type { SessionUser } from '@/lib/auth/session';
 import { notFound } from '@/lib/errors';
+import type { CompanyPatch } from '@/lib/validation/company';
+import { assertAdmin } from './scope';
+
+const ENTITY = 'company';
 
 /** The caller's company settings (time zone, units, planning margins). */
 export async function getCompany(user: SessionUser) {
@@ -10,25 +16,32 @@ export async function getCompany(user: SessionUser) {
   return company.get({ plain: true });
 }
 
-/** What the admin manages: users, crews, resin systems and kits, packers, check-list templates. */
-export async function getCompanyOverview(user: SessionUser) {
+/** Changes the caller's company settings (admin only), audited with each field's before and after. */
+export async function updateCompany(user: SessionUser, patch: CompanyPatch) {
+  assertAdmin(user);
+  return sequelize.transaction(async (transaction) => {
+    const company = await Company.findByPk(user.companyId, { transaction, lock: transaction.LOCK.UPDATE });
+    if (!company) throw notFound('Company');
+    const changes = changedFields(company.get({ plain: true }), patch);
+    if (Object.keys(changes).length) {
+      await company.update(patch, { transaction });
+      await recordAudit(user, { action: 'update', entityType: ENTITY, entityId: company.id, changes }, transaction);
+    }
+    return company.get({ plain: true });
+  });
+}
+
+/** How many of each thing the admin manages, for the settings index. */
+export async function getSettingsCounts(user: SessionUser) {
   const where = { companyId: user.companyId };
-  const [company, users, crews, resinSystems, resinKits, packers, checklists] = await Promise.all([
-    getCompany(user),
-    User.findAll({ where, order: [['name', 'ASC']] }),
-    Crew.findAll({ where, include: [{ model: User, as: 'members', attributes: ['id', 'name', 'role'] }], order: [['name', 'ASC']] }),
-    ResinSystem.findAll({ where, order: [['name', 'ASC']] }),
-    ResinKit.findAll({ where, order: [['expiresOn', 'ASC']] }),
-    Packer.findAll({ where, order: [['minDiameterMm', 'ASC']] }),
-    ChecklistTemplate.findAll({ where, order: [['name', 'ASC']] }),
+  const [users, activeUsers, crews, resinSystems, resinKits, packers, checklists] = await Promise.all([
+    User.count({ where }),
+    User.count({ where: { ...where, active: true } }),
+    Crew.count({ where: { ...where, archivedAt: null } }),
+    ResinSystem.count({ where }),
+    ResinKit.count({ where }),
+    Packer.count({ where }),
+    ChecklistTemplate.count({ where }),
   ]);
-  return {
-    company,
-    users: users.map((row) => row.get({ plain: true })),
-    crews: crews.map((row) => row.get({ plain: true }) as Crew & { members: Pick<User, 'id' | 'name' | 'role'>[] }),
-    resinSystems: resinSystems.map((row) => row.get({ plain: true })),
-    resinKits: resinKits.map((row) => row.get({ plain: true })),
-    packers: packers.map((row) => row.get({ plain: true })),
-    checklists: checklists.map((row) => row.get({ plain: true })),
-  };
+  return { users, activeUsers, crews, resinSystems, resinKits, packers, checklists };
 }

@@ -1,0 +1,85 @@
+'use client';
+
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useRouter } from 'next/navigation';
+import { useState } from 'react';
+import { useForm, useWatch } from 'react-hook-form';
+import { FormField, errorProps, inputClass } from '@/components/desk/form-field';
+import { Button } from '@/components/ui/button';
+import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
+import { UNIT_SYSTEMS, type UnitSystemName } from '@/lib/domain';
+import { lengthFromSi, lengthToSi, unitLabels } from '@/lib/units';
+import { companyFormSchema, formToCompanyPatch, type CompanyFormValues } from '@/lib/validation/company';
+
+// The API names its fields in SI; the form's own fields carry the entered units.
+const SERVER_FIELD: Record<string, keyof CompanyFormValues> = { minOverlapPerEndMm: 'minOverlapPerEnd', workingWindowSafetyMargin: 'safetyMarginPercent' };
+
+/** The company's settings; lengths are entered in the unit system picked here and sent to PATCH /api/company in millimetres. */
+export function CompanyForm({ initial, timeZones }: { initial: CompanyFormValues; timeZones: string[] }) {
+  const router = useRouter();
+  const [message, setMessage] = useState<{ ok: boolean; text: string }>();
+  const { register, control, handleSubmit, setError, setValue, getValues, formState: { errors, isSubmitting } } = useForm<CompanyFormValues>({
+    resolver: zodResolver(companyFormSchema),
+    defaultValues: initial,
+  });
+  const unitSystem = useWatch({ control, name: 'unitSystem' });
+  const lengthUnit = unitLabels(unitSystem).shortLength;
+
+  // Switching the unit system keeps the overlap the same length, shown in the new unit.
+  const unitField = register('unitSystem');
+  const onUnitChange = (event: React.ChangeEvent<HTMLSelectElement>) => {
+    const before = getValues('unitSystem');
+    const next = event.target.value as UnitSystemName;
+    const overlap = getValues('minOverlapPerEnd');
+    if (Number.isFinite(overlap) && before !== next) {
+      setValue('minOverlapPerEnd', Math.round(lengthFromSi(lengthToSi(overlap, before), next) * 100) / 100);
+    }
+    return unitField.onChange(event);
+  };
+
+  const onSubmit = handleSubmit(async (values) => {
+    setMessage(undefined);
+    const result = await submitJson('/api/company', 'PATCH', formToCompanyPatch(values));
+    if (!result.ok) {
+      const fields = Object.fromEntries(Object.entries(result.error.fields ?? {}).map(([key, value]) => [SERVER_FIELD[key] ?? key, value]));
+      return setMessage({ ok: false, text: applyServerErrors({ ...result.error, fields }, setError) });
+    }
+    setMessage({ ok: true, text: 'Settings saved.' });
+    router.refresh();
+  });
+
+  return (
+    <form onSubmit={onSubmit} noValidate className="grid max-w-2xl gap-4 rounded-lg bg-white p-4 ring-1 ring-slate-200 md:grid-cols-2">
+      <FormField id="name" label="Company name" error={errors.name?.message}>
+        <input {...register('name')} {...errorProps('name', errors.name?.message)} className={inputClass} />
+      </FormField>
+      <FormField id="timeZone" label="Time zone" error={errors.timeZone?.message} hint="Times are stored in UTC and shown in this zone.">
+        <select {...register('timeZone')} {...errorProps('timeZone', errors.timeZone?.message)} className={inputClass}>
+          {timeZones.map((zone) => <option key={zone} value={zone}>{zone}</option>)}
+        </select>
+      </FormField>
+      <FormField id="unitSystem" label="Units" error={errors.unitSystem?.message}>
+        <select {...unitField} onChange={onUnitChange} {...errorProps('unitSystem', errors.unitSystem?.message)} className={inputClass}>
+          {UNIT_SYSTEMS.map((system) => <option key={system} value={system}>{system === 'imperial' ? 'Imperial (in, ft, psi, °F)' : 'Metric (mm, m, kPa, °C)'}</option>)}
+        </select>
+      </FormField>
+      <FormField id="minOverlapPerEnd" label={`Minimum overlap per end (${lengthUnit})`} error={errors.minOverlapPerEnd?.message} hint="Added to each end of a defect to size its patch.">
+        <input type="number" step="any" min={0} {...register('minOverlapPerEnd', { valueAsNumber: true })} {...errorProps('minOverlapPerEnd', errors.minOverlapPerEnd?.message)} className={inputClass} />
+      </FormField>
+      <FormField
+        id="safetyMarginPercent"
+        label="Working-window reserve (%)"
+        error={errors.safetyMarginPercent?.message}
+        hint="Share of the resin’s working time held back in the go/no-go: at 20 %, loading and pulling the packer (timed in the dry run) must fit in 80 % of the working time. Follow the resin maker’s instructions where they ask for more."
+      >
+        <input type="number" step="any" min={0} max={90} {...register('safetyMarginPercent', { valueAsNumber: true })} {...errorProps('safetyMarginPercent', errors.safetyMarginPercent?.message)} className={inputClass} />
+      </FormField>
+      {message && (
+        <p role={message.ok ? 'status' : 'alert'} className={`text-sm font-medium md:col-span-2 ${message.ok ? 'text-safe-700' : 'text-missed-700'}`}>{message.text}</p>
+      )}
+      <div className="md:col-span-2">
+        <Button type="submit" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : 'Save settings'}</Button>
+      </div>
+    </form>
+  );
+}

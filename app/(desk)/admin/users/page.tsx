@@ -1,0 +1,33 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { ListToolbar, FilterSelect, exportHrefOf } from '@/components/desk/list-toolbar';
+import { requirePageUser } from '@/lib/auth/session';
+import { listUsers } from '@/lib/data/users';
+import { ROLES, label } from '@/lib/domain';
+import { userListQuerySchema } from '@/lib/validation/users';
+import { UsersTable } from './users-table';
+
+export const metadata: Metadata = { title: 'Users' };
+
+export default async function Page({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
+  const user = await requirePageUser(['admin']);
+  const raw = await searchParams;
+  // A hand-edited URL with a bad value falls back to the defaults rather than failing the page.
+  const parsed = userListQuerySchema.safeParse(raw);
+  const query = parsed.success ? parsed.data : userListQuerySchema.parse({});
+  const list = await listUsers(user, query);
+  return (
+    <div className="space-y-4">
+      <div>
+        <Link href="/admin" className="text-sm text-brand-700 hover:underline">← Company settings</Link>
+        <h1 className="mt-1 text-2xl font-bold">Users</h1>
+        <p className="text-sm text-slate-600">Deactivating someone, changing their role or resetting their password signs them out everywhere at once.</p>
+      </div>
+      <ListToolbar search={query.q} placeholder="Name or e-mail" exportHref={exportHrefOf('/api/users', raw)} newHref="/admin/users/new" newLabel="New user">
+        <FilterSelect name="role" label="Role" value={query.role} options={ROLES.map((role) => ({ value: role, label: label(role) }))} />
+        <FilterSelect name="active" label="Status" value={query.active} options={[{ value: 'true', label: 'Active' }, { value: 'false', label: 'Deactivated' }]} />
+      </ListToolbar>
+      <UsersTable list={list} sort={query.sort} dir={query.dir} selfId={user.id} />
+    </div>
+  );
+}

@@ -1,0 +1,15 @@
+import { NextResponse } from 'next/server';
+import { requireUser } from '@/lib/auth/session';
+import { setCrewMembers } from '@/lib/data/crews';
+import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/http';
+import { crewMembersSchema } from '@/lib/validation/crews';
+
+type Context = { params: Promise<{ id: string }> };
+
+/** Replaces the crew's members with `{ userIds }` (foremen and technicians of the company only). */
+export const PUT = handle(async (request: Request, { params }: Context) => {
+  const user = await requireUser(['admin']);
+  const id = await idOf(params, 'Crew');
+  const { userIds } = parseOrThrow(crewMembersSchema, await bodyOf(request));
+  return NextResponse.json(await setCrewMembers(user, id, userIds));
+});

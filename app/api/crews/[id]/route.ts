@@ -1,0 +1,27 @@
+import { NextResponse } from 'next/server';
+import { requireUser } from '@/lib/auth/session';
+import { archiveCrew, getCrew, updateCrew } from '@/lib/data/crews';
+import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/http';
+import { crewPatchSchema } from '@/lib/validation/crews';
+
+type Context = { params: Promise<{ id: string }> };
+
+export type CrewResponse = Awaited<ReturnType<typeof getCrew>>;
+
+export const GET = handle(async (_request: Request, { params }: Context) => {
+  const user = await requireUser();
+  return NextResponse.json(await getCrew(user, await idOf(params, 'Crew')));
+});
+
+export const PATCH = handle(async (request: Request, { params }: Context) => {
+  const user = await requireUser(['admin']);
+  const id = await idOf(params, 'Crew');
+  const patch = parseOrThrow(crewPatchSchema, await bodyOf(request));
+  return NextResponse.json(await updateCrew(user, id, patch));
+});
+
+/** Archives the crew when it has jobs, deletes it otherwise. */
+export const DELETE = handle(async (_request: Request, { params }: Context) => {
+  const user = await requireUser(['admin']);
+  return NextResponse.json(await archiveCrew(user, await idOf(params, 'Crew')));
+});

@@ -1,0 +1,15 @@
+import { NextResponse } from 'next/server';
+import { requireUser } from '@/lib/auth/session';
+import { resetPassword } from '@/lib/data/users';
+import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/http';
+import { passwordResetSchema } from '@/lib/validation/users';
+
+type Context = { params: Promise<{ id: string }> };
+
+/** The admin sets a new password for the user; their existing sessions end. */
+export const POST = handle(async (request: Request, { params }: Context) => {
+  const user = await requireUser(['admin']);
+  const id = await idOf(params, 'User');
+  const { password } = parseOrThrow(passwordResetSchema, await bodyOf(request));
+  return NextResponse.json(await resetPassword(user, id, password));
+});

@@ -1,0 +1,78 @@
+import { z } from 'zod';
+import { UNIT_SYSTEMS } from '@/lib/domain';
+import { lengthFromSi, lengthToSi, type UnitSystem } from '@/lib/units';
+
+// Intl lists canonical zone names only and leaves out UTC, the column's default, so it is added here.
+let zones: Set<string> | undefined;
+/** The IANA time zones this runtime knows (Intl.supportedValuesOf), plus UTC. */
+export function knownTimeZones(): string[] {
+  zones ??= new Set(['UTC', ...Intl.supportedValuesOf('timeZone')]);
+  return [...zones];
+}
+export const isKnownTimeZone = (zone: string) => knownTimeZones().includes(zone);
+
+/** Working-window reserve as stored: a fraction (0.2 = inflate with 20 % of the working time left); the table allows 0–0.9. */
+export const MAX_SAFETY_MARGIN = 0.9;
+/** An upper bound on the overlap at each end of a patch; a metre is far beyond any patch in practice. */
+export const MAX_OVERLAP_MM = 1000;
+
+const companyFields = {
+  name: z.string().trim().min(1, 'Enter the company’s name').max(200, 'At most 200 characters'),
+  timeZone: z.string().trim().refine(isKnownTimeZone, 'Pick a time zone from the list, e.g. America/Denver'),
+  unitSystem: z.enum(UNIT_SYSTEMS, { error: 'Pick imperial or metric' }),
+  minOverlapPerEndMm: z
+    .number({ error: 'Enter the overlap as a number' })
+    .min(0, 'The overlap cannot be negative')
+    .max(MAX_OVERLAP_MM, `At most ${MAX_OVERLAP_MM} mm`)
+    .transform((mm) => Math.round(mm)),
+  workingWindowSafetyMargin: z
+    .number({ error: 'Enter the reserve as a number' })
+    .min(0, 'The reserve cannot be negative')
+    .max(MAX_SAFETY_MARGIN, `At most ${MAX_SAFETY_MARGIN} (90 %)`),
+};
+
+/** PATCH /api/company: any of the settings, SI values (millimetres, a fraction), nothing else. */
+export const companyPatchSchema = z.object(companyFields).partial().strict();
+export type CompanyPatch = z.output<typeof companyPatchSchema>;
+
+/**
+ * The settings form: the overlap in the company's units and the reserve in per cent; the form converts
+ * them with lib/units and sends companyPatchSchema's fields, which the server checks again.
+ */
+export const companyFormSchema = z.object({
+  name: companyFields.name,
+  timeZone: z.string().min(1, 'Pick a time zone'),
+  unitSystem: companyFields.unitSystem,
+  minOverlapPerEnd: z.number({ error: 'Enter the overlap as a number' }).min(0, 'The overlap cannot be negative'),
+  safetyMarginPercent: z
+    .number({ error: 'Enter the reserve as a number' })
+    .min(0, 'The reserve cannot be negative')
+    .max(MAX_SAFETY_MARGIN * 100, `At most ${MAX_SAFETY_MARGIN * 100} %`),
+});
+export type CompanyFormValues = z.infer<typeof companyFormSchema>;
+
+type StoredSettings = { name: string; timeZone: string; unitSystem: UnitSystem; minOverlapPerEndMm: number; workingWindowSafetyMargin: number };
+
+/** Stored settings → what the form shows: the overlap in the company's short-length unit (2 decimals), the reserve in per cent. */
+export function companyToForm(company: StoredSettings): CompanyFormValues {
+  return {
+    name: company.name,
+    timeZone: company.timeZone,
+    unitSystem: company.unitSystem,
+    minOverlapPerEnd: round(lengthFromSi(company.minOverlapPerEndMm, company.unitSystem), 2),
+    safetyMarginPercent: round(company.workingWindowSafetyMargin * 100, 1),
+  };
+}
+
+/** The form's values → the PATCH body in SI: the overlap converted from the unit system chosen in the same form. */
+export function formToCompanyPatch(values: CompanyFormValues) {
+  return {
+    name: values.name,
+    timeZone: values.timeZone,
+    unitSystem: values.unitSystem,
+    minOverlapPerEndMm: Math.round(lengthToSi(values.minOverlapPerEnd, values.unitSystem)),
+    workingWindowSafetyMargin: round(values.safetyMarginPercent / 100, 3),
+  };
+}
+
+const round = (value: number, decimals: number) => Math.round(value * 10 ** decimals) / 10 ** decimals;

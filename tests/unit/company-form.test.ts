@@ -1,0 +1,35 @@
+import { describe, expect, it } from 'vitest';
+import { companyFormSchema, companyPatchSchema, companyToForm, formToCompanyPatch, isKnownTimeZone } from '@/lib/validation/company';
+
+// 1 in = 25.4 mm exactly (the international inch, 1959 agreement).
+describe('company settings form ↔ API body', () => {
+  const stored = { name: 'Acme', timeZone: 'America/Denver', unitSystem: 'imperial' as const, minOverlapPerEndMm: 305, workingWindowSafetyMargin: 0.2 };
+
+  it('shows the overlap in inches and the reserve in per cent for an imperial company', () => {
+    expect(companyToForm(stored)).toEqual({ name: 'Acme', timeZone: 'America/Denver', unitSystem: 'imperial', minOverlapPerEnd: 12.01, safetyMarginPercent: 20 });
+  });
+
+  it('round-trips unchanged settings to the same stored values', () => {
+    const body = formToCompanyPatch(companyToForm(stored));
+    expect(body).toEqual({ name: 'Acme', timeZone: 'America/Denver', unitSystem: 'imperial', minOverlapPerEndMm: 305, workingWindowSafetyMargin: 0.2 });
+    expect(companyPatchSchema.parse(body)).toEqual(body);
+  });
+
+  it('converts an entry in the unit system picked in the same form', () => {
+    expect(formToCompanyPatch({ ...companyToForm(stored), unitSystem: 'metric', minOverlapPerEnd: 150, safetyMarginPercent: 25 })).toMatchObject({ minOverlapPerEndMm: 150, workingWindowSafetyMargin: 0.25 });
+    expect(formToCompanyPatch({ ...companyToForm(stored), minOverlapPerEnd: 6 }).minOverlapPerEndMm).toBe(152); // 6 × 25.4 = 152.4
+  });
+
+  it('refuses a reserve above 90 % and a negative overlap in the form', () => {
+    const result = companyFormSchema.safeParse({ ...companyToForm(stored), minOverlapPerEnd: -1, safetyMarginPercent: 95 });
+    expect(result.success).toBe(false);
+    expect(result.error!.issues.map((issue) => issue.path[0]).sort()).toEqual(['minOverlapPerEnd', 'safetyMarginPercent']);
+  });
+
+  it('knows IANA zones and UTC, not made-up ones', () => {
+    expect(isKnownTimeZone('Europe/Berlin')).toBe(true);
+    expect(isKnownTimeZone('UTC')).toBe(true);
+    expect(isKnownTimeZone('Mars/Olympus_Mons')).toBe(false);
+    expect(isKnownTimeZone('europe/berlin')).toBe(false);
+  });
+});
