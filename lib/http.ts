@@ -3,6 +3,7 @@ import { randomUUID } from 'node:crypto';
 import { NextResponse } from 'next/server';
 import type { z } from 'zod';
 import { AppError } from '@/lib/errors';
+import { filledParams } from '@/lib/validation/list';
 
 /**
  * Wraps a route handler: expected failures become their status with `{ error: { message, fields? } }`;
@@ -38,7 +39,7 @@ export function parseOrThrow<S extends z.ZodType>(schema: S, input: unknown, sta
 }
 
 /** Query-string parameters as a plain object for zod. */
-export const searchParamsOf = (request: Request) => Object.fromEntries(new URL(request.url).searchParams);
+export const searchParamsOf = (request: Request) => filledParams(Object.fromEntries(new URL(request.url).searchParams));
 
 /** The JSON body of a request; a body that is not JSON is a 400, never a 500. */
 export async function bodyOf(request: Request): Promise<unknown> {

@@ -36,3 +36,8 @@ export type ListQuery<K extends string = string> = {
   dir: 'asc' | 'desc';
   archived: 'true' | 'false' | 'only';
 };
+
+/** Query parameters without the blank ones: a filter left on "Any" submits `kind=`, which means no filter. */
+export function filledParams(raw: Record<string, string | string[] | undefined>): Record<string, string> {
+  return Object.fromEntries(Object.entries(raw).filter((entry): entry is [string, string] => typeof entry[1] === 'string' && entry[1].trim() !== ''));
+}

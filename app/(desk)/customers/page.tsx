@@ -5,6 +5,7 @@ import { listCustomers } from '@/lib/data/customers';
 import { CUSTOMER_KINDS, DESK_ROLES, label } from '@/lib/domain';
 import { customerListQuerySchema } from '@/lib/validation/customers';
 import { CustomersTable } from './customers-table';
+import { filledParams } from '@/lib/validation/list';
 
 export const metadata: Metadata = { title: 'Customers' };
 
@@ -12,7 +13,7 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
   const user = await requirePageUser(DESK_ROLES);
   const raw = await searchParams;
   // A hand-edited URL with a bad value falls back to the defaults rather than failing the page.
-  const parsed = customerListQuerySchema.safeParse(raw);
+  const parsed = customerListQuerySchema.safeParse(filledParams(raw));
   const query = parsed.success ? parsed.data : customerListQuerySchema.parse({});
   const list = await listCustomers(user, query);
   return (

@@ -5,13 +5,14 @@ import { listInvoices } from '@/lib/data/invoices';
 import { DESK_ROLES, INVOICE_STATUSES, label } from '@/lib/domain';
 import { invoiceListQuerySchema } from '@/lib/validation/invoices';
 import { InvoicesTable } from './invoices-table';
+import { filledParams } from '@/lib/validation/list';
 
 export const metadata: Metadata = { title: 'Invoices' };
 
 export default async function Page({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
   const user = await requirePageUser(DESK_ROLES);
   const raw = await searchParams;
-  const parsed = invoiceListQuerySchema.safeParse(raw);
+  const parsed = invoiceListQuerySchema.safeParse(filledParams(raw));
   const query = parsed.success ? parsed.data : invoiceListQuerySchema.parse({});
   const list = await listInvoices(user, query);
   return (

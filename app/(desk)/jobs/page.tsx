@@ -4,6 +4,7 @@ import { listJobs } from '@/lib/data/jobs';
 import { DESK_ROLES, JOB_STATUSES, label } from '@/lib/domain';
 import { jobListQuerySchema } from '@/lib/validation/jobs';
 import { JobsTable } from './jobs-table';
+import { filledParams } from '@/lib/validation/list';
 
 export const metadata: Metadata = { title: 'Jobs' };
 
@@ -11,7 +12,7 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
   const user = await requirePageUser(DESK_ROLES);
   const raw = await searchParams;
   // A hand-edited URL with a bad value falls back to the defaults rather than failing the page.
-  const parsed = jobListQuerySchema.safeParse(raw);
+  const parsed = jobListQuerySchema.safeParse(filledParams(raw));
   const query = parsed.success ? parsed.data : jobListQuerySchema.parse({});
   const list = await listJobs(user, query);
   return (

@@ -5,6 +5,7 @@ import { listCustomerChoices, listSites } from '@/lib/data/sites';
 import { DESK_ROLES } from '@/lib/domain';
 import { siteListQuerySchema } from '@/lib/validation/sites';
 import { SitesTable } from './sites-table';
+import { filledParams } from '@/lib/validation/list';
 
 export const metadata: Metadata = { title: 'Sites' };
 
@@ -12,7 +13,7 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
   const user = await requirePageUser(DESK_ROLES);
   const raw = await searchParams;
   // A hand-edited URL with a bad value falls back to the defaults rather than failing the page.
-  const parsed = siteListQuerySchema.safeParse(raw);
+  const parsed = siteListQuerySchema.safeParse(filledParams(raw));
   const query = parsed.success ? parsed.data : siteListQuerySchema.parse({});
   const [list, customers] = await Promise.all([listSites(user, query), listCustomerChoices(user)]);
   const newHref = query.customerId ? `/sites/new?customerId=${query.customerId}` : '/sites/new';

@@ -5,13 +5,14 @@ import { Badge } from '@/components/ui/badge';
 import { requirePageUser } from '@/lib/auth/session';
 import { listChecklistTemplates } from '@/lib/data/checklist-templates';
 import { checklistTemplateListQuerySchema } from '@/lib/validation/checklist-templates';
+import { filledParams } from '@/lib/validation/list';
 
 export const metadata: Metadata = { title: 'Check-lists' };
 
 export default async function Page({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
   const user = await requirePageUser(['admin']);
   const raw = await searchParams;
-  const parsed = checklistTemplateListQuerySchema.safeParse(raw);
+  const parsed = checklistTemplateListQuerySchema.safeParse(filledParams(raw));
   const query = parsed.success ? parsed.data : checklistTemplateListQuerySchema.parse({});
   const list = await listChecklistTemplates(user, { ...query, pageSize: 100 });
   return (

@@ -5,13 +5,14 @@ import { requirePageUser } from '@/lib/auth/session';
 import { listCrews } from '@/lib/data/crews';
 import { crewListQuerySchema } from '@/lib/validation/crews';
 import { CrewsTable } from './crews-table';
+import { filledParams } from '@/lib/validation/list';
 
 export const metadata: Metadata = { title: 'Crews' };
 
 export default async function Page({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
   const user = await requirePageUser(['admin']);
   const raw = await searchParams;
-  const parsed = crewListQuerySchema.safeParse(raw);
+  const parsed = crewListQuerySchema.safeParse(filledParams(raw));
   const query = parsed.success ? parsed.data : crewListQuerySchema.parse({});
   const list = await listCrews(user, query);
   return (

@@ -6,13 +6,14 @@ import { getCompany } from '@/lib/data/company';
 import { listPackers } from '@/lib/data/packers';
 import { packerListQuerySchema } from '@/lib/validation/packers';
 import { PackersTable } from './packers-table';
+import { filledParams } from '@/lib/validation/list';
 
 export const metadata: Metadata = { title: 'Packers' };
 
 export default async function Page({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
   const user = await requirePageUser(['admin']);
   const raw = await searchParams;
-  const parsed = packerListQuerySchema.safeParse(raw);
+  const parsed = packerListQuerySchema.safeParse(filledParams(raw));
   const query = parsed.success ? parsed.data : packerListQuerySchema.parse({});
   const [list, company] = await Promise.all([listPackers(user, query), getCompany(user)]);
   return (

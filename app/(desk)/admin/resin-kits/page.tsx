@@ -8,13 +8,14 @@ import { listResinSystems } from '@/lib/data/resin-systems';
 import { resinKitListQuerySchema } from '@/lib/validation/resin-kits';
 import { resinSystemListQuerySchema } from '@/lib/validation/resin-systems';
 import { ResinKitsTable } from './resin-kits-table';
+import { filledParams } from '@/lib/validation/list';
 
 export const metadata: Metadata = { title: 'Resin kits' };
 
 export default async function Page({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
   const user = await requirePageUser(['admin']);
   const raw = await searchParams;
-  const parsed = resinKitListQuerySchema.safeParse(raw);
+  const parsed = resinKitListQuerySchema.safeParse(filledParams(raw));
   const query = parsed.success ? parsed.data : resinKitListQuerySchema.parse({});
   const [list, company, systems] = await Promise.all([
     listResinKits(user, query),

@@ -7,13 +7,14 @@ import { listResinSystems } from '@/lib/data/resin-systems';
 import { RESIN_CHEMISTRIES, label } from '@/lib/domain';
 import { resinSystemListQuerySchema } from '@/lib/validation/resin-systems';
 import { ResinSystemsTable } from './resin-systems-table';
+import { filledParams } from '@/lib/validation/list';
 
 export const metadata: Metadata = { title: 'Resin systems' };
 
 export default async function Page({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
   const user = await requirePageUser(['admin']);
   const raw = await searchParams;
-  const parsed = resinSystemListQuerySchema.safeParse(raw);
+  const parsed = resinSystemListQuerySchema.safeParse(filledParams(raw));
   const query = parsed.success ? parsed.data : resinSystemListQuerySchema.parse({});
   const [list, company] = await Promise.all([listResinSystems(user, query), getCompany(user)]);
   return (

@@ -6,6 +6,7 @@ import { listUsers } from '@/lib/data/users';
 import { ROLES, label } from '@/lib/domain';
 import { userListQuerySchema } from '@/lib/validation/users';
 import { UsersTable } from './users-table';
+import { filledParams } from '@/lib/validation/list';
 
 export const metadata: Metadata = { title: 'Users' };
 
@@ -13,7 +14,7 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
   const user = await requirePageUser(['admin']);
   const raw = await searchParams;
   // A hand-edited URL with a bad value falls back to the defaults rather than failing the page.
-  const parsed = userListQuerySchema.safeParse(raw);
+  const parsed = userListQuerySchema.safeParse(filledParams(raw));
   const query = parsed.success ? parsed.data : userListQuerySchema.parse({});
   const list = await listUsers(user, query);
   return (
