@@ -154,6 +154,7 @@ export async function updateJob(user: SessionUser, id: string, patch: JobPatch) 
     const decision = nextJobStatus(job.status, requested, {
       crewId: fields.crewId === undefined ? job.crewId : fields.crewId,
       scheduledDate: fields.scheduledDate === undefined ? job.scheduledDate : fields.scheduledDate,
+      changed: Boolean(changes.crewId || changes.scheduledDate),
     });
     if (!decision.ok) throw new AppError(decision.code, decision.message, decision.code === 422 ? { status: [decision.message] } : undefined);
     if (decision.status !== job.status) changes.status = { from: job.status, to: decision.status };

@@ -7,7 +7,7 @@ import { AppError, notFound } from '@/lib/errors';
 import { REPAIRS_EDITABLE } from '@/lib/jobs/status';
 import { PLAN_CAUTION, planRepair } from '@/lib/planning/plan-repair';
 import { fittingPackers, patchLength } from '@/lib/sizing';
-import { convertPressure } from '@/lib/units';
+import { convertPressure, type UnitSystem } from '@/lib/units';
 import type { SessionUser } from '@/lib/auth/session';
 import type { RepairInput, RepairListQuery, RepairPatch, RepairPlanQuery } from '@/lib/validation/repairs';
 import { unprocessable } from './jobs';
@@ -216,7 +216,7 @@ export async function getRepairPlan(user: SessionUser, id: string, query: Repair
   });
   return {
     repairId: repair.id,
-    unitSystem: company.unitSystem,
+    unitSystem: company.unitSystem as UnitSystem,
     inputs,
     saved: {
       plannedPatchLengthMm: repair.plannedPatchLengthMm,

@@ -26,10 +26,14 @@ export type StatusDecision = { ok: true; status: JobStatus } | { ok: false; code
 
 /**
  * The status a job ends up with after an office edit. An explicit `requested` status must be a move the
- * office may make; without one, a draft that now has both crew and day becomes scheduled and a scheduled
- * job that lost either goes back to draft.
+ * office may make; without one, an edit of the crew or day moves a draft that now has both to scheduled,
+ * and a scheduled job that lost either back to draft.
  */
-export function nextJobStatus(current: JobStatus, requested: JobStatus | undefined, planned: { crewId: string | null; scheduledDate: string | null }): StatusDecision {
+export function nextJobStatus(
+  current: JobStatus,
+  requested: JobStatus | undefined,
+  planned: { crewId: string | null; scheduledDate: string | null; changed: boolean },
+): StatusDecision {
   const ready = Boolean(planned.crewId && planned.scheduledDate);
   if (requested && requested !== current) {
     if (!OFFICE_TRANSITIONS[current].includes(requested)) {
@@ -40,6 +44,7 @@ export function nextJobStatus(current: JobStatus, requested: JobStatus | undefin
     }
     return { ok: true, status: requested };
   }
+  if (!planned.changed) return { ok: true, status: current };
   if (current === 'draft' && ready) return { ok: true, status: 'scheduled' };
   if (current === 'scheduled' && !ready) return { ok: true, status: 'draft' };
   return { ok: true, status: current };

@@ -77,3 +77,20 @@ export const repairPlanQuerySchema = z.object({
   longTermModulusMpa: queryNumber(z.number({ error: 'Long-term modulus must be a number' }).positive('Long-term modulus must be above zero').max(50_000, 'Long-term modulus is at most 50 000 MPa')),
 });
 export type RepairPlanQuery = z.output<typeof repairPlanQuerySchema>;
+
+/**
+ * The repair form in the company's units (distance in ft or m, defect length in in or mm); the page converts
+ * with lib/units and sends repairInputSchema's SI fields. Same messages as the API.
+ */
+export const repairFormSchema = z.object({
+  segmentId: repairFields.segmentId,
+  distance: z.number({ error: 'Enter the distance from the access point' }).min(0, 'The distance cannot be negative'),
+  defectType: repairFields.defectType,
+  conditionGrade: repairFields.conditionGrade,
+  defectLength: z.number({ error: 'Enter the defect length' }).positive('The defect length must be above zero'),
+  clockPosition: repairFields.clockPosition,
+  notes: repairFields.notes,
+});
+
+/** Where an API field's message goes on the form. */
+export const REPAIR_FORM_FIELDS: Record<string, string> = { distanceMm: 'distance', defectLengthMm: 'defectLength' };
