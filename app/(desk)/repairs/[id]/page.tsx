@@ -27,9 +27,10 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
       <div className="flex flex-wrap items-start justify-between gap-3">
         <div>
           <Link href={`/jobs/${repair.job.id}`} className="text-sm text-brand-700 hover:underline">← Job {repair.job.number}</Link>
-          <h1 className="mt-1 flex items-center gap-3 text-2xl font-bold">
-            Repair {repair.position} · job {repair.job.number} <StatusBadge status={repair.status} />
-          </h1>
+          <div className="mt-1 flex items-center gap-3">
+            <h1 className="text-2xl font-bold">Repair {repair.position} · job {repair.job.number}</h1>
+            <StatusBadge status={repair.status} />
+          </div>
           <p className="text-slate-600">{label(repair.defectType)}, grade {repair.conditionGrade}</p>
         </div>
         <div className="flex gap-2">
