@@ -1,4 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { decimal } from './columns';
 import { DEFECT_TYPES, JOB_STATUSES, REPAIR_STATUSES, type JobStatus } from '@/lib/domain';
 
 export class Job extends Model<InferAttributes<Job>, InferCreationAttributes<Job>> {
@@ -37,6 +38,11 @@ export class Repair extends Model<InferAttributes<Repair>, InferCreationAttribut
   /** Clock position looking downstream, "3" or a span "10-2". */
   declare clockPosition: CreationOptional<string | null>;
   declare plannedPatchLengthMm: CreationOptional<number | null>;
+  /** The packer the office chose on the planning panel, and what the thickness check was run with. */
+  declare plannedPackerId: CreationOptional<string | null>;
+  declare plannedThicknessMm: CreationOptional<number | null>;
+  declare plannedGroundwaterHeadMm: CreationOptional<number | null>;
+  declare plannedOvalityPct: CreationOptional<number | null>;
   declare status: CreationOptional<(typeof REPAIR_STATUSES)[number]>;
   declare notes: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
@@ -77,6 +83,10 @@ export function initJob(sequelize: Sequelize) {
       defectLengthMm: { type: DataTypes.INTEGER, allowNull: false },
       clockPosition: DataTypes.STRING(5),
       plannedPatchLengthMm: DataTypes.INTEGER,
+      plannedPackerId: DataTypes.UUID,
+      plannedThicknessMm: decimal(5, 2),
+      plannedGroundwaterHeadMm: DataTypes.INTEGER,
+      plannedOvalityPct: decimal(4, 1),
       status: { type: DataTypes.STRING(16), allowNull: false, defaultValue: 'planned', validate: { isIn: [REPAIR_STATUSES] } },
       notes: DataTypes.TEXT,
       createdAt: DataTypes.DATE,

@@ -9,6 +9,7 @@ export const dynamic = 'force-dynamic';
 
 const OFFICE_ITEMS: NavItem[] = [
   { href: '/jobs', label: 'Jobs' },
+  { href: '/repairs', label: 'Repairs' },
   { href: '/customers', label: 'Customers' },
   { href: '/sites', label: 'Sites' },
   { href: '/schedule', label: 'Schedule' },

@@ -14,9 +14,13 @@ const columns: ColumnDef<Row, unknown>[] = [
     header: 'Job',
     enableSorting: true,
     cell: ({ row }) => (
-      <Link href={`/jobs/${row.original.id}`} className="whitespace-nowrap font-semibold text-brand-700 hover:underline">{row.original.number}</Link>
+      <Link href={`/jobs/${row.original.id}`} className="whitespace-nowrap font-semibold text-brand-700 hover:underline">
+        {row.original.number}
+        {row.original.archivedAt && <span className="ml-2 text-xs font-normal text-slate-500">(archived)</span>}
+      </Link>
     ),
   },
+  { id: 'title', header: 'Title', enableSorting: true, cell: ({ row }) => row.original.title ?? '—' },
   { id: 'customer', header: 'Customer', cell: ({ row }) => row.original.customer?.name },
   { id: 'site', header: 'Site', cell: ({ row }) => `${row.original.site?.addressLine}, ${row.original.site?.city}` },
   { id: 'status', header: 'Status', enableSorting: true, cell: ({ row }) => <StatusBadge status={row.original.status} /> },

@@ -1,57 +1,75 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { notFound } from 'next/navigation';
+import { ArchiveButton } from '@/components/desk/archive-button';
+import { AuditHistory } from '@/components/desk/audit-history';
 import { StatusBadge } from '@/components/ui/badge';
 import { ReportPanel } from '@/components/report/report-panel';
 import { InvoicePanel } from '@/components/invoice/invoice-panel';
+import { buttonClass } from '@/components/ui/button';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
-import { getJob } from '@/lib/data/jobs';
+import { findJob } from '@/lib/data/jobs';
 import { DESK_ROLES, label } from '@/lib/domain';
+import { REPAIRS_EDITABLE } from '@/lib/jobs/status';
+import { recordForPage } from '@/lib/page-record';
 import { formatLength } from '@/lib/units';
-import { uuidSchema } from '@/lib/validation/common';
+import { JobStatusActions } from './status-actions';
 
 export const metadata: Metadata = { title: 'Job' };
 
 export default async function Page({ params }: { params: Promise<{ id: string }> }) {
   const user = await requirePageUser(DESK_ROLES);
-  const { id } = await params;
-  const job = uuidSchema.safeParse(id).success ? await getJob(user, id) : null;
-  if (!job) notFound();
-  const { unitSystem } = await getCompany(user);
+  const job = await recordForPage((await params).id, (id) => findJob(user, id));
+  const { unitSystem, timeZone } = await getCompany(user);
   const site = job.site;
+  const open = !job.archivedAt && REPAIRS_EDITABLE.includes(job.status);
   return (
     <div className="space-y-6">
-      <div>
-        <Link href="/jobs" className="text-sm text-brand-700 hover:underline">← Jobs</Link>
-        <h1 className="mt-1 flex items-center gap-3 text-2xl font-bold">
-          Job {job.number} <StatusBadge status={job.status} />
-        </h1>
-        <p className="text-slate-600">{job.title}</p>
+      <div className="flex flex-wrap items-start justify-between gap-3">
+        <div>
+          <Link href="/jobs" className="text-sm text-brand-700 hover:underline">← Jobs</Link>
+          <h1 className="mt-1 flex items-center gap-3 text-2xl font-bold">
+            Job {job.number} <StatusBadge status={job.status} />
+            {job.archivedAt && <span className="text-sm font-normal text-slate-500">(archived)</span>}
+          </h1>
+          <p className="text-slate-600">{job.title}</p>
+        </div>
+        {!job.archivedAt && (
+          <div className="flex flex-wrap gap-2">
+            <JobStatusActions jobId={job.id} status={job.status} />
+            <Link href={`/jobs/${job.id}/edit`} className={buttonClass('secondary')}>Edit</Link>
+            <ArchiveButton url={`/api/jobs/${job.id}`} what="job" backTo="/jobs" />
+          </div>
+        )}
       </div>
       <dl className="grid grid-cols-2 gap-4 rounded-lg bg-white p-4 text-sm ring-1 ring-slate-200 md:grid-cols-4">
-        <div><dt className="text-slate-500">Customer</dt><dd className="font-medium">{job.customer?.name}</dd></div>
+        <div><dt className="text-slate-500">Customer</dt><dd className="font-medium"><Link href={`/customers/${job.customer.id}`} className="text-brand-700 hover:underline">{job.customer.name}</Link></dd></div>
         <div><dt className="text-slate-500">Site</dt><dd className="font-medium">{site.addressLine}, {site.city}</dd></div>
         <div><dt className="text-slate-500">Scheduled</dt><dd className="font-medium">{job.scheduledDate ?? 'Not yet'}</dd></div>
         <div><dt className="text-slate-500">Crew</dt><dd className="font-medium">{job.crew?.name ?? 'None'}</dd></div>
+        {job.notes && <div className="col-span-full"><dt className="text-slate-500">Notes</dt><dd className="whitespace-pre-line">{job.notes}</dd></div>}
       </dl>
       {job.reviewComment && (
         <p className="rounded-md bg-near-100 p-3 text-sm text-near-700">Office comment: {job.reviewComment}</p>
       )}
-      <section>
-        <h2 className="mb-2 text-lg font-semibold">Repairs</h2>
+      <section aria-labelledby="repairs-heading">
+        <div className="mb-2 flex items-center justify-between">
+          <h2 id="repairs-heading" className="text-lg font-semibold">Repairs</h2>
+          {open && <Link href={`/repairs/new?jobId=${job.id}`} className={buttonClass('secondary')}>Add repair</Link>}
+        </div>
         <table className="min-w-full rounded-lg bg-white text-sm ring-1 ring-slate-200">
+          <caption className="sr-only">Repairs of job {job.number}</caption>
           <thead className="bg-slate-100 text-left text-xs uppercase text-slate-600">
             <tr>
-              <th className="px-3 py-2">#</th><th className="px-3 py-2">Segment</th><th className="px-3 py-2">Distance</th>
-              <th className="px-3 py-2">Defect</th><th className="px-3 py-2">Grade</th><th className="px-3 py-2">Clock</th>
-              <th className="px-3 py-2">Patch</th><th className="px-3 py-2">Status</th>
+              <th scope="col" className="px-3 py-2">#</th><th scope="col" className="px-3 py-2">Segment</th><th scope="col" className="px-3 py-2">Distance</th>
+              <th scope="col" className="px-3 py-2">Defect</th><th scope="col" className="px-3 py-2">Grade</th><th scope="col" className="px-3 py-2">Clock</th>
+              <th scope="col" className="px-3 py-2">Patch</th><th scope="col" className="px-3 py-2">Status</th>
             </tr>
           </thead>
           <tbody className="divide-y divide-slate-100">
-            {(job.repairs ?? []).map((repair) => (
+            {job.repairs.map((repair) => (
               <tr key={repair.id}>
-                <td className="px-3 py-2">{repair.position}</td>
+                <td className="px-3 py-2"><Link href={`/repairs/${repair.id}`} className="font-semibold text-brand-700 hover:underline">Repair {repair.position}</Link></td>
                 <td className="px-3 py-2">{repair.segment?.label} · {formatLength(Number(repair.segment?.insideDiameterMm), unitSystem)} ID</td>
                 <td className="px-3 py-2">{formatLength(repair.distanceMm, unitSystem, 'long')}</td>
                 <td className="px-3 py-2">{label(repair.defectType)} ({formatLength(repair.defectLengthMm, unitSystem)})</td>
@@ -61,6 +79,9 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
                 <td className="px-3 py-2">{label(repair.status)}</td>
               </tr>
             ))}
+            {job.repairs.length === 0 && (
+              <tr><td colSpan={8} className="px-3 py-6 text-center text-slate-500">No repairs yet.</td></tr>
+            )}
           </tbody>
         </table>
       </section>
@@ -75,6 +96,7 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
       {/* Repair report (send + send log) */}
       <ReportPanel job={job} />
       <InvoicePanel user={user} job={job} unitSystem={unitSystem} />
+      <AuditHistory user={user} entityType="job" entityId={job.id} timeZone={timeZone} />
     </div>
   );
 }

@@ -1,17 +1,27 @@
 import { NextResponse } from 'next/server';
 import { requireUser } from '@/lib/auth/session';
-import { getJob } from '@/lib/data/jobs';
-import { notFound } from '@/lib/errors';
-import { handle } from '@/lib/http';
-import { uuidSchema } from '@/lib/validation/common';
+import { archiveJob, findJob, updateJob } from '@/lib/data/jobs';
+import { DESK_ROLES } from '@/lib/domain';
+import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/http';
+import { jobPatchSchema } from '@/lib/validation/jobs';
 
-export type JobResponse = NonNullable<Awaited<ReturnType<typeof getJob>>>;
+export type JobResponse = Awaited<ReturnType<typeof findJob>>;
+type Context = { params: Promise<{ id: string }> };
 
-export const GET = handle(async (_request: Request, { params }: { params: Promise<{ id: string }> }) => {
+export const GET = handle(async (_request: Request, { params }: Context) => {
   const user = await requireUser();
-  const { id } = await params;
-  // A malformed id cannot name a job of this company: same answer as a foreign one.
-  const job = uuidSchema.safeParse(id).success ? await getJob(user, id) : null;
-  if (!job) throw notFound('Job');
-  return NextResponse.json(job);
+  return NextResponse.json(await findJob(user, await idOf(params, 'Job')));
+});
+
+export const PATCH = handle(async (request: Request, { params }: Context) => {
+  const user = await requireUser(DESK_ROLES);
+  const id = await idOf(params, 'Job');
+  const patch = parseOrThrow(jobPatchSchema, await bodyOf(request));
+  return NextResponse.json(await updateJob(user, id, patch));
+});
+
+/** Archives the job when it has repairs or installs, deletes it otherwise. */
+export const DELETE = handle(async (_request: Request, { params }: Context) => {
+  const user = await requireUser(DESK_ROLES);
+  return NextResponse.json(await archiveJob(user, await idOf(params, 'Job')));
 });

@@ -1,0 +1,36 @@
+'use client';
+
+import { useRouter } from 'next/navigation';
+import { useState } from 'react';
+import { Button } from '@/components/ui/button';
+import { submitJson } from '@/lib/client/submit-json';
+import { label, type JobStatus } from '@/lib/domain';
+import { OFFICE_TRANSITIONS } from '@/lib/jobs/status';
+
+// Scheduling is done by giving the job a crew and a day, not by a button here.
+const VERBS: Partial<Record<JobStatus, string>> = { cancelled: 'Cancel job', closed: 'Close job', draft: 'Back to draft' };
+
+/** The office's status moves for this job (cancel, close, reopen), each confirmed and sent as a PATCH. */
+export function JobStatusActions({ jobId, status }: { jobId: string; status: JobStatus }) {
+  const router = useRouter();
+  const [message, setMessage] = useState<string>();
+  const [busy, setBusy] = useState(false);
+  const moves = OFFICE_TRANSITIONS[status].filter((to) => VERBS[to]);
+  const move = async (to: JobStatus) => {
+    if (!window.confirm(`${VERBS[to]}? The job becomes ${label(to).toLowerCase()}.`)) return;
+    setBusy(true);
+    const result = await submitJson(`/api/jobs/${jobId}`, 'PATCH', { status: to });
+    setBusy(false);
+    if (!result.ok) return setMessage(result.error.message);
+    setMessage(undefined);
+    router.refresh();
+  };
+  return (
+    <span className="inline-flex items-center gap-2">
+      {moves.map((to) => (
+        <Button key={to} type="button" variant="secondary" disabled={busy} onClick={() => move(to)}>{VERBS[to]}</Button>
+      ))}
+      {message && <span role="alert" className="text-sm text-missed-700">{message}</span>}
+    </span>
+  );
+}
