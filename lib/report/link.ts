@@ -31,8 +31,10 @@ export function verifyReportLink(token: string, now = new Date(), secret: Buffer
   const parts = token.split('.');
   if (parts.length !== 2 || !BASE64URL.test(parts[0]) || !BASE64URL.test(parts[1])) return { ok: false, reason: 'malformed' };
   const [payload, signature] = parts;
-  const given = Buffer.from(signature, 'base64url');
-  const expected = Buffer.from(mac(payload, secret), 'base64url');
+  // Compared as text, not decoded bytes: base64url's last character carries spare bits, so two spellings
+  // decode to the same bytes and a changed character must still be refused.
+  const given = Buffer.from(signature, 'utf8');
+  const expected = Buffer.from(mac(payload, secret), 'utf8');
   if (given.length !== expected.length || !timingSafeEqual(given, expected)) return { ok: false, reason: 'signature' };
   const fields = Buffer.from(payload, 'base64url').toString('utf8').split(':');
   if (fields.length !== 4 || fields[0] !== VERSION || !UUID.test(fields[1]) || !UUID.test(fields[2]) || !/^\d{1,12}$/.test(fields[3])) {

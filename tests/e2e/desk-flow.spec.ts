@@ -76,7 +76,7 @@ test('office takes a job from the first call to tomorrow’s schedule; the forem
 
   // Plan: 12 in defect + 2 × 12 in overlap (the company's 305 mm) = 36 in patch; the 8 in packer fits 7.9 in.
   const plan = office.getByRole('region', { name: 'Plan' });
-  await expect(plan.getByText('Patch length')).toBeVisible();
+  await expect(plan.getByText('Patch length', { exact: true })).toBeVisible();
   await expect(plan).toContainText('36');
   await expect(plan.getByText('8 in packer', { exact: true })).toBeVisible();
   await hydrated(office, 'input[aria-label="Use 8 in packer"]');

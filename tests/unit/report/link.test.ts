@@ -23,6 +23,12 @@ describe('report links', () => {
     expect(verifyReportLink(token, NOW, 'another-secret-0123456789')).toEqual({ ok: false, reason: 'signature' });
     const flipped = signature[0] === 'A' ? `B${signature.slice(1)}` : `A${signature.slice(1)}`;
     expect(verifyReportLink(`${payload}.${flipped}`, NOW, SECRET)).toEqual({ ok: false, reason: 'signature' });
+    // Every other spelling of the last character: some decode to the very same bytes (base64url's spare
+    // bits), and each must still be refused — the link is compared as written.
+    const alphabet = 'ABCDEFGHIJKLMNOPQRSTUVWXYZabcdefghijklmnopqrstuvwxyz0123456789-_';
+    for (const c of alphabet.replace(signature.at(-1)!, '')) {
+      expect(verifyReportLink(`${payload}.${signature.slice(0, -1)}${c}`, NOW, SECRET).ok).toBe(false);
+    }
     const later = Buffer.from(Buffer.from(payload, 'base64url').toString().replace(/\d+$/, '9999999999')).toString('base64url');
     expect(verifyReportLink(`${later}.${signature}`, NOW, SECRET)).toEqual({ ok: false, reason: 'signature' });
     expect(verifyReportLink(`${payload}.${signature.slice(0, -4)}`, NOW, SECRET)).toEqual({ ok: false, reason: 'signature' });
