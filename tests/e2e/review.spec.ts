@@ -4,7 +4,11 @@ import { signIn } from './helpers';
 // The seed has two installs awaiting review: a late inflate on job …-0007 (North crew, whose
 // foreman is foreman@demo.test) and an early deflate on …-0008 (South crew).
 
-const queueCount = async (page: Page) => Number(await page.getByTestId('nav-count-review').innerText().then((t) => t.replace(/\D/g, '')));
+// The badge is not drawn at all when nothing waits.
+const queueCount = async (page: Page) => {
+  const badge = page.getByTestId('nav-count-review');
+  return (await badge.count()) === 0 ? 0 : Number((await badge.innerText()).replace(/\D/g, ''));
+};
 
 test('the office sends a late-inflate install back and the crew reads the comment on Today', async ({ browser }) => {
   test.slow(); // two people, two sessions, one after the other
