@@ -121,6 +121,8 @@ function buildCompany(spec, { now, passwordHash }) {
   t.installs = [];
   t.install_events = [];
   t.reviews = [];
+  t.invoices = [];
+  t.invoice_lines = [];
   spec.jobs.forEach((j, index) => {
     const site = t.sites[j.site];
     const crew = j.crew == null ? null : t.crews[j.crew];
@@ -177,13 +179,34 @@ function buildCompany(spec, { now, passwordHash }) {
       }
     });
   });
+  spec.jobs.forEach((j, index) => { if (j.invoice) addInvoice(t, C, t.jobs[index], j.invoice, now); });
   for (const site of t.sites) { delete site.points; delete site.segs; }
   return t;
+}
+
+/**
+ * An invoice of one line per repair of the job, at an invented price, money in integer cents with the app's
+ * rounding (lib/invoice/money.ts: line half up, tax on the subtotal half up).
+ */
+function addInvoice(t, C, job, spec, now) {
+  const repairs = t.repairs.filter((r) => r.job_id === job.id);
+  const invoice = row(C, { job_id: job.id, number: `INV-${job.number}`, status: spec.status, currency: spec.currency ?? 'usd', tax_rate_bp: spec.tax_rate_bp,
+    due_on: dayIn(new Date(now.getTime() + (spec.due_in_days ?? 30) * DAY), 'UTC'), issued_at: now, notes: null }, now);
+  const lines = repairs.map((repair, i) => row(C, { invoice_id: invoice.id, repair_id: repair.id, position: i + 1,
+    description: `Point repair ${repair.position}: ${repair.defect_type.replace(/_/g, ' ')} at ${(repair.distance_mm / 304.8).toFixed(0)} ft`,
+    quantity: 1, unit_price_cents: spec.price_cents, amount_cents: spec.price_cents }, now));
+  const subtotal = lines.reduce((sum, line) => sum + line.amount_cents, 0);
+  const tax = Math.floor((subtotal * spec.tax_rate_bp + 5000) / 10_000);
+  Object.assign(invoice, { subtotal_cents: subtotal, tax_cents: tax, total_cents: subtotal + tax,
+    paid_at: spec.status === 'paid' ? now : null, paid_cents: spec.status === 'paid' ? subtotal + tax : null });
+  t.invoices.push(invoice);
+  t.invoice_lines.push(...lines);
 }
 
 const TABLE_ORDER = [
   'companies', 'users', 'crews', 'crew_members', 'customers', 'sites', 'access_points', 'segments', 'resin_systems',
   'resin_kits', 'packers', 'checklist_templates', 'job_number_sequences', 'jobs', 'repairs', 'installs', 'install_events', 'reviews',
+  'invoices', 'invoice_lines',
 ];
 
 async function insertCompany(queryInterface, tables, transaction) {
