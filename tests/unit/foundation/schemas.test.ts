@@ -18,7 +18,7 @@ describe('signInSchema', () => {
 
 describe('jobListQuerySchema', () => {
   it('gives defaults for an empty query string', () => {
-    expect(jobListQuerySchema.parse({})).toEqual({ page: 1, pageSize: 25, sort: 'scheduledDate', dir: 'desc' });
+    expect(jobListQuerySchema.parse({})).toEqual({ page: 1, pageSize: 25, sort: 'scheduledDate', dir: 'desc', archived: 'false' });
   });
 
   it('reads numbers and a comma list of statuses from strings', () => {
