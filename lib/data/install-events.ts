@@ -57,7 +57,7 @@ async function recordInTransaction(user: SessionUser, installId: string, body: P
     return { event: existing.get({ plain: true }), created: false };
   }
 
-  const problem = orderProblem(state, { ...body, correctsEventId });
+  const problem = orderProblem(state, { ...body, correctsEventId }, { reopened: install.status === 'sent_back' });
   if (problem) throw new AppError(422, problem);
   if (target) checkCorrectedPayload(target.type, { ...target.payload, ...correctionChanges(body.payload) });
   if (body.type === 'conditions_recorded') await checkConditions(user, body.payload, today, t);
@@ -126,7 +126,8 @@ async function updateSummary(user: SessionUser, install: Install, state: Install
   }
   if (signedOff) {
     await Repair.update({ status: 'installed' }, { where: { id: install.repairId, companyId: user.companyId }, transaction: t });
-    if (job.status === 'in_progress' && (await allRepairsAwaitReview(user, job.id, t))) {
+    // A resubmitted install (sent back, signed off again) puts its job back in the queue the same way.
+    if ((job.status === 'in_progress' || job.status === 'sent_back') && (await allRepairsAwaitReview(user, job.id, t))) {
       await job.update({ status: 'awaiting_review' }, { transaction: t });
     }
   }

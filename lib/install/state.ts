@@ -89,11 +89,16 @@ export function deriveInstallState(events: readonly InstallEventInput[]): Instal
  * Why this event cannot be recorded now, as a sentence for the crew; null when it can.
  * Only what cannot have happened is refused: the pre-mix steps may come in any order or not at all.
  */
-export function orderProblem(state: InstallState, event: NewEvent): string | null {
+export function orderProblem(state: InstallState, event: NewEvent, { reopened = false }: { reopened?: boolean } = {}): string | null {
   const at = toDate(event.deviceTime);
-  if (state.signedOffAt && event.type === 'signed_off') return 'This install is already signed off.';
-  if (state.signedOffAt && event.type !== 'note' && event.type !== 'correction') {
-    return 'This install is signed off: only a note or a correction can be added now.';
+  // Sent back by the office (`reopened`): the crew may inspect again, add notes and corrections, and sign off
+  // once more to resubmit; the clock events themselves stay as they happened.
+  const afterSignOff = reopened ? ['note', 'correction', 'inspection_recorded', 'signed_off'] : ['note', 'correction'];
+  if (state.signedOffAt && event.type === 'signed_off' && !reopened) return 'This install is already signed off.';
+  if (state.signedOffAt && !afterSignOff.includes(event.type)) {
+    return reopened
+      ? 'This install was sent back: add notes, corrections or a new inspection, then sign off again.'
+      : 'This install is signed off: only a note or a correction can be added now.';
   }
   switch (event.type) {
     case 'safety_acknowledged':

@@ -56,6 +56,12 @@ test('the office sends a late-inflate install back and the crew reads the commen
   await expect(job).toContainText('Sent back');
   await job.getByRole('link', { name: /Install: Sent back/ }).click();
   await expect(crew.getByTestId('step-done')).toContainText('Sent back by the office');
+
+  // The foreman answers and resubmits: the install goes back to the office's queue.
+  await crew.getByRole('button', { name: 'Sign off again — resubmit for review' }).click();
+  await expect(crew.getByTestId('step-done')).toContainText('Signed off. The office will review it.', { timeout: 20_000 });
+  await office.reload();
+  await expect.poll(() => queueCount(office)).toBe(waiting);
 });
 
 test('a field user cannot open the review pages', async ({ page }) => {

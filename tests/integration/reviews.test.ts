@@ -189,6 +189,30 @@ describe('POST /api/installs/:id/review', () => {
     const fix = body('correction', 201, { reason: 'Read the wrong gauge', payload: { pressureKpa: 99 } }, { correctsEventId: reading.id });
     expect((await postEvent(id, fix)).status).toBe(201);
     expect((await Install.findByPk(id))!.status).toBe('sent_back');
+
+    // Resubmitting: clock events stay as they happened; a technician may not sign off; the foreman signs off
+    // again and the install and its job go back to the office's queue, the comment kept until approval.
+    expect((await postEvent(id, body('bladder_inflated', 202, { pressureKpa: 100 }))).status).toBe(422);
+    await signInAs(a.technician);
+    expect((await postEvent(id, body('signed_off', 203, { name: 'Tech' }))).status).toBe(403);
+    await signInAs(a.foreman);
+    expect((await postEvent(id, body('inspection_recorded', 204, { result: 'pass', notes: 'Re-checked on camera' }))).status).toBe(201);
+    expect((await postEvent(id, body('signed_off', 205, { name: 'Foreman' }))).status).toBe(201);
+    expect((await Install.findByPk(id))!.status).toBe('awaiting_review');
+    expect(await Job.findByPk(job.id)).toMatchObject({ status: 'awaiting_review', reviewComment: comment });
+    // Back in the queue, it can be decided again.
+    await signInAs(a.office);
+    expect((await review(id, { decision: 'approved' })).status).toBe(201);
+    expect(await Job.findByPk(job.id)).toMatchObject({ status: 'approved', reviewComment: null });
+  });
+
+  it('refuses a second sign-off of an install that was not sent back', async () => {
+    const { repairs } = await newJob(a);
+    const id = await finishedInstall(a, repairs[0]);
+    await signInAs(a.foreman);
+    const again = await postEvent(id, body('signed_off', 300, { name: 'Foreman' }));
+    expect(again.status).toBe(422);
+    expect(again.body.error.message).toBe('This install is already signed off.');
   });
 
   it('approves: the job is approved and its old comment cleared only once every repair’s install is', async () => {

@@ -152,6 +152,16 @@ describe('orderProblem', () => {
     expect(orderProblem(done, next('correction', 160, { reason: 'Wrong tap', deviceTime: at(21).toISOString() }, loaded.id))).toBeNull();
   });
 
+  it('lets a sent-back install be inspected and signed off again, but never re-run its clock', () => {
+    const done = upTo('signed_off');
+    const reopened = { reopened: true };
+    expect(orderProblem(done, next('inspection_recorded', 160, { result: 'pass' }), reopened)).toBeNull();
+    expect(orderProblem(done, next('signed_off', 161, { name: 'A Foreman' }), reopened)).toBeNull();
+    expect(orderProblem(done, next('note', 161, { text: 'Photo added' }), reopened)).toBeNull();
+    expect(orderProblem(done, next('pressure_reading', 161, { pressureKpa: 100 }), reopened)).toMatch(/sent back/);
+    expect(orderProblem(done, next('resin_mixed', 161), reopened)).toMatch(/sent back/);
+  });
+
   it('does not block the pre-mix steps in any order, repeated, or after mixing', () => {
     const mixed = deriveInstallState([ev('resin_mixed', 0)]);
     for (const type of ['checks_done', 'dry_run_started', 'conditions_recorded', 'go_decision', 'note'] as const) {

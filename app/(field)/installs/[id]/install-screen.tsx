@@ -157,7 +157,7 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
       case 'sign_off':
         return <StepSignOff canSign={canDecide} defaultName={viewer.name} onSign={(name) => void tap('signed_off', { name })} />;
       default:
-        return <StepDone status={view.install.status} />;
+        return <StepDone status={view.install.status} canSign={canDecide} defaultName={viewer.name} onResubmit={(name) => void tap('signed_off', { name })} />;
     }
   }
 }

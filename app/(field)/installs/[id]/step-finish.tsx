@@ -43,14 +43,31 @@ export function StepSignOff({ canSign, defaultName, onSign }: { canSign: boolean
   );
 }
 
-export function StepDone({ status }: { status: string }) {
+/**
+ * The end of the install. When the office sends it back, the foreman can add what was asked (notes,
+ * corrections, images, a new inspection) and sign off again to resubmit it for review.
+ */
+export function StepDone({ status, canSign = false, defaultName = '', onResubmit }: { status: string; canSign?: boolean; defaultName?: string; onResubmit?: (name: string) => void }) {
+  const [name, setName] = useState(defaultName);
+  if (status === 'sent_back') {
+    return (
+      <StepCard title="Install finished" testId="step-done">
+        <Callout tone="near">Sent back by the office: their comment is on the Today screen. Everything recorded here is kept.</Callout>
+        {canSign && onResubmit ? (
+          <>
+            <p className="text-lg text-slate-700">Add what the office asked for (a note, a correction, inspection images), then sign off again.</p>
+            <FieldInput id="resubmitName" label="Foreman's name" value={name} onChange={(e) => setName(e.target.value)} />
+            <PrimaryAction disabled={name.trim().length < 2} onClick={() => onResubmit(name.trim())}>Sign off again — resubmit for review</PrimaryAction>
+          </>
+        ) : (
+          <p className="text-lg text-slate-700">The foreman resubmits it once the office&apos;s points are answered.</p>
+        )}
+      </StepCard>
+    );
+  }
   return (
     <StepCard title="Install finished" testId="step-done">
-      {status === 'sent_back' ? (
-        <Callout tone="near">Sent back by the office: their comment is on the Today screen. Everything recorded here is kept.</Callout>
-      ) : (
-        <Callout tone="safe">{status === 'approved' ? 'Approved by the office.' : 'Signed off. The office will review it.'}</Callout>
-      )}
+      <Callout tone="safe">{status === 'approved' ? 'Approved by the office.' : 'Signed off. The office will review it.'}</Callout>
     </StepCard>
   );
 }
