@@ -9,7 +9,7 @@ import type { SessionUser } from '@/lib/auth/session';
 import type { ChecklistTemplateInput, ChecklistTemplateListQuery, checklistTemplatePatchSchema } from '@/lib/validation/checklist-templates';
 import { allOf, pageOf, searchWhere, windowOf } from './list';
 import { assertAdmin } from './scope';
-import { archiveOrDelete, createAudited, lockOwnRow, updateAudited } from './settings-records';
+import { archiveOrDelete, createAudited, lockOwnRow, updateAudited } from './records';
 
 const ENTITY = 'checklist_template';
 
@@ -57,7 +57,7 @@ export async function archiveChecklistTemplate(user: SessionUser, id: string) {
   return sequelize.transaction(async (transaction) => {
     const row = await lockOwnRow(ChecklistTemplate, user, id, 'Check-list template', transaction);
     const installs = await Install.count({ where: { companyId: user.companyId, checklistTemplateId: id }, transaction });
-    return archiveOrDelete(user, row, { entityType: ENTITY, inUse: installs > 0, archive: { active: false }, isArchived: !row.active, name: row.name }, transaction);
+    return archiveOrDelete(user, row, { entityType: ENTITY, inUse: installs > 0, summary: { name: row.name }, archive: { values: { active: false }, isArchived: !row.active } }, transaction);
   });
 }
 

@@ -11,6 +11,7 @@ import type { CrewListQuery, crewInputSchema, crewPatchSchema } from '@/lib/vali
 import type { z } from 'zod';
 import { allOf, archivedWhere, pageOf, searchWhere, windowOf } from './list';
 import { assertAdmin } from './scope';
+import { archiveOrDelete } from './records';
 
 const ENTITY = 'crew';
 
@@ -79,16 +80,8 @@ export async function archiveCrew(user: SessionUser, id: string) {
     const crew = await lockCrew(user, id, transaction);
     const where = { crewId: id, companyId: user.companyId };
     const [jobs, installs] = await Promise.all([Job.count({ where, transaction }), Install.count({ where, transaction })]);
-    if (jobs + installs === 0) {
-      await crew.destroy({ transaction }); // memberships go with it (ON DELETE CASCADE)
-      await recordAudit(user, { action: 'delete', entityType: ENTITY, entityId: id, changes: { name: crew.name } }, transaction);
-      return { id, archived: false, deleted: true };
-    }
-    if (!crew.archivedAt) {
-      await crew.update({ archivedAt: new Date() }, { transaction });
-      await recordAudit(user, { action: 'archive', entityType: ENTITY, entityId: id }, transaction);
-    }
-    return { id, archived: true, deleted: false };
+    // A deleted crew's memberships go with it (ON DELETE CASCADE).
+    return archiveOrDelete(user, crew, { entityType: ENTITY, inUse: jobs + installs > 0, summary: { name: crew.name } }, transaction);
   });
 }
 

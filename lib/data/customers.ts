@@ -2,13 +2,13 @@ import 'server-only';
 import type { InferAttributes } from 'sequelize';
 import { Customer, Job, Site } from '@/models';
 import { sequelize } from '@/lib/db';
-import { changedFields, recordAudit } from '@/lib/audit';
 import { notFound } from '@/lib/errors';
 import type { SessionUser } from '@/lib/auth/session';
 import type { CustomerListQuery, customerInputSchema, customerPatchSchema } from '@/lib/validation/customers';
 import type { z } from 'zod';
 import { allOf, archivedWhere, pageOf, searchWhere, windowOf } from './list';
 import { assertOfficeWriter, crewJobsWhere } from './scope';
+import { archiveOrDelete, createAudited, lockOwnRow, updateAudited } from './records';
 
 const ENTITY = 'customer';
 
@@ -42,25 +42,14 @@ export async function getCustomer(user: SessionUser, id: string) {
 
 export async function createCustomer(user: SessionUser, input: z.output<typeof customerInputSchema>) {
   assertOfficeWriter(user);
-  return sequelize.transaction(async (transaction) => {
-    const customer = await Customer.create({ ...input, companyId: user.companyId }, { transaction });
-    await recordAudit(user, { action: 'create', entityType: ENTITY, entityId: customer.id, changes: input }, transaction);
-    return customer.get({ plain: true });
-  });
+  return createAudited(user, Customer, ENTITY, input);
 }
 
 export async function updateCustomer(user: SessionUser, id: string, patch: z.output<typeof customerPatchSchema>) {
   assertOfficeWriter(user);
-  return sequelize.transaction(async (transaction) => {
-    const customer = await Customer.findOne({ where: { id, companyId: user.companyId }, transaction, lock: transaction.LOCK.UPDATE });
-    if (!customer) throw notFound('Customer');
-    const changes = changedFields(customer.get({ plain: true }), patch);
-    if (Object.keys(changes).length) {
-      await customer.update(patch, { transaction });
-      await recordAudit(user, { action: 'update', entityType: ENTITY, entityId: id, changes }, transaction);
-    }
-    return customer.get({ plain: true });
-  });
+  return sequelize.transaction(async (transaction) =>
+    updateAudited(user, await lockOwnRow(Customer, user, id, 'Customer', transaction), ENTITY, patch, transaction),
+  ) as Promise<InferAttributes<Customer>>;
 }
 
 /**
@@ -69,21 +58,11 @@ export async function updateCustomer(user: SessionUser, id: string, patch: z.out
 export async function archiveCustomer(user: SessionUser, id: string, reason?: string | null) {
   assertOfficeWriter(user);
   return sequelize.transaction(async (transaction) => {
-    const customer = await Customer.findOne({ where: { id, companyId: user.companyId }, transaction, lock: transaction.LOCK.UPDATE });
-    if (!customer) throw notFound('Customer');
+    const customer = await lockOwnRow(Customer, user, id, 'Customer', transaction);
     const [sites, jobs] = await Promise.all([
       Site.count({ where: { customerId: id, companyId: user.companyId }, transaction }),
       Job.count({ where: { customerId: id, companyId: user.companyId }, transaction }),
     ]);
-    if (sites + jobs === 0) {
-      await customer.destroy({ transaction });
-      await recordAudit(user, { action: 'delete', entityType: ENTITY, entityId: id, changes: { name: customer.name }, reason }, transaction);
-      return { id, archived: false, deleted: true };
-    }
-    if (!customer.archivedAt) {
-      await customer.update({ archivedAt: new Date() }, { transaction });
-      await recordAudit(user, { action: 'archive', entityType: ENTITY, entityId: id, reason }, transaction);
-    }
-    return { id, archived: true, deleted: false };
+    return archiveOrDelete(user, customer, { entityType: ENTITY, inUse: sites + jobs > 0, summary: { name: customer.name }, reason }, transaction);
   });
 }

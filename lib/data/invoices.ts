@@ -10,6 +10,7 @@ import type { InvoiceInput, InvoiceListQuery, invoiceActionSchema, invoiceLineSc
 import type { z } from 'zod';
 import { allOf, pageOf, searchWhere, windowOf } from './list';
 import { assertOfficeWriter } from './scope';
+import { lockOwnRow } from './records';
 
 const ENTITY = 'invoice';
 type Line = z.output<typeof invoiceLineSchema>;
@@ -32,13 +33,8 @@ const detailInclude = [
   },
 ];
 
-/** Invoices are the office's business: field roles get none. */
-function assertInvoiceReader(user: SessionUser) {
-  assertOfficeWriter(user);
-}
-
 export async function listInvoices(user: SessionUser, query: InvoiceListQuery, exportAll = false) {
-  assertInvoiceReader(user);
+  assertOfficeWriter(user); // invoices are the office's business: field roles read none either
   const { rows, count } = await Invoice.findAndCountAll({
     where: allOf(
       { companyId: user.companyId },
@@ -65,7 +61,7 @@ async function findDetail(where: { id?: string; jobId?: string; companyId: strin
 }
 
 export async function getInvoice(user: SessionUser, id: string) {
-  assertInvoiceReader(user);
+  assertOfficeWriter(user);
   const invoice = await findDetail({ id, companyId: user.companyId });
   if (!invoice) throw notFound('Invoice');
   return invoice;
@@ -123,8 +119,7 @@ export async function createInvoice(user: SessionUser, input: InvoiceInput) {
 export async function updateInvoice(user: SessionUser, id: string, patch: z.output<typeof invoicePatchSchema>) {
   assertOfficeWriter(user);
   return sequelize.transaction(async (transaction) => {
-    const invoice = await Invoice.findOne({ where: { id, companyId: user.companyId }, transaction, lock: transaction.LOCK.UPDATE });
-    if (!invoice) throw notFound('Invoice');
+    const invoice = await lockOwnRow(Invoice, user, id, 'Invoice', transaction);
     if (invoice.status !== 'draft') throw new AppError(409, `Invoice ${invoice.number} is ${invoice.status}; only a draft can be edited.`);
     const job = (await Job.findByPk(invoice.jobId, { transaction }))!;
     const before = invoice.get({ plain: true });
@@ -145,8 +140,7 @@ export async function updateInvoice(user: SessionUser, id: string, patch: z.outp
 export async function changeInvoiceStatus(user: SessionUser, id: string, { action, reason }: z.output<typeof invoiceActionSchema>) {
   assertOfficeWriter(user);
   return sequelize.transaction(async (transaction) => {
-    const invoice = await Invoice.findOne({ where: { id, companyId: user.companyId }, transaction, lock: transaction.LOCK.UPDATE });
-    if (!invoice) throw notFound('Invoice');
+    const invoice = await lockOwnRow(Invoice, user, id, 'Invoice', transaction);
     if (action === 'issue') {
       if (invoice.status !== 'draft') throw new AppError(409, `Invoice ${invoice.number} is ${invoice.status}; only a draft can be issued.`);
       if (invoice.totalCents <= 0) throw new AppError(422, 'An invoice of nothing cannot be issued.');

@@ -11,6 +11,7 @@ import type { SessionUser } from '@/lib/auth/session';
 import type { JobListQuery, JobPatch, jobInputSchema } from '@/lib/validation/jobs';
 import { allOf, archivedWhere, pageOf, searchWhere, windowOf } from './list';
 import { assertOfficeWriter, crewJobsWhere } from './scope';
+import { archiveOrDelete } from './records';
 
 type Plain<M extends Model> = InferAttributes<M>;
 const ENTITY = 'job';
@@ -177,16 +178,7 @@ export async function archiveJob(user: SessionUser, id: string, reason?: string 
       Repair.count({ where: { jobId: id, companyId: user.companyId }, transaction }),
       Install.count({ where: { jobId: id, companyId: user.companyId }, transaction }),
     ]);
-    if (repairs + installs === 0) {
-      await job.destroy({ transaction });
-      await recordAudit(user, { action: 'delete', entityType: ENTITY, entityId: id, changes: { number: job.number }, reason }, transaction);
-      return { id, archived: false, deleted: true };
-    }
-    if (!job.archivedAt) {
-      await job.update({ archivedAt: new Date() }, { transaction });
-      await recordAudit(user, { action: 'archive', entityType: ENTITY, entityId: id, reason }, transaction);
-    }
-    return { id, archived: true, deleted: false };
+    return archiveOrDelete(user, job, { entityType: ENTITY, inUse: repairs + installs > 0, summary: { number: job.number }, reason }, transaction);
   });
 }
 

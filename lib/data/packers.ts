@@ -8,7 +8,7 @@ import { packerProblems, type PackerInput, type PackerListQuery, type packerPatc
 import { throwProblems } from '@/lib/validation/rules';
 import { allOf, archivedWhere, pageOf, searchWhere, windowOf } from './list';
 import { assertAdmin } from './scope';
-import { archiveOrDelete, createAudited, lockOwnRow, updateAudited } from './settings-records';
+import { archiveOrDelete, createAudited, lockOwnRow, updateAudited } from './records';
 
 const ENTITY = 'packer';
 
@@ -49,6 +49,6 @@ export async function archivePacker(user: SessionUser, id: string) {
   return sequelize.transaction(async (transaction) => {
     const row = await lockOwnRow(Packer, user, id, 'Packer', transaction);
     const installs = await Install.count({ where: { companyId: user.companyId, packerId: id }, transaction });
-    return archiveOrDelete(user, row, { entityType: ENTITY, inUse: installs > 0, archive: { archivedAt: new Date() }, isArchived: row.archivedAt !== null, name: row.name }, transaction);
+    return archiveOrDelete(user, row, { entityType: ENTITY, inUse: installs > 0, summary: { name: row.name } }, transaction);
   });
 }

@@ -13,7 +13,7 @@ import { throwProblems } from '@/lib/validation/rules';
 import { getCompany } from './company';
 import { allOf, archivedWhere, pageOf, searchWhere, windowOf } from './list';
 import { assertAdmin } from './scope';
-import { archiveOrDelete, lockOwnRow, updateAudited } from './settings-records';
+import { archiveOrDelete, lockOwnRow, updateAudited } from './records';
 
 const ENTITY = 'resin_kit';
 const systemName = { model: ResinSystem, as: 'resinSystem', attributes: ['id', 'name', 'archivedAt'] };
@@ -99,7 +99,7 @@ export async function archiveResinKit(user: SessionUser, id: string) {
   return sequelize.transaction(async (transaction) => {
     const row = await lockOwnRow(ResinKit, user, id, 'Resin kit', transaction);
     return archiveOrDelete(user, row, {
-      entityType: ENTITY, inUse: (await usedBy(user, id, transaction)) > 0, archive: { archivedAt: new Date() }, isArchived: row.archivedAt !== null, name: row.lot,
+      entityType: ENTITY, inUse: (await usedBy(user, id, transaction)) > 0, summary: { lot: row.lot },
     }, transaction);
   });
 }

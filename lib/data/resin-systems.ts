@@ -8,7 +8,7 @@ import { resinSystemProblems, type ResinSystemInput, type ResinSystemListQuery, 
 import { throwProblems } from '@/lib/validation/rules';
 import { allOf, archivedWhere, pageOf, searchWhere, windowOf } from './list';
 import { assertAdmin } from './scope';
-import { archiveOrDelete, createAudited, lockOwnRow, updateAudited } from './settings-records';
+import { archiveOrDelete, createAudited, lockOwnRow, updateAudited } from './records';
 
 const ENTITY = 'resin_system';
 
@@ -66,7 +66,7 @@ export async function archiveResinSystem(user: SessionUser, id: string) {
       Install.count({ where: { companyId: user.companyId, resinSystemId: id }, transaction }),
     ]);
     return archiveOrDelete(user, row, {
-      entityType: ENTITY, inUse: kits + installs > 0, archive: { archivedAt: new Date() }, isArchived: row.archivedAt !== null, name: row.name,
+      entityType: ENTITY, inUse: kits + installs > 0, summary: { name: row.name },
     }, transaction);
   });
 }

@@ -7,9 +7,9 @@ import { changedFields, recordAudit } from '@/lib/audit';
 import { AppError, notFound } from '@/lib/errors';
 import type { SessionUser } from '@/lib/auth/session';
 import { segmentShapeIssues, type SegmentListQuery, type segmentInputSchema, type segmentPatchSchema } from '@/lib/validation/segments';
-import { archiveOrDelete } from './archive';
 import { allOf, archivedWhere, pageOf, searchWhere, windowOf } from './list';
 import { assertOfficeWriter, crewJobsWhere } from './scope';
+import { archiveOrDelete } from './records';
 
 const ENTITY = 'segment';
 
@@ -99,7 +99,7 @@ export async function archiveSegment(user: SessionUser, id: string, reason?: str
     const segment = await Segment.findOne({ where: { id, companyId: user.companyId }, transaction, lock: transaction.LOCK.UPDATE });
     if (!segment) throw notFound('Segment');
     const repairs = await Repair.count({ where: { segmentId: id, companyId: user.companyId }, transaction });
-    return archiveOrDelete(user, segment, { entityType: ENTITY, summary: { siteId: segment.siteId, label: segment.label }, reason }, repairs, transaction);
+    return archiveOrDelete(user, segment, { entityType: ENTITY, inUse: repairs > 0, summary: { siteId: segment.siteId, label: segment.label }, reason }, transaction);
   });
 }
 

@@ -7,9 +7,9 @@ import { changedFields, recordAudit } from '@/lib/audit';
 import { AppError, notFound } from '@/lib/errors';
 import type { SessionUser } from '@/lib/auth/session';
 import type { SiteListQuery, siteInputSchema, sitePatchSchema } from '@/lib/validation/sites';
-import { archiveOrDelete } from './archive';
 import { allOf, archivedWhere, pageOf, searchWhere, windowOf } from './list';
 import { assertOfficeWriter, crewJobsWhere } from './scope';
+import { archiveOrDelete } from './records';
 
 const ENTITY = 'site';
 
@@ -107,7 +107,7 @@ export async function archiveSite(user: SessionUser, id: string, reason?: string
       Segment.count({ where: { siteId: id, companyId: user.companyId }, transaction }),
       Job.count({ where: { siteId: id, companyId: user.companyId }, transaction }),
     ]);
-    return archiveOrDelete(user, site, { entityType: ENTITY, summary: { name: site.name }, reason }, segments + jobs, transaction);
+    return archiveOrDelete(user, site, { entityType: ENTITY, inUse: segments + jobs > 0, summary: { name: site.name }, reason }, transaction);
   });
 }
 

@@ -6,7 +6,7 @@ import { verifyReportLink } from './link';
 // exists, was deleted, or belongs to someone else. A genuine but expired link may name its company.
 
 export type LinkAccess =
-  | { ok: true; data: NonNullable<Awaited<ReturnType<typeof getReportDataForLink>>> }
+  | { ok: true; data: NonNullable<Awaited<ReturnType<typeof getReportDataForLink>>>; claims: { jobId: string; companyId: string } }
   | { ok: false; status: 404 | 410; companyName: string | null };
 
 export async function openReportLink(token: string, options: { images?: boolean } = {}): Promise<LinkAccess> {
@@ -17,7 +17,7 @@ export async function openReportLink(token: string, options: { images?: boolean 
   }
   const data = await getReportDataForLink(check, options);
   if (!data) return { ok: false, status: 404, companyName: null };
-  return { ok: true, data };
+  return { ok: true, data, claims: { jobId: check.jobId, companyId: check.companyId } };
 }
 
 /** The sentence shown for every refused link. */

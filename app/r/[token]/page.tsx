@@ -1,7 +1,6 @@
 import { notFound } from 'next/navigation';
 import { CustomerInvoice } from '@/components/invoice/customer-invoice';
 import { ReportView } from '@/components/report/report-view';
-import { verifyReportLink } from '@/lib/report/link';
 import { openReportLink } from '@/lib/report/link-access';
 
 // The customer's read-only report behind a signed, expiring link (no account). A refused link
@@ -12,13 +11,12 @@ export default async function Page({ params, searchParams }: { params: Promise<{
   const { token } = await params;
   const access = await openReportLink(token);
   if (!access.ok) notFound();
-  const claims = verifyReportLink(token);
   const justPaid = (await searchParams).paid === '1';
   return (
     <ReportView
       data={access.data}
       pdfHref={`/r/${encodeURIComponent(token)}/pdf`}
-      invoiceSlot={claims.ok ? <CustomerInvoice companyId={claims.companyId} jobId={claims.jobId} token={token} justPaid={justPaid} /> : null}
+      invoiceSlot={<CustomerInvoice companyId={access.claims.companyId} jobId={access.claims.jobId} token={token} justPaid={justPaid} />}
     />
   );
 }
