@@ -21,8 +21,13 @@ export async function controlTime(page: Page) {
   let advancedMs = 0;
   await page.clock.install();
   await page.route('**/api/**', async (route) => {
-    const response = await route.fetch();
-    await route.fulfill({ response, headers: { ...response.headers(), date: new Date(Date.now() + advancedMs).toUTCString() } });
+    try {
+      const response = await route.fetch();
+      await route.fulfill({ response, headers: { ...response.headers(), date: new Date(Date.now() + advancedMs).toUTCString() } });
+    } catch {
+      // The test ended (or the page closed) while a poll was in flight: nothing is waiting for this answer.
+      await route.abort().catch(() => undefined);
+    }
   });
   return {
     advance: async (minutes: number) => {
