@@ -22,6 +22,14 @@ module.exports = {
 
   async down(queryInterface) {
     const names = [main.company.name, second.company.name];
-    await queryInterface.bulkDelete('companies', { name: names });
+    // The install log and audit trail refuse deletes (append-only triggers). Taking the demo out is
+    // the one deliberate exception: only the tables' owner may switch those triggers off, and only
+    // inside this transaction.
+    await queryInterface.sequelize.transaction(async (transaction) => {
+      const guarded = ['install_events', 'audit_entries'];
+      for (const table of guarded) await queryInterface.sequelize.query(`ALTER TABLE ${table} DISABLE TRIGGER USER`, { transaction });
+      await queryInterface.bulkDelete('companies', { name: names }, { transaction });
+      for (const table of guarded) await queryInterface.sequelize.query(`ALTER TABLE ${table} ENABLE TRIGGER USER`, { transaction });
+    });
   },
 };

@@ -5,6 +5,7 @@ import { AuditEntry, Install, InstallEvent, Job, Packer, Repair, ResinKit, seque
 import type { SessionUser } from '@/lib/auth/session';
 import { AppError, forbidden } from '@/lib/errors';
 import { mayDecide } from '@/lib/install/access';
+import { correctsDecision, deviceTimeProblem, isClosedInstall } from '@/lib/install/record-rules';
 import { isSameEvent } from '@/lib/install/same-event';
 import { correctionTarget, deriveInstallState, orderProblem, type InstallState } from '@/lib/install/state';
 import { eventPayloadSchemas, parseEventBody } from '@/lib/validation/install-events';
@@ -16,12 +17,18 @@ type ParsedEvent = Extract<ReturnType<typeof parseEventBody>, { success: true }>
 
 /**
  * Records one tap of the crew. A replay of the same tap (same clientEventId and body) answers with
- * the stored event and writes nothing; the same id with another body is a 409; an event that cannot
- * have happened now is a 422. Taps on one install are serialised by a lock on its row.
+ * the stored event and writes nothing; the same id with another body is a 409; so is any new tap on
+ * an approved or abandoned install; an event that cannot have happened now, or stamped outside the
+ * device-time bounds, is a 422. Taps on one install are serialised by a lock on its row.
  */
 export async function recordEvent(user: SessionUser, installId: string, input: unknown): Promise<{ event: InstallEventRow; created: boolean }> {
+  const receivedAt = new Date();
   await findInstallFor(user, installId);
   const body = parseBodyOrThrow(input);
+  // A queued tap carries who tapped it: it must never be stored under someone else's name.
+  if (body.userId !== undefined && body.userId !== user.id) {
+    throw forbidden('This tap was made by another user: it is sent only while they are signed in.');
+  }
   if (body.type === 'signed_off' && !mayDecide(user)) throw forbidden('Only the foreman can sign off an install.');
   if (body.type === 'go_decision' && body.payload.overrideReason !== undefined && !mayDecide(user)) {
     throw forbidden('Only the foreman can override a no-go.');
@@ -29,7 +36,7 @@ export async function recordEvent(user: SessionUser, installId: string, input: u
   // Read before the transaction: inside it, every query must use its connection, or ten taps
   // waiting on the lock could hold the whole pool while the eleventh query waits for one.
   const today = dayInZone(new Date(), (await getCompany(user)).timeZone);
-  const run = () => sequelize.transaction((t) => recordInTransaction(user, installId, body, today, t));
+  const run = () => sequelize.transaction((t) => recordInTransaction(user, installId, body, today, receivedAt, t));
   try {
     return await run();
   } catch (error) {
@@ -40,7 +47,7 @@ export async function recordEvent(user: SessionUser, installId: string, input: u
   }
 }
 
-async function recordInTransaction(user: SessionUser, installId: string, body: ParsedEvent, today: string, t: Transaction) {
+async function recordInTransaction(user: SessionUser, installId: string, body: ParsedEvent, today: string, receivedAt: Date, t: Transaction) {
   const install = await Install.findOne({ where: { id: installId, companyId: user.companyId }, lock: t.LOCK.UPDATE, transaction: t });
   if (!install) throw new AppError(404, 'Install was not found.');
 
@@ -55,6 +62,14 @@ async function recordInTransaction(user: SessionUser, installId: string, body: P
     const same = isSameEvent(existing, { ...body, installId, correctsEventId });
     if (!same) throw new AppError(409, 'That event id was already used for a different event');
     return { event: existing.get({ plain: true }), created: false };
+  }
+  // Only a replay (above) passes a closed record, so tablets can still drain their outboxes.
+  if (isClosedInstall(install.status)) {
+    throw new AppError(409, `This install is closed (${install.status}): nothing more can be recorded on it.`);
+  }
+  checkDeviceTimes(body, receivedAt);
+  if (body.type === 'correction' && !mayDecide(user) && correctsDecision(target?.type, correctionChanges(body.payload))) {
+    throw forbidden('Only the foreman can correct a go / no-go decision or a sign-off.');
   }
 
   const problem = orderProblem(state, { ...body, correctsEventId }, { reopened: install.status === 'sent_back' });
@@ -75,7 +90,7 @@ async function recordInTransaction(user: SessionUser, installId: string, body: P
       clientEventId: body.clientEventId,
       type: body.type,
       deviceTime: new Date(body.deviceTime),
-      receivedAt: new Date(),
+      receivedAt,
       userId: user.id,
       payload: body.payload,
       correctsEventId: target?.id ?? null,
@@ -193,6 +208,16 @@ async function writeAudit(user: SessionUser, install: Install, body: ParsedEvent
       { ...base, action: 'install.no_go_overridden', entityType: 'install', entityId: install.id, changes: { go: body.payload.go }, reason: body.payload.overrideReason },
       { transaction: t },
     );
+  }
+}
+
+/** The tap's time, and a correction's corrected time, must be near the server's receive time (422). */
+function checkDeviceTimes(body: ParsedEvent, receivedAt: Date) {
+  const own = deviceTimeProblem(body.deviceTime, receivedAt);
+  if (own) throw new AppError(422, own, { deviceTime: [own] });
+  if (body.type === 'correction' && typeof body.payload.deviceTime === 'string') {
+    const corrected = deviceTimeProblem(body.payload.deviceTime, receivedAt, 'The corrected time');
+    if (corrected) throw new AppError(422, corrected, { 'payload.deviceTime': [corrected] });
   }
 }
 

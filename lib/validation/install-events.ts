@@ -47,6 +47,8 @@ export const eventBodySchema = z.object({
   deviceTime: z.iso.datetime({ offset: true, error: 'deviceTime must be an ISO date-time' }),
   payload: z.record(z.string(), z.unknown()).default({}),
   correctsEventId: uuidSchema.optional(),
+  // The user who tapped it, as the tablet recorded it; when given it must be whoever is signed in.
+  userId: uuidSchema.optional(),
 });
 
 export type EventBody = z.infer<typeof eventBodySchema>;
