@@ -8,6 +8,7 @@ import { isDeskRole } from '@/lib/auth/roles';
 import type { SessionUser } from '@/lib/auth/session';
 import { AppError, forbidden, notFound } from '@/lib/errors';
 import { mayWorkOn } from '@/lib/install/access';
+import { isClosedInstall } from '@/lib/install/record-rules';
 import { makeThumbnail, sniffType } from '@/lib/storage/inspect';
 import {
   ALLOWED_SUMMARY, PENDING_UPLOAD_MAX_AGE_MS, SNIFF_BYTES, allowedType, formatBytes, objectKey, thumbnailKey, uploadRefusal,
@@ -28,6 +29,7 @@ export type EvidenceItem = Awaited<ReturnType<typeof itemOf>>;
  */
 export async function requestUpload(user: SessionUser, input: UploadRequest) {
   const target = await targetOf(user, input);
+  refuseClosedInstall(target.installStatus);
   const id = randomUUID();
   const storageKey = objectKey(user.companyId, target.jobId, id, input.contentType);
   await Attachment.create({
@@ -57,6 +59,8 @@ export async function completeUpload(user: SessionUser, id: string) {
   if (!row) throw notFound('Attachment');
   if (!isDeskRole(user.role) && row.uploadedById !== user.id) throw forbidden('Only whoever uploaded the file can complete it.');
   if (row.status === 'ready') return itemOf(user, row.get({ plain: true }), null);
+  // An upload asked for before approval and finished after it would slip into the customer's report.
+  if (row.installId) refuseClosedInstall((await Install.findOne({ where: { id: row.installId, companyId: user.companyId }, attributes: ['status'] }))?.status);
 
   const head = await headObject(row.storageKey);
   if (!head) throw new AppError(409, 'The upload was not found: send the file first, then complete it.');
@@ -151,19 +155,32 @@ export async function deleteAttachment(user: SessionUser, id: string, reason?: s
 }
 
 /**
- * Housekeeping (any company): uploads requested but never completed within a day are removed with
- * whatever bytes reached storage. Returns how many went. Meant for a periodic job.
+ * Housekeeping (any company): uploads requested but never completed within an hour are removed with
+ * whatever bytes reached storage, in batches until none is left. Returns how many went. Meant for a
+ * periodic queue job; a storage failure throws, leaving the rows for the next run.
  */
 export async function sweepPendingUploads(now = new Date(), maxAgeMs = PENDING_UPLOAD_MAX_AGE_MS) {
-  const stale = await Attachment.findAll({ where: { status: 'pending', createdAt: { [Op.lt]: new Date(now.getTime() - maxAgeMs) } }, limit: 500 });
-  for (const row of stale) {
-    await deleteObjects([row.storageKey, row.thumbnailKey]);
-    await Attachment.destroy({ where: { id: row.id, status: 'pending' } });
+  const cutoff = new Date(now.getTime() - maxAgeMs);
+  let swept = 0;
+  for (;;) {
+    const stale = await Attachment.findAll({ where: { status: 'pending', createdAt: { [Op.lt]: cutoff } }, order: [['createdAt', 'ASC']], limit: SWEEP_BATCH });
+    const before = swept;
+    for (const row of stale) {
+      // Locked and still pending, or skipped: a completion racing the sweep wins, and a second sweeper passes by.
+      swept += await sequelize.transaction(async (transaction) => {
+        const locked = await Attachment.findOne({ where: { id: row.id, status: 'pending' }, lock: transaction.LOCK.UPDATE, skipLocked: true, transaction });
+        if (!locked) return 0;
+        await deleteObjects([locked.storageKey, locked.thumbnailKey]);
+        return Attachment.destroy({ where: { id: locked.id }, transaction });
+      });
+    }
+    if (stale.length < SWEEP_BATCH || swept === before) return swept;
   }
-  return stale.length;
 }
 
-type Target = { jobId: string; repairId: string | null; installId: string | null };
+const SWEEP_BATCH = 200;
+
+type Target = { jobId: string; repairId: string | null; installId: string | null; installStatus: string | null };
 
 /** The job a repair, install or job id names, if the caller's company owns it (404) and their crew works it (403). */
 async function targetOf(user: SessionUser, ref: { repairId?: string; installId?: string; jobId?: string }): Promise<Target> {
@@ -172,21 +189,26 @@ async function targetOf(user: SessionUser, ref: { repairId?: string; installId?:
   if (ref.installId) {
     const install = await Install.findOne({ where: { id: ref.installId, companyId: user.companyId }, include: [{ model: Job, as: 'job', attributes: ['crewId'] }] });
     if (!install) throw notFound('Install');
-    target = { jobId: install.jobId, repairId: install.repairId, installId: install.id };
+    target = { jobId: install.jobId, repairId: install.repairId, installId: install.id, installStatus: install.status };
     crewIds = [install.crewId ?? null, (install as Install & { job?: Pick<Job, 'crewId'> }).job?.crewId ?? null];
   } else if (ref.repairId) {
     const repair = await Repair.findOne({ where: { id: ref.repairId, companyId: user.companyId }, include: [{ model: Job, as: 'job', attributes: ['crewId'] }] });
     if (!repair) throw notFound('Repair');
-    target = { jobId: repair.jobId, repairId: repair.id, installId: null };
+    target = { jobId: repair.jobId, repairId: repair.id, installId: null, installStatus: null };
     crewIds = [(repair as Repair & { job?: Pick<Job, 'crewId'> }).job?.crewId ?? null];
   } else {
     const job = await Job.findOne({ where: { id: ref.jobId!, companyId: user.companyId }, attributes: ['id', 'crewId'] });
     if (!job) throw notFound('Job');
-    target = { jobId: job.id, repairId: null, installId: null };
+    target = { jobId: job.id, repairId: null, installId: null, installStatus: null };
     crewIds = [job.crewId ?? null];
   }
   if (!mayWorkOn(user, crewIds)) throw forbidden('This job belongs to another crew.');
   return target;
+}
+
+/** An approved or abandoned install's evidence is closed: nothing new is added to it (409). */
+function refuseClosedInstall(status: string | null | undefined) {
+  if (status && isClosedInstall(status)) throw new AppError(409, `This install is closed (${status}): no more files can be added to it.`);
 }
 
 /** Deletes what arrived and the row, then answers 422: a refused upload leaves nothing behind. */

@@ -84,7 +84,8 @@ export async function buildReportData(companyId: string, jobId: string, { images
     order: [['finishedAt', 'DESC']],
   });
   const attachments = await Attachment.findAll({
-    where: { companyId, jobId, kind: { [Op.in]: ['before', 'after', 'inspection'] } },
+    // Only evidence whose bytes were checked on completion (size, sniffed type) reaches a customer.
+    where: { companyId, jobId, status: 'ready', kind: { [Op.in]: ['before', 'after', 'inspection'] } },
     order: [['createdAt', 'ASC']],
   });
   const loaded = images ? await loadReportImages(attachments.map((a) => a.get({ plain: true }))) : [];

@@ -20,8 +20,8 @@ export const ALLOWED_TYPES: readonly AllowedType[] = [
 /** How long a presigned upload or a signed download link stays valid. */
 export const UPLOAD_URL_SECONDS = 5 * 60;
 export const DOWNLOAD_URL_SECONDS = 5 * 60;
-/** Uploads never completed within this time may be swept away. */
-export const PENDING_UPLOAD_MAX_AGE_MS = 24 * 60 * 60 * 1000;
+/** Uploads never completed within this time are swept away (the presigned PUT lasts 5 minutes). */
+export const PENDING_UPLOAD_MAX_AGE_MS = 60 * 60 * 1000;
 /** Bytes read from the start of a stored file to tell its real type. */
 export const SNIFF_BYTES = 4100;
 export const THUMBNAIL_WIDTH = 320;

@@ -272,18 +272,24 @@ describe('attachments: presigned upload, server-side check, signed links', () =>
     await Install.update({ status: 'in_progress', signedOffAt: null }, { where: { id: installId } });
   });
 
-  it('sweeps uploads left pending for over a day, with their bytes, and leaves fresh ones', async () => {
+  it('sweeps uploads left pending for over an hour, with their bytes, and leaves fresh and ready ones', async () => {
     await signInAs(a.foreman);
     const stale = await send({ installId, kind: 'after', fileName: 'stale.png', contentType: 'image/png' }, png);
-    const fresh = await send({ installId, kind: 'after', fileName: 'fresh.png', contentType: 'image/png' }, png);
+    const recent = await send({ installId, kind: 'after', fileName: 'recent.png', contentType: 'image/png' }, png);
+    const done = await send({ installId, kind: 'after', fileName: 'done.png', contentType: 'image/png' }, png);
+    expect((await complete(done.id)).status).toBe(200);
     const now = new Date();
-    await Attachment.sequelize!.query('UPDATE attachments SET created_at = :at WHERE id = :id', {
-      replacements: { at: new Date(now.getTime() - 25 * 3600_000), id: stale.id },
-    });
+    const age = async (id: string, minutes: number) =>
+      Attachment.sequelize!.query('UPDATE attachments SET created_at = :at WHERE id = :id', { replacements: { at: new Date(now.getTime() - minutes * 60_000), id } });
+    await age(stale.id, 61);
+    await age(recent.id, 59);
+    await age(done.id, 24 * 60);
     expect(await sweepPendingUploads(now)).toBeGreaterThanOrEqual(1);
     expect(await Attachment.count({ where: { id: stale.id } })).toBe(0);
     expect(await headObject(stale.key)).toBeNull();
-    expect(await Attachment.count({ where: { id: fresh.id } })).toBe(1);
-    expect(await headObject(fresh.key)).not.toBeNull();
+    for (const kept of [recent, done]) {
+      expect(await Attachment.count({ where: { id: kept.id } })).toBe(1);
+      expect(await headObject(kept.key)).not.toBeNull();
+    }
   });
 });
