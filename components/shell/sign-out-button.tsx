@@ -12,10 +12,10 @@ export function SignOutButton({ className = '' }: { className?: string }) {
       className={className}
       disabled={pending}
       onClick={async () => {
-        // Queued taps are sent with whoever is signed in when the signal returns: warn before
-        // someone else's name ends up on them.
+        // Queued taps are sent only under the user who made them: once signed out, they wait on
+        // this tablet until that user signs in here again.
         const unsynced = await pendingCount().catch(() => 0);
-        if (unsynced > 0 && !window.confirm(`${unsynced} tap(s) are still only on this tablet. Wait for the signal so they sync under your name?\n\nOK signs out anyway.`)) return;
+        if (unsynced > 0 && !window.confirm(`${unsynced} tap(s) are still only on this tablet. They will wait here until you sign in again on it.\n\nOK signs out anyway.`)) return;
         setPending(true);
         void signOut({ callbackUrl: '/sign-in' });
       }}

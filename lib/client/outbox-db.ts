@@ -2,6 +2,7 @@ import { Dexie, type EntityTable } from 'dexie';
 
 // The IndexedDB database behind lib/client/outbox.ts. Only the outbox modules use it.
 
+/** 'rejected' is a tap the server refused for good: parked as "needs attention", kept on the tablet. */
 export type OutboxStatus = 'pending' | 'synced' | 'rejected';
 
 export type OutboxEntry = {
@@ -11,6 +12,10 @@ export type OutboxEntry = {
   deviceTime: string;
   payload: Record<string, unknown>;
   correctsEventId?: string;
+  /** Who tapped it: the entry is sent only while this user is signed in on the tablet. */
+  userId?: string;
+  /** Their name, for "waiting for <name> to sign in". */
+  userName?: string;
   /** Insertion order, monotonic: IndexedDB's key generator never hands a number out twice. */
   seq: number;
   status: OutboxStatus;
@@ -44,8 +49,22 @@ export function outboxDb(): OutboxDb {
 
 /** The first pending entry in insertion order. */
 export function firstPending(): Promise<OutboxEntry | undefined> {
-  return outboxDb().entries.where('[status+seq]').between(['pending', Dexie.minKey], ['pending', Dexie.maxKey]).first();
+  return pendingInOrder().first();
 }
+
+/**
+ * The first pending entry that `userId` may send: their own, or one queued before entries carried
+ * their user (sent under whoever is signed in, as it always was). Null `userId`: nobody known.
+ */
+export function firstSendable(userId: string | null): Promise<OutboxEntry | undefined> {
+  return pendingInOrder()
+    .filter((entry) => mayBeSentBy(entry, userId))
+    .first();
+}
+
+export const mayBeSentBy = (entry: Pick<OutboxEntry, 'userId'>, userId: string | null) => entry.userId === undefined || entry.userId === userId;
+
+const pendingInOrder = () => outboxDb().entries.where('[status+seq]').between(['pending', Dexie.minKey], ['pending', Dexie.maxKey]);
 
 export async function deleteOutboxDb(): Promise<void> {
   database?.close();

@@ -6,11 +6,12 @@ import { recordServerDate } from './server-clock';
 
 export type SendOutcome = { kind: 'synced' } | { kind: 'rejected' | 'retry'; message: string };
 
-// Session, role, throttling and timeouts are true of every entry alike and pass with time.
-const RETRY_STATUSES = new Set([401, 403, 408, 425, 429]);
+// No session, a timeout and throttling pass with time and are true of every entry alike: try again
+// later. Any other 4xx (a 403 included: this tap, by this user, is not allowed) will never succeed.
+const RETRY_STATUSES = new Set([401, 408, 429]);
 
 export async function sendEntry(entry: OutboxEntry, fetchImpl: typeof fetch, baseUrl: string, timeoutMs: number): Promise<SendOutcome> {
-  const { clientEventId, type, deviceTime, payload, correctsEventId } = entry;
+  const { clientEventId, type, deviceTime, payload, correctsEventId, userId } = entry;
   const controller = new AbortController();
   const timer = setTimeout(() => controller.abort(), timeoutMs);
   const started = Date.now();
@@ -18,7 +19,8 @@ export async function sendEntry(entry: OutboxEntry, fetchImpl: typeof fetch, bas
     const response = await fetchImpl(`${baseUrl}/api/installs/${encodeURIComponent(entry.installId)}/events`, {
       method: 'POST',
       headers: { 'content-type': 'application/json', accept: 'application/json' },
-      body: JSON.stringify({ clientEventId, type, deviceTime, payload, ...(correctsEventId ? { correctsEventId } : {}) }),
+      // The server refuses (403) a tap whose user is not the one signed in.
+      body: JSON.stringify({ clientEventId, type, deviceTime, payload, ...(correctsEventId ? { correctsEventId } : {}), ...(userId ? { userId } : {}) }),
       signal: controller.signal,
     });
     // Every answer is a clock sample for free.

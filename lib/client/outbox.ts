@@ -1,7 +1,7 @@
 import { Dexie, liveQuery } from 'dexie';
 import { uuidSchema } from '@/lib/validation/common';
 import { parseEventBody } from '@/lib/validation/install-events';
-import { deleteOutboxDb, firstPending, outboxDb, type OutboxEntry } from './outbox-db';
+import { deleteOutboxDb, firstSendable, mayBeSentBy, outboxDb, type OutboxEntry } from './outbox-db';
 import { sendEntry } from './outbox-send';
 
 // The on-device outbox: every tap of an install is written to IndexedDB first and sent
@@ -9,25 +9,33 @@ import { sendEntry } from './outbox-send';
 //
 // Order and failure policy of flushOutbox:
 // - Entries go strictly in insertion order (`seq`), one request at a time, across installs.
-// - No answer, a timeout, 401/403 (session or role: true of every entry alike), 408/425/429
-//   and 5xx stop the whole flush with the entry still pending: the next one would fail alike,
-//   and going on would send a later tap before an earlier one.
-// - Any other 4xx (400, 404, 409, 422 …) will never succeed: the entry becomes 'rejected' with
-//   the server's message, stays on the tablet to be seen, and the flush goes on — including
-//   later entries of the same install, because the server orders an install's events by
-//   their device time, not by arrival, and one bad tap must not hold back the rest.
+// - Each entry carries the user who tapped it and is sent only while that user is signed in on
+//   this tablet (setOutboxUser): other users' entries stay pending, skipped, "waiting for <name>
+//   to sign in", and never go out under someone else's session.
+// - No answer, a timeout, 401 (no session), 408, 429 and 5xx stop the whole flush with the entry
+//   still pending: the next one would fail alike, and going on would send a later tap before an
+//   earlier one.
+// - Any other 4xx (400, 403, 404, 409, 422 …) will never succeed: the entry becomes 'rejected'
+//   ("needs attention") with the server's message, stays on the tablet to be seen, and the flush
+//   goes on — including later entries of the same install, because the server orders an install's
+//   events by their device time, not by arrival, and one bad tap must not hold back the rest.
 // - The server must answer a replayed clientEventId with 2xx: an entry whose answer was lost
 //   on the way back is sent again.
 
 export type { OutboxEntry, OutboxStatus } from './outbox-db';
 
-export type NewOutboxEvent = Pick<OutboxEntry, 'installId' | 'clientEventId' | 'type' | 'deviceTime' | 'payload' | 'correctsEventId'>;
+export type NewOutboxEvent = Pick<OutboxEntry, 'installId' | 'clientEventId' | 'type' | 'deviceTime' | 'payload' | 'correctsEventId' | 'userId' | 'userName'>;
+
+/** Who is signed in on this tablet, as far as the outbox knows. */
+export type OutboxUser = { id: string; name: string };
 
 export interface FlushOptions {
   fetchImpl?: typeof fetch;
   baseUrl?: string;
   /** A request on a weak signal can hang for minutes; past this it counts as no answer. */
   timeoutMs?: number;
+  /** Whose entries to send; default the user given to setOutboxUser (or startOutboxSync). */
+  userId?: string | null;
 }
 
 export interface FlushResult {
@@ -37,6 +45,8 @@ export interface FlushResult {
   remaining: number;
   /** Why the flush stopped with entries left to retry; absent when it ran to the end. */
   failed?: string;
+  /** Of `remaining`, entries of other users waiting for them to sign in; absent when none. */
+  waiting?: number;
 }
 
 /** A tap that cannot be stored as it is (caught before it reaches the outbox). */
@@ -48,6 +58,13 @@ export class OutboxInputError extends Error {
 }
 
 const LOCK_NAME = 'setline-outbox-flush';
+
+let signedInUserId: string | null = null;
+
+/** Tells the outbox who is signed in (null: nobody known), so it sends only that user's taps. */
+export function setOutboxUser(user: OutboxUser | null): void {
+  signedInUserId = user?.id ?? null;
+}
 const DEFAULT_TIMEOUT_MS = 20_000;
 
 /**
@@ -108,6 +125,8 @@ export function flushOutbox(options: FlushOptions = {}): Promise<FlushResult> {
 }
 
 export interface OutboxSyncOptions extends FlushOptions {
+  /** The signed-in user: only their taps are sent (see setOutboxUser). */
+  user?: OutboxUser | null;
   /** Wait between flushes while all is well, and the first wait after a failure, ms. */
   minDelayMs?: number;
   /** The longest wait while flushes keep failing, ms. */
@@ -121,7 +140,8 @@ export interface OutboxSyncOptions extends FlushOptions {
  * (doubling from minDelayMs up to maxDelayMs) while flushes fail. Returns the stop function.
  */
 export function startOutboxSync(options: OutboxSyncOptions = {}): () => void {
-  const { minDelayMs = 5_000, maxDelayMs = 60_000, onResult, ...flushOptions } = options;
+  const { minDelayMs = 5_000, maxDelayMs = 60_000, onResult, user, ...flushOptions } = options;
+  if (user !== undefined) setOutboxUser(user);
   let failures = 0;
   let timer: ReturnType<typeof setTimeout> | undefined;
   let busy = false;
@@ -192,16 +212,17 @@ export async function pruneSynced(olderThanMs = 7 * 24 * 3600_000, now = Date.no
 export async function resetOutboxForTests(): Promise<void> {
   await inFlight?.catch(() => undefined);
   inFlight = null;
+  signedInUserId = null;
   enqueuedListeners.clear();
   await deleteOutboxDb();
 }
 
 const enqueuedListeners = new Set<() => void>();
 
-async function drain({ fetchImpl = fetch, baseUrl = '', timeoutMs = DEFAULT_TIMEOUT_MS }: FlushOptions): Promise<FlushResult> {
+async function drain({ fetchImpl = fetch, baseUrl = '', timeoutMs = DEFAULT_TIMEOUT_MS, userId = signedInUserId }: FlushOptions): Promise<FlushResult> {
   const table = outboxDb().entries;
   const result: FlushResult = { synced: 0, rejected: 0, remaining: 0 };
-  for (let entry = await firstPending(); entry; entry = await firstPending()) {
+  for (let entry = await firstSendable(userId); entry; entry = await firstSendable(userId)) {
     const outcome = await sendEntry(entry, fetchImpl, baseUrl, timeoutMs);
     const attempts = entry.attempts + 1;
     if (outcome.kind === 'synced') {
@@ -217,6 +238,8 @@ async function drain({ fetchImpl = fetch, baseUrl = '', timeoutMs = DEFAULT_TIME
     }
   }
   result.remaining = await pendingCount();
+  const waiting = await table.where('status').equals('pending').filter((entry) => !mayBeSentBy(entry, userId)).count();
+  if (waiting > 0) result.waiting = waiting;
   return result;
 }
 
@@ -248,5 +271,7 @@ function validate(body: NewOutboxEvent): Omit<OutboxEntry, 'seq' | 'status' | 'a
     throw new OutboxInputError(path ? `${path}: ${issue.message}` : issue.message);
   }
   const { clientEventId, type, deviceTime, payload, correctsEventId } = parsed.data;
-  return { installId: body.installId, clientEventId, type, deviceTime, payload, ...(correctsEventId ? { correctsEventId } : {}) };
+  if (body.userId !== undefined && !uuidSchema.safeParse(body.userId).success) throw new OutboxInputError('userId: Not a valid id');
+  const who = body.userId === undefined ? {} : { userId: body.userId, userName: body.userName ?? '' };
+  return { installId: body.installId, clientEventId, type, deviceTime, payload, ...(correctsEventId ? { correctsEventId } : {}), ...who };
 }

@@ -103,7 +103,7 @@ describe('flushOutbox', () => {
     expect((await listEntries())[1].lastError).toBeUndefined();
   });
 
-  it.each([500, 503, 401, 403, 429])('treats %i as try-again-later: stops, entry stays pending', async (status) => {
+  it.each([500, 503, 401, 408, 429])('treats %i as try-again-later: stops, entry stays pending', async (status) => {
     await enqueueEvent(tap());
     await enqueueEvent(tap(INSTALL_B));
     const server = fakeServer(() => ({ status, message: 'not now' }));
@@ -112,7 +112,7 @@ describe('flushOutbox', () => {
     expect(server.sent).toHaveLength(1);
   });
 
-  it.each([409, 422, 400, 404])('marks %i rejected with the server message, and still sends the next entry', async (status) => {
+  it.each([409, 422, 400, 404, 403, 425])('marks %i rejected with the server message, and still sends the next entry', async (status) => {
     const bad = await enqueueEvent(tap(INSTALL_A, 'note', 0));
     const next = await enqueueEvent(tap(INSTALL_A, 'note', 1));
     const server = fakeServer((request) => (request.body.clientEventId === bad.clientEventId ? { status, message: 'Inflated before the resin was mixed.' } : 201));

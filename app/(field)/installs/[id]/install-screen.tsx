@@ -25,14 +25,14 @@ import { StepSafety } from './step-safety';
 import { SyncStatus } from './sync-status';
 import { useInstall } from './use-install';
 
-type Viewer = { name: string; role: string };
+type Viewer = { id: string; name: string; role: string };
 
 /** Inspection images are taken once the bladder is down: while inspecting, before and after sign-off. */
 const AFTER_DEFLATE = ['inspect', 'sign_off', 'done'];
 
 /** The timed install at the manhole: one primary action at a time, every step an install event. */
 export function InstallScreen({ initial, viewer }: { initial: InstallViewResponse; viewer: Viewer }) {
-  const { view, state, local, queued, rejected, tap } = useInstall(initial.install.id, initial);
+  const { view, state, local, queued, waiting, rejected, tap } = useInstall(initial.install.id, initial, viewer);
   const now = useNow(1000);
   const [skipDryRun, setSkipDryRun] = useState(false);
   const [editingConditions, setEditingConditions] = useState(false);
@@ -40,7 +40,8 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
   const { plan, flags } = useMemo(() => liveClock(view, state, now), [view, state, now]);
   const clockRunning = !!state.mixedAt && !state.deflatedAt;
   useWakeLock(clockRunning);
-  useEffect(() => startOutboxSync(), []);
+  // Only the signed-in user's taps are sent; anyone else's wait on the tablet for them.
+  useEffect(() => startOutboxSync({ user: { id: viewer.id, name: viewer.name } }), [viewer.id, viewer.name]);
 
   const kits = view.options.resinKits.map((k) => ({ id: k.id, lot: k.lot, expiresOn: k.expiresOn, expired: k.expired, resinName: k.resinSystem.name }));
   const packers = view.options.packers.map((p) => ({ id: p.id, name: p.name, fits: p.fits, reasons: p.reasons }));
@@ -73,7 +74,7 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
           {view.repair.clockPosition ? ` · ${view.repair.clockPosition} o'clock` : ''}
         </p>
       </header>
-      <SyncStatus queued={queued} rejected={rejected} />
+      <SyncStatus queued={queued} waiting={waiting} rejected={rejected} />
       <ClockStrip deadlines={deadlinesOf(state, plan)} now={now} timeZone={view.company.timeZone} />
       {flags.length > 0 && (
         <ul className="space-y-2" data-testid="flags">

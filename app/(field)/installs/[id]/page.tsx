@@ -22,5 +22,5 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
     throw error;
   }
   // Through JSON, so the client gets exactly what GET /api/installs/:id would give it.
-  return <InstallScreen initial={JSON.parse(JSON.stringify(view))} viewer={{ name: user.name, role: user.role }} />;
+  return <InstallScreen initial={JSON.parse(JSON.stringify(view))} viewer={{ id: user.id, name: user.name, role: user.role }} />;
 }

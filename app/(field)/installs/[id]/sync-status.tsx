@@ -1,9 +1,10 @@
 'use client';
 
 import type { OutboxEntry } from '@/lib/client/outbox';
+import { OutboxNotices } from './outbox-notices';
 
-/** Always visible: how many taps are only on this tablet, and any the server refused. */
-export function SyncStatus({ queued, rejected }: { queued: OutboxEntry[]; rejected: OutboxEntry[] }) {
+/** Always visible: how many taps are only on this tablet, any waiting for another user, and any the server refused. */
+export function SyncStatus({ queued, waiting = [], rejected }: { queued: OutboxEntry[]; waiting?: OutboxEntry[]; rejected: OutboxEntry[] }) {
   return (
     <div className="space-y-2" aria-live="polite">
       {queued.length > 0 ? (
@@ -13,11 +14,7 @@ export function SyncStatus({ queued, rejected }: { queued: OutboxEntry[]; reject
       ) : (
         <p className="rounded-lg bg-safe-100 px-4 py-2 text-lg font-semibold text-safe-700" data-testid="sync-status">All taps synced</p>
       )}
-      {rejected.map((entry) => (
-        <p key={entry.clientEventId} className="rounded-lg bg-missed-100 px-4 py-2 text-base text-missed-700">
-          Not accepted ({entry.type.replace(/_/g, ' ')}): {entry.lastError}
-        </p>
-      ))}
+      <OutboxNotices waiting={waiting} parked={rejected} />
     </div>
   );
 }

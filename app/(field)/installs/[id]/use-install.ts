@@ -5,7 +5,7 @@ import useSWR from 'swr';
 import type { InstallViewResponse } from '@/app/api/installs/[id]/route';
 import { deriveInstallState, type InstallEventInput } from '@/lib/install/state';
 import { fetchJson } from '@/lib/client/fetch-json';
-import { enqueueEvent, flushOutbox, listEntries, subscribe, type OutboxEntry } from '@/lib/client/outbox';
+import { enqueueEvent, flushOutbox, listEntries, subscribe, type OutboxEntry, type OutboxUser } from '@/lib/client/outbox';
 import { serverNow } from '@/lib/client/server-clock';
 import type { InstallEventType } from '@/lib/domain';
 
@@ -13,7 +13,7 @@ import type { InstallEventType } from '@/lib/domain';
  * The install as this tablet knows it: the server's view (SWR, revalidated every few seconds so a
  * second tablet shows the same clock) merged with taps still waiting in the on-device outbox.
  */
-export function useInstall(id: string, fallbackData: InstallViewResponse) {
+export function useInstall(id: string, fallbackData: InstallViewResponse, viewer: OutboxUser) {
   const { data, mutate } = useSWR<InstallViewResponse>(`/api/installs/${id}`, (url: string) => fetchJson<InstallViewResponse>(url), {
     fallbackData,
     refreshInterval: 5000,
@@ -42,7 +42,10 @@ export function useInstall(id: string, fallbackData: InstallViewResponse) {
   // Taps the server's view does not show yet count as happened, the crew's screen must move on at
   // once: those still queued, and those just sent whose echo has not come back through SWR.
   const local = entries.filter((e) => e.status !== 'rejected' && !serverIds.has(e.clientEventId));
-  const queued = entries.filter((e) => e.status === 'pending');
+  // Taps of someone else on this tablet wait for them to sign in again; they are not "about to sync".
+  const isOthers = (e: OutboxEntry) => e.userId !== undefined && e.userId !== viewer.id;
+  const queued = entries.filter((e) => e.status === 'pending' && !isOthers(e));
+  const waiting = entries.filter((e) => e.status === 'pending' && isOthers(e));
   const rejected = entries.filter((e) => e.status === 'rejected');
   const state = useMemo(() => {
     const fromServer: InstallEventInput[] = view.events.map((e) => ({ ...e }));
@@ -63,12 +66,12 @@ export function useInstall(id: string, fallbackData: InstallViewResponse) {
   const tap = useCallback(
     async (type: InstallEventType, payload: Record<string, unknown> = {}, correctsEventId?: string) => {
       const deviceTime = new Date(Math.max(serverNow().getTime(), latestMs + 1)).toISOString();
-      await enqueueEvent({ installId: id, clientEventId: crypto.randomUUID(), type, deviceTime, payload, correctsEventId });
+      await enqueueEvent({ installId: id, clientEventId: crypto.randomUUID(), type, deviceTime, payload, correctsEventId, userId: viewer.id, userName: viewer.name });
       // Sending is best effort: the outbox keeps the tap and the sync loop retries.
       void flushOutbox().then(() => mutate());
     },
-    [id, mutate, latestMs],
+    [id, mutate, latestMs, viewer.id, viewer.name],
   );
 
-  return { view, state, local, queued, rejected, tap };
+  return { view, state, local, queued, waiting, rejected, tap };
 }
