@@ -7,6 +7,9 @@ import { newInstall, prepareToMix, serverView, tap, waitForSync } from './instal
 
 type Event = { clientEventId: string; type: string; userId: string };
 
+// Two tablets, sign-outs and sign-ins: slow on a busy machine.
+test.describe.configure({ timeout: 180_000 });
+
 test('a refused tap is parked as needing attention while the next taps sync', async ({ browser }) => {
   const foremanContext = await browser.newContext();
   const techContext = await browser.newContext();
@@ -14,13 +17,13 @@ test('a refused tap is parked as needing attention while the next taps sync', as
   const tech = await techContext.newPage();
   await signIn(foreman, 'foreman@demo.test');
   await signIn(tech, 'tech@demo.test');
-  await expect(tech).toHaveURL('/today');
+  await expect(tech).toHaveURL('/today', { timeout: 30_000 });
   const id = await newInstall(foreman, '-0003', 0);
   await foreman.goto(`/installs/${id}`);
   await prepareToMix(foreman, async () => foreman.waitForTimeout(1500));
   await waitForSync(foreman);
   await tech.goto(`/installs/${id}`);
-  await expect(tech.getByTestId('step-mix')).toBeVisible();
+  await expect(tech.getByTestId('step-mix')).toBeVisible({ timeout: 30_000 });
 
   // The technician's tablet loses its signal; meanwhile the foreman mixes on his.
   await techContext.setOffline(true);
@@ -28,7 +31,7 @@ test('a refused tap is parked as needing attention while the next taps sync', as
   await waitForSync(foreman);
   await tap(tech, 'Resin mixed');
   await tap(tech, 'Patch loaded');
-  await expect(tech.getByTestId('sync-status')).toHaveText(/^2 taps saved on this tablet/);
+  await expect(tech.getByTestId('sync-status')).toHaveText(/^2 taps saved on this tablet/, { timeout: 30_000 });
 
   await techContext.setOffline(false);
   // The second "mixed" cannot have happened (422): parked with the server's reason; "loaded" goes through.
@@ -56,7 +59,7 @@ test('a refused tap is parked as needing attention while the next taps sync', as
 
 test('a tap waits on the tablet for the user who made it, not whoever signs in next', async ({ page, context }) => {
   await signIn(page, 'foreman@demo.test');
-  await expect(page).toHaveURL('/today');
+  await expect(page).toHaveURL('/today', { timeout: 30_000 });
   const id = await newInstall(page, '-0003', 0);
   await page.goto(`/installs/${id}`);
   await expect(page.getByTestId('step-safety')).toBeVisible();
@@ -71,9 +74,9 @@ test('a tap waits on the tablet for the user who made it, not whoever signs in n
   await second.goto('/today');
   await signOutAccepting(second);
   await signIn(second, 'tech@demo.test');
-  await expect(second).toHaveURL('/today');
+  await expect(second).toHaveURL('/today', { timeout: 30_000 });
   await second.goto(`/installs/${id}`);
-  await expect(second.getByTestId('outbox-waiting')).toHaveText('1 tap waiting for Mateo Varga to sign in');
+  await expect(second.getByTestId('outbox-waiting')).toHaveText('1 tap waiting for Mateo Varga to sign in', { timeout: 30_000 });
   await expect(second.getByTestId('sync-status')).toHaveText('All taps synced');
   await second.waitForTimeout(6000);
   expect((await serverView(second, id)).events).toEqual([]);
@@ -81,7 +84,7 @@ test('a tap waits on the tablet for the user who made it, not whoever signs in n
   // Back under the foreman's own session it goes out, in his name.
   await signOutAccepting(second);
   await signIn(second, 'foreman@demo.test');
-  await expect(second).toHaveURL('/today');
+  await expect(second).toHaveURL('/today', { timeout: 30_000 });
   await second.goto(`/installs/${id}`);
   await expect(second.getByTestId('outbox-waiting')).toHaveCount(0, { timeout: 20_000 });
   await expect.poll(async () => (await serverView(second, id)).events.map((e: Event) => e.type), { timeout: 20_000 }).toEqual(['safety_acknowledged']);
@@ -90,5 +93,5 @@ test('a tap waits on the tablet for the user who made it, not whoever signs in n
 async function signOutAccepting(page: Page) {
   page.once('dialog', (dialog) => void dialog.accept());
   await page.getByRole('button', { name: 'Sign out' }).click();
-  await expect(page).toHaveURL(/\/sign-in/);
+  await expect(page).toHaveURL(/\/sign-in/, { timeout: 30_000 });
 }
