@@ -1,7 +1,6 @@
 'use strict';
 // Defect types get our own plain-English codes in natural word order, and a repair gets an optional free-text
 // "owner's defect code" for owners who require their own coding standard (stored as typed, no built-in list).
-const { DataTypes } = require('sequelize');
 const { addCheck, inList } = require('../scripts/migration-helpers.cjs');
 
 // Old code → new code. Down maps back, so a rollback leaves every row as it was.
@@ -34,13 +33,14 @@ module.exports = {
   async up(queryInterface) {
     await queryInterface.sequelize.transaction(async (transaction) => {
       await recode(queryInterface, transaction, RENAMES);
-      await queryInterface.addColumn('repairs', 'owner_defect_code', { type: DataTypes.STRING(60) }, { transaction });
+      // Raw SQL on the unqualified name (not addColumn, which pins "public"), so the test can run this on a scratch schema.
+      await queryInterface.sequelize.query('ALTER TABLE "repairs" ADD COLUMN "owner_defect_code" VARCHAR(60)', { transaction });
     });
   },
 
   async down(queryInterface) {
     await queryInterface.sequelize.transaction(async (transaction) => {
-      await queryInterface.removeColumn('repairs', 'owner_defect_code', { transaction });
+      await queryInterface.sequelize.query('ALTER TABLE "repairs" DROP COLUMN "owner_defect_code"', { transaction });
       await recode(queryInterface, transaction, RENAMES.map(([from, to]) => [to, from]));
     });
   },

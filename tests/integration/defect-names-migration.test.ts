@@ -51,5 +51,8 @@ describe('migration 20261202001210-own-defect-names: stored defect codes up and 
     expect(await refuses('lengthwise_crack')).toBe(true);
     const [columns] = await scoped.query(`SELECT column_name FROM information_schema.columns WHERE table_schema = '${SCHEMA}' AND table_name = 'repairs'`);
     expect(columns.map((c) => (c as { column_name: string }).column_name)).not.toContain('owner_defect_code');
+    // The real table of the test database was not touched.
+    const [real] = await sequelize.query("SELECT 1 FROM information_schema.columns WHERE table_schema = 'public' AND table_name = 'repairs' AND column_name = 'owner_defect_code'");
+    expect(real).toHaveLength(1);
   });
 });
