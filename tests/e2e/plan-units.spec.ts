@@ -20,6 +20,7 @@ async function fill(plan: ReturnType<Page['getByRole']>, values: Record<string, 
 
 test('an imperial company’s plan page reads inches, feet and psi only, and names the checks it ran', async ({ page }) => {
   await signIn(page, 'office@demo.test');
+  await expect(page).not.toHaveURL(/sign-in/);
   const plan = await openPlannedRepair(page);
   // Too thin for 10 ft of water, and shorter than the defect plus overlap: every kind of warning shows.
   await fill(plan, { 'Groundwater head': '10', 'Laminate thickness': '0.05', 'Length to check': '6' });
@@ -39,6 +40,7 @@ test('an imperial company’s plan page reads inches, feet and psi only, and nam
 
 test('a metric company’s plan page reads millimetres, metres and kPa only', async ({ page }) => {
   await signIn(page, 'office@second.test');
+  await expect(page).not.toHaveURL(/sign-in/);
   const plan = await openPlannedRepair(page);
   await fill(plan, { 'Groundwater head': '3', 'Laminate thickness': '1', 'Length to check': '150' });
   await expect(plan.getByRole('alert')).toContainText('too thin');
