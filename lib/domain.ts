@@ -20,10 +20,13 @@ export const JOB_STATUSES = [
 ] as const;
 export type JobStatus = (typeof JOB_STATUSES)[number];
 
+// Our own plain-English names in natural word order; an owner who requires a coding standard gets its code in
+// the repair's free-text ownerDefectCode instead (migrations/20261202001210-own-defect-names.cjs).
 export const DEFECT_TYPES = [
-  'crack_longitudinal', 'crack_circumferential', 'crack_multiple', 'fracture', 'broken', 'hole', 'joint_offset',
-  'joint_separated', 'root_intrusion', 'infiltration', 'deformation', 'corrosion', 'lateral_intrusion', 'other',
+  'lengthwise_crack', 'ring_crack', 'crazed_cracks', 'open_fracture', 'broken_wall', 'hole', 'joint_out_of_line',
+  'joint_gap', 'roots', 'water_getting_in', 'out_of_round', 'wall_loss', 'lateral_sticking_in', 'other',
 ] as const;
+export type DefectType = (typeof DEFECT_TYPES)[number];
 export const REPAIR_STATUSES = ['planned', 'installed', 'failed', 'cancelled'] as const;
 
 export const RESIN_CHEMISTRIES = ['epoxy', 'silicate', 'polyester', 'vinyl_ester', 'other'] as const;
@@ -56,6 +59,10 @@ export const LABELS: Record<string, string> = {
   issued: 'Issued', paid: 'Paid', void: 'Void',
   manhole: 'Manhole', cleanout: 'Cleanout', other: 'Other',
   pvc: 'PVC', hdpe: 'HDPE',
+  lengthwise_crack: 'Lengthwise crack', ring_crack: 'Ring crack', crazed_cracks: 'Crazed / multiple cracks',
+  open_fracture: 'Open fracture', broken_wall: 'Broken wall', hole: 'Hole', joint_out_of_line: 'Joint out of line',
+  joint_gap: 'Joint gap', roots: 'Roots', water_getting_in: 'Water getting in', out_of_round: 'Out of round',
+  wall_loss: 'Wall loss', lateral_sticking_in: 'Side connection sticking in',
 };
 
 export const label = (code: string) => LABELS[code] ?? code.replace(/_/g, ' ').replace(/^./, (c) => c.toUpperCase());

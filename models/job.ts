@@ -45,6 +45,8 @@ export class Repair extends Model<InferAttributes<Repair>, InferCreationAttribut
   declare plannedOvalityPct: CreationOptional<number | null>;
   declare status: CreationOptional<(typeof REPAIR_STATUSES)[number]>;
   declare notes: CreationOptional<string | null>;
+  /** The owner's own code for the defect, when the owner requires a coding standard: stored as typed. */
+  declare ownerDefectCode: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -89,6 +91,7 @@ export function initJob(sequelize: Sequelize) {
       plannedOvalityPct: decimal(4, 1),
       status: { type: DataTypes.STRING(16), allowNull: false, defaultValue: 'planned', validate: { isIn: [REPAIR_STATUSES] } },
       notes: DataTypes.TEXT,
+      ownerDefectCode: DataTypes.STRING(60),
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },

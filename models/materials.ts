@@ -17,6 +17,9 @@ export class ResinSystem extends Model<InferAttributes<ResinSystem>, InferCreati
   declare sensitivityKind: CreationOptional<(typeof SENSITIVITY_KINDS)[number]>;
   declare doublingC: CreationOptional<number | null>;
   declare activationEnergyKj: CreationOptional<number | null>;
+  /** Resin to fabric by volume in the wet-out laminate, and the extra mixed beyond it (%), for the resin quantity. */
+  declare resinToFabricRatio: CreationOptional<number>;
+  declare resinExcessPct: CreationOptional<number>;
   declare archivedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -89,6 +92,8 @@ export function initMaterials(sequelize: Sequelize) {
       sensitivityKind: { type: DataTypes.STRING(16), allowNull: false, defaultValue: 'doubling', validate: { isIn: [SENSITIVITY_KINDS] } },
       doublingC: decimal(5, 2),
       activationEnergyKj: decimal(6, 2, { field: 'activation_energy_kj' }),
+      resinToFabricRatio: decimal(4, 2, { allowNull: false, defaultValue: 1 }),
+      resinExcessPct: decimal(4, 1, { allowNull: false, defaultValue: 10 }),
       archivedAt: DataTypes.DATE,
     },
     { sequelize, modelName: 'ResinSystem', tableName: 'resin_systems', underscored: true },

@@ -10,6 +10,7 @@ import { installClock } from '@/lib/install/clock';
 import { mayWorkOn } from '@/lib/install/access';
 import { deriveInstallState } from '@/lib/install/state';
 import { SizingInputError, fittingPackers, patchLength } from '@/lib/sizing';
+import type { UnitSystem } from '@/lib/units';
 import type { CreateInstallInput } from '@/lib/validation/install-events';
 import { getCompany } from './company';
 import { dayInZone } from '@/lib/dates';
@@ -128,7 +129,7 @@ export async function getInstallView(user: SessionUser, id: string, now = new Da
     options: {
       resinKits: kits.map((kit) => ({ ...(kit.get({ plain: true }) as ResinKitWithSystem), expired: kit.expiresOn < today })),
       patchLengthMm,
-      packers: patchLengthMm === null ? [] : packerFits(packers, segment.insideDiameterMm, patchLengthMm),
+      packers: patchLengthMm === null ? [] : packerFits(packers, segment.insideDiameterMm, patchLengthMm, company.unitSystem as UnitSystem),
       checklist: checklistTemplate ? { id: checklistTemplate.id, name: checklistTemplate.name, items: checklistTemplate.items } : null,
     },
     company: {
@@ -177,7 +178,7 @@ async function findExisting(user: SessionUser, input: CreateInstallInput): Promi
   return existing.get({ plain: true });
 }
 
-function packerFits(packers: Packer[], insideDiameterMm: number, patchLengthMm: number) {
+function packerFits(packers: Packer[], insideDiameterMm: number, patchLengthMm: number, system: UnitSystem) {
   const fleet = packers.map((p) => ({
     id: p.id,
     name: p.name,
@@ -190,7 +191,7 @@ function packerFits(packers: Packer[], insideDiameterMm: number, patchLengthMm: 
     maxPressureKpa: p.maxPressureKpa,
   }));
   try {
-    const fits = fittingPackers(fleet, { insideDiameterMm, patchLengthMm });
+    const fits = fittingPackers(fleet, { insideDiameterMm, patchLengthMm }, system);
     return fleet.map((packer, i) => ({ ...packer, fits: fits[i].fits, endMarginEachMm: fits[i].endMarginEachMm, reasons: fits[i].reasons }));
   } catch (error) {
     // A packer row or repair the sizing cannot read must not take the install screen down.

@@ -1,13 +1,13 @@
 import 'server-only';
 import { Op, type InferAttributes, type Model, type Transaction } from 'sequelize';
-import { AccessPoint, Company, Install, Job, Packer, Repair, Segment } from '@/models';
+import { AccessPoint, Company, Install, Job, Packer, Repair, ResinSystem, Segment } from '@/models';
 import { sequelize } from '@/lib/db';
 import { changedFields, recordAudit } from '@/lib/audit';
 import { AppError, notFound } from '@/lib/errors';
 import { REPAIRS_EDITABLE } from '@/lib/jobs/status';
 import { PLAN_CAUTION, planRepair } from '@/lib/planning/plan-repair';
 import { fittingPackers, patchLength } from '@/lib/sizing';
-import { convertPressure, type UnitSystem } from '@/lib/units';
+import { convertPressure, formatLength, type UnitSystem } from '@/lib/units';
 import type { SessionUser } from '@/lib/auth/session';
 import type { RepairInput, RepairListQuery, RepairPatch, RepairPlanQuery } from '@/lib/validation/repairs';
 import { unprocessable } from './jobs';
@@ -98,7 +98,8 @@ export async function createRepair(user: SessionUser, input: RepairInput) {
     if (!job) throw unprocessable('jobId', 'Pick one of your jobs.');
     assertJobOpen(job);
     const segment = await segmentOnSite(user, input.segmentId, job.siteId, transaction);
-    assertWithinSegment(input.distanceMm, segment);
+    const company = await Company.findByPk(user.companyId, { attributes: ['unitSystem'], transaction });
+    assertWithinSegment(input.distanceMm, segment, (company?.unitSystem ?? 'metric') as UnitSystem);
     const last = (await Repair.max<number, Repair>('position', { where: { jobId: job.id }, transaction })) ?? 0;
     const repair = await Repair.create(
       { ...input, companyId: user.companyId, fromAccessPointId: segment.fromAccessPointId, position: last + 1 },
@@ -121,10 +122,12 @@ export async function updateRepair(user: SessionUser, id: string, patch: RepairP
     const job = await Job.findOne({ where: { id: repair.jobId, companyId: user.companyId }, transaction });
     if (!job) throw notFound('Repair');
     const changes = changedFields(repair.get({ plain: true }), patch);
-    const beyondNotes = Object.keys(changes).filter((field) => field !== 'notes');
+    // Notes and the owner's defect code are words about the repair, not its plan: they may always change.
+    const beyondNotes = Object.keys(changes).filter((field) => field !== 'notes' && field !== 'ownerDefectCode');
     if (beyondNotes.length === 0) {
-      if (changes.notes) {
-        await repair.update({ notes: patch.notes }, { transaction });
+      if (changes.notes || changes.ownerDefectCode) {
+        const words = Object.fromEntries(Object.keys(changes).map((field) => [field, patch[field as 'notes' | 'ownerDefectCode']]));
+        await repair.update(words, { transaction });
         await recordAudit(user, { action: 'update', entityType: ENTITY, entityId: id, changes }, transaction);
       }
       return repair.get({ plain: true });
@@ -145,15 +148,17 @@ export async function updateRepair(user: SessionUser, id: string, patch: RepairP
       updates.fromAccessPointId = segment.fromAccessPointId;
     }
     if (!segment) throw notFound('Segment');
-    if (changes.segmentId || changes.distanceMm) assertWithinSegment(patch.distanceMm ?? repair.distanceMm, segment);
+    const company = await Company.findByPk(user.companyId, { transaction });
+    if (!company) throw notFound('Company');
+    const system = company.unitSystem as UnitSystem;
+    if (changes.segmentId || changes.distanceMm) assertWithinSegment(patch.distanceMm ?? repair.distanceMm, segment, system);
 
     const packerId = patch.plannedPackerId === undefined ? repair.plannedPackerId : patch.plannedPackerId;
     if (packerId && (changes.plannedPackerId || changes.plannedPatchLengthMm || changes.segmentId || changes.defectLengthMm)) {
-      const company = await Company.findByPk(user.companyId, { transaction });
       const patchMm =
         (patch.plannedPatchLengthMm === undefined ? repair.plannedPatchLengthMm : patch.plannedPatchLengthMm) ??
-        patchLength({ defectLengthMm: patch.defectLengthMm ?? repair.defectLengthMm, overlapPerEndMm: company!.minOverlapPerEndMm });
-      await assertPackerFits(user, packerId, segment.insideDiameterMm, patchMm, transaction);
+        patchLength({ defectLengthMm: patch.defectLengthMm ?? repair.defectLengthMm, overlapPerEndMm: company.minOverlapPerEndMm });
+      await assertPackerFits(user, packerId, segment.insideDiameterMm, patchMm, system, transaction);
     }
 
     await repair.update(updates, { transaction });
@@ -192,11 +197,19 @@ export async function removeRepair(user: SessionUser, id: string, reason?: strin
  */
 export async function getRepairPlan(user: SessionUser, id: string, query: RepairPlanQuery) {
   const repair = await getRepair(user, id);
-  const [company, packers] = await Promise.all([
+  const [company, packers, resinSystems] = await Promise.all([
     Company.findByPk(user.companyId),
     Packer.findAll({ where: { companyId: user.companyId, archivedAt: null }, order: [['minDiameterMm', 'ASC'], ['bladderLengthMm', 'ASC'], ['name', 'ASC']] }),
+    ResinSystem.findAll({
+      where: { companyId: user.companyId, archivedAt: null },
+      attributes: ['id', 'name', 'resinToFabricRatio', 'resinExcessPct'],
+      order: [['name', 'ASC'], ['id', 'ASC']],
+    }),
   ]);
   if (!company) throw notFound('Company');
+  // The resin the quantity is for: the one asked about (of this company only), else the first in use by name.
+  const resin = query.resinSystemId ? resinSystems.find((r) => r.id === query.resinSystemId) : resinSystems[0];
+  if (query.resinSystemId && !resin) throw unprocessable('resinSystemId', 'Pick one of your resin systems.');
   const inputs = {
     insideDiameterMm: repair.segment.insideDiameterMm,
     defectLengthMm: repair.defectLengthMm,
@@ -206,9 +219,13 @@ export async function getRepairPlan(user: SessionUser, id: string, query: Repair
     groundwaterHeadMm: query.groundwaterHeadMm ?? repair.plannedGroundwaterHeadMm,
     ovalityPct: query.ovalityPct ?? repair.plannedOvalityPct,
     longTermModulusPsi: query.longTermModulusMpa === undefined ? null : convertPressure(query.longTermModulusMpa * 1000, 'kPa', 'psi'),
+    shortTermModulusPsi: query.shortTermModulusMpa === undefined ? null : convertPressure(query.shortTermModulusMpa * 1000, 'kPa', 'psi'),
   };
+  const unitSystem = company.unitSystem as UnitSystem;
   const plan = planRepair({
     ...inputs,
+    unitSystem,
+    resin: resin ? { id: resin.id, name: resin.name, resinToFabricRatio: resin.resinToFabricRatio, excessPct: resin.resinExcessPct } : null,
     packers: packers.map((p) => ({
       id: p.id, name: p.name, minDiameterMm: p.minDiameterMm, maxDiameterMm: p.maxDiameterMm, bladderLengthMm: p.bladderLengthMm,
       endMarginMm: p.endMarginMm, minPressureKpa: p.minPressureKpa, maxPressureKpa: p.maxPressureKpa,
@@ -216,8 +233,9 @@ export async function getRepairPlan(user: SessionUser, id: string, query: Repair
   });
   return {
     repairId: repair.id,
-    unitSystem: company.unitSystem as UnitSystem,
+    unitSystem,
     inputs,
+    resinSystems: resinSystems.map((r) => ({ id: r.id, name: r.name })),
     saved: {
       plannedPatchLengthMm: repair.plannedPatchLengthMm,
       plannedPackerId: repair.plannedPackerId,
@@ -245,16 +263,16 @@ async function segmentOnSite(user: SessionUser, segmentId: string, siteId: strin
   return segment;
 }
 
-function assertWithinSegment(distanceMm: number, segment: Segment) {
+function assertWithinSegment(distanceMm: number, segment: Segment, system: UnitSystem) {
   if (distanceMm > segment.lengthMm) {
-    throw unprocessable('distanceMm', `The segment is only ${segment.lengthMm} mm long: the defect must lie within it.`);
+    throw unprocessable('distanceMm', `The segment is only ${formatLength(segment.lengthMm, system, 'long')} long: the defect must lie within it.`);
   }
 }
 
-async function assertPackerFits(user: SessionUser, packerId: string, insideDiameterMm: number, patchLengthMm: number, transaction: Transaction) {
+async function assertPackerFits(user: SessionUser, packerId: string, insideDiameterMm: number, patchLengthMm: number, system: UnitSystem, transaction: Transaction) {
   const packer = await Packer.findOne({ where: { id: packerId, companyId: user.companyId, archivedAt: null }, transaction });
   if (!packer) throw unprocessable('plannedPackerId', 'Pick one of your packers.');
-  const [fit] = fittingPackers([packer.get({ plain: true })], { insideDiameterMm, patchLengthMm });
+  const [fit] = fittingPackers([packer.get({ plain: true })], { insideDiameterMm, patchLengthMm }, system);
   if (!fit.fits) throw unprocessable('plannedPackerId', `${packer.name} does not fit: ${fit.reasons.join(' ')}`);
 }
 

@@ -16,6 +16,9 @@ export const MIN_BUOYANCY_FACTOR = 0.67;
 export const ELASTIC_SUPPORT_RATE_PER_FT = 0.065;
 // ASTM F1216 X1.3: the constant 32 in q_t = (1/N)·[32·R_w·B′·E′s·C·(E_L·I/D³)]^½.
 export const FULLY_DETERIORATED_CONSTANT = 32;
+// ASTM F1216 X1.2.1 (from memory): with no groundwater above the invert, a partially deteriorated design
+// should have a dimension ratio DR = D/t of at most 100, i.e. t ≥ D/100.
+export const MAX_DIMENSION_RATIO = 100;
 // ASTM F1216 X1.4: minimum pipe stiffness E·I/D³ ≥ 0.093 psi.
 export const MIN_STIFFNESS_PSI = 0.093;
 // 1 ft = 12 in, exact; 1 ft² = 144 in², exact.

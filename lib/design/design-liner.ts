@@ -5,6 +5,7 @@ import {
   DEFAULT_POISSON,
   DEFAULT_SAFETY_FACTOR,
   IN_PER_FT,
+  MAX_DIMENSION_RATIO,
   PSI_PER_FT_WATER,
 } from './constants';
 import { DesignInputError, requireNonNegative, requireNumber, requirePositive } from './errors';
@@ -36,7 +37,9 @@ function waterHeights(input: LinerDesignInput, diameterIn: number): { aboveInver
  *   there is groundwater above the invert, for either condition (a fully deteriorated design
  *   is held to them too, which can only add thickness);
  * - fully deteriorated (X1.3) for condition 'full';
- * - minimum stiffness (X1.4) whenever the short-term modulus is given.
+ * - minimum stiffness (X1.4) whenever the short-term modulus is given;
+ * - the dimension-ratio floor (DR ≤ 100, X1.2.1) for a partially deteriorated design with no groundwater
+ *   above the invert, so such a design always has a thickness (t ≥ D/100).
  * The largest governs.
  */
 export function designLiner(input: LinerDesignInput): LinerDesign {
@@ -85,12 +88,12 @@ export function designLiner(input: LinerDesignInput): LinerDesign {
     checks.minimumStiffness = minimumStiffnessThicknessIn({ diameterIn, shortTermModulusPsi });
   }
 
-  const entries = Object.entries(checks) as [DesignCheck, number][];
-  if (entries.length === 0) {
-    throw new DesignInputError(
-      'No check applies: a partially deteriorated design needs groundwater above the invert or the short-term modulus.',
-    );
+  if (input.condition === 'partial' && waterPsi === 0) {
+    checks.dimensionRatio = diameterIn / MAX_DIMENSION_RATIO;
   }
+
+  const entries = Object.entries(checks) as [DesignCheck, number][];
+  // Every design has at least one check now (the DR floor or X1.3), so an empty list cannot happen.
   // Absurd magnitudes (a modulus of 1e300) can overflow to Infinity or NaN; no check may pass one on.
   if (entries.some(([, t]) => !Number.isFinite(t) || t < 0)) {
     throw new DesignInputError('The inputs are too extreme to give a usable thickness.');

@@ -26,8 +26,9 @@ export function totalLoadPsi(p: { waterAboveTopFt: number; soilCoverFt: number; 
 /**
  * ASTM F1216 X1.3, fully deteriorated pipe (from memory):
  * q_t = (1/N)·[32·R_w·B′·E′s·C·(E_L·I/D³)]^½ with I = t³/12, solved for t, in.
- * C stands inside the root: that form reproduces the textbook example (t ≈ 1.01 in); with C/N
- * outside the root the same example gives 1.07 in.
+ * C stands inside the root: that is the form of ASTM F1216-07b and later editions, and it reproduces the
+ * textbook example (t ≈ 1.01 in). Older editions put C/N outside the root; the same example then gives
+ * 1.07 in, about 6 % thicker.
  */
 export function fullyDeterioratedThicknessIn(p: {
   diameterIn: number;

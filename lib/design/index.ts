@@ -10,5 +10,6 @@ export {
   DEFAULT_POISSON,
   PSI_PER_FT_WATER,
   MIN_STIFFNESS_PSI,
+  MAX_DIMENSION_RATIO,
 } from './constants';
 export type { HostCondition, LinerDesignInput, LinerDesign, DesignCheck, DesignChecks } from './types';

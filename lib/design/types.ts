@@ -34,7 +34,7 @@ export interface LinerDesignInput {
   soilModulusPsi?: number;
 }
 
-export type DesignCheck = 'buckling' | 'ovality' | 'fullyDeteriorated' | 'minimumStiffness';
+export type DesignCheck = 'buckling' | 'ovality' | 'fullyDeteriorated' | 'minimumStiffness' | 'dimensionRatio';
 
 /** Minimum thickness by each check that applies, in. */
 export type DesignChecks = Partial<Record<DesignCheck, number>>;

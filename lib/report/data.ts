@@ -107,7 +107,7 @@ export async function buildReportData(companyId: string, jobId: string, { images
       accessPoint: accessPoint ? `${accessPoint.label} (${label(accessPoint.kind).toLowerCase()})` : 'the upstream access point',
       distance: formatLength(repair.distanceMm, system, 'long'),
       clockPosition: repair.clockPosition ? `${repair.clockPosition} o\u2019clock` : null,
-      defect: label(repair.defectType),
+      defect: repair.ownerDefectCode ? `${label(repair.defectType)} (owner\u2019s code ${repair.ownerDefectCode})` : label(repair.defectType),
       defectLength: formatLength(repair.defectLengthMm, system),
       conditionGrade: repair.conditionGrade,
       patchLengthMm,
@@ -197,7 +197,7 @@ type JobRow = {
   site: { name: string; addressLine: string; city: string; region: string | null; postalCode: string | null };
   repairs: {
     id: string; position: number; distanceMm: number; defectType: string; conditionGrade: number; defectLengthMm: number;
-    clockPosition: string | null; plannedPatchLengthMm: number | null;
+    clockPosition: string | null; plannedPatchLengthMm: number | null; ownerDefectCode?: string | null;
     fromAccessPoint: { label: string; kind: string } | null;
     segment: { label: string; material: string; insideDiameterMm: number; fromAccessPoint: { label: string; kind: string } | null };
   }[];

@@ -1,3 +1,4 @@
+import { formatLength, type UnitSystem } from '@/lib/units';
 import { SizingInputError } from './errors';
 import { pressureRange } from './pressure-range';
 import type { Packer, PackerFit } from './types';
@@ -18,9 +19,9 @@ function validatePacker(p: Packer): void {
  * Every packer of the fleet, in fleet order, with whether it fits this repair: the inside
  * diameter must lie within its range, and the bladder must leave at least the packer's own
  * end margin bare beyond each end of the patch (so the patch ends are pressed as firmly as
- * its middle).
+ * its middle). The reasons are written in the company's units (metric when none is given).
  */
-export function fittingPackers(fleet: Packer[], repair: { insideDiameterMm: number; patchLengthMm: number }): PackerFit[] {
+export function fittingPackers(fleet: Packer[], repair: { insideDiameterMm: number; patchLengthMm: number }, system: UnitSystem = 'metric'): PackerFit[] {
   if (!Array.isArray(fleet)) throw new SizingInputError('The fleet must be a list of packers.');
   requireObject(repair, 'Repair');
   const d = requirePositive(repair.insideDiameterMm, 'Inside diameter');
@@ -30,11 +31,12 @@ export function fittingPackers(fleet: Packer[], repair: { insideDiameterMm: numb
     validatePacker(packer);
     const endMarginEachMm = (packer.bladderLengthMm - patch) / 2;
     const reasons: string[] = [];
-    if (d < packer.minDiameterMm) reasons.push(`Pipe ${d} mm is smaller than the packer's minimum of ${packer.minDiameterMm} mm.`);
-    if (d > packer.maxDiameterMm) reasons.push(`Pipe ${d} mm is larger than the packer's maximum of ${packer.maxDiameterMm} mm.`);
+    const len = (mm: number) => formatLength(mm, system, 'short', { decimals: system === 'imperial' ? 1 : 0 });
+    if (d < packer.minDiameterMm) reasons.push(`Pipe ${len(d)} is smaller than the packer's minimum of ${len(packer.minDiameterMm)}.`);
+    if (d > packer.maxDiameterMm) reasons.push(`Pipe ${len(d)} is larger than the packer's maximum of ${len(packer.maxDiameterMm)}.`);
     if (endMarginEachMm < packer.endMarginMm) {
       reasons.push(
-        `The ${patch} mm patch leaves ${endMarginEachMm} mm of bladder at each end; this packer needs at least ${packer.endMarginMm} mm.`,
+        `The ${len(patch)} patch leaves ${len(endMarginEachMm)} of bladder at each end; this packer needs at least ${len(packer.endMarginMm)}.`,
       );
     }
     return { ...packer, packer, fits: reasons.length === 0, endMarginEachMm, reasons };

@@ -30,7 +30,7 @@ export interface PressureRange {
 }
 
 export interface ResinQuantity {
-  /** Volume of the finished laminate, π·D·L·t, L. */
+  /** Volume of the finished laminate, π·(D − t)·t·L, L. */
   laminateL: number;
   /** Resin to mix, L. */
   resinL: number;

@@ -1,25 +1,30 @@
 import { z } from 'zod';
-import { lengthFromSi, lengthToSi, pressureFromSi, pressureToSi, type UnitSystem } from '@/lib/units';
+import { formatLength, formatPressure, lengthFromSi, lengthToSi, pressureFromSi, pressureToSi, type UnitSystem } from '@/lib/units';
 import { optionalText } from './common';
 import { listQuerySchema } from './list';
 import { addProblems, ifFinite, inCompanyUnits, quantity, roundTo, type Problems } from './rules';
 
 // Project limits: point-repair packers serve pipes up to about 1.5 m; 3 m and 10 m bladders and 2000 kPa
 // (290 psi) are beyond any of them, so a larger figure is a typo or a wrong unit.
-const mm = (min: number, max: number) => quantity({ min, max, scale: 0, bounds: `From ${min} to ${max} mm` });
-const kpa = () => quantity({ min: 0, max: 2000, scale: 1, bounds: 'From 0 to 2000 kPa (290 psi)' });
+// The limits are SI; their messages are worded in the units of whoever reads them (the API: SI; a form: the company's).
+const packerFieldsIn = (system: UnitSystem) => {
+  const length = (mm: number) => formatLength(mm, system, 'short', { decimals: system === 'imperial' ? 2 : 0 });
+  const mm = (min: number, max: number) => quantity({ min, max, scale: 0, bounds: `From ${length(min)} to ${length(max)}` });
+  const kpa = () => quantity({ min: 0, max: 2000, scale: 1, bounds: `From ${formatPressure(0, system, { decimals: 0 })} to ${formatPressure(2000, system, { decimals: 0 })}` });
+  return {
+    name: z.string().trim().min(1, 'Enter the packer’s name').max(120, 'At most 120 characters'),
+    serial: optionalText(60),
+    minDiameterMm: mm(1, 3000),
+    maxDiameterMm: mm(1, 3000),
+    bladderLengthMm: mm(1, 10000),
+    endMarginMm: mm(0, 5000),
+    minPressureKpa: kpa(),
+    maxPressureKpa: kpa(),
+  };
+};
 
 // No defaults here: a PATCH must leave out what it does not change.
-const packerFields = {
-  name: z.string().trim().min(1, 'Enter the packer’s name').max(120, 'At most 120 characters'),
-  serial: optionalText(60),
-  minDiameterMm: mm(1, 3000),
-  maxDiameterMm: mm(1, 3000),
-  bladderLengthMm: mm(1, 10000),
-  endMarginMm: mm(0, 5000),
-  minPressureKpa: kpa(),
-  maxPressureKpa: kpa(),
-};
+const packerFields = packerFieldsIn('metric');
 
 export type PackerValues = { minDiameterMm: number; maxDiameterMm: number; bladderLengthMm: number; endMarginMm: number; minPressureKpa: number; maxPressureKpa: number };
 
@@ -33,7 +38,8 @@ export function packerProblems(v: PackerValues): Problems {
 }
 
 /** A packer in SI; POST /api/packers and the form (after conversion) use it. */
-export const packerInputSchema = z.object(packerFields).superRefine((values, ctx) => addProblems(ctx, packerProblems(values)));
+const packerSchemaIn = (system: UnitSystem) => z.object(packerFieldsIn(system)).superRefine((values, ctx) => addProblems(ctx, packerProblems(values)));
+export const packerInputSchema = packerSchemaIn('metric');
 export type PackerInput = z.output<typeof packerInputSchema>;
 
 export const packerPatchSchema = z.object(packerFields).partial().strict();
@@ -46,7 +52,7 @@ export type PackerListQuery = z.infer<typeof packerListQuerySchema>;
 
 export type PackerFormValues = PackerValues & { name: string; serial?: string | null };
 
-export const packerFormSchema = (system: UnitSystem) => inCompanyUnits<PackerInput, PackerFormValues>((v) => packerToSi(v, system), packerInputSchema);
+export const packerFormSchema = (system: UnitSystem) => inCompanyUnits<PackerInput, PackerFormValues>((v) => packerToSi(v, system), packerSchemaIn(system));
 
 /** Entered values → SI body: whole millimetres and tenths of a kPa, as the columns keep them. */
 export function packerToSi(v: PackerFormValues, system: UnitSystem) {

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { DEFECT_TYPES, REPAIR_STATUSES } from '@/lib/domain';
+import { formatLength, lengthFromSi, type LengthKind, type UnitSystem } from '@/lib/units';
 import { optionalText } from './common';
 import { codeListSchema, optionalId } from './jobs';
 import { listQuerySchema } from './list';
@@ -17,6 +18,18 @@ const MAX_DEFECT_MM = 20_000;
 const wholeMm = (what: string, min: number, max: number) =>
   z.number({ error: `Enter the ${what}` }).min(min, `The ${what} must be at least ${min} mm`).max(max, `The ${what} is at most ${max} mm`).transform(Math.round);
 
+/**
+ * The owner's own defect code, for owners who require a coding standard: free text kept exactly as typed (no
+ * built-in list, no trimming or case change); a blank box stores nothing.
+ */
+function ownerDefectCode() {
+  return z
+    .string({ error: 'Type the owner’s code as text' })
+    .max(60, 'At most 60 characters')
+    .transform((value) => (value.trim() === '' ? null : value))
+    .nullish();
+}
+
 // No defaults here: a PATCH must leave out what it does not change.
 const repairFields = {
   jobId: z.uuid('Pick the job'),
@@ -27,6 +40,7 @@ const repairFields = {
   defectLengthMm: wholeMm('defect length', 1, MAX_DEFECT_MM),
   clockPosition: z.string().trim().transform((value) => value || null).pipe(z.string().regex(CLOCK_POSITION, CLOCK_MESSAGE).nullable()).nullish(),
   notes: optionalText(2000),
+  ownerDefectCode: ownerDefectCode(),
 };
 
 /** What the planning panel saves (PATCH only). */
@@ -68,29 +82,46 @@ export type RepairListQuery = z.infer<typeof repairListQuerySchema>;
 const queryNumber = (schema: z.ZodNumber) =>
   z.preprocess((value) => (value === '' || value === undefined ? undefined : Number(value)), schema.optional());
 
-/** GET /api/repairs/:id/plan: the what-if inputs of the planning panel, SI. Absent ones fall back to the saved plan. */
+/**
+ * GET /api/repairs/:id/plan: the what-if inputs of the planning panel, SI. Absent ones fall back to the saved plan.
+ * Messages name no unit: the panel shows them to imperial and metric companies alike.
+ */
 export const repairPlanQuerySchema = z.object({
-  groundwaterHeadMm: queryNumber(z.number({ error: 'Groundwater head must be a number' }).min(0, 'Groundwater head is 0 or more').max(100_000, 'Groundwater head is at most 100 m')),
-  thicknessMm: queryNumber(z.number({ error: 'Laminate thickness must be a number' }).positive('Laminate thickness must be above zero').max(100, 'Laminate thickness is at most 100 mm')),
+  groundwaterHeadMm: queryNumber(z.number({ error: 'Groundwater head must be a number' }).min(0, 'Groundwater head is 0 or more').max(100_000, 'Groundwater head is too high for this check')),
+  thicknessMm: queryNumber(z.number({ error: 'Laminate thickness must be a number' }).positive('Laminate thickness must be above zero').max(100, 'Laminate thickness is too thick for a point repair')),
   ovalityPct: queryNumber(z.number({ error: 'Ovality must be a number' }).min(0, 'Ovality is 0 % or more').max(50, 'Ovality is at most 50 %')),
-  patchLengthMm: queryNumber(z.number({ error: 'Patch length must be a number' }).positive('Patch length must be above zero').max(30_000, 'Patch length is at most 30 m')),
+  patchLengthMm: queryNumber(z.number({ error: 'Patch length must be a number' }).positive('Patch length must be above zero').max(30_000, 'Patch length is too long for a point repair')),
   longTermModulusMpa: queryNumber(z.number({ error: 'Long-term modulus must be a number' }).positive('Long-term modulus must be above zero').max(50_000, 'Long-term modulus is at most 50 000 MPa')),
+  shortTermModulusMpa: queryNumber(z.number({ error: 'Short-term modulus must be a number' }).positive('Short-term modulus must be above zero').max(50_000, 'Short-term modulus is at most 50 000 MPa')),
+  resinSystemId: z.preprocess((value) => (value === '' ? undefined : value), z.uuid('Not a valid resin system id').optional()),
 });
 export type RepairPlanQuery = z.output<typeof repairPlanQuerySchema>;
 
 /**
  * The repair form in the company's units (distance in ft or m, defect length in in or mm); the page converts
- * with lib/units and sends repairInputSchema's SI fields. Same messages as the API.
+ * with lib/units and sends repairInputSchema's SI fields. The API's limits are checked here first, worded in the
+ * company's units, so the form never shows the API's millimetres.
  */
-export const repairFormSchema = z.object({
-  segmentId: repairFields.segmentId,
-  distance: z.number({ error: 'Enter the distance from the access point' }).min(0, 'The distance cannot be negative'),
-  defectType: repairFields.defectType,
-  conditionGrade: repairFields.conditionGrade,
-  defectLength: z.number({ error: 'Enter the defect length' }).positive('The defect length must be above zero'),
-  clockPosition: repairFields.clockPosition,
-  notes: repairFields.notes,
-});
+export const repairFormSchema = (system: UnitSystem) => {
+  const upTo = (maxMm: number, kind: LengthKind) => lengthFromSi(maxMm, system, kind);
+  const text = (maxMm: number, kind: LengthKind) => formatLength(maxMm, system, kind, { decimals: 0 });
+  return z.object({
+    segmentId: repairFields.segmentId,
+    distance: z
+      .number({ error: 'Enter the distance from the access point' })
+      .min(0, 'The distance cannot be negative')
+      .max(upTo(MAX_DISTANCE_MM, 'long'), `The distance is at most ${text(MAX_DISTANCE_MM, 'long')}`),
+    defectType: repairFields.defectType,
+    conditionGrade: repairFields.conditionGrade,
+    defectLength: z
+      .number({ error: 'Enter the defect length' })
+      .positive('The defect length must be above zero')
+      .max(upTo(MAX_DEFECT_MM, 'short'), `A point repair covers a defect of at most ${text(MAX_DEFECT_MM, 'long')}`),
+    clockPosition: repairFields.clockPosition,
+    notes: repairFields.notes,
+    ownerDefectCode: repairFields.ownerDefectCode,
+  });
+};
 
 /** Where an API field's message goes on the form. */
 export const REPAIR_FORM_FIELDS: Record<string, string> = { distanceMm: 'distance', defectLengthMm: 'defectLength' };

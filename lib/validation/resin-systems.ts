@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { MAX_TEMP_C, MIN_TEMP_C } from '@/lib/cure';
 import { RESIN_CHEMISTRIES, SENSITIVITY_KINDS } from '@/lib/domain';
+import { DEFAULT_EXCESS_PCT, DEFAULT_RESIN_TO_FABRIC_RATIO } from '@/lib/sizing';
 import { temperatureDifferenceFromSi, temperatureDifferenceToSi, temperatureFromSi, temperatureToSi, type UnitSystem } from '@/lib/units';
 import { listQuerySchema } from './list';
 import { addProblems, ifFinite, inCompanyUnits, quantity, roundTo, type Problems } from './rules';
@@ -25,6 +26,9 @@ const resinSystemFields = {
   sensitivityKind: z.enum(SENSITIVITY_KINDS, { error: 'Pick how the times change with temperature' }),
   doublingC: quantity({ min: 1, max: 50, scale: 2, bounds: 'A step of 1 to 50 °C (1.8 to 90 °F)' }).nullish(),
   activationEnergyKj: quantity({ min: 1, max: 300, scale: 2, bounds: 'Between 1 and 300 kJ/mol' }).nullish(),
+  // Resin quantity (lib/sizing): unit-free, so the same words serve every company.
+  resinToFabricRatio: quantity({ min: 0, max: 5, scale: 2, above: true, bounds: 'More than 0 and at most 5 (1 = as much resin as fabric)' }),
+  resinExcessPct: quantity({ min: 0, max: 100, scale: 1, bounds: 'From 0 to 100 %' }),
 };
 
 export type ResinSystemValues = {
@@ -50,6 +54,8 @@ export const resinSystemInputSchema = z
     ...resinSystemFields,
     chemistry: resinSystemFields.chemistry.default('epoxy'),
     sensitivityKind: resinSystemFields.sensitivityKind.default('doubling'),
+    resinToFabricRatio: resinSystemFields.resinToFabricRatio.default(DEFAULT_RESIN_TO_FABRIC_RATIO),
+    resinExcessPct: resinSystemFields.resinExcessPct.default(DEFAULT_EXCESS_PCT),
   })
   .superRefine((values, ctx) => addProblems(ctx, resinSystemProblems(values)));
 export type ResinSystemInput = z.output<typeof resinSystemInputSchema>;
@@ -69,6 +75,7 @@ export type ResinSystemListQuery = z.infer<typeof resinSystemListQuerySchema>;
 export type ResinSystemFormValues = {
   name: string; chemistry: string; refTempC: number; potLifeMin: number; holdMin: number; fullCureMin: number;
   minTempC: number; maxTempC: number; sensitivityKind: string; doublingC: number | null; activationEnergyKj: number | null;
+  resinToFabricRatio?: number; resinExcessPct?: number;
 };
 
 export const resinSystemFormSchema = (system: UnitSystem) =>
@@ -85,11 +92,13 @@ export function resinSystemToSi(v: ResinSystemFormValues, system: UnitSystem) {
     maxTempC: abs(v.maxTempC),
     doublingC: noneIfEmpty(step(v.doublingC)),
     activationEnergyKj: noneIfEmpty(v.activationEnergyKj),
+    resinToFabricRatio: defaultIfEmpty(v.resinToFabricRatio),
+    resinExcessPct: defaultIfEmpty(v.resinExcessPct),
   };
 }
 
 /** A stored resin system → the form's values in the company's units (one decimal of a degree). */
-export function resinSystemToForm(row: ResinSystemValues & { name: string; chemistry: string }, system: UnitSystem): ResinSystemFormValues {
+export function resinSystemToForm(row: ResinSystemValues & { name: string; chemistry: string; resinToFabricRatio?: number; resinExcessPct?: number }, system: UnitSystem): ResinSystemFormValues {
   const abs = (celsius: number) => roundTo(temperatureFromSi(celsius, system), 1);
   return {
     name: row.name,
@@ -103,8 +112,12 @@ export function resinSystemToForm(row: ResinSystemValues & { name: string; chemi
     sensitivityKind: row.sensitivityKind,
     doublingC: row.doublingC == null ? null : roundTo(temperatureDifferenceFromSi(row.doublingC, system), 1),
     activationEnergyKj: row.activationEnergyKj ?? null,
+    resinToFabricRatio: row.resinToFabricRatio ?? DEFAULT_RESIN_TO_FABRIC_RATIO,
+    resinExcessPct: row.resinExcessPct ?? DEFAULT_EXCESS_PCT,
   };
 }
 
 // An optional box left empty is "none", not a wrong number.
 const noneIfEmpty = (value: unknown) => (typeof value === 'number' && Number.isNaN(value)) || value === undefined ? null : value;
+// An empty resin-quantity box takes the schema's default (a PATCH leaves the stored value alone).
+const defaultIfEmpty = (value: unknown) => ((typeof value === 'number' && Number.isNaN(value)) || value === null ? undefined : value);

@@ -180,8 +180,30 @@ function buildCompany(spec, { now, passwordHash }) {
     });
   });
   spec.jobs.forEach((j, index) => { if (j.invoice) addInvoice(t, C, t.jobs[index], j.invoice, now); });
+  t.report_sends = [];
+  spec.jobs.forEach((j, index) => { if (j.status === 'reported' || j.status === 'closed') addReportSend(t, C, t.jobs[index], now); });
   for (const site of t.sites) { delete site.points; delete site.segs; }
   return t;
+}
+
+/**
+ * The send-log row of a job whose repair report went out: one delivered try to the customer, a day after the
+ * last install of the job finished, by the office user (as "Send repair report" writes it).
+ */
+function addReportSend(t, C, job, now) {
+  const customer = t.customers.find((c) => c.id === job.customer_id);
+  const office = t.users.find((u) => u.role === 'office');
+  const finished = t.installs.filter((i) => i.job_id === job.id).map((i) => i.finished_at.getTime());
+  const sentAt = new Date((finished.length ? Math.max(...finished) : now.getTime() - 2 * DAY) + DAY);
+  t.report_sends.push({
+    ...row(C, {
+      job_id: job.id, to_address: customer.email, message: null, status: 'sent', attempts: 1, last_error: null,
+      message_id: `<${randomUUID()}@setline.invalid>`, link_expires_at: new Date(sentAt.getTime() + 30 * DAY),
+      sent_by_id: office.id, sent_at: sentAt,
+    }, now),
+    created_at: sentAt,
+    updated_at: sentAt,
+  });
 }
 
 /**
@@ -206,7 +228,7 @@ function addInvoice(t, C, job, spec, now) {
 const TABLE_ORDER = [
   'companies', 'users', 'crews', 'crew_members', 'customers', 'sites', 'access_points', 'segments', 'resin_systems',
   'resin_kits', 'packers', 'checklist_templates', 'job_number_sequences', 'jobs', 'repairs', 'installs', 'install_events', 'reviews',
-  'invoices', 'invoice_lines',
+  'invoices', 'invoice_lines', 'report_sends',
 ];
 
 async function insertCompany(queryInterface, tables, transaction) {

@@ -67,7 +67,7 @@ test('office takes a job from the first call to tomorrow’s schedule; the forem
   await hydrated(office);
   await office.getByLabel('Segment').selectOption({ index: 1 });
   await office.getByLabel('Distance from access point').fill('40');
-  await office.getByLabel('Defect type').selectOption('fracture');
+  await office.getByLabel('Defect type').selectOption('open_fracture');
   await office.getByLabel('Condition grade').selectOption('4');
   await office.getByLabel('Defect length').fill('12');
   await office.getByLabel('Clock position').fill('3');

@@ -1,7 +1,7 @@
 import { beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { GET as planRoute } from '@/app/api/repairs/[id]/plan/route';
 import { PATCH as patchRoute } from '@/app/api/repairs/[id]/route';
-import { Packer, Repair } from '@/models';
+import { Packer, Repair, ResinSystem } from '@/models';
 import { makeInstallWorld, makeWorld, type InstallWorld, type World } from './helpers/world';
 import { signInAs, signOut } from './helpers/session';
 import { call, jsonBody } from './helpers/call';
@@ -35,7 +35,7 @@ describe('repair planning panel: GET /api/repairs/:id/plan', () => {
     b = await makeWorld('Other');
     // A packer for bigger pipe: listed, never fitting this 200 mm segment.
     await Packer.create({ companyId: w.company.id, name: `Packer 300 ${w.company.id.slice(0, 4)}`, minDiameterMm: 280, maxDiameterMm: 320, bladderLengthMm: 1500, endMarginMm: 120, minPressureKpa: 50, maxPressureKpa: 120 });
-    long = await Repair.create({ companyId: w.company.id, jobId: w.job.id, segmentId: w.segment.id, position: 2, distanceMm: 20000, defectType: 'crack_longitudinal', conditionGrade: 3, defectLengthMm: 1000 });
+    long = await Repair.create({ companyId: w.company.id, jobId: w.job.id, segmentId: w.segment.id, position: 2, distanceMm: 20000, defectType: 'lengthwise_crack', conditionGrade: 3, defectLengthMm: 1000 });
   });
   beforeEach(() => signOut());
 
@@ -66,7 +66,8 @@ describe('repair planning panel: GET /api/repairs/:id/plan', () => {
     expect(fits[0].endThrustAtMax.newtons).toBeCloseTo((150_000 * Math.PI * 0.2 * 0.2) / 4, 6);
     expect(fits[0].endThrustAtMax.newtons).toBeCloseTo(4712.39, 1);
     const other = body.packers.find((p: { fits: boolean }) => !p.fits);
-    expect(other.reasons[0]).toMatch(/smaller than the packer's minimum/);
+    // The world's company is imperial: 200 mm = 7.9 in, 280 mm = 11.0 in (NIST SP 811, exact).
+    expect(other.reasons[0]).toBe("Pipe 7.9 in is smaller than the packer's minimum of 11.0 in.");
     expect(body.resin).toBeNull();
     expect(body.design).toBeNull();
     expect(body.notes.length).toBe(2);
@@ -76,11 +77,13 @@ describe('repair planning panel: GET /api/repairs/:id/plan', () => {
   it('estimates resin and runs the ASTM F1216 X1 partially deteriorated check against the head typed in', async () => {
     await signInAs(w.office);
     const { body } = await plan(w.repair.id, '?groundwaterHeadMm=3048&thicknessMm=6&ovalityPct=2');
-    // Laminate π·D·L·t = π × 200 × 910 × 6 mm³ = 3.4306 L; half resin (common practice) × 1.1 to mix.
-    const laminateL = (Math.PI * 200 * 910 * 6) / 1e6;
+    // Laminate ring π·(D − t)·t·L = π × 194 × 6 × 910 mm³ = 3.3277 L; the world's resin system keeps the
+    // common-practice defaults (resin to fabric 1 by volume = half resin, 10 % extra).
+    const laminateL = (Math.PI * 194 * 6 * 910) / 1e6;
     expect(body.resin.laminateL).toBeCloseTo(laminateL, 9);
     expect(body.resin.resinL).toBeCloseTo(laminateL * 0.5 * 1.1, 9);
-    expect(body.resin.resinL).toBeCloseTo(1.8868, 3);
+    expect(body.resin.resinL).toBeCloseTo(1.8302, 3);
+    expect(body.resin.resinSystem.id).toBe(w.resinSystem.id);
     // 10 ft of water (4.33 psi) on a 7.874 in patch, q = 2 %: SDR ≈ 58.04, t ≈ 0.1357 in ≈ 3.446 mm.
     const required = f1216PartialMm(200, 3048, 2);
     expect(required).toBeCloseTo(3.446, 3);
@@ -90,7 +93,37 @@ describe('repair planning panel: GET /api/repairs/:id/plan', () => {
     expect(body.design.ovalityC).toBeCloseTo(Math.pow(0.98 / 1.0404, 3), 12);
     expect(body.design.thick).toBe(true);
     expect(body.warnings).toEqual([]);
-    expect(body.assumptions).toEqual({ ovalityPct: 2, longTermModulusPsi: E_L, safetyFactor: N, enhancementK: K, poisson: NU });
+    expect(body.assumptions).toEqual({ ovalityPct: 2, longTermModulusPsi: E_L, shortTermModulusPsi: 250_000, safetyFactor: N, enhancementK: K, poisson: NU });
+    // X1.4 at 250 000 psi on 7.874 in: 0.1296 in = 3.293 mm, below the 3.446 mm of buckling.
+    expect(body.design.checks.minimumStiffness * MM_PER_IN).toBeCloseTo(3.293, 3);
+    expect(body.design.summary).toBe('X1.1 buckling at 10.0 ft of water, X1.4 stiffness');
+  });
+
+  it('takes the resin-to-fabric ratio and excess of the resin system asked for; another company’s is refused', async () => {
+    await signInAs(w.office);
+    const slow = await ResinSystem.create({
+      companyId: w.company.id, name: `Thick mix ${w.company.id.slice(0, 4)}`, refTempC: 20, potLifeMin: 40, holdMin: 120, fullCureMin: 300,
+      minTempC: 5, maxTempC: 35, doublingC: 10, resinToFabricRatio: 1.5, resinExcessPct: 15,
+    });
+    const { status, body } = await plan(w.repair.id, `?thicknessMm=6&resinSystemId=${slow.id}`);
+    expect(status).toBe(200);
+    // By hand: 3.3277 L of laminate × 1.5/(1 + 1.5) × 1.15.
+    expect(body.resin.resinL).toBeCloseTo(((Math.PI * 194 * 6 * 910) / 1e6) * 0.6 * 1.15, 9);
+    expect(body.resin.basis).toContain('resin to fabric 1.5 by volume, 15 % extra');
+    expect(body.resinSystems.map((r: { id: string }) => r.id)).toContain(slow.id);
+    const foreign = await ResinSystem.create({
+      companyId: b.company.id, name: 'Foreign mix', refTempC: 20, potLifeMin: 40, holdMin: 120, fullCureMin: 300, minTempC: 5, maxTempC: 35, doublingC: 10,
+    });
+    const refused = await plan(w.repair.id, `?thicknessMm=6&resinSystemId=${foreign.id}`);
+    expect(refused.status).toBe(422);
+  });
+
+  it('with no groundwater (head 0) the floors still give a thickness: X1.4 stiffness, DR ≤ 100', async () => {
+    await signInAs(w.office);
+    const { body } = await plan(w.repair.id, '?groundwaterHeadMm=0&thicknessMm=6');
+    expect(body.design.governing).toBe('minimumStiffness');
+    expect(body.design.checks.dimensionRatio * MM_PER_IN).toBeCloseTo(2, 9); // 200 mm / 100
+    expect(body.design.summary).toBe('X1.4 stiffness, DR ≤ 100');
   });
 
   it('warns when the patch is too thin, and takes another modulus and ovality', async () => {
@@ -101,9 +134,12 @@ describe('repair planning panel: GET /api/repairs/:id/plan', () => {
     expect(thin.body.design.requiredThicknessMm).toBeCloseTo(required, 9);
     expect(thin.body.design.thick).toBe(false);
     expect(thin.body.warnings.join(' ')).toMatch(/too thin/);
-    // 3 447.4 MPa = 500 000 psi (1 psi = 6.894 757 kPa, NIST SP 811).
+    // 3 447.4 MPa = 500 000 psi (1 psi = 6.894 757 kPa, NIST SP 811). Buckling then asks for 3.0 mm, so the
+    // X1.4 stiffness floor at the F1216 minimum modulus (3.293 mm) governs.
     const stiff = await plan(w.repair.id, '?groundwaterHeadMm=6096&thicknessMm=3.5&ovalityPct=5&longTermModulusMpa=3447.3785');
-    expect(stiff.body.design.requiredThicknessMm).toBeCloseTo(f1216PartialMm(200, 6096, 5, 500_000), 4);
+    expect(stiff.body.design.checks.buckling * MM_PER_IN).toBeCloseTo(f1216PartialMm(200, 6096, 5, 500_000), 4);
+    expect(stiff.body.design.governing).toBe('minimumStiffness');
+    expect(stiff.body.design.requiredThicknessMm).toBeCloseTo(3.293, 3);
     expect(stiff.body.design.thick).toBe(true);
   });
 
@@ -113,7 +149,8 @@ describe('repair planning panel: GET /api/repairs/:id/plan', () => {
     expect(body.proposedPatchLengthMm).toBe(1000 + 610);
     expect(body.packers.every((p: { fits: boolean }) => !p.fits)).toBe(true);
     expect(body.warnings.join(' ')).toMatch(/No packer/);
-    expect(body.warnings.join(' ')).toMatch(/close a 200 mm pipe/);
+    // Imperial company: 100 mm = 3.9 in, 200 mm = 7.9 in.
+    expect(body.warnings.join(' ')).toMatch(/A 3\.9 in laminate would close a 7\.9 in pipe/);
     expect(body.resin).toBeNull();
   });
 

@@ -21,7 +21,7 @@ describe('repairs API: create, edit, remove', () => {
   beforeEach(() => signOut());
 
   const valid = (extra: Record<string, unknown> = {}) => ({
-    jobId: a.job.id, segmentId: a.segment.id, distanceMm: 15240.4, defectType: 'crack_circumferential', conditionGrade: 3, defectLengthMm: 150, clockPosition: '11-1', ...extra,
+    jobId: a.job.id, segmentId: a.segment.id, distanceMm: 15240.4, defectType: 'ring_crack', conditionGrade: 3, defectLengthMm: 150, clockPosition: '11-1', ...extra,
   });
   const repairCount = () => Repair.count({ where: { companyId: a.company.id } });
 
@@ -119,7 +119,7 @@ describe('repairs API: create, edit, remove', () => {
     const repair = (await create(valid())).body;
     const res = await patch(repair.id, { distanceMm: 16000, conditionGrade: 4, clockPosition: '' });
     expect(res.status).toBe(200);
-    expect(res.body).toMatchObject({ distanceMm: 16000, conditionGrade: 4, clockPosition: null, defectType: 'crack_circumferential' });
+    expect(res.body).toMatchObject({ distanceMm: 16000, conditionGrade: 4, clockPosition: null, defectType: 'ring_crack' });
     const audit = await AuditEntry.findOne({ where: { entityId: repair.id, action: 'update' } });
     expect(audit?.changes).toEqual({ distanceMm: { from: 15240, to: 16000 }, conditionGrade: { from: 3, to: 4 }, clockPosition: { from: '11-1', to: null } });
     expect((await patch(repair.id, { jobId: b.job.id })).status).toBe(400);
@@ -138,12 +138,30 @@ describe('repairs API: create, edit, remove', () => {
     // 1 200 − 1 100 leaves 50 mm each end: too little for the packer's 100 mm.
     const tooLong = await patch(repair.id, { plannedPatchLengthMm: 1100 });
     expect(tooLong.status).toBe(422);
-    expect(tooLong.body.error.fields.plannedPackerId[0]).toMatch(/50 mm/);
+    // Said in the company's units (imperial): 50 mm = 2.0 in, 100 mm = 3.9 in (1 in = 25.4 mm, NIST SP 811).
+    expect(tooLong.body.error.fields.plannedPackerId[0]).toMatch(/leaves 2\.0 in of bladder at each end; this packer needs at least 3\.9 in/);
+    expect(tooLong.body.error.fields.plannedPackerId[0]).not.toMatch(/mm/);
     const stranger = await Packer.create({ companyId: b.company.id, name: 'Not ours', minDiameterMm: 150, maxDiameterMm: 250, bladderLengthMm: 1500, endMarginMm: 100, minPressureKpa: 70, maxPressureKpa: 150 });
     expect((await patch(repair.id, { plannedPackerId: stranger.id })).status).toBe(422);
     expect((await patch(repair.id, { plannedThicknessMm: 0 })).status).toBe(400);
     expect(await Repair.findByPk(repair.id)).toMatchObject({ plannedPatchLengthMm: 760, plannedPackerId: a.packer.id });
     expect((await get(repair.id)).body.plannedPacker).toEqual({ id: a.packer.id, name: a.packer.name });
+  });
+
+  it("keeps the owner's defect code exactly as typed, and lets it change after an install has started", async () => {
+    await signInAs(a.office);
+    const made = await create(valid({ ownerDefectCode: ' Fx-2 (owner list) ' }));
+    expect(made.status).toBe(201);
+    expect((await Repair.findByPk(made.body.id))?.ownerDefectCode).toBe(' Fx-2 (owner list) ');
+    expect((await create(valid({ ownerDefectCode: 'x'.repeat(61) }))).status).toBe(400);
+    expect((await create(valid({ defectType: 'crack_longitudinal' }))).status).toBe(400);
+    await Install.create({ companyId: a.company.id, repairId: made.body.id, jobId: a.job.id, crewId: a.crew.id, status: 'in_progress' });
+    const changed = await patch(made.body.id, { ownerDefectCode: 'Fx-3' });
+    expect(changed.status).toBe(200);
+    expect(changed.body.ownerDefectCode).toBe('Fx-3');
+    expect((await patch(made.body.id, { ownerDefectCode: '' })).body.ownerDefectCode).toBeNull();
+    const audit = await AuditEntry.findAll({ where: { entityId: made.body.id, action: 'update' }, order: [['createdAt', 'ASC']] });
+    expect(audit[0].changes).toEqual({ ownerDefectCode: { from: ' Fx-2 (owner list) ', to: 'Fx-3' } });
   });
 
   it('once an install has started, only the notes can change (409), and removing cancels instead of deleting', async () => {

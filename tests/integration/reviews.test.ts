@@ -25,7 +25,7 @@ async function newJob(w: InstallWorld, repairs = 1, customerId = w.customer.id) 
   const made = [];
   for (let i = 0; i < repairs; i += 1) {
     made.push(await Repair.create({
-      companyId: w.company.id, jobId: job.id, segmentId: w.segment.id, position: i + 1, distanceMm: 12000 + i * 1000, defectType: 'fracture', conditionGrade: 4, defectLengthMm: 300,
+      companyId: w.company.id, jobId: job.id, segmentId: w.segment.id, position: i + 1, distanceMm: 12000 + i * 1000, defectType: 'open_fracture', conditionGrade: 4, defectLengthMm: 300,
     }));
   }
   return { job, repairs: made };

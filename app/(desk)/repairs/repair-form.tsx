@@ -12,8 +12,8 @@ import { DEFECT_TYPES, label } from '@/lib/domain';
 import { formatLength, lengthToSi, unitLabels, type UnitSystem } from '@/lib/units';
 import { REPAIR_FORM_FIELDS, repairFormSchema } from '@/lib/validation/repairs';
 
-type Input = z.input<typeof repairFormSchema>;
-type Output = z.output<typeof repairFormSchema>;
+type Input = z.input<ReturnType<typeof repairFormSchema>>;
+type Output = z.output<ReturnType<typeof repairFormSchema>>;
 type SegmentOption = { id: string; label: string; insideDiameterMm: number; lengthMm: number };
 
 /**
@@ -25,8 +25,8 @@ export function RepairForm({ jobId, repairId, segments, unitSystem, initial }: {
   const [message, setMessage] = useState<string>();
   const units = unitLabels(unitSystem);
   const { register, handleSubmit, setError, formState: { errors, isSubmitting } } = useForm<Input, unknown, Output>({
-    resolver: zodResolver(repairFormSchema),
-    defaultValues: initial ?? { segmentId: segments.length === 1 ? segments[0].id : '', defectType: 'fracture', conditionGrade: 3, clockPosition: '', notes: '' },
+    resolver: zodResolver(repairFormSchema(unitSystem)),
+    defaultValues: initial ?? { segmentId: segments.length === 1 ? segments[0].id : '', defectType: 'open_fracture', conditionGrade: 3, clockPosition: '', notes: '', ownerDefectCode: '' },
   });
 
   const onSubmit = handleSubmit(async ({ distance, defectLength, ...rest }) => {
@@ -70,6 +70,10 @@ export function RepairForm({ jobId, repairId, segments, unitSystem, initial }: {
       </FormField>
       <FormField id="clockPosition" label="Clock position" error={errors.clockPosition?.message} hint="Looking downstream: 12 is the crown, e.g. 3 or 11-1">
         <input {...register('clockPosition')} {...field('clockPosition')} className={inputClass} />
+      </FormField>
+      <FormField id="ownerDefectCode" label="Owner’s defect code (optional)" error={errors.ownerDefectCode?.message}
+        hint="Only when the owner requires its own coding: kept exactly as typed">
+        <input {...register('ownerDefectCode')} {...field('ownerDefectCode')} className={inputClass} autoComplete="off" />
       </FormField>
       <div className="md:col-span-2">
         <FormField id="notes" label="Notes" error={errors.notes?.message}>

@@ -33,7 +33,7 @@ export async function makeWorld(name = 'Test') {
     companyId: company.id, number: `2026-${tag}`.slice(0, 20), customerId: customer.id, siteId: site.id, crewId: crew.id, status: 'scheduled', scheduledDate: '2026-12-01',
   });
   const repair = await Repair.create({
-    companyId: company.id, jobId: job.id, segmentId: segment.id, distanceMm: 12000, defectType: 'fracture', conditionGrade: 4, defectLengthMm: 300,
+    companyId: company.id, jobId: job.id, segmentId: segment.id, distanceMm: 12000, defectType: 'open_fracture', conditionGrade: 4, defectLengthMm: 300,
   });
   const otherCrew = await Crew.create({ companyId: company.id, name: `Other crew ${tag}` });
   const otherTechnician = await mkUserNamed(company.id, `technician2-${tag}@${name.toLowerCase()}.test`, 'technician');

@@ -33,7 +33,10 @@ const fullArb: fc.Arbitrary<LinerDesignInput> = fc
   })
   .map(({ waterShare, ...r }) => ({ ...r, waterAboveTopFt: waterShare * r.soilCoverFt }));
 
-const anyValid = fc.oneof(partialArb, fullArb);
+// No groundwater at all: the DR ≤ 100 floor (and X1.4 when E is known) must still give a thickness.
+const dryArb: fc.Arbitrary<LinerDesignInput> = fc.record({ ...common, condition: fc.constant('partial' as const), groundwaterFtAboveInvert: fc.constant(0) });
+
+const anyValid = fc.oneof(partialArb, fullArb, dryArb);
 
 describe('designLiner — properties', () => {
   it('no valid input gives NaN; every check is a thickness and the governing one is the largest', () => {
@@ -134,8 +137,9 @@ describe('designLiner — invalid input throws DesignInputError', () => {
     expect(() => designLiner({ ...ok, ...change } as LinerDesignInput)).toThrow(DesignInputError);
   });
 
-  it('a partially deteriorated pipe with no water and no short-term modulus has no check to run', () => {
-    expect(() => designLiner({ condition: 'partial', meanDiameterIn: 12, ovalityPct: 2, longTermModulusPsi: 125_000 })).toThrow(DesignInputError);
+  it('a partially deteriorated pipe with no water and no short-term modulus still gets a thickness: the DR ≤ 100 floor', () => {
+    const d = designLiner({ condition: 'partial', meanDiameterIn: 12, ovalityPct: 2, longTermModulusPsi: 125_000 });
+    expect(d.governing).toBe('dimensionRatio');
   });
 
   it('any non-finite number in any numeric field throws', () => {

@@ -1,15 +1,37 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { DEFAULT_EXCESS, DEFAULT_RESIN_FRACTION, SizingInputError, endThrust, resinQuantity, wrinkleLimitMm } from '@/lib/sizing';
+import {
+  DEFAULT_EXCESS,
+  DEFAULT_EXCESS_PCT,
+  DEFAULT_RESIN_FRACTION,
+  DEFAULT_RESIN_TO_FABRIC_RATIO,
+  SizingInputError,
+  endThrust,
+  resinFractionFromRatio,
+  resinQuantity,
+  wrinkleLimitMm,
+} from '@/lib/sizing';
 
 describe('resinQuantity', () => {
-  it('matches hand arithmetic', () => {
-    // By hand: π × 150 mm × 600 mm × 6 mm = 1 696 460 mm³ = 1.696 46 L of laminate;
-    // × 0.5 resin × 1.1 excess = 0.933 05 L; ÷ 3.785 411 784 L/gal = 0.246 49 US gal.
+  it('matches hand arithmetic on the patch as it lies in the pipe (a ring, outside = the pipe bore)', () => {
+    // By hand: π/4 × (150² − 138²) × 600 = π × (150 − 6) × 6 × 600 = 1 628 602 mm³ = 1.628 60 L of laminate;
+    // × 0.5 resin × 1.1 excess = 0.895 73 L; ÷ 3.785 411 784 L/gal (NIST SP 811 App. B, exact) = 0.236 63 US gal.
     const q = resinQuantity({ insideDiameterMm: 150, patchLengthMm: 600, thicknessMm: 6, resinFraction: 0.5, excess: 1.1 });
-    expect(q.laminateL).toBeCloseTo(1.69646, 5);
-    expect(q.resinL).toBeCloseTo(0.93305, 5);
-    expect(q.resinUsGal).toBeCloseTo(0.24649, 5);
+    expect(q.laminateL).toBeCloseTo(1.6286, 4);
+    expect(q.laminateL).toBeCloseTo((Math.PI / 4) * (150 ** 2 - 138 ** 2) * 600 / 1e6, 12);
+    expect(q.resinL).toBeCloseTo(0.89573, 5);
+    expect(q.resinUsGal).toBeCloseTo(0.23663, 5);
+  });
+
+  it('a resin-to-fabric ratio r by volume makes resin r/(1 + r) of the laminate', () => {
+    // By hand: 1 : 1 is half resin; 1.5 : 1 is 0.6; 0.5 : 1 is one third.
+    expect(resinFractionFromRatio(1)).toBe(0.5);
+    expect(resinFractionFromRatio(1.5)).toBeCloseTo(0.6, 12);
+    expect(resinFractionFromRatio(0.5)).toBeCloseTo(1 / 3, 12);
+    expect(DEFAULT_RESIN_TO_FABRIC_RATIO).toBe(1);
+    expect(DEFAULT_EXCESS_PCT).toBe(10);
+    expect(resinFractionFromRatio(DEFAULT_RESIN_TO_FABRIC_RATIO)).toBe(DEFAULT_RESIN_FRACTION);
+    for (const bad of [0, -1, NaN]) expect(() => resinFractionFromRatio(bad)).toThrow(SizingInputError);
   });
 
   it('uses the documented defaults (common practice: half resin, 10 % extra)', () => {

@@ -8,12 +8,14 @@ import { saveSettings } from '@/components/materials/save-settings';
 import { FormField, errorProps, inputClass } from '@/components/desk/form-field';
 import { Button } from '@/components/ui/button';
 import { RESIN_CHEMISTRIES, label } from '@/lib/domain';
+import { DEFAULT_EXCESS_PCT, DEFAULT_RESIN_TO_FABRIC_RATIO } from '@/lib/sizing';
 import { unitLabels, type UnitSystem } from '@/lib/units';
 import { resinSystemFormSchema, type ResinSystemFormValues, type ResinSystemInput } from '@/lib/validation/resin-systems';
 
 const BLANK: ResinSystemFormValues = {
   name: '', chemistry: 'epoxy', refTempC: Number.NaN, potLifeMin: Number.NaN, holdMin: Number.NaN, fullCureMin: Number.NaN,
   minTempC: Number.NaN, maxTempC: Number.NaN, sensitivityKind: 'doubling', doublingC: null, activationEnergyKj: null,
+  resinToFabricRatio: DEFAULT_RESIN_TO_FABRIC_RATIO, resinExcessPct: DEFAULT_EXCESS_PCT,
 };
 
 /** New or edit. Temperatures are typed in the company's units and stored in °C; the doubling step is a temperature difference. */
@@ -71,6 +73,9 @@ export function ResinSystemForm({ id, initial, unitSystem }: { id?: string; init
       {kind === 'arrhenius'
         ? num('activationEnergyKj', 'Activation energy (kJ/mol)')
         : num('doublingC', `Halving step (${deg} warmer)`, unitSystem === 'imperial' ? 'Rule of thumb: 18 °F' : 'Rule of thumb: 10 °C')}
+      <p className="text-xs text-slate-600 md:col-span-3">Resin quantity: how the plan works out the resin to mix for a patch. Blank takes the common-practice values (1 and 10 %).</p>
+      {num('resinToFabricRatio', 'Resin to fabric (by volume)', '1 = as much resin as fabric')}
+      {num('resinExcessPct', 'Extra mixed (%)', 'Left in the pot and on the wet-out sheet')}
       {message && <p role="alert" className="text-sm font-medium text-missed-700 md:col-span-3">{message}</p>}
       <div className="flex gap-2 md:col-span-3">
         <Button type="submit" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : id ? 'Save changes' : 'Add resin system'}</Button>

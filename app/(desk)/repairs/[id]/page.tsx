@@ -44,6 +44,7 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
         <div><dt className="text-slate-500">Inside diameter</dt><dd className="font-medium">{formatLength(segment.insideDiameterMm, unitSystem)}</dd></div>
         <div><dt className="text-slate-500">Distance from access point</dt><dd className="font-medium">{formatLength(repair.distanceMm, unitSystem, 'long')}{segment.fromAccessPoint ? ` from ${segment.fromAccessPoint.label}` : ''}</dd></div>
         <div><dt className="text-slate-500">Defect length</dt><dd className="font-medium">{formatLength(repair.defectLengthMm, unitSystem)}</dd></div>
+        <div><dt className="text-slate-500">Owner’s defect code</dt><dd className="font-medium">{repair.ownerDefectCode ?? '—'}</dd></div>
         <div><dt className="text-slate-500">Clock position</dt><dd className="font-medium">{repair.clockPosition ?? '—'}</dd></div>
         <div><dt className="text-slate-500">Planned packer</dt><dd className="font-medium">{repair.plannedPacker?.name ?? '—'}</dd></div>
         <div><dt className="text-slate-500">Installs</dt><dd className="font-medium">{repair.installCount}</dd></div>

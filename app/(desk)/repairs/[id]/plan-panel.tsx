@@ -11,6 +11,10 @@ import { submitJson } from '@/lib/client/submit-json';
 import type { RepairPlanResponse } from '@/lib/data/repairs';
 import { convertPressure, formatForce, formatLength, formatNumber, formatPressure, formatVolume, lengthFromSi, lengthToSi, unitLabels, type UnitSystem } from '@/lib/units';
 
+/** A modulus in the company's units: psi, or MPa (1 psi = 6.894 757 kPa, NIST SP 811). */
+const modulus = (psi: number, system: UnitSystem) =>
+  system === 'imperial' ? `${formatNumber(psi, 0)} psi` : `${formatNumber(convertPressure(psi, 'psi', 'kPa') / 1000, 0)} MPa`;
+
 type Kind = 'short' | 'long';
 // Thickness in thousandths of an inch or tenths of a millimetre; heads and patch lengths as typed.
 const DECIMALS: Record<UnitSystem, Record<Kind, number>> = { imperial: { short: 3, long: 2 }, metric: { short: 1, long: 2 } };
@@ -29,6 +33,7 @@ export function PlanPanel({ repairId, initial, editable }: { repairId: string; i
   const [ovality, setOvality] = useState(initial.saved.plannedOvalityPct == null ? '' : String(initial.saved.plannedOvalityPct));
   const [patch, setPatch] = useState(shown(initial.saved.plannedPatchLengthMm, 'short'));
   const [packerId, setPackerId] = useState(initial.saved.plannedPackerId ?? '');
+  const [resinSystemId, setResinSystemId] = useState(initial.resin?.resinSystem?.id ?? initial.resinSystems[0]?.id ?? '');
   const [saved, setSaved] = useState<string>();
   const [saveError, setSaveError] = useState<string>();
 
@@ -41,6 +46,7 @@ export function PlanPanel({ repairId, initial, editable }: { repairId: string; i
   put('thicknessMm', thickness, (n) => lengthToSi(n, system, 'short'));
   put('ovalityPct', ovality, (n) => n);
   put('patchLengthMm', patch, (n) => lengthToSi(n, system, 'short'));
+  if (resinSystemId) params.set('resinSystemId', resinSystemId);
   const url = `/api/repairs/${repairId}/plan?${params.toString()}`;
   const { data = initial, error, isLoading } = useSWR<RepairPlanResponse>(url, (u: string) => fetchJson<RepairPlanResponse>(u), { keepPreviousData: true });
   const fitting = data.packers.filter((p) => p.fits);
@@ -65,10 +71,19 @@ export function PlanPanel({ repairId, initial, editable }: { repairId: string; i
     <section aria-labelledby="plan-heading" className="space-y-4 rounded-lg bg-white p-4 ring-1 ring-slate-200">
       <h2 id="plan-heading" className="text-lg font-semibold">Plan</h2>
       <div className="grid gap-3 text-sm md:grid-cols-4">
-        <NumberBox label="Groundwater head" unit={units.longLength} hint="Water above the pipe’s invert" value={head} onChange={setHead} />
+        <NumberBox label="Groundwater head" unit={units.longLength} hint="Water above the pipe’s invert; 0 when there is none" value={head} onChange={setHead} />
         <NumberBox label="Laminate thickness" unit={units.shortLength} hint="Of the cured patch" value={thickness} onChange={setThickness} />
         <NumberBox label="Ovality" unit="%" hint={`Blank: ${data.assumptions.ovalityPct} % assumed`} value={ovality} onChange={setOvality} />
         <NumberBox label="Length to check" unit={units.shortLength} hint="Blank: the saved or proposed patch" value={patch} onChange={setPatch} />
+        {data.resinSystems.length > 1 && (
+          <div className="flex flex-col gap-1">
+            <label htmlFor={`${repairId}-resin`} className="font-medium">Resin system</label>
+            <select id={`${repairId}-resin`} value={resinSystemId} onChange={(e) => setResinSystemId(e.target.value)} className={inputClass}>
+              {data.resinSystems.map((r) => <option key={r.id} value={r.id}>{r.name}</option>)}
+            </select>
+            <p className="text-xs text-slate-500">Sets the resin-to-fabric ratio and the extra mixed</p>
+          </div>
+        )}
       </div>
       {error && <p role="alert" className="text-sm font-medium text-missed-700">{error instanceof FetchError ? error.message : 'Could not work out the plan.'}</p>}
 
@@ -78,11 +93,11 @@ export function PlanPanel({ repairId, initial, editable }: { repairId: string; i
             note={`Proposed ${formatLength(data.proposedPatchLengthMm, system, 'short', { decimals: DECIMALS[system].short - 1 })}: defect + ${formatLength(data.inputs.overlapPerEndMm, system)} overlap each end`} />
           <Figure term="Inside diameter" value={formatLength(data.inputs.insideDiameterMm, system)} />
           <Figure term="Resin to mix" value={data.resin ? formatVolume(data.resin.resinL, system) : '—'}
-            note={data.resin ? `Laminate ${formatVolume(data.resin.laminateL, system)}; half resin, 10 % extra (common practice)` : undefined} />
+            note={data.resin ? `Laminate ${formatVolume(data.resin.laminateL, system)}; ${data.resin.basis}` : undefined} />
           <Figure term="Thickness needed" value={data.design ? formatLength(data.design.requiredThicknessMm, system, 'short', { decimals: DECIMALS[system].short }) : '—'}
-            note={data.design ? `ASTM F1216 X1.1 buckling, ${formatPressure(convertPressure(data.design.groundwaterPsi, 'psi', 'kPa'), system)} of groundwater` : undefined} />
+            note={data.design ? `ASTM F1216 X1: ${data.design.summary}` : undefined} />
         </dl>
-        {data.design?.thick === true && <Badge tone="safe">Laminate thick enough for this groundwater</Badge>}
+        {data.design?.thick === true && <Badge tone="safe">Thick enough — {data.design.summary}</Badge>}
 
         <table className="min-w-full text-sm">
           <caption className="mb-1 text-left font-semibold">Packers</caption>
@@ -117,8 +132,9 @@ export function PlanPanel({ repairId, initial, editable }: { repairId: string; i
         )}
         {data.notes.length > 0 && <ul className="text-sm text-slate-600">{data.notes.map((n) => <li key={n}>{n}</li>)}</ul>}
         <p className="text-xs text-slate-500">
-          Thickness check assumes a long-term modulus of {formatNumber(data.assumptions.longTermModulusPsi, 0)} psi, enhancement factor K = {data.assumptions.enhancementK},
-          safety factor N = {data.assumptions.safetyFactor}, Poisson’s ratio {data.assumptions.poisson}; the patch’s outside diameter is taken as the pipe’s inside diameter.
+          Thickness check assumes a long-term modulus of {modulus(data.assumptions.longTermModulusPsi, system)} and a short-term one of {modulus(data.assumptions.shortTermModulusPsi, system)},
+          enhancement factor K = {data.assumptions.enhancementK}, safety factor N = {data.assumptions.safetyFactor}, Poisson’s ratio {data.assumptions.poisson};
+          the patch’s outside diameter is taken as the pipe’s inside diameter. X1.3 is worked in the form of ASTM F1216-07b and later editions.
         </p>
       </div>
 

@@ -12,6 +12,7 @@ import { startOutboxSync } from '@/lib/client/outbox';
 import { useWakeLock } from '@/lib/client/wake-lock';
 import { label } from '@/lib/domain';
 import type { InstallState } from '@/lib/install/state';
+import { groundwaterPressureKpa } from '@/lib/sizing';
 import { formatLength } from '@/lib/units';
 import { ClockStrip, deadlinesOf } from './clock-strip';
 import { EventLog } from './event-log';
@@ -46,7 +47,7 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
   const kits = view.options.resinKits.map((k) => ({ id: k.id, lot: k.lot, expiresOn: k.expiresOn, expired: k.expired, resinName: k.resinSystem.name }));
   const packers = view.options.packers.map((p) => ({ id: p.id, name: p.name, fits: p.fits, reasons: p.reasons }));
   const packer = view.options.packers.find((p) => p.id === state.conditions?.packerId) ?? null;
-  const rating = packer ? { minPressureKpa: packer.minPressureKpa, maxPressureKpa: packer.maxPressureKpa } : null;
+  const rating = packer ? { minPressureKpa: packer.minPressureKpa, maxPressureKpa: packer.maxPressureKpa, groundwaterKpa: groundwaterKpaOf(view.repair.plannedGroundwaterHeadMm) } : null;
   const canDecide = viewer.role !== 'technician';
   const first = async (fn: () => Promise<void>) => {
     unlockAudio();
@@ -181,3 +182,6 @@ function liveClock(view: InstallViewResponse, state: InstallState, now: Date): {
   });
   return { plan: clock.plan, flags: state.mixedAt ? clock.flags : [] };
 }
+
+// The planned groundwater head as a pressure, so a gauge reading below it can warn (lib/sizing).
+const groundwaterKpaOf = (headMm: number | null | undefined) => (headMm ? groundwaterPressureKpa(headMm) : null);

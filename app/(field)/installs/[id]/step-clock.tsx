@@ -1,10 +1,12 @@
 'use client';
 
 import { useState } from 'react';
+import { pressureVerdict } from '@/lib/sizing';
 import { pressureFromSi, pressureToSi, unitLabels, type UnitSystem } from '@/lib/units';
 import { Callout, FieldInput, PrimaryAction, StepCard } from './field-ui';
 
-type Rating = { minPressureKpa: number; maxPressureKpa: number } | null;
+// groundwaterKpa: the pressure of the repair's planned groundwater head, when the office entered one.
+type Rating = { minPressureKpa: number; maxPressureKpa: number; groundwaterKpa?: number | null } | null;
 
 /** One big button per clock step: mixed → loaded → in position. */
 export function StepTap({ title, label, hint, onTap, testId }: { title: string; label: string; hint?: string; onTap: () => void; testId: string }) {
@@ -16,7 +18,11 @@ export function StepTap({ title, label, hint, onTap, testId }: { title: string; 
   );
 }
 
-/** A pressure read from the gauge, in the company's units; outside the packer's rating asks for confirmation. */
+/**
+ * A pressure read from the gauge, in the company's units. Above the packer's rating the first thing said is to
+ * let pressure out into the rated range; below the rating or the groundwater head it warns. Anything outside the
+ * rating is recorded only after a second tap.
+ */
 function PressureEntry({ id, unitSystem, rating, actionLabel, onRecord }: { id: string; unitSystem: UnitSystem; rating: Rating; actionLabel: string; onRecord: (kPa: number, confirmedOutOfRange: boolean) => void }) {
   const unit = unitLabels(unitSystem).pressure;
   const [text, setText] = useState('');
@@ -25,6 +31,7 @@ function PressureEntry({ id, unitSystem, rating, actionLabel, onRecord }: { id: 
   const valid = text.trim() !== '' && Number.isFinite(value) && value > 0;
   const kPa = valid ? pressureToSi(value, unitSystem) : NaN;
   const outside = valid && rating !== null && (kPa < rating.minPressureKpa || kPa > rating.maxPressureKpa);
+  const verdict = valid ? pressureVerdict(kPa, rating, rating?.groundwaterKpa) : 'ok';
   const ratingText = rating ? `${fmt(rating.minPressureKpa, unitSystem)}–${fmt(rating.maxPressureKpa, unitSystem)} ${unit}` : 'unknown';
   const record = () => {
     if (!valid) return;
@@ -36,6 +43,22 @@ function PressureEntry({ id, unitSystem, rating, actionLabel, onRecord }: { id: 
   return (
     <div className="space-y-3">
       <FieldInput id={id} label={`Gauge pressure (${unit})`} hint={`Packer rating ${ratingText}`} inputMode="decimal" value={text} onChange={(e) => { setText(e.target.value); setConfirming(false); }} />
+      {verdict === 'over_rating' && (
+        <div role="alert" data-testid="pressure-over-rating">
+          <Callout tone="missed">
+            Release pressure now: {fmt(kPa, unitSystem)} {unit} is above this packer&apos;s rating. Stand clear of the pipe ends and let air out
+            until the gauge reads {ratingText}, then record that reading.
+          </Callout>
+        </div>
+      )}
+      {verdict === 'below_groundwater' && rating?.groundwaterKpa != null && (
+        <div data-testid="pressure-below-groundwater">
+          <Callout tone="near">
+            {fmt(kPa, unitSystem)} {unit} does not beat the groundwater on this repair ({fmt(rating.groundwaterKpa, unitSystem)} {unit}): the patch
+            may not be pressed to the wall. Raise the pressure within the packer&apos;s rating ({ratingText}).
+          </Callout>
+        </div>
+      )}
       {confirming && (
         <Callout tone="missed">
           {fmt(kPa, unitSystem)} {unit} is outside this packer&apos;s rating ({ratingText}). Check the gauge. Record it anyway?

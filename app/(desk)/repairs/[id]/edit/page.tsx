@@ -30,6 +30,7 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
         initial={{
           segmentId: repair.segmentId, distance: shown(repair.distanceMm, 'long'), defectType: repair.defectType, conditionGrade: repair.conditionGrade,
           defectLength: shown(repair.defectLengthMm, 'short'), clockPosition: repair.clockPosition ?? '', notes: repair.notes ?? '',
+          ownerDefectCode: repair.ownerDefectCode ?? '',
         }}
       />
     </div>
