@@ -3,11 +3,8 @@
 export async function register() {
   if (process.env.NEXT_RUNTIME !== 'nodejs') return;
   if (process.env.NEXT_PHASE === 'phase-production-build' || process.env.REPORT_WORKER === 'off') return;
-  const { startReportWorker } = await import('@/lib/jobs/worker');
-  try {
-    await startReportWorker();
-  } catch (error) {
-    // The site still serves pages; queued reports wait for the next start.
-    console.error('[jobs] the report worker did not start', error);
-  }
+  const { startReportWorkerWhenReady } = await import('@/lib/jobs/worker');
+  // Not awaited: the site serves pages while the database is still coming up, and the worker starts
+  // (retrying with backoff) as soon as it answers; sends queued meanwhile wait in report_sends.
+  startReportWorkerWhenReady();
 }

@@ -47,7 +47,10 @@ export const ATTACHMENT_STATUSES = ['pending', 'ready'] as const;
 export const REVIEW_DECISIONS = ['approved', 'sent_back'] as const;
 export const INVOICE_STATUSES = ['draft', 'issued', 'paid', 'void'] as const;
 
-export const REPORT_SEND_STATUSES = ['queued', 'sent', 'failed'] as const;
+export const REPORT_SEND_STATUSES = ['queued', 'sending', 'sent', 'failed'] as const;
+/** Why a received payment was not applied to its invoice (kept on the payment event and shown as an alert). */
+export const PAYMENT_PROBLEMS = ['already_paid', 'amount', 'currency', 'not_open'] as const;
+export type PaymentProblem = (typeof PAYMENT_PROBLEMS)[number];
 export type ReportSendStatus = (typeof REPORT_SEND_STATUSES)[number];
 
 /** Words shown to people for the codes above. */

@@ -8,6 +8,9 @@ export const envSchema = z.object({
     .regex(/^postgres(ql)?:\/\//, 'DATABASE_URL must be a postgres:// URL'),
   NEXTAUTH_SECRET: z.string().min(16, 'NEXTAUTH_SECRET must be at least 16 characters').optional(),
   NEXTAUTH_URL: z.url('NEXTAUTH_URL must be a URL').optional(),
+  // RECONCILE (closeout/perimeter): the key of the customer report links. Optional here with a derived
+  // fallback outside production (lib/report/link.ts); the perimeter branch makes it mandatory in production.
+  REPORT_LINK_SECRET: z.string().min(32, 'REPORT_LINK_SECRET must be at least 32 characters').optional(),
   NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
   // Object storage for evidence (S3 or any S3-compatible service): see storageEnv below.
   S3_ENDPOINT: z.url('S3_ENDPOINT must be a URL').optional(),

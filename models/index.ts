@@ -10,12 +10,12 @@ import { ChecklistTemplate, Packer, ResinKit, ResinSystem, initMaterials } from 
 import { Install, InstallEvent, initInstall } from './install';
 import { Attachment, AuditEntry, Review, initRecords } from './records';
 import { Invoice, InvoiceLine, PaymentEvent, initInvoice } from './invoice';
-import { ReportSend, initReportSend } from './report-send';
+import { ReportLink, ReportSend, initReportLink, initReportSend } from './report-send';
 
 // Initialise once per process (the module may be evaluated again by dev hot reload).
 const initialised = globalThis as unknown as { setlineModelsReady?: boolean };
 if (!initialised.setlineModelsReady || !Company.sequelize) {
-  for (const init of [initCompany, initUser, initCrew, initCustomer, initSite, initJob, initMaterials, initInstall, initRecords, initInvoice, initReportSend]) {
+  for (const init of [initCompany, initUser, initCrew, initCustomer, initSite, initJob, initMaterials, initInstall, initRecords, initInvoice, initReportSend, initReportLink]) {
     init(sequelize);
   }
   associate();
@@ -80,9 +80,11 @@ function associate() {
   Attachment.belongsTo(Job, { foreignKey: 'jobId', as: 'job' });
   ReportSend.belongsTo(Job, { foreignKey: 'jobId', as: 'job' });
   ReportSend.belongsTo(User, { foreignKey: 'sentById', as: 'sentBy' });
+  ReportSend.belongsTo(ReportLink, { foreignKey: 'linkId', as: 'link' });
+  ReportLink.belongsTo(Job, { foreignKey: 'jobId', as: 'job' });
 }
 
 export {
   sequelize, Company, User, Crew, CrewMember, Customer, Site, AccessPoint, Segment, Job, Repair,
-  ResinSystem, ResinKit, Packer, ChecklistTemplate, Install, InstallEvent, Attachment, Review, AuditEntry, Invoice, InvoiceLine, PaymentEvent, ReportSend,
+  ResinSystem, ResinKit, Packer, ChecklistTemplate, Install, InstallEvent, Attachment, Review, AuditEntry, Invoice, InvoiceLine, PaymentEvent, ReportSend, ReportLink,
 };

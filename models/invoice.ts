@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import { INVOICE_STATUSES } from '@/lib/domain';
+import { INVOICE_STATUSES, PAYMENT_PROBLEMS, type PaymentProblem } from '@/lib/domain';
 import { decimal } from './columns';
 
 /** What the customer owes for one job: integer cents, tax in basis points. */
@@ -20,6 +20,9 @@ export class Invoice extends Model<InferAttributes<Invoice>, InferCreationAttrib
   declare paidAt: CreationOptional<Date | null>;
   declare paidCents: CreationOptional<number | null>;
   declare paymentSessionId: CreationOptional<string | null>;
+  /** A received payment that did not match (second payment, wrong amount or currency): shown until dealt with. */
+  declare paymentAlert: CreationOptional<string | null>;
+  declare paymentAlertAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -46,6 +49,7 @@ export class PaymentEvent extends Model<InferAttributes<PaymentEvent>, InferCrea
   declare providerEventId: string;
   declare type: string;
   declare amountCents: CreationOptional<number | null>;
+  declare problem: CreationOptional<PaymentProblem | null>;
   declare payload: CreationOptional<Record<string, unknown>>;
   declare createdAt: CreationOptional<Date>;
 }
@@ -70,6 +74,8 @@ export function initInvoice(sequelize: Sequelize) {
       paidAt: DataTypes.DATE,
       paidCents: DataTypes.INTEGER,
       paymentSessionId: DataTypes.STRING(255),
+      paymentAlert: DataTypes.TEXT,
+      paymentAlertAt: DataTypes.DATE,
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },
@@ -99,6 +105,7 @@ export function initInvoice(sequelize: Sequelize) {
       providerEventId: { type: DataTypes.STRING(255), allowNull: false },
       type: { type: DataTypes.STRING(80), allowNull: false },
       amountCents: DataTypes.INTEGER,
+      problem: { type: DataTypes.STRING(20), validate: { isIn: [PAYMENT_PROBLEMS] } },
       payload: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
       createdAt: DataTypes.DATE,
     },

@@ -14,6 +14,12 @@ export class ReportSend extends Model<InferAttributes<ReportSend>, InferCreation
   declare messageId: CreationOptional<string | null>;
   /** When the customer link in this e-mail stops working. */
   declare linkExpiresAt: Date;
+  /** The customer link this e-mail carries (report_links); revoking it refuses the link. */
+  declare linkId: CreationOptional<string | null>;
+  /** When a worker took the row to send it (status `sending`); a stale claim may be taken over. */
+  declare claimedAt: CreationOptional<Date | null>;
+  /** The pg-boss job that delivers it, written in the same transaction as the row. */
+  declare queueJobId: CreationOptional<string | null>;
   declare sentById: CreationOptional<string | null>;
   declare sentAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
@@ -33,11 +39,40 @@ export function initReportSend(sequelize: Sequelize) {
       lastError: DataTypes.TEXT,
       messageId: DataTypes.STRING(300),
       linkExpiresAt: { type: DataTypes.DATE, allowNull: false },
+      linkId: DataTypes.UUID,
+      claimedAt: DataTypes.DATE,
+      queueJobId: DataTypes.UUID,
       sentById: DataTypes.UUID,
       sentAt: DataTypes.DATE,
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },
     { sequelize, modelName: 'ReportSend', tableName: 'report_sends', underscored: true },
+  );
+}
+
+/** One customer link to a job's report. The token names the row; a revoked or missing row refuses the link. */
+export class ReportLink extends Model<InferAttributes<ReportLink>, InferCreationAttributes<ReportLink>> {
+  declare id: CreationOptional<string>;
+  declare companyId: string;
+  declare jobId: string;
+  declare expiresAt: Date;
+  declare revokedAt: CreationOptional<Date | null>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+export function initReportLink(sequelize: Sequelize) {
+  ReportLink.init(
+    {
+      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+      companyId: { type: DataTypes.UUID, allowNull: false },
+      jobId: { type: DataTypes.UUID, allowNull: false },
+      expiresAt: { type: DataTypes.DATE, allowNull: false },
+      revokedAt: DataTypes.DATE,
+      createdAt: DataTypes.DATE,
+      updatedAt: DataTypes.DATE,
+    },
+    { sequelize, modelName: 'ReportLink', tableName: 'report_links', underscored: true },
   );
 }

@@ -6,11 +6,12 @@ import type { SessionUser } from '@/lib/auth/session';
 import { InvoiceActions } from './invoice-actions';
 import { InvoiceForm } from './invoice-form';
 import { InvoiceSummary } from './invoice-summary';
+import { PaymentAlert } from './payment-alert';
 
 type RepairLine = { id: string; position: number; defectType: string; distanceMm: number; plannedPatchLengthMm: number | null; status: string; segment?: { label: string } | null };
 
 /** The job page's invoice section: the live invoice with its actions, or a form to draft one from the repairs. */
-export async function InvoicePanel({ user, job, unitSystem }: { user: SessionUser; job: { id: string; number: string; status: string; repairs?: RepairLine[] }; unitSystem: UnitSystem }) {
+export async function InvoicePanel({ user, job, unitSystem, timeZone }: { user: SessionUser; job: { id: string; number: string; status: string; repairs?: RepairLine[] }; unitSystem: UnitSystem; timeZone?: string }) {
   const invoice = await invoiceOfJob(user.companyId, job.id);
   const repairs = (job.repairs ?? []).filter((repair) => repair.status !== 'cancelled');
   return (
@@ -18,6 +19,7 @@ export async function InvoicePanel({ user, job, unitSystem }: { user: SessionUse
       <h2 id="invoice-heading" className="text-lg font-semibold">Invoice</h2>
       {invoice ? (
         <>
+          {invoice.paymentAlert && <PaymentAlert text={invoice.paymentAlert} at={invoice.paymentAlertAt} timeZone={timeZone} />}
           <InvoiceSummary invoice={invoice} />
           <InvoiceActions invoiceId={invoice.id} status={invoice.status} />
         </>

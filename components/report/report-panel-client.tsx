@@ -2,7 +2,7 @@
 
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useRouter } from 'next/navigation';
-import { useEffect, useRef, useState } from 'react';
+import { useEffect, useRef, useState, type ReactNode } from 'react';
 import { useForm } from 'react-hook-form';
 import useSWR from 'swr';
 import type { ReportSendsResponse } from '@/app/api/jobs/[id]/report-sends/route';
@@ -13,16 +13,17 @@ import { fetchJson } from '@/lib/client/fetch-json';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
 import { sendReportSchema, type SendReportInput } from '@/lib/validation/report';
 
-const TONES: Record<string, 'near' | 'safe' | 'missed'> = { queued: 'near', sent: 'safe', failed: 'missed' };
+const TONES: Record<string, 'near' | 'safe' | 'missed'> = { queued: 'near', sending: 'near', sent: 'safe', failed: 'missed' };
+const STATUS_TEXT: Record<string, string> = { queued: 'Queued', sending: 'Sending', sent: 'Sent', failed: 'Failed' };
 
-export function ReportPanelClient({ jobId, customerEmail, blockedReason }: { jobId: string; customerEmail: string | null; blockedReason: string | null }) {
+export function ReportPanelClient({ jobId, customerEmail, blockedReason, linksSlot }: { jobId: string; customerEmail: string | null; blockedReason: string | null; linksSlot?: ReactNode }) {
   const router = useRouter();
   const [open, setOpen] = useState(false);
   const [notice, setNotice] = useState<string | null>(null);
   const url = `/api/jobs/${jobId}/report-sends`;
   const { data, mutate } = useSWR<ReportSendsResponse>(url, (u: string) => fetchJson<ReportSendsResponse>(u), {
     // Poll while the worker still has something of ours to do.
-    refreshInterval: (latest) => (latest?.items.some((s) => s.status === 'queued') ? 2000 : 0),
+    refreshInterval: (latest) => (latest?.items.some((s) => s.status === 'queued' || s.status === 'sending') ? 2000 : 0),
   });
   const form = useForm<SendReportInput>({ resolver: zodResolver(sendReportSchema), defaultValues: { to: customerEmail ?? '', message: '' } });
   const { errors, isSubmitting } = form.formState;
@@ -59,6 +60,7 @@ export function ReportPanelClient({ jobId, customerEmail, blockedReason }: { job
         </div>
       </div>
       {blockedReason && <p className="mt-2 text-sm text-slate-600">{blockedReason}</p>}
+      {linksSlot && <div className="mt-2">{linksSlot}</div>}
       <p role="status" className="mt-2 text-sm text-slate-700">{notice}</p>
       {open && (
         <form id="report-send-form" onSubmit={form.handleSubmit(onSubmit)} className="mt-3 grid max-w-xl gap-3" noValidate>
@@ -81,7 +83,7 @@ export function ReportPanelClient({ jobId, customerEmail, blockedReason }: { job
               <td className="px-3 py-2">{new Date(send.createdAt).toLocaleString()}</td>
               <td className="px-3 py-2">{send.toAddress}</td>
               <td className="px-3 py-2">{send.sentByName ?? '—'}</td>
-              <td className="px-3 py-2"><Badge tone={TONES[send.status]}>{send.status === 'queued' ? 'Queued' : send.status === 'sent' ? 'Sent' : 'Failed'}</Badge></td>
+              <td className="px-3 py-2"><Badge tone={TONES[send.status]}>{STATUS_TEXT[send.status] ?? send.status}</Badge></td>
               <td className="px-3 py-2">{send.attempts}</td>
               <td className="px-3 py-2 text-missed-700">{send.lastError ?? ''}</td>
             </tr>

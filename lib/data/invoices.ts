@@ -10,6 +10,7 @@ import type { InvoiceInput, InvoiceListQuery, invoiceActionSchema, invoiceLineSc
 import type { z } from 'zod';
 import { allOf, pageOf, searchWhere, windowOf } from './list';
 import { assertOfficeWriter } from './scope';
+import { closeCheckoutOf } from './payments';
 import { lockOwnRow } from './records';
 
 const ENTITY = 'invoice';
@@ -147,6 +148,8 @@ export async function changeInvoiceStatus(user: SessionUser, id: string, { actio
       await invoice.update({ status: 'issued', issuedAt: new Date() }, { transaction });
     } else {
       if (invoice.status === 'paid' || invoice.status === 'void') throw new AppError(409, `Invoice ${invoice.number} is ${invoice.status} and cannot be voided.`);
+      // A checkout the customer still has open must not take money for a void invoice (409 if it just did).
+      await closeCheckoutOf(invoice);
       await invoice.update({ status: 'void' }, { transaction });
     }
     await recordAudit(user, { action, entityType: ENTITY, entityId: id, reason }, transaction);

@@ -6,9 +6,10 @@ import { recordAudit } from '@/lib/audit';
 import type { SessionUser } from '@/lib/auth/session';
 import { label } from '@/lib/domain';
 import { AppError, notFound } from '@/lib/errors';
-import { enqueueReportSend } from '@/lib/jobs/queue';
+import { enqueueReportSend, getBoss } from '@/lib/jobs/queue';
 import { linkExpiry } from '@/lib/report/link';
 import type { SendReport } from '@/lib/validation/report';
+import { createReportLink } from './report-links';
 import { assertOfficeWriter } from './scope';
 
 /** Job statuses from which the report may be (re-)sent. */
@@ -27,20 +28,21 @@ export async function requestReportSend(user: SessionUser, jobId: string, input:
   if (!to) {
     throw new AppError(422, 'The customer has no e-mail address on file: enter the address to send the report to.', { to: ['Enter an e-mail address'] });
   }
+  // The boss is started outside the transaction; without it (database hiccup, queue not ready) the row
+  // is still written and the sweeper queues it within minutes.
+  const boss = await getBoss().catch((error) => void console.error('[jobs] report queued without a job; the sweeper will pick it up', error));
   const send = await sequelize.transaction(async (transaction) => {
+    const expiresAt = linkExpiry();
+    const link = await createReportLink(user.companyId, job.id, expiresAt, transaction);
     const row = await ReportSend.create(
-      { companyId: user.companyId, jobId: job.id, toAddress: to, message: input.message ?? null, linkExpiresAt: linkExpiry(), sentById: user.id },
+      { companyId: user.companyId, jobId: job.id, toAddress: to, message: input.message ?? null, linkExpiresAt: expiresAt, linkId: link.id, sentById: user.id },
       { transaction },
     );
+    // The queue job is inserted on this transaction's connection: the row and its job commit together.
+    if (boss) await row.update({ queueJobId: await enqueueReportSend(row.id, transaction) }, { transaction });
     await recordAudit(user, { action: 'report_requested', entityType: 'job', entityId: job.id, changes: { to, reportSendId: row.id } }, transaction);
     return row;
   });
-  try {
-    await enqueueReportSend(send.id);
-  } catch (error) {
-    await send.update({ status: 'failed', lastError: 'Could not queue the e-mail; try again.' });
-    throw error;
-  }
   return send.get({ plain: true });
 }
 

@@ -1,15 +1,18 @@
 import { createHmac, timingSafeEqual } from 'node:crypto';
 import { authSecret } from '@/lib/auth/secret';
+import { env } from '@/lib/env';
 
 // The customer's link to a repair report: `<payload>.<signature>`, both base64url. The payload names
-// the job, its company and the expiry; the signature is HMAC-SHA256 over it with a server secret.
-// Nothing is looked up before the signature checks out, so a forged link learns nothing.
+// the link's own row (report_links, so the office can revoke it), the job, its company and the expiry;
+// the signature is HMAC-SHA256 over it with REPORT_LINK_SECRET. Nothing is looked up before the
+// signature checks out, so a forged link learns nothing.
 
 export const DEFAULT_LINK_DAYS = 30;
-const VERSION = 'r1';
+// r1 tokens (no link row) are no longer accepted: a link that cannot be revoked is refused.
+const VERSION = 'r2';
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/;
 
-export type LinkClaims = { jobId: string; companyId: string; expiresAt: Date };
+export type LinkClaims = { linkId: string; jobId: string; companyId: string; expiresAt: Date };
 export type LinkCheck =
   | ({ ok: true } & LinkClaims)
   | { ok: false; reason: 'malformed' | 'signature' }
@@ -18,10 +21,10 @@ export type LinkCheck =
 
 /** The token for a job's report, valid until `expiresAt`. */
 export function signReportLink(claims: LinkClaims, secret: Buffer | string = reportLinkSecret()): string {
-  if (!UUID.test(claims.jobId) || !UUID.test(claims.companyId)) throw new Error('A report link names a job and a company by id.');
+  if (!UUID.test(claims.linkId) || !UUID.test(claims.jobId) || !UUID.test(claims.companyId)) throw new Error('A report link names its link row, a job and a company by id.');
   const seconds = Math.floor(claims.expiresAt.getTime() / 1000);
   if (!Number.isFinite(seconds)) throw new Error('A report link needs an expiry date.');
-  const payload = Buffer.from(`${VERSION}:${claims.jobId}:${claims.companyId}:${seconds}`).toString('base64url');
+  const payload = Buffer.from(`${VERSION}:${claims.linkId}:${claims.jobId}:${claims.companyId}:${seconds}`).toString('base64url');
   return `${payload}.${mac(payload, secret)}`;
 }
 
@@ -37,10 +40,10 @@ export function verifyReportLink(token: string, now = new Date(), secret: Buffer
   const expected = Buffer.from(mac(payload, secret), 'utf8');
   if (given.length !== expected.length || !timingSafeEqual(given, expected)) return { ok: false, reason: 'signature' };
   const fields = Buffer.from(payload, 'base64url').toString('utf8').split(':');
-  if (fields.length !== 4 || fields[0] !== VERSION || !UUID.test(fields[1]) || !UUID.test(fields[2]) || !/^\d{1,12}$/.test(fields[3])) {
+  if (fields.length !== 5 || fields[0] !== VERSION || !fields.slice(1, 4).every((f) => UUID.test(f)) || !/^\d{1,12}$/.test(fields[4])) {
     return { ok: false, reason: 'malformed' };
   }
-  const claims = { jobId: fields[1], companyId: fields[2], expiresAt: new Date(Number(fields[3]) * 1000) };
+  const claims = { linkId: fields[1], jobId: fields[2], companyId: fields[3], expiresAt: new Date(Number(fields[4]) * 1000) };
   if (claims.expiresAt.getTime() <= now.getTime()) return { ok: false, reason: 'expired', ...claims };
   return { ok: true, ...claims };
 }
@@ -50,13 +53,25 @@ export const linkExpiry = (now = new Date(), days = DEFAULT_LINK_DAYS) => new Da
 
 /** The address the customer opens. */
 export function reportLinkUrl(token: string): string {
-  const base = process.env.APP_URL || process.env.NEXTAUTH_URL || 'http://localhost:3000';
-  return `${base.replace(/\/+$/, '')}/r/${token}`;
+  return `${appBaseUrl()}/r/${token}`;
 }
 
-/** REPORT_LINK_SECRET when set; otherwise a key derived from the session secret (never the session secret itself). */
+/**
+ * Where the payment provider sends the customer back: names the link row only, never the token, so
+ * the provider (and its logs) never hold a key to the report. /r/back/<linkId> finds the way home.
+ */
+export function paymentReturnUrl(linkId: string, base = appBaseUrl()): string {
+  return `${base.replace(/\/+$/, '')}/r/back/${linkId}`;
+}
+
+const appBaseUrl = () => (process.env.APP_URL || process.env.NEXTAUTH_URL || 'http://localhost:3000').replace(/\/+$/, '');
+
+/**
+ * REPORT_LINK_SECRET (through lib/env) when set; otherwise, in development and tests only, a key derived
+ * from the session secret (never the session secret itself). RECONCILE: production is to require its own key.
+ */
 export function reportLinkSecret(): Buffer {
-  const own = process.env.REPORT_LINK_SECRET;
+  const own = env().REPORT_LINK_SECRET;
   if (own) return Buffer.from(own);
   return createHmac('sha256', authSecret()).update('setline/report-links/v1').digest();
 }

@@ -1,7 +1,9 @@
 // A local stand-in for the payment provider's API, enough for Checkout: the official `stripe` SDK talks to it
 // (host/port/protocol options), it serves a hosted "pay" page, and on payment it delivers a signed
 // `checkout.session.completed` webhook exactly as the provider documents the Stripe-Signature header
-// (t=<unix time>,v1=<HMAC-SHA256 of "t.payload" with the endpoint secret>). No money moves.
+// (t=<unix time>,v1=<HMAC-SHA256 of "t.payload" with the endpoint secret>). Sessions can be retrieved and
+// expired (POST /v1/checkout/sessions/:id/expire, open sessions only) and lapse after 24 hours, as the
+// provider documents them. No money moves.
 import { createHmac, randomBytes } from 'node:crypto';
 import { createServer } from 'node:http';
 
@@ -31,13 +33,21 @@ export async function start({ port }) {
           amount_total: amountTotal, currency: lines[0].price_data?.currency ?? 'usd', metadata: params.metadata ?? {},
           client_reference_id: params.client_reference_id ?? null, customer_email: params.customer_email ?? null,
           success_url: params.success_url, cancel_url: params.cancel_url ?? null, url: `http://127.0.0.1:${port}/pay/${id}`,
-          created: Math.floor(Date.now() / 1000), livemode: false,
+          created: Math.floor(Date.now() / 1000), expires_at: Math.floor(Date.now() / 1000) + 86_400, livemode: false,
         };
         sessions.set(id, session);
         return json(200, session);
       }
       const found = url.pathname.match(/^\/v1\/checkout\/sessions\/([\w]+)$/);
-      if (request.method === 'GET' && found) return sessions.has(found[1]) ? json(200, sessions.get(found[1])) : apiError(404, 'No such checkout.session');
+      if (request.method === 'GET' && found) return sessions.has(found[1]) ? json(200, lapse(sessions.get(found[1]))) : apiError(404, `No such checkout.session: '${found[1]}'`);
+      const expire = url.pathname.match(/^\/v1\/checkout\/sessions\/([\w]+)\/expire$/);
+      if (request.method === 'POST' && expire) {
+        const session = sessions.get(expire[1]);
+        if (!session) return apiError(404, `No such checkout.session: '${expire[1]}'`);
+        if (lapse(session).status !== 'open') return apiError(400, `Only an open checkout session can be expired; this one is ${session.status}.`);
+        Object.assign(session, { status: 'expired', url: null });
+        return json(200, session);
+      }
       return apiError(404, `Unrecognized request URL (${request.method}: ${url.pathname}).`);
     }
 
@@ -46,6 +56,7 @@ export async function start({ port }) {
     if (page) {
       const session = sessions.get(page[1]);
       if (!session) { response.writeHead(404, { 'content-type': 'text/plain' }); return response.end('No such payment'); }
+      if (lapse(session).status === 'expired') { response.writeHead(410, { 'content-type': 'text/plain' }); return response.end('This payment page has expired.'); }
       if (request.method === 'POST') {
         if (session.payment_status !== 'paid') {
           Object.assign(session, { status: 'complete', payment_status: 'paid' });
@@ -67,6 +78,12 @@ ${session.cancel_url ? `<p><a href="${escapeHtml(session.cancel_url)}">Cancel</a
     response.writeHead(404, { 'content-type': 'text/plain' });
     response.end('Not found');
   });
+
+  // An open session past its expiry reads as expired, like the provider's.
+  function lapse(session) {
+    if (session.status === 'open' && session.expires_at <= Math.floor(Date.now() / 1000)) Object.assign(session, { status: 'expired', url: null });
+    return session;
+  }
 
   // Where the provider would be told (in its dashboard) to send events: here, the app that made the session.
   async function deliver(session) {

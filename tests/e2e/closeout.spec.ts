@@ -12,7 +12,7 @@ test('approve, invoice, report by e-mail, the customer pays from the link, the o
   test.setTimeout(240_000);
   const office = await (await browser.newContext()).newPage();
   await signIn(office, 'office@demo.test');
-  await expect(office).toHaveURL('/jobs');
+  await expect(office).toHaveURL('/jobs', { timeout: 30_000 }); // may be the run's first sign-in, on a cold server
 
   // Approve the install awaiting review on …-0008.
   await office.goto('/reviews');
@@ -76,4 +76,32 @@ test('approve, invoice, report by e-mail, the customer pays from the link, the o
   await expect(office.getByRole('region', { name: 'Invoice' })).toContainText('Paid');
   await office.goto('/invoices?status=paid');
   await expect(office.getByRole('row').filter({ hasText: `INV-${jobNumber}` })).toContainText('$2,273.25');
+
+  // A second payment arrives for the paid invoice (a checkout made outside the app, paid late): the office
+  // sees a payment problem on the invoice, in the list and in the job's history.
+  const paidInvoice = (await (await office.request.get(`/api/invoices?q=${encodeURIComponent(jobNumber)}&status=paid`)).json()).items[0];
+  const stray = await (await office.request.post(`${process.env.STRIPE_API_URL}/v1/checkout/sessions`, {
+    headers: { authorization: `Bearer ${process.env.STRIPE_SECRET_KEY}` },
+    form: {
+      mode: 'payment', 'metadata[invoiceId]': paidInvoice.id, 'metadata[companyId]': paidInvoice.companyId,
+      success_url: new URL('/r/back/x?paid=1', office.url()).href,
+      'line_items[0][quantity]': '1', 'line_items[0][price_data][currency]': 'usd', 'line_items[0][price_data][unit_amount]': '227325',
+      'line_items[0][price_data][product_data][name]': 'Invoice',
+    },
+  })).json();
+  await office.request.post(stray.url, { maxRedirects: 0 });
+  await office.goto(`/jobs/${job.id}`);
+  await expect(office.getByRole('region', { name: 'Invoice' }).getByTestId('payment-alert')).toContainText('A second payment of $2,273.25');
+  await expect(office.getByRole('region', { name: 'History' })).toContainText('payment_mismatch');
+  await office.goto('/invoices?status=paid');
+  await expect(office.getByRole('row').filter({ hasText: `INV-${jobNumber}` })).toContainText('Payment problem');
+
+  // The office revokes the customer links: the link from the e-mail now answers like any bad link.
+  await office.goto(`/jobs/${job.id}`);
+  office.once('dialog', (dialog) => dialog.accept());
+  await report.getByRole('button', { name: 'Revoke customer links' }).click();
+  await expect(report.getByRole('status').filter({ hasText: 'Customer links revoked.' })).toBeVisible();
+  await customer.goto(link!);
+  await expect(customer.getByText('This link is not valid or has expired — ask the company that sent it for a new one.')).toBeVisible();
+  expect((await customer.request.get(`${link}/pdf`)).status()).toBe(404);
 });

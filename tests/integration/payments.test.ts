@@ -7,6 +7,7 @@ import { POST as webhookRoute } from '@/app/api/payments/webhook/route';
 import { startCheckout } from '@/lib/data/payments';
 import { Invoice, Job, PaymentEvent } from '@/models';
 import { makeWorld, type World } from './helpers/world';
+import { linkToken } from './report-fixtures';
 
 // The payment fake (scripts/fakes/payments.fake.mjs, started by scripts/test.sh) delivers its signed
 // webhook over a real socket to the origin of the checkout's success URL: this little server, which
@@ -98,10 +99,9 @@ describe('online payment of an invoice (payment fake over sockets)', () => {
 describe('"Pay now" behind the customer link', () => {
   it('sends a valid link to the hosted checkout, refuses a tampered one, and returns a paid one to the report', async () => {
     const { POST: payRoute } = await import('@/app/r/[token]/pay/route');
-    const { signReportLink, linkExpiry } = await import('@/lib/report/link');
     const world = await makeWorld('Link');
     const invoice = await Invoice.create({ companyId: world.company.id, jobId: world.job.id, number: 'INV-LINK', status: 'issued', dueOn: '2026-12-31', subtotalCents: 5000, totalCents: 5000 });
-    const token = signReportLink({ jobId: world.job.id, companyId: world.company.id, expiresAt: linkExpiry() });
+    const token = await linkToken(world.job.id, world.company.id);
     const pay = (t: string) => payRoute(new Request(`http://localhost/r/${t}/pay`, { method: 'POST' }), { params: Promise.resolve({ token: t }) });
 
     const ok = await pay(token);

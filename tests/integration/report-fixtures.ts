@@ -3,7 +3,9 @@ import { mkdtemp, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { promisify } from 'node:util';
-import { Install, Job } from '@/models';
+import { randomUUID } from 'node:crypto';
+import { Install, Job, ReportLink } from '@/models';
+import { linkExpiry, signReportLink } from '@/lib/report/link';
 import { cleanInstall, postAll, startInstall } from './helpers/installs';
 import { signInAs } from './helpers/session';
 import { makeInstallWorld } from './helpers/world';
@@ -47,3 +49,13 @@ export async function eventually<T>(probe: () => Promise<T | undefined>, ms = 20
     await new Promise((resolve) => setTimeout(resolve, 250));
   }
 }
+
+/** A customer link of the job: a link row of its own and the signed token naming it. */
+export async function linkToken(jobId: string, companyId: string, expiresAt = linkExpiry()) {
+  const link = await ReportLink.create({ companyId, jobId, expiresAt });
+  return signReportLink({ linkId: link.id, jobId, companyId, expiresAt });
+}
+
+/** A well-signed token whose link row does not exist. */
+export const unrecordedToken = (jobId: string, companyId: string, expiresAt = linkExpiry()) =>
+  signReportLink({ linkId: randomUUID(), jobId, companyId, expiresAt });

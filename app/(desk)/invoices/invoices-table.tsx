@@ -2,7 +2,7 @@
 
 import type { ColumnDef } from '@tanstack/react-table';
 import Link from 'next/link';
-import { StatusBadge } from '@/components/ui/badge';
+import { Badge, StatusBadge } from '@/components/ui/badge';
 import { DataTable } from '@/components/ui/data-table';
 import { formatMoney } from '@/lib/invoice/money';
 import type { InvoiceListResponse } from '@/app/api/invoices/route';
@@ -17,7 +17,17 @@ const columns: ColumnDef<Row, unknown>[] = [
     cell: ({ row }) => <Link href={`/jobs/${row.original.jobId}`} className="text-brand-700 hover:underline">{row.original.job?.number}</Link>,
   },
   { id: 'customer', header: 'Customer', cell: ({ row }) => row.original.job?.customer?.name },
-  { id: 'status', header: 'Status', enableSorting: true, cell: ({ row }) => <StatusBadge status={row.original.status} /> },
+  {
+    id: 'status',
+    header: 'Status',
+    enableSorting: true,
+    cell: ({ row }) => (
+      <span className="inline-flex flex-wrap items-center gap-1">
+        <StatusBadge status={row.original.status} />
+        {row.original.paymentAlert && <Badge tone="missed">Payment problem</Badge>}
+      </span>
+    ),
+  },
   { id: 'totalCents', header: 'Total', enableSorting: true, cell: ({ row }) => <span className="tabular-nums">{formatMoney(row.original.totalCents, row.original.currency)}</span> },
   { id: 'dueOn', header: 'Due', enableSorting: true, cell: ({ row }) => row.original.dueOn },
 ];

@@ -4,8 +4,9 @@ import { DEFAULT_LINK_DAYS, linkExpiry, signReportLink, verifyReportLink } from 
 const SECRET = 'unit-test-secret-0123456789';
 const JOB = '3f2b8c1e-9a4d-4e6f-8b1a-2c3d4e5f6a7b';
 const COMPANY = '7a6b5c4d-3e2f-4a1b-9c8d-7e6f5a4b3c2d';
+const LINK = '0c9d8e7f-6a5b-4c3d-8e2f-1a0b9c8d7e6f';
 const NOW = new Date('2026-12-01T12:00:00Z');
-const claims = { jobId: JOB, companyId: COMPANY, expiresAt: linkExpiry(NOW) };
+const claims = { linkId: LINK, jobId: JOB, companyId: COMPANY, expiresAt: linkExpiry(NOW) };
 
 describe('report links', () => {
   it('verifies what it signed, until the expiry (30 days by default)', () => {
@@ -39,13 +40,19 @@ describe('report links', () => {
 
   it('refuses a well-signed payload that is not a report claim', async () => {
     const { createHmac } = await import('node:crypto');
-    const payload = Buffer.from(`r1:not-a-uuid:${COMPANY}:9999999999`).toString('base64url');
-    const signature = createHmac('sha256', SECRET).update(payload).digest('base64url');
-    expect(verifyReportLink(`${payload}.${signature}`, NOW, SECRET)).toEqual({ ok: false, reason: 'malformed' });
+    const sign = (text: string) => {
+      const payload = Buffer.from(text).toString('base64url');
+      return `${payload}.${createHmac('sha256', SECRET).update(payload).digest('base64url')}`;
+    };
+    expect(verifyReportLink(sign(`r2:${LINK}:not-a-uuid:${COMPANY}:9999999999`), NOW, SECRET)).toEqual({ ok: false, reason: 'malformed' });
+    // The earlier form without a link row cannot be revoked, so it is refused even when well signed.
+    expect(verifyReportLink(sign(`r1:${JOB}:${COMPANY}:9999999999`), NOW, SECRET)).toEqual({ ok: false, reason: 'malformed' });
+    expect(verifyReportLink(sign(`r2:${LINK}:${JOB}:${COMPANY}:9999999999`), NOW, SECRET)).toEqual({ ok: true, ...claims, expiresAt: new Date(9_999_999_999_000) });
   });
 
   it('only signs ids and real dates', () => {
     expect(() => signReportLink({ ...claims, jobId: 'x' }, SECRET)).toThrow();
+    expect(() => signReportLink({ ...claims, linkId: 'x' }, SECRET)).toThrow();
     expect(() => signReportLink({ ...claims, expiresAt: new Date(Number.NaN) }, SECRET)).toThrow();
   });
 });

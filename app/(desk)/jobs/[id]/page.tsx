@@ -94,8 +94,8 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
         </ul>
       </section>
       {/* Repair report (send + send log) */}
-      <ReportPanel job={job} />
-      <InvoicePanel user={user} job={job} unitSystem={unitSystem} />
+      <ReportPanel user={user} job={job} />
+      <InvoicePanel user={user} job={job} unitSystem={unitSystem} timeZone={timeZone} />
       <AuditHistory user={user} entityType="job" entityId={job.id} timeZone={timeZone} />
     </div>
   );

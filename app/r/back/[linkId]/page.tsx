@@ -1,0 +1,33 @@
+import type { Metadata } from 'next';
+import { cookies } from 'next/headers';
+import { redirect } from 'next/navigation';
+import { checkLiveLink } from '@/lib/report/link-access';
+import { RETURN_COOKIE } from '@/lib/report/payment-return';
+
+// Where the payment provider sends the customer back (it never sees the report token). With the cookie
+// "Pay now" left in this browser for this very link, the customer lands on the report again; anyone else
+// gets a plain page that says nothing about the report or the job.
+export const dynamic = 'force-dynamic';
+export const metadata: Metadata = { title: 'Payment', robots: { index: false, follow: false }, referrer: 'no-referrer' };
+
+export default async function Page({ params, searchParams }: { params: Promise<{ linkId: string }>; searchParams: Promise<{ paid?: string }> }) {
+  const { linkId } = await params;
+  const paid = (await searchParams).paid === '1';
+  const token = (await cookies()).get(RETURN_COOKIE)?.value;
+  if (token) {
+    const check = await checkLiveLink(token);
+    if (check.ok && check.linkId === linkId) redirect(`/r/${encodeURIComponent(token)}${paid ? '?paid=1' : ''}`);
+  }
+  return (
+    <main className="min-h-screen bg-slate-50">
+      <div className="mx-auto max-w-lg p-8 text-center">
+        <h1 className="text-2xl font-bold">{paid ? 'Thank you' : 'Payment not completed'}</h1>
+        <p className="mt-3 text-slate-700">
+          {paid
+            ? 'Your payment is being confirmed. Open your repair report again from the link in your e-mail to see the invoice marked paid.'
+            : 'No payment was taken. Open your repair report again from the link in your e-mail to pay when you are ready.'}
+        </p>
+      </div>
+    </main>
+  );
+}
