@@ -5,14 +5,13 @@ import { POST as requestRoute } from '@/app/api/attachments/route';
 import { POST as completeRoute } from '@/app/api/attachments/[id]/complete/route';
 import { GET as pdfRoute } from '@/app/r/[token]/pdf/route';
 import { openReportLink } from '@/lib/report/link-access';
-import { linkExpiry, signReportLink } from '@/lib/report/link';
 import { putObject } from '@/lib/storage/s3';
 import { Attachment, Install } from '@/models';
 import { call, jsonBody } from './helpers/call';
 import { startInstall } from './helpers/installs';
 import { signInAs, signOut } from './helpers/session';
 import { makeInstallWorld } from './helpers/world';
-import { makeApprovedJob, pdfText } from './report-fixtures';
+import { linkToken, makeApprovedJob, pdfText } from './report-fixtures';
 
 // Only checked evidence reaches a customer, and a closed install takes no new evidence.
 // Against the real storage fake (S3_* from scripts/test.sh).
@@ -74,7 +73,7 @@ describe('the customer report', () => {
     const ready = await stored('ready', 'Checked far end');
     const pending = await stored('pending', 'Unchecked upload');
 
-    const token = signReportLink({ jobId: w.job.id, companyId: w.company.id, expiresAt: linkExpiry() });
+    const token = await linkToken(w.job.id, w.company.id);
     const access = await openReportLink(token);
     if (!access.ok) throw new Error(`refused: ${access.status}`);
     const shown = [...access.data.repairs.flatMap((r) => r.images), ...access.data.jobImages].map((image) => image.id);
