@@ -1,5 +1,5 @@
 import { createHmac, timingSafeEqual } from 'node:crypto';
-import { authSecret } from '@/lib/auth/secret';
+import { env } from '@/lib/env';
 
 // The customer's link to a repair report: `<payload>.<signature>`, both base64url. The payload names
 // the job, its company and the expiry; the signature is HMAC-SHA256 over it with a server secret.
@@ -50,15 +50,14 @@ export const linkExpiry = (now = new Date(), days = DEFAULT_LINK_DAYS) => new Da
 
 /** The address the customer opens. */
 export function reportLinkUrl(token: string): string {
-  const base = process.env.APP_URL || process.env.NEXTAUTH_URL || 'http://localhost:3000';
+  const e = env();
+  const base = e.APP_URL || e.NEXTAUTH_URL || 'http://localhost:3000';
   return `${base.replace(/\/+$/, '')}/r/${token}`;
 }
 
-/** REPORT_LINK_SECRET when set; otherwise a key derived from the session secret (never the session secret itself). */
+/** REPORT_LINK_SECRET (lib/env): its own key, never derived from the session secret. */
 export function reportLinkSecret(): Buffer {
-  const own = process.env.REPORT_LINK_SECRET;
-  if (own) return Buffer.from(own);
-  return createHmac('sha256', authSecret()).update('setline/report-links/v1').digest();
+  return Buffer.from(env().REPORT_LINK_SECRET);
 }
 
 const BASE64URL = /^[A-Za-z0-9_-]+$/;
