@@ -1,5 +1,5 @@
 import pg from 'pg';
-import { RateLimiterPostgres, RateLimiterRes } from 'rate-limiter-flexible';
+import { RateLimiterPostgres, type RateLimiterRes } from 'rate-limiter-flexible';
 import { env } from '@/lib/env';
 
 // Attempt limits kept in PostgreSQL (rate-limiter-flexible's store, table `rate_limits` made by a
@@ -38,6 +38,9 @@ function limiters(): Limiters {
   globalForThrottle.setlineThrottle = { url, pool, limiters: made };
   return made;
 }
+
+const isLimiterResult = (value: unknown): value is RateLimiterRes =>
+  typeof value === 'object' && value !== null && !(value instanceof Error) && typeof (value as RateLimiterRes).msBeforeNext === 'number';
 
 /** Whole seconds until a limit lets the next attempt through (at least 1). */
 const secondsOf = (ms: number) => Math.max(1, Math.ceil(ms / 1000));
@@ -94,7 +97,9 @@ export async function reportLinkLimited(ip: string): Promise<number | null> {
     await limiters().reportLink.consume(ip, 1);
     return null;
   } catch (rejection) {
-    if (rejection instanceof RateLimiterRes) return secondsOf(rejection.msBeforeNext);
+    // Over the limit the library rejects with its result object (not an Error). Checked by shape: the
+    // proxy's bundle may hold its own copy of the class, so instanceof is not reliable there.
+    if (isLimiterResult(rejection)) return secondsOf(rejection.msBeforeNext);
     throw rejection;
   }
 }

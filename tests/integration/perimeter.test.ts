@@ -2,6 +2,9 @@ import { randomBytes } from 'node:crypto';
 import { NextRequest } from 'next/server';
 import { beforeEach, describe, expect, it } from 'vitest';
 import { POST as createCustomerRoute } from '@/app/api/customers/route';
+import nodemailer from 'nodemailer';
+import { env } from '@/lib/env';
+import { transportOptions } from '@/lib/report/deliver';
 import { Customer } from '@/models';
 import { proxy } from '@/proxy';
 import { LIMITS, recordSignInFailure, recordSignInSuccess, signInLockedFor } from '@/lib/throttle';
@@ -161,4 +164,21 @@ describe('proxy.ts', () => {
     // Another address is not affected.
     expect((await proxy(request('/r/abc.def', { headers: { 'x-forwarded-for': randomIp() } }))).status).not.toBe(429);
   }, 60_000);
+});
+
+describe('mail transport', () => {
+  it('insists on TLS unless SMTP_TLS=off (implicit TLS on port 465)', () => {
+    const e = env();
+    expect(transportOptions({ ...e, SMTP_TLS: 'on', SMTP_PORT: 587 })).toMatchObject({ requireTLS: true, ignoreTLS: false, secure: false });
+    expect(transportOptions({ ...e, SMTP_TLS: 'on', SMTP_PORT: 465 })).toMatchObject({ secure: true });
+    expect(transportOptions({ ...e, SMTP_TLS: 'off' })).toMatchObject({ requireTLS: false, ignoreTLS: true, secure: false });
+  });
+
+  it('with TLS on, a server whose TLS cannot be used gets nothing in clear (the local fake), with it off the fake receives', async () => {
+    const e = env();
+    if (!process.env.SMTP_PORT) throw new Error('Start the service fakes first (scripts/test.sh does)');
+    const message = { from: 'reports@setline.localhost', to: 'owner@perimeter.test', subject: 'TLS check', text: 'x' };
+    await expect(nodemailer.createTransport({ ...transportOptions({ ...e, SMTP_TLS: 'on' }), connectionTimeout: 5000 }).sendMail(message)).rejects.toThrow(/TLS|certificate|STARTTLS/i);
+    await expect(nodemailer.createTransport(transportOptions({ ...e, SMTP_TLS: 'off' })).sendMail(message)).resolves.toMatchObject({ accepted: ['owner@perimeter.test'] });
+  });
 });
