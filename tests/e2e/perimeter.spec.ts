@@ -3,6 +3,7 @@ import { randomBytes } from 'node:crypto';
 import http from 'node:http';
 import { expect, request as playwrightRequest, test, type APIRequestContext } from '@playwright/test';
 import { BASE_URL } from '../../playwright.config';
+import { LIMITS, recordSignInFailure } from '../../lib/throttle';
 import { DEMO_PASSWORD, hydrated } from './helpers';
 
 // The perimeter against the real production server: attempt limits, security headers, the API's
@@ -69,14 +70,18 @@ test.describe('sign-in limits', () => {
     await context.dispose();
   });
 
-  test('100 failed sign-ins from one address in an hour lock that address', async () => {
-    test.setTimeout(480_000);
+  test('100 failed sign-ins from one address in an hour lock that address (counted in the store every server shares)', async () => {
     const user = await newUser();
     const context = await playwrightRequest.newContext({ baseURL: BASE_URL });
     const ip = randomIp();
-    // Unknown e-mails (no account is locked), each failing once: the address's count reaches 100.
-    for (let i = 1; i <= 99; i += 1) expect((await apiSignIn(context, `nobody-${unique()}@demo.test`, 'x', ip)).status).toBe(401);
-    expect((await apiSignIn(context, `nobody-${unique()}@demo.test`, 'x', ip)).status).toBe(429);
+    // 99 failures counted from this test process straight into the shared PostgreSQL store, as another app
+    // server would count them; the server under test sees them (limits hold across servers).
+    for (let i = 1; i < LIMITS.signInIp.points; i += 1) expect(await recordSignInFailure(null, ip)).toBeNull();
+    // The 100th, a real wrong password over HTTP, locks the address…
+    const hundredth = await apiSignIn(context, `nobody-${unique()}@demo.test`, 'x', ip);
+    expect(hundredth.status).toBe(429);
+    expect(Number(hundredth.retryAfter)).toBeGreaterThan(3000);
+    // …so the right password from it is refused too, while another address signs in.
     expect(await apiSignIn(context, user.email, user.password, ip)).toMatchObject({ status: 429, session: false });
     expect(await apiSignIn(context, user.email, user.password, randomIp())).toMatchObject({ status: 200, session: true });
     await context.dispose();
@@ -200,7 +205,8 @@ test.describe('callbackUrl', () => {
       await page.getByLabel('E-mail').fill('office@demo.test');
       await page.getByLabel('Password').fill(DEMO_PASSWORD);
       await page.getByRole('button', { name: 'Sign in' }).click();
-      await expect(page).toHaveURL(`${BASE_URL}/jobs`);
+      // Through / (which sends the office to /jobs); a loaded machine can take a while to sign in.
+      await expect(page).toHaveURL(`${BASE_URL}/jobs`, { timeout: 30_000 });
     });
   }
 });
