@@ -8,7 +8,19 @@ const nextConfig = {
   async headers() {
     // The worker keeps one address across builds: a shared cache holding it for the default
     // year would keep tablets on an old worker. Browsers revalidate it; so must any CDN.
-    return [{ source: '/serwist/:path*', headers: [{ key: 'Cache-Control', value: 'no-cache' }] }];
+    // proxy.ts gives every other response its security headers; the build's static files skip the
+    // proxy, so they get theirs here.
+    return [
+      { source: '/serwist/:path*', headers: [{ key: 'Cache-Control', value: 'no-cache' }] },
+      {
+        source: '/_next/:path(static|image)/:rest*',
+        headers: [
+          { key: 'X-Content-Type-Options', value: 'nosniff' },
+          { key: 'Referrer-Policy', value: 'strict-origin-when-cross-origin' },
+          { key: 'Content-Security-Policy', value: "default-src 'none'; frame-ancestors 'none'" },
+        ],
+      },
+    ];
   },
 };
 

@@ -27,7 +27,11 @@ export default defineConfig({
     env: {
       DATABASE_URL: process.env.DATABASE_URL ?? '',
       NEXTAUTH_URL: BASE_URL,
-      NEXTAUTH_SECRET: 'setline-e2e-secret-0123456789abcdef',
+      // `next start` is NODE_ENV=production: without both secrets (32+ characters) it refuses to start.
+      NEXTAUTH_SECRET: 'setline-e2e-session-secret-0123456789abcdef',
+      REPORT_LINK_SECRET: 'setline-e2e-report-link-secret-0123456789ab',
+      // The local mail fake has no usable certificate.
+      SMTP_TLS: 'off',
     },
   },
 });

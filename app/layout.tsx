@@ -1,4 +1,5 @@
 import type { Metadata, Viewport } from 'next';
+import { connection } from 'next/server';
 import '@fontsource/inter/400.css';
 import '@fontsource/inter/500.css';
 import '@fontsource/inter/600.css';
@@ -13,7 +14,10 @@ export const metadata: Metadata = {
 
 export const viewport: Viewport = { themeColor: '#115e59', width: 'device-width', initialScale: 1 };
 
-export default function RootLayout({ children }: { children: React.ReactNode }) {
+export default async function RootLayout({ children }: { children: React.ReactNode }) {
+  // Every page is rendered per request: its scripts carry that request's CSP nonce (proxy.ts), which a
+  // page prerendered at build time could not.
+  await connection();
   return (
     <html lang="en">
       <body className="min-h-screen font-sans">

@@ -3,6 +3,7 @@ import { randomUUID } from 'node:crypto';
 import { NextResponse } from 'next/server';
 import type { z } from 'zod';
 import { AppError } from '@/lib/errors';
+import { MAX_BODY_BYTES } from '@/lib/http-limits';
 import { filledParams } from '@/lib/validation/list';
 
 /**
@@ -41,14 +42,59 @@ export function parseOrThrow<S extends z.ZodType>(schema: S, input: unknown, sta
 /** Query-string parameters as a plain object for zod. */
 export const searchParamsOf = (request: Request) => filledParams(Object.fromEntries(new URL(request.url).searchParams));
 
-/** The JSON body of a request; a body that is not JSON is a 400, never a 500. */
+/**
+ * The body as text, counting bytes as they arrive: over `limit` is a 413 and reading stops, so a body
+ * sent without a Content-Length (chunked) is held to the same limit as one that declares it.
+ */
+export async function readBodyText(request: Request, limit = MAX_BODY_BYTES): Promise<string> {
+  const declared = Number(request.headers.get('content-length'));
+  if (Number.isFinite(declared) && declared > limit) throw tooLarge(limit);
+  if (!request.body) return '';
+  const reader = request.body.getReader();
+  const chunks: Uint8Array[] = [];
+  let total = 0;
+  for (;;) {
+    const { done, value } = await reader.read();
+    if (done) break;
+    total += value.byteLength;
+    if (total > limit) {
+      await reader.cancel().catch(() => undefined);
+      throw tooLarge(limit);
+    }
+    chunks.push(value);
+  }
+  return Buffer.concat(chunks).toString('utf8');
+}
+
+const tooLarge = (limit: number) => new AppError(413, `The request body is larger than ${Math.round(limit / 1024)} KB.`);
+
+/** True when the request says its body is JSON (`application/json`, any parameters). */
+export const isJsonRequest = (request: Request) => /^application\/json\s*(;|$)/i.test(request.headers.get('content-type')?.trim() ?? '');
+
+/**
+ * The JSON body of a request. Empty is a 400, a body that is not declared `application/json` is a 415
+ * (a cross-site form can post text/plain, never JSON), over 1 MB is a 413, unparsable is a 400 — never a 500.
+ */
 export async function bodyOf(request: Request): Promise<unknown> {
-  const text = await request.text();
+  const text = await readBodyText(request);
   if (!text.trim()) throw new AppError(400, 'Send a JSON body.');
+  if (!isJsonRequest(request)) throw new AppError(415, 'Send the body as application/json.');
   try {
     return JSON.parse(text);
   } catch {
     throw new AppError(400, 'The body is not valid JSON.');
+  }
+}
+
+/** The same as bodyOf, except that a missing or unparsable body is `undefined` (for routes that validate it as empty). */
+export async function bodyOrUndefined(request: Request): Promise<unknown> {
+  const text = await readBodyText(request);
+  if (!text.trim()) return undefined;
+  if (!isJsonRequest(request)) throw new AppError(415, 'Send the body as application/json.');
+  try {
+    return JSON.parse(text);
+  } catch {
+    return undefined;
   }
 }
 

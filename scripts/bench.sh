@@ -12,7 +12,7 @@ vitest bench --run --project unit tests/bench 2>&1 | grep -v '^$' || true
 fresh_database "${BENCH_DB_NAME:-setline_bench}"
 sequelize-cli db:seed:all >/dev/null
 [ -d .next ] || next build >/dev/null
-export NEXTAUTH_URL="http://127.0.0.1:$PORT" NEXTAUTH_SECRET="setline-bench-secret-0123456789" REPORT_WORKER=off
+export NEXTAUTH_URL="http://127.0.0.1:$PORT" NEXTAUTH_SECRET="setline-bench-session-secret-0123456789abcdef" REPORT_LINK_SECRET="setline-bench-report-link-secret-0123456789" REPORT_WORKER=off
 setsid next start -p "$PORT" -H 127.0.0.1 >/dev/null 2>&1 &
 server=$!
 trap 'kill -- -$server 2>/dev/null || true' EXIT

@@ -29,12 +29,15 @@ fresh_database() {
   sequelize-cli db:migrate >/dev/null
 }
 
-# A random secret kept under .data so sessions survive a demo restart.
-session_secret() {
+# A random secret kept under .data/<name> so sessions and report links survive a demo restart.
+# $1: nextauth-secret (sessions) or report-link-secret (customer report links) — two separate keys.
+kept_secret() {
+  local file=".data/$1"
   mkdir -p .data
-  [ -s .data/nextauth-secret ] || node -e "process.stdout.write(require('crypto').randomBytes(32).toString('base64url'))" > .data/nextauth-secret
-  cat .data/nextauth-secret
+  [ -s "$file" ] || node -e "process.stdout.write(require('crypto').randomBytes(32).toString('base64url'))" > "$file"
+  cat "$file"
 }
+session_secret() { kept_secret nextauth-secret; }
 
 # Starts the local service fakes (S3 storage, SMTP, payments) and exports what the app needs to reach them.
 # $1 names the state directory (.data/fakes-<name>); FAKES_PORT_BASE picks the ports.

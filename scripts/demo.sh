@@ -16,7 +16,8 @@ next build >/dev/null
 
 export NEXTAUTH_URL="${NEXTAUTH_URL:-http://localhost:$PORT}"
 NEXTAUTH_SECRET="${NEXTAUTH_SECRET:-$(session_secret)}"
-export NEXTAUTH_SECRET PORT
+REPORT_LINK_SECRET="${REPORT_LINK_SECRET:-$(kept_secret report-link-secret)}"
+export NEXTAUTH_SECRET REPORT_LINK_SECRET PORT
 
 cat <<BANNER
 

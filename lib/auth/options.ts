@@ -4,6 +4,7 @@ import type { NextAuthOptions } from 'next-auth';
 import CredentialsProvider from 'next-auth/providers/credentials';
 import { User } from '@/models';
 import { signInSchema } from '@/lib/validation/auth';
+import { safeRedirect } from './callback-url';
 import { authSecret } from './secret';
 
 // Compared against when the e-mail is unknown, so both failures take the same time.
@@ -28,6 +29,10 @@ export const authOptions: NextAuthOptions = {
     }),
   ],
   callbacks: {
+    // Only addresses of this site: a crafted callbackUrl never sends a user elsewhere.
+    async redirect({ url, baseUrl }) {
+      return safeRedirect(url, baseUrl);
+    },
     async jwt({ token, user }) {
       if (user) {
         token.sub = user.id;

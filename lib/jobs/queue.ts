@@ -39,14 +39,11 @@ export async function enqueueReportSend(sendId: string, transaction?: Transactio
 
 /** Retries with exponential backoff; REPORT_RETRY_* override the defaults (tests use short ones). */
 export function retryPolicy() {
-  const int = (name: string, fallback: number) => {
-    const value = Number(process.env[name]);
-    return Number.isInteger(value) && value >= 0 ? value : fallback;
-  };
+  const e = env();
   return {
-    retryLimit: int('REPORT_RETRY_LIMIT', 5),
-    retryDelay: int('REPORT_RETRY_DELAY_SECONDS', 30),
-    retryBackoff: process.env.REPORT_RETRY_BACKOFF !== 'false',
+    retryLimit: e.REPORT_RETRY_LIMIT,
+    retryDelay: e.REPORT_RETRY_DELAY_SECONDS,
+    retryBackoff: e.REPORT_RETRY_BACKOFF !== 'false',
     expireInSeconds: 300,
   };
 }

@@ -1,6 +1,7 @@
 import 'server-only';
 import Stripe from 'stripe';
 import { z } from 'zod';
+import { env } from '@/lib/env';
 import { AppError } from '@/lib/errors';
 
 // The payment provider through its official SDK. STRIPE_API_URL points it at the local fake in
@@ -14,11 +15,8 @@ const paymentsEnvSchema = z.object({
 type PaymentsEnv = z.infer<typeof paymentsEnvSchema>;
 
 function paymentsEnv(): PaymentsEnv {
-  const parsed = paymentsEnvSchema.safeParse({
-    STRIPE_SECRET_KEY: process.env.STRIPE_SECRET_KEY || undefined,
-    STRIPE_WEBHOOK_SECRET: process.env.STRIPE_WEBHOOK_SECRET || undefined,
-    STRIPE_API_URL: process.env.STRIPE_API_URL || undefined,
-  });
+  const e = env();
+  const parsed = paymentsEnvSchema.safeParse({ STRIPE_SECRET_KEY: e.STRIPE_SECRET_KEY, STRIPE_WEBHOOK_SECRET: e.STRIPE_WEBHOOK_SECRET, STRIPE_API_URL: e.STRIPE_API_URL });
   if (!parsed.success) throw new AppError(503, 'Online payment is not set up on this server (STRIPE_SECRET_KEY, STRIPE_WEBHOOK_SECRET).');
   return parsed.data;
 }

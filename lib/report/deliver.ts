@@ -2,6 +2,7 @@ import 'server-only';
 import nodemailer from 'nodemailer';
 import { Op } from 'sequelize';
 import { sequelize } from '@/lib/db';
+import { env } from '@/lib/env';
 import { AuditEntry, Job, ReportLink, ReportSend } from '@/models';
 import { formatInZone } from '@/lib/dates';
 import { createReportLink } from '@/lib/data/report-links';
@@ -42,7 +43,7 @@ export async function deliverReportSend(sendId: string, attempt: Attempt): Promi
     const mail = reportEmail(data, { link: url, expiresOn: formatInZone(link.expiresAt, data.company.timeZone, 'd MMMM yyyy'), message: send.message });
     const pdf = await cachedReportPdf(send.companyId, send.jobId, { data });
     const info = await transport().sendMail({
-      from: process.env.MAIL_FROM || `"${data.company.name.replace(/["\\]/g, '')}" <reports@setline.localhost>`,
+      from: env().MAIL_FROM || `"${data.company.name.replace(/["\\]/g, '')}" <reports@setline.localhost>`,
       to: send.toAddress,
       subject: mail.subject,
       text: mail.text,
@@ -138,19 +139,23 @@ async function linkOf(send: ReportSend): Promise<ReportLink> {
   });
 }
 
-function transport() {
-  return nodemailer.createTransport({
-    host: process.env.SMTP_HOST || '127.0.0.1',
-    port: Number(process.env.SMTP_PORT || 25),
-    secure: false,
-    // The local fake offers no TLS (its built-in certificate has expired); a real relay sets SMTP_TLS=required.
-    ignoreTLS: process.env.SMTP_TLS !== 'required',
-    requireTLS: process.env.SMTP_TLS === 'required',
-    auth: process.env.SMTP_USER ? { user: process.env.SMTP_USER, pass: process.env.SMTP_PASSWORD ?? '' } : undefined,
+/** The mail transport: TLS always (implicit on port 465, else STARTTLS required) unless SMTP_TLS=off. */
+export function transportOptions(e = env()) {
+  const tls = e.SMTP_TLS !== 'off';
+  return {
+    host: e.SMTP_HOST,
+    port: e.SMTP_PORT,
+    secure: tls && e.SMTP_PORT === 465,
+    // Only the local fake (no usable certificate) runs with SMTP_TLS=off, set by the demo and the tests.
+    ignoreTLS: !tls,
+    requireTLS: tls,
+    auth: e.SMTP_USER ? { user: e.SMTP_USER, pass: e.SMTP_PASSWORD ?? '' } : undefined,
     connectionTimeout: 10_000,
     greetingTimeout: 10_000,
     socketTimeout: 30_000,
-  });
+  };
 }
+
+const transport = () => nodemailer.createTransport(transportOptions());
 
 const messageOf = (error: unknown) => (error instanceof Error ? error.message : String(error)).slice(0, 1000);

@@ -1,5 +1,6 @@
 import 'server-only';
 import { GetObjectCommand, S3Client } from '@aws-sdk/client-s3';
+import { env } from '@/lib/env';
 
 // Before/after/inspection images for the report. The bytes live in object storage (S3_* settings);
 // an image that cannot be read is left out rather than failing the whole report.
@@ -38,8 +39,8 @@ export async function loadReportImages(attachments: readonly AttachmentRow[]): P
 
 /** The stored bytes of one object, or null when storage is not configured or the read fails. */
 export async function fetchImageBytes(key: string): Promise<Buffer | null> {
-  const bucket = process.env.S3_BUCKET;
-  if (!bucket || !process.env.S3_ENDPOINT) return null;
+  const bucket = env().S3_BUCKET;
+  if (!bucket || !env().S3_ENDPOINT) return null;
   try {
     const answer = await client().send(new GetObjectCommand({ Bucket: bucket, Key: key }));
     const bytes = Buffer.from((await answer.Body?.transformToByteArray()) ?? []);
@@ -51,11 +52,12 @@ export async function fetchImageBytes(key: string): Promise<Buffer | null> {
 }
 
 function client() {
+  const e = env();
   return new S3Client({
-    endpoint: process.env.S3_ENDPOINT,
-    region: process.env.S3_REGION ?? 'us-east-1',
+    endpoint: e.S3_ENDPOINT,
+    region: e.S3_REGION ?? 'us-east-1',
     forcePathStyle: true,
-    credentials: { accessKeyId: process.env.S3_ACCESS_KEY_ID ?? '', secretAccessKey: process.env.S3_SECRET_ACCESS_KEY ?? '' },
+    credentials: { accessKeyId: e.S3_ACCESS_KEY_ID ?? '', secretAccessKey: e.S3_SECRET_ACCESS_KEY ?? '' },
     requestChecksumCalculation: 'WHEN_REQUIRED',
     responseChecksumValidation: 'WHEN_REQUIRED',
   });

@@ -1,5 +1,4 @@
 import { createHmac, timingSafeEqual } from 'node:crypto';
-import { authSecret } from '@/lib/auth/secret';
 import { env } from '@/lib/env';
 
 // The customer's link to a repair report: `<payload>.<signature>`, both base64url. The payload names
@@ -64,16 +63,14 @@ export function paymentReturnUrl(linkId: string, base = appBaseUrl()): string {
   return `${base.replace(/\/+$/, '')}/r/back/${linkId}`;
 }
 
-const appBaseUrl = () => (process.env.APP_URL || process.env.NEXTAUTH_URL || 'http://localhost:3000').replace(/\/+$/, '');
+function appBaseUrl() {
+  const e = env();
+  return (e.APP_URL || e.NEXTAUTH_URL || 'http://localhost:3000').replace(/\/+$/, '');
+}
 
-/**
- * REPORT_LINK_SECRET (through lib/env) when set; otherwise, in development and tests only, a key derived
- * from the session secret (never the session secret itself). RECONCILE: production is to require its own key.
- */
+/** REPORT_LINK_SECRET (lib/env): its own key, never derived from the session secret. */
 export function reportLinkSecret(): Buffer {
-  const own = env().REPORT_LINK_SECRET;
-  if (own) return Buffer.from(own);
-  return createHmac('sha256', authSecret()).update('setline/report-links/v1').digest();
+  return Buffer.from(env().REPORT_LINK_SECRET);
 }
 
 const BASE64URL = /^[A-Za-z0-9_-]+$/;

@@ -68,7 +68,8 @@ export async function start({ dataDir, port, webPort }) {
 
   return {
     name: 'mail',
-    env: { SMTP_HOST: '127.0.0.1', SMTP_PORT: String(port), MAIL_WEB_URL: `http://127.0.0.1:${webPort}` },
+    // The fake offers no usable certificate: the app must be told to send without TLS (SMTP_TLS=off).
+    env: { SMTP_HOST: '127.0.0.1', SMTP_PORT: String(port), SMTP_TLS: 'off', MAIL_WEB_URL: `http://127.0.0.1:${webPort}` },
     stop: () => Promise.all([new Promise((resolve) => smtp.close(resolve)), new Promise((resolve) => web.close(resolve))]),
   };
 }

@@ -1,15 +1,23 @@
 'use client';
 
 import { zodResolver } from '@hookform/resolvers/zod';
-import { signIn } from 'next-auth/react';
 import { useRouter, useSearchParams } from 'next/navigation';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { Button } from '@/components/ui/button';
+import { safeCallbackPath } from '@/lib/auth/callback-url';
+import { signInWithPassword } from '@/lib/client/sign-in';
 import { signInSchema, type SignInInput } from '@/lib/validation/auth';
 
 // One message for every failure, so the form never tells whether an e-mail has an account.
 const BAD_CREDENTIALS = 'That e-mail and password do not match an active account.';
+
+function failureMessage(result: { status: number; message?: string } | null): string {
+  if (result?.status === 401) return BAD_CREDENTIALS;
+  // 429: the server's "Too many attempts — try again in N minutes."
+  if (result?.status === 429 && result.message) return result.message;
+  return 'Sign-in failed. Check your connection and try again.';
+}
 
 export function SignInForm() {
   const router = useRouter();
@@ -19,13 +27,13 @@ export function SignInForm() {
 
   const onSubmit = handleSubmit(async (values) => {
     setFailure(null);
-    const result = await signIn('credentials', { ...values, redirect: false });
-    if (!result || result.error) {
-      setFailure(result?.status === 401 || result?.error === 'CredentialsSignin' ? BAD_CREDENTIALS : 'Sign-in failed. Check your connection and try again.');
+    const next = safeCallbackPath(params.get('callbackUrl'));
+    const result = await signInWithPassword(values.email, values.password, next).catch(() => null);
+    if (!result || !result.ok) {
+      setFailure(failureMessage(result));
       return;
     }
-    const next = params.get('callbackUrl');
-    router.replace(next && next.startsWith('/') && !next.startsWith('//') ? next : '/');
+    router.replace(next);
     router.refresh();
   });
 

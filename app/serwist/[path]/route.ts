@@ -4,9 +4,9 @@ import { createSerwistRoute } from '@serwist/turbopack';
 // Builds app/sw.ts with esbuild and serves it (and its source map) as /serwist/sw.js. The
 // route is static, so the worker is built once, during `next build`.
 //
-// /sign-in is prerendered and is the one page a signed-out tablet can open, so it is
-// precached. Its HTML names this build's hashed chunks, so its revision must change with
-// every build: a fresh id per build does that (the worker is regenerated per build anyway).
+// /sign-in is the one page a signed-out tablet can open, so it is precached; the copy keeps the
+// CSP header it was served with, so its script nonce still matches offline. Its HTML names this
+// build's hashed chunks, so its revision must change with every build: a fresh id per build does that (the worker is regenerated per build anyway).
 const revision = randomUUID();
 
 export const { dynamic, dynamicParams, revalidate, generateStaticParams, GET } = createSerwistRoute({

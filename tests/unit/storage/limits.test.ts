@@ -75,6 +75,7 @@ describe('uploadRequestSchema', () => {
 });
 
 describe('storageEnv', () => {
+  const PRODUCTION_SECRETS = { NEXTAUTH_SECRET: 'a'.repeat(32), REPORT_LINK_SECRET: 'b'.repeat(32) };
   const db = { DATABASE_URL: 'postgres://a:b@127.0.0.1:54329/setline' };
 
   it('falls back to the local fake outside production', () => {
@@ -84,13 +85,13 @@ describe('storageEnv', () => {
   });
 
   it('requires the bucket, region and key pair in production, naming each missing one', () => {
-    const production = parseEnv({ ...db, NODE_ENV: 'production', NEXTAUTH_SECRET: 'a-long-enough-secret', S3_BUCKET: 'evidence' });
+    const production = parseEnv({ ...db, NODE_ENV: 'production', ...PRODUCTION_SECRETS, S3_BUCKET: 'evidence' });
     expect(() => storageEnv(production)).toThrow(/S3_REGION: required in production[\s\S]*S3_ACCESS_KEY_ID[\s\S]*S3_SECRET_ACCESS_KEY/);
   });
 
   it('uses AWS itself (no endpoint, virtual-host addressing) when production names no endpoint', () => {
     const production = parseEnv({
-      ...db, NODE_ENV: 'production', NEXTAUTH_SECRET: 'a-long-enough-secret', S3_BUCKET: 'evidence', S3_REGION: 'eu-west-1', S3_ACCESS_KEY_ID: 'id', S3_SECRET_ACCESS_KEY: 'secret',
+      ...db, NODE_ENV: 'production', ...PRODUCTION_SECRETS, S3_BUCKET: 'evidence', S3_REGION: 'eu-west-1', S3_ACCESS_KEY_ID: 'id', S3_SECRET_ACCESS_KEY: 'secret',
     });
     expect(storageEnv(production)).toMatchObject({ endpoint: undefined, region: 'eu-west-1', bucket: 'evidence', forcePathStyle: false });
   });

@@ -1,6 +1,6 @@
 import { NextResponse } from 'next/server';
 import { applyPaymentEvent } from '@/lib/data/payments';
-import { handle } from '@/lib/http';
+import { handle, readBodyText } from '@/lib/http';
 import { verifiedEvent } from '@/lib/payments/stripe';
 
 /**
@@ -8,7 +8,7 @@ import { verifiedEvent } from '@/lib/payments/stripe';
  * so a wrong or missing signature is refused (400) before anything is read or written.
  */
 export const POST = handle(async (request: Request) => {
-  const event = verifiedEvent(await request.text(), request.headers.get('stripe-signature'));
+  const event = verifiedEvent(await readBodyText(request), request.headers.get('stripe-signature'));
   const outcome = await applyPaymentEvent(event);
   return NextResponse.json({ received: true, outcome });
 });
