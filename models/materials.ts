@@ -17,6 +17,8 @@ export class ResinSystem extends Model<InferAttributes<ResinSystem>, InferCreati
   declare sensitivityKind: CreationOptional<(typeof SENSITIVITY_KINDS)[number]>;
   declare doublingC: CreationOptional<number | null>;
   declare activationEnergyKj: CreationOptional<number | null>;
+  /** Default minutes from mixing until the patch is on the packer (wet-out and loading). */
+  declare prepMinutes: CreationOptional<number>;
   declare archivedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -89,6 +91,7 @@ export function initMaterials(sequelize: Sequelize) {
       sensitivityKind: { type: DataTypes.STRING(16), allowNull: false, defaultValue: 'doubling', validate: { isIn: [SENSITIVITY_KINDS] } },
       doublingC: decimal(5, 2),
       activationEnergyKj: decimal(6, 2, { field: 'activation_energy_kj' }),
+      prepMinutes: decimal(6, 2, { allowNull: false, defaultValue: 15 }),
       archivedAt: DataTypes.DATE,
     },
     { sequelize, modelName: 'ResinSystem', tableName: 'resin_systems', underscored: true },

@@ -25,6 +25,8 @@ const resinSystemFields = {
   sensitivityKind: z.enum(SENSITIVITY_KINDS, { error: 'Pick how the times change with temperature' }),
   doublingC: quantity({ min: 1, max: 50, scale: 2, bounds: 'A step of 1 to 50 °C (1.8 to 90 °F)' }).nullish(),
   activationEnergyKj: quantity({ min: 1, max: 300, scale: 2, bounds: 'Between 1 and 300 kJ/mol' }).nullish(),
+  // Minutes from mixing until the patch is on the packer (wet-out and loading); the tablet's default for the GO / NO-GO.
+  prepMinutes: quantity({ min: 0, max: 240, scale: 2, bounds: 'From 0 to 240 minutes' }),
 };
 
 export type ResinSystemValues = {
@@ -50,6 +52,7 @@ export const resinSystemInputSchema = z
     ...resinSystemFields,
     chemistry: resinSystemFields.chemistry.default('epoxy'),
     sensitivityKind: resinSystemFields.sensitivityKind.default('doubling'),
+    prepMinutes: resinSystemFields.prepMinutes.optional(),
   })
   .superRefine((values, ctx) => addProblems(ctx, resinSystemProblems(values)));
 export type ResinSystemInput = z.output<typeof resinSystemInputSchema>;
@@ -69,6 +72,7 @@ export type ResinSystemListQuery = z.infer<typeof resinSystemListQuerySchema>;
 export type ResinSystemFormValues = {
   name: string; chemistry: string; refTempC: number; potLifeMin: number; holdMin: number; fullCureMin: number;
   minTempC: number; maxTempC: number; sensitivityKind: string; doublingC: number | null; activationEnergyKj: number | null;
+  prepMinutes?: number;
 };
 
 export const resinSystemFormSchema = (system: UnitSystem) =>
@@ -89,7 +93,7 @@ export function resinSystemToSi(v: ResinSystemFormValues, system: UnitSystem) {
 }
 
 /** A stored resin system → the form's values in the company's units (one decimal of a degree). */
-export function resinSystemToForm(row: ResinSystemValues & { name: string; chemistry: string }, system: UnitSystem): ResinSystemFormValues {
+export function resinSystemToForm(row: ResinSystemValues & { name: string; chemistry: string; prepMinutes?: number }, system: UnitSystem): ResinSystemFormValues {
   const abs = (celsius: number) => roundTo(temperatureFromSi(celsius, system), 1);
   return {
     name: row.name,
@@ -103,6 +107,7 @@ export function resinSystemToForm(row: ResinSystemValues & { name: string; chemi
     sensitivityKind: row.sensitivityKind,
     doublingC: row.doublingC == null ? null : roundTo(temperatureDifferenceFromSi(row.doublingC, system), 1),
     activationEnergyKj: row.activationEnergyKj ?? null,
+    prepMinutes: row.prepMinutes,
   };
 }
 
