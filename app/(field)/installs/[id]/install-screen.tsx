@@ -78,6 +78,12 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
           {view.repair.clockPosition ? ` · ${view.repair.clockPosition} o'clock` : ''}
         </p>
       </header>
+      {view.chain.replaces && !state.signedOffAt && state.inspection?.result !== 'fail' && (
+        <p className="rounded-lg bg-slate-100 px-4 py-2 text-lg" data-testid="redo-of">
+          Redo of <Link className="font-semibold text-brand-700 underline" href={`/installs/${view.chain.replaces.id}`}>an earlier install</Link>
+          {view.chain.replaces.inspectionResult === 'fail' ? ' whose inspection failed' : view.chain.replaces.status === 'sent_back' ? ' the office sent back' : ''}; both are kept.
+        </p>
+      )}
       <SyncStatus queued={queued} rejected={rejected} />
       <ClockStrip deadlines={deadlinesOf(state, plan)} now={now} timeZone={view.company.timeZone} />
       {flags.length > 0 && (
