@@ -2,8 +2,11 @@ import { randomUUID } from 'node:crypto';
 import { beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { POST as redoRoute } from '@/app/api/installs/[id]/redo/route';
 import { POST as reviewRoute } from '@/app/api/installs/[id]/review/route';
+import { PATCH as companyRoute } from '@/app/api/company/route';
+import { POST as createResinRoute } from '@/app/api/resin-systems/route';
+import { PATCH as patchResinRoute } from '@/app/api/resin-systems/[id]/route';
 import { buildReportData } from '@/lib/report/data';
-import { AuditEntry, Install, Repair } from '@/models';
+import { AuditEntry, Company, Install, Repair, ResinSystem } from '@/models';
 import { call, jsonBody } from './helpers/call';
 import { body, cleanInstall, getInstall, postAll, postEvent, startInstall } from './helpers/installs';
 import { signInAs, signOut } from './helpers/session';
@@ -160,5 +163,41 @@ describe('conditions and go decision carry the new clock inputs', () => {
     expect(Object.keys(bad.body.error.fields)).toEqual(['payload.prepMinutes']);
     const zero = await postEvent(id, body('go_decision', 2, { go: false, overrideReason: 'Because', makerHoldMin: 0 }));
     expect(zero.status).toBe(400);
+  });
+});
+
+describe("the clock's settings: company hold reserve and resin preparation minutes", () => {
+  let a: InstallWorld;
+  beforeAll(async () => {
+    a = await makeInstallWorld('Epsilon');
+  });
+  beforeEach(() => signOut());
+  const patchCompany = (payload: unknown) => call(companyRoute, '/api/company', {}, jsonBody('PATCH', payload));
+
+  it('the admin sets the hold reserve (0–1); out of range is 400, the office 403, and nothing changes', async () => {
+    expect((await Company.findByPk(a.company.id))!.holdReserve).toBe(0.1);
+    await signInAs(a.admin);
+    expect((await patchCompany({ holdReserve: 0.25 })).status).toBe(200);
+    expect((await Company.findByPk(a.company.id))!.holdReserve).toBe(0.25);
+    const bad = await patchCompany({ holdReserve: 1.5 });
+    expect(bad.status).toBe(400);
+    expect(Object.keys(bad.body.error.fields)).toEqual(['holdReserve']);
+    await signInAs(a.office);
+    expect((await patchCompany({ holdReserve: 0 })).status).toBe(403);
+    expect((await Company.findByPk(a.company.id))!.holdReserve).toBe(0.25);
+  });
+
+  it('a resin system carries its minutes from mixing to patch on the packer (default 15, 0–240)', async () => {
+    await signInAs(a.admin);
+    const good = { name: 'Prep epoxy', chemistry: 'epoxy', refTempC: 20, potLifeMin: 30, holdMin: 90, fullCureMin: 240, minTempC: 5, maxTempC: 40, sensitivityKind: 'doubling', doublingC: 10 };
+    const plain = await call(createResinRoute, '/api/resin-systems', {}, jsonBody('POST', good));
+    expect(plain.status).toBe(201);
+    expect((await ResinSystem.findByPk(plain.body.id))!.prepMinutes).toBe(15);
+    const own = await call(createResinRoute, '/api/resin-systems', {}, jsonBody('POST', { ...good, name: 'Prep epoxy 2', prepMinutes: 22.5 }));
+    expect(own.status).toBe(201);
+    expect((await ResinSystem.findByPk(own.body.id))!.prepMinutes).toBe(22.5);
+    const bad = await call(patchResinRoute, `/api/resin-systems/${own.body.id}`, { id: own.body.id }, jsonBody('PATCH', { prepMinutes: 300 }));
+    expect(bad.status).toBe(400);
+    expect((await ResinSystem.findByPk(own.body.id))!.prepMinutes).toBe(22.5);
   });
 });

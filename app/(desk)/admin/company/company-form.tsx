@@ -70,7 +70,7 @@ export function CompanyForm({ initial, timeZones }: { initial: CompanyFormValues
         id="safetyMarginPercent"
         label="Working-window reserve (%)"
         error={errors.safetyMarginPercent?.message}
-        hint="Share of the resin’s working time held back in the go/no-go: at 20 %, loading and pulling the packer (timed in the dry run) must fit in 80 % of the working time. Follow the resin maker’s instructions where they ask for more."
+        hint="Share of the resin’s working time held back in the go/no-go: at 20 %, the minutes from mixing until the patch is on the packer plus the dry run’s pull must fit in 80 % of the working time. Follow the resin maker’s instructions where they ask for more."
       >
         <input type="number" step="any" min={0} max={90} {...register('safetyMarginPercent', { valueAsNumber: true })} {...errorProps('safetyMarginPercent', errors.safetyMarginPercent?.message)} className={inputClass} />
       </FormField>
