@@ -1,9 +1,14 @@
-import { expect, test } from '@playwright/test';
+import { expect, test, type Page } from '@playwright/test';
 import { signIn } from './helpers';
-import { acknowledgeAndCheck, controlTime, mixAndInflate, newInstall, prepareToMix, recordConditions, serverView, tap, waitForSync } from './install-helpers';
+import { acknowledgeAndCheck, controlTime, mixAndInflate, newInstall, prepareToMix, recordConditions, serverView, tap } from './install-helpers';
 
 // Fake time needs every API answer to pass page.route, which a service worker would bypass.
 test.use({ serviceWorkers: 'block' });
+// Whole installs tap by tap, then the desk: longer than one step of the default 60 s on a shared 2-core machine.
+test.setTimeout(240_000);
+
+/** Every queued tap has reached the server (a longer wait than waitForSync: a whole install queued). */
+const allSynced = (page: Page) => expect(page.getByTestId('sync-status')).toHaveText('All taps synced', { timeout: 90_000 });
 
 const RAW_INSTANT = /\d{4}-\d{2}-\d{2}T\d{2}:\d{2}/;
 
@@ -22,7 +27,7 @@ test('a failed patch: the signed-off install reads as a record, then the foreman
   await tap(page, 'Record inspection');
   await tap(page, 'Sign off — send for review');
   await expect(page.getByTestId('step-done')).toBeVisible();
-  await waitForSync(page);
+  await allSynced(page);
 
   // The record: times, inspection, no countdown — even two days later.
   const record = page.getByTestId('install-record');
@@ -89,7 +94,7 @@ test("a pipe below the resin's range: NO-GO with no clock; the foreman goes on w
   await expect(page.getByTestId('countdown').first()).toHaveAttribute('aria-label', "Deflate after (maker's hold)");
   await expect(page.getByTestId('hold-note')).toContainText("resin maker's hold of 3:00:00 + the company's 10 % reserve = 3:18:00");
   await expect(page.getByTestId('flags').locator('[data-kind="cold-cure"]')).toBeVisible();
-  await waitForSync(page);
+  await allSynced(page);
   const view = await serverView(page, id);
   expect(view.plan.holdMin).toBeNull();
   expect(view.plan.fullCureMin).toBeNull();
