@@ -29,6 +29,21 @@ export const SAFETY_REMINDERS = [
     text: 'Nobody stands in line with a pressurised packer or its open pipe ends; stay within the packer\u2019s rated pressure and release pressure before any handling.',
   },
   {
+    id: 'plugs',
+    title: 'Flow control and plugs',
+    text: 'A plug or bypass holding back flow can blow out under back-pressure: never stand in line with a plug or in front of a plugged pipe, secure plugs to a fixed point, and watch the head of water behind them.',
+  },
+  {
+    id: 'backup',
+    title: 'Sewage backing up',
+    text: 'While the line is plugged or bypassed, sewage can back up into buildings upstream: warn the occupants before you plug, ask them not to use water, and keep watching upstream levels and the bypass until the line is open again.',
+  },
+  {
+    id: 'hygiene',
+    title: 'Sewage hygiene',
+    text: 'Sewage carries germs: wear gloves and keep cuts covered, wash hands before eating, drinking or smoking, keep clean and dirty gear apart, and keep vaccinations up to date as your local health rules advise.',
+  },
+  {
     id: 'stop',
     title: 'Stop when unsure',
     text: 'If anything is not right (gas reading, weather, flow, equipment), stop and ask. The clock never outranks safety.',

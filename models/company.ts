@@ -11,6 +11,8 @@ export class Company extends Model<InferAttributes<Company>, InferCreationAttrib
   declare minOverlapPerEndMm: CreationOptional<number>;
   /** Fraction of the working window kept in reserve (0.2 = inflate with 20 % of the pot life left). */
   declare workingWindowSafetyMargin: CreationOptional<number>;
+  /** Share of the resin's hold kept on top of it before deflating (0.1 = deflate after 110 % of the hold). */
+  declare holdReserve: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -24,6 +26,7 @@ export function initCompany(sequelize: Sequelize) {
       unitSystem: { type: DataTypes.STRING(16), allowNull: false, defaultValue: 'imperial', validate: { isIn: [UNIT_SYSTEMS] } },
       minOverlapPerEndMm: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 305 },
       workingWindowSafetyMargin: decimal(4, 3, { allowNull: false, defaultValue: 0.2 }),
+      holdReserve: decimal(4, 3, { allowNull: false, defaultValue: 0.1 }),
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },

@@ -25,6 +25,8 @@ export class Install extends Model<InferAttributes<Install>, InferCreationAttrib
   declare signedOffAt: CreationOptional<Date | null>;
   declare startedAt: CreationOptional<Date | null>;
   declare finishedAt: CreationOptional<Date | null>;
+  /** The install this one redoes (a failed or sent-back patch); both are kept. */
+  declare replacesInstallId: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -69,6 +71,7 @@ export function initInstall(sequelize: Sequelize) {
       signedOffAt: DataTypes.DATE,
       startedAt: DataTypes.DATE,
       finishedAt: DataTypes.DATE,
+      replacesInstallId: DataTypes.UUID,
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },

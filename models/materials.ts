@@ -20,6 +20,8 @@ export class ResinSystem extends Model<InferAttributes<ResinSystem>, InferCreati
   /** Resin to fabric by volume in the wet-out laminate, and the extra mixed beyond it (%), for the resin quantity. */
   declare resinToFabricRatio: CreationOptional<number>;
   declare resinExcessPct: CreationOptional<number>;
+  /** Default minutes from mixing until the patch is on the packer (wet-out and loading). */
+  declare prepMinutes: CreationOptional<number>;
   declare archivedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -94,6 +96,7 @@ export function initMaterials(sequelize: Sequelize) {
       activationEnergyKj: decimal(6, 2, { field: 'activation_energy_kj' }),
       resinToFabricRatio: decimal(4, 2, { allowNull: false, defaultValue: 1 }),
       resinExcessPct: decimal(4, 1, { allowNull: false, defaultValue: 10 }),
+      prepMinutes: decimal(6, 2, { allowNull: false, defaultValue: 15 }),
       archivedAt: DataTypes.DATE,
     },
     { sequelize, modelName: 'ResinSystem', tableName: 'resin_systems', underscored: true },

@@ -3,6 +3,7 @@
 import { useEffect, useState } from 'react';
 import { countdownState, type CountdownTone } from '@/lib/client/countdown';
 import { serverNow } from '@/lib/client/server-clock';
+import { formatInZone } from '@/lib/dates';
 
 const TONES: Record<CountdownTone, { box: string; digits: string; words: string }> = {
   neutral: { box: 'border-slate-300 bg-white', digits: 'text-brand-800', words: 'on time' },
@@ -83,5 +84,7 @@ export function useNow(intervalMs = 1000): Date {
 }
 
 function formatClockTime(date: Date, timeZone?: string): string {
+  // The company's zone and 24-hour clock, as in the event log and the flags.
+  if (timeZone) return formatInZone(date, timeZone, 'HH:mm');
   return date.toLocaleTimeString(undefined, { hour: '2-digit', minute: '2-digit', timeZone });
 }

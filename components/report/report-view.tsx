@@ -37,6 +37,12 @@ export function ReportView({ data, pdfHref, invoiceSlot }: { data: ReportData; p
                 </Item>
               )}
               {repair.install?.returnToService && <Item name="Line back in service after">{repair.install.returnToService}</Item>}
+              {repair.install?.makerHold && (
+                <Item name="Hold time">{repair.install.makerHold}, from the resin maker&apos;s sheet: the pipe was outside the resin&apos;s rated temperature range</Item>
+              )}
+              {repair.earlierAttempts.length > 0 && (
+                <Item name="Earlier attempts">{repair.earlierAttempts.map((a) => `started ${a.started ?? '—'}, ${a.outcome}, redone`).join('; ')}</Item>
+              )}
             </dl>
             {repair.install && (
               <div className="mt-3">

@@ -7,7 +7,9 @@ import { noDryRunText, slowPullText } from './reasons';
 import type { InstallRecord, QualityFlag } from './types';
 import {
   requireDate,
+  requireHoldReserve,
   requireNonNegative,
+  requirePositive,
   requireNumber,
   requireSafetyMargin,
   requireTemperature,
@@ -32,6 +34,11 @@ export function flagsFor(install: InstallRecord): QualityFlag[] {
   validateEventOrder(mixedAt, inflatedAt, deflatedAt);
   const now = install.now == null ? undefined : requireDate(install.now, 'Current time');
   const mixTempC = install.mixTempC == null ? undefined : requireTemperature(install.mixTempC, 'Mixing temperature');
+  const airTempC = install.airTempC == null ? undefined : requireTemperature(install.airTempC, 'Air temperature');
+  // The warmer of resin and air sets the working window (as in planCure).
+  const windowTempC = mixTempC === undefined ? undefined : airTempC === undefined ? mixTempC : Math.max(mixTempC, airTempC);
+  const holdReserve = install.holdReserve == null ? 0 : requireHoldReserve(install.holdReserve);
+  const makerHoldMin = install.makerHoldMin == null ? undefined : requirePositive(install.makerHoldMin, "Maker's hold time");
   const pipeTempC = install.pipeTempC == null ? undefined : requireTemperature(install.pipeTempC, 'Pipe temperature');
   const dryRunSeconds = install.dryRunSeconds == null ? undefined : requireNonNegative(install.dryRunSeconds, 'Dry run time');
   const prepMinutes = install.prepMinutes == null ? DEFAULT_PREP_MINUTES : requireNonNegative(install.prepMinutes, 'Preparation time');
@@ -43,7 +50,7 @@ export function flagsFor(install: InstallRecord): QualityFlag[] {
   const system = install.unitSystem ?? 'metric';
 
   const flags: QualityFlag[] = [];
-  const workingWindowMin = mixTempC === undefined ? undefined : workingWindowMinutes(resin, mixTempC);
+  const workingWindowMin = windowTempC === undefined ? undefined : workingWindowMinutes(resin, windowTempC);
 
   // late-inflate: inflated after inflate-by, or still not inflated when inflate-by has passed.
   if (mixedAt != null && workingWindowMin !== undefined) {
@@ -63,16 +70,27 @@ export function flagsFor(install: InstallRecord): QualityFlag[] {
     }
   }
 
-  const cure = pipeTempC === undefined ? undefined : cureMinutes(resin, pipeTempC);
+  // Outside the rated range the resin's times do not apply; only the maker's hold (override) counts.
+  const pipeInRange = pipeTempC !== undefined && pipeTempC >= resin.minTempC && pipeTempC <= resin.maxTempC;
+  const holdMin = pipeInRange ? cureMinutes(resin, pipeTempC).holdMin : pipeTempC !== undefined ? makerHoldMin : undefined;
 
-  // early-deflate: the bladder came off before the hold time at the pipe temperature was up.
-  if (inflatedAt != null && deflatedAt != null && cure !== undefined) {
-    const deflateAfter = addMinutes(inflatedAt, cure.holdMin);
-    if (deflatedAt.getTime() < deflateAfter.getTime()) {
+  // early-deflate: the bladder came off before the hold was up (critical), or inside the
+  // company's hold reserve (warning: the hold was kept, the company's extra was not).
+  if (inflatedAt != null && deflatedAt != null && holdMin !== undefined) {
+    const holdEnds = addMinutes(inflatedAt, holdMin);
+    const reserveEnds = addMinutes(inflatedAt, holdMin * (1 + holdReserve));
+    const whose = pipeInRange ? 'the hold time' : "the resin maker's hold time";
+    if (deflatedAt.getTime() < holdEnds.getTime()) {
       flags.push({
         kind: 'early-deflate',
         severity: 'critical',
-        message: `Deflated at ${timeText(deflatedAt)}, before the deflate-after time ${timeText(deflateAfter)}: the patch may not have held its shape.`,
+        message: `Deflated at ${timeText(deflatedAt)}, before ${whose} was up at ${timeText(holdEnds)}: the patch may not have held its shape.`,
+      });
+    } else if (deflatedAt.getTime() < reserveEnds.getTime()) {
+      flags.push({
+        kind: 'early-deflate',
+        severity: 'warning',
+        message: `Deflated at ${timeText(deflatedAt)}: after ${whose} (${timeText(holdEnds)}) but inside the company's ${Math.round(holdReserve * 100)} % hold reserve, which ran to ${timeText(reserveEnds)}.`,
       });
     }
   }
@@ -93,16 +111,31 @@ export function flagsFor(install: InstallRecord): QualityFlag[] {
     });
   }
 
+  if (mixTempC !== undefined && mixTempC < resin.minTempC) {
+    flags.push({
+      kind: 'cold-mix',
+      severity: 'critical',
+      message: `Resin mixed at ${formatTemperature(mixTempC, system)}, below the resin's minimum of ${formatTemperature(resin.minTempC, system)}.`,
+    });
+  }
+  if (windowTempC !== undefined && windowTempC > resin.maxTempC) {
+    flags.push({
+      kind: 'hot-mix',
+      severity: 'critical',
+      message: `Mixed at ${formatTemperature(windowTempC, system)}, above the resin's maximum of ${formatTemperature(resin.maxTempC, system)}.`,
+    });
+  }
+
   if (dryRunSeconds === undefined) {
     flags.push({ kind: 'no-dry-run', severity: 'warning', message: noDryRunText() });
-  } else if (workingWindowMin !== undefined && mixTempC !== undefined) {
+  } else if (workingWindowMin !== undefined && windowTempC !== undefined) {
     const safeWindowMin = workingWindowMin * (1 - safetyMargin);
     const neededMin = prepMinutes + dryRunSeconds / 60;
     if (neededMin > safeWindowMin) {
       flags.push({
         kind: 'slow-dry-run',
         severity: 'warning',
-        message: slowPullText({ dryRunSeconds, prepMinutes, neededMin, safeWindowMin, safetyMargin, mixTempC, system }),
+        message: slowPullText({ dryRunSeconds, prepMinutes, neededMin, safeWindowMin, safetyMargin, mixTempC: windowTempC, system }),
       });
     }
   }

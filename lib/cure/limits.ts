@@ -10,6 +10,9 @@ export const DEFAULT_SAFETY_MARGIN = 0.2;
 // Project limit: a margin above 0.9 leaves no window at all to plan against.
 export const MAX_SAFETY_MARGIN = 0.9;
 
+// Project limit: a hold reserve above 1 (keeping the bladder up twice the hold) is surely a typo.
+export const MAX_HOLD_RESERVE = 1;
+
 // Project choice: preparation is 0 min unless the crew enters it, so nothing unknown is assumed;
 // wet-out and loading time should be entered when they happen after mixing.
 export const DEFAULT_PREP_MINUTES = 0;

@@ -25,8 +25,10 @@ export interface ResinClockSpec {
 
 export interface CurePlanInput {
   mixedAt: Date;
-  /** Temperature where the resin is mixed and the patch wetted out, °C; sets the working window. */
+  /** Temperature of the resin at the bucket, °C; with `airTempC` it sets the working window. */
   mixTempC: number;
+  /** Air at the mixing place, °C; the warmer of this and `mixTempC` sets the working window. */
+  airTempC?: number | null;
   /** Temperature inside the host pipe, °C; sets hold and full cure. */
   pipeTempC: number;
   inflatedAt?: Date | null;
@@ -37,6 +39,14 @@ export interface CurePlanInput {
   prepMinutes?: number | null;
   /** Share of the working window held back, 0–0.9 (default 0.2). */
   safetyMargin?: number | null;
+  /** Extra share of the hold kept inflated, 0–1 (default 0): deflate after hold × (1 + holdReserve). */
+  holdReserve?: number | null;
+  /**
+   * Hold time from the resin maker's sheet for this pipe temperature, minutes. Used only when the
+   * pipe is outside the resin's rated range (the foreman went on after the NO-GO); then the
+   * deflate-after countdown runs to it, since the resin's own times no longer apply.
+   */
+  makerHoldMin?: number | null;
   /** Units used in the words of `reasons` (default 'metric'); the numbers returned stay SI. */
   unitSystem?: UnitSystem;
 }
@@ -46,16 +56,30 @@ export interface CurePlan {
   workingWindowMin: number;
   /** The working window less the safety margin, minutes. */
   safeWorkingWindowMin: number;
+  /** The temperature that set the working window: the warmer of resin and air, °C. */
+  windowTempC: number;
   /** mixedAt + workingWindowMin: the packer must be inflated by then. */
   inflateBy: Date;
   /** mixedAt + working window × (1 − safetyMargin): the time to plan against. */
   safeInflateBy: Date;
-  /** Hold corrected to the pipe temperature, minutes. */
-  holdMin: number;
-  /** Full cure corrected to the pipe temperature, minutes. */
-  fullCureMin: number;
+  /** Hold corrected to the pipe temperature, minutes; null when the pipe is outside the resin's rated range. */
+  holdMin: number | null;
+  /** Full cure corrected to the pipe temperature, minutes; null when the pipe is outside the rated range. */
+  fullCureMin: number | null;
+  /** The company's hold reserve used, as a fraction. */
+  holdReserve: number;
+  /** The hold the crew keeps: (hold or the maker's hold) × (1 + holdReserve), minutes; null when unknown. */
+  keepInflatedMin: number | null;
+  /** Where the hold counted down comes from: the resin's data, the maker's sheet (override), or nowhere. */
+  holdSource: 'resin' | 'maker' | null;
+  /** Hold from the maker's sheet, minutes, when `holdSource` is 'maker'. */
+  makerHoldMin?: number;
+  /** Minutes from mixing until the patch is on the packer, as counted. */
+  prepMinutes: number;
   /** Preparation plus dry-run time, minutes; absent without a dry run. */
   neededMin?: number;
+  /** What was counted for GO / NO-GO, in words. */
+  counted: string;
   deflateAfter?: Date;
   returnToService?: Date;
   go: boolean;
@@ -68,6 +92,8 @@ export type FlagKind =
   | 'early-deflate'
   | 'cold-cure'
   | 'hot-cure'
+  | 'cold-mix'
+  | 'hot-mix'
   | 'no-dry-run'
   | 'slow-dry-run'
   | 'pressure-out-of-range'
@@ -94,12 +120,18 @@ export interface InstallRecord {
   resin: ResinClockSpec;
   mixedAt?: Date | null;
   mixTempC?: number | null;
+  /** Air at the mixing place; the warmer of this and `mixTempC` sets the working window. */
+  airTempC?: number | null;
   pipeTempC?: number | null;
   inflatedAt?: Date | null;
   deflatedAt?: Date | null;
   dryRunSeconds?: number | null;
   prepMinutes?: number | null;
   safetyMargin?: number | null;
+  /** Extra share of the hold kept inflated (company setting); deflating inside it is a warning. */
+  holdReserve?: number | null;
+  /** Hold from the maker's sheet, used when the pipe is outside the rated range. */
+  makerHoldMin?: number | null;
   /** Pressures logged while inflated, kPa. */
   pressuresKpa?: number[] | null;
   packer?: PackerPressureRating | null;

@@ -1,5 +1,5 @@
 import { CureInputError } from './errors';
-import { MAX_SAFETY_MARGIN, MAX_TEMP_C, MIN_TEMP_C } from './limits';
+import { MAX_HOLD_RESERVE, MAX_SAFETY_MARGIN, MAX_TEMP_C, MIN_TEMP_C } from './limits';
 import type { CureSensitivity, PackerPressureRating, ResinClockSpec } from './types';
 
 export function requireNumber(value: unknown, what: string): number {
@@ -40,6 +40,14 @@ export function requireSafetyMargin(value: unknown): number {
   const n = requireNumber(value, 'Safety margin');
   if (n < 0 || n > MAX_SAFETY_MARGIN) {
     throw new CureInputError(`Safety margin must be a fraction from 0 to ${MAX_SAFETY_MARGIN} (got ${n}).`);
+  }
+  return n;
+}
+
+export function requireHoldReserve(value: unknown): number {
+  const n = requireNumber(value, 'Hold reserve');
+  if (n < 0 || n > MAX_HOLD_RESERVE) {
+    throw new CureInputError(`Hold reserve must be a fraction from 0 to ${MAX_HOLD_RESERVE} (got ${n}).`);
   }
   return n;
 }

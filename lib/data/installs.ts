@@ -13,6 +13,7 @@ import { SizingInputError, fittingPackers, patchLength } from '@/lib/sizing';
 import type { UnitSystem } from '@/lib/units';
 import type { CreateInstallInput } from '@/lib/validation/install-events';
 import { getCompany } from './company';
+import { redoChainOf } from './redo';
 import { dayInZone } from '@/lib/dates';
 
 type Plain<M extends Model> = InferAttributes<M>;
@@ -110,13 +111,18 @@ export async function getInstallView(user: SessionUser, id: string, now = new Da
     packer: packer ? { minPressureKpa: packer.minPressureKpa, maxPressureKpa: packer.maxPressureKpa } : null,
     resinKitExpiresOn: resinKit?.expiresOn ?? null,
     safetyMargin: company.workingWindowSafetyMargin,
+    holdReserve: company.holdReserve,
+    timeZone: company.timeZone,
     unitSystem: company.unitSystem,
     now,
   });
+  const chain = await redoChainOf(user, installColumns);
   const patchLengthMm = repair.plannedPatchLengthMm ?? ruledPatchLength(repair.defectLengthMm, company.minOverlapPerEndMm);
 
   return {
     install: installColumns,
+    /** The install this one redoes, and the redo that replaced it (the redo chain of the repair). */
+    chain,
     events: eventRows,
     state,
     plan,
@@ -136,6 +142,7 @@ export async function getInstallView(user: SessionUser, id: string, now = new Da
       unitSystem: company.unitSystem,
       timeZone: company.timeZone,
       workingWindowSafetyMargin: company.workingWindowSafetyMargin,
+      holdReserve: company.holdReserve,
       minOverlapPerEndMm: company.minOverlapPerEndMm,
     },
     serverTime: now.toISOString(),

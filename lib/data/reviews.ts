@@ -228,6 +228,8 @@ async function itemsOf(user: SessionUser, rows: Install[], company: Company, now
       packer: row.packer ? { minPressureKpa: row.packer.minPressureKpa, maxPressureKpa: row.packer.maxPressureKpa } : null,
       resinKitExpiresOn: row.resinKit?.expiresOn ?? null,
       safetyMargin: company.workingWindowSafetyMargin,
+      holdReserve: company.holdReserve,
+      timeZone: company.timeZone,
       unitSystem: company.unitSystem,
       now,
     });

@@ -53,7 +53,7 @@ export async function listTodayJobs(user: SessionUser, now = new Date()) {
   };
 }
 
-async function latestInstalls(user: SessionUser, repairIds: string[], now: Date, company: { workingWindowSafetyMargin: number; unitSystem: 'imperial' | 'metric' }) {
+async function latestInstalls(user: SessionUser, repairIds: string[], now: Date, company: { workingWindowSafetyMargin: number; holdReserve: number; unitSystem: 'imperial' | 'metric' }) {
   const rows = repairIds.length
     ? await Install.findAll({
         where: { companyId: user.companyId, repairId: { [Op.in]: repairIds }, status: { [Op.ne]: 'abandoned' } },
@@ -76,6 +76,7 @@ async function latestInstalls(user: SessionUser, repairIds: string[], now: Date,
       packer: install.packer,
       resinKitExpiresOn: install.resinKit?.expiresOn ?? null,
       safetyMargin: company.workingWindowSafetyMargin,
+      holdReserve: company.holdReserve,
       unitSystem: company.unitSystem,
       now,
     });

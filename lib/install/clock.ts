@@ -1,4 +1,6 @@
 import { CureInputError, flagsFor, planCure, type CurePlan, type PackerPressureRating, type QualityFlag, type ResinClockSpec } from '@/lib/cure';
+import { formatInZone } from '@/lib/dates';
+import { localiseSentence } from '@/lib/review/flags';
 import type { UnitSystem } from '@/lib/units';
 import type { InstallState } from './state';
 
@@ -9,6 +11,10 @@ export type InstallClockInput = {
   packer: PackerPressureRating | null;
   resinKitExpiresOn: string | null;
   safetyMargin: number;
+  /** The company's hold reserve, a fraction (0 when not given). */
+  holdReserve?: number;
+  /** The company's IANA zone: every instant in flags and reasons is written in it (UTC ISO without it). */
+  timeZone?: string;
   unitSystem: UnitSystem;
   now: Date;
 };
@@ -38,11 +44,15 @@ export function installClock(input: InstallClockInput): InstallClock {
           ...planCure(resin, {
             mixedAt: state.mixedAt ?? now,
             mixTempC: conditions.mixTempC,
+            airTempC: conditions.airTempC,
             pipeTempC: conditions.pipeTempC,
             inflatedAt: state.mixedAt ? state.inflatedAt : null,
             deflatedAt: state.mixedAt && state.inflatedAt ? state.deflatedAt : null,
             dryRunSeconds: state.dryRunSeconds,
+            prepMinutes: conditions.prepMinutes,
             safetyMargin: input.safetyMargin,
+            holdReserve: input.holdReserve ?? 0,
+            makerHoldMin: state.goDecision?.makerHoldMin,
             unitSystem: input.unitSystem,
           }),
           preview: state.mixedAt === null,
@@ -52,18 +62,30 @@ export function installClock(input: InstallClockInput): InstallClock {
       resin,
       mixedAt: state.mixedAt,
       mixTempC: conditions?.mixTempC,
+      airTempC: conditions?.airTempC,
       pipeTempC: conditions?.pipeTempC,
       inflatedAt: state.inflatedAt,
       deflatedAt: state.deflatedAt,
       dryRunSeconds: state.dryRunSeconds,
+      prepMinutes: conditions?.prepMinutes,
       safetyMargin: input.safetyMargin,
+      holdReserve: input.holdReserve ?? 0,
+      makerHoldMin: state.goDecision?.makerHoldMin,
       pressuresKpa: state.pressuresKpa,
       packer: input.packer,
       resinKitExpiresOn: input.resinKitExpiresOn,
       now,
       unitSystem: input.unitSystem,
     });
-    return { plan, flags, problem: null };
+    const zone = input.timeZone;
+    if (!zone) return { plan, flags, problem: null };
+    // Crews and the office read times in the company's zone, never as a raw UTC instant.
+    const local = (text: string) => localiseSentence(text, (at) => formatInZone(at, zone));
+    return {
+      plan: plan && { ...plan, reasons: plan.reasons.map(local), counted: local(plan.counted) },
+      flags: flags.map((flag) => ({ ...flag, message: local(flag.message) })),
+      problem: null,
+    };
   } catch (error) {
     if (error instanceof CureInputError) return { plan: null, flags: [], problem: error.message };
     throw error;

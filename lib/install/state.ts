@@ -10,7 +10,12 @@ export const INSTALL_STEPS = [
 export type InstallStep = (typeof INSTALL_STEPS)[number];
 
 export type InstallConditions = {
+  /** The resin at the bucket, °C. */
   mixTempC: number;
+  /** Air at the mixing place, °C (not recorded by older tablets). */
+  airTempC: number | null;
+  /** Minutes from mixing until the patch is on the packer (not recorded by older tablets). */
+  prepMinutes: number | null;
   pipeTempC: number;
   resinKitId: string;
   packerId: string;
@@ -24,7 +29,8 @@ export type InstallState = {
   dryRunStartedAt: Date | null;
   dryRunSeconds: number | null;
   conditions: InstallConditions | null;
-  goDecision: { go: boolean; overrideReason: string | null; at: Date } | null;
+  /** `makerHoldMin`: the hold from the resin maker's sheet the foreman entered when going on outside the rated range. */
+  goDecision: { go: boolean; overrideReason: string | null; makerHoldMin: number | null; at: Date } | null;
   mixedAt: Date | null;
   patchLoadedAt: Date | null;
   inPositionAt: Date | null;
@@ -200,6 +206,8 @@ function foldLog(events: EffectiveEvent[], correctionIds: string[]): InstallStat
       case 'conditions_recorded':
         s.conditions = {
           mixTempC: Number(p.mixTempC),
+          airTempC: num(p.airTempC),
+          prepMinutes: num(p.prepMinutes),
           pipeTempC: Number(p.pipeTempC),
           resinKitId: String(p.resinKitId),
           packerId: String(p.packerId),
@@ -207,7 +215,7 @@ function foldLog(events: EffectiveEvent[], correctionIds: string[]): InstallStat
         };
         break;
       case 'go_decision':
-        s.goDecision = { go: p.go === true, overrideReason: str(p.overrideReason), at };
+        s.goDecision = { go: p.go === true, overrideReason: str(p.overrideReason), makerHoldMin: num(p.makerHoldMin), at };
         break;
       case 'resin_mixed':
         s.mixedAt ??= at;

@@ -10,7 +10,7 @@ import { label } from '@/lib/domain';
 import { installClock } from '@/lib/install/clock';
 import { deriveInstallState, type InstallState } from '@/lib/install/state';
 import { SAFETY_DEFERRAL, SAFETY_REMINDERS } from '@/lib/safety';
-import { formatLength, formatPressure, formatTemperature, type UnitSystem } from '@/lib/units';
+import { formatDuration, formatLength, formatPressure, formatTemperature, type UnitSystem } from '@/lib/units';
 import { loadReportImages, type ReportImage } from './images';
 import type { TimelineBand, TimelineMark } from './timeline';
 
@@ -22,7 +22,7 @@ import type { TimelineBand, TimelineMark } from './timeline';
 export const REPORTABLE_JOB_STATUSES = ['approved', 'reported', 'closed'] as const;
 
 /** Cautions of the report: the install screen's reminders that concern the work the customer had done. */
-const REPORT_CAUTION_IDS = ['atmosphere', 'pressure', 'resin', 'exotherm'] as const;
+const REPORT_CAUTION_IDS = ['atmosphere', 'pressure', 'resin', 'exotherm', 'plugs', 'backup', 'hygiene'] as const;
 export const REPORT_DEFERRAL =
   'This report describes the work done; it does not replace your local codes and permits, the resin maker\u2019s instructions, or an assessment by a licensed professional.';
 
@@ -83,6 +83,25 @@ export async function buildReportData(companyId: string, jobId: string, { images
     ],
     order: [['finishedAt', 'DESC']],
   });
+  // Every attempt of the job, for the redo chain: a patch that was redone names the attempts before it.
+  const attempts = await Install.findAll({
+    where: { companyId, jobId },
+    attributes: ['id', 'status', 'inspectionResult', 'startedAt', 'createdAt', 'replacesInstallId'],
+  });
+  const attemptById = new Map(attempts.map((a) => [a.id, a]));
+  const earlierAttempts = (install: Install | null) => {
+    const chain: { started: string | null; outcome: string }[] = [];
+    for (let id = install?.replacesInstallId ?? null, guard = 0; id && guard < 50; guard += 1) {
+      const before = attemptById.get(id);
+      if (!before) break;
+      chain.push({
+        started: when(before.startedAt ?? before.createdAt),
+        outcome: before.inspectionResult === 'fail' ? 'inspection failed' : before.status === 'sent_back' ? 'sent back for rework' : 'not accepted',
+      });
+      id = before.replacesInstallId;
+    }
+    return chain;
+  };
   const attachments = await Attachment.findAll({
     // Only evidence whose bytes were checked on completion (size, sniffed type) reaches a customer.
     where: { companyId, jobId, status: 'ready', kind: { [Op.in]: ['before', 'after', 'inspection'] } },
@@ -113,6 +132,8 @@ export async function buildReportData(companyId: string, jobId: string, { images
       patchLengthMm,
       patchLength: patchLengthMm === null ? null : formatLength(patchLengthMm, system),
       install: install ? installSummary(install, system, when) : null,
+      /** Earlier attempts at this patch that were redone, newest first ("redo chain"). */
+      earlierAttempts: earlierAttempts(install),
       images: repairImages,
     };
   });
@@ -151,6 +172,7 @@ function installSummary(install: Install, system: UnitSystem, when: (at: Date | 
     now: row.finishedAt ?? new Date(),
   });
   const mixTempC = state.conditions?.mixTempC ?? row.mixTempC;
+  const makerHold = plan?.holdSource === 'maker' && plan.makerHoldMin ? formatDuration(plan.makerHoldMin * 60) : null;
   const pipeTempC = state.conditions?.pipeTempC ?? row.pipeTempC;
   const timeline = timelineOf(state, plan && !plan.preview ? plan : null);
   return {
@@ -162,6 +184,8 @@ function installSummary(install: Install, system: UnitSystem, when: (at: Date | 
     inspection: state.inspection ?? (row.inspectionResult ? { result: row.inspectionResult, notes: row.inspectionNotes, at: null } : null),
     steps: timeline.marks.map((mark) => ({ label: mark.label, at: when(mark.at) })),
     returnToService: when(plan?.returnToService ?? null),
+    /** Set when the pipe was outside the resin's rated range and the hold followed the resin maker's sheet. */
+    makerHold,
     signedOffAt: when(state.signedOffAt ?? row.signedOffAt),
     timeline,
   };

@@ -93,6 +93,10 @@ function RepairBlock({ repair, data }: { repair: ReportRepair; data: ReportData 
         {install ? <Field name="Conditions" value={`Mixed at ${install.mixTemperature ?? '—'}, pipe ${install.pipeTemperature ?? '—'}${install.inflatePressure ? `, inflated to ${install.inflatePressure}` : ''}`} /> : null}
         {install ? <Field name="Inspection" value={install.inspection ? `${install.inspection.result === 'pass' ? 'Passed' : 'Did not pass'}${install.inspection.notes ? ` — ${install.inspection.notes}` : ''}` : 'Not recorded'} /> : null}
         {install?.returnToService ? <Field name="Line back in service after" value={install.returnToService} /> : null}
+        {install?.makerHold ? <Field name="Hold time" value={`${install.makerHold}, from the resin maker's sheet: the pipe was outside the resin's rated temperature range`} /> : null}
+        {repair.earlierAttempts.length > 0 ? (
+          <Field name="Earlier attempts" value={repair.earlierAttempts.map((a) => `started ${a.started ?? '—'}, ${a.outcome}, redone`).join('; ')} />
+        ) : null}
       </View>
       {install && install.timeline.marks.length > 0 ? <TimelineChart timeline={install.timeline} zone={data.company.timeZone} /> : null}
       {install ? (

@@ -13,6 +13,8 @@ export const isKnownTimeZone = (zone: string) => knownTimeZones().includes(zone)
 
 /** Working-window reserve as stored: a fraction (0.2 = inflate with 20 % of the working time left); the table allows 0–0.9. */
 export const MAX_SAFETY_MARGIN = 0.9;
+/** Hold reserve as stored: a fraction of the resin's hold kept on top of it (0.1 = 10 % longer); the table allows 0–1. */
+export const MAX_HOLD_RESERVE = 1;
 /** An upper bound on the overlap at each end of a patch; a metre is far beyond any patch in practice. */
 export const MAX_OVERLAP_MM = 1000;
 
@@ -29,6 +31,10 @@ const companyFields = {
     .number({ error: 'Enter the reserve as a number' })
     .min(0, 'The reserve cannot be negative')
     .max(MAX_SAFETY_MARGIN, `At most ${MAX_SAFETY_MARGIN} (90 %)`),
+  holdReserve: z
+    .number({ error: 'Enter the hold reserve as a number' })
+    .min(0, 'The hold reserve cannot be negative')
+    .max(MAX_HOLD_RESERVE, `At most ${MAX_HOLD_RESERVE} (100 %)`),
 };
 
 /** PATCH /api/company: any of the settings, SI values (millimetres, a fraction), nothing else. */
@@ -48,10 +54,14 @@ export const companyFormSchema = z.object({
     .number({ error: 'Enter the reserve as a number' })
     .min(0, 'The reserve cannot be negative')
     .max(MAX_SAFETY_MARGIN * 100, `At most ${MAX_SAFETY_MARGIN * 100} %`),
+  holdReservePercent: z
+    .number({ error: 'Enter the hold reserve as a number' })
+    .min(0, 'The hold reserve cannot be negative')
+    .max(MAX_HOLD_RESERVE * 100, `At most ${MAX_HOLD_RESERVE * 100} %`),
 });
 export type CompanyFormValues = z.infer<typeof companyFormSchema>;
 
-type StoredSettings = { name: string; timeZone: string; unitSystem: UnitSystem; minOverlapPerEndMm: number; workingWindowSafetyMargin: number };
+type StoredSettings = { name: string; timeZone: string; unitSystem: UnitSystem; minOverlapPerEndMm: number; workingWindowSafetyMargin: number; holdReserve: number };
 
 /** Stored settings → what the form shows: the overlap in the company's short-length unit (2 decimals), the reserve in per cent. */
 export function companyToForm(company: StoredSettings): CompanyFormValues {
@@ -61,6 +71,7 @@ export function companyToForm(company: StoredSettings): CompanyFormValues {
     unitSystem: company.unitSystem,
     minOverlapPerEnd: round(lengthFromSi(company.minOverlapPerEndMm, company.unitSystem), 2),
     safetyMarginPercent: round(company.workingWindowSafetyMargin * 100, 1),
+    holdReservePercent: round(company.holdReserve * 100, 1),
   };
 }
 
@@ -72,6 +83,7 @@ export function formToCompanyPatch(values: CompanyFormValues) {
     unitSystem: values.unitSystem,
     minOverlapPerEndMm: Math.round(lengthToSi(values.minOverlapPerEnd, values.unitSystem)),
     workingWindowSafetyMargin: round(values.safetyMarginPercent / 100, 3),
+    holdReserve: round(values.holdReservePercent / 100, 3),
   };
 }
 

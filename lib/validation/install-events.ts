@@ -17,13 +17,22 @@ export const eventPayloadSchemas = {
   dry_run_started: z.object({}).strict(),
   dry_run_finished: z.object({ seconds: z.number().int().min(1).max(4 * 3600) }),
   conditions_recorded: z.object({
+    // The resin at the bucket and the air at the mixing place: the warmer sets the working window.
     mixTempC: temperatureC,
+    airTempC: temperatureC.optional(),
+    // Wet-out and loading: minutes from mixing until the patch is on the packer.
+    prepMinutes: z.number().finite().min(0, 'not below 0 min').max(240, 'over 4 h: check the minutes').optional(),
     pipeTempC: temperatureC,
     resinKitId: uuidSchema,
     packerId: uuidSchema,
     patchLengthMm: z.number().int().positive().max(10_000),
   }),
-  go_decision: z.object({ go: z.boolean(), overrideReason: reason.optional() }),
+  // makerHoldMin: the hold time from the resin maker's sheet, asked when the pipe is outside the rated range.
+  go_decision: z.object({
+    go: z.boolean(),
+    overrideReason: reason.optional(),
+    makerHoldMin: z.number().finite().positive('a hold above zero').max(7 * 24 * 60, 'over 7 days: check the minutes').optional(),
+  }),
   resin_mixed: z.object({}).strict(),
   patch_loaded: z.object({}).strict(),
   packer_in_position: z.object({}).strict(),
@@ -87,3 +96,8 @@ export function parseEventBody(input: unknown) {
 export const createInstallSchema = z.object({ id: uuidSchema, repairId: uuidSchema });
 
 export type CreateInstallInput = z.infer<typeof createInstallSchema>;
+
+/** The body of POST /api/installs/:id/redo: the new install's id may be made on the device, so a retry finds the first. */
+export const redoInstallSchema = z.object({ id: uuidSchema.optional() }).strict();
+
+export type RedoInstallInput = z.infer<typeof redoInstallSchema>;

@@ -29,6 +29,8 @@ const resinSystemFields = {
   // Resin quantity (lib/sizing): unit-free, so the same words serve every company.
   resinToFabricRatio: quantity({ min: 0, max: 5, scale: 2, above: true, bounds: 'More than 0 and at most 5 (1 = as much resin as fabric)' }),
   resinExcessPct: quantity({ min: 0, max: 100, scale: 1, bounds: 'From 0 to 100 %' }),
+  // Minutes from mixing until the patch is on the packer (wet-out and loading); the tablet's default for the GO / NO-GO.
+  prepMinutes: quantity({ min: 0, max: 240, scale: 2, bounds: 'From 0 to 240 minutes' }),
 };
 
 export type ResinSystemValues = {
@@ -56,6 +58,7 @@ export const resinSystemInputSchema = z
     sensitivityKind: resinSystemFields.sensitivityKind.default('doubling'),
     resinToFabricRatio: resinSystemFields.resinToFabricRatio.default(DEFAULT_RESIN_TO_FABRIC_RATIO),
     resinExcessPct: resinSystemFields.resinExcessPct.default(DEFAULT_EXCESS_PCT),
+    prepMinutes: resinSystemFields.prepMinutes.optional(),
   })
   .superRefine((values, ctx) => addProblems(ctx, resinSystemProblems(values)));
 export type ResinSystemInput = z.output<typeof resinSystemInputSchema>;
@@ -76,6 +79,7 @@ export type ResinSystemFormValues = {
   name: string; chemistry: string; refTempC: number; potLifeMin: number; holdMin: number; fullCureMin: number;
   minTempC: number; maxTempC: number; sensitivityKind: string; doublingC: number | null; activationEnergyKj: number | null;
   resinToFabricRatio?: number; resinExcessPct?: number;
+  prepMinutes?: number;
 };
 
 export const resinSystemFormSchema = (system: UnitSystem) =>
@@ -98,7 +102,10 @@ export function resinSystemToSi(v: ResinSystemFormValues, system: UnitSystem) {
 }
 
 /** A stored resin system → the form's values in the company's units (one decimal of a degree). */
-export function resinSystemToForm(row: ResinSystemValues & { name: string; chemistry: string; resinToFabricRatio?: number; resinExcessPct?: number }, system: UnitSystem): ResinSystemFormValues {
+export function resinSystemToForm(
+  row: ResinSystemValues & { name: string; chemistry: string; resinToFabricRatio?: number; resinExcessPct?: number; prepMinutes?: number },
+  system: UnitSystem,
+): ResinSystemFormValues {
   const abs = (celsius: number) => roundTo(temperatureFromSi(celsius, system), 1);
   return {
     name: row.name,
@@ -114,6 +121,7 @@ export function resinSystemToForm(row: ResinSystemValues & { name: string; chemi
     activationEnergyKj: row.activationEnergyKj ?? null,
     resinToFabricRatio: row.resinToFabricRatio ?? DEFAULT_RESIN_TO_FABRIC_RATIO,
     resinExcessPct: row.resinExcessPct ?? DEFAULT_EXCESS_PCT,
+    prepMinutes: row.prepMinutes,
   };
 }
 

@@ -69,7 +69,8 @@ function installEvents({ companyId, installId, userId, start, resin, mixTempC, p
   const inflated = mixed + inflateAfter * MIN;
   add('bladder_inflated', inflated, { pressureKpa: 103 });
   add('pressure_reading', inflated + 30 * MIN, { pressureKpa: 101 });
-  const holdFor = shape === 'early-deflate' ? hold * 0.6 : hold + 8;
+  // A careful crew keeps the hold plus the company's default 10 % hold reserve, and a few minutes more.
+  const holdFor = shape === 'early-deflate' ? hold * 0.6 : hold * 1.1 + 8;
   const deflated = inflated + holdFor * MIN;
   add('bladder_deflated', deflated, shape === 'early-deflate' ? { reason: 'Flow backing up at the upstream manhole' } : {});
   add('inspection_recorded', deflated + 15 * MIN, { result: 'pass', notes: 'Patch tight to the wall, ends smooth, no wrinkles seen on camera.' });

@@ -89,10 +89,14 @@ export async function acknowledgeAndCheck(page: Page) {
   await expect(page.getByTestId('step-dry-run')).toBeVisible();
 }
 
-/** 68 °F at the mixing place, 57 °F in the pipe, the good kit, the first packer that fits. */
-export async function recordConditions(page: Page) {
+/**
+ * Resin and air at 68 °F, 57 °F in the pipe (or `pipeF`), the good kit, the first packer that fits; the
+ * minutes from mixing to patch on the packer come from the resin system (15 unless the admin set others).
+ */
+export async function recordConditions(page: Page, pipeF = '57') {
+  await page.getByLabel(/Resin in the bucket/).fill('68');
   await page.getByLabel(/Air at the mixing place/).fill('68');
-  await page.getByLabel(/Pipe \/ flow/).fill('57');
+  await page.getByLabel(/Pipe \/ flow/).fill(pipeF);
   const lot = await page.locator('#resinKitId option', { hasText: 'SAE-2610-014' }).getAttribute('value');
   await page.locator('#resinKitId').selectOption(lot!);
   await tap(page, 'Save conditions');

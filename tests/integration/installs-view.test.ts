@@ -32,7 +32,7 @@ describe('GET /api/installs/:id', () => {
     // 300 mm defect + 2 × 305 mm (the company's default overlap) = 910 mm.
     expect(body.options.patchLengthMm).toBe(910);
     expect(body.options.packers).toEqual([expect.objectContaining({ id: w.packer.id, fits: true, endMarginEachMm: 145 })]);
-    expect(body.company).toEqual({ unitSystem: 'imperial', timeZone: 'America/Denver', workingWindowSafetyMargin: 0.2, minOverlapPerEndMm: 305 });
+    expect(body.company).toEqual({ unitSystem: 'imperial', timeZone: 'America/Denver', workingWindowSafetyMargin: 0.2, holdReserve: 0.1, minOverlapPerEndMm: 305 });
     expect(Date.parse(body.serverTime)).toBeGreaterThan(Date.now() - 60_000);
   });
 
@@ -59,7 +59,8 @@ describe('GET /api/installs/:id', () => {
     const { status, body } = await getInstall(id);
     expect(status).toBe(200);
     expect(body.state.step).toBe('done');
-    expect(body.plan).toMatchObject({ go: true, preview: false, inflateBy: at(16 + 30), deflateAfter: at(32 + 90) });
+    // Deflate after the 90 min hold plus the company's default 10 % hold reserve: 99 min after the inflate.
+    expect(body.plan).toMatchObject({ go: true, preview: false, inflateBy: at(16 + 30), holdMin: 90, deflateAfter: at(32 + 99) });
     expect(body.flags).toEqual([]);
     expect(body.events).toHaveLength(taps.length);
     expect(body.events[0]).toMatchObject({ type: 'safety_acknowledged', userName: w.foreman.name });

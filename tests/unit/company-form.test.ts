@@ -3,15 +3,15 @@ import { companyFormSchema, companyPatchSchema, companyToForm, formToCompanyPatc
 
 // 1 in = 25.4 mm exactly (the international inch, 1959 agreement).
 describe('company settings form ↔ API body', () => {
-  const stored = { name: 'Acme', timeZone: 'America/Denver', unitSystem: 'imperial' as const, minOverlapPerEndMm: 305, workingWindowSafetyMargin: 0.2 };
+  const stored = { name: 'Acme', timeZone: 'America/Denver', unitSystem: 'imperial' as const, minOverlapPerEndMm: 305, workingWindowSafetyMargin: 0.2, holdReserve: 0.1 };
 
   it('shows the overlap in inches and the reserve in per cent for an imperial company', () => {
-    expect(companyToForm(stored)).toEqual({ name: 'Acme', timeZone: 'America/Denver', unitSystem: 'imperial', minOverlapPerEnd: 12.01, safetyMarginPercent: 20 });
+    expect(companyToForm(stored)).toEqual({ name: 'Acme', timeZone: 'America/Denver', unitSystem: 'imperial', minOverlapPerEnd: 12.01, safetyMarginPercent: 20, holdReservePercent: 10 });
   });
 
   it('round-trips unchanged settings to the same stored values', () => {
     const body = formToCompanyPatch(companyToForm(stored));
-    expect(body).toEqual({ name: 'Acme', timeZone: 'America/Denver', unitSystem: 'imperial', minOverlapPerEndMm: 305, workingWindowSafetyMargin: 0.2 });
+    expect(body).toEqual({ name: 'Acme', timeZone: 'America/Denver', unitSystem: 'imperial', minOverlapPerEndMm: 305, workingWindowSafetyMargin: 0.2, holdReserve: 0.1 });
     expect(companyPatchSchema.parse(body)).toEqual(body);
   });
 
@@ -24,6 +24,13 @@ describe('company settings form ↔ API body', () => {
     const result = companyFormSchema.safeParse({ ...companyToForm(stored), minOverlapPerEnd: -1, safetyMarginPercent: 95 });
     expect(result.success).toBe(false);
     expect(result.error!.issues.map((issue) => issue.path[0]).sort()).toEqual(['minOverlapPerEnd', 'safetyMarginPercent']);
+  });
+
+  it('takes the hold reserve in per cent and refuses more than 100 % or less than 0', () => {
+    expect(formToCompanyPatch({ ...companyToForm(stored), holdReservePercent: 15 }).holdReserve).toBe(0.15);
+    expect(companyFormSchema.safeParse({ ...companyToForm(stored), holdReservePercent: 120 }).success).toBe(false);
+    expect(companyPatchSchema.safeParse({ holdReserve: -0.1 }).success).toBe(false);
+    expect(companyPatchSchema.safeParse({ holdReserve: 0.25 }).success).toBe(true);
   });
 
   it('knows IANA zones and UTC, not made-up ones', () => {

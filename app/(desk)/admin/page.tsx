@@ -14,7 +14,7 @@ export default async function Page() {
     {
       href: '/admin/company',
       title: 'Company',
-      text: `Time zone ${company.timeZone} · ${company.unitSystem} units · overlap ${formatLength(company.minOverlapPerEndMm, company.unitSystem)} per end · working-window reserve ${Math.round(company.workingWindowSafetyMargin * 100)} %`,
+      text: `Time zone ${company.timeZone} · ${company.unitSystem} units · overlap ${formatLength(company.minOverlapPerEndMm, company.unitSystem)} per end · working-window reserve ${Math.round(company.workingWindowSafetyMargin * 100)} % · hold reserve ${Math.round(company.holdReserve * 100)} %`,
     },
     { href: '/admin/users', title: 'Users', text: `${counts.activeUsers} active of ${counts.users} · roles, passwords, access` },
     { href: '/admin/crews', title: 'Crews', text: `${counts.crews} crews · members and jobs per day` },

@@ -39,7 +39,7 @@ export default async function Page() {
                   {repair.plannedPatchLengthMm ? ` · patch ${formatLength(repair.plannedPatchLengthMm, units)}` : ''}
                 </p>
                 <div className="mt-2 space-y-2">
-                  {repair.install?.deadline && <RunningClock label={repair.install.deadline.label} start={repair.install.deadline.start} at={repair.install.deadline.at} />}
+                  {repair.install?.deadline && <RunningClock label={repair.install.deadline.label} start={repair.install.deadline.start} at={repair.install.deadline.at} timeZone={company.timeZone} />}
                   {repair.install ? (
                     <Link href={`/installs/${repair.install.id}`} className={buttonClass(repair.install.step === 'done' ? 'secondary' : 'primary', 'field')}>
                       {repair.install.step === 'done' ? `Install: ${label(repair.install.status)}` : 'Open install'}

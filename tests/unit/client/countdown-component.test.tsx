@@ -26,6 +26,12 @@ describe('<Countdown>', () => {
     expect(screen.getByRole('heading', { name: 'Inflate by' })).toBeInTheDocument();
   });
 
+  it("shows the deadline's clock time in the company's zone on a 24-hour clock", () => {
+    // 08:40 UTC is 02:40 in America/Denver in May (MDT, UTC−6: IANA tz database).
+    render(<Countdown label="Inflate by" start={START} deadline={at(40)} now={at(9)} timeZone="America/Denver" />);
+    expect(screen.getByTestId('countdown').querySelector('time')).toHaveTextContent(/^02:40$/);
+  });
+
   it('turns amber when the deadline is near', () => {
     render(<Countdown label="Inflate by" start={START} deadline={at(40)} now={at(32)} />);
     expect(screen.getByTestId('countdown')).toHaveAttribute('data-tone', 'near');

@@ -94,6 +94,8 @@ describe('flagsFor', () => {
         inflatedAt: plusMin(mixedAt, 40),
         deflatedAt: plusMin(mixedAt, 41),
         pipeTempC: 45,
+        // Outside the rated range only the maker's hold (entered on override) can make a deflate early.
+        makerHoldMin: 60,
         dryRunSeconds: undefined,
         pressuresKpa: [250],
         resinKitExpiresOn: '2024-01-01',

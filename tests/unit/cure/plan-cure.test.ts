@@ -147,9 +147,17 @@ describe('planCure — properties', () => {
         expect(plan.inflateBy.getTime()).toBeGreaterThan(input.mixedAt.getTime());
         expect(plan.safeInflateBy.getTime()).toBeLessThanOrEqual(plan.inflateBy.getTime());
         expect(plan.safeInflateBy.getTime()).toBeGreaterThan(input.mixedAt.getTime());
-        if (input.inflatedAt) {
+        const inRange = input.pipeTempC >= resin.minTempC && input.pipeTempC <= resin.maxTempC;
+        if (input.inflatedAt && inRange) {
           expect(plan.deflateAfter!.getTime()).toBeGreaterThan(input.inflatedAt.getTime());
           expect(plan.returnToService!.getTime()).toBeGreaterThanOrEqual(plan.deflateAfter!.getTime());
+        }
+        // Outside the rated range there is no clock at all.
+        if (!inRange) {
+          expect(plan.holdMin).toBeNull();
+          expect(plan.deflateAfter).toBeUndefined();
+          expect(plan.returnToService).toBeUndefined();
+          expect(plan.go).toBe(false);
         }
       }),
     );
@@ -160,7 +168,7 @@ describe('planCure — properties', () => {
       fc.property(resinArb, inputArb, (resin, raw) => {
         const plan = planCure(resin, buildInput(raw));
         for (const n of [plan.workingWindowMin, plan.safeWorkingWindowMin, plan.holdMin, plan.fullCureMin]) {
-          expect(Number.isFinite(n)).toBe(true);
+          if (n !== null) expect(Number.isFinite(n)).toBe(true);
         }
         if (plan.neededMin !== undefined) expect(Number.isFinite(plan.neededMin)).toBe(true);
         for (const d of [plan.inflateBy, plan.safeInflateBy, plan.deflateAfter, plan.returnToService]) {
@@ -178,8 +186,11 @@ describe('planCure — properties', () => {
         const coolPlan = planCure(resin, { mixedAt: mixed, mixTempC: cool, pipeTempC: cool, dryRunSeconds: 60 });
         const warmPlan = planCure(resin, { mixedAt: mixed, mixTempC: warm, pipeTempC: warm, dryRunSeconds: 60 });
         expect(warmPlan.workingWindowMin).toBeLessThanOrEqual(coolPlan.workingWindowMin);
-        expect(warmPlan.holdMin).toBeLessThanOrEqual(coolPlan.holdMin);
-        expect(warmPlan.fullCureMin).toBeLessThanOrEqual(coolPlan.fullCureMin);
+        // Hold and full cure exist only inside the resin's rated range.
+        if (warmPlan.holdMin !== null && coolPlan.holdMin !== null) {
+          expect(warmPlan.holdMin).toBeLessThanOrEqual(coolPlan.holdMin);
+          expect(warmPlan.fullCureMin!).toBeLessThanOrEqual(coolPlan.fullCureMin!);
+        }
       }),
     );
   });

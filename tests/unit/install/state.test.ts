@@ -192,3 +192,21 @@ describe('orderProblem', () => {
     expect(orderProblem(s, next('correction', 200, { reason: 'clock', deviceTime: at(15).toISOString() }, mixed.id))).toBeNull();
   });
 });
+
+describe('the clock inputs of issue 12 in the event log', () => {
+  it("folds air temperature, preparation minutes and the maker's hold; older events without them read as null", () => {
+    const base = { resinKitId: 'k', packerId: 'p', patchLengthMm: 600, mixTempC: 18, pipeTempC: 3 };
+    const withAll = deriveInstallState([
+      { id: '1', type: 'conditions_recorded', deviceTime: '2026-06-02T08:00:00Z', payload: { ...base, airTempC: 24, prepMinutes: 12 } },
+      { id: '2', type: 'go_decision', deviceTime: '2026-06-02T08:01:00Z', payload: { go: false, overrideReason: 'Line needed tonight', makerHoldMin: 240 } },
+    ]);
+    expect(withAll.conditions).toMatchObject({ mixTempC: 18, airTempC: 24, prepMinutes: 12, pipeTempC: 3 });
+    expect(withAll.goDecision).toMatchObject({ go: false, makerHoldMin: 240 });
+    const older = deriveInstallState([
+      { id: '1', type: 'conditions_recorded', deviceTime: '2026-06-02T08:00:00Z', payload: base },
+      { id: '2', type: 'go_decision', deviceTime: '2026-06-02T08:01:00Z', payload: { go: true } },
+    ]);
+    expect(older.conditions).toMatchObject({ airTempC: null, prepMinutes: null });
+    expect(older.goDecision?.makerHoldMin).toBeNull();
+  });
+});

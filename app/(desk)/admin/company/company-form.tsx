@@ -12,7 +12,7 @@ import { lengthFromSi, lengthToSi, unitLabels } from '@/lib/units';
 import { companyFormSchema, formToCompanyPatch, type CompanyFormValues } from '@/lib/validation/company';
 
 // The API names its fields in SI; the form's own fields carry the entered units.
-const SERVER_FIELD: Record<string, keyof CompanyFormValues> = { minOverlapPerEndMm: 'minOverlapPerEnd', workingWindowSafetyMargin: 'safetyMarginPercent' };
+const SERVER_FIELD: Record<string, keyof CompanyFormValues> = { minOverlapPerEndMm: 'minOverlapPerEnd', workingWindowSafetyMargin: 'safetyMarginPercent', holdReserve: 'holdReservePercent' };
 
 /** The company's settings; lengths are entered in the unit system picked here and sent to PATCH /api/company in millimetres. */
 export function CompanyForm({ initial, timeZones }: { initial: CompanyFormValues; timeZones: string[] }) {
@@ -70,9 +70,17 @@ export function CompanyForm({ initial, timeZones }: { initial: CompanyFormValues
         id="safetyMarginPercent"
         label="Working-window reserve (%)"
         error={errors.safetyMarginPercent?.message}
-        hint="Share of the resin’s working time held back in the go/no-go: at 20 %, loading and pulling the packer (timed in the dry run) must fit in 80 % of the working time. Follow the resin maker’s instructions where they ask for more."
+        hint="Share of the resin’s working time held back in the go/no-go: at 20 %, the minutes from mixing until the patch is on the packer plus the dry run’s pull must fit in 80 % of the working time. Follow the resin maker’s instructions where they ask for more."
       >
         <input type="number" step="any" min={0} max={90} {...register('safetyMarginPercent', { valueAsNumber: true })} {...errorProps('safetyMarginPercent', errors.safetyMarginPercent?.message)} className={inputClass} />
+      </FormField>
+      <FormField
+        id="holdReservePercent"
+        label="Hold reserve (%)"
+        error={errors.holdReservePercent?.message}
+        hint="Extra time kept inflated on top of the resin’s hold: at 10 %, a 90 min hold means deflate after 99 min. The tablet shows both."
+      >
+        <input type="number" step="any" min={0} max={100} {...register('holdReservePercent', { valueAsNumber: true })} {...errorProps('holdReservePercent', errors.holdReservePercent?.message)} className={inputClass} />
       </FormField>
       {message && (
         <p role={message.ok ? 'status' : 'alert'} className={`text-sm font-medium md:col-span-2 ${message.ok ? 'text-safe-700' : 'text-missed-700'}`}>{message.text}</p>

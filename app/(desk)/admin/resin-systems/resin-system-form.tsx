@@ -16,6 +16,7 @@ const BLANK: ResinSystemFormValues = {
   name: '', chemistry: 'epoxy', refTempC: Number.NaN, potLifeMin: Number.NaN, holdMin: Number.NaN, fullCureMin: Number.NaN,
   minTempC: Number.NaN, maxTempC: Number.NaN, sensitivityKind: 'doubling', doublingC: null, activationEnergyKj: null,
   resinToFabricRatio: DEFAULT_RESIN_TO_FABRIC_RATIO, resinExcessPct: DEFAULT_EXCESS_PCT,
+  prepMinutes: 15,
 };
 
 /** New or edit. Temperatures are typed in the company's units and stored in °C; the doubling step is a temperature difference. */
@@ -64,6 +65,7 @@ export function ResinSystemForm({ id, initial, unitSystem }: { id?: string; init
       {num('potLifeMin', 'Pot life (min)', 'Mix → latest inflate')}
       {num('holdMin', 'Hold (min)', 'Inflate → earliest deflate')}
       {num('fullCureMin', 'Full cure (min)', 'Inflate → back in service')}
+      {num('prepMinutes', 'Mix to patch on packer (min)', 'Wet-out and loading: the tablet’s default, counted in the GO / NO-GO')}
       <FormField id="sensitivityKind" label="Temperature sensitivity" error={errors.sensitivityKind?.message}>
         <select {...register('sensitivityKind')} {...errorProps('sensitivityKind', errors.sensitivityKind?.message)} className={inputClass}>
           <option value="doubling">Times halve every step warmer</option>

@@ -12,6 +12,8 @@ import { DESK_ROLES, label } from '@/lib/domain';
 import { REPAIRS_EDITABLE } from '@/lib/jobs/status';
 import { recordForPage } from '@/lib/page-record';
 import { formatLength } from '@/lib/units';
+import { listRepairAttempts } from '@/lib/data/redo';
+import { InstallAttempts } from './install-attempts';
 import { PlanPanel } from './plan-panel';
 
 export const metadata: Metadata = { title: 'Repair' };
@@ -51,6 +53,7 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
         {repair.notes && <div className="col-span-full"><dt className="text-slate-500">Notes</dt><dd className="whitespace-pre-line">{repair.notes}</dd></div>}
       </dl>
       <PlanPanel repairId={repair.id} initial={plan} editable={editable} />
+      <InstallAttempts attempts={await listRepairAttempts(user, repair.id)} timeZone={timeZone} />
       <RepairEvidence repairId={repair.id} />
       <AuditHistory user={user} entityType="repair" entityId={repair.id} timeZone={timeZone} />
     </div>

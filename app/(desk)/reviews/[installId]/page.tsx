@@ -38,6 +38,17 @@ export default async function Page({ params }: { params: Promise<{ installId: st
             {repair.clockPosition ? ` · ${repair.clockPosition} o'clock` : ''} · {r.crew?.name ?? 'no crew'}
           </p>
           <p className="text-sm text-slate-600">Signed off {when(r.install.signedOffAt)} · install started {when(r.install.startedAt)}</p>
+          {r.chain.replaces && (
+            <p className="text-sm" data-testid="chain-replaces">
+              Redo of <Link className="text-brand-700 underline" href={`/reviews/${r.chain.replaces.id}`}>the install started {when(r.chain.replaces.startedAt ?? r.chain.replaces.createdAt)}</Link>
+              {r.chain.replaces.inspectionResult === 'fail' ? ' (inspection failed)' : r.chain.replaces.status === 'sent_back' ? ' (sent back)' : ''}
+            </p>
+          )}
+          {r.chain.replacedBy && (
+            <p className="text-sm font-semibold text-near-700" data-testid="chain-replaced-by">
+              Redone by <Link className="underline" href={`/reviews/${r.chain.replacedBy.id}`}>a new install</Link> ({label(r.chain.replacedBy.status).toLowerCase()}); this one is kept as the record of the first attempt.
+            </p>
+          )}
         </div>
         <StatusBadge status={r.install.status} />
       </div>
@@ -67,17 +78,19 @@ export default async function Page({ params }: { params: Promise<{ installId: st
         <section aria-labelledby="conditions-heading" className="rounded-lg bg-white p-4 ring-1 ring-slate-200">
           <h2 id="conditions-heading" className="mb-2 text-lg font-semibold">Conditions and materials</h2>
           <dl className="grid grid-cols-2 gap-x-4 gap-y-2 text-sm">
-            <Item term="Mix temperature" value={r.install.mixTempC != null ? formatTemperature(r.install.mixTempC, units) : '—'} />
+            <Item term="Resin temperature" value={r.install.mixTempC != null ? formatTemperature(r.install.mixTempC, units) : '—'} />
+            <Item term="Air at the mixing place" value={state.conditions?.airTempC != null ? formatTemperature(state.conditions.airTempC, units) : '—'} />
             <Item term="Pipe temperature" value={r.install.pipeTempC != null ? formatTemperature(r.install.pipeTempC, units) : '—'} />
             <Item term="Dry run" value={state.dryRunSeconds != null ? formatDuration(state.dryRunSeconds) : 'none recorded'} />
-            <Item term="Go decision" value={state.goDecision ? (state.goDecision.go ? 'GO' : `NO-GO overridden: “${state.goDecision.overrideReason ?? ''}”`) : '—'} />
+            <Item term="Go decision" value={state.goDecision ? (state.goDecision.go ? 'GO' : `NO-GO overridden: “${state.goDecision.overrideReason ?? ''}”${state.goDecision.makerHoldMin ? `, maker's hold ${formatDuration(state.goDecision.makerHoldMin * 60)}` : ''}`) : '—'} />
+            <Item term="Counted for GO" value={plan?.counted ?? '—'} />
             <Item term="Resin system" value={r.resinSystem ? `${r.resinSystem.name} (${label(r.resinSystem.chemistry)})` : '—'} />
             <Item term="Kit lot and expiry" value={r.resinKit ? `${r.resinKit.lot}, expires ${r.resinKit.expiresOn}` : '—'} />
             <Item term="Packer" value={r.packer ? `${r.packer.name}${r.packer.serial ? ` (${r.packer.serial})` : ''}, rated ${formatPressure(r.packer.minPressureKpa, units)}–${formatPressure(r.packer.maxPressureKpa, units)}` : '—'} />
             <Item term="Patch length" value={r.install.patchLengthMm != null ? formatLength(r.install.patchLengthMm, units) : '—'} />
             <Item term="Pressures" value={state.pressuresKpa.length ? state.pressuresKpa.map((p) => formatPressure(p, units)).join(', ') : '—'} />
-            <Item term="Working window" value={plan ? `${Math.round(plan.workingWindowMin)} min at the mix temperature` : '—'} />
-            <Item term="Hold / full cure" value={plan ? `${Math.round(plan.holdMin)} min / ${Math.round(plan.fullCureMin)} min at the pipe temperature` : '—'} />
+            <Item term="Working window" value={plan ? `${Math.round(plan.workingWindowMin)} min at the warmer of resin and air` : '—'} />
+            <Item term="Hold / full cure" value={plan ? holdText(plan) : '—'} />
             <Item term="Inspection" value={state.inspection ? `${state.inspection.result === 'pass' ? 'Pass' : 'Fail'}${state.inspection.notes ? `: ${state.inspection.notes}` : ''}` : '—'} />
           </dl>
         </section>
@@ -131,4 +144,15 @@ function Item({ term, value }: { term: string; value: string }) {
       <dd className="font-medium">{value}</dd>
     </div>
   );
+}
+
+/** Hold and full cure as the clock counted them: the resin's corrected times with the reserve, or the maker's hold. */
+function holdText(plan: { holdMin: number | null; fullCureMin: number | null; keepInflatedMin: number | null; holdReserve: number; holdSource: string | null; makerHoldMin?: number }) {
+  if (plan.holdMin === null) {
+    return plan.holdSource === 'maker'
+      ? `outside the rated range: maker's hold ${Math.round(plan.makerHoldMin ?? 0)} min, kept ${Math.round(plan.keepInflatedMin ?? 0)} min with the reserve`
+      : "outside the rated range: no hold time (per the resin maker's sheet)";
+  }
+  const reserve = plan.holdReserve > 0 ? `, kept ${Math.round(plan.keepInflatedMin ?? plan.holdMin)} min with the ${Math.round(plan.holdReserve * 100)} % reserve` : '';
+  return `${Math.round(plan.holdMin)} min${reserve} / ${Math.round(plan.fullCureMin ?? 0)} min at the pipe temperature`;
 }

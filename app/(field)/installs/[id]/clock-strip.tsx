@@ -5,12 +5,15 @@ import { Countdown } from '@/components/install/countdown';
 import { alarmsDue } from '@/lib/client/countdown';
 import { notify, soundAlarm, vibrate } from '@/lib/client/alarm';
 import type { CurePlan } from '@/lib/cure';
+import { formatInZone } from '@/lib/dates';
 import type { InstallState } from '@/lib/install/state';
 
 type Deadline = { key: string; label: string; start: Date; deadline: Date };
 
 /** The running clocks of this install, with their alarms: before inflating, then while holding. */
 export function deadlinesOf(state: InstallState, plan: CurePlan | null): Deadline[] {
+  // A signed-off install is a record: its outcome is shown, no clock runs on.
+  if (state.signedOffAt) return [];
   if (!plan || !state.mixedAt || state.deflatedAt) {
     if (plan?.returnToService && state.inflatedAt) {
       return [{ key: 'returnToService', label: 'Return to service', start: state.inflatedAt, deadline: plan.returnToService }];
@@ -19,12 +22,12 @@ export function deadlinesOf(state: InstallState, plan: CurePlan | null): Deadlin
   }
   if (!state.inflatedAt) {
     return [
-      { key: 'safeInflateBy', label: 'Inflate by (with reserve)', start: state.mixedAt, deadline: plan.safeInflateBy },
+      { key: 'safeInflateBy', label: 'Inflate by (keeping the reserve)', start: state.mixedAt, deadline: plan.safeInflateBy },
       { key: 'inflateBy', label: 'Working time ends', start: state.mixedAt, deadline: plan.inflateBy },
     ];
   }
   return [
-    ...(plan.deflateAfter ? [{ key: 'deflateAfter', label: 'Deflate after', start: state.inflatedAt, deadline: plan.deflateAfter }] : []),
+    ...(plan.deflateAfter ? [{ key: 'deflateAfter', label: deflateLabel(plan), start: state.inflatedAt, deadline: plan.deflateAfter }] : []),
     ...(plan.returnToService ? [{ key: 'returnToService', label: 'Return to service', start: state.inflatedAt, deadline: plan.returnToService }] : []),
   ];
 }
@@ -37,10 +40,10 @@ export function ClockStrip({ deadlines, now, timeZone }: { deadlines: Deadline[]
         fired.current.add(alarm.key);
         soundAlarm(alarm.kind === 'five-minutes' ? 'warning' : 'urgent');
         vibrate();
-        void notify(`${d.label}: ${alarm.message}`, `Install clock — ${d.label.toLowerCase()} at ${d.deadline.toLocaleTimeString()}`, alarm.key);
+        void notify(`${d.label}: ${alarm.message}`, `Install clock — ${d.label.toLowerCase()} at ${formatInZone(d.deadline, timeZone, 'HH:mm zzz')}`, alarm.key);
       }
     }
-  }, [deadlines, now]);
+  }, [deadlines, now, timeZone]);
   if (deadlines.length === 0) return null;
   return (
     <div className="grid gap-3 sm:grid-cols-2" data-testid="clock-strip">
@@ -49,4 +52,10 @@ export function ClockStrip({ deadlines, now, timeZone }: { deadlines: Deadline[]
       ))}
     </div>
   );
+}
+
+/** Says what the deflate countdown runs to: the resin's hold with the company's reserve, or the maker's hold. */
+function deflateLabel(plan: CurePlan): string {
+  if (plan.holdSource === 'maker') return "Deflate after (maker's hold)";
+  return plan.holdReserve > 0 ? `Deflate after (hold + ${Math.round(plan.holdReserve * 100)} %)` : 'Deflate after';
 }

@@ -1,6 +1,7 @@
 'use client';
 
 import Link from 'next/link';
+import { useRouter } from 'next/navigation';
 import { useEffect, useMemo, useState } from 'react';
 import type { InstallViewResponse } from '@/app/api/installs/[id]/route';
 import { EvidencePanel } from '@/components/evidence/evidence-panel';
@@ -8,14 +9,16 @@ import { useNow } from '@/components/install/countdown';
 import { resinClockSpec, type CurePlan, type QualityFlag } from '@/lib/cure';
 import { installClock } from '@/lib/install/clock';
 import { requestNotificationPermission, unlockAudio } from '@/lib/client/alarm';
+import { submitJson } from '@/lib/client/submit-json';
 import { startOutboxSync } from '@/lib/client/outbox';
 import { useWakeLock } from '@/lib/client/wake-lock';
 import { label } from '@/lib/domain';
 import type { InstallState } from '@/lib/install/state';
 import { groundwaterPressureKpa } from '@/lib/sizing';
-import { formatLength } from '@/lib/units';
+import { formatDuration, formatLength } from '@/lib/units';
 import { ClockStrip, deadlinesOf } from './clock-strip';
 import { EventLog } from './event-log';
+import { InstallRecord, mayOfferRedo } from './install-record';
 import { StepChecks } from './step-checks';
 import { StepHold, StepInflate, StepTap } from './step-clock';
 import { StepConditions } from './step-conditions';
@@ -37,6 +40,8 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
   const now = useNow(1000);
   const [skipDryRun, setSkipDryRun] = useState(false);
   const [editingConditions, setEditingConditions] = useState(false);
+  const [redo, setRedo] = useState<{ busy: boolean; error: string | null }>({ busy: false, error: null });
+  const router = useRouter();
   const unitSystem = view.company.unitSystem;
   const { plan, flags } = useMemo(() => liveClock(view, state, now), [view, state, now]);
   const clockRunning = !!state.mixedAt && !state.deflatedAt;
@@ -44,7 +49,7 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
   // Only the signed-in user's taps are sent; anyone else's wait on the tablet for them.
   useEffect(() => startOutboxSync({ user: { id: viewer.id, name: viewer.name } }), [viewer.id, viewer.name]);
 
-  const kits = view.options.resinKits.map((k) => ({ id: k.id, lot: k.lot, expiresOn: k.expiresOn, expired: k.expired, resinName: k.resinSystem.name }));
+  const kits = view.options.resinKits.map((k) => ({ id: k.id, lot: k.lot, expiresOn: k.expiresOn, expired: k.expired, resinName: k.resinSystem.name, prepMinutes: k.resinSystem.prepMinutes ?? null }));
   const packers = view.options.packers.map((p) => ({ id: p.id, name: p.name, fits: p.fits, reasons: p.reasons }));
   const packer = view.options.packers.find((p) => p.id === state.conditions?.packerId) ?? null;
   const rating = packer ? { minPressureKpa: packer.minPressureKpa, maxPressureKpa: packer.maxPressureKpa, groundwaterKpa: groundwaterKpaOf(view.repair.plannedGroundwaterHeadMm) } : null;
@@ -75,6 +80,12 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
           {view.repair.clockPosition ? ` · ${view.repair.clockPosition} o'clock` : ''}
         </p>
       </header>
+      {view.chain.replaces && !state.signedOffAt && state.inspection?.result !== 'fail' && (
+        <p className="rounded-lg bg-slate-100 px-4 py-2 text-lg" data-testid="redo-of">
+          Redo of <Link className="font-semibold text-brand-700 underline" href={`/installs/${view.chain.replaces.id}`}>an earlier install</Link>
+          {view.chain.replaces.inspectionResult === 'fail' ? ' whose inspection failed' : view.chain.replaces.status === 'sent_back' ? ' the office sent back' : ''}; both are kept.
+        </p>
+      )}
       <SyncStatus queued={queued} waiting={waiting} rejected={rejected} />
       <ClockStrip deadlines={deadlinesOf(state, plan)} now={now} timeZone={view.company.timeZone} />
       {flags.length > 0 && (
@@ -86,6 +97,19 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
           ))}
         </ul>
       )}
+      {(state.signedOffAt || state.inspection?.result === 'fail') && (
+        <InstallRecord
+          state={state}
+          plan={plan}
+          timeZone={view.company.timeZone}
+          unitSystem={unitSystem}
+          chain={view.chain}
+          canRedo={viewer.role === 'foreman' && mayOfferRedo(state, view.install.status)}
+          redoing={redo.busy}
+          redoError={redo.error}
+          onRedo={() => void startRedo()}
+        />
+      )}
       {renderStep()}
       {AFTER_DEFLATE.includes(step) && (
         <EvidencePanel target={{ installId: view.install.id }} size="field" title="Inspection images" defaultKind="inspection" />
@@ -93,6 +117,18 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
       <EventLog events={logged} timeZone={view.company.timeZone} />
     </div>
   );
+
+  async function startRedo() {
+    setRedo({ busy: true, error: null });
+    let result;
+    try {
+      result = await submitJson<{ install: { id: string } }>(`/api/installs/${view.install.id}/redo`, 'POST', { id: crypto.randomUUID() });
+    } catch {
+      return setRedo({ busy: false, error: 'No connection: starting a redo needs the server. Try again when the signal is back.' });
+    }
+    if (!result.ok) return setRedo({ busy: false, error: result.error.message });
+    router.push(`/installs/${result.data.install.id}`);
+  }
 
   function renderStep() {
     switch (step) {
@@ -131,7 +167,7 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
               plan={plan}
               canOverride={canDecide}
               onGo={() => void tap('go_decision', { go: true })}
-              onOverride={(overrideReason) => void tap('go_decision', { go: false, overrideReason })}
+              onOverride={(overrideReason, makerHoldMin) => void tap('go_decision', { go: false, overrideReason, ...(makerHoldMin !== null ? { makerHoldMin } : {}) })}
               onChangeConditions={() => setEditingConditions(true)}
             />
           );
@@ -149,6 +185,7 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
             unitSystem={unitSystem}
             rating={rating}
             deflateAfter={plan?.deflateAfter ?? null}
+            holdNote={holdNoteOf(plan)}
             now={now}
             onPressure={(pressureKpa, confirmedOutOfRange) => void tap('pressure_reading', { pressureKpa, ...(confirmedOutOfRange ? { confirmedOutOfRange } : {}) })}
             onDeflate={(early) => void tap('bladder_deflated', early ? { reason: early.reason, confirmedEarly: true } : {})}
@@ -164,6 +201,18 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
   }
 }
 
+/** What the deflate countdown counts, so the crew knows which figure it is trusting. */
+function holdNoteOf(plan: CurePlan | null): string {
+  if (!plan || plan.keepInflatedMin === null) {
+    return "No hold time is known for this temperature: keep the bladder up as long as the resin maker's sheet says.";
+  }
+  const reserve = plan.holdReserve > 0 ? ` + the company's ${Math.round(plan.holdReserve * 100)} % reserve` : '';
+  if (plan.holdSource === 'maker') {
+    return `Counting down the resin maker's hold of ${formatDuration((plan.makerHoldMin ?? 0) * 60)}${reserve} = ${formatDuration(plan.keepInflatedMin * 60)}, entered by the foreman: the pipe is outside the resin's rated range.`;
+  }
+  return `Hold ${formatDuration((plan.holdMin ?? 0) * 60)} at the pipe temperature${reserve} = keep inflated ${formatDuration(plan.keepInflatedMin * 60)}.`;
+}
+
 /** Plan and flags recomputed on the tablet by the server's own rule, so they are right offline too. */
 function liveClock(view: InstallViewResponse, state: InstallState, now: Date): { plan: CurePlan | null; flags: QualityFlag[] } {
   const conditions = state.conditions;
@@ -177,6 +226,8 @@ function liveClock(view: InstallViewResponse, state: InstallState, now: Date): {
     packer: packer ? { minPressureKpa: packer.minPressureKpa, maxPressureKpa: packer.maxPressureKpa } : null,
     resinKitExpiresOn: kit.expiresOn,
     safetyMargin: view.company.workingWindowSafetyMargin,
+    holdReserve: view.company.holdReserve,
+    timeZone: view.company.timeZone,
     unitSystem: view.company.unitSystem,
     now,
   });

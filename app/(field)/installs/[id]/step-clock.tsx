@@ -81,10 +81,12 @@ export function StepInflate({ unitSystem, rating, onInflate }: { unitSystem: Uni
 }
 
 /** While the bladder holds: more pressure readings, and the deflate (early deflate asks why). */
-export function StepHold({ unitSystem, rating, deflateAfter, now, onPressure, onDeflate }: {
+export function StepHold({ unitSystem, rating, deflateAfter, holdNote, now, onPressure, onDeflate }: {
   unitSystem: UnitSystem;
   rating: Rating;
   deflateAfter: Date | null;
+  /** What the deflate countdown runs to, in words (hold and reserve, or the maker's hold). */
+  holdNote: string;
   now: Date;
   onPressure: (kPa: number, confirmedOutOfRange: boolean) => void;
   onDeflate: (early: { reason: string } | null) => void;
@@ -94,6 +96,7 @@ export function StepHold({ unitSystem, rating, deflateAfter, now, onPressure, on
   const early = deflateAfter !== null && now < deflateAfter;
   return (
     <StepCard title="Holding" testId="step-hold">
+      <p className="text-lg text-slate-700" data-testid="hold-note">{holdNote}</p>
       <PressureEntry id="holdPressure" unitSystem={unitSystem} rating={rating} actionLabel="Add pressure reading" onRecord={onPressure} />
       <hr className="border-slate-200" />
       {asking && early ? (

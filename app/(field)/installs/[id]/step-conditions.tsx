@@ -1,19 +1,22 @@
 'use client';
 
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useForm } from 'react-hook-form';
+import { useEffect } from 'react';
+import { useForm, useWatch } from 'react-hook-form';
 import { z } from 'zod';
 import { lengthFromSi, lengthToSi, temperatureToSi, unitLabels, type UnitSystem } from '@/lib/units';
 import { eventPayloadSchemas } from '@/lib/validation/install-events';
 import { FieldInput, PrimaryAction, StepCard } from './field-ui';
 
-export type KitOption = { id: string; lot: string; expiresOn: string; expired: boolean; resinName: string };
+export type KitOption = { id: string; lot: string; expiresOn: string; expired: boolean; resinName: string; prepMinutes: number | null };
 export type PackerOption = { id: string; name: string; fits: boolean; reasons: string[] };
 export type Conditions = z.infer<(typeof eventPayloadSchemas)['conditions_recorded']>;
 
 // Entered in the company's units; converted to SI once, then checked against the event's own schema.
 const formSchema = z.object({
-  mixTemp: z.coerce.number({ error: 'Enter the air temperature where you mix' }),
+  mixTemp: z.coerce.number({ error: 'Enter the temperature of the resin in the bucket' }),
+  airTemp: z.coerce.number({ error: 'Enter the air temperature where you mix' }),
+  prepMinutes: z.coerce.number({ error: 'Enter the minutes from mixing until the patch is on the packer' }).min(0, 'Not below 0'),
   pipeTemp: z.coerce.number({ error: 'Enter the pipe or flow temperature' }),
   resinKitId: z.uuid('Choose the resin kit by its lot'),
   packerId: z.uuid('Choose the packer'),
@@ -35,19 +38,26 @@ export function StepConditions({
   kits: KitOption[];
   packers: PackerOption[];
   plannedPatchLengthMm: number | null;
-  initial: Conditions | null;
+  initial: (Omit<Conditions, 'airTempC' | 'prepMinutes'> & { airTempC?: number | null; prepMinutes?: number | null }) | null;
   onSave: (conditions: Conditions) => void;
 }) {
   const units = unitLabels(unitSystem);
-  const { register, handleSubmit, setError, formState } = useForm<FormInput, unknown, FormValues>({
+  const { register, handleSubmit, setError, setValue, getFieldState, control, formState } = useForm<FormInput, unknown, FormValues>({
     resolver: zodResolver(formSchema),
     defaultValues: {
+      prepMinutes: initial?.prepMinutes ?? undefined,
       resinKitId: initial?.resinKitId ?? '',
       packerId: initial?.packerId ?? packers.find((p) => p.fits)?.id ?? '',
       patchLength: plannedPatchLengthMm ? Number(lengthFromSi(initial?.patchLengthMm ?? plannedPatchLengthMm, unitSystem).toFixed(1)) : undefined,
     },
   });
   const { errors } = formState;
+  // The resin system's wet-out and loading minutes fill the box until the crew types its own.
+  const kitId = useWatch({ control, name: 'resinKitId' });
+  const kitPrep = kits.find((k) => k.id === kitId)?.prepMinutes;
+  useEffect(() => {
+    if (kitPrep != null && !getFieldState('prepMinutes').isDirty && initial?.prepMinutes == null) setValue('prepMinutes', kitPrep);
+  }, [kitPrep, getFieldState, setValue, initial]);
 
   const submit = handleSubmit((values) => {
     const kit = kits.find((k) => k.id === values.resinKitId);
@@ -57,6 +67,8 @@ export function StepConditions({
     }
     const conditions = {
       mixTempC: round(temperatureToSi(values.mixTemp, unitSystem), 1),
+      airTempC: round(temperatureToSi(values.airTemp, unitSystem), 1),
+      prepMinutes: round(values.prepMinutes, 1),
       pipeTempC: round(temperatureToSi(values.pipeTemp, unitSystem), 1),
       resinKitId: values.resinKitId,
       packerId: values.packerId,
@@ -65,7 +77,7 @@ export function StepConditions({
     const checked = eventPayloadSchemas.conditions_recorded.safeParse(conditions);
     if (!checked.success) {
       for (const issue of checked.error.issues) {
-        const field = ({ mixTempC: 'mixTemp', pipeTempC: 'pipeTemp', patchLengthMm: 'patchLength' } as const)[issue.path[0] as 'mixTempC'] ?? 'mixTemp';
+        const field = ({ mixTempC: 'mixTemp', airTempC: 'airTemp', prepMinutes: 'prepMinutes', pipeTempC: 'pipeTemp', patchLengthMm: 'patchLength' } as const)[issue.path[0] as 'mixTempC'] ?? 'mixTemp';
         setError(field, { message: `Out of range: ${issue.message}` });
       }
       return;
@@ -77,9 +89,11 @@ export function StepConditions({
     <StepCard title="Conditions and materials" testId="step-conditions">
       <form onSubmit={submit} noValidate className="space-y-4">
         <div className="grid gap-4 sm:grid-cols-2">
-          <FieldInput id="mixTemp" label={`Air at the mixing place (${units.temperature})`} inputMode="decimal" error={errors.mixTemp?.message} {...register('mixTemp')} />
+          <FieldInput id="mixTemp" label={`Resin in the bucket (${units.temperature})`} inputMode="decimal" error={errors.mixTemp?.message} {...register('mixTemp')} />
+          <FieldInput id="airTemp" label={`Air at the mixing place (${units.temperature})`} inputMode="decimal" error={errors.airTemp?.message} {...register('airTemp')} />
           <FieldInput id="pipeTemp" label={`Pipe / flow at the repair (${units.temperature})`} inputMode="decimal" error={errors.pipeTemp?.message} {...register('pipeTemp')} />
         </div>
+        <p className="text-base text-slate-600">The warmer of resin and air sets the working window.</p>
         <div>
           <label htmlFor="resinKitId" className="block text-lg font-semibold">Resin kit (lot)</label>
           <select id="resinKitId" className="mt-1 block min-h-touch w-full rounded-md border-2 border-slate-400 px-3 text-xl" aria-describedby={errors.resinKitId ? 'resinKitId-error' : undefined} {...register('resinKitId')}>
@@ -104,6 +118,14 @@ export function StepConditions({
           </select>
           {errors.packerId && <p className="mt-1 text-base font-medium text-missed-700">{errors.packerId.message}</p>}
         </div>
+        <FieldInput
+          id="prepMinutes"
+          label="Minutes from mixing until the patch is on the packer"
+          hint="Wet-out and loading; the GO counts these plus the dry run's pull. Filled in from the resin system."
+          inputMode="decimal"
+          error={errors.prepMinutes?.message}
+          {...register('prepMinutes')}
+        />
         <FieldInput id="patchLength" label={`Patch length (${units.shortLength})`} inputMode="decimal" error={errors.patchLength?.message} {...register('patchLength')} />
         <PrimaryAction onClick={() => void submit()}>Save conditions</PrimaryAction>
       </form>
