@@ -39,17 +39,43 @@ export function parseOrThrow<S extends z.ZodType>(schema: S, input: unknown, sta
 }
 
 /** Query-string parameters as a plain object for zod. */
-export const searchParamsOf = (request: Request) => filledParams(Object.fromEntries(new URL(request.url).searchParams));
+export const searchParamsOf = (request: Request) => withoutNul(filledParams(Object.fromEntries(new URL(request.url).searchParams)));
 
 /** The JSON body of a request; a body that is not JSON is a 400, never a 500. */
 export async function bodyOf(request: Request): Promise<unknown> {
   const text = await request.text();
   if (!text.trim()) throw new AppError(400, 'Send a JSON body.');
+  let body: unknown;
   try {
-    return JSON.parse(text);
+    body = JSON.parse(text);
   } catch {
     throw new AppError(400, 'The body is not valid JSON.');
   }
+  return withoutNul(body);
+}
+
+/**
+ * The JSON body, or `undefined` when it is missing or unreadable (for handlers whose validation names the
+ * missing fields itself). Text with a NUL character is still a 400.
+ */
+export async function lenientBodyOf(request: Request): Promise<unknown> {
+  const body: unknown = await request.json().catch(() => undefined);
+  return withoutNul(body);
+}
+
+/**
+ * PostgreSQL text cannot hold U+0000: a string carrying one would fail in the database as a 500. Refused here,
+ * at the edge, for every key and value of a JSON body.
+ */
+export function withoutNul<T>(value: T): T {
+  const hasNul = (v: unknown): boolean => {
+    if (typeof v === 'string') return v.includes('\u0000');
+    if (Array.isArray(v)) return v.some(hasNul);
+    if (v && typeof v === 'object') return Object.entries(v).some(([key, item]) => key.includes('\u0000') || hasNul(item));
+    return false;
+  };
+  if (hasNul(value)) throw new AppError(400, 'Text may not contain the NUL character (U+0000).');
+  return value;
 }
 
 /** The `[id]` of a dynamic route; a malformed id cannot name a row of this company, so it is a plain 404. */

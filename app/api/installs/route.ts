@@ -4,7 +4,7 @@ import { csvResponse, toCsv } from '@/lib/csv';
 import { createInstall, type InstallRow } from '@/lib/data/installs';
 import { listInstalls } from '@/lib/data/reviews';
 import { label } from '@/lib/domain';
-import { handle, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/http';
+import { handle, lenientBodyOf, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/http';
 import { createInstallSchema } from '@/lib/validation/install-events';
 import { installListQuerySchema } from '@/lib/validation/reviews';
 
@@ -35,7 +35,7 @@ export const GET = handle(async (request: Request) => {
 /** Starts an install; a retried create (same id and repair) answers 200 with the first one. */
 export const POST = handle(async (request: Request) => {
   const user = await requireUser();
-  const input = parseOrThrow(createInstallSchema, await request.json().catch(() => undefined));
+  const input = parseOrThrow(createInstallSchema, await lenientBodyOf(request));
   const { install, created } = await createInstall(user, input);
   return NextResponse.json({ install } satisfies CreateInstallResponse, { status: created ? 201 : 200 });
 });

@@ -3,7 +3,7 @@ import { requireUser } from '@/lib/auth/session';
 import { recordEvent } from '@/lib/data/install-events';
 import type { InstallEventRow } from '@/lib/data/installs';
 import { notFound } from '@/lib/errors';
-import { handle } from '@/lib/http';
+import { handle, lenientBodyOf } from '@/lib/http';
 import { uuidSchema } from '@/lib/validation/common';
 
 export type RecordEventResponse = { event: InstallEventRow };
@@ -14,7 +14,7 @@ export const POST = handle(async (request: Request, { params }: { params: Promis
   const { id } = await params;
   if (!uuidSchema.safeParse(id).success) throw notFound('Install');
   // Unreadable JSON is validated like an empty body: a 400 with the fields it lacks.
-  const body: unknown = await request.json().catch(() => undefined);
+  const body = await lenientBodyOf(request);
   const { event, created } = await recordEvent(user, id, body);
   return NextResponse.json({ event } satisfies RecordEventResponse, { status: created ? 201 : 200 });
 });
