@@ -1,10 +1,25 @@
 import 'server-only';
 import type Stripe from 'stripe';
+import { z } from 'zod';
 import { UniqueConstraintError } from 'sequelize';
 import { AuditEntry, Customer, Invoice, Job, PaymentEvent } from '@/models';
 import { sequelize } from '@/lib/db';
 import { AppError } from '@/lib/errors';
 import { stripeClient } from '@/lib/payments/stripe';
+
+const text = (max: number) => z.string().max(max).refine((value) => !value.includes('\u0000'));
+
+/** The fields of a completed checkout session we read, as our columns can hold them. */
+const completedSessionSchema = z.object({
+  eventId: text(255).min(1),
+  session: z.object({
+    id: text(255).nullish(),
+    payment_status: z.string().nullish(),
+    amount_total: z.number().int().min(0).max(2_147_483_647).nullish(),
+    currency: text(10).nullish(),
+    metadata: z.object({ invoiceId: z.uuid(), companyId: z.uuid() }),
+  }),
+});
 
 /**
  * Opens a hosted checkout for the job's issued invoice and answers the URL to send the customer to.
@@ -40,16 +55,18 @@ export type PaymentOutcome = 'paid' | 'duplicate' | 'ignored' | 'mismatch';
  */
 export async function applyPaymentEvent(event: Stripe.Event): Promise<PaymentOutcome> {
   if (event.type !== 'checkout.session.completed') return 'ignored';
-  const session = event.data.object as Stripe.Checkout.Session;
-  const invoiceId = session.metadata?.invoiceId;
-  const companyId = session.metadata?.companyId;
-  if (!invoiceId || !companyId || session.payment_status !== 'paid') return 'ignored';
+  // Signed is not well-formed: a session whose fields do not fit our columns is ignored, never a 500.
+  const parsed = completedSessionSchema.safeParse({ eventId: event.id, session: event.data?.object });
+  if (!parsed.success) return 'ignored';
+  const { eventId, session } = parsed.data;
+  const { invoiceId, companyId } = session.metadata;
+  if (session.payment_status !== 'paid') return 'ignored';
   try {
     return await sequelize.transaction(async (transaction) => {
       const invoice = await Invoice.findOne({ where: { id: invoiceId, companyId }, transaction, lock: transaction.LOCK.UPDATE });
       if (!invoice) return 'ignored';
       await PaymentEvent.create(
-        { companyId, invoiceId, providerEventId: event.id, type: event.type, amountCents: session.amount_total ?? null, payload: { session: session.id, currency: session.currency } },
+        { companyId, invoiceId, providerEventId: eventId, type: event.type, amountCents: session.amount_total ?? null, payload: { session: session.id, currency: session.currency } },
         { transaction },
       );
       const matches = session.amount_total === invoice.totalCents && session.currency === invoice.currency && invoice.status === 'issued';
