@@ -17,11 +17,37 @@ export function handle<Args extends unknown[]>(fn: (...args: Args) => Promise<Re
       if (error instanceof AppError) {
         return NextResponse.json({ error: { message: error.message, ...(error.fields ? { fields: error.fields } : {}) } }, { status: error.status });
       }
+      const refused = databaseRefusal(error);
+      if (refused) {
+        // The database's own constraints caught what validation let through: still the client's input, so a 4xx
+        // (the transaction rolled back), logged so the missing check gets written.
+        console.warn('database refused input:', (error as Error).message);
+        return NextResponse.json({ error: { message: refused.message } }, { status: refused.status });
+      }
       const requestId = randomUUID();
       console.error(`[${requestId}]`, error);
       return NextResponse.json({ error: { message: 'Something went wrong on our side.', requestId } }, { status: 500 });
     }
   };
+}
+
+/** PostgreSQL error classes that mean "this input does not fit", by SQLSTATE (PostgreSQL manual, Appendix A). */
+const INPUT_ERRORS: Record<string, { status: number; message: string }> = {
+  '23514': { status: 422, message: 'Those values do not fit together: check the related fields.' },
+  '23505': { status: 409, message: 'A record with those details already exists.' },
+  '23503': { status: 422, message: 'That refers to a record that does not exist.' },
+  '23502': { status: 400, message: 'A required value is missing.' },
+  '22001': { status: 400, message: 'A text is too long.' },
+  '22003': { status: 400, message: 'A number is out of range.' },
+  '22007': { status: 400, message: 'A date or time is not valid.' },
+  '22008': { status: 400, message: 'A date or time is out of range.' },
+  '22021': { status: 400, message: 'A text holds a character that cannot be stored.' },
+  '22P02': { status: 400, message: 'A value has the wrong form.' },
+};
+
+function databaseRefusal(error: unknown) {
+  const code = (error as { parent?: { code?: unknown }; original?: { code?: unknown } } | null)?.parent?.code;
+  return typeof code === 'string' ? INPUT_ERRORS[code] : undefined;
 }
 
 /** Parses input with a zod schema or throws a 400 with the message of each field. */
