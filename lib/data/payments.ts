@@ -54,7 +54,8 @@ export type PaymentOutcome = 'paid' | 'duplicate' | 'ignored' | 'mismatch';
  * currency match; each event id is applied once (a replayed webhook changes nothing).
  */
 export async function applyPaymentEvent(event: Stripe.Event): Promise<PaymentOutcome> {
-  if (event.type !== 'checkout.session.completed') return 'ignored';
+  // A signed body is still any JSON (even `null`): only an object with the expected type is read.
+  if (event?.type !== 'checkout.session.completed') return 'ignored';
   // Signed is not well-formed: a session whose fields do not fit our columns is ignored, never a 500.
   const parsed = completedSessionSchema.safeParse({ eventId: event.id, session: event.data?.object });
   if (!parsed.success) return 'ignored';
