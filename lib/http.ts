@@ -18,11 +18,37 @@ export function handle<Args extends unknown[]>(fn: (...args: Args) => Promise<Re
       if (error instanceof AppError) {
         return NextResponse.json({ error: { message: error.message, ...(error.fields ? { fields: error.fields } : {}) } }, { status: error.status });
       }
+      const refused = databaseRefusal(error);
+      if (refused) {
+        // The database's own constraints caught what validation let through: still the client's input, so a 4xx
+        // (the transaction rolled back), logged so the missing check gets written.
+        console.warn('database refused input:', (error as Error).message);
+        return NextResponse.json({ error: { message: refused.message } }, { status: refused.status });
+      }
       const requestId = randomUUID();
       console.error(`[${requestId}]`, error);
       return NextResponse.json({ error: { message: 'Something went wrong on our side.', requestId } }, { status: 500 });
     }
   };
+}
+
+/** PostgreSQL error classes that mean "this input does not fit", by SQLSTATE (PostgreSQL manual, Appendix A). */
+const INPUT_ERRORS: Record<string, { status: number; message: string }> = {
+  '23514': { status: 422, message: 'Those values do not fit together: check the related fields.' },
+  '23505': { status: 409, message: 'A record with those details already exists.' },
+  '23503': { status: 422, message: 'That refers to a record that does not exist.' },
+  '23502': { status: 400, message: 'A required value is missing.' },
+  '22001': { status: 400, message: 'A text is too long.' },
+  '22003': { status: 400, message: 'A number is out of range.' },
+  '22007': { status: 400, message: 'A date or time is not valid.' },
+  '22008': { status: 400, message: 'A date or time is out of range.' },
+  '22021': { status: 400, message: 'A text holds a character that cannot be stored.' },
+  '22P02': { status: 400, message: 'A value has the wrong form.' },
+};
+
+function databaseRefusal(error: unknown) {
+  const code = (error as { parent?: { code?: unknown }; original?: { code?: unknown } } | null)?.parent?.code;
+  return typeof code === 'string' ? INPUT_ERRORS[code] : undefined;
 }
 
 /** Parses input with a zod schema or throws a 400 with the message of each field. */
@@ -40,7 +66,7 @@ export function parseOrThrow<S extends z.ZodType>(schema: S, input: unknown, sta
 }
 
 /** Query-string parameters as a plain object for zod. */
-export const searchParamsOf = (request: Request) => filledParams(Object.fromEntries(new URL(request.url).searchParams));
+export const searchParamsOf = (request: Request) => withoutNul(filledParams(Object.fromEntries(new URL(request.url).searchParams)));
 
 /**
  * The body as text, counting bytes as they arrive: over `limit` is a 413 and reading stops, so a body
@@ -76,14 +102,38 @@ export const isJsonRequest = (request: Request) => /^application\/json\s*(;|$)/i
  * (a cross-site form can post text/plain, never JSON), over 1 MB is a 413, unparsable is a 400 — never a 500.
  */
 export async function bodyOf(request: Request): Promise<unknown> {
+  const body = await optionalBodyOf(request);
+  if (body === undefined) throw new AppError(400, 'Send a JSON body.');
+  return body;
+}
+
+/** The same as bodyOf, except that an empty body is `undefined` (for routes whose body is optional). */
+export async function optionalBodyOf(request: Request): Promise<unknown> {
   const text = await readBodyText(request);
-  if (!text.trim()) throw new AppError(400, 'Send a JSON body.');
+  if (!text.trim()) return undefined;
   if (!isJsonRequest(request)) throw new AppError(415, 'Send the body as application/json.');
+  let body: unknown;
   try {
-    return JSON.parse(text);
+    body = JSON.parse(text);
   } catch {
     throw new AppError(400, 'The body is not valid JSON.');
   }
+  return withoutNul(body);
+}
+
+/**
+ * PostgreSQL text cannot hold U+0000: a string carrying one would fail in the database as a 500. Refused here,
+ * at the edge, for every key and value of a JSON body.
+ */
+export function withoutNul<T>(value: T): T {
+  const hasNul = (v: unknown): boolean => {
+    if (typeof v === 'string') return v.includes('\u0000');
+    if (Array.isArray(v)) return v.some(hasNul);
+    if (v && typeof v === 'object') return Object.entries(v).some(([key, item]) => key.includes('\u0000') || hasNul(item));
+    return false;
+  };
+  if (hasNul(value)) throw new AppError(400, 'Text may not contain the NUL character (U+0000).');
+  return value;
 }
 
 /** The same as bodyOf, except that a missing or unparsable body is `undefined` (for routes that validate it as empty). */
@@ -91,11 +141,14 @@ export async function bodyOrUndefined(request: Request): Promise<unknown> {
   const text = await readBodyText(request);
   if (!text.trim()) return undefined;
   if (!isJsonRequest(request)) throw new AppError(415, 'Send the body as application/json.');
+  let body: unknown;
   try {
-    return JSON.parse(text);
+    body = JSON.parse(text);
   } catch {
     return undefined;
   }
+  // Text with a NUL character is still a 400.
+  return withoutNul(body);
 }
 
 /** The `[id]` of a dynamic route; a malformed id cannot name a row of this company, so it is a plain 404. */

@@ -3,6 +3,7 @@ import { NextResponse } from 'next/server';
 import type { z } from 'zod';
 import { requireUser, type SessionUser } from '@/lib/auth/session';
 import { csvResponse, toCsv, type CsvColumn } from '@/lib/csv';
+import { ownRowId, type OwnRowKind } from '@/lib/data/access';
 import type { Page } from '@/lib/data/list';
 import { bodyOf, handle, idOf, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/http';
 
@@ -40,6 +41,8 @@ export function settingsCollection<Q, I, Row>(options: {
 /** GET, PATCH (partial, strict) and DELETE (archive when in use, delete otherwise) of one settings record. */
 export function settingsRecord<P>(options: {
   what: string;
+  /** The row kind `[id]` names: checked as the company's before the body is read. */
+  kind: OwnRowKind;
   patchSchema: z.ZodType<P>;
   get: (user: SessionUser, id: string) => Promise<unknown>;
   update: (user: SessionUser, id: string, patch: P) => Promise<unknown>;
@@ -52,7 +55,7 @@ export function settingsRecord<P>(options: {
     }),
     PATCH: handle(async (request: Request, { params }: Context) => {
       const user = await requireUser(['admin']);
-      const id = await idOf(params, options.what);
+      const id = await ownRowId(user, options.kind, params, options.what);
       const patch = parseOrThrow(options.patchSchema, await bodyOf(request));
       return NextResponse.json(await options.update(user, id, patch));
     }),

@@ -1,5 +1,6 @@
 import 'server-only';
 import type Stripe from 'stripe';
+import { z } from 'zod';
 import { UniqueConstraintError, type Transaction } from 'sequelize';
 import { AuditEntry, Customer, Invoice, Job, PaymentEvent } from '@/models';
 import { sequelize } from '@/lib/db';
@@ -7,6 +8,20 @@ import type { PaymentProblem } from '@/lib/domain';
 import { AppError } from '@/lib/errors';
 import { formatMoney } from '@/lib/invoice/money';
 import { stripeClient } from '@/lib/payments/stripe';
+
+const text = (max: number) => z.string().max(max).refine((value) => !value.includes('\u0000'));
+
+/** The fields of a completed checkout session we read, as our columns can hold them. */
+const completedSessionSchema = z.object({
+  eventId: text(255).min(1),
+  session: z.object({
+    id: text(255).nullish(),
+    payment_status: z.string().nullish(),
+    amount_total: z.number().int().min(0).max(2_147_483_647).nullish(),
+    currency: text(10).nullish(),
+    metadata: z.object({ invoiceId: z.uuid(), companyId: z.uuid() }),
+  }),
+});
 
 /**
  * Sends the customer to a hosted checkout for the job's issued invoice and answers its URL. One open
@@ -51,18 +66,21 @@ export type PaymentOutcome = 'paid' | 'duplicate' | 'ignored' | 'mismatch';
  * open) is recorded with its problem, raises the invoice's payment alert and goes into the job's history.
  */
 export async function applyPaymentEvent(event: Stripe.Event): Promise<PaymentOutcome> {
-  if (event.type !== 'checkout.session.completed') return 'ignored';
-  const session = event.data.object as Stripe.Checkout.Session;
-  const invoiceId = session.metadata?.invoiceId;
-  const companyId = session.metadata?.companyId;
-  if (!invoiceId || !companyId || session.payment_status !== 'paid') return 'ignored';
+  // A signed body is still any JSON (even `null`): only an object with the expected type is read.
+  if (event?.type !== 'checkout.session.completed') return 'ignored';
+  // Signed is not well-formed: a session whose fields do not fit our columns is ignored, never a 500.
+  const parsed = completedSessionSchema.safeParse({ eventId: event.id, session: event.data?.object });
+  if (!parsed.success) return 'ignored';
+  const { eventId, session } = parsed.data;
+  const { invoiceId, companyId } = session.metadata;
+  if (session.payment_status !== 'paid') return 'ignored';
   try {
     return await sequelize.transaction(async (transaction) => {
       const invoice = await Invoice.findOne({ where: { id: invoiceId, companyId }, transaction, lock: transaction.LOCK.UPDATE });
       if (!invoice) return 'ignored';
       const problem = problemOf(invoice, session);
       await PaymentEvent.create(
-        { companyId, invoiceId, providerEventId: event.id, type: event.type, amountCents: session.amount_total ?? null, problem, payload: { session: session.id, currency: session.currency } },
+        { companyId, invoiceId, providerEventId: eventId, type: event.type, amountCents: session.amount_total ?? null, problem, payload: { session: session.id, currency: session.currency } },
         { transaction },
       );
       if (problem) {
@@ -83,7 +101,13 @@ export async function applyPaymentEvent(event: Stripe.Event): Promise<PaymentOut
 }
 
 /** What is wrong with applying this payment to this invoice, or null when it settles it. */
-export function problemOf(invoice: Pick<Invoice, 'status' | 'totalCents' | 'currency'>, session: Pick<Stripe.Checkout.Session, 'amount_total' | 'currency'>): PaymentProblem | null {
+/** The fields of a completed session that the webhook reads (checked by completedSessionSchema). */
+type PaidSession = z.infer<typeof completedSessionSchema>['session'];
+
+export function problemOf(
+  invoice: Pick<Invoice, 'status' | 'totalCents' | 'currency'>,
+  session: Pick<PaidSession, 'amount_total' | 'currency'>,
+): PaymentProblem | null {
   if (invoice.status === 'paid') return 'already_paid';
   if (invoice.status !== 'issued') return 'not_open';
   if (session.currency !== invoice.currency) return 'currency';
@@ -107,10 +131,10 @@ export function alertText(problem: PaymentProblem, invoice: Pick<Invoice, 'numbe
   }
 }
 
-async function raiseAlert(invoice: Invoice, problem: PaymentProblem, session: Stripe.Checkout.Session, transaction: Transaction) {
+async function raiseAlert(invoice: Invoice, problem: PaymentProblem, session: PaidSession, transaction: Transaction) {
   const text = alertText(problem, invoice, { amountCents: session.amount_total ?? null, currency: session.currency ?? null });
   await invoice.update({ paymentAlert: text, paymentAlertAt: new Date() }, { transaction });
-  const changes = { invoice: invoice.number, problem, amountCents: session.amount_total ?? null, currency: session.currency ?? null, session: session.id };
+  const changes = { invoice: invoice.number, problem, amountCents: session.amount_total ?? null, currency: session.currency ?? null, session: session.id ?? null };
   // In the job's history (the job page) and the invoice's own.
   for (const [entityType, entityId] of [['job', invoice.jobId], ['invoice', invoice.id]] as const) {
     await AuditEntry.create({ companyId: invoice.companyId, userId: null, action: 'payment_mismatch', entityType, entityId, changes, reason: text }, { transaction });

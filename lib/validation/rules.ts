@@ -26,7 +26,9 @@ export function throwProblems(problems: Problems) {
  */
 export function quantity({ min, max, scale, above = false, bounds }: { min: number; max: number; scale: number; above?: boolean; bounds: string }) {
   const base = z.number({ error: 'Enter a number' });
-  return (above ? base.gt(min, bounds) : base.min(min, bounds)).max(max, bounds).transform((value) => roundTo(value, scale));
+  const rounded = (above ? base.gt(min, bounds) : base.min(min, bounds)).max(max, bounds).transform((value) => roundTo(value, scale));
+  // "More than min" holds for what is stored: 0.000001 passes `gt(0)` but rounds to 0 in the column.
+  return above ? rounded.refine((value) => value > min, bounds) : rounded;
 }
 
 /** Rounds to `scale` decimals (0 for whole numbers), as a NUMERIC(p, scale) column would store it. */

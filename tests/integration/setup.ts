@@ -1,12 +1,12 @@
 import { afterAll, vi } from 'vitest';
-import { cookieJar } from './helpers/session';
+import { currentJar } from './helpers/session';
 
 // Route handlers read the session cookie through next/headers; outside a Next request the
 // tests hand it a jar they control. Everything after the cookie (JWT decoding, the user row) is real.
 vi.mock('next/headers', () => ({
   cookies: async () => ({
-    get: (name: string) => (cookieJar.has(name) ? { name, value: cookieJar.get(name) } : undefined),
-    getAll: () => [...cookieJar].map(([name, value]) => ({ name, value })),
+    get: (name: string) => (currentJar().has(name) ? { name, value: currentJar().get(name) } : undefined),
+    getAll: () => [...currentJar()].map(([name, value]) => ({ name, value })),
   }),
   headers: async () => new Headers(),
 }));

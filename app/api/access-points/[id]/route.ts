@@ -1,4 +1,5 @@
 import { NextResponse } from 'next/server';
+import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { DESK_ROLES } from '@/lib/domain';
 import { deleteAccessPoint, updateAccessPoint } from '@/lib/data/access-points';
@@ -9,7 +10,7 @@ type Context = { params: Promise<{ id: string }> };
 
 export const PATCH = handle(async (request: Request, { params }: Context) => {
   const user = await requireUser(DESK_ROLES);
-  const id = await idOf(params, 'Access point');
+  const id = await ownRowId(user, 'accessPoint', params, 'Access point');
   const patch = parseOrThrow(accessPointPatchSchema, await bodyOf(request));
   return NextResponse.json(await updateAccessPoint(user, id, patch));
 });

@@ -5,7 +5,7 @@ import { checklistTemplatePatchSchema } from '@/lib/validation/checklist-templat
 export type ChecklistTemplateResponse = Awaited<ReturnType<typeof getChecklistTemplate>>;
 
 /** PATCH with `items` replaces the whole ordered list; items keep the ids they come with. */
-const routes = settingsRecord({ what: 'Check-list template', patchSchema: checklistTemplatePatchSchema, get: getChecklistTemplate, update: updateChecklistTemplate, archive: archiveChecklistTemplate });
+const routes = settingsRecord({ kind: 'checklistTemplate', what: 'Check-list template', patchSchema: checklistTemplatePatchSchema, get: getChecklistTemplate, update: updateChecklistTemplate, archive: archiveChecklistTemplate });
 export const GET = routes.GET;
 export const PATCH = routes.PATCH;
 /** Makes a template past installs used inactive, deletes an unused one. */

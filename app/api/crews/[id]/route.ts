@@ -1,4 +1,5 @@
 import { NextResponse } from 'next/server';
+import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { archiveCrew, getCrew, updateCrew } from '@/lib/data/crews';
 import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/http';
@@ -15,7 +16,7 @@ export const GET = handle(async (_request: Request, { params }: Context) => {
 
 export const PATCH = handle(async (request: Request, { params }: Context) => {
   const user = await requireUser(['admin']);
-  const id = await idOf(params, 'Crew');
+  const id = await ownRowId(user, 'crew', params, 'Crew');
   const patch = parseOrThrow(crewPatchSchema, await bodyOf(request));
   return NextResponse.json(await updateCrew(user, id, patch));
 });

@@ -1,4 +1,5 @@
 import { NextResponse } from 'next/server';
+import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { DESK_ROLES } from '@/lib/domain';
 import { archiveCustomer, getCustomer, updateCustomer } from '@/lib/data/customers';
@@ -14,7 +15,7 @@ export const GET = handle(async (_request: Request, { params }: Context) => {
 
 export const PATCH = handle(async (request: Request, { params }: Context) => {
   const user = await requireUser(DESK_ROLES);
-  const id = await idOf(params, 'Customer');
+  const id = await ownRowId(user, 'customer', params, 'Customer');
   const patch = parseOrThrow(customerPatchSchema, await bodyOf(request));
   return NextResponse.json(await updateCustomer(user, id, patch));
 });

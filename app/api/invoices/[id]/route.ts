@@ -1,4 +1,5 @@
 import { NextResponse } from 'next/server';
+import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { getInvoice, updateInvoice } from '@/lib/data/invoices';
 import { DESK_ROLES } from '@/lib/domain';
@@ -14,6 +15,6 @@ export const GET = handle(async (_request: Request, { params }: Context) => {
 
 export const PATCH = handle(async (request: Request, { params }: Context) => {
   const user = await requireUser(DESK_ROLES);
-  const id = await idOf(params, 'Invoice');
+  const id = await ownRowId(user, 'invoice', params, 'Invoice');
   return NextResponse.json(await updateInvoice(user, id, parseOrThrow(invoicePatchSchema, await bodyOf(request))));
 });

@@ -1,4 +1,5 @@
 import { NextResponse } from 'next/server';
+import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { archiveJob, findJob, updateJob } from '@/lib/data/jobs';
 import { DESK_ROLES } from '@/lib/domain';
@@ -15,7 +16,7 @@ export const GET = handle(async (_request: Request, { params }: Context) => {
 
 export const PATCH = handle(async (request: Request, { params }: Context) => {
   const user = await requireUser(DESK_ROLES);
-  const id = await idOf(params, 'Job');
+  const id = await ownRowId(user, 'job', params, 'Job');
   const patch = parseOrThrow(jobPatchSchema, await bodyOf(request));
   return NextResponse.json(await updateJob(user, id, patch));
 });

@@ -4,7 +4,7 @@ import { packerPatchSchema } from '@/lib/validation/packers';
 
 export type PackerResponse = Awaited<ReturnType<typeof getPacker>>;
 
-const routes = settingsRecord({ what: 'Packer', patchSchema: packerPatchSchema, get: getPacker, update: updatePacker, archive: archivePacker });
+const routes = settingsRecord({ kind: 'packer', what: 'Packer', patchSchema: packerPatchSchema, get: getPacker, update: updatePacker, archive: archivePacker });
 export const GET = routes.GET;
 export const PATCH = routes.PATCH;
 /** Archives a packer an install used, deletes an unused one. */

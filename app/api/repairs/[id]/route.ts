@@ -1,4 +1,5 @@
 import { NextResponse } from 'next/server';
+import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { getRepair, removeRepair, updateRepair } from '@/lib/data/repairs';
 import { DESK_ROLES } from '@/lib/domain';
@@ -16,7 +17,7 @@ export const GET = handle(async (_request: Request, { params }: Context) => {
 /** Edits the defect, saves the plan (patch length, packer, thickness, groundwater, ovality), cancels or restores. */
 export const PATCH = handle(async (request: Request, { params }: Context) => {
   const user = await requireUser(DESK_ROLES);
-  const id = await idOf(params, 'Repair');
+  const id = await ownRowId(user, 'repair', params, 'Repair');
   const patch = parseOrThrow(repairPatchSchema, await bodyOf(request));
   return NextResponse.json(await updateRepair(user, id, patch));
 });

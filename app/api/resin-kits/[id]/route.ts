@@ -5,7 +5,7 @@ import { resinKitPatchSchema } from '@/lib/validation/resin-kits';
 export type ResinKitResponse = Awaited<ReturnType<typeof getResinKit>>;
 
 /** GET answers the kit with the installs that used it. */
-const routes = settingsRecord({ what: 'Resin kit', patchSchema: resinKitPatchSchema, get: getResinKit, update: updateResinKit, archive: archiveResinKit });
+const routes = settingsRecord({ kind: 'resinKit', what: 'Resin kit', patchSchema: resinKitPatchSchema, get: getResinKit, update: updateResinKit, archive: archiveResinKit });
 export const GET = routes.GET;
 export const PATCH = routes.PATCH;
 /** Archives a kit an install used, deletes an unused one. */

@@ -4,7 +4,7 @@ import { resinSystemPatchSchema } from '@/lib/validation/resin-systems';
 
 export type ResinSystemResponse = Awaited<ReturnType<typeof getResinSystem>>;
 
-const routes = settingsRecord({ what: 'Resin system', patchSchema: resinSystemPatchSchema, get: getResinSystem, update: updateResinSystem, archive: archiveResinSystem });
+const routes = settingsRecord({ kind: 'resinSystem', what: 'Resin system', patchSchema: resinSystemPatchSchema, get: getResinSystem, update: updateResinSystem, archive: archiveResinSystem });
 export const GET = routes.GET;
 export const PATCH = routes.PATCH;
 /** Archives a resin system that kits or installs name, deletes an unused one. */

@@ -1,4 +1,5 @@
 import { NextResponse } from 'next/server';
+import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { DESK_ROLES } from '@/lib/domain';
 import { archiveSite, getSite, updateSite } from '@/lib/data/sites';
@@ -17,7 +18,7 @@ export const GET = handle(async (_request: Request, { params }: Context) => {
 
 export const PATCH = handle(async (request: Request, { params }: Context) => {
   const user = await requireUser(DESK_ROLES);
-  const id = await idOf(params, 'Site');
+  const id = await ownRowId(user, 'site', params, 'Site');
   const patch = parseOrThrow(sitePatchSchema, await bodyOf(request));
   return NextResponse.json(await updateSite(user, id, patch));
 });

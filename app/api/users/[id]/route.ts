@@ -1,4 +1,5 @@
 import { NextResponse } from 'next/server';
+import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { getUser, updateUser } from '@/lib/data/users';
 import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/http';
@@ -16,7 +17,7 @@ export const GET = handle(async (_request: Request, { params }: Context) => {
 /** Rename, change role, `active: false` to deactivate (sessions end at once), `active: true` to reactivate. */
 export const PATCH = handle(async (request: Request, { params }: Context) => {
   const user = await requireUser(['admin']);
-  const id = await idOf(params, 'User');
+  const id = await ownRowId(user, 'user', params, 'User');
   const patch = parseOrThrow(userPatchSchema, await bodyOf(request));
   return NextResponse.json(await updateUser(user, id, patch));
 });

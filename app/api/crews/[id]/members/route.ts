@@ -1,7 +1,8 @@
 import { NextResponse } from 'next/server';
+import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { setCrewMembers } from '@/lib/data/crews';
-import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/http';
+import { bodyOf, handle, parseOrThrow } from '@/lib/http';
 import { crewMembersSchema } from '@/lib/validation/crews';
 
 type Context = { params: Promise<{ id: string }> };
@@ -9,7 +10,7 @@ type Context = { params: Promise<{ id: string }> };
 /** Replaces the crew's members with `{ userIds }` (foremen and technicians of the company only). */
 export const PUT = handle(async (request: Request, { params }: Context) => {
   const user = await requireUser(['admin']);
-  const id = await idOf(params, 'Crew');
+  const id = await ownRowId(user, 'crew', params, 'Crew');
   const { userIds } = parseOrThrow(crewMembersSchema, await bodyOf(request));
   return NextResponse.json(await setCrewMembers(user, id, userIds));
 });

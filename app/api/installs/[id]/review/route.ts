@@ -1,8 +1,9 @@
 import { NextResponse } from 'next/server';
+import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { reviewInstall } from '@/lib/data/reviews';
 import { DESK_ROLES } from '@/lib/domain';
-import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/http';
+import { bodyOf, handle, parseOrThrow } from '@/lib/http';
 import { reviewDecisionSchema } from '@/lib/validation/reviews';
 
 export type ReviewInstallResponse = Awaited<ReturnType<typeof reviewInstall>>;
@@ -10,7 +11,7 @@ export type ReviewInstallResponse = Awaited<ReturnType<typeof reviewInstall>>;
 /** The office approves a signed-off install or sends it back with a comment (409 unless it awaits review). */
 export const POST = handle(async (request: Request, { params }: { params: Promise<{ id: string }> }) => {
   const user = await requireUser(DESK_ROLES);
-  const id = await idOf(params, 'Install');
+  const id = await ownRowId(user, 'install', params, 'Install');
   const input = parseOrThrow(reviewDecisionSchema, await bodyOf(request));
   return NextResponse.json(await reviewInstall(user, id, input), { status: 201 });
 });

@@ -1,4 +1,5 @@
 import { NextResponse } from 'next/server';
+import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { requestReportSend } from '@/lib/data/report-sends';
 import { DESK_ROLES } from '@/lib/domain';
@@ -13,7 +14,7 @@ export type ReportSendResponse = Awaited<ReturnType<typeof requestReportSend>>;
 /** Queues the repair report e-mail: 202 with the send-log row; the worker does the sending. */
 export const POST = handle(async (request: Request, { params }: { params: Promise<{ id: string }> }) => {
   const user = await requireUser(DESK_ROLES);
-  const id = await idOf(params, 'Job');
+  const id = await ownRowId(user, 'job', params, 'Job');
   const input = parseOrThrow(sendReportSchema, await bodyOf(request));
   return NextResponse.json(await requestReportSend(user, id, input), { status: 202 });
 });

@@ -1,4 +1,5 @@
 import { NextResponse } from 'next/server';
+import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { scheduleJob, unscheduleJob } from '@/lib/data/schedule';
 import { DESK_ROLES } from '@/lib/domain';
@@ -12,7 +13,7 @@ export type ScheduleJobResponse = Awaited<ReturnType<typeof scheduleJob>>;
 /** Puts the job on a crew's day: `{ crewId, date }`; the answer says when the day is now over capacity. */
 export const PUT = handle(async (request: Request, { params }: Context) => {
   const user = await requireUser(DESK_ROLES);
-  const id = await idOf(params, 'Job');
+  const id = await ownRowId(user, 'job', params, 'Job');
   const input = parseOrThrow(scheduleInputSchema, await bodyOf(request));
   return NextResponse.json(await scheduleJob(user, id, input));
 });

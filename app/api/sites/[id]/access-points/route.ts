@@ -1,4 +1,5 @@
 import { NextResponse } from 'next/server';
+import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { DESK_ROLES } from '@/lib/domain';
 import { createAccessPoint, listAccessPoints } from '@/lib/data/access-points';
@@ -16,7 +17,7 @@ export const GET = handle(async (_request: Request, { params }: Context) => {
 /** A new access point on the site; 409 when its label is already used there. */
 export const POST = handle(async (request: Request, { params }: Context) => {
   const user = await requireUser(DESK_ROLES);
-  const siteId = await idOf(params, 'Site');
+  const siteId = await ownRowId(user, 'site', params, 'Site');
   const input = parseOrThrow(accessPointInputSchema, await bodyOf(request));
   return NextResponse.json(await createAccessPoint(user, siteId, input), { status: 201 });
 });
