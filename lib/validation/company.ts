@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { UNIT_SYSTEMS } from '@/lib/domain';
-import { lengthFromSi, lengthToSi, type UnitSystem } from '@/lib/units';
+import { formatLength, lengthFromSi, lengthToSi, type UnitSystem } from '@/lib/units';
 
 // Intl lists canonical zone names only and leaves out UTC, the column's default, so it is added here.
 let zones: Set<string> | undefined;
@@ -45,7 +45,8 @@ export type CompanyPatch = z.output<typeof companyPatchSchema>;
  * The settings form: the overlap in the company's units and the reserve in per cent; the form converts
  * them with lib/units and sends companyPatchSchema's fields, which the server checks again.
  */
-export const companyFormSchema = z.object({
+export const companyFormSchema = z
+  .object({
   name: companyFields.name,
   timeZone: z.string().min(1, 'Pick a time zone'),
   unitSystem: companyFields.unitSystem,
@@ -58,7 +59,13 @@ export const companyFormSchema = z.object({
     .number({ error: 'Enter the hold reserve as a number' })
     .min(0, 'The hold reserve cannot be negative')
     .max(MAX_HOLD_RESERVE * 100, `At most ${MAX_HOLD_RESERVE * 100} %`),
-});
+  })
+  // The overlap's upper bound, said in the unit system chosen in the same form (never mm to an imperial company).
+  .superRefine((values, ctx) => {
+    if (lengthToSi(values.minOverlapPerEnd, values.unitSystem) > MAX_OVERLAP_MM) {
+      ctx.addIssue({ code: 'custom', path: ['minOverlapPerEnd'], message: `At most ${formatLength(MAX_OVERLAP_MM, values.unitSystem, 'short', { decimals: 0 })}` });
+    }
+  });
 export type CompanyFormValues = z.infer<typeof companyFormSchema>;
 
 type StoredSettings = { name: string; timeZone: string; unitSystem: UnitSystem; minOverlapPerEndMm: number; workingWindowSafetyMargin: number; holdReserve: number };

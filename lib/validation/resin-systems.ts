@@ -2,36 +2,54 @@ import { z } from 'zod';
 import { MAX_TEMP_C, MIN_TEMP_C } from '@/lib/cure';
 import { RESIN_CHEMISTRIES, SENSITIVITY_KINDS } from '@/lib/domain';
 import { DEFAULT_EXCESS_PCT, DEFAULT_RESIN_TO_FABRIC_RATIO } from '@/lib/sizing';
-import { temperatureDifferenceFromSi, temperatureDifferenceToSi, temperatureFromSi, temperatureToSi, type UnitSystem } from '@/lib/units';
+import {
+  formatTemperature,
+  temperatureDifferenceFromSi,
+  temperatureDifferenceToSi,
+  temperatureFromSi,
+  temperatureToSi,
+  type UnitSystem,
+} from '@/lib/units';
 import { listQuerySchema } from './list';
 import { addProblems, ifFinite, inCompanyUnits, quantity, roundTo, type Problems } from './rules';
 
 // Project limits. Temperatures: the range the cure clock models (lib/cure/limits.ts), −20…60 °C = −4…140 °F.
 // Times: a day of pot life, a week of hold, a month of full cure — past that it is a typo (minutes for hours).
 // Sensitivity: a doubling step of 1–50 °C, an activation energy of 1–300 kJ/mol (epoxies sit near 40–90, from memory).
-const TEMP_BOUNDS = `Between ${MIN_TEMP_C} and ${MAX_TEMP_C} °C (−4 and 140 °F)`;
-const temperature = () => quantity({ min: MIN_TEMP_C, max: MAX_TEMP_C, scale: 2, bounds: TEMP_BOUNDS });
+// Messages name the bounds in one unit system: the API's SI body reads °C; the desk form, the company's units.
+const temperature = (system: UnitSystem) =>
+  quantity({
+    min: MIN_TEMP_C,
+    max: MAX_TEMP_C,
+    scale: 2,
+    bounds: `Between ${formatTemperature(MIN_TEMP_C, system, { decimals: 0 })} and ${formatTemperature(MAX_TEMP_C, system, { decimals: 0 })}`,
+  });
+const doublingStep = (system: UnitSystem) => {
+  const step = (celsius: number) => `${roundTo(temperatureDifferenceFromSi(celsius, system), 1)} ${system === 'imperial' ? '°F' : '°C'}`;
+  return quantity({ min: 1, max: 50, scale: 2, bounds: `A step of ${step(1)} to ${step(50)}` });
+};
 const minutes = (max: number) => quantity({ min: 0, max, scale: 2, above: true, bounds: `More than 0 and at most ${max} minutes` });
 
 // No defaults here: a PATCH must leave out what it does not change.
-const resinSystemFields = {
+const fieldsIn = (system: UnitSystem) => ({
   name: z.string().trim().min(1, 'Enter the resin system’s name').max(120, 'At most 120 characters'),
   chemistry: z.enum(RESIN_CHEMISTRIES, { error: 'Pick a chemistry' }),
-  refTempC: temperature(),
+  refTempC: temperature(system),
   potLifeMin: minutes(1440),
   holdMin: minutes(10080),
   fullCureMin: minutes(43200),
-  minTempC: temperature(),
-  maxTempC: temperature(),
+  minTempC: temperature(system),
+  maxTempC: temperature(system),
   sensitivityKind: z.enum(SENSITIVITY_KINDS, { error: 'Pick how the times change with temperature' }),
-  doublingC: quantity({ min: 1, max: 50, scale: 2, bounds: 'A step of 1 to 50 °C (1.8 to 90 °F)' }).nullish(),
+  doublingC: doublingStep(system).nullish(),
   activationEnergyKj: quantity({ min: 1, max: 300, scale: 2, bounds: 'Between 1 and 300 kJ/mol' }).nullish(),
   // Resin quantity (lib/sizing): unit-free, so the same words serve every company.
   resinToFabricRatio: quantity({ min: 0, max: 5, scale: 2, above: true, bounds: 'More than 0 and at most 5 (1 = as much resin as fabric)' }),
   resinExcessPct: quantity({ min: 0, max: 100, scale: 1, bounds: 'From 0 to 100 %' }),
   // Minutes from mixing until the patch is on the packer (wet-out and loading); the tablet's default for the GO / NO-GO.
   prepMinutes: quantity({ min: 0, max: 240, scale: 2, bounds: 'From 0 to 240 minutes' }),
-};
+});
+const resinSystemFields = fieldsIn('metric');
 
 export type ResinSystemValues = {
   refTempC: number; potLifeMin: number; holdMin: number; fullCureMin: number; minTempC: number; maxTempC: number;
@@ -50,17 +68,22 @@ export function resinSystemProblems(v: ResinSystemValues): Problems {
   return problems;
 }
 
-/** A resin system as the admin enters it, in SI; POST /api/resin-systems and the form (after conversion) use it. */
-export const resinSystemInputSchema = z
-  .object({
-    ...resinSystemFields,
-    chemistry: resinSystemFields.chemistry.default('epoxy'),
-    sensitivityKind: resinSystemFields.sensitivityKind.default('doubling'),
-    resinToFabricRatio: resinSystemFields.resinToFabricRatio.default(DEFAULT_RESIN_TO_FABRIC_RATIO),
-    resinExcessPct: resinSystemFields.resinExcessPct.default(DEFAULT_EXCESS_PCT),
-    prepMinutes: resinSystemFields.prepMinutes.optional(),
-  })
-  .superRefine((values, ctx) => addProblems(ctx, resinSystemProblems(values)));
+/** A resin system as the admin enters it, in SI; messages in the given system (the form's), °C for the API. */
+const inputSchemaIn = (system: UnitSystem) => {
+  const fields = fieldsIn(system);
+  return z
+    .object({
+      ...fields,
+      chemistry: fields.chemistry.default('epoxy'),
+      sensitivityKind: fields.sensitivityKind.default('doubling'),
+      resinToFabricRatio: fields.resinToFabricRatio.default(DEFAULT_RESIN_TO_FABRIC_RATIO),
+      resinExcessPct: fields.resinExcessPct.default(DEFAULT_EXCESS_PCT),
+      prepMinutes: fields.prepMinutes.optional(),
+    })
+    .superRefine((values, ctx) => addProblems(ctx, resinSystemProblems(values)));
+};
+/** POST /api/resin-systems (SI) and, after conversion, the desk form. */
+export const resinSystemInputSchema = inputSchemaIn('metric');
 export type ResinSystemInput = z.output<typeof resinSystemInputSchema>;
 
 /** Partial; the cross-field rules run in lib/data on the record as it will be after the change. */
@@ -83,7 +106,7 @@ export type ResinSystemFormValues = {
 };
 
 export const resinSystemFormSchema = (system: UnitSystem) =>
-  inCompanyUnits<ResinSystemInput, ResinSystemFormValues>((v) => resinSystemToSi(v, system), resinSystemInputSchema);
+  inCompanyUnits<ResinSystemInput, ResinSystemFormValues>((v) => resinSystemToSi(v, system), inputSchemaIn(system));
 
 /** Entered values → SI body. Absolute temperatures take the 32 °F offset; the doubling step is a difference and does not. */
 export function resinSystemToSi(v: ResinSystemFormValues, system: UnitSystem) {

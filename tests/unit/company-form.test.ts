@@ -40,3 +40,18 @@ describe('company settings form ↔ API body', () => {
     expect(isKnownTimeZone('europe/berlin')).toBe(false);
   });
 });
+
+describe('messages in the company’s units', () => {
+  const stored = { name: 'Units Co', timeZone: 'UTC', minOverlapPerEndMm: 75, workingWindowSafetyMargin: 0.2, holdReserve: 0.1 };
+  const overlapMessage = (unitSystem: 'imperial' | 'metric', minOverlapPerEnd: number) => {
+    const result = companyFormSchema.safeParse({ ...companyToForm({ ...stored, unitSystem }), minOverlapPerEnd });
+    return result.success ? '' : result.error.issues.map((issue) => issue.message).join(' ');
+  };
+  it('an imperial company reads the overlap bound in inches, a metric one in millimetres', () => {
+    // 1000 mm = 39.37 in (NIST SP 811: 1 in = 25.4 mm exactly).
+    expect(overlapMessage('imperial', 40)).toMatch(/in\b/);
+    expect(overlapMessage('imperial', 40)).not.toMatch(/mm/);
+    expect(overlapMessage('metric', 1001)).toMatch(/1000 mm|1,000 mm/);
+    expect(overlapMessage('imperial', 39)).toBe('');
+  });
+});

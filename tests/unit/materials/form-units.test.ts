@@ -33,6 +33,21 @@ describe('resin system form in company units', () => {
     expect(hot.error!.issues.map((issue) => issue.path.join('.'))).toContain('maxTempC');
   });
 
+  it('names its bounds in the company’s units only: °F for imperial, °C for metric', () => {
+    const messages = (system: 'imperial' | 'metric', values: object) => {
+      const result = resinSystemFormSchema(system).safeParse({ ...resinImperial, ...values });
+      return result.success ? '' : result.error.issues.map((issue) => issue.message).join(' | ');
+    };
+    // −20…60 °C is −4…140 °F; a doubling step of 1…50 °C is 1.8…90 °F (NIST SP 811, intervals without the offset).
+    const imperial = messages('imperial', { maxTempC: 200, doublingC: 100 });
+    expect(imperial).toContain('140 °F');
+    expect(imperial).toContain('90 °F');
+    expect(imperial).not.toContain('°C');
+    const metric = messages('metric', { refTempC: 20, minTempC: 5, maxTempC: 90, doublingC: 60 });
+    expect(metric).toContain('60 °C');
+    expect(metric).not.toContain('°F');
+  });
+
   it('shows stored °C back in °F, the step as a difference', () => {
     const shown = resinSystemToForm({ name: 'x', chemistry: 'epoxy', refTempC: 20, potLifeMin: 30, holdMin: 90, fullCureMin: 240, minTempC: 5, maxTempC: 40, sensitivityKind: 'doubling', doublingC: 10, activationEnergyKj: null }, 'imperial');
     expect(shown).toMatchObject({ refTempC: 68, minTempC: 41, maxTempC: 104, doublingC: 18 });
