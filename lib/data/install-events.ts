@@ -1,7 +1,7 @@
 import 'server-only';
 import { Op, UniqueConstraintError, type Transaction } from 'sequelize';
 import type { z } from 'zod';
-import { AuditEntry, Install, InstallEvent, Job, Packer, Repair, ResinKit, sequelize } from '@/models';
+import { AuditEntry, Install, InstallEvent, Job, Packer, Repair, ResinKit, ResinSystem, sequelize } from '@/models';
 import type { SessionUser } from '@/lib/auth/session';
 import { AppError, forbidden } from '@/lib/errors';
 import { mayDecide } from '@/lib/install/access';
@@ -76,6 +76,7 @@ async function recordInTransaction(user: SessionUser, installId: string, body: P
   if (problem) throw new AppError(422, problem);
   if (target) checkCorrectedPayload(target.type, { ...target.payload, ...correctionChanges(body.payload) });
   if (body.type === 'conditions_recorded') await checkConditions(user, body.payload, today, t);
+  if (body.type === 'go_decision') await checkMakerHold(user, state, body.payload, t);
   if (target?.type === 'conditions_recorded') {
     const changes = correctionChanges(body.payload);
     // Correcting a temperature after the kit expired overnight is fine; choosing an expired kit is not.
@@ -174,6 +175,26 @@ async function checkConditions(user: SessionUser, conditions: Record<string, unk
   if (today !== null && kit.expiresOn < today) {
     throw new AppError(422, `Resin kit lot ${kit.lot} expired on ${kit.expiresOn}; choose another kit`, { 'payload.resinKitId': ['Expired kit'] });
   }
+}
+
+/**
+ * Going on with the pipe outside the resin's rated range leaves the clock without a hold of its own: the
+ * foreman's override must carry the hold time from the resin maker's sheet, which the countdown then uses.
+ */
+async function checkMakerHold(user: SessionUser, state: InstallState, payload: Record<string, unknown>, t: Transaction) {
+  const pipeTempC = state.conditions?.pipeTempC;
+  const goesOn = payload.go === true || typeof payload.overrideReason === 'string';
+  if (!goesOn || typeof payload.makerHoldMin === 'number' || typeof pipeTempC !== 'number') return;
+  const kit = await ResinKit.findOne({
+    where: { id: String(state.conditions?.resinKitId), companyId: user.companyId },
+    include: [{ model: ResinSystem, as: 'resinSystem', attributes: ['minTempC', 'maxTempC'] }],
+    transaction: t,
+  });
+  const resin = (kit as (ResinKit & { resinSystem?: ResinSystem }) | null)?.resinSystem;
+  if (!resin || (pipeTempC >= resin.minTempC && pipeTempC <= resin.maxTempC)) return;
+  throw new AppError(422, "The pipe is outside the resin's rated range: going on needs the hold time from the resin maker's sheet.", {
+    'payload.makerHoldMin': ["Enter the hold time from the resin maker's sheet"],
+  });
 }
 
 async function writeAudit(user: SessionUser, install: Install, body: ParsedEvent, target: InstallState['log'][number] | undefined, t: Transaction) {

@@ -155,6 +155,24 @@ describe('conditions and go decision carry the new clock inputs', () => {
     expect(view.body.company.holdReserve).toBe(0.1);
   });
 
+  it("refuses (422) going on with the pipe outside the rated range without the maker's hold, and writes nothing", async () => {
+    await signInAs(a.foreman);
+    const id = await startInstall(a);
+    await postAll(id, [
+      ...cleanInstall(a).slice(0, 4),
+      body('conditions_recorded', 13, { mixTempC: 20, pipeTempC: 2, resinKitId: a.resinKit.id, packerId: a.packer.id, patchLengthMm: 910 }),
+    ]);
+    const before = (await getInstall(id)).body.events.length;
+    for (const payload of [{ go: false, overrideReason: 'Owner needs the line tonight' }, { go: true }]) {
+      const refused = await postEvent(id, body('go_decision', 14, payload));
+      expect(refused.status).toBe(422);
+      expect(Object.keys(refused.body.error.fields)).toEqual(['payload.makerHoldMin']);
+    }
+    expect((await getInstall(id)).body.events.length).toBe(before);
+    // With the hold from the maker's sheet it is taken.
+    expect((await postEvent(id, body('go_decision', 14, { go: false, overrideReason: 'Owner needs the line tonight', makerHoldMin: 240 }))).status).toBe(201);
+  });
+
   it('refuses a negative preparation time and a zero maker hold with 400', async () => {
     await signInAs(a.foreman);
     const id = await startInstall(a);
