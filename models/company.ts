@@ -13,6 +13,8 @@ export class Company extends Model<InferAttributes<Company>, InferCreationAttrib
   declare workingWindowSafetyMargin: CreationOptional<number>;
   /** Share of the resin's hold kept on top of it before deflating (0.1 = deflate after 110 % of the hold). */
   declare holdReserve: CreationOptional<number>;
+  /** The liner's short-term flexural modulus for the F1216 X1 checks (MPa); null = the F1216 Table 1 minimum. */
+  declare linerShortTermModulusMpa: CreationOptional<number | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -27,6 +29,7 @@ export function initCompany(sequelize: Sequelize) {
       minOverlapPerEndMm: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 305 },
       workingWindowSafetyMargin: decimal(4, 3, { allowNull: false, defaultValue: 0.2 }),
       holdReserve: decimal(4, 3, { allowNull: false, defaultValue: 0.1 }),
+      linerShortTermModulusMpa: decimal(8, 1),
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },

@@ -219,7 +219,8 @@ export async function getRepairPlan(user: SessionUser, id: string, query: Repair
     groundwaterHeadMm: query.groundwaterHeadMm ?? repair.plannedGroundwaterHeadMm,
     ovalityPct: query.ovalityPct ?? repair.plannedOvalityPct,
     longTermModulusPsi: query.longTermModulusMpa === undefined ? null : convertPressure(query.longTermModulusMpa * 1000, 'kPa', 'psi'),
-    shortTermModulusPsi: query.shortTermModulusMpa === undefined ? null : convertPressure(query.shortTermModulusMpa * 1000, 'kPa', 'psi'),
+    // The modulus asked about, else the company's, else (in the planner) the F1216 Table 1 minimum.
+    shortTermModulusPsi: modulusPsi(query.shortTermModulusMpa ?? company.linerShortTermModulusMpa),
   };
   const unitSystem = company.unitSystem as UnitSystem;
   const plan = planRepair({
@@ -277,3 +278,6 @@ async function assertPackerFits(user: SessionUser, packerId: string, insideDiame
 }
 
 const statusAction = (status: 'planned' | 'cancelled') => (status === 'cancelled' ? 'cancel' : 'restore');
+
+/** MPa → psi for the F1216 checks (1 psi = 6.894 757 kPa, NIST SP 811 App. B); none stays none. */
+const modulusPsi = (mpa: number | null | undefined) => (mpa == null ? null : convertPressure(mpa * 1000, 'kPa', 'psi'));

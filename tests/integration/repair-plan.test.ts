@@ -1,7 +1,7 @@
 import { beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { GET as planRoute } from '@/app/api/repairs/[id]/plan/route';
 import { PATCH as patchRoute } from '@/app/api/repairs/[id]/route';
-import { Packer, Repair, ResinSystem } from '@/models';
+import { Company, Packer, Repair, ResinSystem } from '@/models';
 import { makeInstallWorld, makeWorld, type InstallWorld, type World } from './helpers/world';
 import { signInAs, signOut } from './helpers/session';
 import { call, jsonBody } from './helpers/call';
@@ -97,6 +97,22 @@ describe('repair planning panel: GET /api/repairs/:id/plan', () => {
     // X1.4 at 250 000 psi on 7.874 in: 0.1296 in = 3.293 mm, below the 3.446 mm of buckling.
     expect(body.design.checks.minimumStiffness * MM_PER_IN).toBeCloseTo(3.293, 3);
     expect(body.design.summary).toBe('X1.1 buckling at 10.0 ft of water, X1.4 stiffness');
+  });
+
+  it("takes the company's liner modulus for X1.4 when it has one, and a modulus asked about over both", async () => {
+    await signInAs(w.office);
+    // 400 000 psi = 2 757.9 MPa (1 psi = 6.894 757 kPa, NIST SP 811 App. B).
+    await Company.update({ linerShortTermModulusMpa: 2757.9 }, { where: { id: w.company.id } });
+    try {
+      const { body } = await plan(w.repair.id, '?groundwaterHeadMm=3048&thicknessMm=6&ovalityPct=2');
+      expect(body.assumptions.shortTermModulusPsi).toBeCloseTo(400_000, -1);
+      // X1.4 (E·t³/12 / D³ ≥ 0.093 psi): t = D·(12 × 0.093 / E)^(1/3) = 7.874 in × (1.116 / 400 000)^(1/3) = 2.816 mm.
+      expect(body.design.checks.minimumStiffness * MM_PER_IN).toBeCloseTo(2.8156, 3);
+      const asked = await plan(w.repair.id, '?groundwaterHeadMm=3048&thicknessMm=6&ovalityPct=2&shortTermModulusMpa=1723.7');
+      expect(asked.body.assumptions.shortTermModulusPsi).toBeCloseTo(250_000, -1);
+    } finally {
+      await Company.update({ linerShortTermModulusMpa: null }, { where: { id: w.company.id } });
+    }
   });
 
   it('takes the resin-to-fabric ratio and excess of the resin system asked for; another company’s is refused', async () => {

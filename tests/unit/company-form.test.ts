@@ -6,12 +6,12 @@ describe('company settings form ↔ API body', () => {
   const stored = { name: 'Acme', timeZone: 'America/Denver', unitSystem: 'imperial' as const, minOverlapPerEndMm: 305, workingWindowSafetyMargin: 0.2, holdReserve: 0.1 };
 
   it('shows the overlap in inches and the reserve in per cent for an imperial company', () => {
-    expect(companyToForm(stored)).toEqual({ name: 'Acme', timeZone: 'America/Denver', unitSystem: 'imperial', minOverlapPerEnd: 12.01, safetyMarginPercent: 20, holdReservePercent: 10 });
+    expect(companyToForm(stored)).toEqual({ name: 'Acme', timeZone: 'America/Denver', unitSystem: 'imperial', minOverlapPerEnd: 12.01, safetyMarginPercent: 20, holdReservePercent: 10, linerModulus: Number.NaN });
   });
 
   it('round-trips unchanged settings to the same stored values', () => {
     const body = formToCompanyPatch(companyToForm(stored));
-    expect(body).toEqual({ name: 'Acme', timeZone: 'America/Denver', unitSystem: 'imperial', minOverlapPerEndMm: 305, workingWindowSafetyMargin: 0.2, holdReserve: 0.1 });
+    expect(body).toEqual({ name: 'Acme', timeZone: 'America/Denver', unitSystem: 'imperial', minOverlapPerEndMm: 305, workingWindowSafetyMargin: 0.2, holdReserve: 0.1, linerShortTermModulusMpa: null });
     expect(companyPatchSchema.parse(body)).toEqual(body);
   });
 
@@ -53,5 +53,27 @@ describe('messages in the company’s units', () => {
     expect(overlapMessage('imperial', 40)).not.toMatch(/mm/);
     expect(overlapMessage('metric', 1001)).toMatch(/1000 mm|1,000 mm/);
     expect(overlapMessage('imperial', 39)).toBe('');
+  });
+});
+
+describe('the liner modulus for the F1216 X1 checks', () => {
+  const stored = { name: 'Units Co', timeZone: 'UTC', minOverlapPerEndMm: 75, workingWindowSafetyMargin: 0.2, holdReserve: 0.1 };
+  it('is typed in psi by an imperial company and stored in MPa; empty means the F1216 minimum (null)', () => {
+    // ASTM F1216 Table 1: 250 000 psi minimum initial flexural modulus; 1 psi = 6.894 757 kPa (NIST SP 811) → 1723.7 MPa.
+    const form = companyToForm({ ...stored, unitSystem: 'imperial', linerShortTermModulusMpa: 1723.7 });
+    expect(form.linerModulus).toBe(250_000);
+    expect(formToCompanyPatch(form).linerShortTermModulusMpa).toBe(1723.7);
+    expect(formToCompanyPatch({ ...form, linerModulus: 400_000 }).linerShortTermModulusMpa).toBeCloseTo(2757.9, 1);
+    const empty = companyToForm({ ...stored, unitSystem: 'metric', linerShortTermModulusMpa: null });
+    expect(Number.isNaN(empty.linerModulus)).toBe(true);
+    expect(companyFormSchema.safeParse(empty).success).toBe(true);
+    expect(formToCompanyPatch(empty).linerShortTermModulusMpa).toBeNull();
+  });
+  it('names its bounds in the company’s units', () => {
+    const imperial = companyFormSchema.safeParse({ ...companyToForm({ ...stored, unitSystem: 'imperial' }), linerModulus: 10 });
+    expect(imperial.error?.issues.map((issue) => issue.message).join(' ')).toMatch(/psi/);
+    expect(imperial.error?.issues.map((issue) => issue.message).join(' ')).not.toMatch(/MPa/);
+    expect(companyPatchSchema.safeParse({ linerShortTermModulusMpa: 100 }).success).toBe(false);
+    expect(companyPatchSchema.safeParse({ linerShortTermModulusMpa: null }).success).toBe(true);
   });
 });

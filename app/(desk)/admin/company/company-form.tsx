@@ -9,10 +9,10 @@ import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
 import { UNIT_SYSTEMS, type UnitSystemName } from '@/lib/domain';
 import { lengthFromSi, lengthToSi, unitLabels } from '@/lib/units';
-import { companyFormSchema, formToCompanyPatch, type CompanyFormValues } from '@/lib/validation/company';
+import { companyFormSchema, formToCompanyPatch, modulusInSystem, type CompanyFormValues } from '@/lib/validation/company';
 
 // The API names its fields in SI; the form's own fields carry the entered units.
-const SERVER_FIELD: Record<string, keyof CompanyFormValues> = { minOverlapPerEndMm: 'minOverlapPerEnd', workingWindowSafetyMargin: 'safetyMarginPercent', holdReserve: 'holdReservePercent' };
+const SERVER_FIELD: Record<string, keyof CompanyFormValues> = { minOverlapPerEndMm: 'minOverlapPerEnd', workingWindowSafetyMargin: 'safetyMarginPercent', holdReserve: 'holdReservePercent', linerShortTermModulusMpa: 'linerModulus' };
 
 /** The company's settings; lengths are entered in the unit system picked here and sent to PATCH /api/company in millimetres. */
 export function CompanyForm({ initial, timeZones }: { initial: CompanyFormValues; timeZones: string[] }) {
@@ -34,6 +34,7 @@ export function CompanyForm({ initial, timeZones }: { initial: CompanyFormValues
     if (Number.isFinite(overlap) && before !== next) {
       setValue('minOverlapPerEnd', Math.round(lengthFromSi(lengthToSi(overlap, before), next) * 100) / 100);
     }
+    if (before !== next) setValue('linerModulus', modulusInSystem(getValues('linerModulus'), before, next));
     return unitField.onChange(event);
   };
 
@@ -81,6 +82,14 @@ export function CompanyForm({ initial, timeZones }: { initial: CompanyFormValues
         hint="Extra time kept inflated on top of the resin’s hold: at 10 %, a 90 min hold means deflate after 99 min. The tablet shows both."
       >
         <input type="number" step="any" min={0} max={100} {...register('holdReservePercent', { valueAsNumber: true })} {...errorProps('holdReservePercent', errors.holdReservePercent?.message)} className={inputClass} />
+      </FormField>
+      <FormField
+        id="linerModulus"
+        label={`Liner short-term modulus (${unitSystem === 'imperial' ? 'psi' : 'MPa'})`}
+        error={errors.linerModulus?.message}
+        hint="The initial flexural modulus of the laminate you install, from its maker's data, for the repair plan's ASTM F1216 X1 checks. Leave empty to use the F1216 minimum (250,000 psi / 1,724 MPa)."
+      >
+        <input type="number" step="any" min={0} {...register('linerModulus', { valueAsNumber: true })} {...errorProps('linerModulus', errors.linerModulus?.message)} className={inputClass} />
       </FormField>
       {message && (
         <p role={message.ok ? 'status' : 'alert'} className={`text-sm font-medium md:col-span-2 ${message.ok ? 'text-safe-700' : 'text-missed-700'}`}>{message.text}</p>
