@@ -10,7 +10,7 @@ import { checklistTemplateInputSchema, checklistTemplatePatchSchema } from '@/li
 import { companyPatchSchema } from '@/lib/validation/company';
 import { crewInputSchema, crewMembersSchema, crewPatchSchema } from '@/lib/validation/crews';
 import { customerInputSchema, customerPatchSchema } from '@/lib/validation/customers';
-import { createInstallSchema, eventPayloadSchemas } from '@/lib/validation/install-events';
+import { createInstallSchema, eventPayloadSchemas, redoInstallSchema } from '@/lib/validation/install-events';
 import { invoiceActionSchema, invoiceInputSchema, invoicePatchSchema } from '@/lib/validation/invoices';
 import { jobInputSchema, jobPatchSchema } from '@/lib/validation/jobs';
 import { packerInputSchema, packerPatchSchema } from '@/lib/validation/packers';
@@ -131,6 +131,8 @@ export const FUZZ_TARGETS: Record<string, FuzzTarget> = {
   'POST /api/installs': { schema: createInstallSchema, as: 'foreman' },
   'POST /api/installs/[id]/events': { schema: eventSchema, as: 'foreman', setup: installOf, id: (_, m) => m.install },
   'POST /api/installs/[id]/review': { schema: reviewDecisionSchema, setup: installOf, id: (_, m) => m.install },
+  // The install neither failed nor was sent back: a well-formed body meets the 409, the rest a 400.
+  'POST /api/installs/[id]/redo': { schema: redoInstallSchema, as: 'foreman', setup: installOf, id: (_, m) => m.install },
   'POST /api/invoices': { schema: invoiceInputSchema, setup: async (w) => { await Job.update({ status: 'approved' }, { where: { id: w.job.id } }); return {}; } },
   'PATCH /api/invoices/[id]': { schema: invoicePatchSchema, setup: makeInvoice, id: (_, m) => m.invoice },
   'POST /api/invoices/[id]/status': { schema: invoiceActionSchema, setup: makeInvoice, id: (_, m) => m.invoice },
@@ -138,6 +140,7 @@ export const FUZZ_TARGETS: Record<string, FuzzTarget> = {
   'PATCH /api/jobs/[id]': { schema: jobPatchSchema, id: (w) => w.job.id },
   'DELETE /api/jobs/[id]': { id: (w) => w.job.id },
   'POST /api/jobs/[id]/report': { schema: sendReportSchema, id: (w) => w.job.id },
+  'DELETE /api/jobs/[id]/report-links': { id: (w) => w.job.id },
   'PUT /api/jobs/[id]/schedule': { schema: scheduleInputSchema, id: (w) => w.job.id },
   'DELETE /api/jobs/[id]/schedule': { id: (w) => w.job.id },
   'POST /api/packers': { schema: packerInputSchema },
