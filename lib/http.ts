@@ -108,7 +108,12 @@ export async function bodyOf(request: Request): Promise<unknown> {
 }
 
 /** The same as bodyOf, except that an empty body is `undefined` (for routes whose body is optional). */
-export async function optionalBodyOf(request: Request): Promise<unknown> {
+export const optionalBodyOf = (request: Request) => jsonBodyOf(request, { unparsable: 'refuse' });
+
+/** The same as bodyOf, except that a missing or unparsable body is `undefined` (for routes that validate it as empty). */
+export const bodyOrUndefined = (request: Request) => jsonBodyOf(request, { unparsable: 'undefined' });
+
+async function jsonBodyOf(request: Request, options: { unparsable: 'refuse' | 'undefined' }): Promise<unknown> {
   const text = await readBodyText(request);
   if (!text.trim()) return undefined;
   if (!isJsonRequest(request)) throw new AppError(415, 'Send the body as application/json.');
@@ -116,8 +121,10 @@ export async function optionalBodyOf(request: Request): Promise<unknown> {
   try {
     body = JSON.parse(text);
   } catch {
+    if (options.unparsable === 'undefined') return undefined;
     throw new AppError(400, 'The body is not valid JSON.');
   }
+  // Text with a NUL character is a 400 either way.
   return withoutNul(body);
 }
 
@@ -134,21 +141,6 @@ export function withoutNul<T>(value: T): T {
   };
   if (hasNul(value)) throw new AppError(400, 'Text may not contain the NUL character (U+0000).');
   return value;
-}
-
-/** The same as bodyOf, except that a missing or unparsable body is `undefined` (for routes that validate it as empty). */
-export async function bodyOrUndefined(request: Request): Promise<unknown> {
-  const text = await readBodyText(request);
-  if (!text.trim()) return undefined;
-  if (!isJsonRequest(request)) throw new AppError(415, 'Send the body as application/json.');
-  let body: unknown;
-  try {
-    body = JSON.parse(text);
-  } catch {
-    return undefined;
-  }
-  // Text with a NUL character is still a 400.
-  return withoutNul(body);
 }
 
 /** The `[id]` of a dynamic route; a malformed id cannot name a row of this company, so it is a plain 404. */
