@@ -95,36 +95,24 @@ export function flagsFor(install: InstallRecord): QualityFlag[] {
     }
   }
 
-  // Outside the resin's rated range the published times do not apply and the cure is uncertain.
+  // Outside the resin's rated range the published times do not apply and the cure is uncertain, whether the
+  // pipe or the mix was out of range: one cold-cure / hot-cure flag says which (both when both were).
+  const cold: string[] = [];
+  const hot: string[] = [];
   if (pipeTempC !== undefined && pipeTempC < resin.minTempC) {
-    flags.push({
-      kind: 'cold-cure',
-      severity: 'critical',
-      message: `Cured in a pipe at ${formatTemperature(pipeTempC, system)}, below the resin's minimum of ${formatTemperature(resin.minTempC, system)}.`,
-    });
+    cold.push(`Cured in a pipe at ${formatTemperature(pipeTempC, system)}, below the resin's minimum of ${formatTemperature(resin.minTempC, system)}.`);
+  }
+  if (mixTempC !== undefined && mixTempC < resin.minTempC) {
+    cold.push(`Resin mixed at ${formatTemperature(mixTempC, system)}, below the resin's minimum of ${formatTemperature(resin.minTempC, system)}.`);
   }
   if (pipeTempC !== undefined && pipeTempC > resin.maxTempC) {
-    flags.push({
-      kind: 'hot-cure',
-      severity: 'critical',
-      message: `Cured in a pipe at ${formatTemperature(pipeTempC, system)}, above the resin's maximum of ${formatTemperature(resin.maxTempC, system)}.`,
-    });
-  }
-
-  if (mixTempC !== undefined && mixTempC < resin.minTempC) {
-    flags.push({
-      kind: 'cold-mix',
-      severity: 'critical',
-      message: `Resin mixed at ${formatTemperature(mixTempC, system)}, below the resin's minimum of ${formatTemperature(resin.minTempC, system)}.`,
-    });
+    hot.push(`Cured in a pipe at ${formatTemperature(pipeTempC, system)}, above the resin's maximum of ${formatTemperature(resin.maxTempC, system)}.`);
   }
   if (windowTempC !== undefined && windowTempC > resin.maxTempC) {
-    flags.push({
-      kind: 'hot-mix',
-      severity: 'critical',
-      message: `Mixed at ${formatTemperature(windowTempC, system)}, above the resin's maximum of ${formatTemperature(resin.maxTempC, system)}.`,
-    });
+    hot.push(`Mixed at ${formatTemperature(windowTempC, system)}, above the resin's maximum of ${formatTemperature(resin.maxTempC, system)}.`);
   }
+  if (cold.length) flags.push({ kind: 'cold-cure', severity: 'critical', message: cold.join(' ') });
+  if (hot.length) flags.push({ kind: 'hot-cure', severity: 'critical', message: hot.join(' ') });
 
   if (dryRunSeconds === undefined) {
     flags.push({ kind: 'no-dry-run', severity: 'warning', message: noDryRunText() });

@@ -92,8 +92,6 @@ export type FlagKind =
   | 'early-deflate'
   | 'cold-cure'
   | 'hot-cure'
-  | 'cold-mix'
-  | 'hot-mix'
   | 'no-dry-run'
   | 'slow-dry-run'
   | 'pressure-out-of-range'

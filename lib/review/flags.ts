@@ -29,8 +29,6 @@ export const FLAG_LABELS: Record<QualityFlag['kind'], string> = {
   'early-deflate': 'Early deflate',
   'cold-cure': 'Cold cure',
   'hot-cure': 'Hot cure',
-  'cold-mix': 'Cold mix',
-  'hot-mix': 'Hot mix',
   'no-dry-run': 'No dry run',
   'slow-dry-run': 'Slow dry run',
   'pressure-out-of-range': 'Pressure outside rating',

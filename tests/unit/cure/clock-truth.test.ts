@@ -44,19 +44,25 @@ describe('the warmer of resin and air sets the working window (10 °C halving ru
     expect(planCure(typicalEpoxy, { ...base, mixTempC: 30, airTempC: 10 }).workingWindowMin).toBe(15);
   });
 
-  it('resin colder than its rated minimum is NO-GO with a reason and raises the cold-mix flag', () => {
+  it('resin colder than its rated minimum is NO-GO with a reason and raises the cold-cure flag, naming the mix', () => {
     const plan = planCure(typicalEpoxy, { ...base, mixTempC: 3 });
     expect(plan.go).toBe(false);
     expect(plan.reasons.join(' ')).toMatch(/resin at 3 °C is colder than its minimum of 5 °C/);
-    expect(flagsFor({ resin: typicalEpoxy, mixedAt, mixTempC: 3, pipeTempC: 20, dryRunSeconds: 60 }).map((f) => f.kind)).toEqual(['cold-mix']);
+    const flags = flagsFor({ resin: typicalEpoxy, mixedAt, mixTempC: 3, pipeTempC: 20, dryRunSeconds: 60 });
+    expect(flags.map((f) => f.kind)).toEqual(['cold-cure']);
+    expect(flags[0].message).toMatch(/^Resin mixed at 3 °C, below the resin's minimum of 5 °C\.$/);
+    // Pipe and mix both cold: still one cold-cure flag, naming both.
+    const both = flagsFor({ resin: typicalEpoxy, mixedAt, mixTempC: 3, pipeTempC: 2, dryRunSeconds: 60 });
+    expect(both.map((f) => f.kind)).toEqual(['cold-cure']);
+    expect(both[0].message).toMatch(/pipe at 2 °C.*mixed at 3 °C/);
   });
 
-  it('mixing in air warmer than the rated maximum is NO-GO and raises the hot-mix flag, in the company units', () => {
+  it('mixing in air warmer than the rated maximum is NO-GO and raises the hot-cure flag, naming the mix, in the company units', () => {
     const plan = planCure(typicalEpoxy, { ...base, airTempC: 45, unitSystem: 'imperial' });
     expect(plan.go).toBe(false);
     // 45 °C = 113 °F, 40 °C = 104 °F (NIST SP 811 B.9: t/°F = 1.8 t/°C + 32).
     expect(plan.reasons.join(' ')).toMatch(/Mixing at 113 °F is warmer than this resin's maximum of 104 °F/);
-    expect(flagsFor({ resin: typicalEpoxy, mixedAt, mixTempC: 20, airTempC: 45, pipeTempC: 20, dryRunSeconds: 60 }).map((f) => f.kind)).toEqual(['hot-mix']);
+    expect(flagsFor({ resin: typicalEpoxy, mixedAt, mixTempC: 20, airTempC: 45, pipeTempC: 20, dryRunSeconds: 60 }).map((f) => f.kind)).toEqual(['hot-cure']);
   });
 });
 
