@@ -27,6 +27,20 @@ export class Install extends Model<InferAttributes<Install>, InferCreationAttrib
   declare finishedAt: CreationOptional<Date | null>;
   /** The install this one redoes (a failed or sent-back patch); both are kept. */
   declare replacesInstallId: CreationOptional<string | null>;
+  // Derived from the log in the tap's transaction (see migration 20261203001000); null derivedAt = not yet derived.
+  declare step: CreationOptional<string>;
+  declare eventCount: CreationOptional<number>;
+  declare lastDeviceTime: CreationOptional<Date | null>;
+  declare mixedAt: CreationOptional<Date | null>;
+  declare inflatedAt: CreationOptional<Date | null>;
+  declare deflatedAt: CreationOptional<Date | null>;
+  declare inflateBy: CreationOptional<Date | null>;
+  declare deflateAfter: CreationOptional<Date | null>;
+  declare holdPlannedMin: CreationOptional<number | null>;
+  declare maxPressureKpa: CreationOptional<number | null>;
+  declare flagKinds: CreationOptional<string[]>;
+  declare worstSeverity: CreationOptional<'critical' | 'warning' | null>;
+  declare derivedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -72,6 +86,19 @@ export function initInstall(sequelize: Sequelize) {
       startedAt: DataTypes.DATE,
       finishedAt: DataTypes.DATE,
       replacesInstallId: DataTypes.UUID,
+      step: { type: DataTypes.STRING(16), allowNull: false, defaultValue: 'safety' },
+      eventCount: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+      lastDeviceTime: DataTypes.DATE,
+      mixedAt: DataTypes.DATE,
+      inflatedAt: DataTypes.DATE,
+      deflatedAt: DataTypes.DATE,
+      inflateBy: DataTypes.DATE,
+      deflateAfter: DataTypes.DATE,
+      holdPlannedMin: decimal(8, 2),
+      maxPressureKpa: decimal(8, 2),
+      flagKinds: { type: DataTypes.ARRAY(DataTypes.STRING(32)), allowNull: false, defaultValue: [] },
+      worstSeverity: DataTypes.STRING(10),
+      derivedAt: DataTypes.DATE,
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },
