@@ -1,5 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 import { decimal } from './columns';
+import type { StoredFold } from '@/lib/install/derived';
 import { INSTALL_EVENT_TYPES, INSTALL_STATUSES, type InstallEventType, type InstallStatus } from '@/lib/domain';
 
 /** One attempt at installing the patch of one repair. */
@@ -41,6 +42,8 @@ export class Install extends Model<InferAttributes<Install>, InferCreationAttrib
   declare flagKinds: CreationOptional<string[]>;
   declare worstSeverity: CreationOptional<'critical' | 'warning' | null>;
   declare derivedAt: CreationOptional<Date | null>;
+  /** The step machine's compact state a tap folds into (lib/install/derived.ts); migration 20261203011000. */
+  declare derivedFold: CreationOptional<StoredFold | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -99,6 +102,7 @@ export function initInstall(sequelize: Sequelize) {
       flagKinds: { type: DataTypes.ARRAY(DataTypes.STRING(32)), allowNull: false, defaultValue: [] },
       worstSeverity: DataTypes.STRING(10),
       derivedAt: DataTypes.DATE,
+      derivedFold: DataTypes.JSONB,
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },

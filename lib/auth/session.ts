@@ -1,6 +1,7 @@
 import 'server-only';
 import { redirect } from 'next/navigation';
-import { User, CrewMember } from '@/models';
+import { QueryTypes } from 'sequelize';
+import { sequelize } from '@/models';
 import { AppError, forbidden, unauthorized } from '@/lib/errors';
 import type { Role } from '@/lib/domain';
 import { getSessionClaims, type SessionClaims } from './claims';
@@ -43,15 +44,53 @@ export async function requirePageUser(roles?: readonly Role[]): Promise<SessionU
 /** Checks the claims against the user row: the row, not the token, decides (deactivation and role changes bite at once). */
 export async function userFromClaims(claims: SessionClaims | null): Promise<SessionUser | null> {
   if (!claims) return null;
-  const row = await User.findOne({ where: { id: claims.sub, companyId: claims.companyId } });
+  const [row] = await sequelize.query<UserRow>(`${USER_SQL} FROM users u WHERE u.id = :sub AND u.company_id = :companyId`, {
+    replacements: { sub: claims.sub, companyId: claims.companyId },
+    type: QueryTypes.SELECT,
+  });
+  return sessionUserOf(row, claims);
+}
+
+/** Who may see an install: its own crew and its job's (the office may reassign the job). */
+export type InstallAccess = { id: string; crewId: string | null; jobCrewId: string | null };
+
+/**
+ * `requireUser` for a route about one install: the user, their crews and the install's crews in one query
+ * (the tap's first round trip). `install` is null when the company has no such install.
+ */
+export async function requireUserWithInstall(installId: string | null): Promise<{ user: SessionUser; install: InstallAccess | null }> {
+  const claims = await getSessionClaims();
+  if (!claims) throw unauthorized();
+  const [row] = await sequelize.query<UserRow & { installId: string | null; installCrewId: string | null; jobCrewId: string | null }>(
+    `${USER_SQL}, i.id AS "installId", i.crew_id AS "installCrewId", j.crew_id AS "jobCrewId"
+     FROM users u
+     LEFT JOIN installs i ON i.id = :installId AND i.company_id = u.company_id
+     LEFT JOIN jobs j ON j.id = i.job_id AND j.company_id = u.company_id
+     WHERE u.id = :sub AND u.company_id = :companyId`,
+    { replacements: { sub: claims.sub, companyId: claims.companyId, installId }, type: QueryTypes.SELECT },
+  );
+  const user = sessionUserOf(row, claims);
+  if (!user) throw unauthorized();
+  const install = row.installId ? { id: row.installId, crewId: row.installCrewId, jobCrewId: row.jobCrewId } : null;
+  return { user, install };
+}
+
+type UserRow = {
+  id: string;
+  companyId: string;
+  role: Role;
+  name: string;
+  email: string;
+  active: boolean;
+  tokenVersion: number;
+  crewIds: string[];
+};
+
+const USER_SQL = `SELECT u.id, u.company_id AS "companyId", u.role, u.name, u.email, u.active, u.token_version AS "tokenVersion",
+  ARRAY(SELECT cm.crew_id FROM crew_members cm WHERE cm.user_id = u.id AND cm.company_id = u.company_id ORDER BY cm.crew_id)
+    AS "crewIds"`;
+
+function sessionUserOf(row: UserRow | undefined, claims: SessionClaims): SessionUser | null {
   if (!row || !row.active || row.tokenVersion !== claims.tokenVersion) return null;
-  const memberships = await CrewMember.findAll({ where: { userId: row.id, companyId: row.companyId }, attributes: ['crewId'] });
-  return {
-    id: row.id,
-    companyId: row.companyId,
-    role: row.role,
-    name: row.name,
-    email: row.email,
-    crewIds: memberships.map((m) => m.crewId),
-  };
+  return { id: row.id, companyId: row.companyId, role: row.role, name: row.name, email: row.email, crewIds: row.crewIds };
 }

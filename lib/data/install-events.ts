@@ -2,28 +2,41 @@ import 'server-only';
 import { Op, UniqueConstraintError, type Transaction } from 'sequelize';
 import type { z } from 'zod';
 import { AuditEntry, Install, InstallEvent, Job, Packer, Repair, ResinKit, ResinSystem, sequelize } from '@/models';
-import type { SessionUser } from '@/lib/auth/session';
-import { AppError, forbidden } from '@/lib/errors';
-import { mayDecide } from '@/lib/install/access';
+import type { InstallAccess, SessionUser } from '@/lib/auth/session';
+import { AppError, forbidden, notFound } from '@/lib/errors';
+import { mayDecide, mayWorkOn } from '@/lib/install/access';
+import { deriveRow, foldEvent, foldsInOrder, stateOfFold, type DeriveSettings, type StoredFold } from '@/lib/install/derived';
 import { correctsDecision, deviceTimeProblem, isClosedInstall } from '@/lib/install/record-rules';
 import { isSameEvent } from '@/lib/install/same-event';
-import { correctionTarget, deriveInstallState, orderProblem, type InstallState } from '@/lib/install/state';
+import { correctionTarget, orderProblem, type InstallState } from '@/lib/install/state';
 import { eventPayloadSchemas, parseEventBody } from '@/lib/validation/install-events';
 import { getCompany } from './company';
+import { loadMaterials, rederive, rowOf, settingsOf } from './install-derive';
 import { findInstallFor, type InstallEventRow } from './installs';
 import { dayInZone } from '@/lib/dates';
 
 type ParsedEvent = Extract<ReturnType<typeof parseEventBody>, { success: true }>['data'];
+type Company = Awaited<ReturnType<typeof getCompany>>;
+
+/** What the route already read in its first query (`requireUserWithInstall`); absent, it is read here. */
+export type TapContext = { install: InstallAccess | null };
 
 /**
  * Records one tap of the crew. A replay of the same tap (same clientEventId and body) answers with
  * the stored event and writes nothing; the same id with another body is a 409; so is any new tap on
  * an approved or abandoned install; an event that cannot have happened now, or stamped outside the
  * device-time bounds, is a 422. Taps on one install are serialised by a lock on its row.
+ *
+ * An ordinary tap reads no more than its install's row and the one event its id may name: the row keeps the
+ * step machine's state (lib/install/derived.ts), and the tap folds its one event in. A correction or a tap out
+ * of log order re-derives from the whole log (lib/data/install-derive.ts).
  */
-export async function recordEvent(user: SessionUser, installId: string, input: unknown): Promise<{ event: InstallEventRow; created: boolean }> {
+export async function recordEvent(
+  user: SessionUser, installId: string, input: unknown, context?: TapContext,
+): Promise<{ event: InstallEventRow; created: boolean }> {
   const receivedAt = new Date();
-  await findInstallFor(user, installId);
+  if (context) checkAccess(user, context.install);
+  else await findInstallFor(user, installId);
   const body = parseBodyOrThrow(input);
   // A queued tap carries who tapped it: it must never be stored under someone else's name.
   if (body.userId !== undefined && body.userId !== user.id) {
@@ -35,8 +48,10 @@ export async function recordEvent(user: SessionUser, installId: string, input: u
   }
   // Read before the transaction: inside it, every query must use its connection, or ten taps
   // waiting on the lock could hold the whole pool while the eleventh query waits for one.
-  const today = dayInZone(new Date(), (await getCompany(user)).timeZone);
-  const run = () => sequelize.transaction((t) => recordInTransaction(user, installId, body, today, receivedAt, t));
+  // The company's settings are read once for the whole tap.
+  const company = await getCompany(user);
+  const today = dayInZone(new Date(), company.timeZone);
+  const run = () => sequelize.transaction((t) => recordInTransaction(user, installId, body, { today, receivedAt, company }, t));
   try {
     return await run();
   } catch (error) {
@@ -47,17 +62,22 @@ export async function recordEvent(user: SessionUser, installId: string, input: u
   }
 }
 
-async function recordInTransaction(user: SessionUser, installId: string, body: ParsedEvent, today: string, receivedAt: Date, t: Transaction) {
+type TapRun = { today: string; receivedAt: Date; company: Company };
+
+async function recordInTransaction(user: SessionUser, installId: string, body: ParsedEvent, run: TapRun, t: Transaction) {
+  const { today, receivedAt, company } = run;
+  const settings = settingsOf(company);
   const install = await Install.findOne({ where: { id: installId, companyId: user.companyId }, lock: t.LOCK.UPDATE, transaction: t });
   if (!install) throw new AppError(404, 'Install was not found.');
 
-  const stored = await InstallEvent.findAll({ where: { installId, companyId: user.companyId }, transaction: t });
-  const state = deriveInstallState(stored.map((e) => e.get({ plain: true })));
+  // Indexed reads only: the tap's own id (a replay?) and, for a correction, the event it names.
+  const [existing, named] = await Promise.all([
+    InstallEvent.findOne({ where: { companyId: user.companyId, clientEventId: body.clientEventId }, transaction: t }),
+    body.type === 'correction' && body.correctsEventId ? namedEvent(user, installId, body.correctsEventId, t) : null,
+  ]);
   // A correction may name its event by the id the device gave it; the row keeps the server id.
-  const target = body.type === 'correction' ? correctionTarget(state, body.correctsEventId) : undefined;
-  const correctsEventId = target?.id ?? body.correctsEventId ?? null;
-
-  const existing = await InstallEvent.findOne({ where: { companyId: user.companyId, clientEventId: body.clientEventId }, transaction: t });
+  const namedOriginal = named && named.type !== 'correction' ? named : null;
+  const correctsEventId = namedOriginal?.id ?? body.correctsEventId ?? null;
   if (existing) {
     const same = isSameEvent(existing, { ...body, installId, correctsEventId });
     if (!same) throw new AppError(409, 'That event id was already used for a different event');
@@ -68,9 +88,18 @@ async function recordInTransaction(user: SessionUser, installId: string, body: P
     throw new AppError(409, `This install is closed (${install.status}): nothing more can be recorded on it.`);
   }
   checkDeviceTimes(body, receivedAt);
-  if (body.type === 'correction' && !mayDecide(user) && correctsDecision(target?.type, correctionChanges(body.payload))) {
+  if (body.type === 'correction' && !mayDecide(user) && correctsDecision(namedOriginal?.type, correctionChanges(body.payload))) {
     throw forbidden('Only the foreman can correct a go / no-go decision or a sign-off.');
   }
+
+  // The state before this tap: the whole log for a correction (it may change anything), else the row's fold
+  // (derived from the log first when the row never was).
+  let stored = body.type === 'correction' || !install.derivedFold || install.derivedAt === null
+    ? await rederive(user.companyId, installId, settings, t)
+    : null;
+  const fold = stored?.fold ?? install.derivedFold!;
+  const state = stored?.state ?? stateOfFold(fold);
+  const target = body.type === 'correction' ? correctionTarget(state, body.correctsEventId) : undefined;
 
   const problem = orderProblem(state, { ...body, correctsEventId }, { reopened: install.status === 'sent_back' });
   if (problem) throw new AppError(422, problem);
@@ -98,29 +127,53 @@ async function recordInTransaction(user: SessionUser, installId: string, body: P
     },
     { transaction: t },
   );
-  const next = deriveInstallState([...stored.map((e) => e.get({ plain: true })), event.get({ plain: true })]);
+  const plainEvent = event.get({ plain: true });
+  let next: Next;
+  if (body.type !== 'correction' && !stored && foldsInOrder(fold, plainEvent)) {
+    next = await foldIn(user, install, fold, plainEvent, settings, t);
+  } else {
+    // Out of log order (two tablets, a late outbox) or a correction: the whole log again, this tap included.
+    stored = await rederive(user.companyId, installId, settings, t);
+    next = { state: stored.state, kit: stored.kit, derived: rowOf(stored) };
+  }
   await updateSummary(user, install, next, body, t);
   await writeAudit(user, install, body, target, t);
-  return { event: event.get({ plain: true }), created: true };
+  return { event: plainEvent, created: true };
+}
+
+type Next = { state: InstallState; kit: { id: string; resinSystemId: string } | null; derived: Record<string, unknown> };
+
+/** The state after one tap in log order: its event folded into the stored fold; materials re-read if it names them. */
+async function foldIn(user: SessionUser, install: Install, fold: StoredFold, event: InstallEventRow, settings: DeriveSettings, t: Transaction): Promise<Next> {
+  let folded = foldEvent(fold, event);
+  let kit = install.resinKitId && install.resinSystemId ? { id: install.resinKitId, resinSystemId: install.resinSystemId } : null;
+  if (event.type === 'conditions_recorded') {
+    const loaded = await loadMaterials(user.companyId, stateOfFold(folded).conditions, t);
+    folded = { ...folded, materials: loaded.materials };
+    kit = loaded.kit;
+  }
+  const { columns, fold: stored } = deriveRow(folded, settings);
+  return {
+    state: stateOfFold(stored),
+    kit,
+    derived: { ...columns, eventCount: install.eventCount + 1, derivedFold: stored, derivedAt: new Date() },
+  };
 }
 
 /** The install row keeps a summary of its log for lists and reports; the job and repair follow it. */
-async function updateSummary(user: SessionUser, install: Install, state: InstallState, body: ParsedEvent, t: Transaction) {
+async function updateSummary(user: SessionUser, install: Install, next: Next, body: ParsedEvent, t: Transaction) {
+  const { state, kit } = next;
   const firstEvent = install.status === 'not_started';
-  const kitId = state.conditions?.resinKitId ?? null;
-  const kit =
-    kitId === null ? null
-    : kitId === install.resinKitId ? { id: kitId, resinSystemId: install.resinSystemId }
-    : await ResinKit.findOne({ where: { id: kitId, companyId: user.companyId }, transaction: t });
   const signedOff = body.type === 'signed_off';
   await install.update(
     {
+      ...next.derived,
       status: signedOff ? 'awaiting_review' : firstEvent ? 'in_progress' : install.status,
       startedAt: state.startedAt,
       mixTempC: state.conditions?.mixTempC ?? null,
       pipeTempC: state.conditions?.pipeTempC ?? null,
-      resinKitId: kit?.id ?? null,
-      resinSystemId: kit?.resinSystemId ?? null,
+      resinKitId: state.conditions ? (kit?.id ?? null) : null,
+      resinSystemId: state.conditions ? (kit?.resinSystemId ?? null) : null,
       packerId: state.conditions?.packerId ?? null,
       patchLengthMm: state.conditions?.patchLengthMm ?? null,
       dryRunSeconds: state.dryRunSeconds === null ? null : Math.round(state.dryRunSeconds),
@@ -148,6 +201,21 @@ async function updateSummary(user: SessionUser, install: Install, state: Install
     }
   }
 }
+
+/** The event of this install a correction names, by server id or the device's id (two unique-index reads). */
+async function namedEvent(user: SessionUser, installId: string, ref: string, t: Transaction) {
+  const where = { companyId: user.companyId, installId };
+  const byId = isUuid(ref) ? await InstallEvent.findOne({ where: { ...where, id: ref }, transaction: t }) : null;
+  return byId ?? (isUuid(ref) ? await InstallEvent.findOne({ where: { ...where, clientEventId: ref }, transaction: t }) : null);
+}
+
+/** 404 for an install the company does not have, 403 for a field user of another crew (as `findInstallFor`). */
+function checkAccess(user: SessionUser, install: InstallAccess | null) {
+  if (!install) throw notFound('Install');
+  if (!mayWorkOn(user, [install.crewId, install.jobCrewId])) throw forbidden('This install belongs to another crew.');
+}
+
+const isUuid = (value: string) => /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(value);
 
 /** True when the latest install of every live repair of the job is signed off (or already approved). */
 async function allRepairsAwaitReview(user: SessionUser, jobId: string, t: Transaction) {

@@ -13,6 +13,7 @@ import { SizingInputError, fittingPackers, patchLength } from '@/lib/sizing';
 import type { UnitSystem } from '@/lib/units';
 import type { CreateInstallInput } from '@/lib/validation/install-events';
 import { getCompany } from './company';
+import { emptyDerived, settingsOf } from './install-derive';
 import { redoChainOf } from './redo';
 import { dayInZone } from '@/lib/dates';
 
@@ -47,6 +48,8 @@ export async function createInstall(user: SessionUser, input: CreateInstallInput
       jobId: job.id,
       crewId: job.crewId ?? null,
       checklistTemplateId: checklist?.id ?? null,
+      // Derived from its (empty) log at once, so no reader has to derive it later.
+      ...emptyDerived(settingsOf(await getCompany(user))),
     });
     return { install: install.get({ plain: true }), created: true };
   } catch (error) {

@@ -1,5 +1,5 @@
 import 'server-only';
-import { Op, type InferAttributes, type Model, type Transaction, type WhereOptions } from 'sequelize';
+import { Op, literal, type InferAttributes, type Model, type Transaction, type WhereOptions } from 'sequelize';
 import {
   AccessPoint, Crew, Customer, Install, InstallEvent, Job, Packer, Repair, ResinKit, ResinSystem, Review, Segment, Site, User, sequelize,
 } from '@/models';
@@ -11,11 +11,12 @@ import { isDeskRole } from '@/lib/auth/roles';
 import { AppError, notFound } from '@/lib/errors';
 import { installClock } from '@/lib/install/clock';
 import { deriveInstallState } from '@/lib/install/state';
-import { localiseSentence, worstRank, worstSeverity } from '@/lib/review/flags';
+import { localiseSentence, worstSeverity } from '@/lib/review/flags';
 import type { InstallListQuery, ReviewDecision } from '@/lib/validation/reviews';
 import { getCompany } from './company';
 import { getInstallView } from './installs';
-import { EXPORT_LIMIT, allOf, pageOf, searchWhere, windowOf } from './list';
+import { ensureDerived, settingsOf, severityRankSql } from './install-derive';
+import { allOf, pageOf, searchWhere, windowOf } from './list';
 import { assertOfficeWriter } from './scope';
 
 type Plain<M extends Model> = InferAttributes<M>;
@@ -23,8 +24,8 @@ type Company = Awaited<ReturnType<typeof getCompany>>;
 
 /**
  * A page of the company's installs with their quality flags (field users: only their crews').
- * Flags come from the event log, so sorting by severity computes them for every match and pages
- * in memory (capped like an export); the date sorts page in SQL and compute flags for the page only.
+ * `sort=severity` orders in SQL by the worst flag kept on each install's row (plus the two that time passing
+ * raises, against now()) and pages there; the flags of the page itself are worked out from their logs.
  */
 export async function listInstalls(user: SessionUser, query: InstallListQuery, exportAll = false) {
   const company = await getCompany(user);
@@ -36,15 +37,16 @@ export async function listInstalls(user: SessionUser, query: InstallListQuery, e
   );
   const now = new Date();
   if (query.sort === 'severity') {
-    const { rows, count } = await Install.findAndCountAll({ where, include: LIST_INCLUDE, order: [['finishedAt', 'ASC NULLS LAST'], ['id', 'ASC']], limit: EXPORT_LIMIT });
-    const items = await itemsOf(user, rows, company, now);
-    const sign = query.dir === 'asc' ? -1 : 1; // ascending = worst first
-    const ordered = items
-      .map((item, index) => ({ item, index, rank: worstRank(item.flags) }))
-      .sort((a, b) => sign * (a.rank - b.rank) || a.index - b.index)
-      .map(({ item }) => item);
-    const { limit, offset } = windowOf(query, exportAll);
-    return pageOf(ordered.slice(offset, offset + limit), count, query);
+    await ensureDerived(user, settingsOf(company));
+    // Ascending (the default) puts the worst first; ties go oldest-finished first.
+    const rank = literal(severityRankSql('"Install"', '"resinKit"'));
+    const { rows, count } = await Install.findAndCountAll({
+      where,
+      include: LIST_INCLUDE,
+      order: [[rank, query.dir === 'asc' ? 'DESC' : 'ASC'], ['finishedAt', 'ASC NULLS LAST'], ['id', 'ASC']],
+      ...windowOf(query, exportAll),
+    });
+    return pageOf(await itemsOf(user, rows, company, now), count, query);
   }
   const { rows, count } = await Install.findAndCountAll({
     where,

@@ -1,12 +1,11 @@
 import 'server-only';
 import { Op } from 'sequelize';
-import { AccessPoint, Customer, Install, InstallEvent, Job, Packer, Repair, ResinKit, ResinSystem, Segment, Site } from '@/models';
+import { AccessPoint, Customer, Install, Job, Repair, Segment, Site } from '@/models';
 import type { SessionUser } from '@/lib/auth/session';
-import { resinClockSpec } from '@/lib/cure';
-import { installClock } from '@/lib/install/clock';
-import { deriveInstallState, type InstallStep } from '@/lib/install/state';
+import type { InstallStep } from '@/lib/install/state';
 import { dayInZone } from '@/lib/dates';
 import { getCompany } from './company';
+import { ensureDerived, settingsOf, type CompanySettings } from './install-derive';
 import type { JobDetail } from './jobs';
 
 /** What the list shows of a repair's latest install: where it stands and the clock that runs now. */
@@ -42,7 +41,7 @@ export async function listTodayJobs(user: SessionUser, now = new Date()) {
     order: [['scheduledDate', 'ASC'], ['number', 'ASC'], [{ model: Repair, as: 'repairs' }, 'position', 'ASC']],
   });
   const repairIds = jobs.flatMap((job) => (job.get('repairs') as Repair[]).map((r) => r.id));
-  const installs = await latestInstalls(user, repairIds, now, company);
+  const installs = await latestInstalls(user, repairIds, company);
   return {
     today,
     tomorrow,
@@ -53,37 +52,25 @@ export async function listTodayJobs(user: SessionUser, now = new Date()) {
   };
 }
 
-async function latestInstalls(user: SessionUser, repairIds: string[], now: Date, company: { workingWindowSafetyMargin: number; holdReserve: number; unitSystem: 'imperial' | 'metric' }) {
+/** The latest install of each repair, from the state kept on its row (no log is read). */
+async function latestInstalls(user: SessionUser, repairIds: string[], company: CompanySettings) {
+  if (repairIds.length) await ensureDerived(user, settingsOf(company));
   const rows = repairIds.length
     ? await Install.findAll({
         where: { companyId: user.companyId, repairId: { [Op.in]: repairIds }, status: { [Op.ne]: 'abandoned' } },
-        include: [
-          { model: InstallEvent, as: 'events' },
-          { model: ResinSystem, as: 'resinSystem' },
-          { model: ResinKit, as: 'resinKit', attributes: ['expiresOn'] },
-          { model: Packer, as: 'packer', attributes: ['minPressureKpa', 'maxPressureKpa'] },
-        ],
+        attributes: ['id', 'repairId', 'status', 'step', 'mixedAt', 'inflatedAt', 'deflatedAt', 'inflateBy', 'deflateAfter'],
         order: [['createdAt', 'ASC']],
       })
     : [];
   const byRepair = new Map<string, InstallSummary>();
-  for (const row of rows) {
-    const install = row.get({ plain: true }) as Install & { events: InstallEvent[]; resinSystem: ResinSystem | null; resinKit: ResinKit | null; packer: Packer | null };
-    const state = deriveInstallState(install.events);
-    const { plan } = installClock({
-      state,
-      resin: install.resinSystem ? resinClockSpec(install.resinSystem) : null,
-      packer: install.packer,
-      resinKitExpiresOn: install.resinKit?.expiresOn ?? null,
-      safetyMargin: company.workingWindowSafetyMargin,
-      holdReserve: company.holdReserve,
-      unitSystem: company.unitSystem,
-      now,
-    });
+  for (const install of rows) {
     let deadline: InstallSummary['deadline'] = null;
-    if (plan && state.mixedAt && !state.inflatedAt) deadline = { label: 'Inflate by', start: state.mixedAt.toISOString(), at: plan.inflateBy.toISOString() };
-    else if (plan?.deflateAfter && state.inflatedAt && !state.deflatedAt) deadline = { label: 'Deflate after', start: state.inflatedAt.toISOString(), at: plan.deflateAfter.toISOString() };
-    byRepair.set(install.repairId, { id: install.id, status: install.status, step: state.step, deadline });
+    if (install.mixedAt && !install.inflatedAt && install.inflateBy) {
+      deadline = { label: 'Inflate by', start: install.mixedAt.toISOString(), at: install.inflateBy.toISOString() };
+    } else if (install.deflateAfter && install.inflatedAt && !install.deflatedAt) {
+      deadline = { label: 'Deflate after', start: install.inflatedAt.toISOString(), at: install.deflateAfter.toISOString() };
+    }
+    byRepair.set(install.repairId, { id: install.id, status: install.status, step: install.step as InstallStep, deadline });
   }
   return byRepair;
 }

@@ -16,7 +16,12 @@ export type InstallClockInput = {
   /** The company's IANA zone: every instant in flags and reasons is written in it (UTC ISO without it). */
   timeZone?: string;
   unitSystem: UnitSystem;
-  now: Date;
+  /**
+   * The present moment. Null for what holds whatever the time (the state stored on the install's row): then a
+   * plan is made only from a recorded mix, and no flag that only time passing raises (overdue inflate, a kit
+   * expiring before a mix that has not happened) is raised.
+   */
+  now: Date | null;
 };
 
 /** The plan; `preview` when the resin is not mixed yet and the clock is started at `now`. */
@@ -39,10 +44,11 @@ export function installClock(input: InstallClockInput): InstallClock {
   if (!resin) return { plan: null, flags: [], problem: null };
   try {
     const conditions = state.conditions;
-    const plan: InstallPlan | null = conditions
+    const startsAt = state.mixedAt ?? now;
+    const plan: InstallPlan | null = conditions && startsAt
       ? {
           ...planCure(resin, {
-            mixedAt: state.mixedAt ?? now,
+            mixedAt: startsAt,
             mixTempC: conditions.mixTempC,
             airTempC: conditions.airTempC,
             pipeTempC: conditions.pipeTempC,

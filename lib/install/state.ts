@@ -169,7 +169,17 @@ function correctionProblem(state: InstallState, event: NewEvent): string | null 
 
 function foldLog(events: EffectiveEvent[], correctionIds: string[]): InstallState {
   const log = sortEvents(events);
-  const s: Omit<InstallState, 'step'> = {
+  const s = emptyFold();
+  const pressuresKpa: number[] = [];
+  for (const event of log) applyEvent(s, event, (kpa) => pressuresKpa.push(kpa));
+  return { step: nextStep(s), ...s, pressuresKpa, log, correctionIds };
+}
+
+/** What the fold keeps besides the log itself and the pressure series (which a stored summary may replace). */
+export type FoldCore = Omit<InstallState, 'step' | 'log' | 'correctionIds' | 'pressuresKpa'>;
+
+export function emptyFold(): FoldCore {
+  return {
     safetyAcknowledged: false,
     checksDone: false,
     dryRunStartedAt: null,
@@ -181,75 +191,78 @@ function foldLog(events: EffectiveEvent[], correctionIds: string[]): InstallStat
     inPositionAt: null,
     inflatedAt: null,
     inflatePressureKpa: null,
-    pressuresKpa: [],
     deflatedAt: null,
     inspection: null,
     signedOffAt: null,
-    startedAt: log[0]?.deviceTime ?? null,
-    log,
-    correctionIds,
+    startedAt: null,
   };
-  for (const { type, deviceTime: at, payload: p } of log) {
-    switch (type) {
-      case 'safety_acknowledged':
-        s.safetyAcknowledged = true;
-        break;
-      case 'checks_done':
-        s.checksDone = true;
-        break;
-      case 'dry_run_started':
-        s.dryRunStartedAt = at;
-        break;
-      case 'dry_run_finished':
-        s.dryRunSeconds = num(p.seconds);
-        break;
-      case 'conditions_recorded':
-        s.conditions = {
-          mixTempC: Number(p.mixTempC),
-          airTempC: num(p.airTempC),
-          prepMinutes: num(p.prepMinutes),
-          pipeTempC: Number(p.pipeTempC),
-          resinKitId: String(p.resinKitId),
-          packerId: String(p.packerId),
-          patchLengthMm: Number(p.patchLengthMm),
-        };
-        break;
-      case 'go_decision':
-        s.goDecision = { go: p.go === true, overrideReason: str(p.overrideReason), makerHoldMin: num(p.makerHoldMin), at };
-        break;
-      case 'resin_mixed':
-        s.mixedAt ??= at;
-        break;
-      case 'patch_loaded':
-        s.patchLoadedAt ??= at;
-        break;
-      case 'packer_in_position':
-        s.inPositionAt ??= at;
-        break;
-      case 'bladder_inflated':
-        s.inflatedAt ??= at;
-        s.inflatePressureKpa ??= num(p.pressureKpa);
-        pushPressure(s.pressuresKpa, p.pressureKpa);
-        break;
-      case 'pressure_reading':
-        pushPressure(s.pressuresKpa, p.pressureKpa);
-        break;
-      case 'bladder_deflated':
-        s.deflatedAt ??= at;
-        break;
-      case 'inspection_recorded':
-        s.inspection = { result: p.result === 'fail' ? 'fail' : 'pass', notes: str(p.notes), at };
-        break;
-      case 'signed_off':
-        s.signedOffAt ??= at;
-        break;
-    }
+}
+
+/**
+ * Folds one original event (corrections applied) into the state. Events must come in log order (device time,
+ * then receive time): the whole-log fold and the stored, one-tap-at-a-time fold both go through here.
+ */
+export function applyEvent(s: FoldCore, event: Pick<EffectiveEvent, 'type' | 'deviceTime' | 'payload'>, onPressure: (kpa: number) => void) {
+  const { type, deviceTime: at, payload: p } = event;
+  s.startedAt ??= at;
+  switch (type) {
+    case 'safety_acknowledged':
+      s.safetyAcknowledged = true;
+      break;
+    case 'checks_done':
+      s.checksDone = true;
+      break;
+    case 'dry_run_started':
+      s.dryRunStartedAt = at;
+      break;
+    case 'dry_run_finished':
+      s.dryRunSeconds = num(p.seconds);
+      break;
+    case 'conditions_recorded':
+      s.conditions = {
+        mixTempC: Number(p.mixTempC),
+        airTempC: num(p.airTempC),
+        prepMinutes: num(p.prepMinutes),
+        pipeTempC: Number(p.pipeTempC),
+        resinKitId: String(p.resinKitId),
+        packerId: String(p.packerId),
+        patchLengthMm: Number(p.patchLengthMm),
+      };
+      break;
+    case 'go_decision':
+      s.goDecision = { go: p.go === true, overrideReason: str(p.overrideReason), makerHoldMin: num(p.makerHoldMin), at };
+      break;
+    case 'resin_mixed':
+      s.mixedAt ??= at;
+      break;
+    case 'patch_loaded':
+      s.patchLoadedAt ??= at;
+      break;
+    case 'packer_in_position':
+      s.inPositionAt ??= at;
+      break;
+    case 'bladder_inflated':
+      s.inflatedAt ??= at;
+      s.inflatePressureKpa ??= num(p.pressureKpa);
+      pushPressure(onPressure, p.pressureKpa);
+      break;
+    case 'pressure_reading':
+      pushPressure(onPressure, p.pressureKpa);
+      break;
+    case 'bladder_deflated':
+      s.deflatedAt ??= at;
+      break;
+    case 'inspection_recorded':
+      s.inspection = { result: p.result === 'fail' ? 'fail' : 'pass', notes: str(p.notes), at };
+      break;
+    case 'signed_off':
+      s.signedOffAt ??= at;
+      break;
   }
-  return { step: nextStep(s), ...s };
 }
 
 /** The furthest step reached after mixing decides; before mixing, the first step not yet done. */
-function nextStep(s: Omit<InstallState, 'step'>): InstallStep {
+export function nextStep(s: FoldCore): InstallStep {
   if (s.signedOffAt) return 'done';
   if (s.inspection) return 'sign_off';
   if (s.deflatedAt) return 'inspect';
@@ -267,7 +280,7 @@ function nextStep(s: Omit<InstallState, 'step'>): InstallStep {
 const num = (value: unknown) => (typeof value === 'number' && Number.isFinite(value) ? value : null);
 const str = (value: unknown) => (typeof value === 'string' && value.length > 0 ? value : null);
 
-function pushPressure(list: number[], value: unknown) {
+function pushPressure(push: (kpa: number) => void, value: unknown) {
   const kpa = num(value);
-  if (kpa !== null) list.push(kpa);
+  if (kpa !== null) push(kpa);
 }

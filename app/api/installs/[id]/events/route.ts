@@ -1,8 +1,7 @@
 import { NextResponse } from 'next/server';
-import { requireUser } from '@/lib/auth/session';
+import { requireUserWithInstall } from '@/lib/auth/session';
 import { recordEvent } from '@/lib/data/install-events';
 import type { InstallEventRow } from '@/lib/data/installs';
-import { notFound } from '@/lib/errors';
 import { bodyOrUndefined, handle } from '@/lib/http';
 import { uuidSchema } from '@/lib/validation/common';
 
@@ -10,11 +9,11 @@ export type RecordEventResponse = { event: InstallEventRow };
 
 /** Records one tap; a replay of the same tap answers 200 with the stored event and writes nothing. */
 export const POST = handle(async (request: Request, { params }: { params: Promise<{ id: string }> }) => {
-  const user = await requireUser();
   const { id } = await params;
-  if (!uuidSchema.safeParse(id).success) throw notFound('Install');
+  // One query answers who is asking, their crews and the install's crews (401 first, then 404 / 403).
+  const { user, install } = await requireUserWithInstall(uuidSchema.safeParse(id).success ? id : null);
   // Unreadable JSON is validated like an empty body: a 400 with the fields it lacks.
   const body: unknown = await bodyOrUndefined(request);
-  const { event, created } = await recordEvent(user, id, body);
+  const { event, created } = await recordEvent(user, id, body, { install });
   return NextResponse.json({ event } satisfies RecordEventResponse, { status: created ? 201 : 200 });
 });
