@@ -6,7 +6,7 @@ set -uo pipefail
 source "$(dirname "${BASH_SOURCE[0]}")/common.sh"
 set -e
 
-if [ $# -eq 0 ]; then SUITES=(unit integration e2e); else SUITES=("$@"); fi
+if [ $# -eq 0 ]; then SUITES=(unit integration e2e bench); else SUITES=("$@"); fi
 REPORTS="$ROOT/.data/test-reports"
 rm -rf "$REPORTS"; mkdir -p "$REPORTS"
 
@@ -61,12 +61,19 @@ run_suite() {
       ensure_chromium &&
         fresh_database "${E2E_DB_NAME:-setline_e2e}" &&
         sequelize-cli db:seed:all >/dev/null &&
+        node scripts/derive-installs.mjs &&
         say "building for the browser tests (next build)" &&
         next build >/dev/null &&
         PLAYWRIGHT_JSON_OUTPUT_NAME="$REPORTS/e2e.json" playwright test --reporter=list,json
       ;;
+    bench)
+      # A short run of `npm run bench` (its own database and server; reuses the e2e build when there is one):
+      # every figure must come out, in the table and in the JSON; the goals are the full bench's business.
+      BENCH_SMOKE=1 BENCH_JSON="$ROOT/.data/bench-smoke.json" bash scripts/bench.sh >"$ROOT/.data/bench-smoke.md" &&
+        node scripts/bench/check-smoke.mjs "$ROOT/.data/bench-smoke.md" "$ROOT/.data/bench-smoke.json" "$REPORTS/bench.json"
+      ;;
     *)
-      say "unknown suite: $suite (unit | integration | e2e)"; false ;;
+      say "unknown suite: $suite (unit | integration | e2e | bench)"; false ;;
   esac
   local status=$?
   set -e
