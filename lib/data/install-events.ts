@@ -10,6 +10,7 @@ import { isSameEvent } from '@/lib/install/same-event';
 import { correctionTarget, deriveInstallState, orderProblem, type InstallState } from '@/lib/install/state';
 import { eventPayloadSchemas, parseEventBody } from '@/lib/validation/install-events';
 import { getCompany } from './company';
+import { notifyTap } from './live';
 import { findInstallFor, type InstallEventRow } from './installs';
 import { dayInZone } from '@/lib/dates';
 
@@ -101,6 +102,7 @@ async function recordInTransaction(user: SessionUser, installId: string, body: P
   const next = deriveInstallState([...stored.map((e) => e.get({ plain: true })), event.get({ plain: true })]);
   await updateSummary(user, install, next, body, t);
   await writeAudit(user, install, body, target, t);
+  await notifyTap(t, { eventId: event.id, step: next.step });
   return { event: event.get({ plain: true }), created: true };
 }
 
