@@ -16,7 +16,7 @@ async function expectStreamOpen(page: Page) {
   await expect(page.getByTestId('live-status')).toHaveAttribute('data-stream', 'live', { timeout: 20_000 });
 }
 
-test('the live board updates when a tablet in another browser taps, and drops a signed-off install to done today', async ({ browser }) => {
+test('the live board updates from the stream when a tablet in another browser taps', async ({ browser }) => {
   const officeContext = await browser.newContext();
   const foremanContext = await browser.newContext();
   const office = await officeContext.newPage();

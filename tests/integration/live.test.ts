@@ -4,9 +4,9 @@ import { GET as boardRoute } from '@/app/api/live/board/route';
 import { userFromClaims } from '@/lib/auth/session';
 import { LiveHub, closeLiveHub, liveHub } from '@/lib/live/hub';
 import { liveStreamResponse } from '@/lib/live/stream';
-import { User } from '@/models';
+import { Repair, User } from '@/models';
 import { call } from './helpers/call';
-import { body, postEvent, startInstall } from './helpers/installs';
+import { body, cleanInstall, postAll, postEvent, startInstall } from './helpers/installs';
 import { signInAs, signOut } from './helpers/session';
 import { makeInstallWorld, type InstallWorld } from './helpers/world';
 
@@ -262,6 +262,43 @@ describe('GET /api/live/board', () => {
       expect(row).toMatchObject({ step: 'checks', status: 'in_progress', crew: { id: w.crew.id }, job: { id: w.job.id }, inflateBy: null });
       expect(board.timeZone).toBe('America/Denver');
     }
+  });
+
+  it('runs inflate-by from the mix, deflate-after from the inflate, and moves a signed-off install to done today', async () => {
+    // A zone where it is mid-day now, so the install signed off 2½ hours ago (device time) was signed off today.
+    const offset = [...Array(27).keys()].map((k) => k - 12).find((h) => {
+      const hour = (new Date().getUTCHours() + h + 24) % 24;
+      return hour >= 8 && hour <= 20;
+    })!;
+    const zone = offset === 0 ? 'Etc/UTC' : `Etc/GMT${offset > 0 ? '-' : '+'}${Math.abs(offset)}`; // POSIX sign: Etc/GMT-3 is UTC+3
+    await w.company.update({ timeZone: zone });
+    const repair = await Repair.create({
+      companyId: w.company.id, jobId: w.job.id, segmentId: w.segment.id, distanceMm: 15000, defectType: 'hole', conditionGrade: 3, defectLengthMm: 300,
+    });
+    await signInAs(w.foreman);
+    const id = await startInstall({ ...w, repair });
+    const taps = cleanInstall(w);
+    const boardRow = async () => {
+      await signInAs(w.office);
+      const { body: board } = await call(boardRoute, '/api/live/board');
+      await signInAs(w.foreman);
+      return {
+        running: board.inProgress.find((i: { id: string }) => i.id === id),
+        done: board.doneToday.find((i: { id: string }) => i.id === id),
+      };
+    };
+    await postAll(id, taps.slice(0, 7)); // … resin mixed
+    const mixed = (await boardRow()).running;
+    expect(mixed).toMatchObject({ step: 'load', mixedAt: taps[6].deviceTime, deflateAfter: null });
+    expect(Date.parse(mixed.inflateBy)).toBeGreaterThan(Date.parse(mixed.mixedAt));
+    await postAll(id, taps.slice(7, 10)); // … bladder inflated
+    const held = (await boardRow()).running;
+    expect(held).toMatchObject({ step: 'hold', inflatedAt: taps[9].deviceTime, inflateBy: mixed.inflateBy });
+    expect(Date.parse(held.deflateAfter)).toBeGreaterThan(Date.parse(held.inflatedAt));
+    await postAll(id, taps.slice(10));
+    const signed = await boardRow();
+    expect(signed.running).toBeUndefined();
+    expect(signed.done).toMatchObject({ status: 'awaiting_review', step: 'done', finishedAt: taps[13].deviceTime });
   });
 
   it('refuses technicians and shows nothing of another company', async () => {
