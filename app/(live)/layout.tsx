@@ -14,7 +14,9 @@ export const dynamic = 'force-dynamic';
  */
 export default async function LiveLayout({ children }: { children: React.ReactNode }) {
   const user = await requirePageUser(LIVE_BOARD_ROLES);
-  const back = isDeskRole(user.role) ? { href: '/jobs', text: 'Back to the desk' } : { href: '/today', text: 'Back to Today' };
+  const back = isDeskRole(user.role)
+    ? { href: '/jobs', text: 'Back to the desk' }
+    : { href: '/today', text: 'Back to Today' };
   return (
     <div className="min-h-screen bg-slate-100">
       <header className="flex flex-wrap items-center justify-between gap-3 bg-slate-900 px-4 py-3 text-white">
@@ -23,12 +25,17 @@ export default async function LiveLayout({ children }: { children: React.ReactNo
             <Logo />
             <span className="text-lg font-bold text-white">Setline</span>
           </div>
-          <Link href={back.href} className="rounded-md px-3 py-2 text-sm font-medium text-slate-200 underline hover:bg-slate-800">
+          <Link
+            href={back.href}
+            className="rounded-md px-3 py-2 text-sm font-medium text-slate-200 underline hover:bg-slate-800"
+          >
             {back.text}
           </Link>
         </div>
         <div className="flex items-center gap-4 text-sm">
-          <span data-testid="user-name">{user.name} · {label(user.role)}</span>
+          <span data-testid="user-name">
+            {user.name} · {label(user.role)}
+          </span>
           <SignOutButton className="text-slate-200 underline hover:text-white" />
         </div>
       </header>

@@ -19,11 +19,21 @@ export function runningClock(install: BoardClockInput): BoardClock | null {
   if (install.deflatedAt) return null;
   if (install.inflatedAt) {
     return install.deflateAfter
-      ? { kind: 'deflate-after', label: 'Deflate after', start: new Date(install.inflatedAt), deadline: new Date(install.deflateAfter) }
+      ? {
+          kind: 'deflate-after',
+          label: 'Deflate after',
+          start: new Date(install.inflatedAt),
+          deadline: new Date(install.deflateAfter),
+        }
       : null;
   }
   if (install.mixedAt && install.inflateBy) {
-    return { kind: 'inflate-by', label: 'Inflate by', start: new Date(install.mixedAt), deadline: new Date(install.inflateBy) };
+    return {
+      kind: 'inflate-by',
+      label: 'Inflate by',
+      start: new Date(install.mixedAt),
+      deadline: new Date(install.inflateBy),
+    };
   }
   return null;
 }
@@ -41,6 +51,9 @@ const RANK: Record<CountdownTone, number> = { neutral: 0, near: 1, missed: 2 };
  * neutral, so one already amber or red when the board opens is raised too. A clock that moved on (the
  * bladder inflated, a new countdown) is a new key, so its own turn to amber is raised again.
  */
-export function alertsToRaise<T extends { key: string; tone: CountdownTone }>(seen: ReadonlyMap<string, CountdownTone>, now: readonly T[]): T[] {
+export function alertsToRaise<T extends { key: string; tone: CountdownTone }>(
+  seen: ReadonlyMap<string, CountdownTone>,
+  now: readonly T[],
+): T[] {
   return now.filter(({ key, tone }) => RANK[tone] > RANK[seen.get(key) ?? 'neutral']);
 }

@@ -32,7 +32,11 @@ const RETRY_AFTER_MS = 60_000;
  * Subscribes to the live stream while mounted. `onEvent` gets every tap the caller may see; `onResync` is
  * called when the stream (re)opens or the server says it was too far behind: data read before may be stale.
  */
-export function useLiveStream(onEvent: (event: LiveStreamEvent) => void, onResync?: () => void, url = '/api/live'): LiveStreamStatus {
+export function useLiveStream(
+  onEvent: (event: LiveStreamEvent) => void,
+  onResync?: () => void,
+  url = '/api/live',
+): LiveStreamStatus {
   const [status, setStatus] = useState<LiveStreamStatus>('connecting');
   const handlers = useRef({ onEvent, onResync });
   useEffect(() => {

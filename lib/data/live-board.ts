@@ -67,7 +67,12 @@ export async function getLiveBoard(user: SessionUser, now = new Date()): Promise
       [Op.and]: [{ [Op.or]: [{ status: 'in_progress' }, { finishedAt: { [Op.gte]: since } }] }],
     },
     include: [
-      { model: Job, as: 'job', attributes: ['id', 'number', 'title', 'crewId'], include: [{ model: Crew, as: 'crew', attributes: ['id', 'name'] }] },
+      {
+        model: Job,
+        as: 'job',
+        attributes: ['id', 'number', 'title', 'crewId'],
+        include: [{ model: Crew, as: 'crew', attributes: ['id', 'name'] }],
+      },
       { model: Crew, as: 'crew', attributes: ['id', 'name'] },
       {
         model: Repair,
@@ -97,7 +102,10 @@ export async function getLiveBoard(user: SessionUser, now = new Date()): Promise
       now,
     });
     const crew = install.crew ?? install.job.crew ?? null;
-    const lastEventAt = install.events.reduce<Date | null>((max, e) => (max === null || e.receivedAt > max ? e.receivedAt : max), null);
+    const lastEventAt = install.events.reduce<Date | null>(
+      (max, e) => (max === null || e.receivedAt > max ? e.receivedAt : max),
+      null,
+    );
     const item: LiveBoardInstall = {
       id: install.id,
       status: install.status,
@@ -128,10 +136,21 @@ export async function getLiveBoard(user: SessionUser, now = new Date()): Promise
     .sort((a, b) => (a.crew?.name ?? '').localeCompare(b.crew?.name ?? '') || a.job.number.localeCompare(b.job.number))
     .slice(0, BOARD_LIMIT);
   const doneToday = board
-    .filter((i) => i.status !== 'in_progress' && i.finishedAt !== null && dayInZone(new Date(i.finishedAt), company.timeZone) === today)
+    .filter(
+      (i) =>
+        i.status !== 'in_progress' &&
+        i.finishedAt !== null &&
+        dayInZone(new Date(i.finishedAt), company.timeZone) === today,
+    )
     .sort((a, b) => (b.finishedAt ?? '').localeCompare(a.finishedAt ?? ''))
     .slice(0, BOARD_LIMIT);
-  return { inProgress, doneToday, timeZone: company.timeZone, unitSystem: company.unitSystem, serverTime: now.toISOString() };
+  return {
+    inProgress,
+    doneToday,
+    timeZone: company.timeZone,
+    unitSystem: company.unitSystem,
+    serverTime: now.toISOString(),
+  };
 }
 
 type BoardRow = Install & {

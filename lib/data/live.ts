@@ -48,7 +48,11 @@ export async function notifyTap(t: Transaction, tap: { eventId: string; step: In
         'companyId', e.company_id, 'crewIds', json_build_array(i.crew_id, j.crew_id))::text)
        FROM install_events e JOIN installs i ON i.id = e.install_id JOIN jobs j ON j.id = i.job_id
       WHERE e.id = :eventId`,
-    { replacements: { channel: LIVE_CHANNEL, step: tap.step, eventId: tap.eventId }, transaction: t, type: QueryTypes.SELECT },
+    {
+      replacements: { channel: LIVE_CHANNEL, step: tap.step, eventId: tap.eventId },
+      transaction: t,
+      type: QueryTypes.SELECT,
+    },
   );
 }
 
@@ -89,7 +93,10 @@ export const REPLAY_LIMIT = 500;
  * The caller's events after `afterSeq`, in seq order, as the stream sent them (the step after each tap, from the
  * log up to it). `complete` is false when more than REPLAY_LIMIT were waiting (the client then refetches).
  */
-export async function replayLive(user: SessionUser, afterSeq: string): Promise<{ events: LiveEvent[]; complete: boolean }> {
+export async function replayLive(
+  user: SessionUser,
+  afterSeq: string,
+): Promise<{ events: LiveEvent[]; complete: boolean }> {
   const field = !isDeskRole(user.role);
   if (field && user.crewIds.length === 0) return { events: [], complete: true };
   const rows = await sequelize.query<ReplayRow>(
@@ -143,7 +150,10 @@ async function stepsAt(user: SessionUser, rows: ReplayRow[]): Promise<Map<string
        FROM install_events
       WHERE company_id = :companyId AND install_id IN (:installIds) AND seq <= CAST(:upTo AS bigint)
       ORDER BY seq`,
-    { replacements: { companyId: user.companyId, installIds, upTo: rows[rows.length - 1].seq }, type: QueryTypes.SELECT },
+    {
+      replacements: { companyId: user.companyId, installIds, upTo: rows[rows.length - 1].seq },
+      type: QueryTypes.SELECT,
+    },
   );
   const wanted = new Set(rows.map((r) => r.eventId));
   const sofar = new Map<string, LogRow[]>();
@@ -167,5 +177,3 @@ type LogRow = {
   correctsEventId: string | null;
   seq: string;
 };
-
-

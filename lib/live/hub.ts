@@ -124,7 +124,8 @@ export class LiveHub {
 export function parseNotice(payload: string): LiveNotice | null {
   try {
     const raw = JSON.parse(payload) as Record<string, unknown>;
-    if (typeof raw.seq !== 'string' || typeof raw.installId !== 'string' || typeof raw.companyId !== 'string') return null;
+    if (typeof raw.seq !== 'string' || typeof raw.installId !== 'string' || typeof raw.companyId !== 'string')
+      return null;
     const crewIds = Array.isArray(raw.crewIds) ? raw.crewIds.filter((id): id is string => typeof id === 'string') : [];
     return {
       ...(raw as LiveNotice),

@@ -104,7 +104,11 @@ test('the live board passes an accessibility check', async ({ page }) => {
 
 /** EventSources of the page that are open (readyState 1), counted by wrapping the constructor at start-up. */
 async function openStreams(page: Page) {
-  return page.evaluate(() => ((window as unknown as { __liveSources?: EventSource[] }).__liveSources ?? []).filter((s) => s.readyState === 1).length);
+  return page.evaluate(
+    () =>
+      ((window as unknown as { __liveSources?: EventSource[] }).__liveSources ?? []).filter((s) => s.readyState === 1)
+        .length,
+  );
 }
 
 /** Keeps a handle on every EventSource the context's pages open, so a test can see the stream is up before tapping. */

@@ -16,7 +16,7 @@ import { makeInstallWorld, type InstallWorld } from './helpers/world';
 
 type Frame = { id?: string; event?: string; data?: string; retry?: string; comment?: string };
 
-/** Reads an SSE body frame by frame (WHATWG HTML, "Server-sent events": fields per line, frames end at a blank line). */
+/** Reads an SSE body frame by frame (WHATWG HTML, "Server-sent events": a field per line, a blank line ends a frame). */
 function sseReader(response: Response, abort?: AbortController) {
   const frames: Frame[] = [];
   const waiters = new Set<() => void>();
@@ -85,7 +85,8 @@ async function openLive(headers: Record<string, string> = {}, query = '') {
   const response = await liveRoute(new Request(`http://localhost/api/live${query}`, { headers, signal: abort.signal }));
   expect(response.status).toBe(200);
   const stream = sseReader(response, abort);
-  const ready = query.includes('once') || headers['last-event-id'] ? null : await stream.next((f) => f.event === 'ready');
+  const ready =
+    query.includes('once') || headers['last-event-id'] ? null : await stream.next((f) => f.event === 'ready');
   return { response, ...stream, readySeq: ready?.id ?? null };
 }
 
@@ -118,7 +119,12 @@ describe('GET /api/live', () => {
     const live = await openLive();
     // A second app server: a hub with its own LISTEN connection, serving a stream of its own.
     const secondServer = new LiveHub(() => process.env.DATABASE_URL!);
-    const office = (await userFromClaims({ sub: w.office.id, companyId: w.company.id, role: 'office', tokenVersion: w.office.tokenVersion }))!;
+    const office = (await userFromClaims({
+      sub: w.office.id,
+      companyId: w.company.id,
+      role: 'office',
+      tokenVersion: w.office.tokenVersion,
+    }))!;
     const other = sseReader(await liveStreamResponse(office, { after: null, once: false, hub: secondServer }));
     await other.next((f) => f.event === 'ready');
 
@@ -130,7 +136,14 @@ describe('GET /api/live', () => {
     const frame = await live.next(live.isTap, 2000);
     const elapsed = Date.now() - started;
     const data = JSON.parse(frame.data!);
-    expect(data).toMatchObject({ id: installId, installId, type: 'safety_acknowledged', step: 'checks', eventId: posted.body.event.id, status: 'in_progress' });
+    expect(data).toMatchObject({
+      id: installId,
+      installId,
+      type: 'safety_acknowledged',
+      step: 'checks',
+      eventId: posted.body.event.id,
+      status: 'in_progress',
+    });
     expect(frame.id).toBe(data.seq);
     expect(BigInt(frame.id!)).toBeGreaterThan(BigInt(live.readySeq!));
     expect(elapsed).toBeLessThan(2000);
@@ -155,7 +168,19 @@ describe('GET /api/live', () => {
     const ownCrew = await openLive();
 
     await signInAs(w.foreman);
-    expect((await postEvent(installId, body('checks_done', 4, { items: [{ id: 'flow', ok: true }, { id: 'clean', ok: true }] }))).status).toBe(201);
+    expect(
+      (
+        await postEvent(
+          installId,
+          body('checks_done', 4, {
+            items: [
+              { id: 'flow', ok: true },
+              { id: 'clean', ok: true },
+            ],
+          }),
+        )
+      ).status,
+    ).toBe(201);
     const seen = await ownCrew.next(ownCrew.isTap, 2000);
     expect(JSON.parse(seen.data!)).toMatchObject({ id: installId, type: 'checks_done', step: 'dry_run' });
     // The same notice reached every stream of the process at once; a second more rules out a late one.
@@ -200,7 +225,13 @@ describe('GET /api/live', () => {
     // …and the same stream goes on live.
     await signInAs(w.foreman);
     const count = resumed.frames.length;
-    const conditions = { mixTempC: 20, pipeTempC: 20, resinKitId: w.resinKit.id, packerId: w.packer.id, patchLengthMm: 910 };
+    const conditions = {
+      mixTempC: 20,
+      pipeTempC: 20,
+      resinKitId: w.resinKit.id,
+      packerId: w.packer.id,
+      patchLengthMm: 910,
+    };
     expect((await postEvent(installId, body('conditions_recorded', 13, conditions))).status).toBe(201);
     const live = await resumed.next(resumed.isTap, 2000, count);
     expect(JSON.parse(live.data!)).toMatchObject({ type: 'conditions_recorded', step: 'mix' });
@@ -259,21 +290,36 @@ describe('GET /api/live/board', () => {
       const { status, body: board } = await call(boardRoute, '/api/live/board');
       expect(status).toBe(200);
       const row = board.inProgress.find((i: { id: string }) => i.id === installId);
-      expect(row).toMatchObject({ step: 'checks', status: 'in_progress', crew: { id: w.crew.id }, job: { id: w.job.id }, inflateBy: null });
+      expect(row).toMatchObject({
+        step: 'checks',
+        status: 'in_progress',
+        crew: { id: w.crew.id },
+        job: { id: w.job.id },
+        inflateBy: null,
+      });
       expect(board.timeZone).toBe('America/Denver');
     }
   });
 
-  it('runs inflate-by from the mix, deflate-after from the inflate, and moves a signed-off install to done today', async () => {
+  it('runs inflate-by from the mix, deflate-after from the inflate, moves a signed-off install to done today', async () => {
     // A zone where it is mid-day now, so the install signed off 2½ hours ago (device time) was signed off today.
-    const offset = [...Array(27).keys()].map((k) => k - 12).find((h) => {
-      const hour = (new Date().getUTCHours() + h + 24) % 24;
-      return hour >= 8 && hour <= 20;
-    })!;
-    const zone = offset === 0 ? 'Etc/UTC' : `Etc/GMT${offset > 0 ? '-' : '+'}${Math.abs(offset)}`; // POSIX sign: Etc/GMT-3 is UTC+3
+    const offset = [...Array(27).keys()]
+      .map((k) => k - 12)
+      .find((h) => {
+        const hour = (new Date().getUTCHours() + h + 24) % 24;
+        return hour >= 8 && hour <= 20;
+      })!;
+    // The IANA Etc zones carry the POSIX sign: Etc/GMT-3 is UTC+3.
+    const zone = offset === 0 ? 'Etc/UTC' : `Etc/GMT${offset > 0 ? '-' : '+'}${Math.abs(offset)}`;
     await w.company.update({ timeZone: zone });
     const repair = await Repair.create({
-      companyId: w.company.id, jobId: w.job.id, segmentId: w.segment.id, distanceMm: 15000, defectType: 'hole', conditionGrade: 3, defectLengthMm: 300,
+      companyId: w.company.id,
+      jobId: w.job.id,
+      segmentId: w.segment.id,
+      distanceMm: 15000,
+      defectType: 'hole',
+      conditionGrade: 3,
+      defectLengthMm: 300,
     });
     await signInAs(w.foreman);
     const id = await startInstall({ ...w, repair });

@@ -3,11 +3,17 @@
 import { useCallback, useEffect, useRef, useState, useSyncExternalStore } from 'react';
 import useSWR from 'swr';
 import { Countdown, useNow } from '@/components/install/countdown';
+import { buttonClass } from '@/components/ui/button';
 import { installAudioUnlock, soundAlarm } from '@/lib/client/alarm';
 import { alertsToRaise, runningClock } from '@/lib/client/board-alerts';
 import { countdownState, type CountdownTone } from '@/lib/client/countdown';
 import { fetchJson } from '@/lib/client/fetch-json';
-import { refreshIntervalFor, useLiveStream, type LiveStreamEvent, type LiveStreamStatus } from '@/lib/client/live-stream';
+import {
+  refreshIntervalFor,
+  useLiveStream,
+  type LiveStreamEvent,
+  type LiveStreamStatus,
+} from '@/lib/client/live-stream';
 import type { LiveBoard as Board, LiveBoardInstall } from '@/lib/data/live-board';
 import { formatInZone } from '@/lib/dates';
 import { label } from '@/lib/domain';
@@ -40,6 +46,12 @@ const STREAM_WORDS: Record<LiveStreamStatus, string> = {
 };
 
 type BoardAlert = { key: string; tone: CountdownTone; text: string };
+
+const ALERT_TONES: Record<CountdownTone, string> = {
+  neutral: 'border-slate-300 bg-white text-slate-800',
+  near: 'border-near-500 bg-near-100 text-near-700',
+  missed: 'border-missed-600 bg-missed-100 text-missed-700',
+};
 
 /** The live board: installs in progress with their running clock, alerts when one turns amber or red, done today. */
 export function LiveBoard({ initial }: { initial: Board }) {
@@ -76,7 +88,7 @@ export function LiveBoard({ initial }: { initial: Board }) {
           type="button"
           onClick={toggleMute}
           aria-pressed={muted}
-          className="h-9 rounded-md bg-white px-3 text-sm font-semibold text-slate-900 ring-1 ring-inset ring-slate-300 hover:bg-slate-100"
+          className={buttonClass('secondary')}
         >
           {muted ? 'Alert sound off' : 'Alert sound on'}
         </button>
@@ -88,7 +100,7 @@ export function LiveBoard({ initial }: { initial: Board }) {
             key={`${alert.key}:${alert.tone}`}
             data-testid="live-alert"
             data-tone={alert.tone}
-            className={`flex items-center justify-between gap-3 rounded-md border-2 p-3 font-semibold ${alert.tone === 'missed' ? 'border-missed-600 bg-missed-100 text-missed-700' : 'border-near-500 bg-near-100 text-near-700'}`}
+            className={`flex items-center justify-between gap-3 rounded-md border-2 p-3 font-semibold ${ALERT_TONES[alert.tone]}`}
           >
             <span>{alert.text}</span>
             <button type="button" onClick={() => dismiss(alert)} className="rounded px-2 py-1 text-sm underline">
@@ -132,11 +144,18 @@ export function LiveBoard({ initial }: { initial: Board }) {
             </thead>
             <tbody>
               {board.doneToday.map((install) => (
-                <tr key={install.id} data-testid="live-done" data-install-id={install.id} className="border-t border-slate-200">
+                <tr
+                  key={install.id}
+                  data-testid="live-done"
+                  data-install-id={install.id}
+                  className="border-t border-slate-200"
+                >
                   <td className="px-3 py-2">{install.crew?.name ?? 'No crew'}</td>
                   <td className="px-3 py-2">{install.job.number}</td>
                   <td className="px-3 py-2">{repairText(install, board)}</td>
-                  <td className="px-3 py-2">{install.finishedAt ? formatInZone(install.finishedAt, board.timeZone, 'HH:mm') : ''}</td>
+                  <td className="px-3 py-2">
+                    {install.finishedAt ? formatInZone(install.finishedAt, board.timeZone, 'HH:mm') : ''}
+                  </td>
                   <td className="px-3 py-2">{label(install.status)}</td>
                 </tr>
               ))}
@@ -146,9 +165,9 @@ export function LiveBoard({ initial }: { initial: Board }) {
       </section>
 
       <p className="text-sm text-slate-600">
-        The board follows the clocks the crews tap; it does not replace the crew&apos;s own watch on the work. Confined-space
-        entry, pressurised packers, resin handling and traffic control follow local codes, the resin and packer makers&apos;
-        instructions and the competent person on site.
+        The board follows the clocks the crews tap; it does not replace the crew&apos;s own watch on the work.
+        Confined-space entry, pressurised packers, resin handling and traffic control follow local codes, the resin and
+        packer makers&apos; instructions and the competent person on site.
       </p>
     </div>
   );
@@ -157,7 +176,12 @@ export function LiveBoard({ initial }: { initial: Board }) {
 function InstallCard({ install, board, now }: { install: LiveBoardInstall; board: Board; now: Date }) {
   const clock = runningClock(install);
   return (
-    <li data-testid="live-install" data-install-id={install.id} data-step={install.step} className="space-y-2 rounded-lg bg-white p-4 shadow-sm ring-1 ring-slate-200">
+    <li
+      data-testid="live-install"
+      data-install-id={install.id}
+      data-step={install.step}
+      className="space-y-2 rounded-lg bg-white p-4 shadow-sm ring-1 ring-slate-200"
+    >
       <div className="flex items-baseline justify-between gap-2">
         <h3 className="font-semibold">{install.crew?.name ?? 'No crew'}</h3>
         <span className="text-sm text-slate-600">
@@ -170,11 +194,19 @@ function InstallCard({ install, board, now }: { install: LiveBoardInstall; board
         {STEP_WORDS[install.step] ?? label(install.step)}
       </p>
       {clock && (
-        <Countdown label={clock.label} start={clock.start} deadline={clock.deadline} now={now} timeZone={board.timeZone} compact />
+        <Countdown
+          label={clock.label}
+          start={clock.start}
+          deadline={clock.deadline}
+          now={now}
+          timeZone={board.timeZone}
+          compact
+        />
       )}
       {install.inflatedAt && install.inflateBy && (
         <p className="text-sm text-slate-600">
-          Inflated {formatInZone(install.inflatedAt, board.timeZone, 'HH:mm')} (inflate by {formatInZone(install.inflateBy, board.timeZone, 'HH:mm')})
+          Inflated {formatInZone(install.inflatedAt, board.timeZone, 'HH:mm')} (inflate by{' '}
+          {formatInZone(install.inflateBy, board.timeZone, 'HH:mm')})
         </p>
       )}
     </li>
@@ -205,7 +237,9 @@ function useBoardAlerts(board: Board, now: Date) {
     const fresh = raised.map(({ key, tone, install, clock }) => ({
       key,
       tone,
-      text: `${install.crew?.name ?? 'No crew'}, job ${install.job.number}: ${clock.label.toLowerCase()} ${formatInZone(clock.deadline, board.timeZone, 'HH:mm')}, ${tone === 'missed' ? 'time is up' : 'deadline near'}`,
+      text:
+        `${install.crew?.name ?? 'No crew'}, job ${install.job.number}: ${clock.label.toLowerCase()} ` +
+        `${formatInZone(clock.deadline, board.timeZone, 'HH:mm')}, ${tone === 'missed' ? 'time is up' : 'deadline near'}`,
     }));
     setAlerts((list) => [...fresh, ...list.filter((a) => !fresh.some((f) => f.key === a.key))].slice(0, MAX_ALERTS));
     if (!mutedRef.current) soundAlarm(fresh.some((a) => a.tone === 'missed') ? 'urgent' : 'warning');
@@ -252,11 +286,15 @@ function writeMuted(value: boolean) {
 }
 
 function withStep(board: Board, event: LiveStreamEvent): Board {
-  const patchOne = (install: LiveBoardInstall) => (install.id === event.installId ? { ...install, step: event.step as LiveBoardInstall['step'], status: event.status } : install);
+  const patchOne = (install: LiveBoardInstall) =>
+    install.id === event.installId
+      ? { ...install, step: event.step as LiveBoardInstall['step'], status: event.status }
+      : install;
   return { ...board, inProgress: board.inProgress.map(patchOne) };
 }
 
 function repairText(install: LiveBoardInstall, board: Board) {
   const where = install.repair.segmentLabel ? ` in ${install.repair.segmentLabel}` : '';
-  return `Repair ${install.repair.position}: ${label(install.repair.defectType)} at ${formatLength(install.repair.distanceMm, board.unitSystem, 'long')}${where}`;
+  const distance = formatLength(install.repair.distanceMm, board.unitSystem, 'long');
+  return `Repair ${install.repair.position}: ${label(install.repair.defectType)} at ${distance}${where}`;
 }

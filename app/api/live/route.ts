@@ -15,5 +15,10 @@ export const GET = handle(async (request: Request) => {
   const query = parseOrThrow(liveQuerySchema, searchParamsOf(request));
   const header = request.headers.get('last-event-id');
   const after = header === null || header === '' ? (query.lastEventId ?? null) : parseOrThrow(liveSeqSchema, header);
-  return liveStreamResponse(user, { after, once: query.once !== undefined, signal: request.signal, claims: await getSessionClaims() });
+  return liveStreamResponse(user, {
+    after,
+    once: query.once !== undefined,
+    signal: request.signal,
+    claims: await getSessionClaims(),
+  });
 });

@@ -8,13 +8,20 @@ const at = (min: number) => new Date(T + min * 60_000).toISOString();
 const blank = { mixedAt: null, inflatedAt: null, deflatedAt: null, inflateBy: null, deflateAfter: null };
 
 describe('runningClock', () => {
-  it('runs inflate-by from the mix, deflate-after from the inflate, and nothing before the mix or after deflating', () => {
+  it('runs inflate-by from the mix, deflate-after from the inflate, nothing before the mix or after deflating', () => {
     expect(runningClock(blank)).toBeNull();
     expect(runningClock({ ...blank, mixedAt: at(0), inflateBy: at(30) })).toEqual({
-      kind: 'inflate-by', label: 'Inflate by', start: new Date(at(0)), deadline: new Date(at(30)),
+      kind: 'inflate-by',
+      label: 'Inflate by',
+      start: new Date(at(0)),
+      deadline: new Date(at(30)),
     });
     const held = { mixedAt: at(0), inflateBy: at(30), inflatedAt: at(20), deflateAfter: at(110), deflatedAt: null };
-    expect(runningClock(held)).toMatchObject({ kind: 'deflate-after', start: new Date(at(20)), deadline: new Date(at(110)) });
+    expect(runningClock(held)).toMatchObject({
+      kind: 'deflate-after',
+      start: new Date(at(20)),
+      deadline: new Date(at(110)),
+    });
     expect(runningClock({ ...held, deflatedAt: at(115) })).toBeNull();
     // Outside the resin's rated range the plan has no hold: no countdown rather than a wrong one.
     expect(runningClock({ ...held, deflateAfter: null })).toBeNull();
@@ -32,9 +39,22 @@ describe('runningClock', () => {
 
 describe('alertsToRaise', () => {
   it('raises an install that turns amber, then again when it turns red, never twice for the same tone', () => {
-    const seen = new Map<string, 'neutral' | 'near' | 'missed'>([['a:inflate-by', 'neutral'], ['b:inflate-by', 'near']]);
-    expect(alertsToRaise(seen, [{ key: 'a:inflate-by', tone: 'neutral' }, { key: 'b:inflate-by', tone: 'near' }])).toEqual([]);
-    expect(alertsToRaise(seen, [{ key: 'a:inflate-by', tone: 'near' }, { key: 'b:inflate-by', tone: 'missed' }])).toEqual([
+    const seen = new Map<string, 'neutral' | 'near' | 'missed'>([
+      ['a:inflate-by', 'neutral'],
+      ['b:inflate-by', 'near'],
+    ]);
+    expect(
+      alertsToRaise(seen, [
+        { key: 'a:inflate-by', tone: 'neutral' },
+        { key: 'b:inflate-by', tone: 'near' },
+      ]),
+    ).toEqual([]);
+    expect(
+      alertsToRaise(seen, [
+        { key: 'a:inflate-by', tone: 'near' },
+        { key: 'b:inflate-by', tone: 'missed' },
+      ]),
+    ).toEqual([
       { key: 'a:inflate-by', tone: 'near' },
       { key: 'b:inflate-by', tone: 'missed' },
     ]);
@@ -42,7 +62,12 @@ describe('alertsToRaise', () => {
 
   it('raises what is already amber or red when first seen, and a new clock of the same install afresh', () => {
     const seen = new Map<string, 'neutral' | 'near' | 'missed'>([['a:inflate-by', 'missed']]);
-    expect(alertsToRaise(seen, [{ key: 'c:inflate-by', tone: 'missed' }, { key: 'a:deflate-after', tone: 'near' }])).toEqual([
+    expect(
+      alertsToRaise(seen, [
+        { key: 'c:inflate-by', tone: 'missed' },
+        { key: 'a:deflate-after', tone: 'near' },
+      ]),
+    ).toEqual([
       { key: 'c:inflate-by', tone: 'missed' },
       { key: 'a:deflate-after', tone: 'near' },
     ]);
