@@ -13,6 +13,7 @@ const OFFICE_ITEMS: NavItem[] = [
   { href: '/customers', label: 'Customers' },
   { href: '/sites', label: 'Sites' },
   { href: '/schedule', label: 'Schedule' },
+  { href: '/live', label: 'Live' },
   { href: '/reviews', label: 'Review', countUrl: REVIEW_COUNT_URL },
   { href: '/invoices', label: 'Invoices' },
 ];

@@ -1,3 +1,4 @@
+import Link from 'next/link';
 import { Logo } from '@/components/shell/logo';
 import { SignOutButton } from '@/components/shell/sign-out-button';
 import { requirePageUser } from '@/lib/auth/session';
@@ -16,6 +17,11 @@ export default async function FieldLayout({ children }: { children: React.ReactN
           <span className="text-xl font-bold text-white">Setline</span>
         </div>
         <div className="flex items-center gap-4">
+          {user.role === 'foreman' && (
+            <Link href="/live" className="min-h-touch content-center rounded-md px-3 font-semibold underline hover:bg-slate-800">
+              Live board
+            </Link>
+          )}
           <span data-testid="user-name">{user.name} · {label(user.role)}</span>
           <SignOutButton className="min-h-touch rounded-md px-4 font-semibold ring-1 ring-slate-500 hover:bg-slate-800" />
         </div>

@@ -22,6 +22,7 @@ export function Countdown({
   deadline,
   now,
   timeZone,
+  compact = false,
 }: {
   label: string;
   start: Date;
@@ -29,11 +30,13 @@ export function Countdown({
   now: Date;
   /** The company's IANA zone for the clock time of the deadline (default: the tablet's). */
   timeZone?: string;
+  /** Smaller digits, for a board with many clocks on one screen. */
+  compact?: boolean;
 }) {
   const { tone, label: digits } = countdownState({ now, start, deadline });
   const style = TONES[tone];
   return (
-    <section className={`rounded-xl border-2 p-4 ${style.box}`} data-tone={tone} data-testid="countdown" aria-label={label}>
+    <section className={`rounded-xl border-2 ${compact ? 'p-3' : 'p-4'} ${style.box}`} data-tone={tone} data-testid="countdown" aria-label={label}>
       <div className="flex items-baseline justify-between gap-2">
         <h3 className="text-lg font-semibold text-slate-800">{label}</h3>
         <time className="text-base text-slate-600" dateTime={deadline.toISOString()} suppressHydrationWarning>
@@ -41,7 +44,11 @@ export function Countdown({
         </time>
       </div>
       {/* The server renders a moment earlier than the browser hydrates: the digits differ by design. */}
-      <p role="timer" className={`mt-1 text-5xl font-bold tabular-nums tracking-tight sm:text-6xl ${style.digits}`} suppressHydrationWarning>
+      <p
+        role="timer"
+        className={`mt-1 font-bold tabular-nums tracking-tight ${compact ? 'text-3xl' : 'text-5xl sm:text-6xl'} ${style.digits}`}
+        suppressHydrationWarning
+      >
         {digits}
       </p>
       {/* Announced when the tone changes only; reading every second would drown a screen reader. */}

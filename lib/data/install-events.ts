@@ -12,6 +12,7 @@ import { correctionTarget, orderProblem, type InstallState } from '@/lib/install
 import { eventPayloadSchemas, parseEventBody } from '@/lib/validation/install-events';
 import { getCompany } from './company';
 import { loadMaterials, rederive, rowOf, settingsOf } from './install-derive';
+import { notifyTap } from './live';
 import { findInstallFor, type InstallEventRow } from './installs';
 import { dayInZone } from '@/lib/dates';
 
@@ -138,6 +139,7 @@ async function recordInTransaction(user: SessionUser, installId: string, body: P
   }
   await updateSummary(user, install, next, body, t);
   await writeAudit(user, install, body, target, t);
+  await notifyTap(t, { eventId: event.id, step: next.state.step });
   return { event: plainEvent, created: true };
 }
 

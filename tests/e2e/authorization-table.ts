@@ -153,6 +153,11 @@ export const API: Record<string, Row> = {
   'DELETE /api/resin-systems/[id]': { expect: admin(200), clone: 'resin_systems' },
 
   'GET /api/schedule': { expect: signedIn(200) },
+  // The live stream: every signed-in user, each of their own company (field users their crews' installs only);
+  // `once` ends it after the first `ready`, so the matrix reads a whole answer.
+  'GET /api/live': { expect: signedIn(200), url: '/api/live?once=1' },
+  // The live board's data: the office and admins, and foremen for their crews; technicians are refused by role.
+  'GET /api/live/board': { expect: { ...signedIn(200), tech: 403, tech2: 403 } },
 
   'GET /api/segments': { expect: signedIn(200) },
   'POST /api/segments': { expect: deskCollection(400) },
@@ -233,6 +238,8 @@ export const PAGES: Record<string, Row> = {
   '/reviews': { expect: deskPage() },
   '/reviews/[installId]': { expect: deskPage(404) },
   '/schedule': { expect: deskPage() },
+  // The live board: desk roles and foremen (their crews' installs); technicians get the 403 page.
+  '/live': { expect: { ...deskPage(), foreman: 200 } },
   '/segments/new': { expect: deskPage(404), url: '/segments/new?siteId={site}' },
   '/segments/[id]': { expect: deskPage(404) },
   '/segments/[id]/edit': { expect: deskPage(404) },

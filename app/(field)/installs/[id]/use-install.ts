@@ -1,24 +1,37 @@
 'use client';
 
-import { useCallback, useEffect, useMemo, useState } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import useSWR from 'swr';
 import type { InstallViewResponse } from '@/app/api/installs/[id]/route';
 import { deriveInstallState, type InstallEventInput } from '@/lib/install/state';
 import { fetchJson } from '@/lib/client/fetch-json';
+import { refreshIntervalFor, useLiveStream } from '@/lib/client/live-stream';
 import { enqueueEvent, flushOutbox, listEntries, subscribe, type OutboxEntry, type OutboxUser } from '@/lib/client/outbox';
 import { serverNow } from '@/lib/client/server-clock';
 import type { InstallEventType } from '@/lib/domain';
 
 /**
- * The install as this tablet knows it: the server's view (SWR, revalidated every few seconds so a
- * second tablet shows the same clock) merged with taps still waiting in the on-device outbox.
+ * The install as this tablet knows it: the server's view (SWR, refetched when the live stream reports a tap
+ * on this install, so a second tablet shows the same clock; polled every few seconds without a stream) merged
+ * with taps still waiting in the on-device outbox.
  */
 export function useInstall(id: string, fallbackData: InstallViewResponse, viewer: OutboxUser) {
+  // Another tablet's tap on this install arrives on the live stream; without a stream the view polls.
+  const refetch = useRef<() => void>(() => undefined);
+  const live = useLiveStream(
+    (event) => {
+      if (event.installId === id) refetch.current();
+    },
+    () => refetch.current(),
+  );
   const { data, mutate } = useSWR<InstallViewResponse>(`/api/installs/${id}`, (url: string) => fetchJson<InstallViewResponse>(url), {
     fallbackData,
-    refreshInterval: 5000,
+    refreshInterval: refreshIntervalFor(live),
     revalidateOnFocus: true,
   });
+  useEffect(() => {
+    refetch.current = () => void mutate();
+  }, [mutate]);
   const view = data ?? fallbackData;
   const [entries, setEntries] = useState<OutboxEntry[]>([]);
 
