@@ -15,6 +15,7 @@ const OFFICE_ITEMS: NavItem[] = [
   { href: '/schedule', label: 'Schedule' },
   { href: '/reviews', label: 'Review', countUrl: REVIEW_COUNT_URL },
   { href: '/invoices', label: 'Invoices' },
+  { href: '/insights', label: 'Insights' },
 ];
 const ADMIN_ITEMS: NavItem[] = [{ href: '/admin', label: 'Company' }];
 
