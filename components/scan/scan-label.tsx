@@ -2,10 +2,11 @@
 
 import { useEffect, useRef, useState } from 'react';
 import { buttonClass } from '@/components/ui/button';
-import { Gs1Error, looksLikeGs1, parseGs1 } from '@/lib/scan/gs1';
 import { decodeImageFile, startCameraScan, type CameraScan } from '@/lib/client/barcode';
+import { Gs1Error } from '@/lib/scan/gs1';
+import { describeLabel, labelOf, type ScannedLabel } from '@/lib/scan/label';
 
-export type ScannedLabel = { raw: string; lot?: string; expiresOn?: string; gtin?: string };
+export type { ScannedLabel };
 
 /**
  * "Scan label": reads a resin kit's barcode with the camera (or from a photo) and hands back the lot (GS1 AI 10)
@@ -23,7 +24,7 @@ export function ScanLabel({ onScan, size = 'desk' }: { onScan: (label: ScannedLa
   const accept = (raw: string) => {
     try {
       const label = labelOf(raw);
-      setMessage({ text: describe(label), problem: false });
+      setMessage({ text: describeLabel(label), problem: false });
       onScan(label);
     } catch (error) {
       setMessage({ text: error instanceof Gs1Error ? `The label could not be read: ${error.message}` : 'The label could not be read.', problem: true });
@@ -96,21 +97,4 @@ export function ScanLabel({ onScan, size = 'desk' }: { onScan: (label: ScannedLa
       )}
     </div>
   );
-}
-
-/** What a scanned text says: GS1 data parsed, else the whole text taken as the lot. */
-export function labelOf(raw: string): ScannedLabel {
-  if (looksLikeGs1(raw)) {
-    const parsed = parseGs1(raw);
-    if (!parsed.lot && !parsed.expiresOn) throw new Gs1Error('it carries no lot (10) or expiry (17).');
-    return { raw, lot: parsed.lot, expiresOn: parsed.expiresOn, gtin: parsed.gtin };
-  }
-  const lot = raw.trim();
-  if (!/^[\x21-\x7e]{1,40}$/.test(lot)) throw new Gs1Error('it is not a lot number.');
-  return { raw, lot };
-}
-
-function describe(label: ScannedLabel) {
-  const parts = [label.lot && `lot ${label.lot}`, label.expiresOn && `use by ${label.expiresOn}`].filter(Boolean);
-  return `Read ${parts.join(', ')}.`;
 }
