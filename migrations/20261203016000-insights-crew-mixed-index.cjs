@@ -5,7 +5,10 @@
 module.exports = {
   async up(queryInterface) {
     await queryInterface.sequelize.transaction(async (transaction) => {
-      await queryInterface.addIndex('installs', ['company_id', 'crew_id', 'mixed_at'], { name: 'installs_company_crew_mixed_at', transaction });
+      await queryInterface.addIndex('installs', ['company_id', 'crew_id', 'mixed_at'], {
+        name: 'installs_company_crew_mixed_at',
+        transaction,
+      });
     });
   },
 

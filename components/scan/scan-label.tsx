@@ -12,7 +12,13 @@ export type { ScannedLabel };
  * "Scan label": reads a resin kit's barcode with the camera (or from a photo) and hands back the lot (GS1 AI 10)
  * and the expiry (AI 17). A barcode without GS1 data is taken as the lot itself. Typing stays possible beside it.
  */
-export function ScanLabel({ onScan, size = 'desk' }: { onScan: (label: ScannedLabel) => void; size?: 'desk' | 'field' }) {
+export function ScanLabel({
+  onScan,
+  size = 'desk',
+}: {
+  onScan: (label: ScannedLabel) => void;
+  size?: 'desk' | 'field';
+}) {
   const [scanning, setScanning] = useState(false);
   const [message, setMessage] = useState<{ text: string; problem: boolean } | null>(null);
   const video = useRef<HTMLVideoElement>(null);
@@ -27,7 +33,11 @@ export function ScanLabel({ onScan, size = 'desk' }: { onScan: (label: ScannedLa
       setMessage({ text: describeLabel(label), problem: false });
       onScan(label);
     } catch (error) {
-      setMessage({ text: error instanceof Gs1Error ? `The label could not be read: ${error.message}` : 'The label could not be read.', problem: true });
+      setMessage({
+        text:
+          error instanceof Gs1Error ? `The label could not be read: ${error.message}` : 'The label could not be read.',
+        problem: true,
+      });
     }
   };
 
@@ -44,7 +54,10 @@ export function ScanLabel({ onScan, size = 'desk' }: { onScan: (label: ScannedLa
       });
     } catch {
       setScanning(false);
-      setMessage({ text: 'The camera could not be opened. Allow the camera, scan from a photo, or type the lot.', problem: true });
+      setMessage({
+        text: 'The camera could not be opened. Allow the camera, scan from a photo, or type the lot.',
+        problem: true,
+      });
     }
   };
 
@@ -60,7 +73,10 @@ export function ScanLabel({ onScan, size = 'desk' }: { onScan: (label: ScannedLa
     try {
       accept(await decodeImageFile(file));
     } catch {
-      setMessage({ text: 'No barcode found in that photo. Try again closer and sharper, or type the lot.', problem: true });
+      setMessage({
+        text: 'No barcode found in that photo. Try again closer and sharper, or type the lot.',
+        problem: true,
+      });
     } finally {
       if (photo.current) photo.current.value = '';
     }
@@ -69,7 +85,11 @@ export function ScanLabel({ onScan, size = 'desk' }: { onScan: (label: ScannedLa
   return (
     <div className="space-y-2" data-testid="scan-label">
       <div className="flex flex-wrap gap-2">
-        <button type="button" className={buttonClass('secondary', size)} onClick={() => void (scanning ? closeCamera() : openCamera())}>
+        <button
+          type="button"
+          className={buttonClass('secondary', size)}
+          onClick={() => void (scanning ? closeCamera() : openCamera())}
+        >
           {scanning ? 'Stop scanning' : 'Scan label'}
         </button>
         <button type="button" className={buttonClass('ghost', size)} onClick={() => photo.current?.click()}>
@@ -88,10 +108,20 @@ export function ScanLabel({ onScan, size = 'desk' }: { onScan: (label: ScannedLa
         />
       </div>
       {scanning && (
-        <video ref={video} className="aspect-video w-full max-w-md rounded-md bg-slate-900" muted playsInline aria-label="Camera view of the label" />
+        <video
+          ref={video}
+          className="aspect-video w-full max-w-md rounded-md bg-slate-900"
+          muted
+          playsInline
+          aria-label="Camera view of the label"
+        />
       )}
       {message && (
-        <p role={message.problem ? 'alert' : 'status'} className={`text-sm font-medium ${message.problem ? 'text-missed-700' : 'text-slate-700'}`} data-testid="scan-message">
+        <p
+          role={message.problem ? 'alert' : 'status'}
+          className={`text-sm font-medium ${message.problem ? 'text-missed-700' : 'text-slate-700'}`}
+          data-testid="scan-message"
+        >
           {message.text}
         </p>
       )}

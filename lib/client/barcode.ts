@@ -25,7 +25,10 @@ async function platformDetector(): Promise<Detector | null> {
 
 /** ZXing with the GS1 hint, so FNC1 comes back as GS (ASCII 29) and the element strings can be split. */
 async function zxingReader() {
-  const [{ BrowserMultiFormatReader }, { BarcodeFormat, DecodeHintType }] = await Promise.all([import('@zxing/browser'), import('@zxing/library')]);
+  const [{ BrowserMultiFormatReader }, { BarcodeFormat, DecodeHintType }] = await Promise.all([
+    import('@zxing/browser'),
+    import('@zxing/library'),
+  ]);
   const hints = new Map<HintType, unknown>([
     [DecodeHintType.POSSIBLE_FORMATS, [BarcodeFormat.CODE_128, BarcodeFormat.DATA_MATRIX, BarcodeFormat.QR_CODE]],
     [DecodeHintType.ASSUME_GS1, true],
@@ -53,7 +56,9 @@ export async function decodeImageFile(file: Blob): Promise<string> {
 export async function startCameraScan(video: HTMLVideoElement, onText: (text: string) => void): Promise<CameraScan> {
   const detector = await platformDetector();
   if (!detector) {
-    const controls = await (await zxingReader()).decodeFromVideoDevice(undefined, video, (result) => {
+    const controls = await (
+      await zxingReader()
+    ).decodeFromVideoDevice(undefined, video, (result) => {
       if (result) onText(result.getText());
     });
     return { stop: () => controls.stop() };

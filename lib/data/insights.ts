@@ -46,7 +46,13 @@ export type Insights = {
     bins: { bin: PressureBin; installs: number }[];
   };
   weekly: InsightsWeek[];
-  byCrew: { crewId: string | null; crewName: string | null; installs: number; flagged: number; medianInflateMarginMin: number | null }[];
+  byCrew: {
+    crewId: string | null;
+    crewName: string | null;
+    installs: number;
+    flagged: number;
+    medianInflateMarginMin: number | null;
+  }[];
 };
 
 export type InsightsWeek = {
@@ -78,13 +84,22 @@ export async function getInsights(user: SessionUser, query: InsightsQuery, now =
   const period = resolvePeriod(query, dayInZone(now, timeZone));
   let crew: Insights['crew'] = null;
   if (query.crewId) {
-    const row = await Crew.findOne({ where: { id: query.crewId, companyId: user.companyId }, attributes: ['id', 'name'] });
+    const row = await Crew.findOne({
+      where: { id: query.crewId, companyId: user.companyId },
+      attributes: ['id', 'name'],
+    });
     if (!row) throw notFound('Crew');
     crew = { id: row.id, name: row.name };
   }
   const [row] = await sequelize.query<AggregateRow>(INSIGHTS_SQL, {
     type: QueryTypes.SELECT,
-    replacements: { companyId: user.companyId, tz: timeZone, from: period.from, to: period.to, crewId: crew?.id ?? null },
+    replacements: {
+      companyId: user.companyId,
+      tz: timeZone,
+      from: period.from,
+      to: period.to,
+      crewId: crew?.id ?? null,
+    },
   });
   const binsOf = <B extends string>(names: readonly B[], counts: Record<string, number> | null) =>
     names.map((bin) => ({ bin, installs: Number(counts?.[bin] ?? 0) }));
@@ -137,36 +152,69 @@ export function resolvePeriod(query: Pick<InsightsQuery, 'from' | 'to'>, today: 
   const to = query.to ?? (query.from && query.from > today ? query.from : today);
   const from = query.from ?? shiftDay(to, -83);
   const days = (Date.parse(to) - Date.parse(from)) / 86_400_000 + 1;
-  if (days < 1) throw new AppError(400, 'Invalid input — to: The period ends before it starts', { to: ['The period ends before it starts'] });
+  if (days < 1)
+    throw new AppError(400, 'Invalid input — to: The period ends before it starts', {
+      to: ['The period ends before it starts'],
+    });
   if (days > MAX_INSIGHTS_DAYS) {
-    throw new AppError(400, 'Invalid input — to: Choose a period of at most two years', { to: ['Choose a period of at most two years'] });
+    throw new AppError(400, 'Invalid input — to: Choose a period of at most two years', {
+      to: ['Choose a period of at most two years'],
+    });
   }
   return { from, to };
 }
 
-const shiftDay = (day: string, days: number) => new Date(Date.parse(`${day}T00:00:00Z`) + days * 86_400_000).toISOString().slice(0, 10);
-const num = (value: string | number | null | undefined) => (value === null || value === undefined ? null : Number(value));
+const shiftDay = (day: string, days: number) =>
+  new Date(Date.parse(`${day}T00:00:00Z`) + days * 86_400_000).toISOString().slice(0, 10);
+const num = (value: string | number | null | undefined) =>
+  value === null || value === undefined ? null : Number(value);
 const numbers = (counts: Record<string, number | string> | null | undefined) =>
   Object.fromEntries(Object.entries(counts ?? {}).map(([key, value]) => [key, Number(value)]));
 
 type Num = string | number | null;
 type AggregateRow = {
-  installs: Num; flagged: Num; by_flag: Record<string, number> | null; median_margin: Num; worst_margin: Num;
-  margin_bins: Record<string, number> | null; hold_measured: Num; hold_short: Num; hold_median_kept: Num;
-  hold_median_planned: Num; hold_worst_shortfall: Num; pressure_measured: Num; pressure_above: Num; pressure_below: Num;
-  pressure_median_pct: Num; pressure_bins: Record<string, number> | null;
-  weekly: { week_start: string; installs: Num; flagged: Num; by_flag: Record<string, number> | null; median_margin: Num;
-    worst_margin: Num; hold_kept: Num; hold_planned: Num }[] | null;
-  by_crew: { crew_id: string | null; crew_name: string | null; installs: Num; flagged: Num; median_margin: Num }[] | null;
+  installs: Num;
+  flagged: Num;
+  by_flag: Record<string, number> | null;
+  median_margin: Num;
+  worst_margin: Num;
+  margin_bins: Record<string, number> | null;
+  hold_measured: Num;
+  hold_short: Num;
+  hold_median_kept: Num;
+  hold_median_planned: Num;
+  hold_worst_shortfall: Num;
+  pressure_measured: Num;
+  pressure_above: Num;
+  pressure_below: Num;
+  pressure_median_pct: Num;
+  pressure_bins: Record<string, number> | null;
+  weekly:
+    | {
+        week_start: string;
+        installs: Num;
+        flagged: Num;
+        by_flag: Record<string, number> | null;
+        median_margin: Num;
+        worst_margin: Num;
+        hold_kept: Num;
+        hold_planned: Num;
+      }[]
+    | null;
+  by_crew:
+    { crew_id: string | null; crew_name: string | null; installs: Num; flagged: Num; median_margin: Num }[] | null;
 };
 
 // Day boundaries are the company's: a local day D runs from D 00:00 to D+1 00:00 in :tz, turned into instants with
 // `timestamp AT TIME ZONE`, so the (company_id, crew_id, mixed_at) index serves the range. Weeks are ISO weeks
 // (Monday) of the local time. Planned hold = deflate-after − inflated (the hold with the company's reserve, as the
-// tablet's countdown had it), else the stored hold_planned_min.
+// tablet's countdown had it), else the stored hold_planned_min. The stored flag kinds are those of the last tap;
+// time passing adds one: mixed, never inflated, and the inflate-by time gone is a late inflate (as the review shows).
 const INSIGHTS_SQL = `
 WITH base AS (
-  SELECT i.id, i.crew_id, i.flag_kinds,
+  SELECT i.id, i.crew_id,
+    CASE WHEN i.inflated_at IS NULL AND i.inflate_by < now() AND NOT ('late-inflate' = ANY (i.flag_kinds))
+      THEN i.flag_kinds || ARRAY['late-inflate']::varchar(32)[] ELSE i.flag_kinds END AS flag_kinds,
     date_trunc('week', i.mixed_at AT TIME ZONE :tz)::date AS week_start,
     EXTRACT(EPOCH FROM (i.inflate_by - i.inflated_at)) / 60 AS margin_min,
     EXTRACT(EPOCH FROM (i.deflated_at - i.inflated_at)) / 60 AS kept_min,

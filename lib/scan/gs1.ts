@@ -52,8 +52,28 @@ const AIS: Record<string, Spec> = {
 
 // Element strings of these two-digit prefixes have a predefined total length and are never followed by FNC1 (§7.8.5).
 const PREDEFINED_TOTAL: Record<string, number> = {
-  '00': 20, '01': 16, '02': 16, '03': 16, '04': 18, '11': 8, '12': 8, '13': 8, '14': 8, '15': 8, '16': 8, '17': 8,
-  '18': 8, '19': 8, '20': 4, '31': 10, '32': 10, '33': 10, '34': 10, '35': 10, '36': 10, '41': 16,
+  '00': 20,
+  '01': 16,
+  '02': 16,
+  '03': 16,
+  '04': 18,
+  '11': 8,
+  '12': 8,
+  '13': 8,
+  '14': 8,
+  '15': 8,
+  '16': 8,
+  '17': 8,
+  '18': 8,
+  '19': 8,
+  '20': 4,
+  '31': 10,
+  '32': 10,
+  '33': 10,
+  '34': 10,
+  '35': 10,
+  '36': 10,
+  '41': 16,
 };
 
 /** How many digits the AI starting `text` has, from its first two digits (§3.2). */
@@ -112,12 +132,16 @@ function parseRaw(input: string): Gs1Element[] {
   const elements: Gs1Element[] = [];
   let at = 0;
   while (at < text.length) {
-    if (text[at] === GS) { at += 1; continue; }
+    if (text[at] === GS) {
+      at += 1;
+      continue;
+    }
     const rest = text.slice(at);
     if (!/^\d{2}/.test(rest)) throw new Gs1Error(`Expected an application identifier at position ${at + 1}.`);
     const aiLen = aiLength(rest);
     const ai = rest.slice(0, aiLen);
-    if (!/^\d+$/.test(ai) || ai.length !== aiLen) throw new Gs1Error(`Incomplete application identifier at position ${at + 1}.`);
+    if (!/^\d+$/.test(ai) || ai.length !== aiLen)
+      throw new Gs1Error(`Incomplete application identifier at position ${at + 1}.`);
     const total = PREDEFINED_TOTAL[ai.slice(0, 2)];
     let value: string;
     if (total !== undefined) {
@@ -137,8 +161,10 @@ function parseRaw(input: string): Gs1Element[] {
 function element(ai: string, value: string): Gs1Element {
   const spec = AIS[ai];
   if (value.length === 0) throw new Gs1Error(`AI (${ai}) has no data.`);
-  if (spec && 'fixed' in spec && value.length !== spec.fixed) throw new Gs1Error(`AI (${ai}) needs ${spec.fixed} characters.`);
-  if (spec && 'max' in spec && value.length > spec.max) throw new Gs1Error(`AI (${ai}) takes at most ${spec.max} characters.`);
+  if (spec && 'fixed' in spec && value.length !== spec.fixed)
+    throw new Gs1Error(`AI (${ai}) needs ${spec.fixed} characters.`);
+  if (spec && 'max' in spec && value.length > spec.max)
+    throw new Gs1Error(`AI (${ai}) takes at most ${spec.max} characters.`);
   // GS1 AI encodable character set 82 (§7.11): printable ASCII without space, ", #, $, @, [, \, ], ^, `, {, |, }, ~.
   if (!/^[!"%-?A-Z_a-z]+$/.test(value)) throw new Gs1Error(`AI (${ai}) holds characters GS1 does not allow.`);
   return { ai, value, known: Boolean(spec) };

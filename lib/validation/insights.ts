@@ -23,7 +23,8 @@ export const insightsQuerySchema = z
     if (!query.from || !query.to) return;
     const days = dayNumber(query.to) - dayNumber(query.from) + 1;
     if (days < 1) ctx.addIssue({ code: 'custom', path: ['to'], message: 'The period ends before it starts' });
-    else if (days > MAX_INSIGHTS_DAYS) ctx.addIssue({ code: 'custom', path: ['to'], message: 'Choose a period of at most two years' });
+    else if (days > MAX_INSIGHTS_DAYS)
+      ctx.addIssue({ code: 'custom', path: ['to'], message: 'Choose a period of at most two years' });
   });
 
 export type InsightsQuery = z.output<typeof insightsQuerySchema>;

@@ -29,13 +29,27 @@ const require = createRequire(import.meta.url);
 const { buildCompany, insertCompany } = require('../../scripts/demo/build.cjs');
 const mainSpec = require('../../scripts/demo/scenario-main.cjs');
 
-type Resin = { ref_temp_c: number; pot_life_min: number; hold_min: number; sensitivity_kind: string; doubling_c: number | null; activation_energy_kj: number | null };
-type JobSpec = { crew: number; day: number; install?: { shape?: string; mix_temp_c: number; pipe_temp_c: number; resin?: number }; repairs: unknown[] };
+type Resin = {
+  ref_temp_c: number;
+  pot_life_min: number;
+  hold_min: number;
+  sensitivity_kind: string;
+  doubling_c: number | null;
+  activation_energy_kj: number | null;
+};
+type JobSpec = {
+  crew: number;
+  day: number;
+  install?: { shape?: string; mix_temp_c: number; pipe_temp_c: number; resin?: number };
+  repairs: unknown[];
+};
 
 const factor = (resin: Resin, tempC: number) =>
   resin.sensitivity_kind === 'doubling'
     ? 2 ** ((resin.ref_temp_c - tempC) / resin.doubling_c!)
-    : Math.exp(((resin.activation_energy_kj! * 1000) / 8.314462618) * (1 / (tempC + 273.15) - 1 / (resin.ref_temp_c + 273.15)));
+    : Math.exp(
+        ((resin.activation_energy_kj! * 1000) / 8.314462618) * (1 / (tempC + 273.15) - 1 / (resin.ref_temp_c + 273.15)),
+      );
 const median = (values: number[]) => {
   const sorted = [...values].sort((a, b) => a - b);
   const mid = Math.floor(sorted.length / 2);
@@ -81,9 +95,15 @@ describe('insights over the demo contractor', () => {
       ...mainSpec,
       company: { ...mainSpec.company, name: `${mainSpec.company.name} ${tag}` },
       users: mainSpec.users.map((u: { email: string }) => ({ ...u, email: u.email.replace('@', `+${tag}@`) })),
-      crews: mainSpec.crews.map((c: { members: string[] }) => ({ ...c, members: c.members.map((m) => m.replace('@', `+${tag}@`)) })),
+      crews: mainSpec.crews.map((c: { members: string[] }) => ({
+        ...c,
+        members: c.members.map((m) => m.replace('@', `+${tag}@`)),
+      })),
     };
-    const tables = buildCompany(spec, { now, passwordHash: '$2b$12$KmJz3YskaqY8OKmQx6oTFeAcu9JZGSd7OaZFf2WtWTl6JKW3RK0sG' });
+    const tables = buildCompany(spec, {
+      now,
+      passwordHash: '$2b$12$KmJz3YskaqY8OKmQx6oTFeAcu9JZGSd7OaZFf2WtWTl6JKW3RK0sG',
+    });
     await sequelize.transaction((transaction) => insertCompany(sequelize.getQueryInterface(), tables, transaction));
     const companyId = tables.companies[0].id as string;
     timeZone = mainSpec.company.time_zone;
@@ -108,7 +128,11 @@ describe('insights over the demo contractor', () => {
     expect(body.medianInflateMarginMin).toBeCloseTo(24, 1);
     expect(body.worstInflateMarginMin).toBeCloseTo(-6, 1);
     expect(body.marginBins).toEqual([
-      { bin: 'late', installs: 1 }, { bin: '0-5', installs: 0 }, { bin: '5-10', installs: 0 }, { bin: '10-20', installs: 2 }, { bin: '20+', installs: 6 },
+      { bin: 'late', installs: 1 },
+      { bin: '0-5', installs: 0 },
+      { bin: '5-10', installs: 0 },
+      { bin: '10-20', installs: 2 },
+      { bin: '20+', installs: 6 },
     ]);
     // Early deflate at 16 °C: kept 0.6 × 118.76 = 71.3 of 1.1 × 118.76 = 130.6 planned → 59.4 min short.
     expect(body.hold).toMatchObject({ measured: 9, short: 1 });
@@ -119,14 +143,21 @@ describe('insights over the demo contractor', () => {
     expect(body.pressure.bins.find((b: { bin: string }) => b.bin === '50-75%').installs).toBe(9); // 103 of 150…200 kPa
     for (const week of body.weekly as { weekStart: string; installs: number; flagged: number }[]) {
       const inWeek = rows.filter((r) => r.week === week.weekStart);
-      expect([week.weekStart, week.installs, week.flagged]).toEqual([week.weekStart, inWeek.length, inWeek.filter((r) => r.flags.length).length]);
+      expect([week.weekStart, week.installs, week.flagged]).toEqual([
+        week.weekStart,
+        inWeek.length,
+        inWeek.filter((r) => r.flags.length).length,
+      ]);
     }
     expect(body.weekly.reduce((sum: number, w: { installs: number }) => sum + w.installs, 0)).toBe(9);
   });
 
   it('narrows to the North crew: five installs, the late inflate its only flag', async () => {
     await signInAs(office);
-    const { body } = await call(insightsRoute, `/api/insights?from=${dayInZone(now, timeZone, -30)}&to=${dayInZone(now, timeZone)}&crewId=${north.id}`);
+    const { body } = await call(
+      insightsRoute,
+      `/api/insights?from=${dayInZone(now, timeZone, -30)}&to=${dayInZone(now, timeZone)}&crewId=${north.id}`,
+    );
     const rows = expectedInstalls(timeZone, now).filter((r) => r.crew === 0);
     expect(body).toMatchObject({ installs: rows.length, flagged: 1, byFlag: { 'late-inflate': 1 } });
     expect(rows).toHaveLength(5);
@@ -151,21 +182,40 @@ async function deriveDemo(companyId: string) {
   }
   console.warn('insights-demo: no tap-path derivation on this branch; deriving with deriveInstallState + installClock');
   for (const install of await Install.findAll({ where: { companyId } })) {
-    const events = await InstallEvent.findAll({ where: { companyId, installId: install.id }, order: [['deviceTime', 'ASC'], ['receivedAt', 'ASC']] });
+    const events = await InstallEvent.findAll({
+      where: { companyId, installId: install.id },
+      order: [
+        ['deviceTime', 'ASC'],
+        ['receivedAt', 'ASC'],
+      ],
+    });
     const state = deriveInstallState(events.map((e) => e.get({ plain: true })));
     const [resin, packer, kit] = await Promise.all([
-      ResinSystem.findByPk(install.resinSystemId!), Packer.findByPk(install.packerId!), ResinKit.findByPk(install.resinKitId!),
+      ResinSystem.findByPk(install.resinSystemId!),
+      Packer.findByPk(install.packerId!),
+      ResinKit.findByPk(install.resinKitId!),
     ]);
     const { plan, flags } = installClock({
-      state, resin: resinClockSpec(resin!), packer: { minPressureKpa: packer!.minPressureKpa, maxPressureKpa: packer!.maxPressureKpa },
-      resinKitExpiresOn: kit!.expiresOn, safetyMargin: company.workingWindowSafetyMargin, holdReserve: company.holdReserve,
-      unitSystem: company.unitSystem, now: new Date(),
+      state,
+      resin: resinClockSpec(resin!),
+      packer: { minPressureKpa: packer!.minPressureKpa, maxPressureKpa: packer!.maxPressureKpa },
+      resinKitExpiresOn: kit!.expiresOn,
+      safetyMargin: company.workingWindowSafetyMargin,
+      holdReserve: company.holdReserve,
+      unitSystem: company.unitSystem,
+      now: new Date(),
     });
     await install.update({
-      mixedAt: state.mixedAt, inflatedAt: state.inflatedAt, deflatedAt: state.deflatedAt, inflateBy: plan?.inflateBy ?? null,
-      deflateAfter: plan?.deflateAfter ?? null, holdPlannedMin: plan?.keepInflatedMin ?? null,
+      mixedAt: state.mixedAt,
+      inflatedAt: state.inflatedAt,
+      deflatedAt: state.deflatedAt,
+      inflateBy: plan?.inflateBy ?? null,
+      deflateAfter: plan?.deflateAfter ?? null,
+      holdPlannedMin: plan?.keepInflatedMin ?? null,
       maxPressureKpa: state.pressuresKpa.length ? Math.max(...state.pressuresKpa) : null,
-      flagKinds: flags.map((f) => f.kind), worstSeverity: worstSeverity(flags), derivedAt: new Date(),
+      flagKinds: flags.map((f) => f.kind),
+      worstSeverity: worstSeverity(flags),
+      derivedAt: new Date(),
     });
   }
   return 'test stand-in';

@@ -1,7 +1,18 @@
 'use client';
 
 import {
-  Bar, BarChart, CartesianGrid, Cell, Legend, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis,
+  Bar,
+  BarChart,
+  CartesianGrid,
+  Cell,
+  Legend,
+  Line,
+  LineChart,
+  ReferenceLine,
+  ResponsiveContainer,
+  Tooltip,
+  XAxis,
+  YAxis,
 } from 'recharts';
 import type { Insights } from '@/lib/data/insights';
 import { FLAG_LABELS } from '@/lib/review/flags';
@@ -28,7 +39,9 @@ const LABELS: Record<ChartKind, string> = {
 export function InsightsChartView({ kind, insights }: InsightsChartProps) {
   return (
     <div role="img" aria-label={`${LABELS[kind]} The numbers are in the table beside it.`} className="h-64 w-full">
-      <ResponsiveContainer width="100%" height="100%">{chartOf(kind, insights)}</ResponsiveContainer>
+      <ResponsiveContainer width="100%" height="100%">
+        {chartOf(kind, insights)}
+      </ResponsiveContainer>
     </div>
   );
 }
@@ -72,8 +85,20 @@ function chartOf(kind: ChartKind, insights: Insights) {
           <Tooltip />
           <Legend />
           <ReferenceLine y={0} stroke={MISSED} strokeDasharray="4 2" />
-          <Line dataKey="medianInflateMarginMin" name="Median margin" stroke={BRAND} connectNulls isAnimationActive={false} />
-          <Line dataKey="worstInflateMarginMin" name="Worst margin" stroke={MISSED} connectNulls isAnimationActive={false} />
+          <Line
+            dataKey="medianInflateMarginMin"
+            name="Median margin"
+            stroke={BRAND}
+            connectNulls
+            isAnimationActive={false}
+          />
+          <Line
+            dataKey="worstInflateMarginMin"
+            name="Worst margin"
+            stroke={MISSED}
+            connectNulls
+            isAnimationActive={false}
+          />
         </LineChart>
       ) : (
         <BarChart data={insights.marginBins} {...common}>
@@ -81,7 +106,9 @@ function chartOf(kind: ChartKind, insights: Insights) {
           <YAxis allowDecimals={false} width={32} />
           <Tooltip />
           <Bar dataKey="installs" name="Installs" isAnimationActive={false}>
-            {insights.marginBins.map((b) => <Cell key={b.bin} fill={b.bin === 'late' ? MISSED : b.bin === '0-5' ? NEAR : SAFE} />)}
+            {insights.marginBins.map((b) => (
+              <Cell key={b.bin} fill={b.bin === 'late' ? MISSED : b.bin === '0-5' ? NEAR : SAFE} />
+            ))}
           </Bar>
         </BarChart>
       );
@@ -104,7 +131,9 @@ function chartOf(kind: ChartKind, insights: Insights) {
           <YAxis allowDecimals={false} width={32} />
           <Tooltip />
           <Bar dataKey="installs" name="Installs" isAnimationActive={false}>
-            {insights.pressure.bins.map((b) => <Cell key={b.bin} fill={b.bin === '>100%' ? MISSED : b.bin === '90-100%' ? NEAR : SAFE} />)}
+            {insights.pressure.bins.map((b) => (
+              <Cell key={b.bin} fill={b.bin === '>100%' ? MISSED : b.bin === '90-100%' ? NEAR : SAFE} />
+            ))}
           </Bar>
         </BarChart>
       );

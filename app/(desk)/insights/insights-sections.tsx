@@ -14,29 +14,51 @@ export function InsightsSections({ insights }: { insights: Insights }) {
         <Table head={['Week of', 'Installs', 'Flagged', 'Median margin', 'Worst margin']}>
           {insights.weekly.map((w) => (
             <tr key={w.weekStart}>
-              <td>{w.weekStart}</td><td>{w.installs}</td><td>{w.flagged}</td>
-              <td>{minutes(w.medianInflateMarginMin)}</td><td>{minutes(w.worstInflateMarginMin)}</td>
+              <td>{w.weekStart}</td>
+              <td>{w.installs}</td>
+              <td>{w.flagged}</td>
+              <td>{minutes(w.medianInflateMarginMin)}</td>
+              <td>{minutes(w.worstInflateMarginMin)}</td>
             </tr>
           ))}
         </Table>
       </Section>
-      <Section id="flags" title="Share of installs with each flag" chart={<InsightsChart kind="flags" insights={insights} />}>
-        {flagRows.length === 0 ? <p className="text-sm text-slate-600">No flags in this period.</p> : (
+      <Section
+        id="flags"
+        title="Share of installs with each flag"
+        chart={<InsightsChart kind="flags" insights={insights} />}
+      >
+        {flagRows.length === 0 ? (
+          <p className="text-sm text-slate-600">No flags in this period.</p>
+        ) : (
           <Table head={['Flag', 'Installs', 'Share']}>
             {flagRows.map(([kind, n]) => (
-              <tr key={kind}><td>{FLAG_LABELS[kind as keyof typeof FLAG_LABELS] ?? kind}</td><td>{n}</td><td>{share(n)}</td></tr>
+              <tr key={kind}>
+                <td>{FLAG_LABELS[kind as keyof typeof FLAG_LABELS] ?? kind}</td>
+                <td>{n}</td>
+                <td>{share(n)}</td>
+              </tr>
             ))}
           </Table>
         )}
       </Section>
       <Section id="margin" title="Margin left at inflation" chart={<InsightsChart kind="margin" insights={insights} />}>
-        <p className="text-sm text-slate-600">Minutes from “bladder inflated” to the inflate-by time; below zero the bladder went up late.</p>
+        <p className="text-sm text-slate-600">
+          Minutes from “bladder inflated” to the inflate-by time; below zero the bladder went up late.
+        </p>
         <dl className="grid grid-cols-2 gap-x-4 text-sm" data-testid="insights-margin">
-          <dt className="text-slate-600">Median</dt><dd className="font-semibold">{minutes(insights.medianInflateMarginMin)}</dd>
-          <dt className="text-slate-600">Worst</dt><dd className="font-semibold">{minutes(insights.worstInflateMarginMin)}</dd>
+          <dt className="text-slate-600">Median</dt>
+          <dd className="font-semibold">{minutes(insights.medianInflateMarginMin)}</dd>
+          <dt className="text-slate-600">Worst</dt>
+          <dd className="font-semibold">{minutes(insights.worstInflateMarginMin)}</dd>
         </dl>
         <Table head={['Margin (min)', 'Installs']}>
-          {insights.marginBins.map((b) => <tr key={b.bin}><td>{b.bin === 'late' ? 'late (below 0)' : b.bin}</td><td>{b.installs}</td></tr>)}
+          {insights.marginBins.map((b) => (
+            <tr key={b.bin}>
+              <td>{b.bin === 'late' ? 'late (below 0)' : b.bin}</td>
+              <td>{b.installs}</td>
+            </tr>
+          ))}
         </Table>
       </Section>
       <Section id="hold" title="Hold kept against plan" chart={<InsightsChart kind="hold" insights={insights} />}>
@@ -44,32 +66,57 @@ export function InsightsSections({ insights }: { insights: Insights }) {
           Minutes the bladder stayed inflated against the planned hold (with the company&apos;s hold reserve).
         </p>
         <dl className="grid grid-cols-2 gap-x-4 text-sm">
-          <dt className="text-slate-600">Installs measured</dt><dd>{hold.measured}</dd>
-          <dt className="text-slate-600">Deflated before the plan</dt><dd>{hold.short}</dd>
-          <dt className="text-slate-600">Median kept</dt><dd>{minutes(hold.medianKeptMin)}</dd>
-          <dt className="text-slate-600">Median planned</dt><dd>{minutes(hold.medianPlannedMin)}</dd>
-          <dt className="text-slate-600">Worst, kept − planned</dt><dd>{minutes(hold.worstShortfallMin)}</dd>
+          <dt className="text-slate-600">Installs measured</dt>
+          <dd>{hold.measured}</dd>
+          <dt className="text-slate-600">Deflated before the plan</dt>
+          <dd>{hold.short}</dd>
+          <dt className="text-slate-600">Median kept</dt>
+          <dd>{minutes(hold.medianKeptMin)}</dd>
+          <dt className="text-slate-600">Median planned</dt>
+          <dd>{minutes(hold.medianPlannedMin)}</dd>
+          <dt className="text-slate-600">Worst, kept − planned</dt>
+          <dd>{minutes(hold.worstShortfallMin)}</dd>
         </dl>
       </Section>
-      <Section id="pressure" title="Pressure against the packer's rating" chart={<InsightsChart kind="pressure" insights={insights} />}>
-        <p className="text-sm text-slate-600">The highest reading of each install as a share of its packer&apos;s maximum rating.</p>
+      <Section
+        id="pressure"
+        title="Pressure against the packer's rating"
+        chart={<InsightsChart kind="pressure" insights={insights} />}
+      >
+        <p className="text-sm text-slate-600">
+          The highest reading of each install as a share of its packer&apos;s maximum rating.
+        </p>
         <dl className="grid grid-cols-2 gap-x-4 text-sm">
-          <dt className="text-slate-600">Installs measured</dt><dd>{pressure.measured}</dd>
-          <dt className="text-slate-600">Above the maximum</dt><dd>{pressure.aboveMax}</dd>
-          <dt className="text-slate-600">All readings below the minimum</dt><dd>{pressure.belowMin}</dd>
-          <dt className="text-slate-600">Median share of the maximum</dt><dd>{pressure.medianPctOfMax === null ? '–' : `${pressure.medianPctOfMax} %`}</dd>
+          <dt className="text-slate-600">Installs measured</dt>
+          <dd>{pressure.measured}</dd>
+          <dt className="text-slate-600">Above the maximum</dt>
+          <dd>{pressure.aboveMax}</dd>
+          <dt className="text-slate-600">All readings below the minimum</dt>
+          <dd>{pressure.belowMin}</dd>
+          <dt className="text-slate-600">Median share of the maximum</dt>
+          <dd>{pressure.medianPctOfMax === null ? '–' : `${pressure.medianPctOfMax} %`}</dd>
         </dl>
         <Table head={['Share of maximum', 'Installs']}>
-          {pressure.bins.map((b) => <tr key={b.bin}><td>{b.bin}</td><td>{b.installs}</td></tr>)}
+          {pressure.bins.map((b) => (
+            <tr key={b.bin}>
+              <td>{b.bin}</td>
+              <td>{b.installs}</td>
+            </tr>
+          ))}
         </Table>
       </Section>
       {!insights.crew && insights.byCrew.length > 0 && (
         <section aria-labelledby="insights-crews" className="rounded-lg bg-white p-4 ring-1 ring-slate-200">
-          <h2 id="insights-crews" className="mb-2 text-lg font-semibold">By crew</h2>
+          <h2 id="insights-crews" className="mb-2 text-lg font-semibold">
+            By crew
+          </h2>
           <Table head={['Crew', 'Installs', 'Flagged', 'Median margin']}>
             {insights.byCrew.map((c) => (
               <tr key={c.crewId ?? 'none'}>
-                <td>{c.crewName ?? 'No crew'}</td><td>{c.installs}</td><td>{c.flagged}</td><td>{minutes(c.medianInflateMarginMin)}</td>
+                <td>{c.crewName ?? 'No crew'}</td>
+                <td>{c.installs}</td>
+                <td>{c.flagged}</td>
+                <td>{minutes(c.medianInflateMarginMin)}</td>
               </tr>
             ))}
           </Table>
@@ -81,8 +128,14 @@ export function InsightsSections({ insights }: { insights: Insights }) {
 
 function Section({ id, title, chart, children }: { id: string; title: string; chart: ReactNode; children: ReactNode }) {
   return (
-    <section aria-labelledby={`insights-${id}`} data-testid={`insights-${id}`} className="rounded-lg bg-white p-4 ring-1 ring-slate-200">
-      <h2 id={`insights-${id}`} className="mb-3 text-lg font-semibold">{title}</h2>
+    <section
+      aria-labelledby={`insights-${id}`}
+      data-testid={`insights-${id}`}
+      className="rounded-lg bg-white p-4 ring-1 ring-slate-200"
+    >
+      <h2 id={`insights-${id}`} className="mb-3 text-lg font-semibold">
+        {title}
+      </h2>
       <div className="grid gap-4 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
         <div className="min-h-64">{chart}</div>
         <div className="space-y-3">{children}</div>
@@ -94,7 +147,15 @@ function Section({ id, title, chart, children }: { id: string; title: string; ch
 function Table({ head, children }: { head: string[]; children: ReactNode }) {
   return (
     <table className="w-full text-left text-sm [&_td]:border-t [&_td]:border-slate-100 [&_td]:py-1 [&_td]:pr-3">
-      <thead><tr>{head.map((h) => <th key={h} scope="col" className="pb-1 pr-3 font-semibold text-slate-700">{h}</th>)}</tr></thead>
+      <thead>
+        <tr>
+          {head.map((h) => (
+            <th key={h} scope="col" className="pb-1 pr-3 font-semibold text-slate-700">
+              {h}
+            </th>
+          ))}
+        </tr>
+      </thead>
       <tbody>{children}</tbody>
     </table>
   );

@@ -36,30 +36,60 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
         <h1 className="text-2xl font-bold">Insights</h1>
         <p className="max-w-3xl text-sm text-slate-600">
           What the installs of a period teach: how often each flag came up, how much of the working window was left when
-          the bladder went up, whether the hold was kept, and how the pressure sat against the packer&apos;s rating. Installs
-          count in the week their resin was mixed ({insights.timeZone}).
+          the bladder went up, whether the hold was kept, and how the pressure sat against the packer&apos;s rating.
+          Installs count in the week their resin was mixed ({insights.timeZone}).
         </p>
       </div>
-      <form method="get" className="flex flex-wrap items-end gap-3 rounded-lg bg-white p-3 ring-1 ring-slate-200" aria-label="Period and crew">
+      <form
+        method="get"
+        className="flex flex-wrap items-end gap-3 rounded-lg bg-white p-3 ring-1 ring-slate-200"
+        aria-label="Period and crew"
+      >
         <label className="text-sm font-medium">
           From
-          <input type="date" name="from" defaultValue={period.from} className="mt-1 block h-9 rounded-md border border-slate-300 px-2" />
+          <input
+            type="date"
+            name="from"
+            defaultValue={period.from}
+            className="mt-1 block h-9 rounded-md border border-slate-300 px-2"
+          />
         </label>
         <label className="text-sm font-medium">
           To
-          <input type="date" name="to" defaultValue={period.to} className="mt-1 block h-9 rounded-md border border-slate-300 px-2" />
+          <input
+            type="date"
+            name="to"
+            defaultValue={period.to}
+            className="mt-1 block h-9 rounded-md border border-slate-300 px-2"
+          />
         </label>
         <label className="text-sm font-medium">
           Crew
-          <select name="crewId" defaultValue={crew?.id ?? ''} className="mt-1 block h-9 rounded-md border border-slate-300 px-2">
+          <select
+            name="crewId"
+            defaultValue={crew?.id ?? ''}
+            className="mt-1 block h-9 rounded-md border border-slate-300 px-2"
+          >
             <option value="">All crews</option>
-            {crews.items.map((c) => <option key={c.id} value={c.id}>{c.name}</option>)}
+            {crews.items.map((c) => (
+              <option key={c.id} value={c.id}>
+                {c.name}
+              </option>
+            ))}
           </select>
         </label>
-        <button type="submit" className={buttonClass()}>Show</button>
-        <a href={csvHref} download className={buttonClass('secondary')} data-testid="insights-csv">Download CSV</a>
+        <button type="submit" className={buttonClass()}>
+          Show
+        </button>
+        <a href={csvHref} download className={buttonClass('secondary')} data-testid="insights-csv">
+          Download CSV
+        </a>
       </form>
-      {problem && <p role="alert" className="text-sm font-medium text-missed-700">{problem} Showing {period.from} to {period.to} instead.</p>}
+      {problem && (
+        <p role="alert" className="text-sm font-medium text-missed-700">
+          {problem} Showing {period.from} to {period.to} instead.
+        </p>
+      )}
       <p className="text-sm" data-testid="insights-summary">
         <strong>{insights.installs}</strong> installs mixed from {period.from} to {period.to}
         {crew ? ` by ${crew.name}` : ' by all crews'}; <strong>{insights.flagged}</strong> with a flag.

@@ -1,6 +1,13 @@
-import bwipjs from 'bwip-js';
+import bwipjs from 'bwip-js/node';
 import sharp from 'sharp';
-import { BarcodeFormat, BinaryBitmap, DecodeHintType, HybridBinarizer, MultiFormatReader, RGBLuminanceSource } from '@zxing/library';
+import {
+  BarcodeFormat,
+  BinaryBitmap,
+  DecodeHintType,
+  HybridBinarizer,
+  MultiFormatReader,
+  RGBLuminanceSource,
+} from '@zxing/library';
 import { describe, expect, it } from 'vitest';
 import { labelOf } from '@/lib/scan/label';
 
@@ -10,8 +17,20 @@ import { labelOf } from '@/lib/scan/label';
 const TODAY = new Date('2026-12-02T12:00:00Z');
 
 async function decode(bcid: string, text: string) {
-  const png = await bwipjs.toBuffer({ bcid, text, scale: 3, height: 12, paddingwidth: 12, paddingheight: 12, backgroundcolor: 'FFFFFF' });
-  const { data, info } = await sharp(png).flatten({ background: '#ffffff' }).greyscale().raw().toBuffer({ resolveWithObject: true });
+  const png = await bwipjs.toBuffer({
+    bcid,
+    text,
+    scale: 3,
+    height: 12,
+    paddingwidth: 12,
+    paddingheight: 12,
+    backgroundcolor: 'FFFFFF',
+  });
+  const { data, info } = await sharp(png)
+    .flatten({ background: '#ffffff' })
+    .greyscale()
+    .raw()
+    .toBuffer({ resolveWithObject: true });
   expect(info.channels).toBe(1);
   const source = new RGBLuminanceSource(new Uint8ClampedArray(data), info.width, info.height);
   const reader = new MultiFormatReader();

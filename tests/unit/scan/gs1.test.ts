@@ -28,7 +28,10 @@ describe('parseGs1: human-readable form', () => {
     expect(parseGs1('(10)LOT-7 (17)270615', TODAY)).toMatchObject({ lot: 'LOT-7', expiresOn: '2027-06-15' });
   });
   it('reads serial (21) and production date (11)', () => {
-    expect(parseGs1(`(01)${GTIN}(11)260510(21)SN0042`, TODAY)).toMatchObject({ producedOn: '2026-05-10', serial: 'SN0042' });
+    expect(parseGs1(`(01)${GTIN}(11)260510(21)SN0042`, TODAY)).toMatchObject({
+      producedOn: '2026-05-10',
+      serial: 'SN0042',
+    });
   });
   it('refuses text that is not element strings', () => {
     expect(() => parseGs1('(10)ABC(17)2711', TODAY)).toThrow(/6 characters/);

@@ -18,8 +18,12 @@ export function KitLabelScan({ editingId, onLabel }: { editingId?: string; onLab
     setExisting(null);
     if (!label.lot) return;
     try {
-      const list = await fetchJson<KitList>(`/api/resin-kits?${new URLSearchParams({ q: label.lot, archived: 'true', pageSize: '100' })}`);
-      const same = list.items.find((kit) => kit.lot.trim().toUpperCase() === label.lot!.trim().toUpperCase() && kit.id !== editingId);
+      const list = await fetchJson<KitList>(
+        `/api/resin-kits?${new URLSearchParams({ q: label.lot, archived: 'true', pageSize: '100' })}`,
+      );
+      const same = list.items.find(
+        (kit) => kit.lot.trim().toUpperCase() === label.lot!.trim().toUpperCase() && kit.id !== editingId,
+      );
       setExisting(same ?? null);
     } catch {
       // The form's own save still refuses a duplicate; the hint is a convenience.
@@ -30,7 +34,11 @@ export function KitLabelScan({ editingId, onLabel }: { editingId?: string; onLab
       <ScanLabel onScan={(label) => void onScan(label)} />
       {existing && (
         <p role="alert" className="rounded-md bg-near-100 p-2 text-sm" data-testid="kit-scan-existing">
-          Lot {existing.lot} is already on file: <Link href={`/admin/resin-kits/${existing.id}`} className="font-semibold text-brand-700 underline">open that kit</Link> instead of adding it again.
+          Lot {existing.lot} is already on file:{' '}
+          <Link href={`/admin/resin-kits/${existing.id}`} className="font-semibold text-brand-700 underline">
+            open that kit
+          </Link>{' '}
+          instead of adding it again.
         </p>
       )}
     </div>

@@ -8,7 +8,15 @@ import type { KitOption } from './step-conditions';
  * "Scan label" on the conditions step: a known lot picks its kit; an unknown one says so and leaves the list to
  * pick from (kits are added by the office, which can open the new-kit form with the scanned lot and expiry).
  */
-export function KitScan({ kits, onPick, canAddKit = false }: { kits: KitOption[]; onPick: (kitId: string) => void; canAddKit?: boolean }) {
+export function KitScan({
+  kits,
+  onPick,
+  canAddKit = false,
+}: {
+  kits: KitOption[];
+  onPick: (kitId: string) => void;
+  canAddKit?: boolean;
+}) {
   const [unknown, setUnknown] = useState<ScannedLabel | null>(null);
   const [note, setNote] = useState<string | null>(null);
 
@@ -27,21 +35,34 @@ export function KitScan({ kits, onPick, canAddKit = false }: { kits: KitOption[]
     }
     onPick(kit.id);
     const differs = label.expiresOn && label.expiresOn !== kit.expiresOn;
-    setNote(`Kit ${kit.lot} chosen.${differs ? ` The label says use by ${label.expiresOn}; the kit on file says ${kit.expiresOn}: tell the office.` : ''}`);
+    setNote(
+      `Kit ${kit.lot} chosen.${differs ? ` The label says use by ${label.expiresOn}; the kit on file says ${kit.expiresOn}: tell the office.` : ''}`,
+    );
   };
 
-  const addHref = unknown && `/admin/resin-kits/new?${new URLSearchParams({ lot: unknown.lot ?? '', ...(unknown.expiresOn ? { expiresOn: unknown.expiresOn } : {}) })}`;
+  const addHref =
+    unknown &&
+    `/admin/resin-kits/new?${new URLSearchParams({ lot: unknown.lot ?? '', ...(unknown.expiresOn ? { expiresOn: unknown.expiresOn } : {}) })}`;
   return (
     <div className="space-y-2">
       <ScanLabel onScan={onScan} size="field" />
-      {note && <p role="status" className="text-base font-medium text-safe-700" data-testid="kit-scan-note">{note}</p>}
+      {note && (
+        <p role="status" className="text-base font-medium text-safe-700" data-testid="kit-scan-note">
+          {note}
+        </p>
+      )}
       {unknown && (
         <div role="alert" className="rounded-md bg-near-100 p-3 text-base" data-testid="kit-scan-unknown">
           <p>
-            Lot <strong>{unknown.lot ?? '(none on the label)'}</strong>{unknown.expiresOn ? `, use by ${unknown.expiresOn},` : ''} is not among the
-            company&apos;s kits. Pick the kit from the list below, or ask the office to add this lot.
+            Lot <strong>{unknown.lot ?? '(none on the label)'}</strong>
+            {unknown.expiresOn ? `, use by ${unknown.expiresOn},` : ''} is not among the company&apos;s kits. Pick the
+            kit from the list below, or ask the office to add this lot.
           </p>
-          {canAddKit && addHref && <a href={addHref} className="mt-1 inline-block font-semibold text-brand-700 underline">Add this kit</a>}
+          {canAddKit && addHref && (
+            <a href={addHref} className="mt-1 inline-block font-semibold text-brand-700 underline">
+              Add this kit
+            </a>
+          )}
         </div>
       )}
     </div>
