@@ -16,6 +16,7 @@ const OFFICE_ITEMS: NavItem[] = [
   { href: '/live', label: 'Live' },
   { href: '/reviews', label: 'Review', countUrl: REVIEW_COUNT_URL },
   { href: '/invoices', label: 'Invoices' },
+  { href: '/insights', label: 'Insights' },
 ];
 const ADMIN_ITEMS: NavItem[] = [{ href: '/admin', label: 'Company' }];
 

@@ -98,6 +98,8 @@ export const API: Record<string, Row> = {
 
   'GET /api/health': { expect: all(200) },
 
+  // The office's figures: another company's office reads its own company's (no row of ours is named).
+  'GET /api/insights': { expect: deskCollection(200), url: '/api/insights?from=2026-01-05&to=2026-03-01' },
   'GET /api/installs': { expect: signedIn(200) },
   'POST /api/installs': { expect: signedIn(400) },
   'GET /api/installs/[id]': { expect: crewInstall(200) },
@@ -225,6 +227,7 @@ export const PAGES: Record<string, Row> = {
   '/customers/new': { expect: deskPage() },
   '/customers/[id]': { expect: deskPage(404) },
   '/customers/[id]/edit': { expect: deskPage(404) },
+  '/insights': { expect: deskPage() },
   '/invoices': { expect: deskPage() },
   '/jobs': { expect: deskPage() },
   '/jobs/new': { expect: deskPage() },

@@ -9,16 +9,21 @@ import { FormField, errorProps, inputClass, textareaClass } from '@/components/d
 import { Button } from '@/components/ui/button';
 import { unitLabels, type UnitSystem } from '@/lib/units';
 import { resinKitFormSchema, type ResinKitFormValues, type ResinKitInput } from '@/lib/validation/resin-kits';
+import { KitLabelScan } from './kit-label-scan';
 
 /** New or edit: the quantity on hand in US gallons or litres as the company works; stored in litres. */
-export function ResinKitForm({ id, initial, unitSystem, systems }: {
+export function ResinKitForm({ id, initial, unitSystem, systems, scanned }: {
   id?: string; initial?: ResinKitFormValues; unitSystem: UnitSystem; systems: { id: string; name: string }[];
+  /** Lot and expiry read from a label elsewhere (the new-kit link of the conditions step). */
+  scanned?: { lot?: string; expiresOn?: string };
 }) {
   const router = useRouter();
   const [message, setMessage] = useState<string>();
-  const { register, handleSubmit, setError, formState: { errors, isSubmitting, dirtyFields } } = useForm<ResinKitFormValues, unknown, ResinKitInput>({
+  const { register, handleSubmit, setError, setValue, formState: { errors, isSubmitting, dirtyFields } } = useForm<ResinKitFormValues, unknown, ResinKitInput>({
     resolver: zodResolver(resinKitFormSchema(unitSystem)),
-    defaultValues: initial ?? { resinSystemId: systems[0]?.id ?? '', lot: '', expiresOn: '', quantityL: Number.NaN, receivedOn: '', notes: '' },
+    defaultValues: initial ?? {
+      resinSystemId: systems[0]?.id ?? '', lot: scanned?.lot ?? '', expiresOn: scanned?.expiresOn ?? '', quantityL: Number.NaN, receivedOn: '', notes: '',
+    },
   });
   const onSubmit = handleSubmit(async (values) => {
     const saved = await saveSettings({ collection: '/api/resin-kits', id, values, dirty: dirtyFields, setError, setMessage });
@@ -28,6 +33,10 @@ export function ResinKitForm({ id, initial, unitSystem, systems }: {
   });
   return (
     <form onSubmit={onSubmit} noValidate className="grid max-w-3xl gap-4 rounded-lg bg-white p-4 ring-1 ring-slate-200 md:grid-cols-2">
+      <KitLabelScan editingId={id} onLabel={(label) => {
+        if (label.lot) setValue('lot', label.lot, { shouldDirty: true, shouldValidate: true });
+        if (label.expiresOn) setValue('expiresOn', label.expiresOn, { shouldDirty: true, shouldValidate: true });
+      }} />
       <FormField id="lot" label="Lot number" error={errors.lot?.message}>
         <input {...register('lot')} {...errorProps('lot', errors.lot?.message)} className={inputClass} autoFocus />
       </FormField>

@@ -7,6 +7,7 @@ import { z } from 'zod';
 import { lengthFromSi, lengthToSi, temperatureToSi, unitLabels, type UnitSystem } from '@/lib/units';
 import { eventPayloadSchemas } from '@/lib/validation/install-events';
 import { FieldInput, PrimaryAction, StepCard } from './field-ui';
+import { KitScan } from './kit-scan';
 
 export type KitOption = { id: string; lot: string; expiresOn: string; expired: boolean; resinName: string; prepMinutes: number | null };
 export type PackerOption = { id: string; name: string; fits: boolean; reasons: string[] };
@@ -96,6 +97,7 @@ export function StepConditions({
         <p className="text-base text-slate-600">The warmer of resin and air sets the working window.</p>
         <div>
           <label htmlFor="resinKitId" className="block text-lg font-semibold">Resin kit (lot)</label>
+          <KitScan kits={kits} onPick={(id) => setValue('resinKitId', id, { shouldDirty: true, shouldValidate: true })} />
           <select id="resinKitId" className="mt-1 block min-h-touch w-full rounded-md border-2 border-slate-400 px-3 text-xl" aria-describedby={errors.resinKitId ? 'resinKitId-error' : undefined} {...register('resinKitId')}>
             <option value="">Choose…</option>
             {kits.map((kit) => (

@@ -1,15 +1,24 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
+import { z } from 'zod';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { listResinSystems } from '@/lib/data/resin-systems';
+import { isoDateSchema } from '@/lib/validation/common';
 import { resinSystemListQuerySchema } from '@/lib/validation/resin-systems';
 import { ResinKitForm } from '../resin-kit-form';
 
 export const metadata: Metadata = { title: 'New resin kit' };
 
-export default async function Page() {
+const scannedSchema = z.object({
+  lot: z.string().trim().regex(/^[\x21-\x7e]{1,40}$/).optional().catch(undefined),
+  expiresOn: isoDateSchema.optional().catch(undefined),
+});
+
+/** `?lot=&expiresOn=` (from a scanned label) fill the form; anything malformed is left out. */
+export default async function Page({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
   const user = await requirePageUser(['admin']);
+  const scanned = scannedSchema.parse(await searchParams);
   const [{ unitSystem }, systems] = await Promise.all([getCompany(user), listResinSystems(user, resinSystemListQuerySchema.parse({ pageSize: '100' }))]);
   return (
     <div className="space-y-4">
@@ -17,7 +26,7 @@ export default async function Page() {
       <h1 className="text-2xl font-bold">New resin kit</h1>
       {systems.items.length === 0
         ? <p>Add a <Link href="/admin/resin-systems/new" className="text-brand-700 underline">resin system</Link> first: every kit belongs to one.</p>
-        : <ResinKitForm unitSystem={unitSystem} systems={systems.items} />}
+        : <ResinKitForm unitSystem={unitSystem} systems={systems.items} scanned={scanned} />}
     </div>
   );
 }

@@ -1,0 +1,70 @@
+'use client';
+
+import { useState } from 'react';
+import { ScanLabel, type ScannedLabel } from '@/components/scan/scan-label';
+import type { KitOption } from './step-conditions';
+
+/**
+ * "Scan label" on the conditions step: a known lot picks its kit; an unknown one says so and leaves the list to
+ * pick from (kits are added by the office, which can open the new-kit form with the scanned lot and expiry).
+ */
+export function KitScan({
+  kits,
+  onPick,
+  canAddKit = false,
+}: {
+  kits: KitOption[];
+  onPick: (kitId: string) => void;
+  canAddKit?: boolean;
+}) {
+  const [unknown, setUnknown] = useState<ScannedLabel | null>(null);
+  const [note, setNote] = useState<string | null>(null);
+
+  const onScan = (label: ScannedLabel) => {
+    const lot = label.lot?.trim().toUpperCase();
+    const kit = lot ? kits.find((k) => k.lot.trim().toUpperCase() === lot) : undefined;
+    if (!kit) {
+      setUnknown(label);
+      setNote(null);
+      return;
+    }
+    setUnknown(null);
+    if (kit.expired) {
+      setNote(`Kit ${kit.lot} is past its use-by date (${kit.expiresOn}): it cannot be used. Pick another kit.`);
+      return;
+    }
+    onPick(kit.id);
+    const differs = label.expiresOn && label.expiresOn !== kit.expiresOn;
+    setNote(
+      `Kit ${kit.lot} chosen.${differs ? ` The label says use by ${label.expiresOn}; the kit on file says ${kit.expiresOn}: tell the office.` : ''}`,
+    );
+  };
+
+  const addHref =
+    unknown &&
+    `/admin/resin-kits/new?${new URLSearchParams({ lot: unknown.lot ?? '', ...(unknown.expiresOn ? { expiresOn: unknown.expiresOn } : {}) })}`;
+  return (
+    <div className="space-y-2">
+      <ScanLabel onScan={onScan} size="field" />
+      {note && (
+        <p role="status" className="text-base font-medium text-safe-700" data-testid="kit-scan-note">
+          {note}
+        </p>
+      )}
+      {unknown && (
+        <div role="alert" className="rounded-md bg-near-100 p-3 text-base" data-testid="kit-scan-unknown">
+          <p>
+            Lot <strong>{unknown.lot ?? '(none on the label)'}</strong>
+            {unknown.expiresOn ? `, use by ${unknown.expiresOn},` : ''} is not among the company&apos;s kits. Pick the
+            kit from the list below, or ask the office to add this lot.
+          </p>
+          {canAddKit && addHref && (
+            <a href={addHref} className="mt-1 inline-block font-semibold text-brand-700 underline">
+              Add this kit
+            </a>
+          )}
+        </div>
+      )}
+    </div>
+  );
+}

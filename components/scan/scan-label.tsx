@@ -1,0 +1,130 @@
+'use client';
+
+import { useEffect, useRef, useState } from 'react';
+import { buttonClass } from '@/components/ui/button';
+import { decodeImageFile, startCameraScan, type CameraScan } from '@/lib/client/barcode';
+import { Gs1Error } from '@/lib/scan/gs1';
+import { describeLabel, labelOf, type ScannedLabel } from '@/lib/scan/label';
+
+export type { ScannedLabel };
+
+/**
+ * "Scan label": reads a resin kit's barcode with the camera (or from a photo) and hands back the lot (GS1 AI 10)
+ * and the expiry (AI 17). A barcode without GS1 data is taken as the lot itself. Typing stays possible beside it.
+ */
+export function ScanLabel({
+  onScan,
+  size = 'desk',
+}: {
+  onScan: (label: ScannedLabel) => void;
+  size?: 'desk' | 'field';
+}) {
+  const [scanning, setScanning] = useState(false);
+  const [message, setMessage] = useState<{ text: string; problem: boolean } | null>(null);
+  const video = useRef<HTMLVideoElement>(null);
+  const photo = useRef<HTMLInputElement>(null);
+  const camera = useRef<CameraScan | null>(null);
+
+  useEffect(() => () => camera.current?.stop(), []);
+
+  const accept = (raw: string) => {
+    try {
+      const label = labelOf(raw);
+      setMessage({ text: describeLabel(label), problem: false });
+      onScan(label);
+    } catch (error) {
+      setMessage({
+        text:
+          error instanceof Gs1Error ? `The label could not be read: ${error.message}` : 'The label could not be read.',
+        problem: true,
+      });
+    }
+  };
+
+  const openCamera = async () => {
+    setMessage(null);
+    setScanning(true);
+    try {
+      // The video element is rendered once `scanning` is set; wait a frame for it.
+      await new Promise((resolve) => requestAnimationFrame(resolve));
+      camera.current = await startCameraScan(video.current!, (raw) => {
+        camera.current?.stop();
+        setScanning(false);
+        accept(raw);
+      });
+    } catch {
+      setScanning(false);
+      setMessage({
+        text: 'The camera could not be opened. Allow the camera, scan from a photo, or type the lot.',
+        problem: true,
+      });
+    }
+  };
+
+  const closeCamera = () => {
+    camera.current?.stop();
+    camera.current = null;
+    setScanning(false);
+  };
+
+  const fromPhoto = async (file: File | undefined) => {
+    if (!file) return;
+    setMessage({ text: 'Reading the photo…', problem: false });
+    try {
+      accept(await decodeImageFile(file));
+    } catch {
+      setMessage({
+        text: 'No barcode found in that photo. Try again closer and sharper, or type the lot.',
+        problem: true,
+      });
+    } finally {
+      if (photo.current) photo.current.value = '';
+    }
+  };
+
+  return (
+    <div className="space-y-2" data-testid="scan-label">
+      <div className="flex flex-wrap gap-2">
+        <button
+          type="button"
+          className={buttonClass('secondary', size)}
+          onClick={() => void (scanning ? closeCamera() : openCamera())}
+        >
+          {scanning ? 'Stop scanning' : 'Scan label'}
+        </button>
+        <button type="button" className={buttonClass('ghost', size)} onClick={() => photo.current?.click()}>
+          Scan from photo
+        </button>
+        <input
+          ref={photo}
+          type="file"
+          accept="image/*"
+          capture="environment"
+          className="sr-only"
+          tabIndex={-1}
+          aria-label="Photo of the kit's label"
+          data-testid="scan-photo-input"
+          onChange={(event) => void fromPhoto(event.target.files?.[0])}
+        />
+      </div>
+      {scanning && (
+        <video
+          ref={video}
+          className="aspect-video w-full max-w-md rounded-md bg-slate-900"
+          muted
+          playsInline
+          aria-label="Camera view of the label"
+        />
+      )}
+      {message && (
+        <p
+          role={message.problem ? 'alert' : 'status'}
+          className={`text-sm font-medium ${message.problem ? 'text-missed-700' : 'text-slate-700'}`}
+          data-testid="scan-message"
+        >
+          {message.text}
+        </p>
+      )}
+    </div>
+  );
+}
