@@ -10,9 +10,11 @@
 import { createWriteStream } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
+import pg from 'pg';
 import { ClusterServers, SingleServer, crashDatabase } from './faults.mjs';
 import { SOAK_PASSWORD, seedSoakCompany } from './setup.mjs';
-import { Tablet, sleep, splitTaps } from './tablet.mjs';
+import { splitTaps } from './plan.mjs';
+import { Tablet, sleep } from './tablet.mjs';
 import { verify } from './verify.mjs';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
@@ -40,8 +42,12 @@ process.on('exit', () => server.stop());
 
 // Each tablet's share of the taps, spread over installs of about PER_INSTALL taps.
 const plans = Array.from({ length: TABLETS }, (_, i) => splitTaps(Math.floor(TAPS / TABLETS) + (i < TAPS % TABLETS ? 1 : 0), PER_INSTALL));
+const durability = await durabilitySettings(process.env.DATABASE_URL);
+if (durability.fsync !== 'on' || durability.synchronous_commit !== 'on') {
+  throw new Error(`the soak needs fsync and synchronous_commit on; the database has ${JSON.stringify(durability)}`);
+}
 const { companyId, tablets } = await seedSoakCompany(process.env.DATABASE_URL, plans.map((p) => p.length));
-say(`${TARGET} target on ${server.base}: ${TABLETS} tablets, ${TAPS} taps over ${plans.flat().length} installs`);
+say(`${TARGET} target on ${server.base}: ${TABLETS} tablets, ${TAPS} taps over ${plans.flat().length} installs (fsync ${durability.fsync}, synchronous_commit ${durability.synchronous_commit})`);
 await server.start();
 
 // The faults, spread over the run by acknowledged taps; a tablet waits at a fault's mark until it has begun.
@@ -119,4 +125,15 @@ function spread(kills, stops) {
   const list = Array(kills).fill('kill');
   for (let s = 0; s < stops; s++) list.splice(Math.round(((s + 1) * (list.length + 1)) / (stops + 1)), 0, 'stop');
   return list;
+}
+
+async function durabilitySettings(databaseUrl) {
+  const client = new pg.Client({ connectionString: databaseUrl });
+  await client.connect();
+  try {
+    const { rows } = await client.query(`SELECT name, setting FROM pg_settings WHERE name IN ('fsync', 'synchronous_commit')`);
+    return Object.fromEntries(rows.map((r) => [r.name, r.setting]));
+  } finally {
+    await client.end();
+  }
 }
