@@ -79,6 +79,8 @@ const workers = tablets.map(
 );
 
 let finished = 0;
+const progress = setInterval(() => say(`${acknowledged} acknowledged after ${((Date.now() - started) / 1000).toFixed(0)} s`), 60_000);
+progress.unref();
 const allDone = () => finished === workers.length;
 const faults = (async () => {
   for (const [i, kind] of kinds.entries()) {
@@ -96,6 +98,7 @@ const faults = (async () => {
 })();
 await Promise.all(workers.map((w) => w.run().finally(() => finished++)));
 await faults;
+clearInterval(progress);
 await new Promise((resolve) => (ackFile ? ackFile.end(resolve) : resolve()));
 
 const seconds = (Date.now() - started) / 1000;

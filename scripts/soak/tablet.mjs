@@ -54,17 +54,16 @@ export class Tablet {
       let response;
       try {
         this.stats.requests++;
-        response = await fetch(this.base + path, {
+        response = await exchange(this.base + path, {
           method: 'POST',
           headers: { 'content-type': 'application/json', origin: this.base, cookie: this.cookie },
           body: JSON.stringify(body),
-          signal: AbortSignal.timeout(15_000),
         });
       } catch (error) {
         this.count(error.cause?.code ?? error.name);
         continue;
       }
-      const text = await response.text().catch(() => '');
+      const { text } = response;
       if (response.ok) {
         if (response.status === 200) this.stats.replays++;
         try {
@@ -87,22 +86,21 @@ export class Tablet {
     for (let attempt = 0; !this.stopped(); attempt++) {
       if (attempt > 0) await sleep(Math.min(1000, 100 * 2 ** Math.min(attempt, 4)));
       try {
-        const csrf = await fetch(`${this.base}/api/auth/csrf`, { signal: AbortSignal.timeout(15_000) });
+        const csrf = await exchange(`${this.base}/api/auth/csrf`, {});
         if (!csrf.ok) continue;
         const cookies = csrf.headers.getSetCookie().map((c) => c.split(';')[0]);
-        const { csrfToken } = await csrf.json();
-        const res = await fetch(`${this.base}/api/auth/callback/credentials`, {
+        const { csrfToken } = JSON.parse(csrf.text);
+        const res = await exchange(`${this.base}/api/auth/callback/credentials`, {
           method: 'POST',
           redirect: 'manual',
           headers: { 'content-type': 'application/x-www-form-urlencoded', cookie: cookies.join('; ') },
           body: new URLSearchParams({ csrfToken, email: this.tablet.email, password: this.password, json: 'true' }),
-          signal: AbortSignal.timeout(15_000),
         });
         const session = res.headers.getSetCookie().map((c) => c.split(';')[0]).filter((c) => c.includes('session-token='));
         if (!session.length) continue;
         this.cookie = session.join('; ');
-        const me = await fetch(`${this.base}/api/auth/session`, { headers: { cookie: this.cookie }, signal: AbortSignal.timeout(15_000) });
-        const user = me.ok ? (await me.json()).user : null;
+        const me = await exchange(`${this.base}/api/auth/session`, { headers: { cookie: this.cookie } });
+        const user = me.ok ? JSON.parse(me.text).user : null;
         if (user?.id) {
           this.userId = user.id;
           return;
@@ -124,3 +122,32 @@ export class Tablet {
 }
 
 export const sleep = (ms) => new Promise((resolve) => setTimeout(resolve, ms));
+
+const REQUEST_MS = 15_000;
+
+/**
+ * One request and its whole body, given up after REQUEST_MS whatever happens underneath: a request caught
+ * by a server's SIGKILL could otherwise wait forever (seen here: tablets waiting with no socket open, fetch's
+ * own timeout signal never firing).
+ */
+async function exchange(url, init) {
+  const controller = new AbortController();
+  let timer;
+  const expired = new Promise((_, reject) => {
+    timer = setTimeout(() => {
+      controller.abort();
+      reject(Object.assign(new Error(`no answer within ${REQUEST_MS / 1000} s`), { name: 'TimeoutError' }));
+    }, REQUEST_MS);
+  });
+  const attempt = (async () => {
+    const response = await fetch(url, { ...init, signal: controller.signal });
+    const text = await response.text();
+    return { ok: response.ok, status: response.status, headers: response.headers, text };
+  })();
+  attempt.catch(() => undefined); // settles after the deadline, if ever: nobody waits for it then
+  try {
+    return await Promise.race([attempt, expired]);
+  } finally {
+    clearTimeout(timer);
+  }
+}
