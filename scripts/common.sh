@@ -53,3 +53,29 @@ start_fakes() {
 stop_fakes() {
   FAKES_NAME="$1" bash scripts/fakes.sh stop || true
 }
+
+# Debian's haproxy (the load balancer of scripts/cluster.sh), installed like postgresql when missing.
+ensure_haproxy() {
+  command -v haproxy >/dev/null 2>&1 && return 0
+  [ -x /usr/sbin/haproxy ] && { export PATH="$PATH:/usr/sbin"; return 0; }
+  if [ "$(id -u)" = 0 ]; then
+    say "installing Debian's haproxy (apt-get)"
+    DEBIAN_FRONTEND=noninteractive apt-get update -qq
+    DEBIAN_FRONTEND=noninteractive apt-get install -y -qq --no-install-recommends haproxy >/dev/null
+    export PATH="$PATH:/usr/sbin"
+    command -v haproxy >/dev/null 2>&1
+  else
+    say "haproxy is missing: run  sudo apt-get install -y haproxy"
+    return 1
+  fi
+}
+
+# next build when there is no production build yet or a source file is newer than it.
+build_if_stale() {
+  if [ -f .next/BUILD_ID ] && [ -z "$(find app components config lib models proxy.ts instrumentation.ts next.config.mjs package-lock.json \
+      -newer .next/BUILD_ID -type f -print -quit 2>/dev/null)" ]; then
+    return 0
+  fi
+  say "building (next build)"
+  next build >/dev/null
+}

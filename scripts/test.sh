@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
 # npm test: installs what is missing, starts PostgreSQL, makes fresh test databases and runs
-# every suite (unit, integration, e2e). `npm test -- unit|integration|e2e` runs one suite.
+# every suite (unit, integration, e2e; the e2e suite installs Debian's haproxy as root for tests/e2e/cluster.spec.ts). `npm test -- unit|integration|e2e` runs one suite.
 # Exits non-zero when any suite fails.
 set -uo pipefail
 source "$(dirname "${BASH_SOURCE[0]}")/common.sh"
@@ -59,6 +59,7 @@ run_suite() {
       ;;
     e2e)
       ensure_chromium &&
+        ensure_haproxy &&
         fresh_database "${E2E_DB_NAME:-setline_e2e}" &&
         sequelize-cli db:seed:all >/dev/null &&
         node scripts/derive-installs.mjs &&
