@@ -1,4 +1,5 @@
 import 'server-only';
+import { ensureDerived, settingsOf } from './install-derive';
 import { QueryTypes } from 'sequelize';
 import { Crew } from '@/models';
 import { sequelize } from '@/lib/db';
@@ -80,6 +81,8 @@ export type PressureBin = (typeof PRESSURE_BINS)[number];
 export async function getInsights(user: SessionUser, query: InsightsQuery, now = new Date()): Promise<Insights> {
   if (!isDeskRole(user.role)) throw forbidden('Insights are for the office.');
   const company = await getCompany(user);
+  // The figures read the derived columns: rows seeded or imported without a tap are derived first.
+  await ensureDerived(user, settingsOf(company));
   const timeZone = company.timeZone;
   const period = resolvePeriod(query, dayInZone(now, timeZone));
   let crew: Insights['crew'] = null;
