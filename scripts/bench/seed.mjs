@@ -42,13 +42,13 @@ await db.query(
      INSERT INTO jobs (id, company_id, number, customer_id, site_id, crew_id, status, scheduled_date, title, created_at, updated_at)
      SELECT gen_random_uuid(), $1, '2025-B' || lpad(g::text, 5, '0'), $2, $3, $4, 'awaiting_review',
             (now() - (g % 60) * interval '1 day')::date, 'Bench job ' || g, now(), now()
-     FROM generate_series(1, $5) g
+     FROM generate_series(1, $5::int) g
      RETURNING id, number)
    INSERT INTO bench_slots (slot, repair_id, job_id)
    SELECT (substr(j.number, 7)::int - 1) * 20 + k, gen_random_uuid(), j.id FROM j, generate_series(1, 20) k`,
   [company.id, place.customer_id, place.site_id, crew.id, jobs],
 );
-await db.query(`DELETE FROM bench_slots WHERE slot > $1`, [TOTAL]);
+await db.query(`DELETE FROM bench_slots WHERE slot > $1::int`, [TOTAL]);
 await db.query(
   `INSERT INTO repairs (id, company_id, job_id, segment_id, position, distance_mm, defect_type, condition_grade, defect_length_mm, status, created_at, updated_at)
    SELECT s.repair_id, $1, s.job_id, $2, (s.slot - 1) % 20 + 1, 1000 + ((s.slot - 1) % 20) * 500, $3, 3, 300, 'installed', now(), now()
@@ -148,7 +148,7 @@ await db.query(
   `INSERT INTO install_events (id, company_id, install_id, client_event_id, type, device_time, received_at, user_id, payload, created_at)
    SELECT gen_random_uuid(), $1, i, gen_random_uuid(), 'note', $3::timestamptz + g * interval '100 milliseconds', now(), $4,
           jsonb_build_object('text', 'Flow check ' || g), now()
-   FROM unnest($2::uuid[]) i, generate_series(1, $5) g`,
+   FROM unnest($2::uuid[]) i, generate_series(1, $5::int) g`,
   [company.id, longInstalls, at(5), company.foreman_id, LONG_EVENTS - TEMPLATES.at(-1).taps.length],
 );
 await db.query(`UPDATE installs SET event_count = (SELECT count(*) FROM install_events e WHERE e.install_id = installs.id) WHERE id = ANY($1)`, [longInstalls]);
