@@ -26,7 +26,7 @@ export async function measureLighthouse(baseUrl, cookie, paths, { runs = 3 } = {
           {
             port: chrome.port,
             output: 'json',
-            logLevel: 'error',
+            logLevel: process.env.LIGHTHOUSE_LOG ?? 'error',
             onlyCategories: ['performance'],
             // The session cookie; the page's own requests (scripts, the API) get it from the browser.
             extraHeaders: cookie ? { Cookie: cookie } : undefined,
