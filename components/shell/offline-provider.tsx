@@ -1,22 +1,21 @@
 'use client';
 
-import { SerwistProvider } from '@serwist/turbopack/react';
+import { useEffect } from 'react';
 
 /**
  * Registers the service worker (app/sw.ts) that lets field pages open without signal.
  * No reload when the signal returns: it would throw away whatever the crew is typing, and the
- * outbox sends queued taps without one.
+ * outbox sends queued taps without one. Field pages ask the worker to keep their own copies
+ * (KeepForOffline), so no window-side worker library is shipped to every page.
  */
 export function OfflineProvider({ children }: { children: React.ReactNode }) {
-  return (
-    <SerwistProvider
-      swUrl="/serwist/sw.js"
-      // In development pages change on every save; a worker serving yesterday's copy confuses.
-      disable={process.env.NODE_ENV === 'development'}
-      reloadOnOnline={false}
-      options={{ scope: '/', type: 'classic' }}
-    >
-      {children}
-    </SerwistProvider>
-  );
+  useEffect(() => {
+    // In development pages change on every save; a worker serving yesterday's copy confuses.
+    if (process.env.NODE_ENV === 'development' || !('serviceWorker' in navigator)) return;
+    // A classic script, not a module worker: module workers are missing from some tablets' browsers.
+    navigator.serviceWorker.register('/serwist/sw.js', { scope: '/', type: 'classic' }).catch((error: unknown) => {
+      console.error('Service worker registration failed', error);
+    });
+  }, []);
+  return children;
 }

@@ -1,8 +1,7 @@
 'use client';
 
-import { signOut } from 'next-auth/react';
 import { useState } from 'react';
-import { pendingCount } from '@/lib/client/outbox';
+import { signOutTo } from '@/lib/client/sign-out';
 
 export function SignOutButton({ className = '' }: { className?: string }) {
   const [pending, setPending] = useState(false);
@@ -14,10 +13,11 @@ export function SignOutButton({ className = '' }: { className?: string }) {
       onClick={async () => {
         // Queued taps are sent only under the user who made them: once signed out, they wait on
         // this tablet until that user signs in here again.
-        const unsynced = await pendingCount().catch(() => 0);
+        // The outbox (IndexedDB) loads only when asked: it is not needed to draw the page.
+        const unsynced = await import('@/lib/client/outbox').then(({ pendingCount }) => pendingCount()).catch(() => 0);
         if (unsynced > 0 && !window.confirm(`${unsynced} tap(s) are still only on this tablet. They will wait here until you sign in again on it.\n\nOK signs out anyway.`)) return;
         setPending(true);
-        void signOut({ callbackUrl: '/sign-in' });
+        void signOutTo('/sign-in').catch(() => setPending(false));
       }}
     >
       {pending ? 'Signing out…' : 'Sign out'}

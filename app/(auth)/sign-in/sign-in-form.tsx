@@ -1,13 +1,11 @@
 'use client';
 
-import { zodResolver } from '@hookform/resolvers/zod';
 import { useRouter, useSearchParams } from 'next/navigation';
-import { useState } from 'react';
-import { useForm } from 'react-hook-form';
+import { useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { safeCallbackPath } from '@/lib/auth/callback-url';
 import { signInWithPassword } from '@/lib/client/sign-in';
-import { signInSchema, type SignInInput } from '@/lib/validation/auth';
+import { checkSignIn, type SignInFields } from '@/lib/validation/sign-in-check';
 
 // One message for every failure, so the form never tells whether an e-mail has an account.
 const BAD_CREDENTIALS = 'That e-mail and password do not match an active account.';
@@ -23,23 +21,45 @@ export function SignInForm() {
   const router = useRouter();
   const params = useSearchParams();
   const [failure, setFailure] = useState<string | null>(null);
-  const { register, handleSubmit, formState } = useForm<SignInInput>({ resolver: zodResolver(signInSchema) });
+  // A plain form with the schema's own checks (lib/validation/sign-in-check.ts): no form library on
+  // the lightest page. As before, fields are checked on submit, then again as they change.
+  const [errors, setErrors] = useState<Partial<Record<keyof SignInFields, string>>>({});
+  const [submitted, setSubmitted] = useState(false);
+  const [isSubmitting, setSubmitting] = useState(false);
 
-  const onSubmit = handleSubmit(async (values) => {
+  const recheck = (form: HTMLFormElement | null, field: keyof SignInFields) => {
+    if (!submitted || !form) return;
+    const check = checkSignIn(fieldsOf(form));
+    setErrors((current) => ({ ...current, [field]: check.ok ? undefined : check.errors[field] }));
+  };
+
+  const onSubmit = async (event: FormEvent<HTMLFormElement>) => {
+    event.preventDefault();
+    if (isSubmitting) return;
+    setSubmitted(true);
+    const check = checkSignIn(fieldsOf(event.currentTarget));
+    if (!check.ok) {
+      setErrors(check.errors);
+      // Focus the first field that failed, as the form library did.
+      event.currentTarget.querySelector<HTMLInputElement>(`#${check.errors.email ? 'email' : 'password'}`)?.focus();
+      return;
+    }
+    setErrors({});
+    setSubmitting(true);
     setFailure(null);
     const next = safeCallbackPath(params.get('callbackUrl'));
-    const result = await signInWithPassword(values.email, values.password, next).catch(() => null);
+    const result = await signInWithPassword(check.values.email, check.values.password, next).catch(() => null);
+    setSubmitting(false);
     if (!result || !result.ok) {
       setFailure(failureMessage(result));
       return;
     }
     router.replace(next);
     router.refresh();
-  });
+  };
 
-  const { errors, isSubmitting } = formState;
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-5">
+    <form onSubmit={(event) => void onSubmit(event)} noValidate className="space-y-5">
       <div>
         <label htmlFor="email" className="block text-base font-medium">E-mail</label>
         <input
@@ -50,9 +70,10 @@ export function SignInForm() {
           className="mt-1 block min-h-touch w-full rounded-md border border-slate-300 px-3 text-lg"
           aria-invalid={!!errors.email}
           aria-describedby={errors.email ? 'email-error' : undefined}
-          {...register('email')}
+          name="email"
+          onChange={(event) => recheck(event.currentTarget.form, 'email')}
         />
-        {errors.email && <p id="email-error" className="mt-1 text-sm text-missed-700">{errors.email.message}</p>}
+        {errors.email && <p id="email-error" className="mt-1 text-sm text-missed-700">{errors.email}</p>}
       </div>
       <div>
         <label htmlFor="password" className="block text-base font-medium">Password</label>
@@ -63,9 +84,10 @@ export function SignInForm() {
           className="mt-1 block min-h-touch w-full rounded-md border border-slate-300 px-3 text-lg"
           aria-invalid={!!errors.password}
           aria-describedby={errors.password ? 'password-error' : undefined}
-          {...register('password')}
+          name="password"
+          onChange={(event) => recheck(event.currentTarget.form, 'password')}
         />
-        {errors.password && <p id="password-error" className="mt-1 text-sm text-missed-700">{errors.password.message}</p>}
+        {errors.password && <p id="password-error" className="mt-1 text-sm text-missed-700">{errors.password}</p>}
       </div>
       <div role="alert" aria-live="assertive">
         {failure && <p className="rounded-md bg-missed-100 px-3 py-2 text-base text-missed-700">{failure}</p>}
@@ -75,4 +97,9 @@ export function SignInForm() {
       </Button>
     </form>
   );
+}
+
+function fieldsOf(form: HTMLFormElement): SignInFields {
+  const data = new FormData(form);
+  return { email: String(data.get('email') ?? ''), password: String(data.get('password') ?? '') };
 }

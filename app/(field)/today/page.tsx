@@ -1,5 +1,6 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
+import { KeepForOffline } from '@/components/shell/keep-for-offline';
 import { buttonClass } from '@/components/ui/button';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
@@ -15,8 +16,12 @@ export default async function Page() {
   const user = await requirePageUser(FIELD_ROLES);
   const [{ today, tomorrow, jobs }, company] = await Promise.all([listTodayJobs(user), getCompany(user)]);
   const units = company.unitSystem;
+  // Today's and tomorrow's installs open without signal even if never opened on this tablet.
+  const installIds = jobs.flatMap((job) => job.repairs.flatMap((repair) => (repair.install ? [repair.install.id] : [])));
+  const keep = ['/today', ...installIds.flatMap((id) => [`/installs/${id}`, `/api/installs/${id}`])];
   return (
     <div className="space-y-4">
+      <KeepForOffline urls={keep} userId={user.id} />
       <h1 className="text-3xl font-bold">Today&apos;s work</h1>
       {jobs.length === 0 && <p className="rounded-xl bg-white p-6 text-slate-700">No jobs for your crew today or tomorrow.</p>}
       {jobs.map((job) => (

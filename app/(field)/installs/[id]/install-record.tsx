@@ -111,6 +111,3 @@ export function InstallRecord({ state, plan, timeZone, unitSystem, chain, canRed
   );
 }
 
-/** A redo is offered after a failed inspection or a send-back. */
-export const mayOfferRedo = (state: InstallState, status: string) => state.inspection?.result === 'fail' || status === 'sent_back';
-

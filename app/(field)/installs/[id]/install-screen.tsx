@@ -1,16 +1,16 @@
 'use client';
 
+import dynamic from 'next/dynamic';
 import Link from 'next/link';
 import { useRouter } from 'next/navigation';
 import { useEffect, useMemo, useState } from 'react';
 import type { InstallViewResponse } from '@/app/api/installs/[id]/route';
-import { EvidencePanel } from '@/components/evidence/evidence-panel';
 import { useNow } from '@/components/install/countdown';
 import { resinClockSpec, type CurePlan, type QualityFlag } from '@/lib/cure';
 import { installClock } from '@/lib/install/clock';
 import { requestNotificationPermission, unlockAudio } from '@/lib/client/alarm';
 import { submitJson } from '@/lib/client/submit-json';
-import { startOutboxSync } from '@/lib/client/outbox';
+import { loadOutbox } from '@/lib/client/load-outbox';
 import { useWakeLock } from '@/lib/client/wake-lock';
 import { label } from '@/lib/domain';
 import type { InstallState } from '@/lib/install/state';
@@ -18,16 +18,20 @@ import { groundwaterPressureKpa } from '@/lib/sizing';
 import { formatDuration, formatLength } from '@/lib/units';
 import { ClockStrip, deadlinesOf } from './clock-strip';
 import { EventLog } from './event-log';
-import { InstallRecord, mayOfferRedo } from './install-record';
 import { StepChecks } from './step-checks';
 import { StepHold, StepInflate, StepTap } from './step-clock';
-import { StepConditions } from './step-conditions';
 import { StepDryRun } from './step-dry-run';
 import { StepDone, StepInspect, StepSignOff } from './step-finish';
 import { StepGo } from './step-go';
 import { StepSafety } from './step-safety';
 import { SyncStatus } from './sync-status';
 import { useInstall } from './use-install';
+
+// Loaded when their step comes (the worker keeps their chunks for offline use): the conditions form
+// brings a form library and schemas, the record and the evidence panel appear only at the end.
+const StepConditions = dynamic(() => import('./step-conditions').then((m) => m.StepConditions));
+const InstallRecord = dynamic(() => import('./install-record').then((m) => m.InstallRecord));
+const EvidencePanel = dynamic(() => import('@/components/evidence/evidence-panel').then((m) => m.EvidencePanel));
 
 type Viewer = { id: string; name: string; role: string };
 
@@ -47,7 +51,17 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
   const clockRunning = !!state.mixedAt && !state.deflatedAt;
   useWakeLock(clockRunning);
   // Only the signed-in user's taps are sent; anyone else's wait on the tablet for them.
-  useEffect(() => startOutboxSync({ user: { id: viewer.id, name: viewer.name } }), [viewer.id, viewer.name]);
+  useEffect(() => {
+    let stop: (() => void) | undefined;
+    let alive = true;
+    void loadOutbox().then(({ startOutboxSync }) => {
+      if (alive) stop = startOutboxSync({ user: { id: viewer.id, name: viewer.name } });
+    });
+    return () => {
+      alive = false;
+      stop?.();
+    };
+  }, [viewer.id, viewer.name]);
 
   const kits = view.options.resinKits.map((k) => ({ id: k.id, lot: k.lot, expiresOn: k.expiresOn, expired: k.expired, resinName: k.resinSystem.name, prepMinutes: k.resinSystem.prepMinutes ?? null }));
   const packers = view.options.packers.map((p) => ({ id: p.id, name: p.name, fits: p.fits, reasons: p.reasons }));
@@ -236,3 +250,6 @@ function liveClock(view: InstallViewResponse, state: InstallState, now: Date): {
 
 // The planned groundwater head as a pressure, so a gauge reading below it can warn (lib/sizing).
 const groundwaterKpaOf = (headMm: number | null | undefined) => (headMm ? groundwaterPressureKpa(headMm) : null);
+
+/** A redo is offered after a failed inspection or a send-back (here, not in the record, which loads only when shown). */
+const mayOfferRedo = (state: InstallState, status: string) => state.inspection?.result === 'fail' || status === 'sent_back';

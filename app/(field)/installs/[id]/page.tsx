@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import { KeepForOffline } from '@/components/shell/keep-for-offline';
 import { notFound, redirect } from 'next/navigation';
 import { requirePageUser } from '@/lib/auth/session';
 import { getInstallView } from '@/lib/data/installs';
@@ -21,6 +22,13 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
     if (error instanceof AppError && error.status === 403) redirect('/forbidden');
     throw error;
   }
-  // Through JSON, so the client gets exactly what GET /api/installs/:id would give it.
-  return <InstallScreen initial={JSON.parse(JSON.stringify(view))} viewer={{ id: user.id, name: user.name, role: user.role }} />;
+  // This page may be the first one after sign-in, loaded before the service worker could keep it.
+  const keep = [`/installs/${id}`, `/api/installs/${id}`];
+  return (
+    <>
+      <KeepForOffline urls={keep} userId={user.id} />
+      {/* Through JSON, so the client gets exactly what GET /api/installs/:id would give it. */}
+      <InstallScreen initial={JSON.parse(JSON.stringify(view))} viewer={{ id: user.id, name: user.name, role: user.role }} />
+    </>
+  );
 }

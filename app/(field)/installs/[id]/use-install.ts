@@ -6,7 +6,8 @@ import type { InstallViewResponse } from '@/app/api/installs/[id]/route';
 import { deriveInstallState, type InstallEventInput } from '@/lib/install/state';
 import { fetchJson } from '@/lib/client/fetch-json';
 import { refreshIntervalFor, useLiveStream } from '@/lib/client/live-stream';
-import { enqueueEvent, flushOutbox, listEntries, subscribe, type OutboxEntry, type OutboxUser } from '@/lib/client/outbox';
+import { loadOutbox } from '@/lib/client/load-outbox';
+import type { OutboxEntry, OutboxUser } from '@/lib/client/outbox';
 import { serverNow } from '@/lib/client/server-clock';
 import type { InstallEventType } from '@/lib/domain';
 
@@ -37,17 +38,21 @@ export function useInstall(id: string, fallbackData: InstallViewResponse, viewer
 
   useEffect(() => {
     let alive = true;
-    const refresh = () => {
-      void listEntries(id).then((list) => alive && setEntries(list));
-    };
-    refresh();
-    const unsubscribe = subscribe(() => {
+    let unsubscribe: (() => void) | undefined;
+    void loadOutbox().then(({ listEntries, subscribe }) => {
+      if (!alive) return;
+      const refresh = () => {
+        void listEntries(id).then((list) => alive && setEntries(list));
+      };
       refresh();
-      void mutate();
+      unsubscribe = subscribe(() => {
+        refresh();
+        void mutate();
+      });
     });
     return () => {
       alive = false;
-      unsubscribe();
+      unsubscribe?.();
     };
   }, [id, mutate]);
 
@@ -79,6 +84,7 @@ export function useInstall(id: string, fallbackData: InstallViewResponse, viewer
   const tap = useCallback(
     async (type: InstallEventType, payload: Record<string, unknown> = {}, correctsEventId?: string) => {
       const deviceTime = new Date(Math.max(serverNow().getTime(), latestMs + 1)).toISOString();
+      const { enqueueEvent, flushOutbox } = await loadOutbox();
       await enqueueEvent({ installId: id, clientEventId: crypto.randomUUID(), type, deviceTime, payload, correctsEventId, userId: viewer.id, userName: viewer.name });
       // Sending is best effort: the outbox keeps the tap and the sync loop retries.
       void flushOutbox().then(() => mutate());
