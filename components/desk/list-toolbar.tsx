@@ -1,6 +1,6 @@
 import Link from 'next/link';
 import type { ReactNode } from 'react';
-import { buttonClass } from '@/components/ui/button';
+import { buttonVariants } from '@/components/ui/button';
 
 /**
  * The bar above every desk list: a GET form (so the filter lives in the URL and survives a reload),
@@ -29,11 +29,11 @@ export function ListToolbar({
           <input name="q" type="search" defaultValue={search ?? ''} placeholder={placeholder} className="h-9 w-64 rounded-md border border-slate-300 px-2" />
         </label>
         {children}
-        <button type="submit" className={buttonClass('secondary')}>Filter</button>
+        <button type="submit" className={buttonVariants({ variant: 'secondary' })}>Filter</button>
       </form>
       <div className="flex gap-2">
-        <a href={exportHref} className={buttonClass('secondary')} download>Export CSV</a>
-        {newHref && <Link href={newHref} className={buttonClass('primary')}>{newLabel ?? 'New'}</Link>}
+        <a href={exportHref} className={buttonVariants({ variant: 'secondary' })} download>Export CSV</a>
+        {newHref && <Link href={newHref} className={buttonVariants({ variant: 'primary' })}>{newLabel ?? 'New'}</Link>}
       </div>
     </div>
   );

@@ -8,7 +8,7 @@ import useSWR from 'swr';
 import type { ReportSendsResponse } from '@/app/api/jobs/[id]/report-sends/route';
 import { FormField, errorProps, inputClass, textareaClass } from '@/components/desk/form-field';
 import { Badge } from '@/components/ui/badge';
-import { Button, buttonClass } from '@/components/ui/button';
+import { Button, buttonVariants } from '@/components/ui/button';
 import { fetchJson } from '@/lib/client/fetch-json';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
 import { sendReportSchema, type SendReportInput } from '@/lib/validation/report';
@@ -53,7 +53,7 @@ export function ReportPanelClient({ jobId, customerEmail, blockedReason, linksSl
       <div className="flex flex-wrap items-center justify-between gap-3">
         <h2 id="report-heading" className="text-lg font-semibold">Repair report</h2>
         <div className="flex gap-2">
-          <a href={`/api/jobs/${jobId}/report`} target="_blank" rel="noreferrer" className={buttonClass('secondary')}>Preview PDF</a>
+          <a href={`/api/jobs/${jobId}/report`} target="_blank" rel="noreferrer" className={buttonVariants({ variant: 'secondary' })}>Preview PDF</a>
           <Button type="button" onClick={() => setOpen((v) => !v)} disabled={blockedReason !== null} aria-expanded={open} aria-controls="report-send-form">
             Send repair report
           </Button>

@@ -5,6 +5,7 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
+import { useCloseEditSection } from '@/components/desk/edit-section';
 import { FormField, errorProps, inputClass, textareaClass } from '@/components/desk/form-field';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
@@ -17,6 +18,7 @@ type Output = z.output<typeof customerInputSchema>;
 /** New or edit: the same zod schema as POST/PATCH /api/customers checks it here first, then the server again. */
 export function CustomerForm({ customer }: { customer?: Input & { id: string } }) {
   const router = useRouter();
+  const closeEdit = useCloseEditSection();
   const [message, setMessage] = useState<string>();
   const { register, handleSubmit, setError, formState: { errors, isSubmitting } } = useForm<Input, unknown, Output>({
     resolver: zodResolver(customerInputSchema),
@@ -28,6 +30,7 @@ export function CustomerForm({ customer }: { customer?: Input & { id: string } }
       ? await submitJson<{ id: string }>(`/api/customers/${customer.id}`, 'PATCH', values)
       : await submitJson<{ id: string }>('/api/customers', 'POST', values);
     if (!result.ok) return setMessage(applyServerErrors(result.error, setError));
+    closeEdit?.();
     router.push(`/customers/${result.data.id}`);
     router.refresh();
   });
@@ -62,7 +65,7 @@ export function CustomerForm({ customer }: { customer?: Input & { id: string } }
       {message && <p role="alert" className="text-sm font-medium text-missed-700 md:col-span-2">{message}</p>}
       <div className="flex gap-2 md:col-span-2">
         <Button type="submit" disabled={isSubmitting}>{customer ? 'Save changes' : 'Create customer'}</Button>
-        <Button type="button" variant="secondary" onClick={() => router.back()}>Cancel</Button>
+        <Button type="button" variant="secondary" onClick={() => (closeEdit ? closeEdit() : router.back())}>Cancel</Button>
       </div>
     </form>
   );

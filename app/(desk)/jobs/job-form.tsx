@@ -5,6 +5,7 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import type { z } from 'zod';
+import { useCloseEditSection } from '@/components/desk/edit-section';
 import { FormField, errorProps, inputClass, textareaClass } from '@/components/desk/form-field';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
@@ -18,6 +19,7 @@ type Editing = { id: string; customerId: string; siteId: string; title: string |
 /** New or edit: the same zod schema as POST /api/jobs checks it here first; an edit sends only what may still change. */
 export function JobForm({ options, job }: { options: JobFormOptions; job?: Editing }) {
   const router = useRouter();
+  const closeEdit = useCloseEditSection();
   const [message, setMessage] = useState<string>();
   const { register, handleSubmit, setError, control, setValue, formState: { errors, isSubmitting } } = useForm<Input, unknown, Output>({
     // Locked fields are disabled controls, which a form may submit without a value: an edit does not require them.
@@ -39,6 +41,7 @@ export function JobForm({ options, job }: { options: JobFormOptions; job?: Editi
       result = await submitJson<{ id: string }>('/api/jobs', 'POST', values);
     }
     if (!result.ok) return setMessage(applyServerErrors(result.error, setError));
+    closeEdit?.();
     router.push(`/jobs/${result.data.id}`);
     router.refresh();
   });
@@ -80,7 +83,7 @@ export function JobForm({ options, job }: { options: JobFormOptions; job?: Editi
       {message && <p role="alert" className="text-sm font-medium text-missed-700 md:col-span-2">{message}</p>}
       <div className="flex gap-2 md:col-span-2">
         <Button type="submit" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : job ? 'Save changes' : 'Create job'}</Button>
-        <Button type="button" variant="secondary" onClick={() => router.back()}>Cancel</Button>
+        <Button type="button" variant="secondary" onClick={() => (closeEdit ? closeEdit() : router.back())}>Cancel</Button>
       </div>
     </form>
   );

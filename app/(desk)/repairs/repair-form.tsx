@@ -5,6 +5,7 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
+import { useCloseEditSection } from '@/components/desk/edit-section';
 import { FormField, errorProps, inputClass, textareaClass } from '@/components/desk/form-field';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson, type ApiFailure } from '@/lib/client/submit-json';
@@ -22,6 +23,7 @@ type SegmentOption = { id: string; label: string; insideDiameterMm: number; leng
  */
 export function RepairForm({ jobId, repairId, segments, unitSystem, initial }: { jobId: string; repairId?: string; segments: SegmentOption[]; unitSystem: UnitSystem; initial?: Partial<Input> }) {
   const router = useRouter();
+  const closeEdit = useCloseEditSection();
   const [message, setMessage] = useState<string>();
   const units = unitLabels(unitSystem);
   const { register, handleSubmit, setError, formState: { errors, isSubmitting } } = useForm<Input, unknown, Output>({
@@ -35,6 +37,7 @@ export function RepairForm({ jobId, repairId, segments, unitSystem, initial }: {
       ? await submitJson<{ id: string }>(`/api/repairs/${repairId}`, 'PATCH', body)
       : await submitJson<{ id: string }>('/api/repairs', 'POST', { ...body, jobId });
     if (!result.ok) return setMessage(applyServerErrors(renamed(result.error), setError));
+    closeEdit?.();
     router.push(`/repairs/${result.data.id}`);
     router.refresh();
   });
@@ -83,7 +86,7 @@ export function RepairForm({ jobId, repairId, segments, unitSystem, initial }: {
       {message && <p role="alert" className="text-sm font-medium text-missed-700 md:col-span-2">{message}</p>}
       <div className="flex gap-2 md:col-span-2">
         <Button type="submit" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : repairId ? 'Save changes' : 'Create repair'}</Button>
-        <Button type="button" variant="secondary" onClick={() => router.back()}>Cancel</Button>
+        <Button type="button" variant="secondary" onClick={() => (closeEdit ? closeEdit() : router.back())}>Cancel</Button>
       </div>
     </form>
   );

@@ -5,6 +5,7 @@ import { useRouter } from 'next/navigation';
 import { useMemo, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
+import { useCloseEditSection } from '@/components/desk/edit-section';
 import { FormField, errorProps, inputClass } from '@/components/desk/form-field';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
@@ -25,6 +26,7 @@ type Stored = {
  */
 export function SegmentForm({ siteId, accessPoints, unitSystem, segment }: { siteId: string; accessPoints: Point[]; unitSystem: UnitSystem; segment?: Stored }) {
   const router = useRouter();
+  const closeEdit = useCloseEditSection();
   const [message, setMessage] = useState<string>();
   const schema = useMemo(() => segmentFormSchema(unitSystem), [unitSystem]);
   const units = unitLabels(unitSystem);
@@ -49,6 +51,7 @@ export function SegmentForm({ siteId, accessPoints, unitSystem, segment }: { sit
       ? await submitJson<{ id: string }>(`/api/segments/${segment.id}`, 'PATCH', patch)
       : await submitJson<{ id: string }>('/api/segments', 'POST', values);
     if (!result.ok) return setMessage(applyServerErrors(result.error, setError));
+    closeEdit?.();
     router.push(`/segments/${result.data.id}`);
     router.refresh();
   });
@@ -90,7 +93,7 @@ export function SegmentForm({ siteId, accessPoints, unitSystem, segment }: { sit
       {message && <p role="alert" className="text-sm font-medium text-missed-700 md:col-span-2">{message}</p>}
       <div className="flex gap-2 md:col-span-2">
         <Button type="submit" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : segment ? 'Save changes' : 'Create segment'}</Button>
-        <Button type="button" variant="secondary" onClick={() => router.back()}>Cancel</Button>
+        <Button type="button" variant="secondary" onClick={() => (closeEdit ? closeEdit() : router.back())}>Cancel</Button>
       </div>
     </form>
   );

@@ -5,6 +5,7 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
+import { useCloseEditSection } from '@/components/desk/edit-section';
 import { FormField, errorProps, inputClass, textareaClass } from '@/components/desk/form-field';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
@@ -19,6 +20,7 @@ type Output = z.output<typeof siteInputSchema>;
  */
 export function SiteForm({ site, customers, customerId }: { site?: Input & { id: string }; customers?: { id: string; name: string }[]; customerId?: string }) {
   const router = useRouter();
+  const closeEdit = useCloseEditSection();
   const [message, setMessage] = useState<string>();
   const { register, handleSubmit, setError, formState: { errors, isSubmitting } } = useForm<Input, unknown, Output>({
     resolver: zodResolver(siteInputSchema),
@@ -31,6 +33,7 @@ export function SiteForm({ site, customers, customerId }: { site?: Input & { id:
       ? await submitJson<{ id: string }>(`/api/sites/${site.id}`, 'PATCH', { ...values, customerId: undefined })
       : await submitJson<{ id: string }>('/api/sites', 'POST', values);
     if (!result.ok) return setMessage(applyServerErrors(result.error, setError));
+    closeEdit?.();
     router.push(`/sites/${result.data.id}`);
     router.refresh();
   });
@@ -70,7 +73,7 @@ export function SiteForm({ site, customers, customerId }: { site?: Input & { id:
       {message && <p role="alert" className="text-sm font-medium text-missed-700 md:col-span-2">{message}</p>}
       <div className="flex gap-2 md:col-span-2">
         <Button type="submit" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : site ? 'Save changes' : 'Create site'}</Button>
-        <Button type="button" variant="secondary" onClick={() => router.back()}>Cancel</Button>
+        <Button type="button" variant="secondary" onClick={() => (closeEdit ? closeEdit() : router.back())}>Cancel</Button>
       </div>
     </form>
   );

@@ -12,6 +12,7 @@ import { recordForPage } from '@/lib/page-record';
 import { formatDuration, formatLength, formatPressure, formatTemperature } from '@/lib/units';
 import { EventTimeline } from './event-timeline';
 import { ReviewForm } from './review-form';
+import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'Review install' };
 
@@ -28,11 +29,12 @@ export default async function Page({ params }: { params: Promise<{ installId: st
 
   return (
     <div className="space-y-6">
-      <div className="flex flex-wrap items-start justify-between gap-3">
-        <div>
-          <Link href="/reviews" className="text-sm text-brand-700 hover:underline">← Review</Link>
-          <h1 className="mt-1 text-2xl font-bold">Job {r.job.number} · repair {repair.position}</h1>
-          <p className="text-slate-600">
+      <PageHeader
+        back={{ href: '/reviews', label: 'Review' }}
+        title={`Job ${r.job.number} · repair ${repair.position}`}
+        actions={<StatusBadge status={r.install.status} />}
+        description={<>
+          <p>
             {r.customer.name} · {r.site.addressLine}, {r.site.city} · {label(repair.defectType)} at {formatLength(repair.distanceMm, units, 'long')}
             {repair.accessPoint ? ` from ${repair.accessPoint.label}` : ''} in {repair.segment.label}
             {repair.clockPosition ? ` · ${repair.clockPosition} o'clock` : ''} · {r.crew?.name ?? 'no crew'}
@@ -49,9 +51,8 @@ export default async function Page({ params }: { params: Promise<{ installId: st
               Redone by <Link className="underline" href={`/reviews/${r.chain.replacedBy.id}`}>a new install</Link> ({label(r.chain.replacedBy.status).toLowerCase()}); this one is kept as the record of the first attempt.
             </p>
           )}
-        </div>
-        <StatusBadge status={r.install.status} />
-      </div>
+        </>}
+      />
 
       <section aria-labelledby="flags-heading" className="space-y-2">
         <h2 id="flags-heading" className="text-lg font-semibold">Quality flags</h2>

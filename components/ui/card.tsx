@@ -1,0 +1,7 @@
+import type { ComponentProps } from 'react';
+import { cn } from '@/lib/ui/cn';
+
+/** A white panel on the page's slate background. */
+export function Card({ className, ...props }: ComponentProps<'div'>) {
+  return <div className={cn('rounded-lg bg-white p-4 ring-1 ring-slate-200', className)} {...props} />;
+}
