@@ -6,7 +6,8 @@ import { useEffect, useRef, useState, type ReactNode } from 'react';
 import { useForm } from 'react-hook-form';
 import useSWR from 'swr';
 import type { ReportSendsResponse } from '@/app/api/jobs/[id]/report-sends/route';
-import { FormField, errorProps, inputClass, textareaClass } from '@/components/desk/form-field';
+import { FormField, errorProps } from '@/components/desk/form-field';
+import { Input, Textarea } from '@/components/ui/input';
 import { Badge } from '@/components/ui/badge';
 import { Button, buttonVariants } from '@/components/ui/button';
 import { fetchJson } from '@/lib/client/fetch-json';
@@ -65,10 +66,10 @@ export function ReportPanelClient({ jobId, customerEmail, blockedReason, linksSl
       {open && (
         <form id="report-send-form" onSubmit={form.handleSubmit(onSubmit)} className="mt-3 grid max-w-xl gap-3" noValidate>
           <FormField id="report-to" label="Send to" error={errors.to?.message} hint={customerEmail ? 'The customer’s e-mail unless you change it.' : 'The customer has no e-mail on file.'}>
-            <input type="email" className={inputClass} {...errorProps('report-to', errors.to?.message)} {...form.register('to')} />
+            <Input type="email" {...errorProps('report-to', errors.to?.message)} {...form.register('to')} />
           </FormField>
           <FormField id="report-message" label="Message (optional)" error={errors.message?.message}>
-            <textarea className={textareaClass} {...errorProps('report-message', errors.message?.message)} {...form.register('message')} />
+            <Textarea {...errorProps('report-message', errors.message?.message)} {...form.register('message')} />
           </FormField>
           <div><Button type="submit" disabled={isSubmitting}>{isSubmitting ? 'Queuing…' : 'Send now'}</Button></div>
         </form>

@@ -6,7 +6,8 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { useCloseEditSection } from '@/components/desk/edit-section';
-import { FormField, errorProps, inputClass, textareaClass } from '@/components/desk/form-field';
+import { FormField, errorProps } from '@/components/desk/form-field';
+import { Input as TextInput, Select, Textarea } from '@/components/ui/input';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
 import { CUSTOMER_KINDS, label } from '@/lib/domain';
@@ -38,28 +39,28 @@ export function CustomerForm({ customer }: { customer?: Input & { id: string } }
   return (
     <form onSubmit={onSubmit} noValidate className="grid max-w-2xl gap-4 rounded-lg bg-white p-4 ring-1 ring-slate-200 md:grid-cols-2">
       <FormField id="name" label="Name" error={errors.name?.message}>
-        <input {...register('name')} {...errorProps('name', errors.name?.message)} className={inputClass} autoFocus />
+        <TextInput {...register('name')} {...errorProps('name', errors.name?.message)} autoFocus />
       </FormField>
       <FormField id="kind" label="Kind" error={errors.kind?.message}>
-        <select {...register('kind')} {...errorProps('kind', errors.kind?.message)} className={inputClass}>
+        <Select {...register('kind')} {...errorProps('kind', errors.kind?.message)}>
           {CUSTOMER_KINDS.map((kind) => <option key={kind} value={kind}>{label(kind)}</option>)}
-        </select>
+        </Select>
       </FormField>
       <FormField id="contactName" label="Contact person" error={errors.contactName?.message}>
-        <input {...register('contactName')} {...errorProps('contactName', errors.contactName?.message)} className={inputClass} />
+        <TextInput {...register('contactName')} {...errorProps('contactName', errors.contactName?.message)} />
       </FormField>
       <FormField id="email" label="E-mail (repair reports go here)" error={errors.email?.message}>
-        <input type="email" {...register('email')} {...errorProps('email', errors.email?.message)} className={inputClass} />
+        <TextInput type="email" {...register('email')} {...errorProps('email', errors.email?.message)} />
       </FormField>
       <FormField id="phone" label="Phone" error={errors.phone?.message}>
-        <input type="tel" {...register('phone')} {...errorProps('phone', errors.phone?.message)} className={inputClass} />
+        <TextInput type="tel" {...register('phone')} {...errorProps('phone', errors.phone?.message)} />
       </FormField>
       <FormField id="billingAddress" label="Billing address" error={errors.billingAddress?.message}>
-        <textarea {...register('billingAddress')} {...errorProps('billingAddress', errors.billingAddress?.message)} className={textareaClass} />
+        <Textarea {...register('billingAddress')} {...errorProps('billingAddress', errors.billingAddress?.message)} />
       </FormField>
       <div className="md:col-span-2">
         <FormField id="notes" label="Notes" error={errors.notes?.message}>
-          <textarea {...register('notes')} {...errorProps('notes', errors.notes?.message)} className={textareaClass} />
+          <Textarea {...register('notes')} {...errorProps('notes', errors.notes?.message)} />
         </FormField>
       </div>
       {message && <p role="alert" className="text-sm font-medium text-missed-700 md:col-span-2">{message}</p>}

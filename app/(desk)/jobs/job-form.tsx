@@ -6,7 +6,8 @@ import { useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import type { z } from 'zod';
 import { useCloseEditSection } from '@/components/desk/edit-section';
-import { FormField, errorProps, inputClass, textareaClass } from '@/components/desk/form-field';
+import { FormField, errorProps } from '@/components/desk/form-field';
+import { Input as TextInput, Select, Textarea } from '@/components/ui/input';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
 import type { JobFormOptions } from '@/lib/data/jobs';
@@ -50,34 +51,34 @@ export function JobForm({ options, job }: { options: JobFormOptions; job?: Editi
   return (
     <form onSubmit={onSubmit} noValidate className="grid max-w-2xl gap-4 rounded-lg bg-white p-4 ring-1 ring-slate-200 md:grid-cols-2">
       <FormField id="customerId" label="Customer" error={errors.customerId?.message} hint={job?.siteLocked ? 'Only a draft job can move to another customer.' : undefined}>
-        <select {...customerField} {...errorProps('customerId', errors.customerId?.message)} className={inputClass} disabled={job?.siteLocked} autoFocus={!job}>
+        <Select {...customerField} {...errorProps('customerId', errors.customerId?.message)} disabled={job?.siteLocked} autoFocus={!job}>
           <option value="">Pick a customer…</option>
           {options.customers.map((customer) => <option key={customer.id} value={customer.id}>{customer.name}</option>)}
-        </select>
+        </Select>
       </FormField>
       <FormField id="siteId" label="Site" error={errors.siteId?.message} hint={customerId && sites.length === 0 ? 'This customer has no site yet: add one on the customer’s page.' : undefined}>
-        <select {...register('siteId')} {...errorProps('siteId', errors.siteId?.message)} className={inputClass} disabled={job?.siteLocked || !customerId}>
+        <Select {...register('siteId')} {...errorProps('siteId', errors.siteId?.message)} disabled={job?.siteLocked || !customerId}>
           <option value="">{customerId ? 'Pick a site…' : 'Pick the customer first'}</option>
           {sites.map((site) => <option key={site.id} value={site.id}>{site.name} · {site.addressLine}, {site.city}</option>)}
-        </select>
+        </Select>
       </FormField>
       <div className="md:col-span-2">
         <FormField id="title" label="Title" error={errors.title?.message}>
-          <input {...register('title')} {...errorProps('title', errors.title?.message)} className={inputClass} placeholder="e.g. Two fractures in the rear lateral" />
+          <TextInput {...register('title')} {...errorProps('title', errors.title?.message)} placeholder="e.g. Two fractures in the rear lateral" />
         </FormField>
       </div>
       <FormField id="crewId" label="Crew" error={errors.crewId?.message} hint={job?.scheduleLocked ? 'The crew and day can no longer change.' : 'A crew and a day schedule the job.'}>
-        <select {...register('crewId')} {...errorProps('crewId', errors.crewId?.message)} className={inputClass} disabled={job?.scheduleLocked}>
+        <Select {...register('crewId')} {...errorProps('crewId', errors.crewId?.message)} disabled={job?.scheduleLocked}>
           <option value="">None yet</option>
           {options.crews.map((crew) => <option key={crew.id} value={crew.id}>{crew.name}</option>)}
-        </select>
+        </Select>
       </FormField>
       <FormField id="scheduledDate" label="Scheduled date" error={errors.scheduledDate?.message}>
-        <input type="date" {...register('scheduledDate')} {...errorProps('scheduledDate', errors.scheduledDate?.message)} className={inputClass} disabled={job?.scheduleLocked} />
+        <TextInput type="date" {...register('scheduledDate')} {...errorProps('scheduledDate', errors.scheduledDate?.message)} disabled={job?.scheduleLocked} />
       </FormField>
       <div className="md:col-span-2">
         <FormField id="notes" label="Notes" error={errors.notes?.message}>
-          <textarea {...register('notes')} {...errorProps('notes', errors.notes?.message)} className={textareaClass} />
+          <Textarea {...register('notes')} {...errorProps('notes', errors.notes?.message)} />
         </FormField>
       </div>
       {message && <p role="alert" className="text-sm font-medium text-missed-700 md:col-span-2">{message}</p>}

@@ -6,7 +6,8 @@ import { useMemo, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { useCloseEditSection } from '@/components/desk/edit-section';
-import { FormField, errorProps, inputClass } from '@/components/desk/form-field';
+import { FormField, errorProps } from '@/components/desk/form-field';
+import { Input, Select } from '@/components/ui/input';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
 import { PIPE_MATERIALS, label } from '@/lib/domain';
@@ -58,7 +59,7 @@ export function SegmentForm({ siteId, accessPoints, unitSystem, segment }: { sit
 
   const number = (name: 'nominalSizeMm' | 'insideDiameterMm' | 'lengthMm' | 'depthMm', text: string, unit: string, hint: string) => (
     <FormField id={name} label={text} error={errors[name]?.message} hint={`${hint} (${unit})`}>
-      <input type="number" step="any" inputMode="decimal" min={0} {...register(name)} {...errorProps(name, errors[name]?.message)} className={inputClass} />
+      <Input type="number" step="any" inputMode="decimal" min={0} {...register(name)} {...errorProps(name, errors[name]?.message)} />
     </FormField>
   );
 
@@ -66,25 +67,25 @@ export function SegmentForm({ siteId, accessPoints, unitSystem, segment }: { sit
     <form onSubmit={onSubmit} noValidate className="grid max-w-2xl gap-4 rounded-lg bg-white p-4 ring-1 ring-slate-200 md:grid-cols-2">
       <div className="md:col-span-2">
         <FormField id="label" label="Label" error={errors.label?.message} hint="How the crew names the run, e.g. MH-1 → MH-2">
-          <input {...register('label')} {...errorProps('label', errors.label?.message)} className={inputClass} autoFocus />
+          <Input {...register('label')} {...errorProps('label', errors.label?.message)} autoFocus />
         </FormField>
       </div>
       <FormField id="fromAccessPointId" label="From access point" error={errors.fromAccessPointId?.message} hint="The end the crew works from (upstream, usually)">
-        <select {...register('fromAccessPointId')} {...errorProps('fromAccessPointId', errors.fromAccessPointId?.message)} className={inputClass}>
+        <Select {...register('fromAccessPointId')} {...errorProps('fromAccessPointId', errors.fromAccessPointId?.message)}>
           <option value="">Pick an access point…</option>
           {accessPoints.map((point) => <option key={point.id} value={point.id}>{point.label}</option>)}
-        </select>
+        </Select>
       </FormField>
       <FormField id="toAccessPointId" label="To access point" error={errors.toAccessPointId?.message}>
-        <select {...register('toAccessPointId')} {...errorProps('toAccessPointId', errors.toAccessPointId?.message)} className={inputClass}>
+        <Select {...register('toAccessPointId')} {...errorProps('toAccessPointId', errors.toAccessPointId?.message)}>
           <option value="">None — open end (e.g. a lateral into the main)</option>
           {accessPoints.map((point) => <option key={point.id} value={point.id}>{point.label}</option>)}
-        </select>
+        </Select>
       </FormField>
       <FormField id="material" label="Material" error={errors.material?.message}>
-        <select {...register('material')} {...errorProps('material', errors.material?.message)} className={inputClass}>
+        <Select {...register('material')} {...errorProps('material', errors.material?.message)}>
           {PIPE_MATERIALS.map((material) => <option key={material} value={material}>{label(material)}</option>)}
-        </select>
+        </Select>
       </FormField>
       {number('nominalSizeMm', 'Nominal size', units.shortLength, 'Trade size')}
       {number('insideDiameterMm', 'Inside diameter', units.shortLength, 'Measured, after cleaning')}

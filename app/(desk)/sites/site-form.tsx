@@ -6,7 +6,8 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { useCloseEditSection } from '@/components/desk/edit-section';
-import { FormField, errorProps, inputClass, textareaClass } from '@/components/desk/form-field';
+import { FormField, errorProps } from '@/components/desk/form-field';
+import { Input as TextInput, Select, Textarea } from '@/components/ui/input';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
 import { siteInputSchema } from '@/lib/validation/sites';
@@ -43,31 +44,31 @@ export function SiteForm({ site, customers, customerId }: { site?: Input & { id:
       {!site && (
         <div className="md:col-span-2">
           <FormField id="customerId" label="Customer" error={errors.customerId?.message}>
-            <select {...register('customerId')} {...errorProps('customerId', errors.customerId?.message)} className={inputClass}>
+            <Select {...register('customerId')} {...errorProps('customerId', errors.customerId?.message)}>
               <option value="">Pick a customer…</option>
               {(customers ?? []).map((customer) => <option key={customer.id} value={customer.id}>{customer.name}</option>)}
-            </select>
+            </Select>
           </FormField>
         </div>
       )}
       <FormField id="name" label="Site name" error={errors.name?.message} hint="What the crew calls it, e.g. “Rear yard” or “Block C”">
-        <input {...register('name')} {...errorProps('name', errors.name?.message)} className={inputClass} autoFocus />
+        <TextInput {...register('name')} {...errorProps('name', errors.name?.message)} autoFocus />
       </FormField>
       <FormField id="addressLine" label="Street address" error={errors.addressLine?.message}>
-        <input {...register('addressLine')} {...errorProps('addressLine', errors.addressLine?.message)} className={inputClass} autoComplete="street-address" />
+        <TextInput {...register('addressLine')} {...errorProps('addressLine', errors.addressLine?.message)} autoComplete="street-address" />
       </FormField>
       <FormField id="city" label="City" error={errors.city?.message}>
-        <input {...register('city')} {...errorProps('city', errors.city?.message)} className={inputClass} />
+        <TextInput {...register('city')} {...errorProps('city', errors.city?.message)} />
       </FormField>
       <FormField id="region" label="Region" error={errors.region?.message}>
-        <input {...register('region')} {...errorProps('region', errors.region?.message)} className={inputClass} />
+        <TextInput {...register('region')} {...errorProps('region', errors.region?.message)} />
       </FormField>
       <FormField id="postalCode" label="Postal code" error={errors.postalCode?.message}>
-        <input {...register('postalCode')} {...errorProps('postalCode', errors.postalCode?.message)} className={inputClass} />
+        <TextInput {...register('postalCode')} {...errorProps('postalCode', errors.postalCode?.message)} />
       </FormField>
       <div className="md:col-span-2">
         <FormField id="notes" label="Notes" error={errors.notes?.message} hint="Access, parking, gate codes, traffic control the crew should know about">
-          <textarea {...register('notes')} {...errorProps('notes', errors.notes?.message)} className={textareaClass} />
+          <Textarea {...register('notes')} {...errorProps('notes', errors.notes?.message)} />
         </FormField>
       </div>
       {message && <p role="alert" className="text-sm font-medium text-missed-700 md:col-span-2">{message}</p>}

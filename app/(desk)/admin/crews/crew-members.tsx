@@ -5,6 +5,7 @@ import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { submitJson } from '@/lib/client/submit-json';
 import { label } from '@/lib/domain';
+import { cn } from '@/lib/ui/cn';
 
 type Person = { id: string; name: string; role: string; active: boolean };
 
@@ -47,7 +48,7 @@ export function CrewMembers({ crewId, members, candidates, readOnly }: { crewId:
         ))}
       </ul>
       {readOnly && <p className="mt-2 text-sm text-slate-500">Restore the crew to change its members.</p>}
-      {message && <p role={message.ok ? 'status' : 'alert'} className={`mt-2 text-sm font-medium ${message.ok ? 'text-safe-700' : 'text-missed-700'}`}>{message.text}</p>}
+      {message && <p role={message.ok ? 'status' : 'alert'} className={cn('mt-2 text-sm font-medium', message.ok ? 'text-safe-700' : 'text-missed-700')}>{message.text}</p>}
       {!readOnly && <Button type="button" className="mt-3" onClick={save}>{busy ? 'Saving…' : 'Save members'}</Button>}
     </fieldset>
   );
