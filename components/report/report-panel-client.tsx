@@ -13,6 +13,7 @@ import { Button, buttonVariants } from '@/components/ui/button';
 import { fetchJson } from '@/lib/client/fetch-json';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
 import { sendReportSchema, type SendReportInput } from '@/lib/validation/report';
+import { cardClass } from '@/components/ui/card';
 
 const TONES: Record<string, 'near' | 'safe' | 'missed'> = { queued: 'near', sending: 'near', sent: 'safe', failed: 'missed' };
 const STATUS_TEXT: Record<string, string> = { queued: 'Queued', sending: 'Sending', sent: 'Sent', failed: 'Failed' };
@@ -50,7 +51,7 @@ export function ReportPanelClient({ jobId, customerEmail, blockedReason, linksSl
   }
 
   return (
-    <section aria-labelledby="report-heading" className="rounded-lg bg-white p-4 ring-1 ring-slate-200" data-section="repair-report">
+    <section aria-labelledby="report-heading" className={cardClass} data-section="repair-report">
       <div className="flex flex-wrap items-center justify-between gap-3">
         <h2 id="report-heading" className="text-lg font-semibold">Repair report</h2>
         <div className="flex gap-2">

@@ -12,6 +12,8 @@ import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
 import { CUSTOMER_KINDS, label } from '@/lib/domain';
 import { customerInputSchema } from '@/lib/validation/customers';
+import { cardClass } from '@/components/ui/card';
+import { cn } from '@/lib/ui/cn';
 
 type Input = z.input<typeof customerInputSchema>;
 type Output = z.output<typeof customerInputSchema>;
@@ -37,7 +39,7 @@ export function CustomerForm({ customer }: { customer?: Input & { id: string } }
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="grid max-w-2xl gap-4 rounded-lg bg-white p-4 ring-1 ring-slate-200 md:grid-cols-2">
+    <form onSubmit={onSubmit} noValidate className={cn(cardClass, 'grid max-w-2xl gap-4 md:grid-cols-2')}>
       <FormField id="name" label="Name" error={errors.name?.message}>
         <TextInput {...register('name')} {...errorProps('name', errors.name?.message)} autoFocus />
       </FormField>

@@ -12,6 +12,8 @@ import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
 import type { JobFormOptions } from '@/lib/data/jobs';
 import { jobInputSchema } from '@/lib/validation/jobs';
+import { cardClass } from '@/components/ui/card';
+import { cn } from '@/lib/ui/cn';
 
 type Input = z.input<typeof jobInputSchema>;
 type Output = z.output<typeof jobInputSchema>;
@@ -49,7 +51,7 @@ export function JobForm({ options, job }: { options: JobFormOptions; job?: Editi
 
   const customerField = register('customerId', { onChange: () => setValue('siteId', '') });
   return (
-    <form onSubmit={onSubmit} noValidate className="grid max-w-2xl gap-4 rounded-lg bg-white p-4 ring-1 ring-slate-200 md:grid-cols-2">
+    <form onSubmit={onSubmit} noValidate className={cn(cardClass, 'grid max-w-2xl gap-4 md:grid-cols-2')}>
       <FormField id="customerId" label="Customer" error={errors.customerId?.message} hint={job?.siteLocked ? 'Only a draft job can move to another customer.' : undefined}>
         <Select {...customerField} {...errorProps('customerId', errors.customerId?.message)} disabled={job?.siteLocked} autoFocus={!job}>
           <option value="">Pick a customer…</option>

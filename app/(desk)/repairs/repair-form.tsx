@@ -13,6 +13,8 @@ import { applyServerErrors, submitJson, type ApiFailure } from '@/lib/client/sub
 import { DEFECT_TYPES, label } from '@/lib/domain';
 import { formatLength, lengthToSi, unitLabels, type UnitSystem } from '@/lib/units';
 import { REPAIR_FORM_FIELDS, repairFormSchema } from '@/lib/validation/repairs';
+import { cardClass } from '@/components/ui/card';
+import { cn } from '@/lib/ui/cn';
 
 type Input = z.input<ReturnType<typeof repairFormSchema>>;
 type Output = z.output<ReturnType<typeof repairFormSchema>>;
@@ -45,7 +47,7 @@ export function RepairForm({ jobId, repairId, segments, unitSystem, initial }: {
 
   const field = (id: keyof Input) => errorProps(id, errors[id]?.message);
   return (
-    <form onSubmit={onSubmit} noValidate className="grid max-w-2xl gap-4 rounded-lg bg-white p-4 ring-1 ring-slate-200 md:grid-cols-2">
+    <form onSubmit={onSubmit} noValidate className={cn(cardClass, 'grid max-w-2xl gap-4 md:grid-cols-2')}>
       <div className="md:col-span-2">
         <FormField id="segmentId" label="Segment" error={errors.segmentId?.message} hint={segments.length === 0 ? 'This site has no segments yet: add one on the site’s page.' : undefined}>
           <Select {...register('segmentId')} {...field('segmentId')} autoFocus>

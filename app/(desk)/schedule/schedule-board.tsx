@@ -4,11 +4,12 @@ import type { BoardCell, BoardJob, ScheduleBoard as Board } from '@/lib/data/sch
 import { SCHEDULABLE_STATUSES } from '@/lib/validation/schedule';
 import { UnscheduleButton } from './schedule-form';
 import { cn } from '@/lib/ui/cn';
+import { EmptyState } from '@/components/ui/empty-state';
 
 /** Crews down the side, the week's days across; each cell lists the crew's jobs that day and its load. */
 export function ScheduleBoard({ board }: { board: Board }) {
   if (board.crews.length === 0) {
-    return <p className="rounded-lg bg-white p-4 text-sm text-slate-600 ring-1 ring-slate-200">No active crews yet. An admin adds crews under Company.</p>;
+    return <EmptyState>No active crews yet. An admin adds crews under Company.</EmptyState>;
   }
   return (
     <div className="overflow-x-auto rounded-lg bg-white ring-1 ring-slate-200">
@@ -59,7 +60,7 @@ function Cell({ cell, capacity, today }: { cell: BoardCell; capacity: number; to
         ))}
       </ul>
       {cell.count > 0 && (
-        <p className={cn('mt-1 text-xs', cell.overCapacity ? 'font-semibold text-missed-700' : 'text-slate-500')}>
+        <p className={cn('mt-1 text-xs', cell.overCapacity ? 'font-semibold text-missed-700' : 'text-slate-600')}>
           {cell.overCapacity ? `Over capacity: ${cell.count} of ${capacity} jobs` : `${cell.count} of ${capacity} jobs`}
         </p>
       )}

@@ -12,6 +12,7 @@ import type { ScheduleJobResponse } from '@/app/api/jobs/[id]/schedule/route';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
 import { label } from '@/lib/domain';
 import { scheduleFormSchema } from '@/lib/validation/schedule';
+import { cardClass } from '@/components/ui/card';
 
 type Values = z.infer<typeof scheduleFormSchema>;
 type JobOption = { id: string; number: string; customerName: string; status: string; crewId: string | null; scheduledDate: string | null; group: string };
@@ -52,7 +53,7 @@ export function ScheduleForm({ jobs, crews, defaultDay }: { jobs: JobOption[]; c
   });
 
   return (
-    <section aria-labelledby="schedule-form-heading" className="rounded-lg bg-white p-4 ring-1 ring-slate-200">
+    <section aria-labelledby="schedule-form-heading" className={cardClass}>
       <h2 id="schedule-form-heading" className="mb-3 font-semibold">Schedule a job</h2>
       <form onSubmit={onSubmit} noValidate className="grid items-start gap-3 md:grid-cols-[minmax(0,2fr)_minmax(0,1fr)_minmax(0,1fr)_auto]">
         <FormField id="jobId" label="Job" error={errors.jobId?.message}>

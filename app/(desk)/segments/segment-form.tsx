@@ -14,6 +14,8 @@ import { PIPE_MATERIALS, label } from '@/lib/domain';
 import { unitLabels, type UnitSystem } from '@/lib/units';
 import { mmToEntered, nominalToEntered } from '@/lib/units/entry';
 import { segmentFormSchema } from '@/lib/validation/segments';
+import { cardClass } from '@/components/ui/card';
+import { cn } from '@/lib/ui/cn';
 
 type Point = { id: string; label: string };
 type Stored = {
@@ -64,7 +66,7 @@ export function SegmentForm({ siteId, accessPoints, unitSystem, segment }: { sit
   );
 
   return (
-    <form onSubmit={onSubmit} noValidate className="grid max-w-2xl gap-4 rounded-lg bg-white p-4 ring-1 ring-slate-200 md:grid-cols-2">
+    <form onSubmit={onSubmit} noValidate className={cn(cardClass, 'grid max-w-2xl gap-4 md:grid-cols-2')}>
       <div className="md:col-span-2">
         <FormField id="label" label="Label" error={errors.label?.message} hint="How the crew names the run, e.g. MH-1 → MH-2">
           <Input {...register('label')} {...errorProps('label', errors.label?.message)} autoFocus />

@@ -11,6 +11,8 @@ import { Input as TextInput, Select, Textarea } from '@/components/ui/input';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
 import { siteInputSchema } from '@/lib/validation/sites';
+import { cardClass } from '@/components/ui/card';
+import { cn } from '@/lib/ui/cn';
 
 type Input = z.input<typeof siteInputSchema>;
 type Output = z.output<typeof siteInputSchema>;
@@ -40,7 +42,7 @@ export function SiteForm({ site, customers, customerId }: { site?: Input & { id:
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="grid max-w-2xl gap-4 rounded-lg bg-white p-4 ring-1 ring-slate-200 md:grid-cols-2">
+    <form onSubmit={onSubmit} noValidate className={cn(cardClass, 'grid max-w-2xl gap-4 md:grid-cols-2')}>
       {!site && (
         <div className="md:col-span-2">
           <FormField id="customerId" label="Customer" error={errors.customerId?.message}>

@@ -9,6 +9,8 @@ import { Input } from '@/components/ui/input';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
 import { checklistTemplateInputSchema, type ChecklistTemplateFormValues, type ChecklistTemplateInput } from '@/lib/validation/checklist-templates';
+import { cardClass } from '@/components/ui/card';
+import { cn } from '@/lib/ui/cn';
 
 /**
  * The crew's pre-install checks, in their order. Items keep their ids (answers on past installs name them);
@@ -38,7 +40,7 @@ export function ChecklistForm({ id, initial }: { id?: string; initial?: Checklis
   };
 
   return (
-    <form onSubmit={onSubmit} noValidate className="max-w-3xl space-y-4 rounded-lg bg-white p-4 ring-1 ring-slate-200">
+    <form onSubmit={onSubmit} noValidate className={cn(cardClass, 'max-w-3xl space-y-4')}>
       <div className="grid gap-4 md:grid-cols-3">
         <div className="md:col-span-2">
           <FormField id="name" label="Name" error={errors.name?.message}>

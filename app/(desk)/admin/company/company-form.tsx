@@ -12,6 +12,7 @@ import { UNIT_SYSTEMS, type UnitSystemName } from '@/lib/domain';
 import { lengthFromSi, lengthToSi, unitLabels } from '@/lib/units';
 import { companyFormSchema, formToCompanyPatch, modulusInSystem, type CompanyFormValues } from '@/lib/validation/company';
 import { cn } from '@/lib/ui/cn';
+import { cardClass } from '@/components/ui/card';
 
 // The API names its fields in SI; the form's own fields carry the entered units.
 const SERVER_FIELD: Record<string, keyof CompanyFormValues> = { minOverlapPerEndMm: 'minOverlapPerEnd', workingWindowSafetyMargin: 'safetyMarginPercent', holdReserve: 'holdReservePercent', linerShortTermModulusMpa: 'linerModulus' };
@@ -52,7 +53,7 @@ export function CompanyForm({ initial, timeZones }: { initial: CompanyFormValues
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="grid max-w-2xl gap-4 rounded-lg bg-white p-4 ring-1 ring-slate-200 md:grid-cols-2">
+    <form onSubmit={onSubmit} noValidate className={cn(cardClass, 'grid max-w-2xl gap-4 md:grid-cols-2')}>
       <FormField id="name" label="Company name" error={errors.name?.message}>
         <Input {...register('name')} {...errorProps('name', errors.name?.message)} />
       </FormField>

@@ -10,6 +10,7 @@ import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
 import { crewInputSchema, type CrewInput } from '@/lib/validation/crews';
 import { cn } from '@/lib/ui/cn';
+import { cardClass } from '@/components/ui/card';
 
 /** New or edit: the same schema as POST /api/crews (PATCH takes the same fields). */
 export function CrewForm({ crew }: { crew?: CrewInput & { id: string } }) {
@@ -29,7 +30,7 @@ export function CrewForm({ crew }: { crew?: CrewInput & { id: string } }) {
     router.refresh();
   });
   return (
-    <form onSubmit={onSubmit} noValidate className="grid max-w-2xl gap-4 rounded-lg bg-white p-4 ring-1 ring-slate-200 md:grid-cols-2">
+    <form onSubmit={onSubmit} noValidate className={cn(cardClass, 'grid max-w-2xl gap-4 md:grid-cols-2')}>
       <FormField id="name" label="Crew name" error={errors.name?.message}>
         <Input {...register('name')} {...errorProps('name', errors.name?.message)} />
       </FormField>

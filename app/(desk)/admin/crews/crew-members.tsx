@@ -6,6 +6,7 @@ import { Button } from '@/components/ui/button';
 import { submitJson } from '@/lib/client/submit-json';
 import { label } from '@/lib/domain';
 import { cn } from '@/lib/ui/cn';
+import { cardClass } from '@/components/ui/card';
 
 type Person = { id: string; name: string; role: string; active: boolean };
 
@@ -33,7 +34,7 @@ export function CrewMembers({ crewId, members, candidates, readOnly }: { crewId:
   };
 
   return (
-    <fieldset className="rounded-lg bg-white p-4 ring-1 ring-slate-200" disabled={readOnly || busy}>
+    <fieldset className={cardClass} disabled={readOnly || busy}>
       <legend className="px-1 text-sm font-semibold uppercase tracking-wide text-slate-600">Members</legend>
       {people.length === 0 && <p className="text-sm text-slate-500">No foremen or technicians yet: add them under Users.</p>}
       <ul className="grid gap-1 text-sm sm:grid-cols-2">

@@ -10,6 +10,8 @@ import { Input } from '@/components/ui/input';
 import { Button } from '@/components/ui/button';
 import { unitLabels, type UnitSystem } from '@/lib/units';
 import { packerFormSchema, type PackerFormValues, type PackerInput } from '@/lib/validation/packers';
+import { cardClass } from '@/components/ui/card';
+import { cn } from '@/lib/ui/cn';
 
 const BLANK: PackerFormValues = {
   name: '', serial: '', minDiameterMm: Number.NaN, maxDiameterMm: Number.NaN, bladderLengthMm: Number.NaN, endMarginMm: Number.NaN,
@@ -37,7 +39,7 @@ export function PackerForm({ id, initial, unitSystem }: { id?: string; initial?:
     </FormField>
   );
   return (
-    <form onSubmit={onSubmit} noValidate className="grid max-w-3xl gap-4 rounded-lg bg-white p-4 ring-1 ring-slate-200 md:grid-cols-2">
+    <form onSubmit={onSubmit} noValidate className={cn(cardClass, 'grid max-w-3xl gap-4 md:grid-cols-2')}>
       <FormField id="name" label="Name" error={errors.name?.message}>
         <Input {...register('name')} {...errorProps('name', errors.name?.message)} autoFocus />
       </FormField>

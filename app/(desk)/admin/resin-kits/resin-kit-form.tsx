@@ -10,6 +10,8 @@ import { Input, Select, Textarea } from '@/components/ui/input';
 import { Button } from '@/components/ui/button';
 import { unitLabels, type UnitSystem } from '@/lib/units';
 import { resinKitFormSchema, type ResinKitFormValues, type ResinKitInput } from '@/lib/validation/resin-kits';
+import { cardClass } from '@/components/ui/card';
+import { cn } from '@/lib/ui/cn';
 
 /** New or edit: the quantity on hand in US gallons or litres as the company works; stored in litres. */
 export function ResinKitForm({ id, initial, unitSystem, systems }: {
@@ -28,7 +30,7 @@ export function ResinKitForm({ id, initial, unitSystem, systems }: {
     router.refresh();
   });
   return (
-    <form onSubmit={onSubmit} noValidate className="grid max-w-3xl gap-4 rounded-lg bg-white p-4 ring-1 ring-slate-200 md:grid-cols-2">
+    <form onSubmit={onSubmit} noValidate className={cn(cardClass, 'grid max-w-3xl gap-4 md:grid-cols-2')}>
       <FormField id="lot" label="Lot number" error={errors.lot?.message}>
         <Input {...register('lot')} {...errorProps('lot', errors.lot?.message)} autoFocus />
       </FormField>

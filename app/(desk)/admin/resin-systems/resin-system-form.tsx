@@ -12,6 +12,8 @@ import { RESIN_CHEMISTRIES, label } from '@/lib/domain';
 import { DEFAULT_EXCESS_PCT, DEFAULT_RESIN_TO_FABRIC_RATIO } from '@/lib/sizing';
 import { unitLabels, type UnitSystem } from '@/lib/units';
 import { resinSystemFormSchema, type ResinSystemFormValues, type ResinSystemInput } from '@/lib/validation/resin-systems';
+import { cardClass } from '@/components/ui/card';
+import { cn } from '@/lib/ui/cn';
 
 const BLANK: ResinSystemFormValues = {
   name: '', chemistry: 'epoxy', refTempC: Number.NaN, potLifeMin: Number.NaN, holdMin: Number.NaN, fullCureMin: Number.NaN,
@@ -48,7 +50,7 @@ export function ResinSystemForm({ id, initial, unitSystem }: { id?: string; init
   );
 
   return (
-    <form onSubmit={onSubmit} noValidate className="grid max-w-3xl gap-4 rounded-lg bg-white p-4 ring-1 ring-slate-200 md:grid-cols-3">
+    <form onSubmit={onSubmit} noValidate className={cn(cardClass, 'grid max-w-3xl gap-4 md:grid-cols-3')}>
       <div className="md:col-span-2">
         <FormField id="name" label="Name" error={errors.name?.message}>
           <Input {...register('name')} {...errorProps('name', errors.name?.message)} autoFocus />

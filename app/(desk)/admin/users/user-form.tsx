@@ -12,6 +12,7 @@ import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
 import { ROLES, label } from '@/lib/domain';
 import { PASSWORD_MIN_LENGTH, userInputSchema, userPatchSchema } from '@/lib/validation/users';
 import { cn } from '@/lib/ui/cn';
+import { cardClass } from '@/components/ui/card';
 
 type NewInput = z.input<typeof userInputSchema>;
 // A disabled control sends nothing, so your own role is simply left out of the PATCH.
@@ -33,7 +34,7 @@ export function NewUserForm() {
     router.refresh();
   });
   return (
-    <form onSubmit={onSubmit} noValidate className="grid max-w-2xl gap-4 rounded-lg bg-white p-4 ring-1 ring-slate-200 md:grid-cols-2">
+    <form onSubmit={onSubmit} noValidate className={cn(cardClass, 'grid max-w-2xl gap-4 md:grid-cols-2')}>
       <FormField id="name" label="Name" error={errors.name?.message}>
         <Input {...register('name')} {...errorProps('name', errors.name?.message)} autoFocus />
       </FormField>
@@ -68,7 +69,7 @@ export function EditUserForm({ user, isSelf }: { user: { id: string; name: strin
     router.refresh();
   });
   return (
-    <form onSubmit={onSubmit} noValidate className="grid max-w-2xl gap-4 rounded-lg bg-white p-4 ring-1 ring-slate-200 md:grid-cols-2">
+    <form onSubmit={onSubmit} noValidate className={cn(cardClass, 'grid max-w-2xl gap-4 md:grid-cols-2')}>
       <FormField id="name" label="Name" error={errors.name?.message}>
         <Input {...register('name')} {...errorProps('name', errors.name?.message)} />
       </FormField>

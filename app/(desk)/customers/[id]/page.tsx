@@ -11,6 +11,8 @@ import { recordForPage } from '@/lib/page-record';
 import { PageHeader } from '@/components/ui/page-header';
 import { EditSection } from '@/components/desk/edit-section';
 import { CustomerForm } from '../customer-form';
+import { cardClass } from '@/components/ui/card';
+import { cn } from '@/lib/ui/cn';
 
 export const metadata: Metadata = { title: 'Customer' };
 
@@ -26,7 +28,7 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
         description={<>{label(customer.kind)}{customer.archivedAt ? ' · archived' : ''}</>}
         actions={!customer.archivedAt && <ArchiveButton url={`/api/customers/${customer.id}`} what="customer" backTo="/customers" />}
       />
-      <dl className="grid grid-cols-2 gap-4 rounded-lg bg-white p-4 text-sm ring-1 ring-slate-200 md:grid-cols-4">
+      <dl className={cn(cardClass, 'grid grid-cols-2 gap-4 text-sm md:grid-cols-4')}>
         <div><dt className="text-slate-500">Contact</dt><dd className="font-medium">{customer.contactName ?? '—'}</dd></div>
         <div><dt className="text-slate-500">E-mail</dt><dd className="font-medium">{customer.email ?? '—'}</dd></div>
         <div><dt className="text-slate-500">Phone</dt><dd className="font-medium">{customer.phone ?? '—'}</dd></div>

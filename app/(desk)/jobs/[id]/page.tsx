@@ -16,6 +16,8 @@ import { formatLength } from '@/lib/units';
 import { JobStatusActions } from './status-actions';
 import { PageHeader } from '@/components/ui/page-header';
 import { EditJob } from './edit-job';
+import { cardClass } from '@/components/ui/card';
+import { cn } from '@/lib/ui/cn';
 
 export const metadata: Metadata = { title: 'Job' };
 
@@ -40,7 +42,7 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
           <ArchiveButton url={`/api/jobs/${job.id}`} what="job" backTo="/jobs" />
         </>}
       />
-      <dl className="grid grid-cols-2 gap-4 rounded-lg bg-white p-4 text-sm ring-1 ring-slate-200 md:grid-cols-4">
+      <dl className={cn(cardClass, 'grid grid-cols-2 gap-4 text-sm md:grid-cols-4')}>
         <div><dt className="text-slate-500">Customer</dt><dd className="font-medium"><Link href={`/customers/${job.customer.id}`} className="text-brand-700 hover:underline">{job.customer.name}</Link></dd></div>
         <div><dt className="text-slate-500">Site</dt><dd className="font-medium">{site.addressLine}, {site.city}</dd></div>
         <div><dt className="text-slate-500">Scheduled</dt><dd className="font-medium">{job.scheduledDate ?? 'Not yet'}</dd></div>

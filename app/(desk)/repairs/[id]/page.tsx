@@ -15,6 +15,8 @@ import { InstallAttempts } from './install-attempts';
 import { PlanPanel } from './plan-panel';
 import { PageHeader } from '@/components/ui/page-header';
 import { EditRepair } from './edit-repair';
+import { cardClass } from '@/components/ui/card';
+import { cn } from '@/lib/ui/cn';
 
 export const metadata: Metadata = { title: 'Repair' };
 
@@ -34,7 +36,7 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
         description={`${label(repair.defectType)}, grade ${repair.conditionGrade}`}
         actions={repair.status !== 'cancelled' && <ArchiveButton url={`/api/repairs/${repair.id}`} what="repair" backTo={`/jobs/${repair.job.id}`} />}
       />
-      <dl className="grid grid-cols-2 gap-4 rounded-lg bg-white p-4 text-sm ring-1 ring-slate-200 md:grid-cols-4">
+      <dl className={cn(cardClass, 'grid grid-cols-2 gap-4 text-sm md:grid-cols-4')}>
         <div><dt className="text-slate-500">Segment</dt><dd className="font-medium">{segment.label} · {label(segment.material)}</dd></div>
         <div><dt className="text-slate-500">Inside diameter</dt><dd className="font-medium">{formatLength(segment.insideDiameterMm, unitSystem)}</dd></div>
         <div><dt className="text-slate-500">Distance from access point</dt><dd className="font-medium">{formatLength(repair.distanceMm, unitSystem, 'long')}{segment.fromAccessPoint ? ` from ${segment.fromAccessPoint.label}` : ''}</dd></div>

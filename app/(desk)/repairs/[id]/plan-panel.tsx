@@ -10,6 +10,8 @@ import { fetchJson, FetchError } from '@/lib/client/fetch-json';
 import { submitJson } from '@/lib/client/submit-json';
 import type { RepairPlanResponse } from '@/lib/data/repairs';
 import { convertPressure, formatForce, formatLength, formatNumber, formatPressure, formatVolume, lengthFromSi, lengthToSi, unitLabels, type UnitSystem } from '@/lib/units';
+import { cardClass } from '@/components/ui/card';
+import { cn } from '@/lib/ui/cn';
 
 /** A modulus in the company's units: psi, or MPa (1 psi = 6.894 757 kPa, NIST SP 811). */
 const modulus = (psi: number, system: UnitSystem) =>
@@ -68,7 +70,7 @@ export function PlanPanel({ repairId, initial, editable }: { repairId: string; i
   };
 
   return (
-    <section aria-labelledby="plan-heading" className="space-y-4 rounded-lg bg-white p-4 ring-1 ring-slate-200">
+    <section aria-labelledby="plan-heading" className={cn(cardClass, 'space-y-4')}>
       <h2 id="plan-heading" className="text-lg font-semibold">Plan</h2>
       <div className="grid gap-3 text-sm md:grid-cols-4">
         <NumberBox label="Groundwater head" unit={units.longLength} hint="Water above the pipe’s invert; 0 when there is none" value={head} onChange={setHead} />

@@ -13,6 +13,7 @@ import { formatDuration, formatLength, formatPressure, formatTemperature } from 
 import { EventTimeline } from './event-timeline';
 import { ReviewForm } from './review-form';
 import { PageHeader } from '@/components/ui/page-header';
+import { cardClass } from '@/components/ui/card';
 
 export const metadata: Metadata = { title: 'Review install' };
 
@@ -59,7 +60,7 @@ export default async function Page({ params }: { params: Promise<{ installId: st
         <FlagList flags={r.flags} />
       </section>
 
-      <section aria-labelledby="timeline-heading" className="rounded-lg bg-white p-4 ring-1 ring-slate-200">
+      <section aria-labelledby="timeline-heading" className={cardClass}>
         <h2 id="timeline-heading" className="mb-2 text-lg font-semibold">Plan against reality</h2>
         <TimelineChart
           timeZone={timeZone}
@@ -76,7 +77,7 @@ export default async function Page({ params }: { params: Promise<{ installId: st
       </section>
 
       <div className="grid gap-4 lg:grid-cols-2">
-        <section aria-labelledby="conditions-heading" className="rounded-lg bg-white p-4 ring-1 ring-slate-200">
+        <section aria-labelledby="conditions-heading" className={cardClass}>
           <h2 id="conditions-heading" className="mb-2 text-lg font-semibold">Conditions and materials</h2>
           <dl className="grid grid-cols-2 gap-x-4 gap-y-2 text-sm">
             <Item term="Resin temperature" value={r.install.mixTempC != null ? formatTemperature(r.install.mixTempC, units) : '—'} />
@@ -95,7 +96,7 @@ export default async function Page({ params }: { params: Promise<{ installId: st
             <Item term="Inspection" value={state.inspection ? `${state.inspection.result === 'pass' ? 'Pass' : 'Fail'}${state.inspection.notes ? `: ${state.inspection.notes}` : ''}` : '—'} />
           </dl>
         </section>
-        <section aria-labelledby="checks-heading" className="rounded-lg bg-white p-4 ring-1 ring-slate-200">
+        <section aria-labelledby="checks-heading" className={cardClass}>
           <h2 id="checks-heading" className="mb-2 text-lg font-semibold">Check-list answers</h2>
           {checks ? (
             <ul className="space-y-1 text-sm">
@@ -114,7 +115,7 @@ export default async function Page({ params }: { params: Promise<{ installId: st
 
       <EventTimeline log={r.log} timeZone={timeZone} unitSystem={units} kits={Object.fromEntries(kits)} packers={Object.fromEntries(packers)} />
 
-      <section aria-labelledby="decision-heading" className="rounded-lg bg-white p-4 ring-1 ring-slate-200">
+      <section aria-labelledby="decision-heading" className={cardClass}>
         <h2 id="decision-heading" className="mb-2 text-lg font-semibold">Decision</h2>
         {r.install.status === 'awaiting_review' ? (
           <ReviewForm installId={r.install.id} />

@@ -10,6 +10,9 @@ import { recordForPage } from '@/lib/page-record';
 import { formatLength } from '@/lib/units';
 import { PageHeader } from '@/components/ui/page-header';
 import { EditSegment } from './edit-segment';
+import { cardClass } from '@/components/ui/card';
+import { cn } from '@/lib/ui/cn';
+import { EmptyState } from '@/components/ui/empty-state';
 
 export const metadata: Metadata = { title: 'Segment' };
 
@@ -28,7 +31,7 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
         description={`${ends}${segment.archivedAt ? ' · archived' : ''}`}
         actions={!segment.archivedAt && <ArchiveButton url={`/api/segments/${segment.id}`} what="segment" backTo={`/sites/${segment.siteId}`} />}
       />
-      <dl className="grid grid-cols-2 gap-4 rounded-lg bg-white p-4 text-sm ring-1 ring-slate-200 md:grid-cols-4">
+      <dl className={cn(cardClass, 'grid grid-cols-2 gap-4 text-sm md:grid-cols-4')}>
         <div><dt className="text-slate-500">Site</dt><dd className="font-medium">{segment.site.addressLine}, {segment.site.city}</dd></div>
         <div><dt className="text-slate-500">Customer</dt><dd className="font-medium">{segment.site.customer?.name ?? '—'}</dd></div>
         <div><dt className="text-slate-500">From access point</dt><dd className="font-medium">{segment.fromAccessPoint.label} ({label(segment.fromAccessPoint.kind)})</dd></div>
@@ -43,7 +46,7 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
       <section aria-labelledby="repairs-heading">
         <h2 id="repairs-heading" className="mb-2 text-lg font-semibold">Repairs on this segment</h2>
         {segment.repairs.length === 0 ? (
-          <p className="rounded-lg bg-white p-4 text-sm text-slate-500 ring-1 ring-slate-200">No repairs planned on this segment.</p>
+          <EmptyState>No repairs planned on this segment.</EmptyState>
         ) : (
           <table className="min-w-full rounded-lg bg-white text-sm ring-1 ring-slate-200">
             <caption className="sr-only">Repairs on this segment</caption>

@@ -13,6 +13,8 @@ import { AccessPointsPanel } from './access-points-panel';
 import { PageHeader } from '@/components/ui/page-header';
 import { EditSection } from '@/components/desk/edit-section';
 import { SiteForm } from '../site-form';
+import { cardClass } from '@/components/ui/card';
+import { cn } from '@/lib/ui/cn';
 
 export const metadata: Metadata = { title: 'Site' };
 
@@ -29,7 +31,7 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
         description={<><Link href={`/customers/${site.customer.id}`} className="hover:underline">{site.customer.name}</Link>{site.archivedAt ? ' · archived' : ''}</>}
         actions={!site.archivedAt && <ArchiveButton url={`/api/sites/${site.id}`} what="site" backTo="/sites" />}
       />
-      <dl className="grid grid-cols-2 gap-4 rounded-lg bg-white p-4 text-sm ring-1 ring-slate-200 md:grid-cols-4">
+      <dl className={cn(cardClass, 'grid grid-cols-2 gap-4 text-sm md:grid-cols-4')}>
         <div><dt className="text-slate-500">Street address</dt><dd className="font-medium">{site.addressLine}</dd></div>
         <div><dt className="text-slate-500">City</dt><dd className="font-medium">{site.city}</dd></div>
         <div><dt className="text-slate-500">Region</dt><dd className="font-medium">{site.region ?? '—'}</dd></div>

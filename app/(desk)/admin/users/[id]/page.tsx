@@ -10,6 +10,8 @@ import { recordForPage } from '@/lib/page-record';
 import { UserActions } from '../user-actions';
 import { EditUserForm } from '../user-form';
 import { PageHeader } from '@/components/ui/page-header';
+import { cardClass } from '@/components/ui/card';
+import { cn } from '@/lib/ui/cn';
 
 export const metadata: Metadata = { title: 'User' };
 
@@ -29,7 +31,7 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
         actions={<UserActions user={user} isSelf={isSelf} />}
       />
       <EditUserForm user={user} isSelf={isSelf} />
-      <section className="rounded-lg bg-white p-4 text-sm ring-1 ring-slate-200">
+      <section className={cn(cardClass, 'text-sm')}>
         <h2 className="mb-2 text-sm font-semibold uppercase tracking-wide text-slate-600">Crews</h2>
         {user.crews.length === 0 ? (
           <p className="text-slate-500">On no crew.</p>
