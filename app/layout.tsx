@@ -6,13 +6,15 @@ import '@fontsource/inter/600.css';
 import '@fontsource/inter/700.css';
 import './globals.css';
 import { OfflineProvider } from '@/components/shell/offline-provider';
+import { siteConfig } from '@/config/site';
 
 export const metadata: Metadata = {
-  title: { default: 'Setline', template: '%s · Setline' },
-  description: 'Point-repair jobs, install clocks and repair reports.',
+  title: { default: siteConfig.name, template: `%s · ${siteConfig.name}` },
+  description: siteConfig.description,
+  applicationName: siteConfig.name,
 };
 
-export const viewport: Viewport = { themeColor: '#115e59', width: 'device-width', initialScale: 1 };
+export const viewport: Viewport = { themeColor: siteConfig.themeColor, width: 'device-width', initialScale: 1 };
 
 export default async function RootLayout({ children }: { children: React.ReactNode }) {
   // Every page is rendered per request: its scripts carry that request's CSP nonce (proxy.ts), which a

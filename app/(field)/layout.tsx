@@ -2,6 +2,7 @@ import Link from 'next/link';
 import { Logo } from '@/components/shell/logo';
 import { SignOutButton } from '@/components/shell/sign-out-button';
 import { requirePageUser } from '@/lib/auth/session';
+import { siteConfig } from '@/config/site';
 import { FIELD_ROLES, label } from '@/lib/domain';
 
 export const dynamic = 'force-dynamic';
@@ -14,7 +15,7 @@ export default async function FieldLayout({ children }: { children: React.ReactN
       <header className="flex items-center justify-between bg-slate-900 px-4 py-3 text-white">
         <div className="flex items-center gap-2 text-brand-100">
           <Logo className="h-8 w-8" />
-          <span className="text-xl font-bold text-white">Setline</span>
+          <span className="text-xl font-bold text-white">{siteConfig.name}</span>
         </div>
         <div className="flex items-center gap-4">
           {user.role === 'foreman' && (

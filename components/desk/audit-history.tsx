@@ -1,12 +1,13 @@
 import { listAudit } from '@/lib/data/audit';
 import { formatInZone } from '@/lib/dates';
 import type { SessionUser } from '@/lib/auth/session';
+import { cardClass } from '@/components/ui/card';
 
 /** "History" panel of a detail page: who changed what, when and why (from the audit trail). */
 export async function AuditHistory({ user, entityType, entityId, timeZone }: { user: SessionUser; entityType: string; entityId: string; timeZone: string }) {
   const entries = await listAudit(user, entityType, entityId);
   return (
-    <section aria-labelledby="history-heading" className="rounded-lg bg-white p-4 ring-1 ring-slate-200">
+    <section aria-labelledby="history-heading" className={cardClass}>
       <h2 id="history-heading" className="mb-2 text-sm font-semibold uppercase tracking-wide text-slate-600">History</h2>
       {entries.length === 0 ? (
         <p className="text-sm text-slate-500">No changes recorded yet.</p>

@@ -12,8 +12,6 @@ export function FormField({ id, label, error, hint, children }: { id: string; la
   );
 }
 
-export const inputClass = 'h-9 rounded-md border border-slate-300 px-2 aria-[invalid=true]:border-missed-600';
-export const textareaClass = 'min-h-20 rounded-md border border-slate-300 p-2 aria-[invalid=true]:border-missed-600';
 
-/** The aria props tying a control to its FormField error. */
+/** The aria props tying a control (Input, Select, Textarea of components/ui/input) to its FormField error. */
 export const errorProps = (id: string, error?: string) => ({ id, 'aria-invalid': error ? true : undefined, 'aria-describedby': error ? `${id}-error` : undefined });

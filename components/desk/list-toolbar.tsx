@@ -1,6 +1,7 @@
 import Link from 'next/link';
 import type { ReactNode } from 'react';
-import { buttonClass } from '@/components/ui/button';
+import { buttonVariants } from '@/components/ui/button';
+import { Input, Select } from '@/components/ui/input';
 
 /**
  * The bar above every desk list: a GET form (so the filter lives in the URL and survives a reload),
@@ -26,14 +27,14 @@ export function ListToolbar({
       <form className="flex flex-wrap items-end gap-3 text-sm" role="search">
         <label className="flex flex-col">
           <span className="font-medium">Search</span>
-          <input name="q" type="search" defaultValue={search ?? ''} placeholder={placeholder} className="h-9 w-64 rounded-md border border-slate-300 px-2" />
+          <Input name="q" type="search" defaultValue={search ?? ''} placeholder={placeholder} className="w-64" />
         </label>
         {children}
-        <button type="submit" className={buttonClass('secondary')}>Filter</button>
+        <button type="submit" className={buttonVariants({ variant: 'secondary' })}>Filter</button>
       </form>
       <div className="flex gap-2">
-        <a href={exportHref} className={buttonClass('secondary')} download>Export CSV</a>
-        {newHref && <Link href={newHref} className={buttonClass('primary')}>{newLabel ?? 'New'}</Link>}
+        <a href={exportHref} className={buttonVariants({ variant: 'secondary' })} download>Export CSV</a>
+        {newHref && <Link href={newHref} className={buttonVariants({ variant: 'primary' })}>{newLabel ?? 'New'}</Link>}
       </div>
     </div>
   );
@@ -54,12 +55,12 @@ export function FilterSelect({ name, label, value, options }: { name: string; la
   return (
     <label className="flex flex-col">
       <span className="font-medium">{label}</span>
-      <select name={name} defaultValue={value ?? ''} className="h-9 rounded-md border border-slate-300 px-2">
+      <Select name={name} defaultValue={value ?? ''}>
         <option value="">Any</option>
         {options.map((option) => (
           <option key={option.value} value={option.value}>{option.label}</option>
         ))}
-      </select>
+      </Select>
     </label>
   );
 }

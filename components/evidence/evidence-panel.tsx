@@ -3,11 +3,12 @@
 import { useId, useRef, useState } from 'react';
 import useSWR from 'swr';
 import type { AttachmentListResponse, UploadRequestResponse } from '@/app/api/attachments/route';
-import { buttonClass } from '@/components/ui/button';
+import { buttonVariants } from '@/components/ui/button';
 import { fetchJson } from '@/lib/client/fetch-json';
 import { submitJson } from '@/lib/client/submit-json';
 import { ATTACHMENT_KINDS, label } from '@/lib/domain';
 import { ALLOWED_SUMMARY, typeOfFile, uploadRefusal } from '@/lib/storage/limits';
+import { cn } from '@/lib/ui/cn';
 
 type Target = { repairId: string } | { installId: string };
 type Kind = (typeof ATTACHMENT_KINDS)[number];
@@ -76,7 +77,7 @@ export function EvidencePanel({
   }
 
   const items = data?.items ?? [];
-  const pickerClass = `${buttonClass('secondary', size)} cursor-pointer focus-within:ring-2 focus-within:ring-brand-700 ${field ? 'min-h-[4rem] flex-1 text-xl' : ''}`;
+  const pickerClass = cn(buttonVariants({ variant: 'secondary', size }), 'cursor-pointer focus-within:ring-2 focus-within:ring-brand-700', field && 'min-h-[4rem] flex-1 text-xl');
   return (
     <section className={`space-y-4 rounded-xl bg-white ring-1 ring-slate-200 ${field ? 'p-5' : 'p-4'}`} aria-labelledby={`${id}-title`} data-testid="evidence">
       <h2 id={`${id}-title`} className={field ? 'text-2xl font-bold' : 'text-base font-semibold'}>{title}</h2>
@@ -146,7 +147,7 @@ export function EvidencePanel({
                 {item.uploadedByName && <p className="text-slate-600">{item.uploadedByName}</p>}
                 {item.canDelete && (
                   <button type="button" onClick={() => void remove(item)} disabled={removing === item.id}
-                    className={`${buttonClass('ghost', size)} w-full text-missed-700`} aria-label={`Remove ${item.originalName ?? 'file'}`}>
+                    className={cn(buttonVariants({ variant: 'ghost', size }), 'w-full text-missed-700')} aria-label={`Remove ${item.originalName ?? 'file'}`}>
                     {removing === item.id ? 'Removing…' : 'Remove'}
                   </button>
                 )}

@@ -1,6 +1,8 @@
 import { invoiceOfJob } from '@/lib/data/invoices';
 import { formatMoney } from '@/lib/invoice/money';
 import { InvoiceSummary } from './invoice-summary';
+import { cardClass } from '@/components/ui/card';
+import { cn } from '@/lib/ui/cn';
 
 /**
  * The invoice on the customer's report page: only one the office has issued (never a draft or a void one),
@@ -10,7 +12,7 @@ export async function CustomerInvoice({ companyId, jobId, token, justPaid }: { c
   const invoice = await invoiceOfJob(companyId, jobId);
   if (!invoice || (invoice.status !== 'issued' && invoice.status !== 'paid')) return null;
   return (
-    <section aria-labelledby="invoice-heading" className="space-y-3 rounded-lg bg-white p-4 ring-1 ring-slate-200">
+    <section aria-labelledby="invoice-heading" className={cn(cardClass, 'space-y-3')}>
       <h2 id="invoice-heading" className="text-lg font-semibold">Invoice</h2>
       <InvoiceSummary invoice={invoice} />
       {invoice.status === 'paid' ? (

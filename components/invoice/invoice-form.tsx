@@ -4,7 +4,8 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useFieldArray, useForm } from 'react-hook-form';
-import { FormField, errorProps, inputClass } from '@/components/desk/form-field';
+import { FormField, errorProps } from '@/components/desk/form-field';
+import { Input, Select } from '@/components/ui/input';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
 import { CURRENCIES } from '@/lib/validation/invoices';
@@ -40,15 +41,15 @@ export function InvoiceForm({ defaults }: { defaults: InvoiceFormValues }) {
             return (
               <tr key={field.id} className="align-top">
                 <td className="py-1 pr-2">
-                  <input aria-label={`Line ${index + 1} description`} {...register(`lines.${index}.description`)} {...errorProps(`line-${index}-description`, lineErrors?.description?.message)} className={`${inputClass} w-full`} />
+                  <Input aria-label={`Line ${index + 1} description`} {...register(`lines.${index}.description`)} {...errorProps(`line-${index}-description`, lineErrors?.description?.message)} className="w-full" />
                   {lineErrors?.description && <p className="text-xs text-missed-700">{lineErrors.description.message}</p>}
                 </td>
                 <td className="py-1 pr-2">
-                  <input aria-label={`Line ${index + 1} quantity`} inputMode="decimal" {...register(`lines.${index}.quantity`)} className={`${inputClass} w-full`} />
+                  <Input aria-label={`Line ${index + 1} quantity`} inputMode="decimal" {...register(`lines.${index}.quantity`)} className="w-full" />
                   {lineErrors?.quantity && <p className="text-xs text-missed-700">{lineErrors.quantity.message}</p>}
                 </td>
                 <td className="py-1 pr-2">
-                  <input aria-label={`Line ${index + 1} unit price`} inputMode="decimal" {...register(`lines.${index}.unitPrice`)} className={`${inputClass} w-full`} />
+                  <Input aria-label={`Line ${index + 1} unit price`} inputMode="decimal" {...register(`lines.${index}.unitPrice`)} className="w-full" />
                   {(lineErrors?.unitPrice || lineErrors?.unitPriceCents) && <p className="text-xs text-missed-700">{(lineErrors.unitPrice ?? lineErrors.unitPriceCents)?.message}</p>}
                 </td>
                 <td className="py-1"><Button type="button" variant="ghost" aria-label={`Remove line ${index + 1}`} onClick={() => remove(index)}>✕</Button></td>
@@ -61,15 +62,15 @@ export function InvoiceForm({ defaults }: { defaults: InvoiceFormValues }) {
       <Button type="button" variant="secondary" onClick={() => append({ description: '', quantity: '1', unitPrice: '' })}>Add line</Button>
       <div className="grid gap-3 md:grid-cols-3">
         <FormField id="taxRatePct" label="Tax rate (%)" error={errors.taxRatePct?.message}>
-          <input inputMode="decimal" {...register('taxRatePct')} {...errorProps('taxRatePct', errors.taxRatePct?.message)} className={inputClass} />
+          <Input inputMode="decimal" {...register('taxRatePct')} {...errorProps('taxRatePct', errors.taxRatePct?.message)} />
         </FormField>
         <FormField id="dueOn" label="Due date" error={errors.dueOn?.message}>
-          <input type="date" {...register('dueOn')} {...errorProps('dueOn', errors.dueOn?.message)} className={inputClass} />
+          <Input type="date" {...register('dueOn')} {...errorProps('dueOn', errors.dueOn?.message)} />
         </FormField>
         <FormField id="currency" label="Currency" error={errors.currency?.message}>
-          <select {...register('currency')} {...errorProps('currency', errors.currency?.message)} className={inputClass}>
+          <Select {...register('currency')} {...errorProps('currency', errors.currency?.message)}>
             {CURRENCIES.map((currency) => <option key={currency} value={currency}>{currency.toUpperCase()}</option>)}
-          </select>
+          </Select>
         </FormField>
       </div>
       {message && <p role="alert" className="text-sm font-medium text-missed-700">{message}</p>}

@@ -7,6 +7,8 @@ import { InvoiceActions } from './invoice-actions';
 import { InvoiceForm } from './invoice-form';
 import { InvoiceSummary } from './invoice-summary';
 import { PaymentAlert } from './payment-alert';
+import { cardClass } from '@/components/ui/card';
+import { cn } from '@/lib/ui/cn';
 
 type RepairLine = { id: string; position: number; defectType: string; distanceMm: number; plannedPatchLengthMm: number | null; status: string; segment?: { label: string } | null };
 
@@ -15,7 +17,7 @@ export async function InvoicePanel({ user, job, unitSystem, timeZone }: { user: 
   const invoice = await invoiceOfJob(user.companyId, job.id);
   const repairs = (job.repairs ?? []).filter((repair) => repair.status !== 'cancelled');
   return (
-    <section aria-labelledby="invoice-heading" className="space-y-3 rounded-lg bg-white p-4 ring-1 ring-slate-200">
+    <section aria-labelledby="invoice-heading" className={cn(cardClass, 'space-y-3')}>
       <h2 id="invoice-heading" className="text-lg font-semibold">Invoice</h2>
       {invoice ? (
         <>

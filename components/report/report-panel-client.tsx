@@ -6,12 +6,14 @@ import { useEffect, useRef, useState, type ReactNode } from 'react';
 import { useForm } from 'react-hook-form';
 import useSWR from 'swr';
 import type { ReportSendsResponse } from '@/app/api/jobs/[id]/report-sends/route';
-import { FormField, errorProps, inputClass, textareaClass } from '@/components/desk/form-field';
+import { FormField, errorProps } from '@/components/desk/form-field';
+import { Input, Textarea } from '@/components/ui/input';
 import { Badge } from '@/components/ui/badge';
-import { Button, buttonClass } from '@/components/ui/button';
+import { Button, buttonVariants } from '@/components/ui/button';
 import { fetchJson } from '@/lib/client/fetch-json';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
 import { sendReportSchema, type SendReportInput } from '@/lib/validation/report';
+import { cardClass } from '@/components/ui/card';
 
 const TONES: Record<string, 'near' | 'safe' | 'missed'> = { queued: 'near', sending: 'near', sent: 'safe', failed: 'missed' };
 const STATUS_TEXT: Record<string, string> = { queued: 'Queued', sending: 'Sending', sent: 'Sent', failed: 'Failed' };
@@ -49,11 +51,11 @@ export function ReportPanelClient({ jobId, customerEmail, blockedReason, linksSl
   }
 
   return (
-    <section aria-labelledby="report-heading" className="rounded-lg bg-white p-4 ring-1 ring-slate-200" data-section="repair-report">
+    <section aria-labelledby="report-heading" className={cardClass} data-section="repair-report">
       <div className="flex flex-wrap items-center justify-between gap-3">
         <h2 id="report-heading" className="text-lg font-semibold">Repair report</h2>
         <div className="flex gap-2">
-          <a href={`/api/jobs/${jobId}/report`} target="_blank" rel="noreferrer" className={buttonClass('secondary')}>Preview PDF</a>
+          <a href={`/api/jobs/${jobId}/report`} target="_blank" rel="noreferrer" className={buttonVariants({ variant: 'secondary' })}>Preview PDF</a>
           <Button type="button" onClick={() => setOpen((v) => !v)} disabled={blockedReason !== null} aria-expanded={open} aria-controls="report-send-form">
             Send repair report
           </Button>
@@ -65,10 +67,10 @@ export function ReportPanelClient({ jobId, customerEmail, blockedReason, linksSl
       {open && (
         <form id="report-send-form" onSubmit={form.handleSubmit(onSubmit)} className="mt-3 grid max-w-xl gap-3" noValidate>
           <FormField id="report-to" label="Send to" error={errors.to?.message} hint={customerEmail ? 'The customer’s e-mail unless you change it.' : 'The customer has no e-mail on file.'}>
-            <input type="email" className={inputClass} {...errorProps('report-to', errors.to?.message)} {...form.register('to')} />
+            <Input type="email" {...errorProps('report-to', errors.to?.message)} {...form.register('to')} />
           </FormField>
           <FormField id="report-message" label="Message (optional)" error={errors.message?.message}>
-            <textarea className={textareaClass} {...errorProps('report-message', errors.message?.message)} {...form.register('message')} />
+            <Textarea {...errorProps('report-message', errors.message?.message)} {...form.register('message')} />
           </FormField>
           <div><Button type="submit" disabled={isSubmitting}>{isSubmitting ? 'Queuing…' : 'Send now'}</Button></div>
         </form>

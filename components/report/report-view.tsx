@@ -1,6 +1,7 @@
 import type { ReactNode } from 'react';
 import type { ReportData, ReportImage } from '@/lib/report/data';
 import { TimelineSvg } from './timeline-svg';
+import { cardClass } from '@/components/ui/card';
 
 /** The read-only repair report as a web page (the customer's link); the PDF shows the same data. */
 export function ReportView({ data, pdfHref, invoiceSlot }: { data: ReportData; pdfHref: string; invoiceSlot?: ReactNode }) {
@@ -24,7 +25,7 @@ export function ReportView({ data, pdfHref, invoiceSlot }: { data: ReportData; p
       <section aria-labelledby="repairs-heading" className="space-y-4">
         <h2 id="repairs-heading" className="text-lg font-semibold text-brand-700">Repairs ({data.repairs.length})</h2>
         {data.repairs.map((repair) => (
-          <section key={repair.id} aria-label={`Repair ${repair.position}`} className="rounded-lg bg-white p-4 ring-1 ring-slate-200">
+          <section key={repair.id} aria-label={`Repair ${repair.position}`} className={cardClass}>
             <h3 className="font-semibold">Repair {repair.position}: {repair.defect} ({repair.defectLength}, grade {repair.conditionGrade})</h3>
             <dl className="mt-2 grid grid-cols-1 gap-2 text-sm sm:grid-cols-2">
               <Item name="Where">Segment {repair.segment.label}, {repair.distance} from {repair.accessPoint}{repair.clockPosition ? `, at ${repair.clockPosition}` : ''}</Item>

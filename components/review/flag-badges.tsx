@@ -1,6 +1,7 @@
 import { Badge } from '@/components/ui/badge';
 import type { QualityFlag } from '@/lib/cure';
 import { FLAG_LABELS } from '@/lib/review/flags';
+import { cn } from '@/lib/ui/cn';
 
 /** One badge per quality flag: red for critical, amber for a warning; the words say it too. */
 export function FlagBadges({ flags }: { flags: Pick<QualityFlag, 'kind' | 'severity' | 'message'>[] }) {
@@ -25,7 +26,7 @@ export function FlagList({ flags }: { flags: Pick<QualityFlag, 'kind' | 'severit
   return (
     <ul className="space-y-2" data-testid="flag-list">
       {flags.map((flag) => (
-        <li key={flag.kind} data-kind={flag.kind} className={`rounded-md px-3 py-2 text-sm ${flag.severity === 'critical' ? 'bg-missed-100 text-missed-700' : 'bg-near-100 text-near-700'}`}>
+        <li key={flag.kind} data-kind={flag.kind} className={cn('rounded-md px-3 py-2 text-sm', flag.severity === 'critical' ? 'bg-missed-100 text-missed-700' : 'bg-near-100 text-near-700')}>
           <span className="font-semibold">{flag.severity === 'critical' ? 'Critical' : 'Warning'} · {FLAG_LABELS[flag.kind] ?? flag.kind}:</span> {flag.message}
         </li>
       ))}

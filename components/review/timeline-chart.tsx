@@ -1,4 +1,5 @@
 import { timelineGeometry, type TimelineInput, type TimelineTone } from '@/lib/review/timeline';
+import { cn } from '@/lib/ui/cn';
 
 const FILL: Record<TimelineTone, string> = {
   plan: 'fill-slate-200',
@@ -49,7 +50,7 @@ export function TimelineChart({ input, timeZone }: { input: TimelineInput; timeZ
                 </rect>
               )}
               {lane.miss && (
-                <rect x={lane.miss.x} y={lane.y} width={Math.max(lane.miss.width, 2)} height={lane.height} rx={2} className={`${FILL[lane.miss.tone]} opacity-40`} data-tone={lane.miss.tone}>
+                <rect x={lane.miss.x} y={lane.y} width={Math.max(lane.miss.width, 2)} height={lane.height} rx={2} className={cn(FILL[lane.miss.tone], 'opacity-40')} data-tone={lane.miss.tone}>
                   <title>{lane.miss.label}</title>
                 </rect>
               )}

@@ -3,10 +3,11 @@
 import Link from 'next/link';
 import { usePathname } from 'next/navigation';
 import useSWR from 'swr';
+import type { NavItem } from '@/config/nav';
 import { fetchJson } from '@/lib/client/fetch-json';
+import { cn } from '@/lib/ui/cn';
 
-/** `countUrl`: a list API whose `total` is shown beside the label (kept fresh on focus and every minute). */
-export type NavItem = { href: string; label: string; countUrl?: string };
+// An item's `countUrl` total is shown beside its label, kept fresh on focus and every minute.
 
 export function DeskNav({ items }: { items: NavItem[] }) {
   const pathname = usePathname();
@@ -19,7 +20,10 @@ export function DeskNav({ items }: { items: NavItem[] }) {
             key={item.href}
             href={item.href}
             aria-current={active ? 'page' : undefined}
-            className={`flex items-center justify-between rounded-md px-3 py-2 text-sm font-medium ${active ? 'bg-brand-700 text-white' : 'text-slate-200 hover:bg-slate-800'}`}
+            className={cn(
+              'flex items-center justify-between rounded-md px-3 py-2 text-sm font-medium',
+              active ? 'bg-brand-700 text-white' : 'text-slate-200 hover:bg-slate-800',
+            )}
           >
             {item.label}
             {item.countUrl && <NavCount url={item.countUrl} label={item.label} />}

@@ -1,6 +1,7 @@
 import type { Metadata } from 'next';
 import { Suspense } from 'react';
 import { Logo } from '@/components/shell/logo';
+import { siteConfig } from '@/config/site';
 import { SignInForm } from './sign-in-form';
 
 export const metadata: Metadata = { title: 'Sign in' };
@@ -12,7 +13,7 @@ export default function Page() {
         <div className="mb-6 flex items-center gap-3 text-brand-700">
           <Logo className="h-10 w-10" />
           <div>
-            <h1 className="text-2xl font-bold text-slate-900">Setline</h1>
+            <h1 className="text-2xl font-bold text-slate-900">{siteConfig.name}</h1>
             <p className="text-sm text-slate-600">Sign in to your company&apos;s jobs</p>
           </div>
         </div>

@@ -3,6 +3,7 @@ import Link from 'next/link';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany, getSettingsCounts } from '@/lib/data/company';
 import { formatLength } from '@/lib/units';
+import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'Company settings' };
 
@@ -25,10 +26,7 @@ export default async function Page() {
   ];
   return (
     <div className="space-y-6">
-      <header>
-        <h1 className="text-2xl font-bold">{company.name}</h1>
-        <p className="text-sm text-slate-600">Company settings</p>
-      </header>
+      <PageHeader title={company.name} description="Company settings" />
       <nav aria-label="Settings">
         <ul className="grid gap-3 sm:grid-cols-2 xl:grid-cols-3">
           {sections.map((section) => (

@@ -6,6 +6,7 @@ import { CUSTOMER_KINDS, DESK_ROLES, label } from '@/lib/domain';
 import { customerListQuerySchema } from '@/lib/validation/customers';
 import { CustomersTable } from './customers-table';
 import { filledParams } from '@/lib/validation/list';
+import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'Customers' };
 
@@ -18,7 +19,7 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
   const list = await listCustomers(user, query);
   return (
     <div className="space-y-4">
-      <h1 className="text-2xl font-bold">Customers</h1>
+      <PageHeader title="Customers" />
       <ListToolbar search={query.q} placeholder="Name, contact, e-mail or phone" exportHref={exportHrefOf('/api/customers', raw)} newHref="/customers/new" newLabel="New customer">
         <FilterSelect name="kind" label="Kind" value={query.kind} options={CUSTOMER_KINDS.map((kind) => ({ value: kind, label: label(kind) }))} />
         <FilterSelect name="archived" label="Archived" value={query.archived === 'false' ? '' : query.archived} options={[{ value: 'true', label: 'Include archived' }, { value: 'only', label: 'Only archived' }]} />

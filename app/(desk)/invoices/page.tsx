@@ -6,6 +6,7 @@ import { DESK_ROLES, INVOICE_STATUSES, label } from '@/lib/domain';
 import { invoiceListQuerySchema } from '@/lib/validation/invoices';
 import { InvoicesTable } from './invoices-table';
 import { filledParams } from '@/lib/validation/list';
+import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'Invoices' };
 
@@ -17,8 +18,7 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
   const list = await listInvoices(user, query);
   return (
     <div className="space-y-4">
-      <h1 className="text-2xl font-bold">Invoices</h1>
-      <p className="text-sm text-slate-600">Invoices are drafted on a job&apos;s page from its repairs.</p>
+      <PageHeader title="Invoices" description={<>Invoices are drafted on a job&apos;s page from its repairs.</>} />
       <ListToolbar search={query.q} placeholder="Invoice, job or customer" exportHref={exportHrefOf('/api/invoices', raw)}>
         <FilterSelect name="status" label="Status" value={query.status} options={INVOICE_STATUSES.map((status) => ({ value: status, label: label(status) }))} />
       </ListToolbar>

@@ -6,6 +6,7 @@ import { DESK_ROLES, JOB_STATUSES, label } from '@/lib/domain';
 import { jobListQuerySchema } from '@/lib/validation/jobs';
 import { JobsTable } from './jobs-table';
 import { filledParams } from '@/lib/validation/list';
+import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'Jobs' };
 
@@ -18,7 +19,7 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
   const [list, { crews }] = await Promise.all([listJobs(user, query), jobFormOptions(user)]);
   return (
     <div className="space-y-4">
-      <h1 className="text-2xl font-bold">Jobs</h1>
+      <PageHeader title="Jobs" />
       <ListToolbar search={query.q} placeholder="Job, title, customer or address" exportHref={exportHrefOf('/api/jobs', raw)} newHref="/jobs/new" newLabel="New job">
         <FilterSelect name="status" label="Status" value={query.status?.join(',')} options={JOB_STATUSES.map((status) => ({ value: status, label: label(status) }))} />
         <FilterSelect name="crewId" label="Crew" value={query.crewId} options={crews.map((crew) => ({ value: crew.id, label: crew.name }))} />

@@ -6,6 +6,7 @@ import { listRepairs } from '@/lib/data/repairs';
 import { DESK_ROLES, REPAIR_STATUSES, label } from '@/lib/domain';
 import { repairListQuerySchema } from '@/lib/validation/repairs';
 import { RepairsTable } from './repairs-table';
+import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'Repairs' };
 
@@ -18,8 +19,7 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
   const [list, { unitSystem, timeZone }] = await Promise.all([listRepairs(user, query), getCompany(user)]);
   return (
     <div className="space-y-4">
-      <h1 className="text-2xl font-bold">Repairs</h1>
-      <p className="text-sm text-slate-600">Repairs are added from their job’s page. Cancelled repairs show with “Include archived”.</p>
+      <PageHeader title="Repairs" description="Repairs are added from their job’s page. Cancelled repairs show with “Include archived”." />
       <ListToolbar search={query.q} placeholder="Job number, segment, defect or notes" exportHref={exportHrefOf('/api/repairs', raw)}>
         <FilterSelect name="status" label="Status" value={query.status?.join(',')} options={REPAIR_STATUSES.map((status) => ({ value: status, label: label(status) }))} />
         <FilterSelect name="archived" label="Archived" value={query.archived === 'false' ? '' : query.archived} options={[{ value: 'true', label: 'Include archived' }, { value: 'only', label: 'Only archived' }]} />

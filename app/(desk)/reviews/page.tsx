@@ -6,6 +6,7 @@ import { listInstalls } from '@/lib/data/reviews';
 import { DESK_ROLES, INSTALL_STATUSES, label } from '@/lib/domain';
 import { installListQuerySchema } from '@/lib/validation/reviews';
 import { ReviewsTable } from './reviews-table';
+import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'Review' };
 
@@ -21,7 +22,7 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
   const [list, company] = await Promise.all([listInstalls(user, query), getCompany(user)]);
   return (
     <div className="space-y-4">
-      <h1 className="text-2xl font-bold">Review</h1>
+      <PageHeader title="Review" />
       <p className="max-w-3xl text-sm text-slate-600">
         Installs the crews signed off, with the quality flags worked out from what they recorded. Open one to see its timeline and approve it or send it back.
       </p>

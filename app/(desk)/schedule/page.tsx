@@ -1,12 +1,13 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { buttonClass } from '@/components/ui/button';
+import { buttonVariants } from '@/components/ui/button';
 import { requirePageUser } from '@/lib/auth/session';
 import { getScheduleBoard } from '@/lib/data/schedule';
 import { DESK_ROLES } from '@/lib/domain';
 import { SCHEDULABLE_STATUSES, scheduleQuerySchema } from '@/lib/validation/schedule';
 import { ScheduleBoard, UnscheduledList } from './schedule-board';
 import { ScheduleForm } from './schedule-form';
+import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'Schedule' };
 
@@ -21,19 +22,16 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
 
   return (
     <div className="space-y-4">
-      <div className="flex flex-wrap items-end justify-between gap-3">
-        <div>
-          <h1 className="text-2xl font-bold">Schedule</h1>
-          <p className="text-sm text-slate-600">
-            Week of {board.days[0].label} – {board.days[6].label} {board.week.end.slice(0, 4)} · days in {board.timeZone}
-          </p>
-        </div>
-        <nav aria-label="Week" className="flex gap-2">
-          <Link href={`/schedule?week=${board.week.previous}`} className={buttonClass('secondary')}>Previous week</Link>
-          <Link href={`/schedule?week=${board.week.current}`} className={buttonClass('secondary')} aria-current={board.week.start === board.week.current ? 'page' : undefined}>This week</Link>
-          <Link href={`/schedule?week=${board.week.next}`} className={buttonClass('secondary')}>Next week</Link>
-        </nav>
-      </div>
+      <PageHeader
+        className="items-end"
+        title="Schedule"
+        description={<>Week of {board.days[0].label} – {board.days[6].label} {board.week.end.slice(0, 4)} · days in {board.timeZone}</>}
+        actions={<nav aria-label="Week" className="flex gap-2">
+          <Link href={`/schedule?week=${board.week.previous}`} className={buttonVariants({ variant: 'secondary' })}>Previous week</Link>
+          <Link href={`/schedule?week=${board.week.current}`} className={buttonVariants({ variant: 'secondary' })} aria-current={board.week.start === board.week.current ? 'page' : undefined}>This week</Link>
+          <Link href={`/schedule?week=${board.week.next}`} className={buttonVariants({ variant: 'secondary' })}>Next week</Link>
+        </nav>}
+      />
       {overDays.length > 0 && (
         <p role="status" className="rounded-md bg-missed-100 p-3 text-sm font-medium text-missed-700">
           Over capacity this week: {overDays.join('; ')}. Move a job or confirm the crew can take the extra work.

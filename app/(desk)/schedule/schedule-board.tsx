@@ -3,11 +3,13 @@ import { StatusBadge } from '@/components/ui/badge';
 import type { BoardCell, BoardJob, ScheduleBoard as Board } from '@/lib/data/schedule';
 import { SCHEDULABLE_STATUSES } from '@/lib/validation/schedule';
 import { UnscheduleButton } from './schedule-form';
+import { cn } from '@/lib/ui/cn';
+import { EmptyState } from '@/components/ui/empty-state';
 
 /** Crews down the side, the week's days across; each cell lists the crew's jobs that day and its load. */
 export function ScheduleBoard({ board }: { board: Board }) {
   if (board.crews.length === 0) {
-    return <p className="rounded-lg bg-white p-4 text-sm text-slate-600 ring-1 ring-slate-200">No active crews yet. An admin adds crews under Company.</p>;
+    return <EmptyState>No active crews yet. An admin adds crews under Company.</EmptyState>;
   }
   return (
     <div className="overflow-x-auto rounded-lg bg-white ring-1 ring-slate-200">
@@ -19,7 +21,7 @@ export function ScheduleBoard({ board }: { board: Board }) {
             {board.days.map((day) => {
               const today = day.date === board.today;
               return (
-                <th key={day.date} scope="col" aria-current={today ? 'date' : undefined} className={`p-2 font-semibold ${today ? 'bg-brand-100 text-brand-900' : ''}`}>
+                <th key={day.date} scope="col" aria-current={today ? 'date' : undefined} className={cn('p-2 font-semibold', today ? 'bg-brand-100 text-brand-900' : '')}>
                   {day.label}
                   {today && <span aria-hidden="true" className="ml-1 rounded bg-brand-700 px-1 text-xs font-medium text-white">Today</span>}
                 </th>
@@ -48,7 +50,7 @@ export function ScheduleBoard({ board }: { board: Board }) {
 function Cell({ cell, capacity, today }: { cell: BoardCell; capacity: number; today: boolean }) {
   const tone = cell.overCapacity ? 'bg-missed-100 ring-2 ring-inset ring-missed-600' : today ? 'bg-brand-50' : '';
   return (
-    <td className={`p-1.5 ${tone}`} data-over-capacity={cell.overCapacity || undefined}>
+    <td className={cn('p-1.5', tone)} data-over-capacity={cell.overCapacity || undefined}>
       <ul className="space-y-1.5">
         {cell.jobs.map((job) => (
           <li key={job.id} className="rounded border border-slate-200 bg-white p-1.5">
@@ -58,7 +60,7 @@ function Cell({ cell, capacity, today }: { cell: BoardCell; capacity: number; to
         ))}
       </ul>
       {cell.count > 0 && (
-        <p className={`mt-1 text-xs ${cell.overCapacity ? 'font-semibold text-missed-700' : 'text-slate-500'}`}>
+        <p className={cn('mt-1 text-xs', cell.overCapacity ? 'font-semibold text-missed-700' : 'text-slate-600')}>
           {cell.overCapacity ? `Over capacity: ${cell.count} of ${capacity} jobs` : `${cell.count} of ${capacity} jobs`}
         </p>
       )}

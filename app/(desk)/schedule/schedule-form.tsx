@@ -5,12 +5,14 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
-import { FormField, errorProps, inputClass } from '@/components/desk/form-field';
+import { FormField, errorProps } from '@/components/desk/form-field';
+import { Input, Select } from '@/components/ui/input';
 import { Button } from '@/components/ui/button';
 import type { ScheduleJobResponse } from '@/app/api/jobs/[id]/schedule/route';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
 import { label } from '@/lib/domain';
 import { scheduleFormSchema } from '@/lib/validation/schedule';
+import { cardClass } from '@/components/ui/card';
 
 type Values = z.infer<typeof scheduleFormSchema>;
 type JobOption = { id: string; number: string; customerName: string; status: string; crewId: string | null; scheduledDate: string | null; group: string };
@@ -51,11 +53,11 @@ export function ScheduleForm({ jobs, crews, defaultDay }: { jobs: JobOption[]; c
   });
 
   return (
-    <section aria-labelledby="schedule-form-heading" className="rounded-lg bg-white p-4 ring-1 ring-slate-200">
+    <section aria-labelledby="schedule-form-heading" className={cardClass}>
       <h2 id="schedule-form-heading" className="mb-3 font-semibold">Schedule a job</h2>
       <form onSubmit={onSubmit} noValidate className="grid items-start gap-3 md:grid-cols-[minmax(0,2fr)_minmax(0,1fr)_minmax(0,1fr)_auto]">
         <FormField id="jobId" label="Job" error={errors.jobId?.message}>
-          <select {...jobField} {...errorProps('jobId', errors.jobId?.message)} className={`${inputClass} w-full`}>
+          <Select {...jobField} {...errorProps('jobId', errors.jobId?.message)} className="w-full">
             <option value="">Pick a job…</option>
             {groups.map((group) => (
               <optgroup key={group} label={group}>
@@ -66,16 +68,16 @@ export function ScheduleForm({ jobs, crews, defaultDay }: { jobs: JobOption[]; c
                 ))}
               </optgroup>
             ))}
-          </select>
+          </Select>
         </FormField>
         <FormField id="crewId" label="Crew" error={errors.crewId?.message}>
-          <select {...register('crewId')} {...errorProps('crewId', errors.crewId?.message)} className={`${inputClass} w-full`}>
+          <Select {...register('crewId')} {...errorProps('crewId', errors.crewId?.message)} className="w-full">
             <option value="">Pick a crew…</option>
             {crews.map((crew) => <option key={crew.id} value={crew.id}>{crew.name} ({crew.dailyCapacity} jobs a day)</option>)}
-          </select>
+          </Select>
         </FormField>
         <FormField id="date" label="Day" error={errors.date?.message}>
-          <input type="date" {...register('date')} {...errorProps('date', errors.date?.message)} className={inputClass} />
+          <Input type="date" {...register('date')} {...errorProps('date', errors.date?.message)} />
         </FormField>
         <div className="md:pt-6">
           <Button type="submit" disabled={isSubmitting}>{isSubmitting ? 'Scheduling…' : 'Schedule'}</Button>

@@ -5,13 +5,17 @@ import { useRouter } from 'next/navigation';
 import { useMemo, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
-import { FormField, errorProps, inputClass } from '@/components/desk/form-field';
+import { useCloseEditSection } from '@/components/desk/edit-section';
+import { FormField, errorProps } from '@/components/desk/form-field';
+import { Input, Select } from '@/components/ui/input';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
 import { PIPE_MATERIALS, label } from '@/lib/domain';
 import { unitLabels, type UnitSystem } from '@/lib/units';
 import { mmToEntered, nominalToEntered } from '@/lib/units/entry';
 import { segmentFormSchema } from '@/lib/validation/segments';
+import { cardClass } from '@/components/ui/card';
+import { cn } from '@/lib/ui/cn';
 
 type Point = { id: string; label: string };
 type Stored = {
@@ -25,6 +29,7 @@ type Stored = {
  */
 export function SegmentForm({ siteId, accessPoints, unitSystem, segment }: { siteId: string; accessPoints: Point[]; unitSystem: UnitSystem; segment?: Stored }) {
   const router = useRouter();
+  const closeEdit = useCloseEditSection();
   const [message, setMessage] = useState<string>();
   const schema = useMemo(() => segmentFormSchema(unitSystem), [unitSystem]);
   const units = unitLabels(unitSystem);
@@ -49,39 +54,40 @@ export function SegmentForm({ siteId, accessPoints, unitSystem, segment }: { sit
       ? await submitJson<{ id: string }>(`/api/segments/${segment.id}`, 'PATCH', patch)
       : await submitJson<{ id: string }>('/api/segments', 'POST', values);
     if (!result.ok) return setMessage(applyServerErrors(result.error, setError));
+    closeEdit?.();
     router.push(`/segments/${result.data.id}`);
     router.refresh();
   });
 
   const number = (name: 'nominalSizeMm' | 'insideDiameterMm' | 'lengthMm' | 'depthMm', text: string, unit: string, hint: string) => (
     <FormField id={name} label={text} error={errors[name]?.message} hint={`${hint} (${unit})`}>
-      <input type="number" step="any" inputMode="decimal" min={0} {...register(name)} {...errorProps(name, errors[name]?.message)} className={inputClass} />
+      <Input type="number" step="any" inputMode="decimal" min={0} {...register(name)} {...errorProps(name, errors[name]?.message)} />
     </FormField>
   );
 
   return (
-    <form onSubmit={onSubmit} noValidate className="grid max-w-2xl gap-4 rounded-lg bg-white p-4 ring-1 ring-slate-200 md:grid-cols-2">
+    <form onSubmit={onSubmit} noValidate className={cn(cardClass, 'grid max-w-2xl gap-4 md:grid-cols-2')}>
       <div className="md:col-span-2">
         <FormField id="label" label="Label" error={errors.label?.message} hint="How the crew names the run, e.g. MH-1 → MH-2">
-          <input {...register('label')} {...errorProps('label', errors.label?.message)} className={inputClass} autoFocus />
+          <Input {...register('label')} {...errorProps('label', errors.label?.message)} autoFocus />
         </FormField>
       </div>
       <FormField id="fromAccessPointId" label="From access point" error={errors.fromAccessPointId?.message} hint="The end the crew works from (upstream, usually)">
-        <select {...register('fromAccessPointId')} {...errorProps('fromAccessPointId', errors.fromAccessPointId?.message)} className={inputClass}>
+        <Select {...register('fromAccessPointId')} {...errorProps('fromAccessPointId', errors.fromAccessPointId?.message)}>
           <option value="">Pick an access point…</option>
           {accessPoints.map((point) => <option key={point.id} value={point.id}>{point.label}</option>)}
-        </select>
+        </Select>
       </FormField>
       <FormField id="toAccessPointId" label="To access point" error={errors.toAccessPointId?.message}>
-        <select {...register('toAccessPointId')} {...errorProps('toAccessPointId', errors.toAccessPointId?.message)} className={inputClass}>
+        <Select {...register('toAccessPointId')} {...errorProps('toAccessPointId', errors.toAccessPointId?.message)}>
           <option value="">None — open end (e.g. a lateral into the main)</option>
           {accessPoints.map((point) => <option key={point.id} value={point.id}>{point.label}</option>)}
-        </select>
+        </Select>
       </FormField>
       <FormField id="material" label="Material" error={errors.material?.message}>
-        <select {...register('material')} {...errorProps('material', errors.material?.message)} className={inputClass}>
+        <Select {...register('material')} {...errorProps('material', errors.material?.message)}>
           {PIPE_MATERIALS.map((material) => <option key={material} value={material}>{label(material)}</option>)}
-        </select>
+        </Select>
       </FormField>
       {number('nominalSizeMm', 'Nominal size', units.shortLength, 'Trade size')}
       {number('insideDiameterMm', 'Inside diameter', units.shortLength, 'Measured, after cleaning')}
@@ -90,7 +96,7 @@ export function SegmentForm({ siteId, accessPoints, unitSystem, segment }: { sit
       {message && <p role="alert" className="text-sm font-medium text-missed-700 md:col-span-2">{message}</p>}
       <div className="flex gap-2 md:col-span-2">
         <Button type="submit" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : segment ? 'Save changes' : 'Create segment'}</Button>
-        <Button type="button" variant="secondary" onClick={() => router.back()}>Cancel</Button>
+        <Button type="button" variant="secondary" onClick={() => (closeEdit ? closeEdit() : router.back())}>Cancel</Button>
       </div>
     </form>
   );

@@ -6,6 +6,7 @@ import { DESK_ROLES } from '@/lib/domain';
 import { siteListQuerySchema } from '@/lib/validation/sites';
 import { SitesTable } from './sites-table';
 import { filledParams } from '@/lib/validation/list';
+import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'Sites' };
 
@@ -19,7 +20,7 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
   const newHref = query.customerId ? `/sites/new?customerId=${query.customerId}` : '/sites/new';
   return (
     <div className="space-y-4">
-      <h1 className="text-2xl font-bold">Sites</h1>
+      <PageHeader title="Sites" />
       <ListToolbar search={query.q} placeholder="Name, street or city" exportHref={exportHrefOf('/api/sites', raw)} newHref={newHref} newLabel="New site">
         <FilterSelect name="customerId" label="Customer" value={query.customerId} options={customers.map((c) => ({ value: c.id, label: c.name }))} />
         <FilterSelect name="archived" label="Archived" value={query.archived === 'false' ? '' : query.archived} options={[{ value: 'true', label: 'Include archived' }, { value: 'only', label: 'Only archived' }]} />

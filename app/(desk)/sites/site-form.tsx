@@ -5,10 +5,14 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
-import { FormField, errorProps, inputClass, textareaClass } from '@/components/desk/form-field';
+import { useCloseEditSection } from '@/components/desk/edit-section';
+import { FormField, errorProps } from '@/components/desk/form-field';
+import { Input as TextInput, Select, Textarea } from '@/components/ui/input';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
 import { siteInputSchema } from '@/lib/validation/sites';
+import { cardClass } from '@/components/ui/card';
+import { cn } from '@/lib/ui/cn';
 
 type Input = z.input<typeof siteInputSchema>;
 type Output = z.output<typeof siteInputSchema>;
@@ -19,6 +23,7 @@ type Output = z.output<typeof siteInputSchema>;
  */
 export function SiteForm({ site, customers, customerId }: { site?: Input & { id: string }; customers?: { id: string; name: string }[]; customerId?: string }) {
   const router = useRouter();
+  const closeEdit = useCloseEditSection();
   const [message, setMessage] = useState<string>();
   const { register, handleSubmit, setError, formState: { errors, isSubmitting } } = useForm<Input, unknown, Output>({
     resolver: zodResolver(siteInputSchema),
@@ -31,46 +36,47 @@ export function SiteForm({ site, customers, customerId }: { site?: Input & { id:
       ? await submitJson<{ id: string }>(`/api/sites/${site.id}`, 'PATCH', { ...values, customerId: undefined })
       : await submitJson<{ id: string }>('/api/sites', 'POST', values);
     if (!result.ok) return setMessage(applyServerErrors(result.error, setError));
+    closeEdit?.();
     router.push(`/sites/${result.data.id}`);
     router.refresh();
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="grid max-w-2xl gap-4 rounded-lg bg-white p-4 ring-1 ring-slate-200 md:grid-cols-2">
+    <form onSubmit={onSubmit} noValidate className={cn(cardClass, 'grid max-w-2xl gap-4 md:grid-cols-2')}>
       {!site && (
         <div className="md:col-span-2">
           <FormField id="customerId" label="Customer" error={errors.customerId?.message}>
-            <select {...register('customerId')} {...errorProps('customerId', errors.customerId?.message)} className={inputClass}>
+            <Select {...register('customerId')} {...errorProps('customerId', errors.customerId?.message)}>
               <option value="">Pick a customer…</option>
               {(customers ?? []).map((customer) => <option key={customer.id} value={customer.id}>{customer.name}</option>)}
-            </select>
+            </Select>
           </FormField>
         </div>
       )}
       <FormField id="name" label="Site name" error={errors.name?.message} hint="What the crew calls it, e.g. “Rear yard” or “Block C”">
-        <input {...register('name')} {...errorProps('name', errors.name?.message)} className={inputClass} autoFocus />
+        <TextInput {...register('name')} {...errorProps('name', errors.name?.message)} autoFocus />
       </FormField>
       <FormField id="addressLine" label="Street address" error={errors.addressLine?.message}>
-        <input {...register('addressLine')} {...errorProps('addressLine', errors.addressLine?.message)} className={inputClass} autoComplete="street-address" />
+        <TextInput {...register('addressLine')} {...errorProps('addressLine', errors.addressLine?.message)} autoComplete="street-address" />
       </FormField>
       <FormField id="city" label="City" error={errors.city?.message}>
-        <input {...register('city')} {...errorProps('city', errors.city?.message)} className={inputClass} />
+        <TextInput {...register('city')} {...errorProps('city', errors.city?.message)} />
       </FormField>
       <FormField id="region" label="Region" error={errors.region?.message}>
-        <input {...register('region')} {...errorProps('region', errors.region?.message)} className={inputClass} />
+        <TextInput {...register('region')} {...errorProps('region', errors.region?.message)} />
       </FormField>
       <FormField id="postalCode" label="Postal code" error={errors.postalCode?.message}>
-        <input {...register('postalCode')} {...errorProps('postalCode', errors.postalCode?.message)} className={inputClass} />
+        <TextInput {...register('postalCode')} {...errorProps('postalCode', errors.postalCode?.message)} />
       </FormField>
       <div className="md:col-span-2">
         <FormField id="notes" label="Notes" error={errors.notes?.message} hint="Access, parking, gate codes, traffic control the crew should know about">
-          <textarea {...register('notes')} {...errorProps('notes', errors.notes?.message)} className={textareaClass} />
+          <Textarea {...register('notes')} {...errorProps('notes', errors.notes?.message)} />
         </FormField>
       </div>
       {message && <p role="alert" className="text-sm font-medium text-missed-700 md:col-span-2">{message}</p>}
       <div className="flex gap-2 md:col-span-2">
         <Button type="submit" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : site ? 'Save changes' : 'Create site'}</Button>
-        <Button type="button" variant="secondary" onClick={() => router.back()}>Cancel</Button>
+        <Button type="button" variant="secondary" onClick={() => (closeEdit ? closeEdit() : router.back())}>Cancel</Button>
       </div>
     </form>
   );

@@ -1,7 +1,7 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { KeepForOffline } from '@/components/shell/keep-for-offline';
-import { buttonClass } from '@/components/ui/button';
+import { buttonVariants } from '@/components/ui/button';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { listTodayJobs } from '@/lib/data/today';
@@ -46,7 +46,7 @@ export default async function Page() {
                 <div className="mt-2 space-y-2">
                   {repair.install?.deadline && <RunningClock label={repair.install.deadline.label} start={repair.install.deadline.start} at={repair.install.deadline.at} timeZone={company.timeZone} />}
                   {repair.install ? (
-                    <Link href={`/installs/${repair.install.id}`} className={buttonClass(repair.install.step === 'done' ? 'secondary' : 'primary', 'field')}>
+                    <Link href={`/installs/${repair.install.id}`} className={buttonVariants({ variant: repair.install.step === 'done' ? 'secondary' : 'primary', size: 'field' })}>
                       {repair.install.step === 'done' ? `Install: ${label(repair.install.status)}` : 'Open install'}
                     </Link>
                   ) : (

@@ -2,8 +2,9 @@
 
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
-import { buttonClass } from '@/components/ui/button';
+import { buttonVariants } from '@/components/ui/button';
 import { fetchJson } from '@/lib/client/fetch-json';
+import { cn } from '@/lib/ui/cn';
 
 /** Creates the install with an id made here, so a retried tap finds the same install. */
 export function StartInstallButton({ repairId, label }: { repairId: string; label: string }) {
@@ -15,7 +16,7 @@ export function StartInstallButton({ repairId, label }: { repairId: string; labe
     <div>
       <button
         type="button"
-        className={`${buttonClass('primary', 'field')} w-full sm:w-auto`}
+        className={cn(buttonVariants({ variant: 'primary', size: 'field' }), 'w-full sm:w-auto')}
         disabled={pending}
         onClick={async () => {
           setPending(true);

@@ -1,12 +1,13 @@
 import { createChecklistTemplate, listChecklistTemplates } from '@/lib/data/checklist-templates';
-import { settingsCollection } from '@/lib/settings-routes';
+import { recordCollection } from '@/lib/routes/records';
 import { checklistTemplateInputSchema, checklistTemplateListQuerySchema } from '@/lib/validation/checklist-templates';
 
 export type ChecklistTemplateListResponse = Awaited<ReturnType<typeof listChecklistTemplates>>;
 
 /** Check-list templates with their ordered items `{ id, label, required }`; `archived` filters on inactive ones. */
-const routes = settingsCollection({
+const routes = recordCollection({
   csvName: 'checklist-templates',
+  writers: ['admin'],
   querySchema: checklistTemplateListQuerySchema,
   inputSchema: checklistTemplateInputSchema,
   list: listChecklistTemplates,

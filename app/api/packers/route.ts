@@ -1,11 +1,12 @@
 import { createPacker, listPackers } from '@/lib/data/packers';
-import { settingsCollection } from '@/lib/settings-routes';
+import { recordCollection } from '@/lib/routes/records';
 import { packerInputSchema, packerListQuerySchema } from '@/lib/validation/packers';
 
 export type PackerListResponse = Awaited<ReturnType<typeof listPackers>>;
 
-const routes = settingsCollection({
+const routes = recordCollection({
   csvName: 'packers',
+  writers: ['admin'],
   querySchema: packerListQuerySchema,
   inputSchema: packerInputSchema,
   list: listPackers,

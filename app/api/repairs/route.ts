@@ -1,20 +1,19 @@
-import { NextResponse } from 'next/server';
-import { requireUser } from '@/lib/auth/session';
 import { createRepair, listRepairs } from '@/lib/data/repairs';
-import { csvResponse, toCsv } from '@/lib/csv';
 import { DESK_ROLES, label } from '@/lib/domain';
-import { bodyOf, handle, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/http';
+import { recordCollection } from '@/lib/routes/records';
 import { repairInputSchema, repairListQuerySchema } from '@/lib/validation/repairs';
 
 export type RepairListResponse = Awaited<ReturnType<typeof listRepairs>>;
 
 /** A page of repairs, or with `?format=csv` every repair the same filter matches (lengths in mm, as stored). */
-export const GET = handle(async (request: Request) => {
-  const user = await requireUser();
-  const query = parseOrThrow(repairListQuerySchema, searchParamsOf(request));
-  if (!wantsCsv(request)) return NextResponse.json(await listRepairs(user, query));
-  const { items } = await listRepairs(user, query, true);
-  return csvResponse('repairs', toCsv(items, [
+const routes = recordCollection({
+  csvName: 'repairs',
+  writers: DESK_ROLES,
+  querySchema: repairListQuerySchema,
+  inputSchema: repairInputSchema,
+  list: listRepairs,
+  create: createRepair,
+  csv: [
     { header: 'Job', value: (r) => r.job.number },
     { header: 'Position', value: (r) => r.position },
     { header: 'Segment', value: (r) => r.segment.label },
@@ -26,11 +25,7 @@ export const GET = handle(async (request: Request) => {
     { header: 'Patch length (mm)', value: (r) => r.plannedPatchLengthMm },
     { header: 'Status', value: (r) => label(r.status) },
     { header: 'Notes', value: (r) => r.notes },
-  ]));
+  ],
 });
-
-export const POST = handle(async (request: Request) => {
-  const user = await requireUser(DESK_ROLES);
-  const input = parseOrThrow(repairInputSchema, await bodyOf(request));
-  return NextResponse.json(await createRepair(user, input), { status: 201 });
-});
+export const GET = routes.GET;
+export const POST = routes.POST;

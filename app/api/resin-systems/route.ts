@@ -1,13 +1,14 @@
 import { createResinSystem, listResinSystems } from '@/lib/data/resin-systems';
 import { label } from '@/lib/domain';
-import { settingsCollection } from '@/lib/settings-routes';
+import { recordCollection } from '@/lib/routes/records';
 import { resinSystemInputSchema, resinSystemListQuerySchema } from '@/lib/validation/resin-systems';
 
 export type ResinSystemListResponse = Awaited<ReturnType<typeof listResinSystems>>;
 
 /** Resin systems: a page (or `?format=csv`) for any signed-in user of the company; POST for admins. SI throughout. */
-const routes = settingsCollection({
+const routes = recordCollection({
   csvName: 'resin-systems',
+  writers: ['admin'],
   querySchema: resinSystemListQuerySchema,
   inputSchema: resinSystemInputSchema,
   list: listResinSystems,

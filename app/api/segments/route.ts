@@ -1,20 +1,20 @@
-import { NextResponse } from 'next/server';
-import { requireUser } from '@/lib/auth/session';
 import { createSegment, listSegments } from '@/lib/data/segments';
-import { csvResponse, toCsv } from '@/lib/csv';
 import { DESK_ROLES, label } from '@/lib/domain';
-import { bodyOf, handle, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/http';
+import { recordCollection } from '@/lib/routes/records';
 import { segmentInputSchema, segmentListQuerySchema } from '@/lib/validation/segments';
 
 export type SegmentListResponse = Awaited<ReturnType<typeof listSegments>>;
 
-/** A page of segments, or with `?format=csv` every segment the same filter matches (SI columns). */
-export const GET = handle(async (request: Request) => {
-  const user = await requireUser();
-  const query = parseOrThrow(segmentListQuerySchema, searchParamsOf(request));
-  if (!wantsCsv(request)) return NextResponse.json(await listSegments(user, query));
-  const { items } = await listSegments(user, query, true);
-  return csvResponse('segments', toCsv(items, [
+// GET: A page of segments, or with `?format=csv` every segment the same filter matches (SI columns).
+// POST: A new segment between two access points of one site (422 when an end is on another site).
+const routes = recordCollection({
+  csvName: 'segments',
+  writers: DESK_ROLES,
+  querySchema: segmentListQuerySchema,
+  inputSchema: segmentInputSchema,
+  list: listSegments,
+  create: createSegment,
+  csv: [
     { header: 'Segment', value: (s) => s.label },
     { header: 'Site', value: (s) => s.site?.name },
     { header: 'Material', value: (s) => label(s.material) },
@@ -23,12 +23,7 @@ export const GET = handle(async (request: Request) => {
     { header: 'Length (mm)', value: (s) => s.lengthMm },
     { header: 'Depth (mm)', value: (s) => s.depthMm },
     { header: 'Archived', value: (s) => (s.archivedAt ? 'yes' : 'no') },
-  ]));
+  ],
 });
-
-/** A new segment between two access points of one site (422 when an end is on another site). */
-export const POST = handle(async (request: Request) => {
-  const user = await requireUser(DESK_ROLES);
-  const input = parseOrThrow(segmentInputSchema, await bodyOf(request));
-  return NextResponse.json(await createSegment(user, input), { status: 201 });
-});
+export const GET = routes.GET;
+export const POST = routes.POST;

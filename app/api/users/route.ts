@@ -1,29 +1,25 @@
-import { NextResponse } from 'next/server';
-import { requireUser } from '@/lib/auth/session';
 import { createUser, listUsers } from '@/lib/data/users';
-import { csvResponse, toCsv } from '@/lib/csv';
 import { label } from '@/lib/domain';
-import { bodyOf, handle, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/http';
+import { recordCollection } from '@/lib/routes/records';
 import { userInputSchema, userListQuerySchema } from '@/lib/validation/users';
 
 export type UserListResponse = Awaited<ReturnType<typeof listUsers>>;
 
 /** A page of the company's users, or with `?format=csv` every user the same filter matches. Admin only. */
-export const GET = handle(async (request: Request) => {
-  const user = await requireUser(['admin']);
-  const query = parseOrThrow(userListQuerySchema, searchParamsOf(request));
-  if (!wantsCsv(request)) return NextResponse.json(await listUsers(user, query));
-  const { items } = await listUsers(user, query, true);
-  return csvResponse('users', toCsv(items, [
+const routes = recordCollection({
+  csvName: 'users',
+  readers: ['admin'],
+  writers: ['admin'],
+  querySchema: userListQuerySchema,
+  inputSchema: userInputSchema,
+  list: listUsers,
+  create: createUser,
+  csv: [
     { header: 'Name', value: (u) => u.name },
     { header: 'E-mail', value: (u) => u.email },
     { header: 'Role', value: (u) => label(u.role) },
     { header: 'Active', value: (u) => (u.active ? 'yes' : 'no') },
-  ]));
+  ],
 });
-
-export const POST = handle(async (request: Request) => {
-  const user = await requireUser(['admin']);
-  const input = parseOrThrow(userInputSchema, await bodyOf(request));
-  return NextResponse.json(await createUser(user, input), { status: 201 });
-});
+export const GET = routes.GET;
+export const POST = routes.POST;

@@ -4,10 +4,13 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useFieldArray, useForm } from 'react-hook-form';
-import { FormField, errorProps, inputClass } from '@/components/desk/form-field';
+import { FormField, errorProps } from '@/components/desk/form-field';
+import { Input } from '@/components/ui/input';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
 import { checklistTemplateInputSchema, type ChecklistTemplateFormValues, type ChecklistTemplateInput } from '@/lib/validation/checklist-templates';
+import { cardClass } from '@/components/ui/card';
+import { cn } from '@/lib/ui/cn';
 
 /**
  * The crew's pre-install checks, in their order. Items keep their ids (answers on past installs name them);
@@ -37,11 +40,11 @@ export function ChecklistForm({ id, initial }: { id?: string; initial?: Checklis
   };
 
   return (
-    <form onSubmit={onSubmit} noValidate className="max-w-3xl space-y-4 rounded-lg bg-white p-4 ring-1 ring-slate-200">
+    <form onSubmit={onSubmit} noValidate className={cn(cardClass, 'max-w-3xl space-y-4')}>
       <div className="grid gap-4 md:grid-cols-3">
         <div className="md:col-span-2">
           <FormField id="name" label="Name" error={errors.name?.message}>
-            <input {...register('name')} {...errorProps('name', errors.name?.message)} className={inputClass} autoFocus />
+            <Input {...register('name')} {...errorProps('name', errors.name?.message)} autoFocus />
           </FormField>
         </div>
         <label className="flex items-center gap-2 self-end text-sm font-medium">
@@ -59,7 +62,7 @@ export function ChecklistForm({ id, initial }: { id?: string; initial?: Checklis
               <li key={field.key} className="flex flex-wrap items-start gap-2 rounded-md bg-slate-50 p-2">
                 <span className="w-6 pt-2 text-right text-sm text-slate-500" aria-hidden="true">{index + 1}.</span>
                 <div className="min-w-64 flex-1">
-                  <input aria-label={`Item ${index + 1}`} {...register(name)} {...errorProps(`item-${index}`, error)} className={`${inputClass} w-full`} />
+                  <Input aria-label={`Item ${index + 1}`} {...register(name)} {...errorProps(`item-${index}`, error)} className="w-full" />
                   {error && <p id={`item-${index}-error`} role="alert" className="text-xs font-medium text-missed-700">{error}</p>}
                 </div>
                 <label className="flex items-center gap-1 pt-2 text-sm">

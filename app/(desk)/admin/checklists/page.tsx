@@ -6,6 +6,7 @@ import { requirePageUser } from '@/lib/auth/session';
 import { listChecklistTemplates } from '@/lib/data/checklist-templates';
 import { checklistTemplateListQuerySchema } from '@/lib/validation/checklist-templates';
 import { filledParams } from '@/lib/validation/list';
+import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'Check-lists' };
 
@@ -17,9 +18,7 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
   const list = await listChecklistTemplates(user, { ...query, pageSize: 100 });
   return (
     <div className="space-y-4">
-      <Link href="/admin" className="text-sm text-brand-700 hover:underline">← Company</Link>
-      <h1 className="text-2xl font-bold">Check-list templates</h1>
-      <p className="text-sm text-slate-600">A new install takes the most recently saved active template.</p>
+      <PageHeader back={{ href: '/admin', label: 'Company' }} title="Check-list templates" description="A new install takes the most recently saved active template." />
       <ListToolbar search={query.q} placeholder="Name" exportHref={exportHrefOf('/api/checklist-templates', raw)} newHref="/admin/checklists/new" newLabel="New check-list">
         <FilterSelect name="archived" label="Inactive" value={query.archived === 'false' ? '' : query.archived} options={[{ value: 'true', label: 'Include inactive' }, { value: 'only', label: 'Only inactive' }]} />
       </ListToolbar>

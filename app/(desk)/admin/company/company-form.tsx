@@ -4,12 +4,15 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
-import { FormField, errorProps, inputClass } from '@/components/desk/form-field';
+import { FormField, errorProps } from '@/components/desk/form-field';
+import { Input, Select } from '@/components/ui/input';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
 import { UNIT_SYSTEMS, type UnitSystemName } from '@/lib/domain';
 import { lengthFromSi, lengthToSi, unitLabels } from '@/lib/units';
 import { companyFormSchema, formToCompanyPatch, modulusInSystem, type CompanyFormValues } from '@/lib/validation/company';
+import { cn } from '@/lib/ui/cn';
+import { cardClass } from '@/components/ui/card';
 
 // The API names its fields in SI; the form's own fields carry the entered units.
 const SERVER_FIELD: Record<string, keyof CompanyFormValues> = { minOverlapPerEndMm: 'minOverlapPerEnd', workingWindowSafetyMargin: 'safetyMarginPercent', holdReserve: 'holdReservePercent', linerShortTermModulusMpa: 'linerModulus' };
@@ -50,22 +53,22 @@ export function CompanyForm({ initial, timeZones }: { initial: CompanyFormValues
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="grid max-w-2xl gap-4 rounded-lg bg-white p-4 ring-1 ring-slate-200 md:grid-cols-2">
+    <form onSubmit={onSubmit} noValidate className={cn(cardClass, 'grid max-w-2xl gap-4 md:grid-cols-2')}>
       <FormField id="name" label="Company name" error={errors.name?.message}>
-        <input {...register('name')} {...errorProps('name', errors.name?.message)} className={inputClass} />
+        <Input {...register('name')} {...errorProps('name', errors.name?.message)} />
       </FormField>
       <FormField id="timeZone" label="Time zone" error={errors.timeZone?.message} hint="Times are stored in UTC and shown in this zone.">
-        <select {...register('timeZone')} {...errorProps('timeZone', errors.timeZone?.message)} className={inputClass}>
+        <Select {...register('timeZone')} {...errorProps('timeZone', errors.timeZone?.message)}>
           {timeZones.map((zone) => <option key={zone} value={zone}>{zone}</option>)}
-        </select>
+        </Select>
       </FormField>
       <FormField id="unitSystem" label="Units" error={errors.unitSystem?.message}>
-        <select {...unitField} onChange={onUnitChange} {...errorProps('unitSystem', errors.unitSystem?.message)} className={inputClass}>
+        <Select {...unitField} onChange={onUnitChange} {...errorProps('unitSystem', errors.unitSystem?.message)}>
           {UNIT_SYSTEMS.map((system) => <option key={system} value={system}>{system === 'imperial' ? 'Imperial (in, ft, psi, °F)' : 'Metric (mm, m, kPa, °C)'}</option>)}
-        </select>
+        </Select>
       </FormField>
       <FormField id="minOverlapPerEnd" label={`Minimum overlap per end (${lengthUnit})`} error={errors.minOverlapPerEnd?.message} hint="Added to each end of a defect to size its patch.">
-        <input type="number" step="any" min={0} {...register('minOverlapPerEnd', { valueAsNumber: true })} {...errorProps('minOverlapPerEnd', errors.minOverlapPerEnd?.message)} className={inputClass} />
+        <Input type="number" step="any" min={0} {...register('minOverlapPerEnd', { valueAsNumber: true })} {...errorProps('minOverlapPerEnd', errors.minOverlapPerEnd?.message)} />
       </FormField>
       <FormField
         id="safetyMarginPercent"
@@ -73,7 +76,7 @@ export function CompanyForm({ initial, timeZones }: { initial: CompanyFormValues
         error={errors.safetyMarginPercent?.message}
         hint="Share of the resin’s working time held back in the go/no-go: at 20 %, the minutes from mixing until the patch is on the packer plus the dry run’s pull must fit in 80 % of the working time. Follow the resin maker’s instructions where they ask for more."
       >
-        <input type="number" step="any" min={0} max={90} {...register('safetyMarginPercent', { valueAsNumber: true })} {...errorProps('safetyMarginPercent', errors.safetyMarginPercent?.message)} className={inputClass} />
+        <Input type="number" step="any" min={0} max={90} {...register('safetyMarginPercent', { valueAsNumber: true })} {...errorProps('safetyMarginPercent', errors.safetyMarginPercent?.message)} />
       </FormField>
       <FormField
         id="holdReservePercent"
@@ -81,7 +84,7 @@ export function CompanyForm({ initial, timeZones }: { initial: CompanyFormValues
         error={errors.holdReservePercent?.message}
         hint="Extra time kept inflated on top of the resin’s hold: at 10 %, a 90 min hold means deflate after 99 min. The tablet shows both."
       >
-        <input type="number" step="any" min={0} max={100} {...register('holdReservePercent', { valueAsNumber: true })} {...errorProps('holdReservePercent', errors.holdReservePercent?.message)} className={inputClass} />
+        <Input type="number" step="any" min={0} max={100} {...register('holdReservePercent', { valueAsNumber: true })} {...errorProps('holdReservePercent', errors.holdReservePercent?.message)} />
       </FormField>
       <FormField
         id="linerModulus"
@@ -89,10 +92,10 @@ export function CompanyForm({ initial, timeZones }: { initial: CompanyFormValues
         error={errors.linerModulus?.message}
         hint="The initial flexural modulus of the laminate you install, from its maker's data, for the repair plan's ASTM F1216 X1 checks. Leave empty to use the F1216 minimum (250,000 psi / 1,724 MPa)."
       >
-        <input type="number" step="any" min={0} {...register('linerModulus', { valueAsNumber: true })} {...errorProps('linerModulus', errors.linerModulus?.message)} className={inputClass} />
+        <Input type="number" step="any" min={0} {...register('linerModulus', { valueAsNumber: true })} {...errorProps('linerModulus', errors.linerModulus?.message)} />
       </FormField>
       {message && (
-        <p role={message.ok ? 'status' : 'alert'} className={`text-sm font-medium md:col-span-2 ${message.ok ? 'text-safe-700' : 'text-missed-700'}`}>{message.text}</p>
+        <p role={message.ok ? 'status' : 'alert'} className={cn('text-sm font-medium md:col-span-2', message.ok ? 'text-safe-700' : 'text-missed-700')}>{message.text}</p>
       )}
       <div className="md:col-span-2">
         <Button type="submit" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : 'Save settings'}</Button>

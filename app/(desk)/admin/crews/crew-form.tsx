@@ -4,10 +4,13 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { FormField, errorProps, inputClass } from '@/components/desk/form-field';
+import { FormField, errorProps } from '@/components/desk/form-field';
+import { Input } from '@/components/ui/input';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
 import { crewInputSchema, type CrewInput } from '@/lib/validation/crews';
+import { cn } from '@/lib/ui/cn';
+import { cardClass } from '@/components/ui/card';
 
 /** New or edit: the same schema as POST /api/crews (PATCH takes the same fields). */
 export function CrewForm({ crew }: { crew?: CrewInput & { id: string } }) {
@@ -27,14 +30,14 @@ export function CrewForm({ crew }: { crew?: CrewInput & { id: string } }) {
     router.refresh();
   });
   return (
-    <form onSubmit={onSubmit} noValidate className="grid max-w-2xl gap-4 rounded-lg bg-white p-4 ring-1 ring-slate-200 md:grid-cols-2">
+    <form onSubmit={onSubmit} noValidate className={cn(cardClass, 'grid max-w-2xl gap-4 md:grid-cols-2')}>
       <FormField id="name" label="Crew name" error={errors.name?.message}>
-        <input {...register('name')} {...errorProps('name', errors.name?.message)} className={inputClass} />
+        <Input {...register('name')} {...errorProps('name', errors.name?.message)} />
       </FormField>
       <FormField id="dailyCapacity" label="Jobs per day" error={errors.dailyCapacity?.message} hint="The schedule marks days booked beyond this.">
-        <input type="number" min={1} step={1} {...register('dailyCapacity', { valueAsNumber: true })} {...errorProps('dailyCapacity', errors.dailyCapacity?.message)} className={inputClass} />
+        <Input type="number" min={1} step={1} {...register('dailyCapacity', { valueAsNumber: true })} {...errorProps('dailyCapacity', errors.dailyCapacity?.message)} />
       </FormField>
-      {message && <p role={message.ok ? 'status' : 'alert'} className={`text-sm font-medium md:col-span-2 ${message.ok ? 'text-safe-700' : 'text-missed-700'}`}>{message.text}</p>}
+      {message && <p role={message.ok ? 'status' : 'alert'} className={cn('text-sm font-medium md:col-span-2', message.ok ? 'text-safe-700' : 'text-missed-700')}>{message.text}</p>}
       <div className="md:col-span-2">
         <Button type="submit" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : crew ? 'Save changes' : 'Create crew'}</Button>
       </div>

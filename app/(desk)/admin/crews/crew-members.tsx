@@ -5,6 +5,8 @@ import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { submitJson } from '@/lib/client/submit-json';
 import { label } from '@/lib/domain';
+import { cn } from '@/lib/ui/cn';
+import { cardClass } from '@/components/ui/card';
 
 type Person = { id: string; name: string; role: string; active: boolean };
 
@@ -32,7 +34,7 @@ export function CrewMembers({ crewId, members, candidates, readOnly }: { crewId:
   };
 
   return (
-    <fieldset className="rounded-lg bg-white p-4 ring-1 ring-slate-200" disabled={readOnly || busy}>
+    <fieldset className={cardClass} disabled={readOnly || busy}>
       <legend className="px-1 text-sm font-semibold uppercase tracking-wide text-slate-600">Members</legend>
       {people.length === 0 && <p className="text-sm text-slate-500">No foremen or technicians yet: add them under Users.</p>}
       <ul className="grid gap-1 text-sm sm:grid-cols-2">
@@ -47,7 +49,7 @@ export function CrewMembers({ crewId, members, candidates, readOnly }: { crewId:
         ))}
       </ul>
       {readOnly && <p className="mt-2 text-sm text-slate-500">Restore the crew to change its members.</p>}
-      {message && <p role={message.ok ? 'status' : 'alert'} className={`mt-2 text-sm font-medium ${message.ok ? 'text-safe-700' : 'text-missed-700'}`}>{message.text}</p>}
+      {message && <p role={message.ok ? 'status' : 'alert'} className={cn('mt-2 text-sm font-medium', message.ok ? 'text-safe-700' : 'text-missed-700')}>{message.text}</p>}
       {!readOnly && <Button type="button" className="mt-3" onClick={save}>{busy ? 'Saving…' : 'Save members'}</Button>}
     </fieldset>
   );

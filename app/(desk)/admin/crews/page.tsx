@@ -1,11 +1,11 @@
 import type { Metadata } from 'next';
-import Link from 'next/link';
 import { ListToolbar, FilterSelect, exportHrefOf } from '@/components/desk/list-toolbar';
 import { requirePageUser } from '@/lib/auth/session';
 import { listCrews } from '@/lib/data/crews';
 import { crewListQuerySchema } from '@/lib/validation/crews';
 import { CrewsTable } from './crews-table';
 import { filledParams } from '@/lib/validation/list';
+import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'Crews' };
 
@@ -17,10 +17,7 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
   const list = await listCrews(user, query);
   return (
     <div className="space-y-4">
-      <div>
-        <Link href="/admin" className="text-sm text-brand-700 hover:underline">← Company settings</Link>
-        <h1 className="mt-1 text-2xl font-bold">Crews</h1>
-      </div>
+      <PageHeader back={{ href: '/admin', label: 'Company settings' }} title="Crews" />
       <ListToolbar search={query.q} placeholder="Crew name" exportHref={exportHrefOf('/api/crews', raw)} newHref="/admin/crews/new" newLabel="New crew">
         <FilterSelect name="archived" label="Archived" value={query.archived === 'false' ? '' : query.archived} options={[{ value: 'true', label: 'Include archived' }, { value: 'only', label: 'Only archived' }]} />
       </ListToolbar>

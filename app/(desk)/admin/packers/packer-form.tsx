@@ -5,10 +5,13 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { saveSettings } from '@/components/materials/save-settings';
-import { FormField, errorProps, inputClass } from '@/components/desk/form-field';
+import { FormField, errorProps } from '@/components/desk/form-field';
+import { Input } from '@/components/ui/input';
 import { Button } from '@/components/ui/button';
 import { unitLabels, type UnitSystem } from '@/lib/units';
 import { packerFormSchema, type PackerFormValues, type PackerInput } from '@/lib/validation/packers';
+import { cardClass } from '@/components/ui/card';
+import { cn } from '@/lib/ui/cn';
 
 const BLANK: PackerFormValues = {
   name: '', serial: '', minDiameterMm: Number.NaN, maxDiameterMm: Number.NaN, bladderLengthMm: Number.NaN, endMarginMm: Number.NaN,
@@ -32,16 +35,16 @@ export function PackerForm({ id, initial, unitSystem }: { id?: string; initial?:
   });
   const num = (name: keyof PackerFormValues, text: string, hint?: string) => (
     <FormField id={name} label={text} error={errors[name]?.message} hint={hint}>
-      <input type="number" step="any" inputMode="decimal" {...register(name, { valueAsNumber: true })} {...errorProps(name, errors[name]?.message)} className={inputClass} />
+      <Input type="number" step="any" inputMode="decimal" {...register(name, { valueAsNumber: true })} {...errorProps(name, errors[name]?.message)} />
     </FormField>
   );
   return (
-    <form onSubmit={onSubmit} noValidate className="grid max-w-3xl gap-4 rounded-lg bg-white p-4 ring-1 ring-slate-200 md:grid-cols-2">
+    <form onSubmit={onSubmit} noValidate className={cn(cardClass, 'grid max-w-3xl gap-4 md:grid-cols-2')}>
       <FormField id="name" label="Name" error={errors.name?.message}>
-        <input {...register('name')} {...errorProps('name', errors.name?.message)} className={inputClass} autoFocus />
+        <Input {...register('name')} {...errorProps('name', errors.name?.message)} autoFocus />
       </FormField>
       <FormField id="serial" label="Serial number" error={errors.serial?.message}>
-        <input {...register('serial')} {...errorProps('serial', errors.serial?.message)} className={inputClass} />
+        <Input {...register('serial')} {...errorProps('serial', errors.serial?.message)} />
       </FormField>
       {num('minDiameterMm', `Smallest pipe inside diameter (${len})`)}
       {num('maxDiameterMm', `Largest pipe inside diameter (${len})`)}

@@ -1,5 +1,4 @@
 import type { Metadata } from 'next';
-import Link from 'next/link';
 import { FilterSelect, ListToolbar, exportHrefOf } from '@/components/desk/list-toolbar';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
@@ -7,6 +6,7 @@ import { listPackers } from '@/lib/data/packers';
 import { packerListQuerySchema } from '@/lib/validation/packers';
 import { PackersTable } from './packers-table';
 import { filledParams } from '@/lib/validation/list';
+import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'Packers' };
 
@@ -18,8 +18,7 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
   const [list, company] = await Promise.all([listPackers(user, query), getCompany(user)]);
   return (
     <div className="space-y-4">
-      <Link href="/admin" className="text-sm text-brand-700 hover:underline">← Company</Link>
-      <h1 className="text-2xl font-bold">Packers</h1>
+      <PageHeader back={{ href: '/admin', label: 'Company' }} title="Packers" />
       <ListToolbar search={query.q} placeholder="Name or serial" exportHref={exportHrefOf('/api/packers', raw)} newHref="/admin/packers/new" newLabel="New packer">
         <FilterSelect name="archived" label="Archived" value={query.archived === 'false' ? '' : query.archived} options={[{ value: 'true', label: 'Include archived' }, { value: 'only', label: 'Only archived' }]} />
       </ListToolbar>

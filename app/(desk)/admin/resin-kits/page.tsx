@@ -1,5 +1,4 @@
 import type { Metadata } from 'next';
-import Link from 'next/link';
 import { FilterSelect, ListToolbar, exportHrefOf } from '@/components/desk/list-toolbar';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
@@ -9,6 +8,7 @@ import { resinKitListQuerySchema } from '@/lib/validation/resin-kits';
 import { resinSystemListQuerySchema } from '@/lib/validation/resin-systems';
 import { ResinKitsTable } from './resin-kits-table';
 import { filledParams } from '@/lib/validation/list';
+import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'Resin kits' };
 
@@ -24,8 +24,7 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
   ]);
   return (
     <div className="space-y-4">
-      <Link href="/admin" className="text-sm text-brand-700 hover:underline">← Company</Link>
-      <h1 className="text-2xl font-bold">Resin kits</h1>
+      <PageHeader back={{ href: '/admin', label: 'Company' }} title="Resin kits" />
       <ListToolbar search={query.q} placeholder="Lot or notes" exportHref={exportHrefOf('/api/resin-kits', raw)} newHref="/admin/resin-kits/new" newLabel="New kit">
         <FilterSelect name="resinSystemId" label="Resin system" value={query.resinSystemId} options={systems.items.map((s) => ({ value: s.id, label: s.name }))} />
         <FilterSelect name="expired" label="Expiry" value={query.expired} options={[{ value: 'false', label: 'Usable' }, { value: 'true', label: 'Expired' }]} />

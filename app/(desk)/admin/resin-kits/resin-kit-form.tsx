@@ -5,11 +5,14 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { saveSettings } from '@/components/materials/save-settings';
-import { FormField, errorProps, inputClass, textareaClass } from '@/components/desk/form-field';
+import { FormField, errorProps } from '@/components/desk/form-field';
+import { Input, Select, Textarea } from '@/components/ui/input';
 import { Button } from '@/components/ui/button';
 import { unitLabels, type UnitSystem } from '@/lib/units';
 import { resinKitFormSchema, type ResinKitFormValues, type ResinKitInput } from '@/lib/validation/resin-kits';
 import { KitLabelScan } from './kit-label-scan';
+import { cardClass } from '@/components/ui/card';
+import { cn } from '@/lib/ui/cn';
 
 /** New or edit: the quantity on hand in US gallons or litres as the company works; stored in litres. */
 export function ResinKitForm({ id, initial, unitSystem, systems, scanned }: {
@@ -32,31 +35,31 @@ export function ResinKitForm({ id, initial, unitSystem, systems, scanned }: {
     router.refresh();
   });
   return (
-    <form onSubmit={onSubmit} noValidate className="grid max-w-3xl gap-4 rounded-lg bg-white p-4 ring-1 ring-slate-200 md:grid-cols-2">
+    <form onSubmit={onSubmit} noValidate className={cn(cardClass, 'grid max-w-3xl gap-4 md:grid-cols-2')}>
       <KitLabelScan editingId={id} onLabel={(label) => {
         if (label.lot) setValue('lot', label.lot, { shouldDirty: true, shouldValidate: true });
         if (label.expiresOn) setValue('expiresOn', label.expiresOn, { shouldDirty: true, shouldValidate: true });
       }} />
       <FormField id="lot" label="Lot number" error={errors.lot?.message}>
-        <input {...register('lot')} {...errorProps('lot', errors.lot?.message)} className={inputClass} autoFocus />
+        <Input {...register('lot')} {...errorProps('lot', errors.lot?.message)} autoFocus />
       </FormField>
       <FormField id="resinSystemId" label="Resin system" error={errors.resinSystemId?.message}>
-        <select {...register('resinSystemId')} {...errorProps('resinSystemId', errors.resinSystemId?.message)} className={inputClass}>
+        <Select {...register('resinSystemId')} {...errorProps('resinSystemId', errors.resinSystemId?.message)}>
           {systems.map((s) => <option key={s.id} value={s.id}>{s.name}</option>)}
-        </select>
+        </Select>
       </FormField>
       <FormField id="expiresOn" label="Use by (expiry date)" error={errors.expiresOn?.message}>
-        <input type="date" {...register('expiresOn')} {...errorProps('expiresOn', errors.expiresOn?.message)} className={inputClass} />
+        <Input type="date" {...register('expiresOn')} {...errorProps('expiresOn', errors.expiresOn?.message)} />
       </FormField>
       <FormField id="receivedOn" label="Received on" error={errors.receivedOn?.message}>
-        <input type="date" {...register('receivedOn')} {...errorProps('receivedOn', errors.receivedOn?.message)} className={inputClass} />
+        <Input type="date" {...register('receivedOn')} {...errorProps('receivedOn', errors.receivedOn?.message)} />
       </FormField>
       <FormField id="quantityL" label={`Quantity on hand (${unitLabels(unitSystem).volume})`} error={errors.quantityL?.message}>
-        <input type="number" step="any" min={0} inputMode="decimal" {...register('quantityL', { valueAsNumber: true })} {...errorProps('quantityL', errors.quantityL?.message)} className={inputClass} />
+        <Input type="number" step="any" min={0} inputMode="decimal" {...register('quantityL', { valueAsNumber: true })} {...errorProps('quantityL', errors.quantityL?.message)} />
       </FormField>
       <div className="md:col-span-2">
         <FormField id="notes" label="Notes (storage, supplier’s safety data sheet…)" error={errors.notes?.message}>
-          <textarea {...register('notes')} {...errorProps('notes', errors.notes?.message)} className={textareaClass} />
+          <Textarea {...register('notes')} {...errorProps('notes', errors.notes?.message)} />
         </FormField>
       </div>
       <p className="text-xs text-slate-600 md:col-span-2">Resin components are chemicals: store and handle them as their safety data sheet says. The crew cannot pick a kit past its use-by date.</p>

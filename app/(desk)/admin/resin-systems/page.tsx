@@ -1,5 +1,4 @@
 import type { Metadata } from 'next';
-import Link from 'next/link';
 import { FilterSelect, ListToolbar, exportHrefOf } from '@/components/desk/list-toolbar';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
@@ -8,6 +7,7 @@ import { RESIN_CHEMISTRIES, label } from '@/lib/domain';
 import { resinSystemListQuerySchema } from '@/lib/validation/resin-systems';
 import { ResinSystemsTable } from './resin-systems-table';
 import { filledParams } from '@/lib/validation/list';
+import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'Resin systems' };
 
@@ -19,8 +19,7 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
   const [list, company] = await Promise.all([listResinSystems(user, query), getCompany(user)]);
   return (
     <div className="space-y-4">
-      <Link href="/admin" className="text-sm text-brand-700 hover:underline">← Company</Link>
-      <h1 className="text-2xl font-bold">Resin systems</h1>
+      <PageHeader back={{ href: '/admin', label: 'Company' }} title="Resin systems" />
       <ListToolbar search={query.q} placeholder="Name" exportHref={exportHrefOf('/api/resin-systems', raw)} newHref="/admin/resin-systems/new" newLabel="New resin system">
         <FilterSelect name="chemistry" label="Chemistry" value={query.chemistry} options={RESIN_CHEMISTRIES.map((c) => ({ value: c, label: label(c) }))} />
         <FilterSelect name="archived" label="Archived" value={query.archived === 'false' ? '' : query.archived} options={[{ value: 'true', label: 'Include archived' }, { value: 'only', label: 'Only archived' }]} />

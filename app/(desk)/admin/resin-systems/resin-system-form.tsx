@@ -5,12 +5,15 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { saveSettings } from '@/components/materials/save-settings';
-import { FormField, errorProps, inputClass } from '@/components/desk/form-field';
+import { FormField, errorProps } from '@/components/desk/form-field';
+import { Input, Select } from '@/components/ui/input';
 import { Button } from '@/components/ui/button';
 import { RESIN_CHEMISTRIES, label } from '@/lib/domain';
 import { DEFAULT_EXCESS_PCT, DEFAULT_RESIN_TO_FABRIC_RATIO } from '@/lib/sizing';
 import { unitLabels, type UnitSystem } from '@/lib/units';
 import { resinSystemFormSchema, type ResinSystemFormValues, type ResinSystemInput } from '@/lib/validation/resin-systems';
+import { cardClass } from '@/components/ui/card';
+import { cn } from '@/lib/ui/cn';
 
 const BLANK: ResinSystemFormValues = {
   name: '', chemistry: 'epoxy', refTempC: Number.NaN, potLifeMin: Number.NaN, holdMin: Number.NaN, fullCureMin: Number.NaN,
@@ -42,21 +45,21 @@ export function ResinSystemForm({ id, initial, unitSystem }: { id?: string; init
 
   const num = (name: keyof ResinSystemFormValues, text: string, hint?: string) => (
     <FormField id={name} label={text} error={errors[name]?.message} hint={hint}>
-      <input type="number" step="any" inputMode="decimal" {...register(name, { valueAsNumber: true })} {...errorProps(name, errors[name]?.message)} className={inputClass} />
+      <Input type="number" step="any" inputMode="decimal" {...register(name, { valueAsNumber: true })} {...errorProps(name, errors[name]?.message)} />
     </FormField>
   );
 
   return (
-    <form onSubmit={onSubmit} noValidate className="grid max-w-3xl gap-4 rounded-lg bg-white p-4 ring-1 ring-slate-200 md:grid-cols-3">
+    <form onSubmit={onSubmit} noValidate className={cn(cardClass, 'grid max-w-3xl gap-4 md:grid-cols-3')}>
       <div className="md:col-span-2">
         <FormField id="name" label="Name" error={errors.name?.message}>
-          <input {...register('name')} {...errorProps('name', errors.name?.message)} className={inputClass} autoFocus />
+          <Input {...register('name')} {...errorProps('name', errors.name?.message)} autoFocus />
         </FormField>
       </div>
       <FormField id="chemistry" label="Chemistry" error={errors.chemistry?.message}>
-        <select {...register('chemistry')} {...errorProps('chemistry', errors.chemistry?.message)} className={inputClass}>
+        <Select {...register('chemistry')} {...errorProps('chemistry', errors.chemistry?.message)}>
           {RESIN_CHEMISTRIES.map((c) => <option key={c} value={c}>{label(c)}</option>)}
-        </select>
+        </Select>
       </FormField>
       <p className="text-xs text-slate-600 md:col-span-3">Times as the data sheet gives them at its reference temperature. Always follow the resin maker’s instructions; the clock only corrects them for temperature.</p>
       {num('refTempC', `Reference temperature (${deg})`)}
@@ -67,10 +70,10 @@ export function ResinSystemForm({ id, initial, unitSystem }: { id?: string; init
       {num('fullCureMin', 'Full cure (min)', 'Inflate → back in service')}
       {num('prepMinutes', 'Mix to patch on packer (min)', 'Wet-out and loading: the tablet’s default, counted in the GO / NO-GO')}
       <FormField id="sensitivityKind" label="Temperature sensitivity" error={errors.sensitivityKind?.message}>
-        <select {...register('sensitivityKind')} {...errorProps('sensitivityKind', errors.sensitivityKind?.message)} className={inputClass}>
+        <Select {...register('sensitivityKind')} {...errorProps('sensitivityKind', errors.sensitivityKind?.message)}>
           <option value="doubling">Times halve every step warmer</option>
           <option value="arrhenius">Activation energy (Arrhenius)</option>
-        </select>
+        </Select>
       </FormField>
       {kind === 'arrhenius'
         ? num('activationEnergyKj', 'Activation energy (kJ/mol)')

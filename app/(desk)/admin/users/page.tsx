@@ -1,5 +1,4 @@
 import type { Metadata } from 'next';
-import Link from 'next/link';
 import { ListToolbar, FilterSelect, exportHrefOf } from '@/components/desk/list-toolbar';
 import { requirePageUser } from '@/lib/auth/session';
 import { listUsers } from '@/lib/data/users';
@@ -7,6 +6,7 @@ import { ROLES, label } from '@/lib/domain';
 import { userListQuerySchema } from '@/lib/validation/users';
 import { UsersTable } from './users-table';
 import { filledParams } from '@/lib/validation/list';
+import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'Users' };
 
@@ -19,11 +19,7 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
   const list = await listUsers(user, query);
   return (
     <div className="space-y-4">
-      <div>
-        <Link href="/admin" className="text-sm text-brand-700 hover:underline">← Company settings</Link>
-        <h1 className="mt-1 text-2xl font-bold">Users</h1>
-        <p className="text-sm text-slate-600">Deactivating someone, changing their role or resetting their password signs them out everywhere at once.</p>
-      </div>
+      <PageHeader back={{ href: '/admin', label: 'Company settings' }} title="Users" description="Deactivating someone, changing their role or resetting their password signs them out everywhere at once." />
       <ListToolbar search={query.q} placeholder="Name or e-mail" exportHref={exportHrefOf('/api/users', raw)} newHref="/admin/users/new" newLabel="New user">
         <FilterSelect name="role" label="Role" value={query.role} options={ROLES.map((role) => ({ value: role, label: label(role) }))} />
         <FilterSelect name="active" label="Status" value={query.active} options={[{ value: 'true', label: 'Active' }, { value: 'false', label: 'Deactivated' }]} />

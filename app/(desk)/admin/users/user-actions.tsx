@@ -5,10 +5,11 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
-import { inputClass } from '@/components/desk/form-field';
+import { Input } from '@/components/ui/input';
 import { Button } from '@/components/ui/button';
 import { submitJson } from '@/lib/client/submit-json';
 import { passwordResetSchema } from '@/lib/validation/users';
+import { cn } from '@/lib/ui/cn';
 
 type Target = { id: string; name: string; active: boolean };
 
@@ -50,7 +51,7 @@ export function UserActions({ user, isSelf }: { user: Target; isSelf: boolean })
           }}
         />
       )}
-      {message && <p role={message.ok ? 'status' : 'alert'} className={`text-xs font-medium ${message.ok ? 'text-safe-700' : 'text-missed-700'}`}>{message.text}</p>}
+      {message && <p role={message.ok ? 'status' : 'alert'} className={cn('text-xs font-medium', message.ok ? 'text-safe-700' : 'text-missed-700')}>{message.text}</p>}
     </div>
   );
 }
@@ -68,7 +69,7 @@ function PasswordForm({ user, onDone }: { user: Target; onDone: (message: string
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-wrap items-start gap-2 text-sm">
       <label htmlFor={id} className="sr-only">New password for {user.name}</label>
-      <input
+      <Input
         id={id}
         type="password"
         autoComplete="new-password"
@@ -76,7 +77,7 @@ function PasswordForm({ user, onDone }: { user: Target; onDone: (message: string
         {...register('password')}
         aria-invalid={error ? true : undefined}
         aria-describedby={error ? `${id}-error` : undefined}
-        className={inputClass}
+       
       />
       <Button type="submit" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : 'Save password'}</Button>
       {error && <p id={`${id}-error`} role="alert" className="w-full text-xs font-medium text-missed-700">{error}</p>}

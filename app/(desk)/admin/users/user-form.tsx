@@ -5,11 +5,14 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
-import { FormField, errorProps, inputClass } from '@/components/desk/form-field';
+import { FormField, errorProps } from '@/components/desk/form-field';
+import { Input, Select } from '@/components/ui/input';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
 import { ROLES, label } from '@/lib/domain';
 import { PASSWORD_MIN_LENGTH, userInputSchema, userPatchSchema } from '@/lib/validation/users';
+import { cn } from '@/lib/ui/cn';
+import { cardClass } from '@/components/ui/card';
 
 type NewInput = z.input<typeof userInputSchema>;
 // A disabled control sends nothing, so your own role is simply left out of the PATCH.
@@ -31,16 +34,16 @@ export function NewUserForm() {
     router.refresh();
   });
   return (
-    <form onSubmit={onSubmit} noValidate className="grid max-w-2xl gap-4 rounded-lg bg-white p-4 ring-1 ring-slate-200 md:grid-cols-2">
+    <form onSubmit={onSubmit} noValidate className={cn(cardClass, 'grid max-w-2xl gap-4 md:grid-cols-2')}>
       <FormField id="name" label="Name" error={errors.name?.message}>
-        <input {...register('name')} {...errorProps('name', errors.name?.message)} className={inputClass} autoFocus />
+        <Input {...register('name')} {...errorProps('name', errors.name?.message)} autoFocus />
       </FormField>
       <FormField id="email" label="E-mail" error={errors.email?.message} hint="They sign in with this address.">
-        <input type="email" autoComplete="off" {...register('email')} {...errorProps('email', errors.email?.message)} className={inputClass} />
+        <Input type="email" autoComplete="off" {...register('email')} {...errorProps('email', errors.email?.message)} />
       </FormField>
       <RoleSelect register={register('role')} error={errors.role?.message} />
       <FormField id="password" label="Initial password" error={errors.password?.message} hint={`At least ${PASSWORD_MIN_LENGTH} characters; hand it over in person.`}>
-        <input type="password" autoComplete="new-password" {...register('password')} {...errorProps('password', errors.password?.message)} className={inputClass} />
+        <Input type="password" autoComplete="new-password" {...register('password')} {...errorProps('password', errors.password?.message)} />
       </FormField>
       {message && <p role="alert" className="text-sm font-medium text-missed-700 md:col-span-2">{message}</p>}
       <div className="flex gap-2 md:col-span-2">
@@ -66,12 +69,12 @@ export function EditUserForm({ user, isSelf }: { user: { id: string; name: strin
     router.refresh();
   });
   return (
-    <form onSubmit={onSubmit} noValidate className="grid max-w-2xl gap-4 rounded-lg bg-white p-4 ring-1 ring-slate-200 md:grid-cols-2">
+    <form onSubmit={onSubmit} noValidate className={cn(cardClass, 'grid max-w-2xl gap-4 md:grid-cols-2')}>
       <FormField id="name" label="Name" error={errors.name?.message}>
-        <input {...register('name')} {...errorProps('name', errors.name?.message)} className={inputClass} />
+        <Input {...register('name')} {...errorProps('name', errors.name?.message)} />
       </FormField>
       <RoleSelect register={register('role')} error={errors.role?.message} disabled={isSelf} hint={isSelf ? 'You cannot change your own role.' : undefined} />
-      {message && <p role={message.ok ? 'status' : 'alert'} className={`text-sm font-medium md:col-span-2 ${message.ok ? 'text-safe-700' : 'text-missed-700'}`}>{message.text}</p>}
+      {message && <p role={message.ok ? 'status' : 'alert'} className={cn('text-sm font-medium md:col-span-2', message.ok ? 'text-safe-700' : 'text-missed-700')}>{message.text}</p>}
       <div className="md:col-span-2">
         <Button type="submit" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : 'Save changes'}</Button>
       </div>
@@ -82,9 +85,9 @@ export function EditUserForm({ user, isSelf }: { user: { id: string; name: strin
 function RoleSelect({ register, error, disabled, hint }: { register: ReturnType<ReturnType<typeof useForm<EditInput>>['register']>; error?: string; disabled?: boolean; hint?: string }) {
   return (
     <FormField id="role" label="Role" error={error} hint={hint}>
-      <select {...register} {...errorProps('role', error)} disabled={disabled} className={inputClass}>
+      <Select {...register} {...errorProps('role', error)} disabled={disabled}>
         {ROLES.map((role) => <option key={role} value={role}>{label(role)}</option>)}
-      </select>
+      </Select>
     </FormField>
   );
 }

@@ -1,8 +1,8 @@
 import type { Metadata } from 'next';
-import Link from 'next/link';
 import { requirePageUser } from '@/lib/auth/session';
 import { DESK_ROLES } from '@/lib/domain';
 import { CustomerForm } from '../customer-form';
+import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'New customer' };
 
@@ -10,8 +10,7 @@ export default async function Page() {
   await requirePageUser(DESK_ROLES);
   return (
     <div className="space-y-4">
-      <Link href="/customers" className="text-sm text-brand-700 hover:underline">← Customers</Link>
-      <h1 className="text-2xl font-bold">New customer</h1>
+      <PageHeader back={{ href: '/customers', label: 'Customers' }} title="New customer" />
       <CustomerForm />
     </div>
   );

@@ -5,7 +5,7 @@ import { AuditHistory } from '@/components/desk/audit-history';
 import { StatusBadge } from '@/components/ui/badge';
 import { ReportPanel } from '@/components/report/report-panel';
 import { InvoicePanel } from '@/components/invoice/invoice-panel';
-import { buttonClass } from '@/components/ui/button';
+import { buttonVariants } from '@/components/ui/button';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { findJob } from '@/lib/data/jobs';
@@ -14,6 +14,10 @@ import { REPAIRS_EDITABLE } from '@/lib/jobs/status';
 import { recordForPage } from '@/lib/page-record';
 import { formatLength } from '@/lib/units';
 import { JobStatusActions } from './status-actions';
+import { PageHeader } from '@/components/ui/page-header';
+import { EditJob } from './edit-job';
+import { cardClass } from '@/components/ui/card';
+import { cn } from '@/lib/ui/cn';
 
 export const metadata: Metadata = { title: 'Job' };
 
@@ -25,37 +29,34 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
   const open = !job.archivedAt && REPAIRS_EDITABLE.includes(job.status);
   return (
     <div className="space-y-6">
-      <div className="flex flex-wrap items-start justify-between gap-3">
-        <div>
-          <Link href="/jobs" className="text-sm text-brand-700 hover:underline">← Jobs</Link>
-          <h1 className="mt-1 flex items-center gap-3 text-2xl font-bold">
-            Job {job.number} <StatusBadge status={job.status} />
-            {job.archivedAt && <span className="text-sm font-normal text-slate-500">(archived)</span>}
-          </h1>
-          <p className="text-slate-600">{job.title}</p>
-        </div>
-        {!job.archivedAt && (
-          <div className="flex flex-wrap gap-2">
-            <JobStatusActions jobId={job.id} status={job.status} />
-            <Link href={`/jobs/${job.id}/edit`} className={buttonClass('secondary')}>Edit</Link>
-            <ArchiveButton url={`/api/jobs/${job.id}`} what="job" backTo="/jobs" />
-          </div>
-        )}
-      </div>
-      <dl className="grid grid-cols-2 gap-4 rounded-lg bg-white p-4 text-sm ring-1 ring-slate-200 md:grid-cols-4">
+      <PageHeader
+        back={{ href: '/jobs', label: 'Jobs' }}
+        title={`Job ${job.number}`}
+        badge={<>
+          <StatusBadge status={job.status} />
+          {job.archivedAt && <span className="text-sm font-normal text-slate-500">(archived)</span>}
+        </>}
+        description={job.title}
+        actions={!job.archivedAt && <>
+          <JobStatusActions jobId={job.id} status={job.status} />
+          <ArchiveButton url={`/api/jobs/${job.id}`} what="job" backTo="/jobs" />
+        </>}
+      />
+      <dl className={cn(cardClass, 'grid grid-cols-2 gap-4 text-sm md:grid-cols-4')}>
         <div><dt className="text-slate-500">Customer</dt><dd className="font-medium"><Link href={`/customers/${job.customer.id}`} className="text-brand-700 hover:underline">{job.customer.name}</Link></dd></div>
         <div><dt className="text-slate-500">Site</dt><dd className="font-medium">{site.addressLine}, {site.city}</dd></div>
         <div><dt className="text-slate-500">Scheduled</dt><dd className="font-medium">{job.scheduledDate ?? 'Not yet'}</dd></div>
         <div><dt className="text-slate-500">Crew</dt><dd className="font-medium">{job.crew?.name ?? 'None'}</dd></div>
         {job.notes && <div className="col-span-full"><dt className="text-slate-500">Notes</dt><dd className="whitespace-pre-line">{job.notes}</dd></div>}
       </dl>
+      {!job.archivedAt && <EditJob user={user} job={job} />}
       {job.reviewComment && (
         <p className="rounded-md bg-near-100 p-3 text-sm text-near-700">Office comment: {job.reviewComment}</p>
       )}
       <section aria-labelledby="repairs-heading">
         <div className="mb-2 flex items-center justify-between">
           <h2 id="repairs-heading" className="text-lg font-semibold">Repairs</h2>
-          {open && <Link href={`/repairs/new?jobId=${job.id}`} className={buttonClass('secondary')}>Add repair</Link>}
+          {open && <Link href={`/repairs/new?jobId=${job.id}`} className={buttonVariants({ variant: 'secondary' })}>Add repair</Link>}
         </div>
         <table className="min-w-full rounded-lg bg-white text-sm ring-1 ring-slate-200">
           <caption className="sr-only">Repairs of job {job.number}</caption>

@@ -1,9 +1,9 @@
 import type { Metadata } from 'next';
-import Link from 'next/link';
 import { requirePageUser } from '@/lib/auth/session';
 import { jobFormOptions } from '@/lib/data/jobs';
 import { DESK_ROLES } from '@/lib/domain';
 import { JobForm } from '../job-form';
+import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'New job' };
 
@@ -12,8 +12,7 @@ export default async function Page() {
   const options = await jobFormOptions(user);
   return (
     <div className="space-y-4">
-      <Link href="/jobs" className="text-sm text-brand-700 hover:underline">← Jobs</Link>
-      <h1 className="text-2xl font-bold">New job</h1>
+      <PageHeader back={{ href: '/jobs', label: 'Jobs' }} title="New job" />
       <JobForm options={options} />
     </div>
   );

@@ -1,6 +1,7 @@
 import Link from 'next/link';
 import { StatusBadge } from '@/components/ui/badge';
 import { formatInZone } from '@/lib/dates';
+import { cardClass } from '@/components/ui/card';
 
 type Attempt = { id: string; status: string; inspectionResult: string | null; startedAt: Date | null; createdAt: Date; replacesInstallId: string | null };
 
@@ -9,7 +10,7 @@ export function InstallAttempts({ attempts, timeZone }: { attempts: Attempt[]; t
   if (attempts.length === 0) return null;
   const number = new Map(attempts.map((a, i) => [a.id, i + 1]));
   return (
-    <section aria-labelledby="attempts-heading" className="rounded-lg bg-white p-4 ring-1 ring-slate-200">
+    <section aria-labelledby="attempts-heading" className={cardClass}>
       <h2 id="attempts-heading" className="mb-2 text-lg font-semibold">Installs</h2>
       <ol className="space-y-2 text-sm" data-testid="install-attempts">
         {attempts.map((a, i) => (

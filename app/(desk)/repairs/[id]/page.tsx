@@ -1,10 +1,8 @@
 import type { Metadata } from 'next';
-import Link from 'next/link';
 import { ArchiveButton } from '@/components/desk/archive-button';
 import { AuditHistory } from '@/components/desk/audit-history';
 import { RepairEvidence } from '@/components/evidence/repair-evidence';
 import { StatusBadge } from '@/components/ui/badge';
-import { buttonClass } from '@/components/ui/button';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { getRepair, getRepairPlan } from '@/lib/data/repairs';
@@ -15,6 +13,10 @@ import { formatLength } from '@/lib/units';
 import { listRepairAttempts } from '@/lib/data/redo';
 import { InstallAttempts } from './install-attempts';
 import { PlanPanel } from './plan-panel';
+import { PageHeader } from '@/components/ui/page-header';
+import { EditRepair } from './edit-repair';
+import { cardClass } from '@/components/ui/card';
+import { cn } from '@/lib/ui/cn';
 
 export const metadata: Metadata = { title: 'Repair' };
 
@@ -27,21 +29,14 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
   const segment = repair.segment;
   return (
     <div className="space-y-6">
-      <div className="flex flex-wrap items-start justify-between gap-3">
-        <div>
-          <Link href={`/jobs/${repair.job.id}`} className="text-sm text-brand-700 hover:underline">← Job {repair.job.number}</Link>
-          <div className="mt-1 flex items-center gap-3">
-            <h1 className="text-2xl font-bold">Repair {repair.position} · job {repair.job.number}</h1>
-            <StatusBadge status={repair.status} />
-          </div>
-          <p className="text-slate-600">{label(repair.defectType)}, grade {repair.conditionGrade}</p>
-        </div>
-        <div className="flex gap-2">
-          {jobOpen && <Link href={`/repairs/${repair.id}/edit`} className={buttonClass('secondary')}>Edit</Link>}
-          {repair.status !== 'cancelled' && <ArchiveButton url={`/api/repairs/${repair.id}`} what="repair" backTo={`/jobs/${repair.job.id}`} />}
-        </div>
-      </div>
-      <dl className="grid grid-cols-2 gap-4 rounded-lg bg-white p-4 text-sm ring-1 ring-slate-200 md:grid-cols-4">
+      <PageHeader
+        back={{ href: `/jobs/${repair.job.id}`, label: `Job ${repair.job.number}` }}
+        title={`Repair ${repair.position} · job ${repair.job.number}`}
+        badge={<StatusBadge status={repair.status} />}
+        description={`${label(repair.defectType)}, grade ${repair.conditionGrade}`}
+        actions={repair.status !== 'cancelled' && <ArchiveButton url={`/api/repairs/${repair.id}`} what="repair" backTo={`/jobs/${repair.job.id}`} />}
+      />
+      <dl className={cn(cardClass, 'grid grid-cols-2 gap-4 text-sm md:grid-cols-4')}>
         <div><dt className="text-slate-500">Segment</dt><dd className="font-medium">{segment.label} · {label(segment.material)}</dd></div>
         <div><dt className="text-slate-500">Inside diameter</dt><dd className="font-medium">{formatLength(segment.insideDiameterMm, unitSystem)}</dd></div>
         <div><dt className="text-slate-500">Distance from access point</dt><dd className="font-medium">{formatLength(repair.distanceMm, unitSystem, 'long')}{segment.fromAccessPoint ? ` from ${segment.fromAccessPoint.label}` : ''}</dd></div>
@@ -52,6 +47,7 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
         <div><dt className="text-slate-500">Installs</dt><dd className="font-medium">{repair.installCount}</dd></div>
         {repair.notes && <div className="col-span-full"><dt className="text-slate-500">Notes</dt><dd className="whitespace-pre-line">{repair.notes}</dd></div>}
       </dl>
+      {jobOpen && <EditRepair user={user} repair={repair} unitSystem={unitSystem} />}
       <PlanPanel repairId={repair.id} initial={plan} editable={editable} />
       <InstallAttempts attempts={await listRepairAttempts(user, repair.id)} timeZone={timeZone} />
       <RepairEvidence repairId={repair.id} />

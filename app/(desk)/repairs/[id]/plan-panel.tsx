@@ -5,11 +5,13 @@ import { useId, useState } from 'react';
 import useSWR from 'swr';
 import { Badge } from '@/components/ui/badge';
 import { Button } from '@/components/ui/button';
-import { inputClass } from '@/components/desk/form-field';
+import { Input, Select } from '@/components/ui/input';
 import { fetchJson, FetchError } from '@/lib/client/fetch-json';
 import { submitJson } from '@/lib/client/submit-json';
 import type { RepairPlanResponse } from '@/lib/data/repairs';
 import { convertPressure, formatForce, formatLength, formatNumber, formatPressure, formatVolume, lengthFromSi, lengthToSi, unitLabels, type UnitSystem } from '@/lib/units';
+import { cardClass } from '@/components/ui/card';
+import { cn } from '@/lib/ui/cn';
 
 /** A modulus in the company's units: psi, or MPa (1 psi = 6.894 757 kPa, NIST SP 811). */
 const modulus = (psi: number, system: UnitSystem) =>
@@ -68,7 +70,7 @@ export function PlanPanel({ repairId, initial, editable }: { repairId: string; i
   };
 
   return (
-    <section aria-labelledby="plan-heading" className="space-y-4 rounded-lg bg-white p-4 ring-1 ring-slate-200">
+    <section aria-labelledby="plan-heading" className={cn(cardClass, 'space-y-4')}>
       <h2 id="plan-heading" className="text-lg font-semibold">Plan</h2>
       <div className="grid gap-3 text-sm md:grid-cols-4">
         <NumberBox label="Groundwater head" unit={units.longLength} hint="Water above the pipe’s invert; 0 when there is none" value={head} onChange={setHead} />
@@ -78,9 +80,9 @@ export function PlanPanel({ repairId, initial, editable }: { repairId: string; i
         {data.resinSystems.length > 1 && (
           <div className="flex flex-col gap-1">
             <label htmlFor={`${repairId}-resin`} className="font-medium">Resin system</label>
-            <select id={`${repairId}-resin`} value={resinSystemId} onChange={(e) => setResinSystemId(e.target.value)} className={inputClass}>
+            <Select id={`${repairId}-resin`} value={resinSystemId} onChange={(e) => setResinSystemId(e.target.value)}>
               {data.resinSystems.map((r) => <option key={r.id} value={r.id}>{r.name}</option>)}
-            </select>
+            </Select>
             <p className="text-xs text-slate-500">Sets the resin-to-fabric ratio and the extra mixed</p>
           </div>
         )}
@@ -156,7 +158,7 @@ function NumberBox({ label, unit, hint, value, onChange }: { label: string; unit
     <div className="flex flex-col gap-1">
       <label htmlFor={id} className="font-medium">{label}</label>
       <div className="flex items-center gap-1">
-        <input id={id} type="number" step="any" min="0" inputMode="decimal" value={value} onChange={(e) => onChange(e.target.value)} aria-describedby={`${id}-hint`} className={`${inputClass} w-full`} />
+        <Input id={id} type="number" step="any" min="0" inputMode="decimal" value={value} onChange={(e) => onChange(e.target.value)} aria-describedby={`${id}-hint`} className="w-full" />
         <span className="text-slate-600">{unit}</span>
       </div>
       <p id={`${id}-hint`} className="text-xs text-slate-500">{hint}</p>

@@ -1,5 +1,4 @@
 import type { Metadata } from 'next';
-import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
@@ -7,6 +6,7 @@ import { repairFormOptions } from '@/lib/data/repairs';
 import { DESK_ROLES } from '@/lib/domain';
 import { recordForPage } from '@/lib/page-record';
 import { RepairForm } from '../repair-form';
+import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'New repair' };
 
@@ -19,8 +19,7 @@ export default async function Page({ searchParams }: { searchParams: Promise<{ j
   const { unitSystem } = await getCompany(user);
   return (
     <div className="space-y-4">
-      <Link href={`/jobs/${job.id}`} className="text-sm text-brand-700 hover:underline">← Job {job.number}</Link>
-      <h1 className="text-2xl font-bold">New repair on job {job.number}</h1>
+      <PageHeader back={{ href: `/jobs/${job.id}`, label: `Job ${job.number}` }} title={`New repair on job ${job.number}`} />
       <RepairForm jobId={job.id} segments={segments} unitSystem={unitSystem} />
     </div>
   );

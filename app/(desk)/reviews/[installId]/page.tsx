@@ -12,6 +12,8 @@ import { recordForPage } from '@/lib/page-record';
 import { formatDuration, formatLength, formatPressure, formatTemperature } from '@/lib/units';
 import { EventTimeline } from './event-timeline';
 import { ReviewForm } from './review-form';
+import { PageHeader } from '@/components/ui/page-header';
+import { cardClass } from '@/components/ui/card';
 
 export const metadata: Metadata = { title: 'Review install' };
 
@@ -28,11 +30,12 @@ export default async function Page({ params }: { params: Promise<{ installId: st
 
   return (
     <div className="space-y-6">
-      <div className="flex flex-wrap items-start justify-between gap-3">
-        <div>
-          <Link href="/reviews" className="text-sm text-brand-700 hover:underline">← Review</Link>
-          <h1 className="mt-1 text-2xl font-bold">Job {r.job.number} · repair {repair.position}</h1>
-          <p className="text-slate-600">
+      <PageHeader
+        back={{ href: '/reviews', label: 'Review' }}
+        title={`Job ${r.job.number} · repair ${repair.position}`}
+        actions={<StatusBadge status={r.install.status} />}
+        description={<>
+          <p>
             {r.customer.name} · {r.site.addressLine}, {r.site.city} · {label(repair.defectType)} at {formatLength(repair.distanceMm, units, 'long')}
             {repair.accessPoint ? ` from ${repair.accessPoint.label}` : ''} in {repair.segment.label}
             {repair.clockPosition ? ` · ${repair.clockPosition} o'clock` : ''} · {r.crew?.name ?? 'no crew'}
@@ -49,16 +52,15 @@ export default async function Page({ params }: { params: Promise<{ installId: st
               Redone by <Link className="underline" href={`/reviews/${r.chain.replacedBy.id}`}>a new install</Link> ({label(r.chain.replacedBy.status).toLowerCase()}); this one is kept as the record of the first attempt.
             </p>
           )}
-        </div>
-        <StatusBadge status={r.install.status} />
-      </div>
+        </>}
+      />
 
       <section aria-labelledby="flags-heading" className="space-y-2">
         <h2 id="flags-heading" className="text-lg font-semibold">Quality flags</h2>
         <FlagList flags={r.flags} />
       </section>
 
-      <section aria-labelledby="timeline-heading" className="rounded-lg bg-white p-4 ring-1 ring-slate-200">
+      <section aria-labelledby="timeline-heading" className={cardClass}>
         <h2 id="timeline-heading" className="mb-2 text-lg font-semibold">Plan against reality</h2>
         <TimelineChart
           timeZone={timeZone}
@@ -75,7 +77,7 @@ export default async function Page({ params }: { params: Promise<{ installId: st
       </section>
 
       <div className="grid gap-4 lg:grid-cols-2">
-        <section aria-labelledby="conditions-heading" className="rounded-lg bg-white p-4 ring-1 ring-slate-200">
+        <section aria-labelledby="conditions-heading" className={cardClass}>
           <h2 id="conditions-heading" className="mb-2 text-lg font-semibold">Conditions and materials</h2>
           <dl className="grid grid-cols-2 gap-x-4 gap-y-2 text-sm">
             <Item term="Resin temperature" value={r.install.mixTempC != null ? formatTemperature(r.install.mixTempC, units) : '—'} />
@@ -94,7 +96,7 @@ export default async function Page({ params }: { params: Promise<{ installId: st
             <Item term="Inspection" value={state.inspection ? `${state.inspection.result === 'pass' ? 'Pass' : 'Fail'}${state.inspection.notes ? `: ${state.inspection.notes}` : ''}` : '—'} />
           </dl>
         </section>
-        <section aria-labelledby="checks-heading" className="rounded-lg bg-white p-4 ring-1 ring-slate-200">
+        <section aria-labelledby="checks-heading" className={cardClass}>
           <h2 id="checks-heading" className="mb-2 text-lg font-semibold">Check-list answers</h2>
           {checks ? (
             <ul className="space-y-1 text-sm">
@@ -113,7 +115,7 @@ export default async function Page({ params }: { params: Promise<{ installId: st
 
       <EventTimeline log={r.log} timeZone={timeZone} unitSystem={units} kits={Object.fromEntries(kits)} packers={Object.fromEntries(packers)} />
 
-      <section aria-labelledby="decision-heading" className="rounded-lg bg-white p-4 ring-1 ring-slate-200">
+      <section aria-labelledby="decision-heading" className={cardClass}>
         <h2 id="decision-heading" className="mb-2 text-lg font-semibold">Decision</h2>
         {r.install.status === 'awaiting_review' ? (
           <ReviewForm installId={r.install.id} />

@@ -5,7 +5,8 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { useSWRConfig } from 'swr';
-import { FormField, errorProps, textareaClass } from '@/components/desk/form-field';
+import { FormField, errorProps } from '@/components/desk/form-field';
+import { Textarea } from '@/components/ui/input';
 import { Button } from '@/components/ui/button';
 import { REVIEW_COUNT_URL } from '@/lib/review/queue';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
@@ -38,7 +39,7 @@ export function ReviewForm({ installId }: { installId: string }) {
     <form onSubmit={(e) => e.preventDefault()} noValidate className="max-w-2xl space-y-3">
       <input type="hidden" {...register('decision')} />
       <FormField id="comment" label="Comment for the crew" hint="Required to send back; shown to the crew on their Today screen." error={errors.comment?.message}>
-        <textarea {...register('comment')} {...errorProps('comment', errors.comment?.message)} className={textareaClass} rows={3} />
+        <Textarea {...register('comment')} {...errorProps('comment', errors.comment?.message)} rows={3} />
       </FormField>
       <div className="flex gap-2">
         <Button type="button" disabled={isSubmitting} onClick={() => decide('approved')}>Approve</Button>

@@ -2,13 +2,17 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { ArchiveButton } from '@/components/desk/archive-button';
 import { AuditHistory } from '@/components/desk/audit-history';
-import { buttonClass } from '@/components/ui/button';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { getSegment } from '@/lib/data/segments';
 import { DESK_ROLES, label } from '@/lib/domain';
 import { recordForPage } from '@/lib/page-record';
 import { formatLength } from '@/lib/units';
+import { PageHeader } from '@/components/ui/page-header';
+import { EditSegment } from './edit-segment';
+import { cardClass } from '@/components/ui/card';
+import { cn } from '@/lib/ui/cn';
+import { EmptyState } from '@/components/ui/empty-state';
 
 export const metadata: Metadata = { title: 'Segment' };
 
@@ -21,18 +25,13 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
   const ends = `${segment.fromAccessPoint.label} → ${segment.toAccessPoint?.label ?? 'open end'}`;
   return (
     <div className="space-y-6">
-      <div className="flex flex-wrap items-start justify-between gap-3">
-        <div>
-          <Link href={`/sites/${segment.siteId}`} className="text-sm text-brand-700 hover:underline">← {segment.site.name}</Link>
-          <h1 className="mt-1 text-2xl font-bold">Segment {segment.label}</h1>
-          <p className="text-slate-600">{ends}{segment.archivedAt ? ' · archived' : ''}</p>
-        </div>
-        <div className="flex gap-2">
-          <Link href={`/segments/${segment.id}/edit`} className={buttonClass('secondary')}>Edit</Link>
-          {!segment.archivedAt && <ArchiveButton url={`/api/segments/${segment.id}`} what="segment" backTo={`/sites/${segment.siteId}`} />}
-        </div>
-      </div>
-      <dl className="grid grid-cols-2 gap-4 rounded-lg bg-white p-4 text-sm ring-1 ring-slate-200 md:grid-cols-4">
+      <PageHeader
+        back={{ href: `/sites/${segment.siteId}`, label: segment.site.name }}
+        title={`Segment ${segment.label}`}
+        description={`${ends}${segment.archivedAt ? ' · archived' : ''}`}
+        actions={!segment.archivedAt && <ArchiveButton url={`/api/segments/${segment.id}`} what="segment" backTo={`/sites/${segment.siteId}`} />}
+      />
+      <dl className={cn(cardClass, 'grid grid-cols-2 gap-4 text-sm md:grid-cols-4')}>
         <div><dt className="text-slate-500">Site</dt><dd className="font-medium">{segment.site.addressLine}, {segment.site.city}</dd></div>
         <div><dt className="text-slate-500">Customer</dt><dd className="font-medium">{segment.site.customer?.name ?? '—'}</dd></div>
         <div><dt className="text-slate-500">From access point</dt><dd className="font-medium">{segment.fromAccessPoint.label} ({label(segment.fromAccessPoint.kind)})</dd></div>
@@ -43,10 +42,11 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
         <div><dt className="text-slate-500">Length</dt><dd className="font-medium">{long(segment.lengthMm)}</dd></div>
         <div><dt className="text-slate-500">Depth</dt><dd className="font-medium">{segment.depthMm === null ? '—' : long(segment.depthMm)}</dd></div>
       </dl>
+      <EditSegment user={user} segment={segment} unitSystem={unitSystem} />
       <section aria-labelledby="repairs-heading">
         <h2 id="repairs-heading" className="mb-2 text-lg font-semibold">Repairs on this segment</h2>
         {segment.repairs.length === 0 ? (
-          <p className="rounded-lg bg-white p-4 text-sm text-slate-500 ring-1 ring-slate-200">No repairs planned on this segment.</p>
+          <EmptyState>No repairs planned on this segment.</EmptyState>
         ) : (
           <table className="min-w-full rounded-lg bg-white text-sm ring-1 ring-slate-200">
             <caption className="sr-only">Repairs on this segment</caption>

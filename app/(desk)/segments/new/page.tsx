@@ -7,6 +7,7 @@ import { getSite } from '@/lib/data/sites';
 import { DESK_ROLES } from '@/lib/domain';
 import { recordForPage } from '@/lib/page-record';
 import { SegmentForm } from '../segment-form';
+import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'New segment' };
 
@@ -20,8 +21,7 @@ export default async function Page({ searchParams }: { searchParams: Promise<{ s
   const { unitSystem } = await getCompany(user);
   return (
     <div className="space-y-4">
-      <Link href={`/sites/${site.id}`} className="text-sm text-brand-700 hover:underline">← {site.name}</Link>
-      <h1 className="text-2xl font-bold">New segment</h1>
+      <PageHeader back={{ href: `/sites/${site.id}`, label: site.name }} title="New segment" />
       {site.accessPoints.length === 0 ? (
         <p className="rounded-md bg-near-100 p-3 text-sm text-near-700">
           This site has no access points yet. <Link href={`/sites/${site.id}`} className="font-semibold underline">Add the manholes or cleanouts</Link> at each end first.

@@ -5,13 +5,15 @@ import { useRouter } from 'next/navigation';
 import { useMemo, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
-import { FormField, errorProps, inputClass } from '@/components/desk/form-field';
+import { FormField, errorProps } from '@/components/desk/form-field';
+import { Input, Select } from '@/components/ui/input';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
 import { ACCESS_POINT_KINDS, label } from '@/lib/domain';
 import { formatLength, unitLabels, type UnitSystem } from '@/lib/units';
 import { mmToEntered } from '@/lib/units/entry';
 import { accessPointFormSchema } from '@/lib/validation/access-points';
+import { cn } from '@/lib/ui/cn';
 
 type Point = { id: string; label: string; kind: string; depthMm: number | null };
 
@@ -97,21 +99,21 @@ function AccessPointForm({ siteId, point, unitSystem, onDone }: { siteId: string
   return (
     <form onSubmit={onSubmit} noValidate aria-label={point ? `Edit access point ${point.label}` : 'Add access point'} className="flex flex-wrap items-start gap-3 rounded-lg bg-white p-3 ring-1 ring-slate-200">
       <FormField id={`${prefix}-label`} label="Label" error={errors.label?.message}>
-        <input {...register('label')} {...errorProps(`${prefix}-label`, errors.label?.message)} className={`${inputClass} w-32`} placeholder="MH-1" />
+        <Input {...register('label')} {...errorProps(`${prefix}-label`, errors.label?.message)} className="w-32" placeholder="MH-1" />
       </FormField>
       <FormField id={`${prefix}-kind`} label="Kind" error={errors.kind?.message}>
-        <select {...register('kind')} {...errorProps(`${prefix}-kind`, errors.kind?.message)} className={inputClass}>
+        <Select {...register('kind')} {...errorProps(`${prefix}-kind`, errors.kind?.message)}>
           {ACCESS_POINT_KINDS.map((kind) => <option key={kind} value={kind}>{label(kind)}</option>)}
-        </select>
+        </Select>
       </FormField>
       <FormField id={`${prefix}-depth`} label="Depth" error={errors.depthMm?.message} hint={`Rim to invert, ${unitLabels(unitSystem).longLength}`}>
-        <input type="number" step="any" inputMode="decimal" min={0} {...register('depthMm')} {...errorProps(`${prefix}-depth`, errors.depthMm?.message)} className={`${inputClass} w-28`} />
+        <Input type="number" step="any" inputMode="decimal" min={0} {...register('depthMm')} {...errorProps(`${prefix}-depth`, errors.depthMm?.message)} className="w-28" />
       </FormField>
       <div className="flex gap-2 pt-6">
         <Button type="submit" disabled={isSubmitting}>{point ? 'Save changes' : 'Add access point'}</Button>
         {point && <Button type="button" variant="secondary" onClick={onDone}>Cancel</Button>}
       </div>
-      {message && <p role={message.failed ? 'alert' : 'status'} className={`basis-full text-sm font-medium ${message.failed ? 'text-missed-700' : 'text-slate-700'}`}>{message.text}</p>}
+      {message && <p role={message.failed ? 'alert' : 'status'} className={cn('basis-full text-sm font-medium', message.failed ? 'text-missed-700' : 'text-slate-700')}>{message.text}</p>}
     </form>
   );
 }

@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { ArchiveButton } from '@/components/desk/archive-button';
 import { AuditHistory } from '@/components/desk/audit-history';
-import { buttonClass } from '@/components/ui/button';
+import { buttonVariants } from '@/components/ui/button';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { getSite } from '@/lib/data/sites';
@@ -10,6 +10,11 @@ import { DESK_ROLES, label } from '@/lib/domain';
 import { recordForPage } from '@/lib/page-record';
 import { formatLength } from '@/lib/units';
 import { AccessPointsPanel } from './access-points-panel';
+import { PageHeader } from '@/components/ui/page-header';
+import { EditSection } from '@/components/desk/edit-section';
+import { SiteForm } from '../site-form';
+import { cardClass } from '@/components/ui/card';
+import { cn } from '@/lib/ui/cn';
 
 export const metadata: Metadata = { title: 'Site' };
 
@@ -20,32 +25,25 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
   const pointLabel = new Map(site.accessPoints.map((point) => [point.id, point.label]));
   return (
     <div className="space-y-6">
-      <div className="flex flex-wrap items-start justify-between gap-3">
-        <div>
-          <Link href="/sites" className="text-sm text-brand-700 hover:underline">← Sites</Link>
-          <h1 className="mt-1 text-2xl font-bold">{site.name}</h1>
-          <p className="text-slate-600">
-            <Link href={`/customers/${site.customer.id}`} className="hover:underline">{site.customer.name}</Link>
-            {site.archivedAt ? ' · archived' : ''}
-          </p>
-        </div>
-        <div className="flex gap-2">
-          <Link href={`/sites/${site.id}/edit`} className={buttonClass('secondary')}>Edit</Link>
-          {!site.archivedAt && <ArchiveButton url={`/api/sites/${site.id}`} what="site" backTo="/sites" />}
-        </div>
-      </div>
-      <dl className="grid grid-cols-2 gap-4 rounded-lg bg-white p-4 text-sm ring-1 ring-slate-200 md:grid-cols-4">
+      <PageHeader
+        back={{ href: '/sites', label: 'Sites' }}
+        title={site.name}
+        description={<><Link href={`/customers/${site.customer.id}`} className="hover:underline">{site.customer.name}</Link>{site.archivedAt ? ' · archived' : ''}</>}
+        actions={!site.archivedAt && <ArchiveButton url={`/api/sites/${site.id}`} what="site" backTo="/sites" />}
+      />
+      <dl className={cn(cardClass, 'grid grid-cols-2 gap-4 text-sm md:grid-cols-4')}>
         <div><dt className="text-slate-500">Street address</dt><dd className="font-medium">{site.addressLine}</dd></div>
         <div><dt className="text-slate-500">City</dt><dd className="font-medium">{site.city}</dd></div>
         <div><dt className="text-slate-500">Region</dt><dd className="font-medium">{site.region ?? '—'}</dd></div>
         <div><dt className="text-slate-500">Postal code</dt><dd className="font-medium">{site.postalCode ?? '—'}</dd></div>
         {site.notes && <div className="col-span-full"><dt className="text-slate-500">Notes</dt><dd className="whitespace-pre-line">{site.notes}</dd></div>}
       </dl>
+      <EditSection label="Edit site"><SiteForm site={site} /></EditSection>
       <AccessPointsPanel siteId={site.id} accessPoints={site.accessPoints} unitSystem={unitSystem} />
       <section aria-labelledby="segments-heading">
         <div className="mb-2 flex items-center justify-between">
           <h2 id="segments-heading" className="text-lg font-semibold">Segments</h2>
-          {!site.archivedAt && <Link href={`/segments/new?siteId=${site.id}`} className={buttonClass('secondary')}>New segment</Link>}
+          {!site.archivedAt && <Link href={`/segments/new?siteId=${site.id}`} className={buttonVariants({ variant: 'secondary' })}>New segment</Link>}
         </div>
         <table className="min-w-full rounded-lg bg-white text-sm ring-1 ring-slate-200">
           <caption className="sr-only">Segments of this site</caption>

@@ -1,9 +1,9 @@
 import type { Metadata } from 'next';
-import Link from 'next/link';
 import { requirePageUser } from '@/lib/auth/session';
 import { listCustomerChoices } from '@/lib/data/sites';
 import { DESK_ROLES } from '@/lib/domain';
 import { SiteForm } from '../site-form';
+import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'New site' };
 
@@ -14,10 +14,12 @@ export default async function Page({ searchParams }: { searchParams: Promise<{ c
   const preselected = customers.some((c) => c.id === customerId) ? customerId : undefined;
   return (
     <div className="space-y-4">
-      <Link href={preselected ? `/customers/${preselected}` : '/sites'} className="text-sm text-brand-700 hover:underline">
-        ← {preselected ? customers.find((c) => c.id === preselected)?.name : 'Sites'}
-      </Link>
-      <h1 className="text-2xl font-bold">New site</h1>
+      <PageHeader
+        back={preselected
+          ? { href: `/customers/${preselected}`, label: customers.find((c) => c.id === preselected)?.name }
+          : { href: '/sites', label: 'Sites' }}
+        title="New site"
+      />
       <SiteForm customers={customers} customerId={preselected} />
     </div>
   );

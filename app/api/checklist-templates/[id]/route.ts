@@ -1,11 +1,19 @@
 import { archiveChecklistTemplate, getChecklistTemplate, updateChecklistTemplate } from '@/lib/data/checklist-templates';
-import { settingsRecord } from '@/lib/settings-routes';
+import { recordItem } from '@/lib/routes/records';
 import { checklistTemplatePatchSchema } from '@/lib/validation/checklist-templates';
 
 export type ChecklistTemplateResponse = Awaited<ReturnType<typeof getChecklistTemplate>>;
 
 /** PATCH with `items` replaces the whole ordered list; items keep the ids they come with. */
-const routes = settingsRecord({ kind: 'checklistTemplate', what: 'Check-list template', patchSchema: checklistTemplatePatchSchema, get: getChecklistTemplate, update: updateChecklistTemplate, archive: archiveChecklistTemplate });
+const routes = recordItem({
+  kind: 'checklistTemplate',
+  what: 'Check-list template',
+  patchSchema: checklistTemplatePatchSchema,
+  get: getChecklistTemplate,
+  update: updateChecklistTemplate,
+  archive: archiveChecklistTemplate,
+  writers: ['admin'],
+});
 export const GET = routes.GET;
 export const PATCH = routes.PATCH;
 /** Makes a template past installs used inactive, deletes an unused one. */

@@ -1,28 +1,19 @@
-import { NextResponse } from 'next/server';
-import { ownRowId } from '@/lib/data/access';
-import { requireUser } from '@/lib/auth/session';
 import { archiveCrew, getCrew, updateCrew } from '@/lib/data/crews';
-import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/http';
+import { recordItem } from '@/lib/routes/records';
 import { crewPatchSchema } from '@/lib/validation/crews';
-
-type Context = { params: Promise<{ id: string }> };
 
 export type CrewResponse = Awaited<ReturnType<typeof getCrew>>;
 
-export const GET = handle(async (_request: Request, { params }: Context) => {
-  const user = await requireUser();
-  return NextResponse.json(await getCrew(user, await idOf(params, 'Crew')));
+const routes = recordItem({
+  kind: 'crew',
+  what: 'Crew',
+  patchSchema: crewPatchSchema,
+  get: getCrew,
+  update: updateCrew,
+  archive: archiveCrew,
+  writers: ['admin'],
 });
-
-export const PATCH = handle(async (request: Request, { params }: Context) => {
-  const user = await requireUser(['admin']);
-  const id = await ownRowId(user, 'crew', params, 'Crew');
-  const patch = parseOrThrow(crewPatchSchema, await bodyOf(request));
-  return NextResponse.json(await updateCrew(user, id, patch));
-});
-
+export const GET = routes.GET;
+export const PATCH = routes.PATCH;
 /** Archives the crew when it has jobs, deletes it otherwise. */
-export const DELETE = handle(async (_request: Request, { params }: Context) => {
-  const user = await requireUser(['admin']);
-  return NextResponse.json(await archiveCrew(user, await idOf(params, 'Crew')));
-});
+export const DELETE = routes.DELETE;

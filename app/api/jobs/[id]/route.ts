@@ -1,28 +1,20 @@
-import { NextResponse } from 'next/server';
-import { ownRowId } from '@/lib/data/access';
-import { requireUser } from '@/lib/auth/session';
 import { archiveJob, findJob, updateJob } from '@/lib/data/jobs';
 import { DESK_ROLES } from '@/lib/domain';
-import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/http';
+import { recordItem } from '@/lib/routes/records';
 import { jobPatchSchema } from '@/lib/validation/jobs';
 
 export type JobResponse = Awaited<ReturnType<typeof findJob>>;
-type Context = { params: Promise<{ id: string }> };
 
-export const GET = handle(async (_request: Request, { params }: Context) => {
-  const user = await requireUser();
-  return NextResponse.json(await findJob(user, await idOf(params, 'Job')));
+const routes = recordItem({
+  kind: 'job',
+  what: 'Job',
+  patchSchema: jobPatchSchema,
+  get: findJob,
+  update: updateJob,
+  archive: archiveJob,
+  writers: DESK_ROLES,
 });
-
-export const PATCH = handle(async (request: Request, { params }: Context) => {
-  const user = await requireUser(DESK_ROLES);
-  const id = await ownRowId(user, 'job', params, 'Job');
-  const patch = parseOrThrow(jobPatchSchema, await bodyOf(request));
-  return NextResponse.json(await updateJob(user, id, patch));
-});
-
+export const GET = routes.GET;
+export const PATCH = routes.PATCH;
 /** Archives the job when it has repairs or installs, deletes it otherwise. */
-export const DELETE = handle(async (_request: Request, { params }: Context) => {
-  const user = await requireUser(DESK_ROLES);
-  return NextResponse.json(await archiveJob(user, await idOf(params, 'Job')));
-});
+export const DELETE = routes.DELETE;

@@ -1,29 +1,21 @@
-import { NextResponse } from 'next/server';
-import { ownRowId } from '@/lib/data/access';
-import { requireUser } from '@/lib/auth/session';
 import { getRepair, removeRepair, updateRepair } from '@/lib/data/repairs';
 import { DESK_ROLES } from '@/lib/domain';
-import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/http';
+import { recordItem } from '@/lib/routes/records';
 import { repairPatchSchema } from '@/lib/validation/repairs';
 
 export type RepairResponse = Awaited<ReturnType<typeof getRepair>>;
-type Context = { params: Promise<{ id: string }> };
 
-export const GET = handle(async (_request: Request, { params }: Context) => {
-  const user = await requireUser();
-  return NextResponse.json(await getRepair(user, await idOf(params, 'Repair')));
+const routes = recordItem({
+  kind: 'repair',
+  what: 'Repair',
+  patchSchema: repairPatchSchema,
+  get: getRepair,
+  update: updateRepair,
+  archive: removeRepair,
+  writers: DESK_ROLES,
 });
-
+export const GET = routes.GET;
 /** Edits the defect, saves the plan (patch length, packer, thickness, groundwater, ovality), cancels or restores. */
-export const PATCH = handle(async (request: Request, { params }: Context) => {
-  const user = await requireUser(DESK_ROLES);
-  const id = await ownRowId(user, 'repair', params, 'Repair');
-  const patch = parseOrThrow(repairPatchSchema, await bodyOf(request));
-  return NextResponse.json(await updateRepair(user, id, patch));
-});
-
+export const PATCH = routes.PATCH;
 /** Cancels the repair when an install has started on it, deletes it otherwise. */
-export const DELETE = handle(async (_request: Request, { params }: Context) => {
-  const user = await requireUser(DESK_ROLES);
-  return NextResponse.json(await removeRepair(user, await idOf(params, 'Repair')));
-});
+export const DELETE = routes.DELETE;

@@ -1,11 +1,19 @@
 import { archiveResinKit, getResinKit, updateResinKit } from '@/lib/data/resin-kits';
-import { settingsRecord } from '@/lib/settings-routes';
+import { recordItem } from '@/lib/routes/records';
 import { resinKitPatchSchema } from '@/lib/validation/resin-kits';
 
 export type ResinKitResponse = Awaited<ReturnType<typeof getResinKit>>;
 
 /** GET answers the kit with the installs that used it. */
-const routes = settingsRecord({ kind: 'resinKit', what: 'Resin kit', patchSchema: resinKitPatchSchema, get: getResinKit, update: updateResinKit, archive: archiveResinKit });
+const routes = recordItem({
+  kind: 'resinKit',
+  what: 'Resin kit',
+  patchSchema: resinKitPatchSchema,
+  get: getResinKit,
+  update: updateResinKit,
+  archive: archiveResinKit,
+  writers: ['admin'],
+});
 export const GET = routes.GET;
 export const PATCH = routes.PATCH;
 /** Archives a kit an install used, deletes an unused one. */

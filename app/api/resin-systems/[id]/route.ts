@@ -1,10 +1,18 @@
 import { archiveResinSystem, getResinSystem, updateResinSystem } from '@/lib/data/resin-systems';
-import { settingsRecord } from '@/lib/settings-routes';
+import { recordItem } from '@/lib/routes/records';
 import { resinSystemPatchSchema } from '@/lib/validation/resin-systems';
 
 export type ResinSystemResponse = Awaited<ReturnType<typeof getResinSystem>>;
 
-const routes = settingsRecord({ kind: 'resinSystem', what: 'Resin system', patchSchema: resinSystemPatchSchema, get: getResinSystem, update: updateResinSystem, archive: archiveResinSystem });
+const routes = recordItem({
+  kind: 'resinSystem',
+  what: 'Resin system',
+  patchSchema: resinSystemPatchSchema,
+  get: getResinSystem,
+  update: updateResinSystem,
+  archive: archiveResinSystem,
+  writers: ['admin'],
+});
 export const GET = routes.GET;
 export const PATCH = routes.PATCH;
 /** Archives a resin system that kits or installs name, deletes an unused one. */

@@ -1,30 +1,21 @@
-import { NextResponse } from 'next/server';
-import { ownRowId } from '@/lib/data/access';
-import { requireUser } from '@/lib/auth/session';
-import { DESK_ROLES } from '@/lib/domain';
 import { archiveSite, getSite, updateSite } from '@/lib/data/sites';
-import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/http';
+import { DESK_ROLES } from '@/lib/domain';
+import { recordItem } from '@/lib/routes/records';
 import { sitePatchSchema } from '@/lib/validation/sites';
-
-type Context = { params: Promise<{ id: string }> };
 
 export type SiteResponse = Awaited<ReturnType<typeof getSite>>;
 
+const routes = recordItem({
+  kind: 'site',
+  what: 'Site',
+  patchSchema: sitePatchSchema,
+  get: getSite,
+  update: updateSite,
+  archive: archiveSite,
+  writers: DESK_ROLES,
+});
 /** The site with its customer, access points and segments. */
-export const GET = handle(async (_request: Request, { params }: Context) => {
-  const user = await requireUser();
-  return NextResponse.json(await getSite(user, await idOf(params, 'Site')));
-});
-
-export const PATCH = handle(async (request: Request, { params }: Context) => {
-  const user = await requireUser(DESK_ROLES);
-  const id = await ownRowId(user, 'site', params, 'Site');
-  const patch = parseOrThrow(sitePatchSchema, await bodyOf(request));
-  return NextResponse.json(await updateSite(user, id, patch));
-});
-
+export const GET = routes.GET;
+export const PATCH = routes.PATCH;
 /** Archives the site when segments or jobs depend on it, deletes it otherwise. */
-export const DELETE = handle(async (_request: Request, { params }: Context) => {
-  const user = await requireUser(DESK_ROLES);
-  return NextResponse.json(await archiveSite(user, await idOf(params, 'Site')));
-});
+export const DELETE = routes.DELETE;

@@ -1,23 +1,18 @@
-import { NextResponse } from 'next/server';
-import { ownRowId } from '@/lib/data/access';
-import { requireUser } from '@/lib/auth/session';
 import { getUser, updateUser } from '@/lib/data/users';
-import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/http';
+import { recordItem } from '@/lib/routes/records';
 import { userPatchSchema } from '@/lib/validation/users';
-
-type Context = { params: Promise<{ id: string }> };
 
 export type UserResponse = Awaited<ReturnType<typeof getUser>>;
 
-export const GET = handle(async (_request: Request, { params }: Context) => {
-  const user = await requireUser(['admin']);
-  return NextResponse.json(await getUser(user, await idOf(params, 'User')));
+const routes = recordItem({
+  kind: 'user',
+  what: 'User',
+  patchSchema: userPatchSchema,
+  get: getUser,
+  update: updateUser,
+  readers: ['admin'],
+  writers: ['admin'],
 });
-
+export const GET = routes.GET;
 /** Rename, change role, `active: false` to deactivate (sessions end at once), `active: true` to reactivate. */
-export const PATCH = handle(async (request: Request, { params }: Context) => {
-  const user = await requireUser(['admin']);
-  const id = await ownRowId(user, 'user', params, 'User');
-  const patch = parseOrThrow(userPatchSchema, await bodyOf(request));
-  return NextResponse.json(await updateUser(user, id, patch));
-});
+export const PATCH = routes.PATCH;

@@ -1,5 +1,4 @@
 import type { Metadata } from 'next';
-import Link from 'next/link';
 import { ArchiveButton } from '@/components/desk/archive-button';
 import { AuditHistory } from '@/components/desk/audit-history';
 import { requirePageUser } from '@/lib/auth/session';
@@ -7,6 +6,7 @@ import { getChecklistTemplate } from '@/lib/data/checklist-templates';
 import { getCompany } from '@/lib/data/company';
 import { recordForPage } from '@/lib/page-record';
 import { ChecklistForm } from '../checklist-form';
+import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'Check-list' };
 
@@ -16,14 +16,7 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
   const { timeZone } = await getCompany(user);
   return (
     <div className="space-y-6">
-      <div className="flex flex-wrap items-start justify-between gap-3">
-        <div>
-          <Link href="/admin/checklists" className="text-sm text-brand-700 hover:underline">← Check-lists</Link>
-          <h1 className="mt-1 text-2xl font-bold">{template.name}</h1>
-          <p className="text-sm text-slate-600">Used on {template.installCount} install(s){template.active ? '' : ' · inactive'}</p>
-        </div>
-        {template.active && <ArchiveButton url={`/api/checklist-templates/${template.id}`} what="check-list" backTo="/admin/checklists" />}
-      </div>
+      <PageHeader back={{ href: '/admin/checklists', label: 'Check-lists' }} title={template.name} description={<>Used on {template.installCount} install(s){template.active ? '' : ' · inactive'}</>} actions={template.active && <ArchiveButton url={`/api/checklist-templates/${template.id}`} what="check-list" backTo="/admin/checklists" />} />
       <ChecklistForm id={template.id} initial={{ name: template.name, active: template.active, items: template.items }} />
       <AuditHistory user={user} entityType="checklist_template" entityId={template.id} timeZone={timeZone} />
     </div>

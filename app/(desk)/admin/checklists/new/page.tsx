@@ -1,7 +1,7 @@
 import type { Metadata } from 'next';
-import Link from 'next/link';
 import { requirePageUser } from '@/lib/auth/session';
 import { ChecklistForm } from '../checklist-form';
+import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'New check-list' };
 
@@ -9,8 +9,7 @@ export default async function Page() {
   await requirePageUser(['admin']);
   return (
     <div className="space-y-4">
-      <Link href="/admin/checklists" className="text-sm text-brand-700 hover:underline">← Check-lists</Link>
-      <h1 className="text-2xl font-bold">New check-list</h1>
+      <PageHeader back={{ href: '/admin/checklists', label: 'Check-lists' }} title="New check-list" />
       <ChecklistForm />
     </div>
   );

@@ -1,7 +1,7 @@
 import type { Metadata } from 'next';
-import Link from 'next/link';
 import { requirePageUser } from '@/lib/auth/session';
 import { CrewForm } from '../crew-form';
+import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'New crew' };
 
@@ -9,8 +9,7 @@ export default async function Page() {
   await requirePageUser(['admin']);
   return (
     <div className="space-y-4">
-      <Link href="/admin/crews" className="text-sm text-brand-700 hover:underline">← Crews</Link>
-      <h1 className="text-2xl font-bold">New crew</h1>
+      <PageHeader back={{ href: '/admin/crews', label: 'Crews' }} title="New crew" />
       <CrewForm />
     </div>
   );

@@ -1,5 +1,4 @@
 import type { Metadata } from 'next';
-import Link from 'next/link';
 import { ArchiveButton } from '@/components/desk/archive-button';
 import { AuditHistory } from '@/components/desk/audit-history';
 import { requirePageUser } from '@/lib/auth/session';
@@ -8,6 +7,7 @@ import { getPacker } from '@/lib/data/packers';
 import { recordForPage } from '@/lib/page-record';
 import { packerToForm } from '@/lib/validation/packers';
 import { PackerForm } from '../packer-form';
+import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'Packer' };
 
@@ -17,14 +17,7 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
   const { unitSystem, timeZone } = await getCompany(user);
   return (
     <div className="space-y-6">
-      <div className="flex flex-wrap items-start justify-between gap-3">
-        <div>
-          <Link href="/admin/packers" className="text-sm text-brand-700 hover:underline">← Packers</Link>
-          <h1 className="mt-1 text-2xl font-bold">{packer.name}</h1>
-          <p className="text-sm text-slate-600">Used on {packer.installCount} install(s){packer.archivedAt ? ' · archived' : ''}</p>
-        </div>
-        {!packer.archivedAt && <ArchiveButton url={`/api/packers/${packer.id}`} what="packer" backTo="/admin/packers" />}
-      </div>
+      <PageHeader back={{ href: '/admin/packers', label: 'Packers' }} title={packer.name} description={<>Used on {packer.installCount} install(s){packer.archivedAt ? ' · archived' : ''}</>} actions={!packer.archivedAt && <ArchiveButton url={`/api/packers/${packer.id}`} what="packer" backTo="/admin/packers" />} />
       <PackerForm id={packer.id} initial={packerToForm(packer, unitSystem)} unitSystem={unitSystem} />
       <AuditHistory user={user} entityType="packer" entityId={packer.id} timeZone={timeZone} />
     </div>

@@ -1,8 +1,8 @@
 import type { Metadata } from 'next';
-import Link from 'next/link';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { PackerForm } from '../packer-form';
+import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'New packer' };
 
@@ -11,8 +11,7 @@ export default async function Page() {
   const { unitSystem } = await getCompany(user);
   return (
     <div className="space-y-4">
-      <Link href="/admin/packers" className="text-sm text-brand-700 hover:underline">← Packers</Link>
-      <h1 className="text-2xl font-bold">New packer</h1>
+      <PageHeader back={{ href: '/admin/packers', label: 'Packers' }} title="New packer" />
       <PackerForm unitSystem={unitSystem} />
     </div>
   );

@@ -14,6 +14,7 @@ import { formatVolume } from '@/lib/units';
 import { resinKitToForm } from '@/lib/validation/resin-kits';
 import { resinSystemListQuerySchema } from '@/lib/validation/resin-systems';
 import { ResinKitForm } from '../resin-kit-form';
+import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'Resin kit' };
 
@@ -25,17 +26,16 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
   const choices = systems.items.some((s) => s.id === kit.resinSystemId) ? systems.items : [kit.resinSystem, ...systems.items];
   return (
     <div className="space-y-6">
-      <div className="flex flex-wrap items-start justify-between gap-3">
-        <div>
-          <Link href="/admin/resin-kits" className="text-sm text-brand-700 hover:underline">← Resin kits</Link>
-          <h1 className="mt-1 text-2xl font-bold">Lot {kit.lot} {kit.expired && <Badge tone="missed">expired</Badge>}</h1>
-          <p className="text-sm text-slate-600">
-            <Link href={`/admin/resin-systems/${kit.resinSystemId}`} className="text-brand-700 hover:underline">{kit.resinSystem.name}</Link>
-            {' '}· use by {kit.expiresOn} · {formatVolume(kit.quantityL, unitSystem)} on hand{kit.archivedAt ? ' · archived' : ''}
-          </p>
-        </div>
-        {!kit.archivedAt && <ArchiveButton url={`/api/resin-kits/${kit.id}`} what="resin kit" backTo="/admin/resin-kits" />}
-      </div>
+      <PageHeader
+        back={{ href: '/admin/resin-kits', label: 'Resin kits' }}
+        title={`Lot ${kit.lot}`}
+        badge={kit.expired && <Badge tone="missed">expired</Badge>}
+        description={<>
+          <Link href={`/admin/resin-systems/${kit.resinSystemId}`} className="text-brand-700 hover:underline">{kit.resinSystem.name}</Link>
+          {' '}· use by {kit.expiresOn} · {formatVolume(kit.quantityL, unitSystem)} on hand{kit.archivedAt ? ' · archived' : ''}
+        </>}
+        actions={!kit.archivedAt && <ArchiveButton url={`/api/resin-kits/${kit.id}`} what="resin kit" backTo="/admin/resin-kits" />}
+      />
       <section aria-labelledby="installs-heading">
         <h2 id="installs-heading" className="mb-2 text-lg font-semibold">Installs that used this kit</h2>
         <ul className="divide-y divide-slate-100 rounded-lg bg-white text-sm ring-1 ring-slate-200">

@@ -7,6 +7,7 @@ import { listResinSystems } from '@/lib/data/resin-systems';
 import { isoDateSchema } from '@/lib/validation/common';
 import { resinSystemListQuerySchema } from '@/lib/validation/resin-systems';
 import { ResinKitForm } from '../resin-kit-form';
+import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'New resin kit' };
 
@@ -22,8 +23,7 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
   const [{ unitSystem }, systems] = await Promise.all([getCompany(user), listResinSystems(user, resinSystemListQuerySchema.parse({ pageSize: '100' }))]);
   return (
     <div className="space-y-4">
-      <Link href="/admin/resin-kits" className="text-sm text-brand-700 hover:underline">← Resin kits</Link>
-      <h1 className="text-2xl font-bold">New resin kit</h1>
+      <PageHeader back={{ href: '/admin/resin-kits', label: 'Resin kits' }} title="New resin kit" />
       {systems.items.length === 0
         ? <p>Add a <Link href="/admin/resin-systems/new" className="text-brand-700 underline">resin system</Link> first: every kit belongs to one.</p>
         : <ResinKitForm unitSystem={unitSystem} systems={systems.items} scanned={scanned} />}

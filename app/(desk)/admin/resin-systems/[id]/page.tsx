@@ -8,6 +8,7 @@ import { getResinSystem } from '@/lib/data/resin-systems';
 import { recordForPage } from '@/lib/page-record';
 import { resinSystemToForm } from '@/lib/validation/resin-systems';
 import { ResinSystemForm } from '../resin-system-form';
+import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'Resin system' };
 
@@ -17,17 +18,15 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
   const { unitSystem, timeZone } = await getCompany(user);
   return (
     <div className="space-y-6">
-      <div className="flex flex-wrap items-start justify-between gap-3">
-        <div>
-          <Link href="/admin/resin-systems" className="text-sm text-brand-700 hover:underline">← Resin systems</Link>
-          <h1 className="mt-1 text-2xl font-bold">{system.name}</h1>
-          <p className="text-sm text-slate-600">
-            {system.kitCount} kit(s) · used on {system.installCount} install(s){system.archivedAt ? ' · archived' : ''} ·{' '}
-            <Link href={`/admin/resin-kits?resinSystemId=${system.id}`} className="text-brand-700 hover:underline">its kits</Link>
-          </p>
-        </div>
-        {!system.archivedAt && <ArchiveButton url={`/api/resin-systems/${system.id}`} what="resin system" backTo="/admin/resin-systems" />}
-      </div>
+      <PageHeader
+        back={{ href: '/admin/resin-systems', label: 'Resin systems' }}
+        title={system.name}
+        description={<>
+          {system.kitCount} kit(s) · used on {system.installCount} install(s){system.archivedAt ? ' · archived' : ''} ·{' '}
+          <Link href={`/admin/resin-kits?resinSystemId=${system.id}`} className="text-brand-700 hover:underline">its kits</Link>
+        </>}
+        actions={!system.archivedAt && <ArchiveButton url={`/api/resin-systems/${system.id}`} what="resin system" backTo="/admin/resin-systems" />}
+      />
       <ResinSystemForm id={system.id} initial={resinSystemToForm(system, unitSystem)} unitSystem={unitSystem} />
       <AuditHistory user={user} entityType="resin_system" entityId={system.id} timeZone={timeZone} />
     </div>

@@ -1,8 +1,8 @@
 import type { Metadata } from 'next';
-import Link from 'next/link';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { ResinSystemForm } from '../resin-system-form';
+import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'New resin system' };
 
@@ -11,8 +11,7 @@ export default async function Page() {
   const { unitSystem } = await getCompany(user);
   return (
     <div className="space-y-4">
-      <Link href="/admin/resin-systems" className="text-sm text-brand-700 hover:underline">← Resin systems</Link>
-      <h1 className="text-2xl font-bold">New resin system</h1>
+      <PageHeader back={{ href: '/admin/resin-systems', label: 'Resin systems' }} title="New resin system" />
       <ResinSystemForm unitSystem={unitSystem} />
     </div>
   );

@@ -9,6 +9,9 @@ import { label } from '@/lib/domain';
 import { recordForPage } from '@/lib/page-record';
 import { UserActions } from '../user-actions';
 import { EditUserForm } from '../user-form';
+import { PageHeader } from '@/components/ui/page-header';
+import { cardClass } from '@/components/ui/card';
+import { cn } from '@/lib/ui/cn';
 
 export const metadata: Metadata = { title: 'User' };
 
@@ -19,18 +22,16 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
   const isSelf = user.id === admin.id;
   return (
     <div className="space-y-6">
-      <div className="flex flex-wrap items-start justify-between gap-3">
-        <div>
-          <Link href="/admin/users" className="text-sm text-brand-700 hover:underline">← Users</Link>
-          <h1 className="mt-1 text-2xl font-bold">{user.name}</h1>
-          <p className="text-slate-600">
-            {user.email} · {label(user.role)} · {user.active ? <Badge tone="safe">Active</Badge> : <Badge tone="missed">Deactivated</Badge>}
-          </p>
-        </div>
-        <UserActions user={user} isSelf={isSelf} />
-      </div>
+      <PageHeader
+        back={{ href: '/admin/users', label: 'Users' }}
+        title={user.name}
+        description={<>
+          {user.email} · {label(user.role)} · {user.active ? <Badge tone="safe">Active</Badge> : <Badge tone="missed">Deactivated</Badge>}
+        </>}
+        actions={<UserActions user={user} isSelf={isSelf} />}
+      />
       <EditUserForm user={user} isSelf={isSelf} />
-      <section className="rounded-lg bg-white p-4 text-sm ring-1 ring-slate-200">
+      <section className={cn(cardClass, 'text-sm')}>
         <h2 className="mb-2 text-sm font-semibold uppercase tracking-wide text-slate-600">Crews</h2>
         {user.crews.length === 0 ? (
           <p className="text-slate-500">On no crew.</p>

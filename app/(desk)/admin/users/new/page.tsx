@@ -1,7 +1,7 @@
 import type { Metadata } from 'next';
-import Link from 'next/link';
 import { requirePageUser } from '@/lib/auth/session';
 import { NewUserForm } from '../user-form';
+import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'New user' };
 
@@ -9,8 +9,7 @@ export default async function Page() {
   await requirePageUser(['admin']);
   return (
     <div className="space-y-4">
-      <Link href="/admin/users" className="text-sm text-brand-700 hover:underline">← Users</Link>
-      <h1 className="text-2xl font-bold">New user</h1>
+      <PageHeader back={{ href: '/admin/users', label: 'Users' }} title="New user" />
       <NewUserForm />
     </div>
   );

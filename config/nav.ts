@@ -1,0 +1,34 @@
+import { DESK_ROLES, FIELD_ROLES, type Role } from '@/lib/domain';
+import { REVIEW_COUNT_URL } from '@/lib/review/queue';
+
+// The one source of the desk and field navigation: plain data (href, label, who sees it) so the labels can
+// become message keys. Showing an item is convenience only: every page and handler checks the role again.
+
+export type NavItem = {
+  href: string;
+  label: string;
+  /** Who sees the item. */
+  roles: readonly Role[];
+  /** A list API whose `total` is shown beside the label. */
+  countUrl?: string;
+};
+
+export const deskNav: NavItem[] = [
+  { href: '/jobs', label: 'Jobs', roles: DESK_ROLES },
+  { href: '/repairs', label: 'Repairs', roles: DESK_ROLES },
+  { href: '/customers', label: 'Customers', roles: DESK_ROLES },
+  { href: '/sites', label: 'Sites', roles: DESK_ROLES },
+  { href: '/schedule', label: 'Schedule', roles: DESK_ROLES },
+  { href: '/live', label: 'Live', roles: DESK_ROLES },
+  { href: '/reviews', label: 'Review', roles: DESK_ROLES, countUrl: REVIEW_COUNT_URL },
+  { href: '/invoices', label: 'Invoices', roles: DESK_ROLES },
+  { href: '/insights', label: 'Insights', roles: DESK_ROLES },
+  { href: '/admin', label: 'Company', roles: ['admin'] },
+];
+
+export const fieldNav: NavItem[] = [{ href: '/today', label: 'Today', roles: FIELD_ROLES }];
+
+/** The items of a navigation list the role sees, in order. */
+export function navFor(items: NavItem[], role: Role) {
+  return items.filter((item) => item.roles.includes(role));
+}
