@@ -1,7 +1,7 @@
 'use client';
 
 import { useEffect, useRef, useState } from 'react';
-import { buttonClass } from '@/components/ui/button';
+import { buttonVariants } from '@/components/ui/button';
 import { decodeImageFile, startCameraScan, type CameraScan } from '@/lib/client/barcode';
 import { Gs1Error } from '@/lib/scan/gs1';
 import { describeLabel, labelOf, type ScannedLabel } from '@/lib/scan/label';
@@ -87,12 +87,12 @@ export function ScanLabel({
       <div className="flex flex-wrap gap-2">
         <button
           type="button"
-          className={buttonClass('secondary', size)}
+          className={buttonVariants({ variant: 'secondary', size })}
           onClick={() => void (scanning ? closeCamera() : openCamera())}
         >
           {scanning ? 'Stop scanning' : 'Scan label'}
         </button>
-        <button type="button" className={buttonClass('ghost', size)} onClick={() => photo.current?.click()}>
+        <button type="button" className={buttonVariants({ variant: 'ghost', size })} onClick={() => photo.current?.click()}>
           Scan from photo
         </button>
         <input

@@ -1,5 +1,5 @@
 import type { Metadata } from 'next';
-import { buttonClass } from '@/components/ui/button';
+import { buttonVariants } from '@/components/ui/button';
 import { requirePageUser } from '@/lib/auth/session';
 import { listCrews } from '@/lib/data/crews';
 import { getInsights } from '@/lib/data/insights';
@@ -78,10 +78,10 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
             ))}
           </select>
         </label>
-        <button type="submit" className={buttonClass()}>
+        <button type="submit" className={buttonVariants()}>
           Show
         </button>
-        <a href={csvHref} download className={buttonClass('secondary')} data-testid="insights-csv">
+        <a href={csvHref} download className={buttonVariants({ variant: 'secondary' })} data-testid="insights-csv">
           Download CSV
         </a>
       </form>

@@ -3,7 +3,7 @@
 import { useCallback, useEffect, useRef, useState, useSyncExternalStore } from 'react';
 import useSWR from 'swr';
 import { Countdown, useNow } from '@/components/install/countdown';
-import { buttonClass } from '@/components/ui/button';
+import { buttonVariants } from '@/components/ui/button';
 import { installAudioUnlock, soundAlarm } from '@/lib/client/alarm';
 import { alertsToRaise, runningClock } from '@/lib/client/board-alerts';
 import { countdownState, type CountdownTone } from '@/lib/client/countdown';
@@ -88,7 +88,7 @@ export function LiveBoard({ initial }: { initial: Board }) {
           type="button"
           onClick={toggleMute}
           aria-pressed={muted}
-          className={buttonClass('secondary')}
+          className={buttonVariants({ variant: 'secondary' })}
         >
           {muted ? 'Alert sound off' : 'Alert sound on'}
         </button>
