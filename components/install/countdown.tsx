@@ -1,14 +1,17 @@
 'use client';
 
+import { useTranslations } from 'next-intl';
 import { useEffect, useState } from 'react';
 import { countdownState, type CountdownTone } from '@/lib/client/countdown';
 import { serverNow } from '@/lib/client/server-clock';
 import { formatInZone } from '@/lib/dates';
+import { formatDuration } from '@/lib/units';
 
-const TONES: Record<CountdownTone, { box: string; digits: string; words: string }> = {
-  neutral: { box: 'border-slate-300 bg-white', digits: 'text-brand-800', words: 'on time' },
-  near: { box: 'border-near-500 bg-near-100', digits: 'text-near-700', words: 'deadline near' },
-  missed: { box: 'border-missed-600 bg-missed-100', digits: 'text-missed-700', words: 'deadline passed' },
+// The words for each tone are in the `countdown` message namespace, under the tone's name.
+const TONES: Record<CountdownTone, { box: string; digits: string }> = {
+  neutral: { box: 'border-slate-300 bg-white', digits: 'text-brand-800' },
+  near: { box: 'border-near-500 bg-near-100', digits: 'text-near-700' },
+  missed: { box: 'border-missed-600 bg-missed-100', digits: 'text-missed-700' },
 };
 
 /**
@@ -30,7 +33,9 @@ export function Countdown({
   /** The company's IANA zone for the clock time of the deadline (default: the tablet's). */
   timeZone?: string;
 }) {
-  const { tone, label: digits } = countdownState({ now, start, deadline });
+  const t = useTranslations('countdown');
+  const { tone, label: left, remainingMs } = countdownState({ now, start, deadline });
+  const digits = tone === 'missed' ? t('over', { time: formatDuration(Math.ceil(-remainingMs / 1000)) }) : left;
   const style = TONES[tone];
   return (
     <section className={`rounded-xl border-2 p-4 ${style.box}`} data-tone={tone} data-testid="countdown" aria-label={label}>
@@ -46,7 +51,7 @@ export function Countdown({
       </p>
       {/* Announced when the tone changes only; reading every second would drown a screen reader. */}
       <p className="sr-only" aria-live="polite" suppressHydrationWarning>
-        {`${label}: ${style.words}`}
+        {`${label}: ${t(tone)}`}
       </p>
     </section>
   );

@@ -2,6 +2,7 @@ import 'server-only';
 import { redirect } from 'next/navigation';
 import { User, CrewMember } from '@/models';
 import { AppError, forbidden, unauthorized } from '@/lib/errors';
+import type { Locale } from '@/i18n/locales';
 import type { Role } from '@/lib/domain';
 import { getSessionClaims, type SessionClaims } from './claims';
 import { roleAllowed } from './roles';
@@ -14,6 +15,8 @@ export type SessionUser = {
   name: string;
   email: string;
   crewIds: string[];
+  /** The user's language setting; null follows the browser. */
+  locale?: Locale | null;
 };
 
 /**
@@ -53,5 +56,6 @@ export async function userFromClaims(claims: SessionClaims | null): Promise<Sess
     name: row.name,
     email: row.email,
     crewIds: memberships.map((m) => m.crewId),
+    locale: row.locale ?? null,
   };
 }

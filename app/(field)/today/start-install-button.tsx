@@ -1,12 +1,14 @@
 'use client';
 
 import { useRouter } from 'next/navigation';
+import { useTranslations } from 'next-intl';
 import { useState } from 'react';
 import { buttonClass } from '@/components/ui/button';
 import { fetchJson } from '@/lib/client/fetch-json';
 
 /** Creates the install with an id made here, so a retried tap finds the same install. */
 export function StartInstallButton({ repairId, label }: { repairId: string; label: string }) {
+  const t = useTranslations('today');
   const router = useRouter();
   const [pending, setPending] = useState(false);
   const [error, setError] = useState<string | null>(null);
@@ -24,14 +26,14 @@ export function StartInstallButton({ repairId, label }: { repairId: string; labe
             await fetchJson('/api/installs', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ id, repairId }) });
             router.push(`/installs/${id}`);
           } catch (e) {
-            setError(e instanceof Error ? e.message : 'Could not start the install.');
+            setError(e instanceof Error ? e.message : t('startFailed'));
             setPending(false);
           }
         }}
       >
-        {pending ? 'Starting…' : label}
+        {pending ? t('starting') : label}
       </button>
-      {error && <p role="alert" className="mt-1 text-base text-missed-700">{error} Starting an install needs a signal; try again.</p>}
+      {error && <p role="alert" className="mt-1 text-base text-missed-700">{error} {t('needsSignal')}</p>}
     </div>
   );
 }
