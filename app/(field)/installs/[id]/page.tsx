@@ -1,5 +1,7 @@
 import type { Metadata } from 'next';
 import { notFound, redirect } from 'next/navigation';
+import { getTranslations } from 'next-intl/server';
+import { IntlScope } from '@/components/shell/intl-scope';
 import { requirePageUser } from '@/lib/auth/session';
 import { getInstallView } from '@/lib/data/installs';
 import { FIELD_ROLES } from '@/lib/domain';
@@ -7,7 +9,12 @@ import { AppError } from '@/lib/errors';
 import { uuidSchema } from '@/lib/validation/common';
 import { InstallScreen } from './install-screen';
 
-export const metadata: Metadata = { title: 'Install' };
+export async function generateMetadata(): Promise<Metadata> {
+  return { title: (await getTranslations('install'))('metaTitle') };
+}
+
+/** The message namespaces the install screen's client code reads. */
+const NAMESPACES = ['install', 'labels', 'safety', 'alarms', 'sync', 'flags'];
 
 export default async function Page({ params }: { params: Promise<{ id: string }> }) {
   const user = await requirePageUser(FIELD_ROLES);
@@ -22,5 +29,9 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
     throw error;
   }
   // Through JSON, so the client gets exactly what GET /api/installs/:id would give it.
-  return <InstallScreen initial={JSON.parse(JSON.stringify(view))} viewer={{ id: user.id, name: user.name, role: user.role }} />;
+  return (
+    <IntlScope namespaces={NAMESPACES}>
+      <InstallScreen initial={JSON.parse(JSON.stringify(view))} viewer={{ id: user.id, name: user.name, role: user.role }} />
+    </IntlScope>
+  );
 }
