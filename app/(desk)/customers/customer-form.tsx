@@ -2,12 +2,14 @@
 
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useRouter } from 'next/navigation';
+import { useTranslations } from 'next-intl';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { FormField, errorProps, inputClass, textareaClass } from '@/components/desk/form-field';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
+import { LOCALES } from '@/i18n/locales';
 import { CUSTOMER_KINDS, label } from '@/lib/domain';
 import { customerInputSchema } from '@/lib/validation/customers';
 
@@ -16,11 +18,13 @@ type Output = z.output<typeof customerInputSchema>;
 
 /** New or edit: the same zod schema as POST/PATCH /api/customers checks it here first, then the server again. */
 export function CustomerForm({ customer }: { customer?: Input & { id: string } }) {
+  const t = useTranslations('customers');
+  const tc = useTranslations('common');
   const router = useRouter();
   const [message, setMessage] = useState<string>();
   const { register, handleSubmit, setError, formState: { errors, isSubmitting } } = useForm<Input, unknown, Output>({
     resolver: zodResolver(customerInputSchema),
-    defaultValues: customer ?? { name: '', kind: 'homeowner' },
+    defaultValues: customer ?? { name: '', kind: 'homeowner', language: 'en' },
   });
 
   const onSubmit = handleSubmit(async (values) => {
@@ -48,6 +52,11 @@ export function CustomerForm({ customer }: { customer?: Input & { id: string } }
       <FormField id="email" label="E-mail (repair reports go here)" error={errors.email?.message}>
         <input type="email" {...register('email')} {...errorProps('email', errors.email?.message)} className={inputClass} />
       </FormField>
+      <FormField id="language" label={t('language')} error={errors.language?.message}>
+        <select {...register('language')} {...errorProps('language', errors.language?.message)} className={inputClass}>
+          {LOCALES.map((code) => <option key={code} value={code}>{t(`languages.${code}`)}</option>)}
+        </select>
+      </FormField>
       <FormField id="phone" label="Phone" error={errors.phone?.message}>
         <input type="tel" {...register('phone')} {...errorProps('phone', errors.phone?.message)} className={inputClass} />
       </FormField>
@@ -61,8 +70,8 @@ export function CustomerForm({ customer }: { customer?: Input & { id: string } }
       </div>
       {message && <p role="alert" className="text-sm font-medium text-missed-700 md:col-span-2">{message}</p>}
       <div className="flex gap-2 md:col-span-2">
-        <Button type="submit" disabled={isSubmitting}>{customer ? 'Save changes' : 'Create customer'}</Button>
-        <Button type="button" variant="secondary" onClick={() => router.back()}>Cancel</Button>
+        <Button type="submit" disabled={isSubmitting}>{customer ? tc('saveChanges') : 'Create customer'}</Button>
+        <Button type="button" variant="secondary" onClick={() => router.back()}>{tc('cancel')}</Button>
       </div>
     </form>
   );

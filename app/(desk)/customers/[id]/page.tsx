@@ -1,5 +1,6 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
+import { getTranslations } from 'next-intl/server';
 import { ArchiveButton } from '@/components/desk/archive-button';
 import { AuditHistory } from '@/components/desk/audit-history';
 import { buttonClass } from '@/components/ui/button';
@@ -14,6 +15,7 @@ export const metadata: Metadata = { title: 'Customer' };
 export default async function Page({ params }: { params: Promise<{ id: string }> }) {
   const user = await requirePageUser(DESK_ROLES);
   const customer = await recordForPage((await params).id, (id) => getCustomer(user, id));
+  const tcu = await getTranslations('customers');
   const { timeZone } = await getCompany(user);
   return (
     <div className="space-y-6">
@@ -21,7 +23,10 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
         <div>
           <Link href="/customers" className="text-sm text-brand-700 hover:underline">← Customers</Link>
           <h1 className="mt-1 text-2xl font-bold">{customer.name}</h1>
-          <p className="text-slate-600">{label(customer.kind)}{customer.archivedAt ? ' · archived' : ''}</p>
+          <p className="text-slate-600">
+            {label(customer.kind)} · <span data-testid="customer-language">{tcu(`languages.${customer.language}`)}</span>
+            {customer.archivedAt ? ' · archived' : ''}
+          </p>
         </div>
         <div className="flex gap-2">
           <Link href={`/customers/${customer.id}/edit`} className={buttonClass('secondary')}>Edit</Link>

@@ -2,6 +2,7 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { requirePageUser } from '@/lib/auth/session';
 import { DESK_ROLES } from '@/lib/domain';
+import { IntlScope } from '@/components/shell/intl-scope';
 import { CustomerForm } from '../customer-form';
 
 export const metadata: Metadata = { title: 'New customer' };
@@ -12,7 +13,9 @@ export default async function Page() {
     <div className="space-y-4">
       <Link href="/customers" className="text-sm text-brand-700 hover:underline">← Customers</Link>
       <h1 className="text-2xl font-bold">New customer</h1>
-      <CustomerForm />
+      <IntlScope namespaces={['customers']}>
+        <CustomerForm />
+      </IntlScope>
     </div>
   );
 }

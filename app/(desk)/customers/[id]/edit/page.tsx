@@ -4,6 +4,7 @@ import { requirePageUser } from '@/lib/auth/session';
 import { getCustomer } from '@/lib/data/customers';
 import { DESK_ROLES } from '@/lib/domain';
 import { recordForPage } from '@/lib/page-record';
+import { IntlScope } from '@/components/shell/intl-scope';
 import { CustomerForm } from '../../customer-form';
 
 export const metadata: Metadata = { title: 'Edit customer' };
@@ -16,7 +17,9 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
     <div className="space-y-4">
       <Link href={`/customers/${id}`} className="text-sm text-brand-700 hover:underline">← {customer.name}</Link>
       <h1 className="text-2xl font-bold">Edit customer</h1>
-      <CustomerForm customer={customer} />
+      <IntlScope namespaces={['customers']}>
+        <CustomerForm customer={customer} />
+      </IntlScope>
     </div>
   );
 }
