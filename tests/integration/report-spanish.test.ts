@@ -84,7 +84,8 @@ describe('the repair report in the customer’s language', () => {
     const linked = await pdfRoute(new Request(`http://127.0.0.1/r/${token}/pdf`), { params: Promise.resolve({ token }) });
     expect(linked.status).toBe(200);
     expect(await pdfText(Buffer.from(await linked.arrayBuffer()))).toContain('Curado completo');
-  });
+    // A worker send, two PDF renders and their text extraction: room for a busy machine.
+  }, 120_000);
 
   it('refuses a language it does not have, and changes nothing', async () => {
     const w = await makeApprovedJob(null);
