@@ -6,7 +6,8 @@ import { controlTime, newInstall, serverView, tap } from './install-helpers';
 // (the demo's tecnico@demo.test has users.locale = 'es' while this browser asks for English).
 
 test.describe('signed out, the browser’s language decides', () => {
-  test.use({ extraHTTPHeaders: { 'Accept-Language': 'es-MX,es;q=0.9,en;q=0.5' } });
+  // The browser's language setting: Chromium sends it as Accept-Language (es-MX,es;q=0.9).
+  test.use({ locale: 'es-MX' });
 
   test('/sign-in with Accept-Language: es is in Spanish, failures included', async ({ page }) => {
     await page.goto('/sign-in');
@@ -116,8 +117,8 @@ test.describe('a Spanish-speaking technician', () => {
     await expect(page).toHaveURL('/today');
     await page.goto('/profile');
     await expect(page.getByRole('heading', { level: 1 })).toHaveText('Perfil');
-    await expect(page.getByRole('radio', { name: 'Español' })).toBeChecked();
-    await page.getByRole('radio', { name: 'English' }).check();
+    await expect(page.getByRole('radio', { name: 'Español', exact: true })).toBeChecked();
+    await page.getByRole('radio', { name: 'English', exact: true }).check();
     await page.getByRole('button', { name: 'Guardar' }).click();
     await expect(page.getByRole('heading', { level: 1 })).toHaveText('Profile');
     await page.goto('/today');
