@@ -17,7 +17,7 @@ test.describe('signed out, the browser’s language decides', () => {
     await page.getByLabel('Correo electrónico').fill('nadie@demo.test');
     await page.getByLabel('Contraseña').fill('no-es-la-clave');
     await page.getByRole('button', { name: 'Iniciar sesión' }).click();
-    await expect(page.getByRole('alert')).toHaveText('Ese correo y esa contraseña no corresponden a una cuenta activa.');
+    await expect(page.getByRole('main').getByRole('alert')).toHaveText('Ese correo y esa contraseña no corresponden a una cuenta activa.');
   });
 });
 
