@@ -1,4 +1,8 @@
 import { withSerwist } from '@serwist/turbopack';
+import createNextIntlPlugin from 'next-intl/plugin';
+
+// Points next-intl at i18n/request.ts (the locale and catalogue of each request).
+const withNextIntl = createNextIntlPlugin('./i18n/request.ts');
 
 /** @type {import('next').NextConfig} */
 const nextConfig = {
@@ -25,4 +29,4 @@ const nextConfig = {
 };
 
 // Adds esbuild to serverExternalPackages: the service worker route (app/serwist) runs it.
-export default withSerwist(nextConfig);
+export default withSerwist(withNextIntl(nextConfig));

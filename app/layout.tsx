@@ -1,5 +1,6 @@
 import type { Metadata, Viewport } from 'next';
 import { connection } from 'next/server';
+import { getLocale } from 'next-intl/server';
 import '@fontsource/inter/400.css';
 import '@fontsource/inter/500.css';
 import '@fontsource/inter/600.css';
@@ -21,7 +22,7 @@ export default async function RootLayout({ children }: { children: React.ReactNo
   // page prerendered at build time could not.
   await connection();
   return (
-    <html lang="en">
+    <html lang={await getLocale()}>
       <body className="min-h-screen font-sans">
         <OfflineProvider>{children}</OfflineProvider>
       </body>

@@ -6,6 +6,9 @@ import { REVIEW_COUNT_URL } from '@/lib/review/queue';
 
 export type NavItem = {
   href: string;
+  /** The label's key in the `nav` message namespace (also names the count's test id). */
+  key: string;
+  /** The English label, for reading this list. */
   label: string;
   /** Who sees the item. */
   roles: readonly Role[];
@@ -14,19 +17,19 @@ export type NavItem = {
 };
 
 export const deskNav: NavItem[] = [
-  { href: '/jobs', label: 'Jobs', roles: DESK_ROLES },
-  { href: '/repairs', label: 'Repairs', roles: DESK_ROLES },
-  { href: '/customers', label: 'Customers', roles: DESK_ROLES },
-  { href: '/sites', label: 'Sites', roles: DESK_ROLES },
-  { href: '/schedule', label: 'Schedule', roles: DESK_ROLES },
-  { href: '/live', label: 'Live', roles: DESK_ROLES },
-  { href: '/reviews', label: 'Review', roles: DESK_ROLES, countUrl: REVIEW_COUNT_URL },
-  { href: '/invoices', label: 'Invoices', roles: DESK_ROLES },
-  { href: '/insights', label: 'Insights', roles: DESK_ROLES },
-  { href: '/admin', label: 'Company', roles: ['admin'] },
+  { href: '/jobs', key: 'jobs', label: 'Jobs', roles: DESK_ROLES },
+  { href: '/repairs', key: 'repairs', label: 'Repairs', roles: DESK_ROLES },
+  { href: '/customers', key: 'customers', label: 'Customers', roles: DESK_ROLES },
+  { href: '/sites', key: 'sites', label: 'Sites', roles: DESK_ROLES },
+  { href: '/schedule', key: 'schedule', label: 'Schedule', roles: DESK_ROLES },
+  { href: '/live', key: 'live', label: 'Live', roles: DESK_ROLES },
+  { href: '/reviews', key: 'review', label: 'Review', roles: DESK_ROLES, countUrl: REVIEW_COUNT_URL },
+  { href: '/invoices', key: 'invoices', label: 'Invoices', roles: DESK_ROLES },
+  { href: '/insights', key: 'insights', label: 'Insights', roles: DESK_ROLES },
+  { href: '/admin', key: 'company', label: 'Company', roles: ['admin'] },
 ];
 
-export const fieldNav: NavItem[] = [{ href: '/today', label: 'Today', roles: FIELD_ROLES }];
+export const fieldNav: NavItem[] = [{ href: '/today', key: 'today', label: 'Today', roles: FIELD_ROLES }];
 
 /** The items of a navigation list the role sees, in order. */
 export function navFor(items: NavItem[], role: Role) {

@@ -1,4 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { LOCALES, type Locale } from '@/i18n/locales';
 import { CUSTOMER_KINDS } from '@/lib/domain';
 
 export class Customer extends Model<InferAttributes<Customer>, InferCreationAttributes<Customer>> {
@@ -11,6 +12,8 @@ export class Customer extends Model<InferAttributes<Customer>, InferCreationAttr
   declare phone: CreationOptional<string | null>;
   declare billingAddress: CreationOptional<string | null>;
   declare notes: CreationOptional<string | null>;
+  /** Language of the customer's repair report, its e-mail and PDF. */
+  declare language: CreationOptional<Locale>;
   declare archivedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -28,6 +31,7 @@ export function initCustomer(sequelize: Sequelize) {
       phone: DataTypes.STRING(40),
       billingAddress: DataTypes.TEXT,
       notes: DataTypes.TEXT,
+      language: { type: DataTypes.STRING(8), allowNull: false, defaultValue: 'en', validate: { isIn: [LOCALES] } },
       archivedAt: DataTypes.DATE,
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,

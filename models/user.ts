@@ -1,4 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { LOCALES, type Locale } from '@/i18n/locales';
 import { ROLES, type Role } from '@/lib/domain';
 
 export class User extends Model<InferAttributes<User>, InferCreationAttributes<User>> {
@@ -11,6 +12,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare active: CreationOptional<boolean>;
   /** Bumped to end every session of this user at once (sign-out everywhere, role change). */
   declare tokenVersion: CreationOptional<number>;
+  /** Language of the screens; null follows the browser's Accept-Language. */
+  declare locale: CreationOptional<Locale | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -26,6 +29,7 @@ export function initUser(sequelize: Sequelize) {
       role: { type: DataTypes.STRING(16), allowNull: false, validate: { isIn: [ROLES] } },
       active: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
       tokenVersion: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+      locale: { type: DataTypes.STRING(8), allowNull: true, validate: { isIn: [LOCALES] } },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },

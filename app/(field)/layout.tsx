@@ -1,15 +1,18 @@
 import Link from 'next/link';
+import { getTranslations } from 'next-intl/server';
+import { IntlScope } from '@/components/shell/intl-scope';
 import { Logo } from '@/components/shell/logo';
 import { SignOutButton } from '@/components/shell/sign-out-button';
 import { requirePageUser } from '@/lib/auth/session';
 import { siteConfig } from '@/config/site';
-import { FIELD_ROLES, label } from '@/lib/domain';
+import { FIELD_ROLES } from '@/lib/domain';
 
 export const dynamic = 'force-dynamic';
 
 /** Field mode: large type and targets, high contrast, one primary action per screen. */
 export default async function FieldLayout({ children }: { children: React.ReactNode }) {
   const user = await requirePageUser(FIELD_ROLES);
+  const t = await getTranslations();
   return (
     <div className="min-h-screen bg-slate-100 text-lg">
       <header className="flex items-center justify-between bg-slate-900 px-4 py-3 text-white">
@@ -20,11 +23,14 @@ export default async function FieldLayout({ children }: { children: React.ReactN
         <div className="flex items-center gap-4">
           {user.role === 'foreman' && (
             <Link href="/live" className="min-h-touch content-center rounded-md px-3 font-semibold underline hover:bg-slate-800">
-              Live board
+              {t('nav.live')}
             </Link>
           )}
-          <span data-testid="user-name">{user.name} · {label(user.role)}</span>
-          <SignOutButton className="min-h-touch rounded-md px-4 font-semibold ring-1 ring-slate-500 hover:bg-slate-800" />
+          <span data-testid="user-name">{user.name} · {t(`labels.${user.role}`)}</span>
+          <Link href="/profile" className="underline">{t('nav.profile')}</Link>
+          <IntlScope namespaces={[]}>
+            <SignOutButton className="min-h-touch rounded-md px-4 font-semibold ring-1 ring-slate-500 hover:bg-slate-800" />
+          </IntlScope>
         </div>
       </header>
       <main className="mx-auto max-w-3xl p-4">{children}</main>

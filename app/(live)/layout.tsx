@@ -1,4 +1,5 @@
 import Link from 'next/link';
+import { IntlScope } from '@/components/shell/intl-scope';
 import { Logo } from '@/components/shell/logo';
 import { SignOutButton } from '@/components/shell/sign-out-button';
 import { requirePageUser } from '@/lib/auth/session';
@@ -17,7 +18,9 @@ export default async function LiveLayout({ children }: { children: React.ReactNo
   const back = isDeskRole(user.role)
     ? { href: '/jobs', text: 'Back to the desk' }
     : { href: '/today', text: 'Back to Today' };
+  // The sign-out button and the board's countdowns speak the reader's language.
   return (
+    <IntlScope namespaces={[]}>
     <div className="min-h-screen bg-slate-100">
       <header className="flex flex-wrap items-center justify-between gap-3 bg-slate-900 px-4 py-3 text-white">
         <div className="flex items-center gap-4">
@@ -41,5 +44,6 @@ export default async function LiveLayout({ children }: { children: React.ReactNo
       </header>
       <main className="p-4 sm:p-6">{children}</main>
     </div>
+    </IntlScope>
   );
 }

@@ -1,14 +1,17 @@
 'use client';
 
+import { useTranslations } from 'next-intl';
 import { useEffect, useState } from 'react';
 import { countdownState, type CountdownTone } from '@/lib/client/countdown';
 import { serverNow } from '@/lib/client/server-clock';
 import { formatInZone } from '@/lib/dates';
+import { formatDuration } from '@/lib/units';
 
-const TONES: Record<CountdownTone, { box: string; digits: string; words: string }> = {
-  neutral: { box: 'border-slate-300 bg-white', digits: 'text-brand-800', words: 'on time' },
-  near: { box: 'border-near-500 bg-near-100', digits: 'text-near-700', words: 'deadline near' },
-  missed: { box: 'border-missed-600 bg-missed-100', digits: 'text-missed-700', words: 'deadline passed' },
+// The words for each tone are in the `countdown` message namespace, under the tone's name.
+const TONES: Record<CountdownTone, { box: string; digits: string }> = {
+  neutral: { box: 'border-slate-300 bg-white', digits: 'text-brand-800' },
+  near: { box: 'border-near-500 bg-near-100', digits: 'text-near-700' },
+  missed: { box: 'border-missed-600 bg-missed-100', digits: 'text-missed-700' },
 };
 
 /**
@@ -33,7 +36,9 @@ export function Countdown({
   /** Smaller digits, for a board with many clocks on one screen. */
   compact?: boolean;
 }) {
-  const { tone, label: digits } = countdownState({ now, start, deadline });
+  const t = useTranslations('countdown');
+  const { tone, label: left, remainingMs } = countdownState({ now, start, deadline });
+  const digits = tone === 'missed' ? t('over', { time: formatDuration(Math.ceil(-remainingMs / 1000)) }) : left;
   const style = TONES[tone];
   return (
     <section className={`rounded-xl border-2 ${compact ? 'p-3' : 'p-4'} ${style.box}`} data-tone={tone} data-testid="countdown" aria-label={label}>
@@ -53,7 +58,7 @@ export function Countdown({
       </p>
       {/* Announced when the tone changes only; reading every second would drown a screen reader. */}
       <p className="sr-only" aria-live="polite" suppressHydrationWarning>
-        {`${label}: ${style.words}`}
+        {`${label}: ${t(tone)}`}
       </p>
     </section>
   );

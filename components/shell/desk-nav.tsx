@@ -2,17 +2,20 @@
 
 import Link from 'next/link';
 import { usePathname } from 'next/navigation';
+import { useTranslations } from 'next-intl';
 import useSWR from 'swr';
 import type { NavItem } from '@/config/nav';
 import { fetchJson } from '@/lib/client/fetch-json';
 import { cn } from '@/lib/ui/cn';
 
-// An item's `countUrl` total is shown beside its label, kept fresh on focus and every minute.
+// An item's label is its `key` in the `nav` message namespace; its `countUrl` total is shown beside it, kept fresh
+// on focus and every minute.
 
 export function DeskNav({ items }: { items: NavItem[] }) {
   const pathname = usePathname();
+  const t = useTranslations('nav');
   return (
-    <nav aria-label="Main" className="flex flex-col gap-1">
+    <nav aria-label={t('main')} className="flex flex-col gap-1">
       {items.map((item) => {
         const active = pathname === item.href || pathname.startsWith(`${item.href}/`);
         return (
@@ -25,8 +28,8 @@ export function DeskNav({ items }: { items: NavItem[] }) {
               active ? 'bg-brand-700 text-white' : 'text-slate-200 hover:bg-slate-800',
             )}
           >
-            {item.label}
-            {item.countUrl && <NavCount url={item.countUrl} label={item.label} />}
+            {item.key ? t(item.key) : item.label}
+            {item.countUrl && <NavCount url={item.countUrl} id={item.key ?? String(item.label).toLowerCase()} waiting={t('waiting')} />}
           </Link>
         );
       })}
@@ -34,13 +37,13 @@ export function DeskNav({ items }: { items: NavItem[] }) {
   );
 }
 
-function NavCount({ url, label }: { url: string; label: string }) {
+function NavCount({ url, id, waiting }: { url: string; id: string; waiting: string }) {
   const { data } = useSWR<{ total: number }>(url, fetchJson, { refreshInterval: 60_000, revalidateOnFocus: true });
   if (!data?.total) return null;
   return (
-    <span data-testid={`nav-count-${label.toLowerCase()}`} className="ml-2 rounded-full bg-near-500 px-2 text-xs font-bold text-slate-900">
+    <span data-testid={`nav-count-${id}`} className="ml-2 rounded-full bg-near-500 px-2 text-xs font-bold text-slate-900">
       {data.total}
-      <span className="sr-only"> waiting</span>
+      <span className="sr-only"> {waiting}</span>
     </span>
   );
 }

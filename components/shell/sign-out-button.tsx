@@ -1,9 +1,11 @@
 'use client';
 
+import { useTranslations } from 'next-intl';
 import { useState } from 'react';
 import { signOutTo } from '@/lib/client/sign-out';
 
 export function SignOutButton({ className = '' }: { className?: string }) {
+  const t = useTranslations('common');
   const [pending, setPending] = useState(false);
   return (
     <button
@@ -15,12 +17,12 @@ export function SignOutButton({ className = '' }: { className?: string }) {
         // this tablet until that user signs in here again.
         // The outbox (IndexedDB) loads only when asked: it is not needed to draw the page.
         const unsynced = await import('@/lib/client/outbox').then(({ pendingCount }) => pendingCount()).catch(() => 0);
-        if (unsynced > 0 && !window.confirm(`${unsynced} tap(s) are still only on this tablet. They will wait here until you sign in again on it.\n\nOK signs out anyway.`)) return;
+        if (unsynced > 0 && !window.confirm(t('signOutConfirm', { count: unsynced }))) return;
         setPending(true);
         void signOutTo('/sign-in').catch(() => setPending(false));
       }}
     >
-      {pending ? 'Signing out…' : 'Sign out'}
+      {pending ? t('signingOut') : t('signOut')}
     </button>
   );
 }

@@ -3,6 +3,7 @@ import { redirect } from 'next/navigation';
 import { QueryTypes } from 'sequelize';
 import { sequelize } from '@/models';
 import { AppError, forbidden, unauthorized } from '@/lib/errors';
+import type { Locale } from '@/i18n/locales';
 import type { Role } from '@/lib/domain';
 import { getSessionClaims, type SessionClaims } from './claims';
 import { roleAllowed } from './roles';
@@ -15,6 +16,8 @@ export type SessionUser = {
   name: string;
   email: string;
   crewIds: string[];
+  /** The user's language setting; null follows the browser. */
+  locale?: Locale | null;
 };
 
 /**
@@ -84,13 +87,14 @@ type UserRow = {
   active: boolean;
   tokenVersion: number;
   crewIds: string[];
+  locale: Locale | null;
 };
 
-const USER_SQL = `SELECT u.id, u.company_id AS "companyId", u.role, u.name, u.email, u.active, u.token_version AS "tokenVersion",
+const USER_SQL = `SELECT u.id, u.company_id AS "companyId", u.role, u.name, u.email, u.active, u.token_version AS "tokenVersion", u.locale,
   ARRAY(SELECT cm.crew_id FROM crew_members cm WHERE cm.user_id = u.id AND cm.company_id = u.company_id ORDER BY cm.crew_id)
     AS "crewIds"`;
 
 function sessionUserOf(row: UserRow | undefined, claims: SessionClaims): SessionUser | null {
   if (!row || !row.active || row.tokenVersion !== claims.tokenVersion) return null;
-  return { id: row.id, companyId: row.companyId, role: row.role, name: row.name, email: row.email, crewIds: row.crewIds };
+  return { id: row.id, companyId: row.companyId, role: row.role, name: row.name, email: row.email, crewIds: row.crewIds, locale: row.locale ?? null };
 }

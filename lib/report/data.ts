@@ -5,26 +5,27 @@ import {
 } from '@/models';
 import type { SessionUser } from '@/lib/auth/session';
 import { resinClockSpec } from '@/lib/cure';
-import { formatInZone } from '@/lib/dates';
-import { label } from '@/lib/domain';
+import { labelIn } from '@/i18n/labels';
+import { DEFAULT_LOCALE, isLocale, type Locale } from '@/i18n/locales';
+import { translatorFor } from '@/i18n/translator';
+import { formatDateTimeIn, formatInZone } from '@/lib/dates';
 import { installClock } from '@/lib/install/clock';
 import { deriveInstallState, type InstallState } from '@/lib/install/state';
-import { SAFETY_DEFERRAL, SAFETY_REMINDERS } from '@/lib/safety';
+import { SAFETY_REMINDERS } from '@/lib/safety';
 import { formatDuration, formatLength, formatPressure, formatTemperature, type UnitSystem } from '@/lib/units';
 import { loadReportImages, type ReportImage } from './images';
 import type { TimelineBand, TimelineMark } from './timeline';
 
 // Everything the customer's repair report shows, built once for the PDF, the e-mail and the /r page.
 // What it leaves out on purpose: job and repair notes (gate codes, office remarks), crew and user
-// names, review comments, internal flags. Quantities are formatted in the company's units.
+// names, review comments, internal flags. Quantities are formatted in the company's units; words, numbers and
+// dates in the customer's language (customers.language).
 
 /** Jobs whose report may be shown: every install approved (and the states after it). */
 export const REPORTABLE_JOB_STATUSES = ['approved', 'reported', 'closed'] as const;
 
 /** Cautions of the report: the install screen's reminders that concern the work the customer had done. */
 const REPORT_CAUTION_IDS = ['atmosphere', 'pressure', 'resin', 'exotherm', 'plugs', 'backup', 'hygiene'] as const;
-export const REPORT_DEFERRAL =
-  'This report describes the work done; it does not replace your local codes and permits, the resin maker\u2019s instructions, or an assessment by a licensed professional.';
 
 /** The report of a job of the caller's company; null when there is no such job. */
 export async function getReportData(user: SessionUser, jobId: string, options: { images?: boolean } = {}) {
@@ -50,7 +51,7 @@ export async function buildReportData(companyId: string, jobId: string, { images
   const job = await Job.findOne({
     where: { id: jobId, companyId },
     include: [
-      { model: Customer, as: 'customer', attributes: ['name', 'contactName', 'email'] },
+      { model: Customer, as: 'customer', attributes: ['name', 'contactName', 'email', 'language'] },
       { model: Site, as: 'site', attributes: ['name', 'addressLine', 'city', 'region', 'postalCode'] },
       {
         model: Repair,
@@ -71,7 +72,13 @@ export async function buildReportData(companyId: string, jobId: string, { images
   const plain = job.get({ plain: true }) as unknown as JobRow;
   const system = company.unitSystem;
   const zone = company.timeZone;
-  const when = (at: Date | null | undefined) => (at ? formatInZone(at, zone) : null);
+  const locale: Locale = isLocale(plain.customer.language) ? plain.customer.language : DEFAULT_LOCALE;
+  const t = translatorFor(locale, 'report');
+  const tl = translatorFor(locale, 'labels');
+  const ts = translatorFor(locale, 'safety');
+  const label = (code: string) => labelIn(tl, code);
+  const when = (at: Date | null | undefined) => (at ? formatDateTimeIn(at, zone, locale) : null);
+  const units = { locale };
 
   const installs = await Install.findAll({
     where: { companyId, jobId, status: 'approved' },
@@ -96,7 +103,7 @@ export async function buildReportData(companyId: string, jobId: string, { images
       if (!before) break;
       chain.push({
         started: when(before.startedAt ?? before.createdAt),
-        outcome: before.inspectionResult === 'fail' ? 'inspection failed' : before.status === 'sent_back' ? 'sent back for rework' : 'not accepted',
+        outcome: before.inspectionResult === 'fail' ? t('outcomeFailed') : before.status === 'sent_back' ? t('outcomeSentBack') : t('outcomeOther'),
       });
       id = before.replacesInstallId;
     }
@@ -121,17 +128,17 @@ export async function buildReportData(companyId: string, jobId: string, { images
       segment: {
         label: repair.segment.label,
         material: label(repair.segment.material),
-        insideDiameter: formatLength(repair.segment.insideDiameterMm, system),
+        insideDiameter: formatLength(repair.segment.insideDiameterMm, system, 'short', units),
       },
-      accessPoint: accessPoint ? `${accessPoint.label} (${label(accessPoint.kind).toLowerCase()})` : 'the upstream access point',
-      distance: formatLength(repair.distanceMm, system, 'long'),
-      clockPosition: repair.clockPosition ? `${repair.clockPosition} o\u2019clock` : null,
-      defect: repair.ownerDefectCode ? `${label(repair.defectType)} (owner\u2019s code ${repair.ownerDefectCode})` : label(repair.defectType),
-      defectLength: formatLength(repair.defectLengthMm, system),
+      accessPoint: accessPoint ? `${accessPoint.label} (${label(accessPoint.kind).toLowerCase()})` : t('upstreamAccessPoint'),
+      distance: formatLength(repair.distanceMm, system, 'long', units),
+      clockPosition: repair.clockPosition ? t('clock', { position: repair.clockPosition }) : null,
+      defect: repair.ownerDefectCode ? t('ownerCode', { defect: label(repair.defectType), code: repair.ownerDefectCode }) : label(repair.defectType),
+      defectLength: formatLength(repair.defectLengthMm, system, 'short', units),
       conditionGrade: repair.conditionGrade,
       patchLengthMm,
-      patchLength: patchLengthMm === null ? null : formatLength(patchLengthMm, system),
-      install: install ? installSummary(install, system, when) : null,
+      patchLength: patchLengthMm === null ? null : formatLength(patchLengthMm, system, 'short', units),
+      install: install ? installSummary(install, system, when, locale, zone) : null,
       /** Earlier attempts at this patch that were redone, newest first ("redo chain"). */
       earlierAttempts: earlierAttempts(install),
       images: repairImages,
@@ -141,6 +148,8 @@ export async function buildReportData(companyId: string, jobId: string, { images
   const site = plain.site;
 
   return {
+    /** The customer's language: the page, PDF and e-mail of this report speak it. */
+    locale,
     company: { name: company.name, unitSystem: system, timeZone: zone },
     job: { id: plain.id, number: plain.number, title: plain.title, status: plain.status, scheduledDate: plain.scheduledDate },
     customer: { name: plain.customer.name, contactName: plain.customer.contactName, email: plain.customer.email },
@@ -152,14 +161,18 @@ export async function buildReportData(companyId: string, jobId: string, { images
     /** Images of the job not tied to one repair. */
     jobImages: loaded.filter((image) => !placed.has(image)),
     allApproved: repairs.length > 0 && repairs.every((r) => r.install !== null),
-    cautions: SAFETY_REMINDERS.filter((r) => (REPORT_CAUTION_IDS as readonly string[]).includes(r.id)).map(({ title, text }) => ({ title, text })),
-    deferral: `${REPORT_DEFERRAL} ${SAFETY_DEFERRAL}`,
-    preparedAt: formatInZone(new Date(), zone),
+    cautions: SAFETY_REMINDERS.filter((r) => (REPORT_CAUTION_IDS as readonly string[]).includes(r.id)).map(({ id }) => ({
+      title: ts(`${id}.title`),
+      text: ts(`${id}.text`),
+    })),
+    deferral: `${t('deferral')} ${ts('deferral')}`,
+    preparedAt: formatDateTimeIn(new Date(), zone, locale),
   };
 }
 
 /** What was installed and when, from the install row and its evidence log. */
-function installSummary(install: Install, system: UnitSystem, when: (at: Date | null) => string | null) {
+function installSummary(install: Install, system: UnitSystem, when: (at: Date | null) => string | null, locale: Locale, zone: string) {
+  const units = { locale };
   const row = install as Install & { resinSystem: ResinSystem | null; resinKit: ResinKit | null; packer: Packer | null; events: InstallEvent[] };
   const state = deriveInstallState(row.events.map((e) => e.get({ plain: true })));
   const { plan } = installClock({
@@ -174,15 +187,15 @@ function installSummary(install: Install, system: UnitSystem, when: (at: Date | 
   const mixTempC = state.conditions?.mixTempC ?? row.mixTempC;
   const makerHold = plan?.holdSource === 'maker' && plan.makerHoldMin ? formatDuration(plan.makerHoldMin * 60) : null;
   const pipeTempC = state.conditions?.pipeTempC ?? row.pipeTempC;
-  const timeline = timelineOf(state, plan && !plan.preview ? plan : null);
+  const timeline = timelineOf(state, plan && !plan.preview ? plan : null, locale);
   return {
     resinSystem: row.resinSystem?.name ?? null,
     kitLot: row.resinKit?.lot ?? null,
-    mixTemperature: mixTempC == null ? null : formatTemperature(mixTempC, system),
-    pipeTemperature: pipeTempC == null ? null : formatTemperature(pipeTempC, system),
-    inflatePressure: state.inflatePressureKpa == null ? null : formatPressure(state.inflatePressureKpa, system),
+    mixTemperature: mixTempC == null ? null : formatTemperature(mixTempC, system, units),
+    pipeTemperature: pipeTempC == null ? null : formatTemperature(pipeTempC, system, units),
+    inflatePressure: state.inflatePressureKpa == null ? null : formatPressure(state.inflatePressureKpa, system, units),
     inspection: state.inspection ?? (row.inspectionResult ? { result: row.inspectionResult, notes: row.inspectionNotes, at: null } : null),
-    steps: timeline.marks.map((mark) => ({ label: mark.label, at: when(mark.at) })),
+    steps: timeline.marks.map((mark) => ({ label: mark.label, at: when(mark.at), time: formatInZone(mark.at, zone, 'HH:mm zzz') })),
     returnToService: when(plan?.returnToService ?? null),
     /** Set when the pipe was outside the resin's rated range and the hold followed the resin maker's sheet. */
     makerHold,
@@ -191,33 +204,28 @@ function installSummary(install: Install, system: UnitSystem, when: (at: Date | 
   };
 }
 
-const STEP_LABELS: [keyof InstallState, string][] = [
-  ['mixedAt', 'Resin mixed'],
-  ['patchLoadedAt', 'Patch loaded'],
-  ['inPositionAt', 'Packer in position'],
-  ['inflatedAt', 'Bladder inflated'],
-  ['deflatedAt', 'Bladder deflated'],
-];
+const STEP_KEYS = ['mixedAt', 'patchLoadedAt', 'inPositionAt', 'inflatedAt', 'deflatedAt'] as const satisfies readonly (keyof InstallState)[];
 
-function timelineOf(state: InstallState, plan: { inflateBy: Date; deflateAfter?: Date; returnToService?: Date } | null) {
+function timelineOf(state: InstallState, plan: { inflateBy: Date; deflateAfter?: Date; returnToService?: Date } | null, locale: Locale) {
+  const t = translatorFor(locale, 'report');
   const marks: TimelineMark[] = [];
-  for (const [key, text] of STEP_LABELS) {
+  for (const key of STEP_KEYS) {
     const at = state[key];
-    if (at instanceof Date) marks.push({ id: String(key), label: text, at });
+    if (at instanceof Date) marks.push({ id: key, label: t(`steps.${key}`), at });
   }
-  if (state.inspection) marks.push({ id: 'inspection', label: 'Inspected', at: state.inspection.at });
+  if (state.inspection) marks.push({ id: 'inspection', label: t('steps.inspection'), at: state.inspection.at });
   const bands: TimelineBand[] = [];
-  if (state.mixedAt && plan) bands.push({ id: 'window', label: 'Working window', from: state.mixedAt, to: plan.inflateBy });
+  if (state.mixedAt && plan) bands.push({ id: 'window', label: t('bands.window'), from: state.mixedAt, to: plan.inflateBy });
   if (state.inflatedAt) {
-    bands.push({ id: 'held', label: 'Bladder held', from: state.inflatedAt, to: state.deflatedAt ?? state.inflatedAt });
-    if (plan?.returnToService) bands.push({ id: 'cure', label: 'Full cure', from: state.inflatedAt, to: plan.returnToService });
+    bands.push({ id: 'held', label: t('bands.held'), from: state.inflatedAt, to: state.deflatedAt ?? state.inflatedAt });
+    if (plan?.returnToService) bands.push({ id: 'cure', label: t('bands.cure'), from: state.inflatedAt, to: plan.returnToService });
   }
   return { marks, bands };
 }
 
 type JobRow = {
   id: string; number: string; title: string | null; status: string; scheduledDate: string | null;
-  customer: { name: string; contactName: string | null; email: string | null };
+  customer: { name: string; contactName: string | null; email: string | null; language?: string };
   site: { name: string; addressLine: string; city: string; region: string | null; postalCode: string | null };
   repairs: {
     id: string; position: number; distanceMm: number; defectType: string; conditionGrade: number; defectLengthMm: number;

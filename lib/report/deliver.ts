@@ -40,7 +40,7 @@ export async function deliverReportSend(sendId: string, attempt: Attempt): Promi
       return 'skipped';
     }
     const url = reportLinkUrl(signReportLink({ linkId: link.id, jobId: send.jobId, companyId: send.companyId, expiresAt: link.expiresAt }));
-    const mail = reportEmail(data, { link: url, expiresOn: formatInZone(link.expiresAt, data.company.timeZone, 'd MMMM yyyy'), message: send.message });
+    const mail = reportEmail(data, { link: url, expiresOn: formatInZone(link.expiresAt, data.company.timeZone, data.locale === 'es' ? "d 'de' MMMM 'de' yyyy" : 'd MMMM yyyy', data.locale), message: send.message });
     const pdf = await cachedReportPdf(send.companyId, send.jobId, { data });
     const info = await transport().sendMail({
       from: env().MAIL_FROM || `"${data.company.name.replace(/["\\]/g, '')}" <reports@setline.localhost>`,

@@ -1,21 +1,27 @@
+import { translatorFor } from '@/i18n/translator';
+import { formatDay } from '@/lib/dates';
 import type { ReportData } from './data';
 
 // The e-mail that carries the report: plain, inline-styled HTML (mail clients drop <style>) and a
-// text part saying the same. The PDF is attached by the sender; the link opens the web copy.
+// text part saying the same, in the customer's language. The PDF is attached by the sender; the link opens the web copy.
 
 export type ReportEmail = { subject: string; html: string; text: string };
 
 export function reportEmail(data: ReportData, options: { link: string; expiresOn: string; message?: string | null }): ReportEmail {
   const { company, job, site } = data;
-  const subject = `Repair report for ${site.address} (job ${job.number})`;
-  const count = data.repairs.length === 1 ? 'one repair' : `${data.repairs.length} repairs`;
-  const lines = data.repairs.map(
-    (r) => `Repair ${r.position}: ${r.defect.toLowerCase()} ${r.distance} from ${r.accessPoint}${r.patchLength ? `, ${r.patchLength} patch` : ''}${r.install?.inspection ? ` (inspection: ${r.install.inspection.result === 'pass' ? 'passed' : 'did not pass'})` : ''}`,
-  );
-  const greeting = `Hello ${data.customer.contactName ?? data.customer.name},`;
-  const intro = `${company.name} has finished the work at ${site.address}: ${count}. The full report is attached as a PDF.`;
-  const linkLine = `You can also read it online until ${options.expiresOn}:`;
-  const closing = `If you have questions about the work, reply to this e-mail or contact ${company.name}.`;
+  const t = translatorFor(data.locale, 'report');
+  const subject = t('subject', { address: site.address, number: job.number });
+  const count = data.repairs.length === 1 ? t('oneRepair') : t('repairs', { count: data.repairs.length });
+  const lines = data.repairs.map((r) => {
+    const where = t('emailRepair', { position: r.position, defect: r.defect.toLowerCase(), distance: r.distance, accessPoint: r.accessPoint });
+    const patch = r.patchLength ? t('emailPatch', { length: r.patchLength }) : '';
+    const result = r.install?.inspection?.result === 'pass' ? t('passedLower') : t('notPassedLower');
+    return `${where}${patch}${r.install?.inspection ? t('emailInspection', { result }) : ''}`;
+  });
+  const greeting = t('greeting', { name: data.customer.contactName ?? data.customer.name });
+  const intro = t('intro', { company: company.name, address: site.address, count });
+  const linkLine = t('linkLine', { date: formatDay(options.expiresOn, data.locale) });
+  const closing = t('closing', { company: company.name });
 
   const text = [
     greeting, '', intro, '', ...(options.message ? [options.message, ''] : []), ...lines, '', linkLine, options.link, '', data.deferral, '', closing,
@@ -30,7 +36,7 @@ ${p(escapeHtml(intro))}
 ${options.message ? p(escapeHtml(options.message).replace(/\n/g, '<br>'), 'padding:8px 12px;border-left:3px solid #115e59;background:#f1f5f9') : ''}
 <ul style="margin:0 0 12px;padding-left:20px">${lines.map((line) => `<li>${escapeHtml(line)}</li>`).join('')}</ul>
 ${p(escapeHtml(linkLine))}
-${p(`<a href="${escapeHtml(options.link)}" style="display:inline-block;background:#115e59;color:#ffffff;text-decoration:none;padding:10px 16px;border-radius:4px">Open the repair report</a>`)}
+${p(`<a href="${escapeHtml(options.link)}" style="display:inline-block;background:#115e59;color:#ffffff;text-decoration:none;padding:10px 16px;border-radius:4px">${escapeHtml(t('open'))}</a>`)}
 ${p(escapeHtml(data.deferral), 'font-size:13px;color:#475569')}
 ${p(escapeHtml(closing), 'font-size:13px;color:#475569')}
 </div></body></html>`;

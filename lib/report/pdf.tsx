@@ -1,6 +1,7 @@
 import 'server-only';
 import { Document, Font, Image, Line, Page, Rect, StyleSheet, Svg, Text, View, renderToBuffer } from '@react-pdf/renderer';
-import { formatInZone } from '@/lib/dates';
+import { translatorFor } from '@/i18n/translator';
+import { formatDay, formatInZone } from '@/lib/dates';
 import type { ReportData, ReportRepair } from './data';
 import type { ReportImage } from './images';
 import { timelineLayout } from './timeline';
@@ -37,72 +38,88 @@ const s = StyleSheet.create({
   footer: { position: 'absolute', bottom: 18, left: 36, right: 36, fontSize: 7.5, color: MUTED, flexDirection: 'row', justifyContent: 'space-between' },
 });
 
+type ReportWords = ReturnType<typeof translatorFor<'report'>>;
+
 function ReportDocument({ data }: { data: ReportData }) {
   const t = pdfText;
+  const w = translatorFor(data.locale, 'report');
   return (
-    <Document title={t(`Repair report ${data.job.number}`)} author={t(data.company.name)} creator="Setline" producer="Setline">
+    <Document title={t(w('docTitle', { number: data.job.number }))} author={t(data.company.name)} creator="Setline" producer="Setline" language={data.locale}>
       <Page size="A4" style={s.page}>
         <View style={s.header}>
           <Text style={s.company}>{t(data.company.name)}</Text>
-          <Text style={s.title}>Repair report · Job {t(data.job.number)}</Text>
+          <Text style={s.title}>{t(w('title', { number: data.job.number }))}</Text>
           {data.job.title ? <Text style={s.muted}>{t(data.job.title)}</Text> : null}
         </View>
         <View style={s.grid}>
-          <Field name="Customer" value={data.customer.name} />
-          <Field name="Site" value={`${data.site.name} — ${data.site.address}`} />
-          <Field name="Work date" value={data.job.scheduledDate ?? '—'} />
-          <Field name="Report prepared" value={data.preparedAt} />
+          <Field name={w('customer')} value={data.customer.name} />
+          <Field name={w('site')} value={`${data.site.name} — ${data.site.address}`} />
+          <Field name={w('workDate')} value={data.job.scheduledDate ? formatDay(data.job.scheduledDate, data.locale) : '—'} />
+          <Field name={w('prepared')} value={data.preparedAt} />
         </View>
 
-        <Text style={s.h2}>Repairs ({data.repairs.length})</Text>
-        {data.repairs.map((repair) => <RepairBlock key={repair.id} repair={repair} data={data} />)}
+        <Text style={s.h2}>{t(w('repairsHeading', { count: data.repairs.length }))}</Text>
+        {data.repairs.map((repair) => <RepairBlock key={repair.id} repair={repair} data={data} w={w} />)}
         {data.jobImages.length > 0 ? (
           <View wrap={false}>
-            <Text style={s.h2}>Images</Text>
-            <Images images={data.jobImages} />
+            <Text style={s.h2}>{t(w('images'))}</Text>
+            <Images images={data.jobImages} w={w} />
           </View>
         ) : null}
 
         <View wrap={false}>
-          <Text style={s.h2}>Cautions</Text>
+          <Text style={s.h2}>{t(w('cautions'))}</Text>
           {data.cautions.map((c) => (
             <Text key={c.title} style={s.caution}><Text style={{ fontFamily: 'Helvetica-Bold' }}>{t(c.title)}. </Text>{t(c.text)}</Text>
           ))}
           <Text style={[s.caution, s.muted]}>{t(data.deferral)}</Text>
         </View>
         <View style={s.footer} fixed>
-          <Text>{t(`${data.company.name} · Job ${data.job.number}`)}</Text>
-          <Text render={({ pageNumber, totalPages }) => `Page ${pageNumber} of ${totalPages}`} />
+          <Text>{t(w('footer', { company: data.company.name, number: data.job.number }))}</Text>
+          <Text render={({ pageNumber, totalPages }) => t(w('page', { page: pageNumber, total: totalPages }))} />
         </View>
       </Page>
     </Document>
   );
 }
 
-function RepairBlock({ repair, data }: { repair: ReportRepair; data: ReportData }) {
+function RepairBlock({ repair, data, w }: { repair: ReportRepair; data: ReportData; w: ReportWords }) {
   const t = pdfText;
   const install = repair.install;
   return (
     <View style={s.repair} wrap={false}>
-      <Text style={s.h3}>Repair {repair.position}: {t(repair.defect)} ({t(repair.defectLength)}, grade {repair.conditionGrade})</Text>
+      <Text style={s.h3}>
+        {t(w('repairHeading', { position: repair.position, defect: repair.defect, length: repair.defectLength, grade: repair.conditionGrade }))}
+      </Text>
       <View style={s.grid}>
-        <Field name="Where" value={`Segment ${repair.segment.label}, ${repair.distance} from ${repair.accessPoint}${repair.clockPosition ? `, at ${repair.clockPosition}` : ''}`} />
-        <Field name="Pipe" value={`${repair.segment.material}, ${repair.segment.insideDiameter} inside diameter`} />
-        <Field name="Patch length" value={repair.patchLength ?? '—'} />
-        <Field name="Resin" value={install ? `${install.resinSystem ?? '—'}, kit lot ${install.kitLot ?? '—'}` : '—'} />
-        {install ? <Field name="Conditions" value={`Mixed at ${install.mixTemperature ?? '—'}, pipe ${install.pipeTemperature ?? '—'}${install.inflatePressure ? `, inflated to ${install.inflatePressure}` : ''}`} /> : null}
-        {install ? <Field name="Inspection" value={install.inspection ? `${install.inspection.result === 'pass' ? 'Passed' : 'Did not pass'}${install.inspection.notes ? ` — ${install.inspection.notes}` : ''}` : 'Not recorded'} /> : null}
-        {install?.returnToService ? <Field name="Line back in service after" value={install.returnToService} /> : null}
-        {install?.makerHold ? <Field name="Hold time" value={`${install.makerHold}, from the resin maker's sheet: the pipe was outside the resin's rated temperature range`} /> : null}
+        <Field
+          name={w('where')}
+          value={`${w('whereText', { segment: repair.segment.label, distance: repair.distance, accessPoint: repair.accessPoint })}${repair.clockPosition ? w('atClock', { clock: repair.clockPosition }) : ''}`}
+        />
+        <Field name={w('pipe')} value={w('pipeText', { material: repair.segment.material, diameter: repair.segment.insideDiameter })} />
+        <Field name={w('patchLength')} value={repair.patchLength ?? '—'} />
+        <Field name={w('resin')} value={install ? w('resinText', { resin: install.resinSystem ?? '—', lot: install.kitLot ?? '—' }) : '—'} />
+        {install ? (
+          <Field
+            name={w('conditions')}
+            value={`${w('conditionsText', { mix: install.mixTemperature ?? '—', pipe: install.pipeTemperature ?? '—' })}${install.inflatePressure ? w('inflatedTo', { pressure: install.inflatePressure }) : ''}`}
+          />
+        ) : null}
+        {install ? (
+          <Field
+            name={w('inspection')}
+            value={install.inspection ? `${install.inspection.result === 'pass' ? w('passed') : w('notPassed')}${install.inspection.notes ? ` — ${install.inspection.notes}` : ''}` : w('notRecorded')}
+          />
+        ) : null}
+        {install?.returnToService ? <Field name={w('backInService')} value={install.returnToService} /> : null}
+        {install?.makerHold ? <Field name={w('holdTime')} value={w('makerHold', { hold: install.makerHold })} /> : null}
         {repair.earlierAttempts.length > 0 ? (
-          <Field name="Earlier attempts" value={repair.earlierAttempts.map((a) => `started ${a.started ?? '—'}, ${a.outcome}, redone`).join('; ')} />
+          <Field name={w('earlier')} value={repair.earlierAttempts.map((a) => w('earlierText', { started: a.started ?? '—', outcome: a.outcome })).join('; ')} />
         ) : null}
       </View>
-      {install && install.timeline.marks.length > 0 ? <TimelineChart timeline={install.timeline} zone={data.company.timeZone} /> : null}
-      {install ? (
-        <Text style={[s.muted, { marginTop: 4 }]}>{t(install.steps.map((step) => `${step.label} ${step.at?.slice(11) ?? ''}`).join(' · '))}</Text>
-      ) : null}
-      {repair.images.length > 0 ? <Images images={repair.images} /> : null}
+      {install && install.timeline.marks.length > 0 ? <TimelineChart timeline={install.timeline} zone={data.company.timeZone} w={w} /> : null}
+      {install ? <Text style={[s.muted, { marginTop: 4 }]}>{t(install.steps.map((step) => `${step.label} ${step.time}`).join(' · '))}</Text> : null}
+      {repair.images.length > 0 ? <Images images={repair.images} w={w} /> : null}
     </View>
   );
 }
@@ -110,12 +127,12 @@ function RepairBlock({ repair, data }: { repair: ReportRepair; data: ReportData 
 const CHART_WIDTH = 515;
 const BAND_COLOURS: Record<string, string> = { window: '#f59e0b', held: BRAND, cure: '#16a34a' };
 
-function TimelineChart({ timeline, zone }: { timeline: NonNullable<ReportRepair['install']>['timeline']; zone: string }) {
+function TimelineChart({ timeline, zone, w }: { timeline: NonNullable<ReportRepair['install']>['timeline']; zone: string; w: ReportWords }) {
   const g = timelineLayout(timeline.marks, timeline.bands, { width: CHART_WIDTH, charWidth: 3.6 });
   const height = g.height + 4;
   return (
     <View style={{ marginTop: 6 }}>
-      <Text style={s.label}>Install timeline ({pdfText(zone)})</Text>
+      <Text style={s.label}>{pdfText(w('timeline', { zone }))}</Text>
       <Svg width={CHART_WIDTH} height={height} viewBox={`0 0 ${CHART_WIDTH} ${height}`}>
         <Line x1={g.left} y1={g.axisY} x2={g.right} y2={g.axisY} stroke="#94a3b8" strokeWidth={1} />
         {g.ticks.map((tick) => (
@@ -141,14 +158,14 @@ function TimelineChart({ timeline, zone }: { timeline: NonNullable<ReportRepair[
   );
 }
 
-function Images({ images }: { images: ReportImage[] }) {
+function Images({ images, w }: { images: ReportImage[]; w: ReportWords }) {
   return (
     <View style={s.images}>
       {images.map((image) => (
         <View key={image.id} style={s.image}>
           {/* eslint-disable-next-line jsx-a11y/alt-text -- a PDF image, not an HTML one: react-pdf has no alt */}
           <Image src={{ data: image.data, format: image.format }} style={{ width: 160, maxHeight: 120, objectFit: 'contain' }} />
-          <Text style={[s.muted, { fontSize: 7.5 }]}>{pdfText(`${image.kind === 'before' ? 'Before' : image.kind === 'after' ? 'After' : 'Inspection'}${image.caption ? `: ${image.caption}` : ''}`)}</Text>
+          <Text style={[s.muted, { fontSize: 7.5 }]}>{pdfText(`${image.kind === 'before' ? w('before') : image.kind === 'after' ? w('after') : w('inspectionImage')}${image.caption ? `: ${image.caption}` : ''}`)}</Text>
         </View>
       ))}
     </View>

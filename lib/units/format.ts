@@ -13,13 +13,22 @@ import {
 export interface FormatOptions {
   /** Digits after the decimal point; each quantity has a default suited to a crew's reading. */
   decimals?: number;
+  /** BCP 47 language ('en', 'es'): the decimal sign and grouping of that language (Intl). Default: "1234.5". */
+  locale?: string;
 }
 
-/** A number with fixed decimals, never "-0" (a rounded −0.001 is just zero on a report). */
-export function formatNumber(value: number, decimals: number): string {
+/**
+ * A number with fixed decimals, never "-0" (a rounded −0.001 is just zero on a report). With a locale, written
+ * the way that language writes numbers (Spanish: "12,5", "12.345,0"); without one, plain "12345.0".
+ */
+export function formatNumber(value: number, decimals: number, locale?: string): string {
   requireFinite(value, 'value');
   const digits = Math.min(10, Math.max(0, Math.trunc(requireFinite(decimals, 'decimals'))));
   const text = value.toFixed(digits);
+  const rounded = Number(text) === 0 ? 0 : Number(text);
+  if (locale && locale !== 'en') {
+    return new Intl.NumberFormat(locale, { minimumFractionDigits: digits, maximumFractionDigits: digits }).format(rounded);
+  }
   return Number(text) === 0 ? (0).toFixed(digits) : text;
 }
 
@@ -32,23 +41,23 @@ export function formatLength(mm: number, system: UnitSystem, kind: LengthKind = 
   const value = lengthFromSi(mm, system, kind);
   const labels = unitLabels(system);
   const unit = kind === 'short' ? labels.shortLength : labels.longLength;
-  return `${formatNumber(value, options.decimals ?? LENGTH_DECIMALS[unit])} ${unit}`;
+  return `${formatNumber(value, options.decimals ?? LENGTH_DECIMALS[unit], options.locale)} ${unit}`;
 }
 
 export function formatPressure(kPa: number, system: UnitSystem, options: FormatOptions = {}): string {
   const unit = unitLabels(system).pressure;
-  return `${formatNumber(pressureFromSi(kPa, system), options.decimals ?? (unit === 'psi' ? 1 : 0))} ${unit}`;
+  return `${formatNumber(pressureFromSi(kPa, system), options.decimals ?? (unit === 'psi' ? 1 : 0), options.locale)} ${unit}`;
 }
 
 export function formatTemperature(celsius: number, system: UnitSystem, options: FormatOptions = {}): string {
-  return `${formatNumber(temperatureFromSi(celsius, system), options.decimals ?? 0)} ${unitLabels(system).temperature}`;
+  return `${formatNumber(temperatureFromSi(celsius, system), options.decimals ?? 0, options.locale)} ${unitLabels(system).temperature}`;
 }
 
 export function formatVolume(litres: number, system: UnitSystem, options: FormatOptions = {}): string {
-  return `${formatNumber(volumeFromSi(litres, system), options.decimals ?? 2)} ${unitLabels(system).volume}`;
+  return `${formatNumber(volumeFromSi(litres, system), options.decimals ?? 2, options.locale)} ${unitLabels(system).volume}`;
 }
 
 export function formatForce(newtons: number, system: UnitSystem, options: FormatOptions = {}): string {
   const unit = unitLabels(system).force;
-  return `${formatNumber(forceFromSi(newtons, system), options.decimals ?? (unit === 'kN' ? 1 : 0))} ${unit}`;
+  return `${formatNumber(forceFromSi(newtons, system), options.decimals ?? (unit === 'kN' ? 1 : 0), options.locale)} ${unit}`;
 }

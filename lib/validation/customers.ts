@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { LOCALES } from '@/i18n/locales';
 import { CUSTOMER_KINDS } from '@/lib/domain';
 import { optionalText } from './common';
 import { listQuerySchema } from './list';
@@ -18,10 +19,15 @@ const customerFields = {
   phone: optionalText(40),
   billingAddress: optionalText(500),
   notes: optionalText(2000),
+  language: z.enum(LOCALES, { error: 'Pick English or Spanish' }),
 };
 
 /** A customer as the office enters it; the form and POST /api/customers use this same schema. */
-export const customerInputSchema = z.object({ ...customerFields, kind: customerFields.kind.default('homeowner') });
+export const customerInputSchema = z.object({
+  ...customerFields,
+  kind: customerFields.kind.default('homeowner'),
+  language: customerFields.language.default('en'),
+});
 export type CustomerInput = z.input<typeof customerInputSchema>;
 
 export const customerPatchSchema = z.object(customerFields).partial().strict();

@@ -90,11 +90,12 @@ function buildCompany(spec, { now, passwordHash }) {
   const C = company.id;
   const t = {};
   t.companies = [company];
-  t.users = spec.users.map((u) => row(C, { ...u, password_hash: passwordHash, active: true, token_version: 0 }, now));
+  t.users = spec.users.map((u) => row(C, { locale: null, ...u, password_hash: passwordHash, active: true, token_version: 0 }, now));
   const userByEmail = Object.fromEntries(t.users.map((u) => [u.email, u]));
   t.crews = spec.crews.map((c) => row(C, { name: c.name, daily_capacity: c.daily_capacity }, now));
   t.crew_members = spec.crews.flatMap((c, i) => c.members.map((email) => row(C, { crew_id: t.crews[i].id, user_id: userByEmail[email].id }, now)));
-  t.customers = spec.customers.map((c) => row(C, c, now));
+  // Every row names its language: bulkInsert would send NULL, not the column default, for a missing key.
+  t.customers = spec.customers.map((c) => row(C, { language: 'en', ...c }, now));
   t.sites = [];
   t.access_points = [];
   t.segments = [];

@@ -40,18 +40,20 @@ module.exports = {
     { email: 'office@demo.test', name: 'Priya Okafor-Hale', role: 'office' },
     { email: 'foreman@demo.test', name: 'Mateo Varga', role: 'foreman' },
     { email: 'tech@demo.test', name: 'Jun Castellanos', role: 'technician' },
+    // Reads the field screens in Spanish (users.locale), whatever the tablet's browser says.
+    { email: 'tecnico@demo.test', name: 'Inés Barragán Soto', role: 'technician', locale: 'es' },
     { email: 'foreman2@demo.test', name: 'Rosa Delacroix-Finn', role: 'foreman' },
     { email: 'tech2@demo.test', name: 'Elliot Marsh', role: 'technician' },
   ],
   crews: [
-    { name: 'North crew', daily_capacity: 4, members: ['foreman@demo.test', 'tech@demo.test'] },
+    { name: 'North crew', daily_capacity: 4, members: ['foreman@demo.test', 'tech@demo.test', 'tecnico@demo.test'] },
     { name: 'South crew', daily_capacity: 3, members: ['foreman2@demo.test', 'tech2@demo.test'] },
   ],
   customers: [
     { name: 'Larkspur Court Homeowners Association', kind: 'property_manager', contact_name: 'Dana Whitlock', email: 'board@larkspur-court.example', phone: '555-0141' },
     { name: 'Town of Fennick Falls, Public Works', kind: 'municipality', contact_name: 'Hector Ibarra', email: 'publicworks@fennickfalls.example', phone: '555-0102' },
     { name: 'Odalys Brennan', kind: 'homeowner', email: 'odalys.brennan@mail.example', phone: '555-0177' },
-    { name: 'Quarry Row Apartments', kind: 'property_manager', contact_name: 'Simone Achterberg', email: 'maintenance@quarryrow.example', phone: '555-0123' },
+    { name: 'Quarry Row Apartments', kind: 'property_manager', contact_name: 'Simone Achterberg', email: 'maintenance@quarryrow.example', phone: '555-0123', language: 'es' },
     { name: 'Pikeworth Plumbing', kind: 'contractor', contact_name: 'Gus Pikeworth', email: 'office@pikeworth.example', phone: '555-0164' },
     { name: 'Mill Street Bakery', kind: 'business', contact_name: 'Noor Haddad', email: 'noor@millstreetbakery.example', phone: '555-0188' },
   ],

@@ -100,6 +100,10 @@ export const API: Record<string, Row> = {
 
   // The office's figures: another company's office reads its own company's (no row of ours is named).
   'GET /api/insights': { expect: deskCollection(200), url: '/api/insights?from=2026-01-05&to=2026-03-01' },
+  // The caller's own profile (language setting): every signed-in user, each only their own row.
+  'GET /api/profile': { expect: signedIn(200) },
+  'PATCH /api/profile': { expect: signedIn(400) },
+
   'GET /api/installs': { expect: signedIn(200) },
   'POST /api/installs': { expect: signedIn(400) },
   'GET /api/installs/[id]': { expect: crewInstall(200) },
@@ -198,6 +202,7 @@ export const PAGES: Record<string, Row> = {
   '/': { expect: { admin: '→/admin', office: '→/jobs', foreman: '→/today', tech: '→/today', tech2: '→/today', foreign: '→/jobs', none: SIGN_IN } },
   '/sign-in': { expect: all(200) },
   '/forbidden': { expect: all(200) },
+  '/profile': { expect: { ...all(200), none: SIGN_IN } },
   '/r/[token]': { expect: all(404) },
   // The payment provider's way back: without our cookie for that link, a plain page that names nothing.
   '/r/back/[linkId]': { expect: all(200), url: '/r/back/00000000-0000-4000-8000-000000000000' },

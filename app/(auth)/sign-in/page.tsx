@@ -1,12 +1,17 @@
 import type { Metadata } from 'next';
+import { getTranslations } from 'next-intl/server';
 import { Suspense } from 'react';
+import { IntlScope } from '@/components/shell/intl-scope';
 import { Logo } from '@/components/shell/logo';
 import { siteConfig } from '@/config/site';
 import { SignInForm } from './sign-in-form';
 
-export const metadata: Metadata = { title: 'Sign in' };
+export async function generateMetadata(): Promise<Metadata> {
+  return { title: (await getTranslations('signIn'))('metaTitle') };
+}
 
-export default function Page() {
+export default async function Page() {
+  const t = await getTranslations('signIn');
   return (
     <main className="flex min-h-screen items-center justify-center bg-slate-900 p-4">
       <div className="w-full max-w-md rounded-xl bg-white p-8 shadow-xl">
@@ -14,12 +19,14 @@ export default function Page() {
           <Logo className="h-10 w-10" />
           <div>
             <h1 className="text-2xl font-bold text-slate-900">{siteConfig.name}</h1>
-            <p className="text-sm text-slate-600">Sign in to your company&apos;s jobs</p>
+            <p className="text-sm text-slate-600">{t('subtitle')}</p>
           </div>
         </div>
-        <Suspense>
-          <SignInForm />
-        </Suspense>
+        <IntlScope namespaces={['signIn']}>
+          <Suspense>
+            <SignInForm />
+          </Suspense>
+        </IntlScope>
       </div>
     </main>
   );

@@ -1,23 +1,23 @@
 'use client';
 
 import { useRouter, useSearchParams } from 'next/navigation';
+import { useTranslations } from 'next-intl';
 import { useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { safeCallbackPath } from '@/lib/auth/callback-url';
 import { signInWithPassword } from '@/lib/client/sign-in';
 import { checkSignIn, type SignInFields } from '@/lib/validation/sign-in-check';
 
-// One message for every failure, so the form never tells whether an e-mail has an account.
-const BAD_CREDENTIALS = 'That e-mail and password do not match an active account.';
-
-function failureMessage(result: { status: number; message?: string } | null): string {
-  if (result?.status === 401) return BAD_CREDENTIALS;
+// One message for every failure (badCredentials), so the form never tells whether an e-mail has an account.
+function failureMessage(result: { status: number; message?: string } | null, t: (key: 'badCredentials' | 'failed') => string): string {
+  if (result?.status === 401) return t('badCredentials');
   // 429: the server's "Too many attempts — try again in N minutes."
   if (result?.status === 429 && result.message) return result.message;
-  return 'Sign-in failed. Check your connection and try again.';
+  return t('failed');
 }
 
 export function SignInForm() {
+  const t = useTranslations('signIn');
   const router = useRouter();
   const params = useSearchParams();
   const [failure, setFailure] = useState<string | null>(null);
@@ -51,7 +51,7 @@ export function SignInForm() {
     const result = await signInWithPassword(check.values.email, check.values.password, next).catch(() => null);
     setSubmitting(false);
     if (!result || !result.ok) {
-      setFailure(failureMessage(result));
+      setFailure(failureMessage(result, t));
       return;
     }
     router.replace(next);
@@ -61,7 +61,7 @@ export function SignInForm() {
   return (
     <form onSubmit={(event) => void onSubmit(event)} noValidate className="space-y-5">
       <div>
-        <label htmlFor="email" className="block text-base font-medium">E-mail</label>
+        <label htmlFor="email" className="block text-base font-medium">{t('email')}</label>
         <input
           id="email"
           type="email"
@@ -76,7 +76,7 @@ export function SignInForm() {
         {errors.email && <p id="email-error" className="mt-1 text-sm text-missed-700">{errors.email}</p>}
       </div>
       <div>
-        <label htmlFor="password" className="block text-base font-medium">Password</label>
+        <label htmlFor="password" className="block text-base font-medium">{t('password')}</label>
         <input
           id="password"
           type="password"
@@ -93,7 +93,7 @@ export function SignInForm() {
         {failure && <p className="rounded-md bg-missed-100 px-3 py-2 text-base text-missed-700">{failure}</p>}
       </div>
       <Button type="submit" size="field" className="w-full" disabled={isSubmitting}>
-        {isSubmitting ? 'Signing in…' : 'Sign in'}
+        {isSubmitting ? t('submitting') : t('submit')}
       </Button>
     </form>
   );

@@ -2,6 +2,7 @@
 
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useRouter } from 'next/navigation';
+import { useTranslations } from 'next-intl';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
@@ -10,6 +11,7 @@ import { FormField, errorProps } from '@/components/desk/form-field';
 import { Input as TextInput, Select, Textarea } from '@/components/ui/input';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
+import { LOCALES } from '@/i18n/locales';
 import { CUSTOMER_KINDS, label } from '@/lib/domain';
 import { customerInputSchema } from '@/lib/validation/customers';
 import { cardClass } from '@/components/ui/card';
@@ -20,12 +22,14 @@ type Output = z.output<typeof customerInputSchema>;
 
 /** New or edit: the same zod schema as POST/PATCH /api/customers checks it here first, then the server again. */
 export function CustomerForm({ customer }: { customer?: Input & { id: string } }) {
+  const t = useTranslations('customers');
+  const tc = useTranslations('common');
   const router = useRouter();
   const closeEdit = useCloseEditSection();
   const [message, setMessage] = useState<string>();
   const { register, handleSubmit, setError, formState: { errors, isSubmitting } } = useForm<Input, unknown, Output>({
     resolver: zodResolver(customerInputSchema),
-    defaultValues: customer ?? { name: '', kind: 'homeowner' },
+    defaultValues: customer ?? { name: '', kind: 'homeowner', language: 'en' },
   });
 
   const onSubmit = handleSubmit(async (values) => {
@@ -54,6 +58,11 @@ export function CustomerForm({ customer }: { customer?: Input & { id: string } }
       <FormField id="email" label="E-mail (repair reports go here)" error={errors.email?.message}>
         <TextInput type="email" {...register('email')} {...errorProps('email', errors.email?.message)} />
       </FormField>
+      <FormField id="language" label={t('language')} error={errors.language?.message}>
+        <Select {...register('language')} {...errorProps('language', errors.language?.message)}>
+          {LOCALES.map((code) => <option key={code} value={code}>{t(`languages.${code}`)}</option>)}
+        </Select>
+      </FormField>
       <FormField id="phone" label="Phone" error={errors.phone?.message}>
         <TextInput type="tel" {...register('phone')} {...errorProps('phone', errors.phone?.message)} />
       </FormField>
@@ -67,8 +76,8 @@ export function CustomerForm({ customer }: { customer?: Input & { id: string } }
       </div>
       {message && <p role="alert" className="text-sm font-medium text-missed-700 md:col-span-2">{message}</p>}
       <div className="flex gap-2 md:col-span-2">
-        <Button type="submit" disabled={isSubmitting}>{customer ? 'Save changes' : 'Create customer'}</Button>
-        <Button type="button" variant="secondary" onClick={() => (closeEdit ? closeEdit() : router.back())}>Cancel</Button>
+        <Button type="submit" disabled={isSubmitting}>{customer ? tc('saveChanges') : 'Create customer'}</Button>
+        <Button type="button" variant="secondary" onClick={() => (closeEdit ? closeEdit() : router.back())}>{tc('cancel')}</Button>
       </div>
     </form>
   );

@@ -1,6 +1,7 @@
 'use client';
 
 import { useRouter } from 'next/navigation';
+import { useTranslations } from 'next-intl';
 import { useState } from 'react';
 import { buttonVariants } from '@/components/ui/button';
 import { fetchJson } from '@/lib/client/fetch-json';
@@ -8,6 +9,7 @@ import { cn } from '@/lib/ui/cn';
 
 /** Creates the install with an id made here, so a retried tap finds the same install. */
 export function StartInstallButton({ repairId, label }: { repairId: string; label: string }) {
+  const t = useTranslations('today');
   const router = useRouter();
   const [pending, setPending] = useState(false);
   const [error, setError] = useState<string | null>(null);
@@ -25,14 +27,14 @@ export function StartInstallButton({ repairId, label }: { repairId: string; labe
             await fetchJson('/api/installs', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ id, repairId }) });
             router.push(`/installs/${id}`);
           } catch (e) {
-            setError(e instanceof Error ? e.message : 'Could not start the install.');
+            setError(e instanceof Error ? e.message : t('startFailed'));
             setPending(false);
           }
         }}
       >
-        {pending ? 'Starting…' : label}
+        {pending ? t('starting') : label}
       </button>
-      {error && <p role="alert" className="mt-1 text-base text-missed-700">{error} Starting an install needs a signal; try again.</p>}
+      {error && <p role="alert" className="mt-1 text-base text-missed-700">{error} {t('needsSignal')}</p>}
     </div>
   );
 }

@@ -15,6 +15,7 @@ import { invoiceActionSchema, invoiceInputSchema, invoicePatchSchema } from '@/l
 import { jobInputSchema, jobPatchSchema } from '@/lib/validation/jobs';
 import { packerInputSchema, packerPatchSchema } from '@/lib/validation/packers';
 import { repairInputSchema, repairPatchSchema } from '@/lib/validation/repairs';
+import { profilePatchSchema } from '@/lib/validation/profile';
 import { sendReportSchema } from '@/lib/validation/report';
 import { resinKitInputSchema, resinKitPatchSchema } from '@/lib/validation/resin-kits';
 import { resinSystemInputSchema, resinSystemPatchSchema } from '@/lib/validation/resin-systems';
@@ -121,6 +122,7 @@ export const FUZZ_TARGETS: Record<string, FuzzTarget> = {
   'PATCH /api/checklist-templates/[id]': { schema: checklistTemplatePatchSchema, id: (w) => w.checklist.id },
   'DELETE /api/checklist-templates/[id]': { id: (w) => w.checklist.id },
   'PATCH /api/company': { schema: companyPatchSchema },
+  'PATCH /api/profile': { schema: profilePatchSchema, as: 'foreman' },
   'POST /api/crews': { schema: crewInputSchema },
   'PATCH /api/crews/[id]': { schema: crewPatchSchema, id: (w) => w.otherCrew.id },
   'DELETE /api/crews/[id]': { id: (w) => w.otherCrew.id },

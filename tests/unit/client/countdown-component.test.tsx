@@ -3,6 +3,7 @@ import { act, cleanup, render, renderHook, screen } from '@testing-library/react
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { Countdown, useNow } from '@/components/install/countdown';
 import { recordServerDate, resetServerClock } from '@/lib/client/server-clock';
+import { IntlWrapper } from '../i18n/intl';
 
 const START = new Date(Date.UTC(2026, 4, 4, 8, 0, 0));
 const at = (minutes: number) => new Date(START.getTime() + minutes * 60_000);
@@ -16,7 +17,7 @@ afterEach(() => {
 
 describe('<Countdown>', () => {
   it('shows the time left in large tabular digits, slate/brand while on time', () => {
-    render(<Countdown label="Inflate by" start={START} deadline={at(40)} now={at(9)} />);
+    render(<Countdown label="Inflate by" start={START} deadline={at(40)} now={at(9)} />, { wrapper: IntlWrapper });
     const timer = screen.getByRole('timer');
     expect(timer).toHaveTextContent('0:31:00');
     expect(timer.className).toContain('tabular-nums');
@@ -28,12 +29,12 @@ describe('<Countdown>', () => {
 
   it("shows the deadline's clock time in the company's zone on a 24-hour clock", () => {
     // 08:40 UTC is 02:40 in America/Denver in May (MDT, UTC−6: IANA tz database).
-    render(<Countdown label="Inflate by" start={START} deadline={at(40)} now={at(9)} timeZone="America/Denver" />);
+    render(<Countdown label="Inflate by" start={START} deadline={at(40)} now={at(9)} timeZone="America/Denver" />, { wrapper: IntlWrapper });
     expect(screen.getByTestId('countdown').querySelector('time')).toHaveTextContent(/^02:40$/);
   });
 
   it('turns amber when the deadline is near', () => {
-    render(<Countdown label="Inflate by" start={START} deadline={at(40)} now={at(32)} />);
+    render(<Countdown label="Inflate by" start={START} deadline={at(40)} now={at(32)} />, { wrapper: IntlWrapper });
     expect(screen.getByTestId('countdown')).toHaveAttribute('data-tone', 'near');
     expect(screen.getByTestId('countdown').className).toContain('bg-near-100');
     expect(screen.getByRole('timer')).toHaveTextContent('0:08:00');
@@ -41,7 +42,7 @@ describe('<Countdown>', () => {
   });
 
   it('turns red and counts the time over once missed, and says so politely', () => {
-    render(<Countdown label="Inflate by" start={START} deadline={at(40)} now={at(42)} />);
+    render(<Countdown label="Inflate by" start={START} deadline={at(40)} now={at(42)} />, { wrapper: IntlWrapper });
     expect(screen.getByTestId('countdown')).toHaveAttribute('data-tone', 'missed');
     expect(screen.getByTestId('countdown').className).toContain('bg-missed-100');
     expect(screen.getByRole('timer')).toHaveTextContent('+0:02:00 over');
@@ -50,7 +51,7 @@ describe('<Countdown>', () => {
   });
 
   it("shows the deadline's clock time in the zone given", () => {
-    render(<Countdown label="Deflate after" start={START} deadline={at(40)} now={at(1)} timeZone="UTC" />);
+    render(<Countdown label="Deflate after" start={START} deadline={at(40)} now={at(1)} timeZone="UTC" />, { wrapper: IntlWrapper });
     const time = screen.getByText(/08:40|8:40/);
     expect(time).toHaveAttribute('datetime', at(40).toISOString());
   });

@@ -1,5 +1,6 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
+import { getTranslations } from 'next-intl/server';
 import { ArchiveButton } from '@/components/desk/archive-button';
 import { AuditHistory } from '@/components/desk/audit-history';
 import { buttonVariants } from '@/components/ui/button';
@@ -10,6 +11,7 @@ import { DESK_ROLES, label } from '@/lib/domain';
 import { recordForPage } from '@/lib/page-record';
 import { PageHeader } from '@/components/ui/page-header';
 import { EditSection } from '@/components/desk/edit-section';
+import { IntlScope } from '@/components/shell/intl-scope';
 import { CustomerForm } from '../customer-form';
 import { cardClass } from '@/components/ui/card';
 import { cn } from '@/lib/ui/cn';
@@ -19,13 +21,14 @@ export const metadata: Metadata = { title: 'Customer' };
 export default async function Page({ params }: { params: Promise<{ id: string }> }) {
   const user = await requirePageUser(DESK_ROLES);
   const customer = await recordForPage((await params).id, (id) => getCustomer(user, id));
+  const tcu = await getTranslations('customers');
   const { timeZone } = await getCompany(user);
   return (
     <div className="space-y-6">
       <PageHeader
         back={{ href: '/customers', label: 'Customers' }}
         title={customer.name}
-        description={<>{label(customer.kind)}{customer.archivedAt ? ' · archived' : ''}</>}
+        description={<>{label(customer.kind)} · <span data-testid="customer-language">{tcu(`languages.${customer.language}`)}</span>{customer.archivedAt ? ' · archived' : ''}</>}
         actions={!customer.archivedAt && <ArchiveButton url={`/api/customers/${customer.id}`} what="customer" backTo="/customers" />}
       />
       <dl className={cn(cardClass, 'grid grid-cols-2 gap-4 text-sm md:grid-cols-4')}>
@@ -35,7 +38,11 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
         <div><dt className="text-slate-500">Billing address</dt><dd className="whitespace-pre-line font-medium">{customer.billingAddress ?? '—'}</dd></div>
         {customer.notes && <div className="col-span-full"><dt className="text-slate-500">Notes</dt><dd className="whitespace-pre-line">{customer.notes}</dd></div>}
       </dl>
-      <EditSection label="Edit customer"><CustomerForm customer={customer} /></EditSection>
+      <EditSection label="Edit customer">
+        <IntlScope namespaces={['customers']}>
+          <CustomerForm customer={customer} />
+        </IntlScope>
+      </EditSection>
       <section>
         <div className="mb-2 flex items-center justify-between">
           <h2 className="text-lg font-semibold">Sites</h2>

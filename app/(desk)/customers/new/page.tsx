@@ -1,6 +1,7 @@
 import type { Metadata } from 'next';
 import { requirePageUser } from '@/lib/auth/session';
 import { DESK_ROLES } from '@/lib/domain';
+import { IntlScope } from '@/components/shell/intl-scope';
 import { CustomerForm } from '../customer-form';
 import { PageHeader } from '@/components/ui/page-header';
 
@@ -11,7 +12,9 @@ export default async function Page() {
   return (
     <div className="space-y-4">
       <PageHeader back={{ href: '/customers', label: 'Customers' }} title="New customer" />
-      <CustomerForm />
+      <IntlScope namespaces={['customers']}>
+        <CustomerForm />
+      </IntlScope>
     </div>
   );
 }

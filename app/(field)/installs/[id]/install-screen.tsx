@@ -3,6 +3,7 @@
 import dynamic from 'next/dynamic';
 import Link from 'next/link';
 import { useRouter } from 'next/navigation';
+import { useLocale, useTranslations } from 'next-intl';
 import { useEffect, useMemo, useState } from 'react';
 import type { InstallViewResponse } from '@/app/api/installs/[id]/route';
 import { useNow } from '@/components/install/countdown';
@@ -12,7 +13,7 @@ import { requestNotificationPermission, unlockAudio } from '@/lib/client/alarm';
 import { submitJson } from '@/lib/client/submit-json';
 import { loadOutbox } from '@/lib/client/load-outbox';
 import { useWakeLock } from '@/lib/client/wake-lock';
-import { label } from '@/lib/domain';
+import { labelIn } from '@/i18n/labels';
 import type { InstallState } from '@/lib/install/state';
 import { groundwaterPressureKpa } from '@/lib/sizing';
 import { formatDuration, formatLength } from '@/lib/units';
@@ -46,6 +47,11 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
   const [editingConditions, setEditingConditions] = useState(false);
   const [redo, setRedo] = useState<{ busy: boolean; error: string | null }>({ busy: false, error: null });
   const router = useRouter();
+  const t = useTranslations('install');
+  const tl = useTranslations('labels');
+  const tf = useTranslations('flags');
+  const td = useTranslations('install.deadlines');
+  const locale = useLocale();
   const unitSystem = view.company.unitSystem;
   const { plan, flags } = useMemo(() => liveClock(view, state, now), [view, state, now]);
   const clockRunning = !!state.mixedAt && !state.deflatedAt;
@@ -87,26 +93,33 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
   return (
     <div className="space-y-4">
       <header>
-        <Link href="/today" className="text-base font-semibold text-brand-700 underline">← Today</Link>
-        <h1 className="mt-1 text-3xl font-bold">Repair {view.repair.position} · Job {view.job.number}</h1>
+        <Link href="/today" className="text-base font-semibold text-brand-700 underline">{t('backToToday')}</Link>
+        <h1 className="mt-1 text-3xl font-bold">{t('heading', { position: view.repair.position, number: view.job.number })}</h1>
         <p className="text-lg text-slate-700">
-          {view.job.site.addressLine} · {label(view.repair.defectType)} at {formatLength(view.repair.distanceMm, unitSystem, 'long')} in {view.repair.segment.label}
-          {view.repair.clockPosition ? ` · ${view.repair.clockPosition} o'clock` : ''}
+          {t('where', {
+            address: view.job.site.addressLine,
+            defect: labelIn(tl, view.repair.defectType),
+            distance: formatLength(view.repair.distanceMm, unitSystem, 'long', { locale }),
+            segment: view.repair.segment.label,
+          })}
+          {view.repair.clockPosition ? t('clockPosition', { position: view.repair.clockPosition }) : ''}
         </p>
       </header>
       {view.chain.replaces && !state.signedOffAt && state.inspection?.result !== 'fail' && (
         <p className="rounded-lg bg-slate-100 px-4 py-2 text-lg" data-testid="redo-of">
-          Redo of <Link className="font-semibold text-brand-700 underline" href={`/installs/${view.chain.replaces.id}`}>an earlier install</Link>
-          {view.chain.replaces.inspectionResult === 'fail' ? ' whose inspection failed' : view.chain.replaces.status === 'sent_back' ? ' the office sent back' : ''}; both are kept.
+          {t.rich('redoOf', {
+            link: (chunks) => <Link className="font-semibold text-brand-700 underline" href={`/installs/${view.chain.replaces?.id}`}>{chunks}</Link>,
+            why: view.chain.replaces.inspectionResult === 'fail' ? t('whyFailed') : view.chain.replaces.status === 'sent_back' ? t('whySentBack') : '',
+          })}
         </p>
       )}
       <SyncStatus queued={queued} waiting={waiting} rejected={rejected} />
-      <ClockStrip deadlines={deadlinesOf(state, plan)} now={now} timeZone={view.company.timeZone} />
+      <ClockStrip deadlines={deadlinesOf(state, plan, td)} now={now} timeZone={view.company.timeZone} />
       {flags.length > 0 && (
         <ul className="space-y-2" data-testid="flags">
           {flags.map((flag) => (
             <li key={flag.kind} data-kind={flag.kind} className={`rounded-lg px-4 py-2 text-lg font-semibold ${flag.severity === 'critical' ? 'bg-missed-100 text-missed-700' : 'bg-near-100 text-near-700'}`}>
-              {flag.message}
+              {locale === 'en' || !tf.has(flag.kind) ? flag.message : tf(flag.kind)}
             </li>
           ))}
         </ul>
@@ -126,7 +139,7 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
       )}
       {renderStep()}
       {AFTER_DEFLATE.includes(step) && (
-        <EvidencePanel target={{ installId: view.install.id }} size="field" title="Inspection images" defaultKind="inspection" />
+        <EvidencePanel target={{ installId: view.install.id }} size="field" title={t('inspectionImages')} defaultKind="inspection" />
       )}
       <EventLog events={logged} timeZone={view.company.timeZone} />
     </div>
@@ -138,7 +151,7 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
     try {
       result = await submitJson<{ install: { id: string } }>(`/api/installs/${view.install.id}/redo`, 'POST', { id: crypto.randomUUID() });
     } catch {
-      return setRedo({ busy: false, error: 'No connection: starting a redo needs the server. Try again when the signal is back.' });
+      return setRedo({ busy: false, error: t('redoNoSignal') });
     }
     if (!result.ok) return setRedo({ busy: false, error: result.error.message });
     router.push(`/installs/${result.data.install.id}`);
@@ -149,7 +162,7 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
       case 'safety':
         return <StepSafety onAcknowledge={() => void first(() => tap('safety_acknowledged'))} />;
       case 'checks':
-        return <StepChecks items={view.options.checklist?.items ?? [{ id: 'ready', label: 'Site and equipment ready', required: true }]} onDone={(items) => void tap('checks_done', { items })} />;
+        return <StepChecks items={view.options.checklist?.items ?? [{ id: 'ready', label: t('defaultCheck'), required: true }]} onDone={(items) => void tap('checks_done', { items })} />;
       case 'dry_run':
         return (
           <StepDryRun
@@ -186,11 +199,11 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
             />
           );
         }
-        return <StepTap testId="step-mix" title="Mix the resin" hint="The working window starts the moment both parts meet." label="Resin mixed" onTap={() => void first(() => tap('resin_mixed'))} />;
+        return <StepTap testId="step-mix" title={t('mixTitle')} hint={t('mixHint')} label={t('clock.mixed')} onTap={() => void first(() => tap('resin_mixed'))} />;
       case 'load':
-        return <StepTap testId="step-load" title="Load the patch" label="Patch loaded" onTap={() => void tap('patch_loaded')} />;
+        return <StepTap testId="step-load" title={t('loadTitle')} label={t('clock.loaded')} onTap={() => void tap('patch_loaded')} />;
       case 'position':
-        return <StepTap testId="step-position" title="Pull to the damage" hint="Keep to the marked distance; nobody in line with the packer." label="Packer in position" onTap={() => void tap('packer_in_position')} />;
+        return <StepTap testId="step-position" title={t('positionTitle')} hint={t('positionHint')} label={t('clock.inPosition')} onTap={() => void tap('packer_in_position')} />;
       case 'inflate':
         return <StepInflate unitSystem={unitSystem} rating={rating} onInflate={(pressureKpa, confirmedOutOfRange) => void tap('bladder_inflated', { pressureKpa, ...(confirmedOutOfRange ? { confirmedOutOfRange } : {}) })} />;
       case 'hold':
@@ -199,7 +212,7 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
             unitSystem={unitSystem}
             rating={rating}
             deflateAfter={plan?.deflateAfter ?? null}
-            holdNote={holdNoteOf(plan)}
+            holdNote={holdNoteOf(plan, t)}
             now={now}
             onPressure={(pressureKpa, confirmedOutOfRange) => void tap('pressure_reading', { pressureKpa, ...(confirmedOutOfRange ? { confirmedOutOfRange } : {}) })}
             onDeflate={(early) => void tap('bladder_deflated', early ? { reason: early.reason, confirmedEarly: true } : {})}
@@ -216,15 +229,12 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
 }
 
 /** What the deflate countdown counts, so the crew knows which figure it is trusting. */
-function holdNoteOf(plan: CurePlan | null): string {
-  if (!plan || plan.keepInflatedMin === null) {
-    return "No hold time is known for this temperature: keep the bladder up as long as the resin maker's sheet says.";
-  }
-  const reserve = plan.holdReserve > 0 ? ` + the company's ${Math.round(plan.holdReserve * 100)} % reserve` : '';
-  if (plan.holdSource === 'maker') {
-    return `Counting down the resin maker's hold of ${formatDuration((plan.makerHoldMin ?? 0) * 60)}${reserve} = ${formatDuration(plan.keepInflatedMin * 60)}, entered by the foreman: the pipe is outside the resin's rated range.`;
-  }
-  return `Hold ${formatDuration((plan.holdMin ?? 0) * 60)} at the pipe temperature${reserve} = keep inflated ${formatDuration(plan.keepInflatedMin * 60)}.`;
+function holdNoteOf(plan: CurePlan | null, t: ReturnType<typeof useTranslations<'install'>>): string {
+  if (!plan || plan.keepInflatedMin === null) return t('holdUnknown');
+  const reserve = plan.holdReserve > 0 ? t('holdReserve', { pct: Math.round(plan.holdReserve * 100) }) : '';
+  const keep = formatDuration(plan.keepInflatedMin * 60);
+  if (plan.holdSource === 'maker') return t('holdMaker', { hold: formatDuration((plan.makerHoldMin ?? 0) * 60), reserve, keep });
+  return t('holdResin', { hold: formatDuration((plan.holdMin ?? 0) * 60), reserve, keep });
 }
 
 /** Plan and flags recomputed on the tablet by the server's own rule, so they are right offline too. */

@@ -1,6 +1,8 @@
 import type { Metadata } from 'next';
 import { KeepForOffline } from '@/components/shell/keep-for-offline';
 import { notFound, redirect } from 'next/navigation';
+import { getTranslations } from 'next-intl/server';
+import { IntlScope } from '@/components/shell/intl-scope';
 import { requirePageUser } from '@/lib/auth/session';
 import { getInstallView } from '@/lib/data/installs';
 import { FIELD_ROLES } from '@/lib/domain';
@@ -8,7 +10,12 @@ import { AppError } from '@/lib/errors';
 import { uuidSchema } from '@/lib/validation/common';
 import { InstallScreen } from './install-screen';
 
-export const metadata: Metadata = { title: 'Install' };
+export async function generateMetadata(): Promise<Metadata> {
+  return { title: (await getTranslations('install'))('metaTitle') };
+}
+
+/** The message namespaces the install screen's client code reads. */
+const NAMESPACES = ['install', 'labels', 'safety', 'alarms', 'sync', 'flags'];
 
 export default async function Page({ params }: { params: Promise<{ id: string }> }) {
   const user = await requirePageUser(FIELD_ROLES);
@@ -24,11 +31,11 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
   }
   // This page may be the first one after sign-in, loaded before the service worker could keep it.
   const keep = [`/installs/${id}`, `/api/installs/${id}`];
+  // Through JSON, so the client gets exactly what GET /api/installs/:id would give it.
   return (
-    <>
+    <IntlScope namespaces={NAMESPACES}>
       <KeepForOffline urls={keep} userId={user.id} />
-      {/* Through JSON, so the client gets exactly what GET /api/installs/:id would give it. */}
       <InstallScreen initial={JSON.parse(JSON.stringify(view))} viewer={{ id: user.id, name: user.name, role: user.role }} />
-    </>
+    </IntlScope>
   );
 }

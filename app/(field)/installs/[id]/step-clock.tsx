@@ -1,8 +1,9 @@
 'use client';
 
+import { useLocale, useTranslations } from 'next-intl';
 import { useState } from 'react';
 import { pressureVerdict } from '@/lib/sizing';
-import { pressureFromSi, pressureToSi, unitLabels, type UnitSystem } from '@/lib/units';
+import { formatNumber, pressureFromSi, pressureToSi, unitLabels, type UnitSystem } from '@/lib/units';
 import { Callout, FieldInput, PrimaryAction, StepCard } from './field-ui';
 
 // groundwaterKpa: the pressure of the repair's planned groundwater head, when the office entered one.
@@ -24,6 +25,9 @@ export function StepTap({ title, label, hint, onTap, testId }: { title: string; 
  * rating is recorded only after a second tap.
  */
 function PressureEntry({ id, unitSystem, rating, actionLabel, onRecord }: { id: string; unitSystem: UnitSystem; rating: Rating; actionLabel: string; onRecord: (kPa: number, confirmedOutOfRange: boolean) => void }) {
+  const t = useTranslations('install.clock');
+  const locale = useLocale();
+  const fmt = (kPa: number, system: UnitSystem) => formatNumber(pressureFromSi(kPa, system), system === 'imperial' ? 1 : 0, locale);
   const unit = unitLabels(unitSystem).pressure;
   const [text, setText] = useState('');
   const [confirming, setConfirming] = useState(false);
@@ -32,7 +36,8 @@ function PressureEntry({ id, unitSystem, rating, actionLabel, onRecord }: { id: 
   const kPa = valid ? pressureToSi(value, unitSystem) : NaN;
   const outside = valid && rating !== null && (kPa < rating.minPressureKpa || kPa > rating.maxPressureKpa);
   const verdict = valid ? pressureVerdict(kPa, rating, rating?.groundwaterKpa) : 'ok';
-  const ratingText = rating ? `${fmt(rating.minPressureKpa, unitSystem)}–${fmt(rating.maxPressureKpa, unitSystem)} ${unit}` : 'unknown';
+  const ratingText = rating ? `${fmt(rating.minPressureKpa, unitSystem)}–${fmt(rating.maxPressureKpa, unitSystem)} ${unit}` : t('ratingUnknown');
+  const reading = valid ? `${fmt(kPa, unitSystem)} ${unit}` : '';
   const record = () => {
     if (!valid) return;
     if (outside && !confirming) return setConfirming(true);
@@ -42,40 +47,39 @@ function PressureEntry({ id, unitSystem, rating, actionLabel, onRecord }: { id: 
   };
   return (
     <div className="space-y-3">
-      <FieldInput id={id} label={`Gauge pressure (${unit})`} hint={`Packer rating ${ratingText}`} inputMode="decimal" value={text} onChange={(e) => { setText(e.target.value); setConfirming(false); }} />
+      <FieldInput id={id} label={t('gauge', { unit })} hint={t('rating', { rating: ratingText })} inputMode="decimal" value={text} onChange={(e) => { setText(e.target.value); setConfirming(false); }} />
       {verdict === 'over_rating' && (
         <div role="alert" data-testid="pressure-over-rating">
           <Callout tone="missed">
-            Release pressure now: {fmt(kPa, unitSystem)} {unit} is above this packer&apos;s rating. Stand clear of the pipe ends and let air out
-            until the gauge reads {ratingText}, then record that reading.
+            {t('overRating', { value: reading, rating: ratingText })}
           </Callout>
         </div>
       )}
       {verdict === 'below_groundwater' && rating?.groundwaterKpa != null && (
         <div data-testid="pressure-below-groundwater">
           <Callout tone="near">
-            {fmt(kPa, unitSystem)} {unit} does not beat the groundwater on this repair ({fmt(rating.groundwaterKpa, unitSystem)} {unit}): the patch
-            may not be pressed to the wall. Raise the pressure within the packer&apos;s rating ({ratingText}).
+            {t('belowGroundwater', { value: reading, groundwater: `${fmt(rating.groundwaterKpa, unitSystem)} ${unit}`, rating: ratingText })}
           </Callout>
         </div>
       )}
       {confirming && (
         <Callout tone="missed">
-          {fmt(kPa, unitSystem)} {unit} is outside this packer&apos;s rating ({ratingText}). Check the gauge. Record it anyway?
+          {t('outsideConfirm', { value: reading, rating: ratingText })}
         </Callout>
       )}
       <PrimaryAction variant={confirming ? 'danger' : 'primary'} disabled={!valid} onClick={record}>
-        {confirming ? 'Yes, record this pressure' : actionLabel}
+        {confirming ? t('recordAnyway') : actionLabel}
       </PrimaryAction>
     </div>
   );
 }
 
 export function StepInflate({ unitSystem, rating, onInflate }: { unitSystem: UnitSystem; rating: Rating; onInflate: (kPa: number, confirmedOutOfRange: boolean) => void }) {
+  const t = useTranslations('install.clock');
   return (
-    <StepCard title="Inflate the bladder" testId="step-inflate">
-      <p className="text-lg text-slate-700">Stand clear of the pipe ends. Read the gauge once the bladder is up.</p>
-      <PressureEntry id="inflatePressure" unitSystem={unitSystem} rating={rating} actionLabel="Bladder inflated" onRecord={onInflate} />
+    <StepCard title={t('inflateTitle')} testId="step-inflate">
+      <p className="text-lg text-slate-700">{t('inflateHint')}</p>
+      <PressureEntry id="inflatePressure" unitSystem={unitSystem} rating={rating} actionLabel={t('inflated')} onRecord={onInflate} />
     </StepCard>
   );
 }
@@ -91,27 +95,27 @@ export function StepHold({ unitSystem, rating, deflateAfter, holdNote, now, onPr
   onPressure: (kPa: number, confirmedOutOfRange: boolean) => void;
   onDeflate: (early: { reason: string } | null) => void;
 }) {
+  const t = useTranslations('install.clock');
   const [asking, setAsking] = useState(false);
   const [reason, setReason] = useState('');
   const early = deflateAfter !== null && now < deflateAfter;
   return (
-    <StepCard title="Holding" testId="step-hold">
+    <StepCard title={t('holdTitle')} testId="step-hold">
       <p className="text-lg text-slate-700" data-testid="hold-note">{holdNote}</p>
-      <PressureEntry id="holdPressure" unitSystem={unitSystem} rating={rating} actionLabel="Add pressure reading" onRecord={onPressure} />
+      <PressureEntry id="holdPressure" unitSystem={unitSystem} rating={rating} actionLabel={t('addReading')} onRecord={onPressure} />
       <hr className="border-slate-200" />
       {asking && early ? (
         <div className="space-y-3">
-          <Callout tone="missed">The hold time is not up yet. Deflating now is recorded and flagged for the office. Why deflate early?</Callout>
-          <label htmlFor="earlyReason" className="sr-only">Reason for deflating early</label>
-          <textarea id="earlyReason" rows={2} value={reason} onChange={(e) => setReason(e.target.value)} className="w-full rounded-md border-2 border-slate-400 p-2 text-lg" placeholder="Reason" />
-          <PrimaryAction variant="danger" disabled={reason.trim().length < 3} onClick={() => onDeflate({ reason: reason.trim() })}>Deflate early — record it</PrimaryAction>
-          <button type="button" onClick={() => setAsking(false)} className="w-full py-3 text-lg underline">Keep holding</button>
+          <Callout tone="missed">{t('earlyWarning')}</Callout>
+          <label htmlFor="earlyReason" className="sr-only">{t('earlyReason')}</label>
+          <textarea id="earlyReason" rows={2} value={reason} onChange={(e) => setReason(e.target.value)} className="w-full rounded-md border-2 border-slate-400 p-2 text-lg" placeholder={t('reason')} />
+          <PrimaryAction variant="danger" disabled={reason.trim().length < 3} onClick={() => onDeflate({ reason: reason.trim() })}>{t('deflateEarly')}</PrimaryAction>
+          <button type="button" onClick={() => setAsking(false)} className="w-full py-3 text-lg underline">{t('keepHolding')}</button>
         </div>
       ) : (
-        <PrimaryAction variant={early ? 'secondary' : 'primary'} onClick={() => (early ? setAsking(true) : onDeflate(null))}>Bladder deflated</PrimaryAction>
+        <PrimaryAction variant={early ? 'secondary' : 'primary'} onClick={() => (early ? setAsking(true) : onDeflate(null))}>{t('deflated')}</PrimaryAction>
       )}
     </StepCard>
   );
 }
 
-const fmt = (kPa: number, system: UnitSystem) => pressureFromSi(kPa, system).toFixed(system === 'imperial' ? 1 : 0);

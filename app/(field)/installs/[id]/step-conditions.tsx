@@ -1,9 +1,11 @@
 'use client';
 
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useEffect } from 'react';
+import { useLocale, useTranslations } from 'next-intl';
+import { useEffect, useMemo } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { z } from 'zod';
+import { formatDay } from '@/lib/dates';
 import { lengthFromSi, lengthToSi, temperatureToSi, unitLabels, type UnitSystem } from '@/lib/units';
 import { eventPayloadSchemas } from '@/lib/validation/install-events';
 import { FieldInput, PrimaryAction, StepCard } from './field-ui';
@@ -13,18 +15,21 @@ export type KitOption = { id: string; lot: string; expiresOn: string; expired: b
 export type PackerOption = { id: string; name: string; fits: boolean; reasons: string[] };
 export type Conditions = z.infer<(typeof eventPayloadSchemas)['conditions_recorded']>;
 
+type Messages = (key: 'errMixTemp' | 'errAirTemp' | 'errPrep' | 'errNotBelowZero' | 'errPipeTemp' | 'errKit' | 'errPacker' | 'errPatch') => string;
+
 // Entered in the company's units; converted to SI once, then checked against the event's own schema.
-const formSchema = z.object({
-  mixTemp: z.coerce.number({ error: 'Enter the temperature of the resin in the bucket' }),
-  airTemp: z.coerce.number({ error: 'Enter the air temperature where you mix' }),
-  prepMinutes: z.coerce.number({ error: 'Enter the minutes from mixing until the patch is on the packer' }).min(0, 'Not below 0'),
-  pipeTemp: z.coerce.number({ error: 'Enter the pipe or flow temperature' }),
-  resinKitId: z.uuid('Choose the resin kit by its lot'),
-  packerId: z.uuid('Choose the packer'),
-  patchLength: z.coerce.number({ error: 'Enter the patch length' }).positive('Enter the patch length'),
-});
-type FormInput = z.input<typeof formSchema>;
-type FormValues = z.output<typeof formSchema>;
+const formSchemaOf = (t: Messages) =>
+  z.object({
+    mixTemp: z.coerce.number({ error: t('errMixTemp') }),
+    airTemp: z.coerce.number({ error: t('errAirTemp') }),
+    prepMinutes: z.coerce.number({ error: t('errPrep') }).min(0, t('errNotBelowZero')),
+    pipeTemp: z.coerce.number({ error: t('errPipeTemp') }),
+    resinKitId: z.uuid(t('errKit')),
+    packerId: z.uuid(t('errPacker')),
+    patchLength: z.coerce.number({ error: t('errPatch') }).positive(t('errPatch')),
+  });
+type FormInput = z.input<ReturnType<typeof formSchemaOf>>;
+type FormValues = z.output<ReturnType<typeof formSchemaOf>>;
 
 /** Conditions and materials: temperatures, resin kit by lot (expired ones refused), packer that fits, patch length. */
 export function StepConditions({
@@ -42,6 +47,9 @@ export function StepConditions({
   initial: (Omit<Conditions, 'airTempC' | 'prepMinutes'> & { airTempC?: number | null; prepMinutes?: number | null }) | null;
   onSave: (conditions: Conditions) => void;
 }) {
+  const t = useTranslations('install.conditions');
+  const locale = useLocale();
+  const formSchema = useMemo(() => formSchemaOf(t), [t]);
   const units = unitLabels(unitSystem);
   const { register, handleSubmit, setError, setValue, getFieldState, control, formState } = useForm<FormInput, unknown, FormValues>({
     resolver: zodResolver(formSchema),
@@ -63,7 +71,7 @@ export function StepConditions({
   const submit = handleSubmit((values) => {
     const kit = kits.find((k) => k.id === values.resinKitId);
     if (kit?.expired) {
-      setError('resinKitId', { message: `Lot ${kit.lot} expired on ${kit.expiresOn}: it cannot be used. Choose another kit.` });
+      setError('resinKitId', { message: t('errKitExpired', { lot: kit.lot, date: formatDay(kit.expiresOn, locale) }) });
       return;
     }
     const conditions = {
@@ -79,7 +87,7 @@ export function StepConditions({
     if (!checked.success) {
       for (const issue of checked.error.issues) {
         const field = ({ mixTempC: 'mixTemp', airTempC: 'airTemp', prepMinutes: 'prepMinutes', pipeTempC: 'pipeTemp', patchLengthMm: 'patchLength' } as const)[issue.path[0] as 'mixTempC'] ?? 'mixTemp';
-        setError(field, { message: `Out of range: ${issue.message}` });
+        setError(field, { message: t('errOutOfRange', { message: issue.message }) });
       }
       return;
     }
@@ -87,34 +95,35 @@ export function StepConditions({
   });
 
   return (
-    <StepCard title="Conditions and materials" testId="step-conditions">
+    <StepCard title={t('title')} testId="step-conditions">
       <form onSubmit={submit} noValidate className="space-y-4">
         <div className="grid gap-4 sm:grid-cols-2">
-          <FieldInput id="mixTemp" label={`Resin in the bucket (${units.temperature})`} inputMode="decimal" error={errors.mixTemp?.message} {...register('mixTemp')} />
-          <FieldInput id="airTemp" label={`Air at the mixing place (${units.temperature})`} inputMode="decimal" error={errors.airTemp?.message} {...register('airTemp')} />
-          <FieldInput id="pipeTemp" label={`Pipe / flow at the repair (${units.temperature})`} inputMode="decimal" error={errors.pipeTemp?.message} {...register('pipeTemp')} />
+          <FieldInput id="mixTemp" label={t('mixTemp', { unit: units.temperature })} inputMode="decimal" error={errors.mixTemp?.message} {...register('mixTemp')} />
+          <FieldInput id="airTemp" label={t('airTemp', { unit: units.temperature })} inputMode="decimal" error={errors.airTemp?.message} {...register('airTemp')} />
+          <FieldInput id="pipeTemp" label={t('pipeTemp', { unit: units.temperature })} inputMode="decimal" error={errors.pipeTemp?.message} {...register('pipeTemp')} />
         </div>
-        <p className="text-base text-slate-600">The warmer of resin and air sets the working window.</p>
+        <p className="text-base text-slate-600">{t('warmer')}</p>
         <div>
-          <label htmlFor="resinKitId" className="block text-lg font-semibold">Resin kit (lot)</label>
+          <label htmlFor="resinKitId" className="block text-lg font-semibold">{t('kit')}</label>
           <KitScan kits={kits} onPick={(id) => setValue('resinKitId', id, { shouldDirty: true, shouldValidate: true })} />
           <select id="resinKitId" className="mt-1 block min-h-touch w-full rounded-md border-2 border-slate-400 px-3 text-xl" aria-describedby={errors.resinKitId ? 'resinKitId-error' : undefined} {...register('resinKitId')}>
-            <option value="">Choose…</option>
+            <option value="">{t('choose')}</option>
             {kits.map((kit) => (
               <option key={kit.id} value={kit.id}>
-                {kit.lot} · {kit.resinName} · {kit.expired ? `EXPIRED ${kit.expiresOn}` : `use by ${kit.expiresOn}`}
+                {kit.lot} · {kit.resinName} ·{' '}
+                {kit.expired ? t('kitExpired', { date: formatDay(kit.expiresOn, locale) }) : t('kitUseBy', { date: formatDay(kit.expiresOn, locale) })}
               </option>
             ))}
           </select>
           {errors.resinKitId && <p id="resinKitId-error" role="alert" className="mt-1 text-base font-medium text-missed-700">{errors.resinKitId.message}</p>}
         </div>
         <div>
-          <label htmlFor="packerId" className="block text-lg font-semibold">Packer</label>
+          <label htmlFor="packerId" className="block text-lg font-semibold">{t('packer')}</label>
           <select id="packerId" className="mt-1 block min-h-touch w-full rounded-md border-2 border-slate-400 px-3 text-xl" {...register('packerId')}>
-            <option value="">Choose…</option>
+            <option value="">{t('choose')}</option>
             {packers.map((packer) => (
               <option key={packer.id} value={packer.id}>
-                {packer.name}{packer.fits ? ' · fits' : ` · does not fit: ${packer.reasons.join('; ')}`}
+                {packer.name}{packer.fits ? t('fits') : t('doesNotFit', { reasons: packer.reasons.join('; ') })}
               </option>
             ))}
           </select>
@@ -122,14 +131,14 @@ export function StepConditions({
         </div>
         <FieldInput
           id="prepMinutes"
-          label="Minutes from mixing until the patch is on the packer"
-          hint="Wet-out and loading; the GO counts these plus the dry run's pull. Filled in from the resin system."
+          label={t('prep')}
+          hint={t('prepHint')}
           inputMode="decimal"
           error={errors.prepMinutes?.message}
           {...register('prepMinutes')}
         />
-        <FieldInput id="patchLength" label={`Patch length (${units.shortLength})`} inputMode="decimal" error={errors.patchLength?.message} {...register('patchLength')} />
-        <PrimaryAction onClick={() => void submit()}>Save conditions</PrimaryAction>
+        <FieldInput id="patchLength" label={t('patchLength', { unit: units.shortLength })} inputMode="decimal" error={errors.patchLength?.message} {...register('patchLength')} />
+        <PrimaryAction onClick={() => void submit()}>{t('save')}</PrimaryAction>
       </form>
     </StepCard>
   );

@@ -1,0 +1,132 @@
+import { expect, test } from '@playwright/test';
+import { signIn } from './helpers';
+import { controlTime, newInstall, serverView, tap } from './install-helpers';
+
+// Spanish for the crews: signed out the browser's Accept-Language decides; signed in, the user's own setting
+// (the demo's tecnico@demo.test has users.locale = 'es' while this browser asks for English).
+
+test.describe('signed out, the browser’s language decides', () => {
+  // The browser's language setting: Chromium sends it as Accept-Language (es-MX,es;q=0.9).
+  test.use({ locale: 'es-MX' });
+
+  test('/sign-in with Accept-Language: es is in Spanish, failures included', async ({ page }) => {
+    await page.goto('/sign-in');
+    await expect(page.locator('html')).toHaveAttribute('lang', 'es');
+    await expect(page).toHaveTitle(/Iniciar sesión/);
+    await expect(page.getByText('Inicie sesión para ver los trabajos de su empresa')).toBeVisible();
+    await page.getByLabel('Correo electrónico').fill('nadie@demo.test');
+    await page.getByLabel('Contraseña').fill('no-es-la-clave');
+    await page.getByRole('button', { name: 'Iniciar sesión' }).click();
+    await expect(page.getByRole('main').getByRole('alert')).toHaveText('Ese correo y esa contraseña no corresponden a una cuenta activa.');
+  });
+});
+
+test('/sign-in answers in English to an English browser and to one that names no language we speak', async ({ request }) => {
+  for (const language of ['en-US,en;q=0.9', 'de-DE', '']) {
+    const html = await (await request.get('/sign-in', { headers: { 'Accept-Language': language } })).text();
+    expect(html, language).toContain('<html lang="en"');
+    expect(html, language).toContain('Sign in to your company');
+  }
+  const spanish = await (await request.get('/sign-in', { headers: { 'Accept-Language': 'es' } })).text();
+  expect(spanish).toContain('<html lang="es"');
+  expect(spanish).toContain('Inicie sesión para ver los trabajos de su empresa');
+});
+
+test.describe('a Spanish-speaking technician', () => {
+  test.use({ serviceWorkers: 'block' });
+
+  test('runs a whole install in Spanish, the clock and the record in Spanish words and numbers', async ({ page }) => {
+    const time = await controlTime(page);
+    await signIn(page, 'tecnico@demo.test');
+    await expect(page).toHaveURL('/today');
+    await expect(page.locator('html')).toHaveAttribute('lang', 'es');
+    await expect(page.getByRole('heading', { level: 1 })).toHaveText('El trabajo de hoy');
+    await expect(page.getByTestId('user-name')).toHaveText('Inés Barragán Soto · Técnico');
+    await expect(page.getByRole('button', { name: 'Cerrar sesión' })).toBeVisible();
+
+    const id = await newInstall(page, '-0003', 0);
+    await page.goto(`/installs/${id}`);
+    const safety = page.getByTestId('step-safety');
+    await expect(safety.getByRole('heading')).toHaveText('Antes de empezar');
+    await expect(safety).toContainText('Espacio confinado');
+    await expect(safety).toContainText('Empacador a presión');
+    await expect(safety).toContainText('no sustituyen sus normas locales');
+    await tap(page, 'Entendido — empezar');
+
+    await expect(page.getByTestId('step-checks')).toContainText('Revisiones antes de instalar');
+    for (const box of await page.getByRole('checkbox').all()) await box.check();
+    await tap(page, 'Revisiones hechas');
+
+    await expect(page.getByTestId('step-dry-run')).toContainText('Prueba en seco');
+    await tap(page, 'Empezar prueba en seco');
+    await time.advance(3);
+    await tap(page, 'Empacador de vuelta — parar');
+
+    await expect(page.getByTestId('step-conditions')).toContainText('Condiciones y materiales');
+    await page.getByLabel(/Resina en el cubo/).fill('68');
+    await page.getByLabel(/Aire en el lugar de mezcla/).fill('68');
+    await page.getByLabel(/Tubería \/ flujo/).fill('57');
+    const kit = page.locator('#resinKitId option', { hasText: 'SAE-2610-014' });
+    await expect(kit).toContainText('usar antes del');
+    await page.locator('#resinKitId').selectOption((await kit.getAttribute('value'))!);
+    await tap(page, 'Guardar condiciones');
+
+    await expect(page.getByTestId('go-verdict')).toHaveText('SEGUIR');
+    await tap(page, 'Listo para mezclar');
+    await tap(page, 'Resina mezclada');
+    await expect(page.getByTestId('countdown').first()).toHaveAttribute('aria-label', 'Inflar antes de (con la reserva)');
+    await time.advance(5);
+    await tap(page, 'Parche cargado');
+    await time.advance(5);
+    await tap(page, 'Empacador en posición');
+    await time.advance(4);
+
+    const inflate = page.getByTestId('step-inflate');
+    await expect(inflate.getByRole('heading')).toHaveText('Infle la vejiga');
+    // The packer's rating in psi with the Spanish decimal comma (the demo company works in imperial units).
+    await expect(inflate).toContainText(/Rango del empacador \d+,\d–\d+,\d psi/);
+    await page.getByLabel(/Presión del manómetro \(psi\)/).fill('15');
+    await tap(page, 'Vejiga inflada');
+
+    await expect(page.getByTestId('step-hold')).toContainText('Manteniendo');
+    await expect(page.getByTestId('hold-note')).toContainText('mantener inflado');
+    await expect(page.getByTestId('countdown').first()).toHaveAttribute('aria-label', 'Desinflar después de (fraguado + 10 %)');
+    await time.advance(160);
+    await tap(page, 'Vejiga desinflada');
+
+    await expect(page.getByTestId('step-inspect')).toContainText('Inspeccione el parche');
+    await page.getByRole('radio', { name: 'Bien' }).click();
+    await tap(page, 'Registrar inspección');
+    await expect(page.getByTestId('step-sign-off')).toContainText('El capataz firma la instalación');
+    await expect(page.getByTestId('sync-status')).toHaveText('Todos los toques sincronizados', { timeout: 20_000 });
+    await expect(page.getByTestId('event-log')).toContainText('Vejiga inflada');
+    await expect(page.getByTestId('event-log')).toContainText('sincronizado');
+    await expect(page.locator('main')).not.toContainText(/Bladder|Resin mixed|Packer in position|All taps synced/);
+
+    const view = await serverView(page, id);
+    expect(view.flags).toEqual([]);
+    expect(view.state.step).toBe('sign_off');
+    expect(view.events.map((e: { type: string }) => e.type)).toEqual([
+      'safety_acknowledged', 'checks_done', 'dry_run_started', 'dry_run_finished', 'conditions_recorded', 'go_decision',
+      'resin_mixed', 'patch_loaded', 'packer_in_position', 'bladder_inflated', 'bladder_deflated', 'inspection_recorded',
+    ]);
+  });
+
+  test('the language is the user’s own setting, changed on the profile page', async ({ page }) => {
+    await signIn(page, 'tecnico@demo.test');
+    await expect(page).toHaveURL('/today');
+    await page.goto('/profile');
+    await expect(page.getByRole('heading', { level: 1 })).toHaveText('Perfil');
+    await expect(page.getByRole('radio', { name: 'Español', exact: true })).toBeChecked();
+    await page.getByRole('radio', { name: 'English', exact: true }).check();
+    await page.getByRole('button', { name: 'Guardar' }).click();
+    await expect(page.getByRole('heading', { level: 1 })).toHaveText('Profile');
+    await page.goto('/today');
+    await expect(page.getByRole('heading', { level: 1 })).toHaveText("Today's work");
+    // Back to Spanish, as the demo has it.
+    const restored = await page.request.patch('/api/profile', { data: { locale: 'es' } });
+    expect(restored.status()).toBe(200);
+    await page.goto('/today');
+    await expect(page.getByRole('heading', { level: 1 })).toHaveText('El trabajo de hoy');
+  });
+});
