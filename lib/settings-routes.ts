@@ -5,6 +5,7 @@ import { requireUser, type SessionUser } from '@/lib/auth/session';
 import { csvResponse, toCsv, type CsvColumn } from '@/lib/csv';
 import { ownRowId, type OwnRowKind } from '@/lib/data/access';
 import type { Page } from '@/lib/data/list';
+import { ADMIN_ONLY } from '@/lib/domain';
 import { bodyOf, handle, idOf, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/http';
 
 // The route handlers of a company settings resource (resin systems and kits, packers, check-lists):
@@ -31,7 +32,7 @@ export function settingsCollection<Q, I, Row>(options: {
       return csvResponse(options.csvName, toCsv(items, options.csv));
     }),
     POST: handle(async (request: Request) => {
-      const user = await requireUser(['admin']);
+      const user = await requireUser(ADMIN_ONLY);
       const input = parseOrThrow(options.inputSchema, await bodyOf(request));
       return NextResponse.json(await options.create(user, input), { status: 201 });
     }),
@@ -54,13 +55,13 @@ export function settingsRecord<P>(options: {
       return NextResponse.json(await options.get(user, await idOf(params, options.what)));
     }),
     PATCH: handle(async (request: Request, { params }: Context) => {
-      const user = await requireUser(['admin']);
+      const user = await requireUser(ADMIN_ONLY);
       const id = await ownRowId(user, options.kind, params, options.what);
       const patch = parseOrThrow(options.patchSchema, await bodyOf(request));
       return NextResponse.json(await options.update(user, id, patch));
     }),
     DELETE: handle(async (_request: Request, { params }: Context) => {
-      const user = await requireUser(['admin']);
+      const user = await requireUser(ADMIN_ONLY);
       return NextResponse.json(await options.archive(user, await idOf(params, options.what)));
     }),
   };

@@ -2,7 +2,7 @@
 
 import { useId, useRef, useState } from 'react';
 import useSWR from 'swr';
-import type { AttachmentListResponse, UploadRequestResponse } from '@/app/api/attachments/route';
+import type { AttachmentListResponse, UploadRequestResponse } from '@/lib/data/attachments';
 import { buttonClass } from '@/components/ui/button';
 import { fetchJson } from '@/lib/client/fetch-json';
 import { submitJson } from '@/lib/client/submit-json';

@@ -5,7 +5,7 @@ import { useRouter } from 'next/navigation';
 import { useEffect, useRef, useState, type ReactNode } from 'react';
 import { useForm } from 'react-hook-form';
 import useSWR from 'swr';
-import type { ReportSendsResponse } from '@/app/api/jobs/[id]/report-sends/route';
+import type { ReportSendsResponse } from '@/lib/data/report-sends';
 import { FormField, errorProps, inputClass, textareaClass } from '@/components/desk/form-field';
 import { Badge } from '@/components/ui/badge';
 import { Button, buttonClass } from '@/components/ui/button';

@@ -1,6 +1,7 @@
 'use client';
 
 import { SerwistProvider } from '@serwist/turbopack/react';
+import { IS_DEVELOPMENT } from '@/lib/env-public';
 
 /**
  * Registers the service worker (app/sw.ts) that lets field pages open without signal.
@@ -12,7 +13,7 @@ export function OfflineProvider({ children }: { children: React.ReactNode }) {
     <SerwistProvider
       swUrl="/serwist/sw.js"
       // In development pages change on every save; a worker serving yesterday's copy confuses.
-      disable={process.env.NODE_ENV === 'development'}
+      disable={IS_DEVELOPMENT}
       reloadOnOnline={false}
       options={{ scope: '/', type: 'classic' }}
     >

@@ -2,8 +2,6 @@ import { createChecklistTemplate, listChecklistTemplates } from '@/lib/data/chec
 import { settingsCollection } from '@/lib/settings-routes';
 import { checklistTemplateInputSchema, checklistTemplateListQuerySchema } from '@/lib/validation/checklist-templates';
 
-export type ChecklistTemplateListResponse = Awaited<ReturnType<typeof listChecklistTemplates>>;
-
 /** Check-list templates with their ordered items `{ id, label, required }`; `archived` filters on inactive ones. */
 const routes = settingsCollection({
   csvName: 'checklist-templates',

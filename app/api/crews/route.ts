@@ -2,10 +2,9 @@ import { NextResponse } from 'next/server';
 import { requireUser } from '@/lib/auth/session';
 import { createCrew, listCrews } from '@/lib/data/crews';
 import { csvResponse, toCsv } from '@/lib/csv';
+import { ADMIN_ONLY } from '@/lib/domain';
 import { bodyOf, handle, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/http';
 import { crewInputSchema, crewListQuerySchema } from '@/lib/validation/crews';
-
-export type CrewListResponse = Awaited<ReturnType<typeof listCrews>>;
 
 /** Desk roles: every crew of the company; field roles: only their own crews. `?format=csv` exports. */
 export const GET = handle(async (request: Request) => {
@@ -22,7 +21,7 @@ export const GET = handle(async (request: Request) => {
 });
 
 export const POST = handle(async (request: Request) => {
-  const user = await requireUser(['admin']);
+  const user = await requireUser(ADMIN_ONLY);
   const input = parseOrThrow(crewInputSchema, await bodyOf(request));
   return NextResponse.json(await createCrew(user, input), { status: 201 });
 });

@@ -6,8 +6,6 @@ import { DESK_ROLES, label } from '@/lib/domain';
 import { bodyOf, handle, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/http';
 import { customerInputSchema, customerListQuerySchema } from '@/lib/validation/customers';
 
-export type CustomerListResponse = Awaited<ReturnType<typeof listCustomers>>;
-
 /** A page of customers, or with `?format=csv` every customer the same filter matches. */
 export const GET = handle(async (request: Request) => {
   const user = await requireUser();

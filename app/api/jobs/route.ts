@@ -6,8 +6,6 @@ import { DESK_ROLES, label } from '@/lib/domain';
 import { bodyOf, handle, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/http';
 import { jobInputSchema, jobListQuerySchema } from '@/lib/validation/jobs';
 
-export type JobListResponse = Awaited<ReturnType<typeof listJobs>>;
-
 /** A page of jobs, or with `?format=csv` every job the same filter matches. */
 export const GET = handle(async (request: Request) => {
   const user = await requireUser();

@@ -2,8 +2,6 @@ import { createPacker, listPackers } from '@/lib/data/packers';
 import { settingsCollection } from '@/lib/settings-routes';
 import { packerInputSchema, packerListQuerySchema } from '@/lib/validation/packers';
 
-export type PackerListResponse = Awaited<ReturnType<typeof listPackers>>;
-
 const routes = settingsCollection({
   csvName: 'packers',
   querySchema: packerListQuerySchema,

@@ -6,8 +6,6 @@ import { DESK_ROLES, label } from '@/lib/domain';
 import { bodyOf, handle, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/http';
 import { repairInputSchema, repairListQuerySchema } from '@/lib/validation/repairs';
 
-export type RepairListResponse = Awaited<ReturnType<typeof listRepairs>>;
-
 /** A page of repairs, or with `?format=csv` every repair the same filter matches (lengths in mm, as stored). */
 export const GET = handle(async (request: Request) => {
   const user = await requireUser();

@@ -2,8 +2,6 @@ import { createResinKit, listResinKits } from '@/lib/data/resin-kits';
 import { settingsCollection } from '@/lib/settings-routes';
 import { resinKitInputSchema, resinKitListQuerySchema } from '@/lib/validation/resin-kits';
 
-export type ResinKitListResponse = Awaited<ReturnType<typeof listResinKits>>;
-
 /** Resin kits (lots): `?resinSystemId=&expired=true|false&sort=expiresOn|lot|…`; POST for admins (409 on a lot already listed). */
 const routes = settingsCollection({
   csvName: 'resin-kits',

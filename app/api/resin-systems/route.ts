@@ -3,8 +3,6 @@ import { label } from '@/lib/domain';
 import { settingsCollection } from '@/lib/settings-routes';
 import { resinSystemInputSchema, resinSystemListQuerySchema } from '@/lib/validation/resin-systems';
 
-export type ResinSystemListResponse = Awaited<ReturnType<typeof listResinSystems>>;
-
 /** Resin systems: a page (or `?format=csv`) for any signed-in user of the company; POST for admins. SI throughout. */
 const routes = settingsCollection({
   csvName: 'resin-systems',

@@ -6,8 +6,6 @@ import { DESK_ROLES, label } from '@/lib/domain';
 import { bodyOf, handle, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/http';
 import { segmentInputSchema, segmentListQuerySchema } from '@/lib/validation/segments';
 
-export type SegmentListResponse = Awaited<ReturnType<typeof listSegments>>;
-
 /** A page of segments, or with `?format=csv` every segment the same filter matches (SI columns). */
 export const GET = handle(async (request: Request) => {
   const user = await requireUser();

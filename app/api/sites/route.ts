@@ -6,8 +6,6 @@ import { DESK_ROLES } from '@/lib/domain';
 import { bodyOf, handle, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/http';
 import { siteInputSchema, siteListQuerySchema } from '@/lib/validation/sites';
 
-export type SiteListResponse = Awaited<ReturnType<typeof listSites>>;
-
 /** A page of sites, or with `?format=csv` every site the same filter matches. */
 export const GET = handle(async (request: Request) => {
   const user = await requireUser();

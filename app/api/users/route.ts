@@ -2,15 +2,13 @@ import { NextResponse } from 'next/server';
 import { requireUser } from '@/lib/auth/session';
 import { createUser, listUsers } from '@/lib/data/users';
 import { csvResponse, toCsv } from '@/lib/csv';
-import { label } from '@/lib/domain';
+import { ADMIN_ONLY, label } from '@/lib/domain';
 import { bodyOf, handle, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/http';
 import { userInputSchema, userListQuerySchema } from '@/lib/validation/users';
 
-export type UserListResponse = Awaited<ReturnType<typeof listUsers>>;
-
 /** A page of the company's users, or with `?format=csv` every user the same filter matches. Admin only. */
 export const GET = handle(async (request: Request) => {
-  const user = await requireUser(['admin']);
+  const user = await requireUser(ADMIN_ONLY);
   const query = parseOrThrow(userListQuerySchema, searchParamsOf(request));
   if (!wantsCsv(request)) return NextResponse.json(await listUsers(user, query));
   const { items } = await listUsers(user, query, true);
@@ -23,7 +21,7 @@ export const GET = handle(async (request: Request) => {
 });
 
 export const POST = handle(async (request: Request) => {
-  const user = await requireUser(['admin']);
+  const user = await requireUser(ADMIN_ONLY);
   const input = parseOrThrow(userInputSchema, await bodyOf(request));
   return NextResponse.json(await createUser(user, input), { status: 201 });
 });

@@ -3,7 +3,7 @@
 import Link from 'next/link';
 import { useRouter } from 'next/navigation';
 import { useEffect, useMemo, useState } from 'react';
-import type { InstallViewResponse } from '@/app/api/installs/[id]/route';
+import type { InstallViewResponse } from '@/lib/data/installs';
 import { EvidencePanel } from '@/components/evidence/evidence-panel';
 import { useNow } from '@/components/install/countdown';
 import { resinClockSpec, type CurePlan, type QualityFlag } from '@/lib/cure';

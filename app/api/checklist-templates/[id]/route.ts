@@ -2,8 +2,6 @@ import { archiveChecklistTemplate, getChecklistTemplate, updateChecklistTemplate
 import { settingsRecord } from '@/lib/settings-routes';
 import { checklistTemplatePatchSchema } from '@/lib/validation/checklist-templates';
 
-export type ChecklistTemplateResponse = Awaited<ReturnType<typeof getChecklistTemplate>>;
-
 /** PATCH with `items` replaces the whole ordered list; items keep the ids they come with. */
 const routes = settingsRecord({ kind: 'checklistTemplate', what: 'Check-list template', patchSchema: checklistTemplatePatchSchema, get: getChecklistTemplate, update: updateChecklistTemplate, archive: archiveChecklistTemplate });
 export const GET = routes.GET;

@@ -6,7 +6,6 @@ import { DESK_ROLES } from '@/lib/domain';
 import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/http';
 import { jobPatchSchema } from '@/lib/validation/jobs';
 
-export type JobResponse = Awaited<ReturnType<typeof findJob>>;
 type Context = { params: Promise<{ id: string }> };
 
 export const GET = handle(async (_request: Request, { params }: Context) => {

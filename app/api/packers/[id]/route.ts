@@ -2,8 +2,6 @@ import { archivePacker, getPacker, updatePacker } from '@/lib/data/packers';
 import { settingsRecord } from '@/lib/settings-routes';
 import { packerPatchSchema } from '@/lib/validation/packers';
 
-export type PackerResponse = Awaited<ReturnType<typeof getPacker>>;
-
 const routes = settingsRecord({ kind: 'packer', what: 'Packer', patchSchema: packerPatchSchema, get: getPacker, update: updatePacker, archive: archivePacker });
 export const GET = routes.GET;
 export const PATCH = routes.PATCH;

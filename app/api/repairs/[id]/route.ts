@@ -6,7 +6,6 @@ import { DESK_ROLES } from '@/lib/domain';
 import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/http';
 import { repairPatchSchema } from '@/lib/validation/repairs';
 
-export type RepairResponse = Awaited<ReturnType<typeof getRepair>>;
 type Context = { params: Promise<{ id: string }> };
 
 export const GET = handle(async (_request: Request, { params }: Context) => {

@@ -2,8 +2,6 @@ import { archiveResinKit, getResinKit, updateResinKit } from '@/lib/data/resin-k
 import { settingsRecord } from '@/lib/settings-routes';
 import { resinKitPatchSchema } from '@/lib/validation/resin-kits';
 
-export type ResinKitResponse = Awaited<ReturnType<typeof getResinKit>>;
-
 /** GET answers the kit with the installs that used it. */
 const routes = settingsRecord({ kind: 'resinKit', what: 'Resin kit', patchSchema: resinKitPatchSchema, get: getResinKit, update: updateResinKit, archive: archiveResinKit });
 export const GET = routes.GET;

@@ -2,8 +2,6 @@ import { archiveResinSystem, getResinSystem, updateResinSystem } from '@/lib/dat
 import { settingsRecord } from '@/lib/settings-routes';
 import { resinSystemPatchSchema } from '@/lib/validation/resin-systems';
 
-export type ResinSystemResponse = Awaited<ReturnType<typeof getResinSystem>>;
-
 const routes = settingsRecord({ kind: 'resinSystem', what: 'Resin system', patchSchema: resinSystemPatchSchema, get: getResinSystem, update: updateResinSystem, archive: archiveResinSystem });
 export const GET = routes.GET;
 export const PATCH = routes.PATCH;

@@ -8,8 +8,6 @@ import { segmentPatchSchema } from '@/lib/validation/segments';
 
 type Context = { params: Promise<{ id: string }> };
 
-export type SegmentResponse = Awaited<ReturnType<typeof getSegment>>;
-
 /** The segment with its site, both access points and its repairs. */
 export const GET = handle(async (_request: Request, { params }: Context) => {
   const user = await requireUser();

@@ -8,8 +8,6 @@ import { sitePatchSchema } from '@/lib/validation/sites';
 
 type Context = { params: Promise<{ id: string }> };
 
-export type SiteResponse = Awaited<ReturnType<typeof getSite>>;
-
 /** The site with its customer, access points and segments. */
 export const GET = handle(async (_request: Request, { params }: Context) => {
   const user = await requireUser();

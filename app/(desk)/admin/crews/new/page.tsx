@@ -2,11 +2,12 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { requirePageUser } from '@/lib/auth/session';
 import { CrewForm } from '../crew-form';
+import { ADMIN_ONLY } from '@/lib/domain';
 
 export const metadata: Metadata = { title: 'New crew' };
 
 export default async function Page() {
-  await requirePageUser(['admin']);
+  await requirePageUser(ADMIN_ONLY);
   return (
     <div className="space-y-4">
       <Link href="/admin/crews" className="text-sm text-brand-700 hover:underline">← Crews</Link>

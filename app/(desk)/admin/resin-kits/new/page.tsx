@@ -5,11 +5,12 @@ import { getCompany } from '@/lib/data/company';
 import { listResinSystems } from '@/lib/data/resin-systems';
 import { resinSystemListQuerySchema } from '@/lib/validation/resin-systems';
 import { ResinKitForm } from '../resin-kit-form';
+import { ADMIN_ONLY } from '@/lib/domain';
 
 export const metadata: Metadata = { title: 'New resin kit' };
 
 export default async function Page() {
-  const user = await requirePageUser(['admin']);
+  const user = await requirePageUser(ADMIN_ONLY);
   const [{ unitSystem }, systems] = await Promise.all([getCompany(user), listResinSystems(user, resinSystemListQuerySchema.parse({ pageSize: '100' }))]);
   return (
     <div className="space-y-4">
