@@ -1,6 +1,7 @@
 import { NextResponse, type NextRequest } from 'next/server';
 import { getToken } from 'next-auth/jwt';
 import { authSecret } from '@/lib/auth/secret';
+import { IS_DEVELOPMENT } from '@/lib/env-public';
 import { MAX_BODY_BYTES } from '@/lib/http-limits';
 import { DOCUMENT_POLICY, contentSecurityPolicy, crossSiteRefusal, ownOrigins, securityHeaders, servedOverHttps } from '@/lib/security/headers';
 import { clientIp, reportLinkLimited, tooManyAttempts } from '@/lib/throttle';
@@ -56,7 +57,7 @@ export async function proxy(request: NextRequest) {
   if (/^\/r\/[^/]+\/pdf$/.test(pathname) || pathname.startsWith('/api/')) return finish(NextResponse.next(), DOCUMENT_POLICY);
 
   const nonce = Buffer.from(crypto.randomUUID()).toString('base64');
-  const policy = contentSecurityPolicy(nonce, { dev: process.env.NODE_ENV === 'development', https });
+  const policy = contentSecurityPolicy(nonce, { dev: IS_DEVELOPMENT, https });
   const requestHeaders = new Headers(request.headers);
   requestHeaders.set('x-nonce', nonce);
   requestHeaders.set('Content-Security-Policy', policy);

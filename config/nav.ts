@@ -1,4 +1,4 @@
-import { DESK_ROLES, FIELD_ROLES, type Role } from '@/lib/domain';
+import { DESK_ROLES, FIELD_ROLES, type Role , ADMIN_ONLY } from '@/lib/domain';
 import { REVIEW_COUNT_URL } from '@/lib/review/queue';
 
 // The one source of the desk and field navigation: plain data (href, label, who sees it) so the labels can
@@ -26,7 +26,7 @@ export const deskNav: NavItem[] = [
   { href: '/reviews', key: 'review', label: 'Review', roles: DESK_ROLES, countUrl: REVIEW_COUNT_URL },
   { href: '/invoices', key: 'invoices', label: 'Invoices', roles: DESK_ROLES },
   { href: '/insights', key: 'insights', label: 'Insights', roles: DESK_ROLES },
-  { href: '/admin', key: 'company', label: 'Company', roles: ['admin'] },
+  { href: '/admin', key: 'company', label: 'Company', roles: ADMIN_ONLY },
 ];
 
 export const fieldNav: NavItem[] = [{ href: '/today', key: 'today', label: 'Today', roles: FIELD_ROLES }];

@@ -18,4 +18,4 @@ function createSequelize() {
 }
 
 export const sequelize: Sequelize = globalForDb.setlineSequelize ?? createSequelize();
-if (process.env.NODE_ENV !== 'production') globalForDb.setlineSequelize = sequelize;
+if (env().NODE_ENV !== 'production') globalForDb.setlineSequelize = sequelize;

@@ -5,6 +5,8 @@ export const ROLES = ['admin', 'office', 'foreman', 'technician'] as const;
 export type Role = (typeof ROLES)[number];
 export const DESK_ROLES: readonly Role[] = ['admin', 'office'];
 export const FIELD_ROLES: readonly Role[] = ['foreman', 'technician'];
+/** Company settings, users and crews: admins only. */
+export const ADMIN_ONLY: readonly Role[] = ['admin'];
 
 export const UNIT_SYSTEMS = ['imperial', 'metric'] as const;
 export type UnitSystemName = (typeof UNIT_SYSTEMS)[number];

@@ -1,7 +1,9 @@
+import 'server-only';
 import type { Sequelize } from 'sequelize';
+import { sequelize } from '@/lib/db';
 
 /** True when the database answers a trivial query within the timeout. */
-export async function databaseUp(db: Sequelize, timeoutMs = 3000): Promise<boolean> {
+export async function databaseUp(db: Sequelize = sequelize, timeoutMs = 3000): Promise<boolean> {
   let timer: NodeJS.Timeout | undefined;
   const timeout = new Promise<false>((resolve) => {
     timer = setTimeout(() => resolve(false), timeoutMs);

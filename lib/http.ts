@@ -95,7 +95,7 @@ export async function readBodyText(request: Request, limit = MAX_BODY_BYTES): Pr
 const tooLarge = (limit: number) => new AppError(413, `The request body is larger than ${Math.round(limit / 1024)} KB.`);
 
 /** True when the request says its body is JSON (`application/json`, any parameters). */
-export const isJsonRequest = (request: Request) => /^application\/json\s*(;|$)/i.test(request.headers.get('content-type')?.trim() ?? '');
+const isJsonRequest = (request: Request) => /^application\/json\s*(;|$)/i.test(request.headers.get('content-type')?.trim() ?? '');
 
 /**
  * The JSON body of a request. Empty is a 400, a body that is not declared `application/json` is a 415
@@ -132,7 +132,7 @@ async function jsonBodyOf(request: Request, options: { unparsable: 'refuse' | 'u
  * PostgreSQL text cannot hold U+0000: a string carrying one would fail in the database as a 500. Refused here,
  * at the edge, for every key and value of a JSON body.
  */
-export function withoutNul<T>(value: T): T {
+function withoutNul<T>(value: T): T {
   const hasNul = (v: unknown): boolean => {
     if (typeof v === 'string') return v.includes('\u0000');
     if (Array.isArray(v)) return v.some(hasNul);

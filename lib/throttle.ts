@@ -57,7 +57,7 @@ export function clientIp(headers: Headers, hops = env().TRUSTED_PROXY): string {
   return (picked || 'unknown').slice(0, 64);
 }
 
-export const emailKey = (email: string) => email.trim().toLowerCase().slice(0, 200);
+const emailKey = (email: string) => email.trim().toLowerCase().slice(0, 200);
 
 /** Seconds to wait when sign-in is locked for this e-mail or address, else null. Read-only. */
 export async function signInLockedFor(email: string | null, ip: string): Promise<number | null> {
@@ -102,11 +102,6 @@ export async function reportLinkLimited(ip: string): Promise<number | null> {
     if (isLimiterResult(rejection)) return secondsOf(rejection.msBeforeNext);
     throw rejection;
   }
-}
-
-/** Clears every counter for a key (tests only: each test starts from zero for its own e-mail/address). */
-export async function resetThrottleForTests(kind: keyof Limiters, key: string) {
-  await limiters()[kind].delete(kind === 'signInEmail' ? emailKey(key) : key);
 }
 
 /** The answer to a throttled request: 429 with Retry-After and the message the sign-in page shows. */

@@ -17,3 +17,13 @@ export function decimal(precision: number, scale: number, options: { allowNull?:
     },
   };
 }
+
+/** The columns every tenant row of the materials tables starts with: id, company, timestamps. */
+export function tenantRowColumns() {
+  return {
+    id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+    companyId: { type: DataTypes.UUID, allowNull: false },
+    createdAt: DataTypes.DATE,
+    updatedAt: DataTypes.DATE,
+  };
+}

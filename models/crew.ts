@@ -11,15 +11,6 @@ export class Crew extends Model<InferAttributes<Crew>, InferCreationAttributes<C
   declare updatedAt: CreationOptional<Date>;
 }
 
-export class CrewMember extends Model<InferAttributes<CrewMember>, InferCreationAttributes<CrewMember>> {
-  declare id: CreationOptional<string>;
-  declare companyId: string;
-  declare crewId: string;
-  declare userId: string;
-  declare createdAt: CreationOptional<Date>;
-  declare updatedAt: CreationOptional<Date>;
-}
-
 export function initCrew(sequelize: Sequelize) {
   Crew.init(
     {
@@ -32,16 +23,5 @@ export function initCrew(sequelize: Sequelize) {
       updatedAt: DataTypes.DATE,
     },
     { sequelize, modelName: 'Crew', tableName: 'crews', underscored: true },
-  );
-  CrewMember.init(
-    {
-      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
-      companyId: { type: DataTypes.UUID, allowNull: false },
-      crewId: { type: DataTypes.UUID, allowNull: false },
-      userId: { type: DataTypes.UUID, allowNull: false },
-      createdAt: DataTypes.DATE,
-      updatedAt: DataTypes.DATE,
-    },
-    { sequelize, modelName: 'CrewMember', tableName: 'crew_members', underscored: true },
   );
 }

@@ -2,20 +2,59 @@ import 'server-only';
 import { sequelize } from '@/lib/db';
 import { Company, initCompany } from './company';
 import { User, initUser } from './user';
-import { Crew, CrewMember, initCrew } from './crew';
+import { Crew, initCrew } from './crew';
+import { CrewMember, initCrewMember } from './crew-member';
 import { Customer, initCustomer } from './customer';
-import { AccessPoint, Segment, Site, initSite } from './site';
-import { Job, Repair, initJob } from './job';
-import { ChecklistTemplate, Packer, ResinKit, ResinSystem, initMaterials } from './materials';
-import { Install, InstallEvent, initInstall } from './install';
-import { Attachment, AuditEntry, Review, initRecords } from './records';
-import { Invoice, InvoiceLine, PaymentEvent, initInvoice } from './invoice';
-import { ReportLink, ReportSend, initReportLink, initReportSend } from './report-send';
+import { Site, initSite } from './site';
+import { AccessPoint, initAccessPoint } from './access-point';
+import { Segment, initSegment } from './segment';
+import { Job, initJob } from './job';
+import { Repair, initRepair } from './repair';
+import { ResinSystem, initResinSystem } from './resin-system';
+import { ResinKit, initResinKit } from './resin-kit';
+import { Packer, initPacker } from './packer';
+import { ChecklistTemplate, initChecklistTemplate } from './checklist-template';
+import { Install, initInstall } from './install';
+import { InstallEvent, initInstallEvent } from './install-event';
+import { Attachment, initAttachment } from './attachment';
+import { Review, initReview } from './review';
+import { AuditEntry, initAuditEntry } from './audit-entry';
+import { Invoice, initInvoice } from './invoice';
+import { InvoiceLine, initInvoiceLine } from './invoice-line';
+import { PaymentEvent, initPaymentEvent } from './payment-event';
+import { ReportSend, initReportSend } from './report-send';
+import { ReportLink, initReportLink } from './report-link';
 
 // Initialise once per process (the module may be evaluated again by dev hot reload).
 const initialised = globalThis as unknown as { setlineModelsReady?: boolean };
 if (!initialised.setlineModelsReady || !Company.sequelize) {
-  for (const init of [initCompany, initUser, initCrew, initCustomer, initSite, initJob, initMaterials, initInstall, initRecords, initInvoice, initReportSend, initReportLink]) {
+  const inits = [
+    initCompany,
+    initUser,
+    initCrew,
+    initCrewMember,
+    initCustomer,
+    initSite,
+    initAccessPoint,
+    initSegment,
+    initJob,
+    initRepair,
+    initResinSystem,
+    initResinKit,
+    initPacker,
+    initChecklistTemplate,
+    initInstall,
+    initInstallEvent,
+    initAttachment,
+    initReview,
+    initAuditEntry,
+    initInvoice,
+    initInvoiceLine,
+    initPaymentEvent,
+    initReportSend,
+    initReportLink,
+  ];
+  for (const init of inits) {
     init(sequelize);
   }
   associate();

@@ -1,7 +1,7 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 import { decimal } from './columns';
 import type { StoredFold } from '@/lib/install/derived';
-import { INSTALL_EVENT_TYPES, INSTALL_STATUSES, type InstallEventType, type InstallStatus } from '@/lib/domain';
+import { INSTALL_EVENT_TYPES, INSTALL_STATUSES, InstallEventType, InstallStatus } from '@/lib/domain';
 
 /** One attempt at installing the patch of one repair. */
 export class Install extends Model<InferAttributes<Install>, InferCreationAttributes<Install>> {
@@ -48,22 +48,6 @@ export class Install extends Model<InferAttributes<Install>, InferCreationAttrib
   declare updatedAt: CreationOptional<Date>;
 }
 
-/** Append-only evidence: what was tapped on the device and when the server heard of it. */
-export class InstallEvent extends Model<InferAttributes<InstallEvent>, InferCreationAttributes<InstallEvent>> {
-  declare id: CreationOptional<string>;
-  declare companyId: string;
-  declare installId: string;
-  /** Made on the device; a replay of the same tap carries the same id. */
-  declare clientEventId: string;
-  declare type: InstallEventType;
-  declare deviceTime: Date;
-  declare receivedAt: CreationOptional<Date>;
-  declare userId: string;
-  declare payload: CreationOptional<Record<string, unknown>>;
-  declare correctsEventId: CreationOptional<string | null>;
-  declare createdAt: CreationOptional<Date>;
-}
-
 export function initInstall(sequelize: Sequelize) {
   Install.init(
     {
@@ -107,21 +91,5 @@ export function initInstall(sequelize: Sequelize) {
       updatedAt: DataTypes.DATE,
     },
     { sequelize, modelName: 'Install', tableName: 'installs', underscored: true },
-  );
-  InstallEvent.init(
-    {
-      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
-      companyId: { type: DataTypes.UUID, allowNull: false },
-      installId: { type: DataTypes.UUID, allowNull: false },
-      clientEventId: { type: DataTypes.UUID, allowNull: false },
-      type: { type: DataTypes.STRING(24), allowNull: false, validate: { isIn: [INSTALL_EVENT_TYPES] } },
-      deviceTime: { type: DataTypes.DATE, allowNull: false },
-      receivedAt: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
-      userId: { type: DataTypes.UUID, allowNull: false },
-      payload: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
-      correctsEventId: DataTypes.UUID,
-      createdAt: DataTypes.DATE,
-    },
-    { sequelize, modelName: 'InstallEvent', tableName: 'install_events', underscored: true, updatedAt: false },
   );
 }

@@ -1,6 +1,4 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import { decimal } from './columns';
-import { ACCESS_POINT_KINDS, PIPE_MATERIALS } from '@/lib/domain';
 
 export class Site extends Model<InferAttributes<Site>, InferCreationAttributes<Site>> {
   declare id: CreationOptional<string>;
@@ -12,36 +10,6 @@ export class Site extends Model<InferAttributes<Site>, InferCreationAttributes<S
   declare region: CreationOptional<string | null>;
   declare postalCode: CreationOptional<string | null>;
   declare notes: CreationOptional<string | null>;
-  declare archivedAt: CreationOptional<Date | null>;
-  declare createdAt: CreationOptional<Date>;
-  declare updatedAt: CreationOptional<Date>;
-}
-
-export class AccessPoint extends Model<InferAttributes<AccessPoint>, InferCreationAttributes<AccessPoint>> {
-  declare id: CreationOptional<string>;
-  declare companyId: string;
-  declare siteId: string;
-  declare label: string;
-  declare kind: (typeof ACCESS_POINT_KINDS)[number];
-  declare depthMm: CreationOptional<number | null>;
-  declare notes: CreationOptional<string | null>;
-  declare createdAt: CreationOptional<Date>;
-  declare updatedAt: CreationOptional<Date>;
-}
-
-/** A pipe run between two access points (the far end may be unknown, e.g. a lateral to the main). */
-export class Segment extends Model<InferAttributes<Segment>, InferCreationAttributes<Segment>> {
-  declare id: CreationOptional<string>;
-  declare companyId: string;
-  declare siteId: string;
-  declare fromAccessPointId: string;
-  declare toAccessPointId: CreationOptional<string | null>;
-  declare label: string;
-  declare material: (typeof PIPE_MATERIALS)[number];
-  declare nominalSizeMm: number;
-  declare insideDiameterMm: number;
-  declare lengthMm: number;
-  declare depthMm: CreationOptional<number | null>;
   declare archivedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -64,38 +32,5 @@ export function initSite(sequelize: Sequelize) {
       updatedAt: DataTypes.DATE,
     },
     { sequelize, modelName: 'Site', tableName: 'sites', underscored: true },
-  );
-  AccessPoint.init(
-    {
-      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
-      companyId: { type: DataTypes.UUID, allowNull: false },
-      siteId: { type: DataTypes.UUID, allowNull: false },
-      label: { type: DataTypes.STRING(60), allowNull: false },
-      kind: { type: DataTypes.STRING(16), allowNull: false, validate: { isIn: [ACCESS_POINT_KINDS] } },
-      depthMm: DataTypes.INTEGER,
-      notes: DataTypes.TEXT,
-      createdAt: DataTypes.DATE,
-      updatedAt: DataTypes.DATE,
-    },
-    { sequelize, modelName: 'AccessPoint', tableName: 'access_points', underscored: true },
-  );
-  Segment.init(
-    {
-      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
-      companyId: { type: DataTypes.UUID, allowNull: false },
-      siteId: { type: DataTypes.UUID, allowNull: false },
-      fromAccessPointId: { type: DataTypes.UUID, allowNull: false },
-      toAccessPointId: DataTypes.UUID,
-      label: { type: DataTypes.STRING(60), allowNull: false },
-      material: { type: DataTypes.STRING(24), allowNull: false, validate: { isIn: [PIPE_MATERIALS] } },
-      nominalSizeMm: { type: DataTypes.INTEGER, allowNull: false },
-      insideDiameterMm: decimal(7, 1, { allowNull: false }),
-      lengthMm: { type: DataTypes.INTEGER, allowNull: false },
-      depthMm: DataTypes.INTEGER,
-      archivedAt: DataTypes.DATE,
-      createdAt: DataTypes.DATE,
-      updatedAt: DataTypes.DATE,
-    },
-    { sequelize, modelName: 'Segment', tableName: 'segments', underscored: true },
   );
 }

@@ -1,6 +1,8 @@
 #!/usr/bin/env bash
-# npm test: installs what is missing, starts PostgreSQL, makes fresh test databases and runs
-# every suite (unit, integration, e2e; the e2e suite installs Debian's haproxy as root for tests/e2e/cluster.spec.ts). `npm test -- unit|integration|e2e` runs one suite.
+# npm test: installs what is missing, runs lint, typecheck and the format checks (failing fast), starts
+# PostgreSQL, makes fresh test databases and runs every suite (unit, integration, e2e; the e2e suite installs
+# Debian's haproxy as root for tests/e2e/cluster.spec.ts). `npm test -- unit|integration|e2e` runs one suite
+# (after the same checks).
 # Exits non-zero when any suite fails.
 set -uo pipefail
 source "$(dirname "${BASH_SOURCE[0]}")/common.sh"
@@ -11,6 +13,23 @@ REPORTS="$ROOT/.data/test-reports"
 rm -rf "$REPORTS"; mkdir -p "$REPORTS"
 
 ensure_dependencies
+
+# Static checks first, failing fast: no suite runs on code that does not lint or typecheck.
+# The format and line-length checks wait while `.format-pending` exists (the tree is formatted in one
+# commit on the merged branch; deleting that file switches them on). SKIP_STATIC_CHECKS=1 skips all of it.
+if [ "${SKIP_STATIC_CHECKS:-0}" != 1 ]; then
+  say "lint (eslint)"
+  npm run --silent lint || { say "lint FAILED: fix the errors above (npm run lint)"; exit 1; }
+  say "typecheck (tsc)"
+  npm run --silent typecheck || { say "typecheck FAILED (npm run typecheck)"; exit 1; }
+  if [ -f "$ROOT/.format-pending" ]; then
+    say "format and line-length checks skipped: .format-pending is present (delete it once the tree is formatted)"
+  else
+    say "format check (prettier) and line length"
+    npm run --silent format:check || { say "format check FAILED: run npm run format"; exit 1; }
+    npm run --silent lint:lines || { say "line-length check FAILED"; exit 1; }
+  fi
+fi
 
 # Fresh service fakes for every run, on their own ports so a running demo is left alone.
 stop_fakes test

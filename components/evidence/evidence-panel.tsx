@@ -2,8 +2,8 @@
 
 import { useId, useRef, useState } from 'react';
 import useSWR from 'swr';
-import type { AttachmentListResponse, UploadRequestResponse } from '@/app/api/attachments/route';
 import { buttonVariants } from '@/components/ui/button';
+import type { AttachmentListResponse, UploadRequestResponse } from '@/lib/data/attachments';
 import { fetchJson } from '@/lib/client/fetch-json';
 import { submitJson } from '@/lib/client/submit-json';
 import { ATTACHMENT_KINDS, label } from '@/lib/domain';

@@ -2,7 +2,7 @@
 
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
-import type { RevokeReportLinksResponse } from '@/app/api/jobs/[id]/report-links/route';
+import type { RevokeReportLinksResponse } from '@/lib/data/report-links';
 import { Button } from '@/components/ui/button';
 import { submitJson } from '@/lib/client/submit-json';
 

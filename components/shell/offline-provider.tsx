@@ -1,6 +1,7 @@
 'use client';
 
 import { useEffect } from 'react';
+import { IS_DEVELOPMENT } from '@/lib/env-public';
 
 /**
  * Registers the service worker (app/sw.ts) that lets field pages open without signal.
@@ -11,7 +12,7 @@ import { useEffect } from 'react';
 export function OfflineProvider({ children }: { children: React.ReactNode }) {
   useEffect(() => {
     // In development pages change on every save; a worker serving yesterday's copy confuses.
-    if (process.env.NODE_ENV === 'development' || !('serviceWorker' in navigator)) return;
+    if (IS_DEVELOPMENT || !('serviceWorker' in navigator)) return;
     // A classic script, not a module worker: module workers are missing from some tablets' browsers.
     navigator.serviceWorker.register('/serwist/sw.js', { scope: '/', type: 'classic' }).catch((error: unknown) => {
       console.error('Service worker registration failed', error);

@@ -47,11 +47,6 @@ export function outboxDb(): OutboxDb {
   return database;
 }
 
-/** The first pending entry in insertion order. */
-export function firstPending(): Promise<OutboxEntry | undefined> {
-  return pendingInOrder().first();
-}
-
 /**
  * The first pending entry that `userId` may send: their own, or one queued before entries carried
  * their user (sent under whoever is signed in, as it always was). Null `userId`: nobody known.

@@ -1,6 +1,6 @@
 import type { ResinClockSpec } from './types';
 
-/** The columns of a stored resin system that the clock needs (models/materials.ts ResinSystem). */
+/** The columns of a stored resin system that the clock needs (models/resin-system.ts). */
 export type ResinSystemRow = Omit<ResinClockSpec, 'sensitivity'> & {
   sensitivityKind: 'doubling' | 'arrhenius';
   doublingC: number | null;

@@ -23,6 +23,8 @@ const LOCKED_INSTALL_STATUSES = ['awaiting_review', 'approved'];
 type AttachmentRow = InferAttributes<Attachment>;
 export type EvidenceItem = Awaited<ReturnType<typeof itemOf>>;
 
+export type UploadRequestResponse = Awaited<ReturnType<typeof requestUpload>>;
+
 /**
  * Step 1 of an upload: checks who may add evidence to the repair or install, keeps a pending row and
  * answers with a presigned PUT that only takes the declared type and size. The key is ours, not the file name.
@@ -49,6 +51,8 @@ export async function requestUpload(user: SessionUser, input: UploadRequest) {
   });
   return { attachment: { id, status: 'pending' as const }, upload: await presignUpload(storageKey, input.contentType, input.byteSize) };
 }
+
+export type CompleteUploadResponse = Awaited<ReturnType<typeof completeUpload>>;
 
 /**
  * Step 2: the server looks at what really arrived. Wrong size or a type we do not take → the object and
@@ -104,6 +108,8 @@ export async function completeUpload(user: SessionUser, id: string) {
   if (!ready) throw notFound('Attachment');
   return itemOf(user, ready.get({ plain: true }), null);
 }
+
+export type AttachmentListResponse = Awaited<ReturnType<typeof listAttachments>>;
 
 /** The ready evidence of a repair, an install or a job, each with short-lived links to the file and its thumbnail. */
 export async function listAttachments(user: SessionUser, query: AttachmentListQuery) {

@@ -2,7 +2,7 @@ import 'server-only';
 import { randomUUID } from 'node:crypto';
 import type { z } from 'zod';
 import { ChecklistTemplate, Install } from '@/models';
-import type { ChecklistItem } from '@/models/materials';
+import type { ChecklistItem } from '@/models/checklist-template';
 import { sequelize } from '@/lib/db';
 import { notFound } from '@/lib/errors';
 import type { SessionUser } from '@/lib/auth/session';
@@ -12,6 +12,8 @@ import { assertAdmin } from './scope';
 import { archiveOrDelete, createAudited, lockOwnRow, updateAudited } from './records';
 
 const ENTITY = 'checklist_template';
+
+export type ChecklistTemplateListResponse = Awaited<ReturnType<typeof listChecklistTemplates>>;
 
 /**
  * A page of the company's check-list templates. A template is archived by making it inactive (a new
@@ -29,6 +31,8 @@ export async function listChecklistTemplates(user: SessionUser, query: Checklist
   });
   return pageOf(rows.map((row) => row.get({ plain: true })), count, query);
 }
+
+export type ChecklistTemplateResponse = Awaited<ReturnType<typeof getChecklistTemplate>>;
 
 export async function getChecklistTemplate(user: SessionUser, id: string) {
   const row = await ChecklistTemplate.findOne({ where: { id, companyId: user.companyId } });

@@ -9,6 +9,8 @@ import { assertAdmin } from './scope';
 
 const ENTITY = 'company';
 
+export type CompanyResponse = Awaited<ReturnType<typeof getCompany>>;
+
 /** The caller's company settings (time zone, units, planning margins). */
 export async function getCompany(user: SessionUser) {
   const company = await Company.findByPk(user.companyId);

@@ -22,6 +22,8 @@ function visibleCrews(user: SessionUser) {
   return isDeskRole(user.role) ? undefined : { id: { [Op.in]: user.crewIds } };
 }
 
+export type CrewListResponse = Awaited<ReturnType<typeof listCrews>>;
+
 /** A page of crews, each with its members. */
 export async function listCrews(user: SessionUser, query: CrewListQuery, exportAll = false) {
   const where = allOf({ companyId: user.companyId }, archivedWhere(query.archived), searchWhere(query.q, ['name']), visibleCrews(user));
@@ -29,6 +31,8 @@ export async function listCrews(user: SessionUser, query: CrewListQuery, exportA
   const members = await membersOf(user, rows.map((row) => row.id));
   return pageOf(rows.map((row) => ({ ...row.get({ plain: true }), members: members.get(row.id) ?? [] })), count, query);
 }
+
+export type CrewResponse = Awaited<ReturnType<typeof getCrew>>;
 
 /** One crew with its members; 404 when it is another company's or (for field users) not theirs. */
 export async function getCrew(user: SessionUser, id: string) {

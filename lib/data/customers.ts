@@ -12,6 +12,8 @@ import { archiveOrDelete, createAudited, lockOwnRow, updateAudited } from './rec
 
 const ENTITY = 'customer';
 
+export type CustomerListResponse = Awaited<ReturnType<typeof listCustomers>>;
+
 /** A page of the caller's customers (field users: only those of their crews' jobs). */
 export async function listCustomers(user: SessionUser, query: CustomerListQuery, exportAll = false) {
   const where = allOf(

@@ -61,6 +61,8 @@ export async function createInstall(user: SessionUser, input: CreateInstallInput
   }
 }
 
+export type InstallViewResponse = Awaited<ReturnType<typeof getInstallView>>;
+
 /** Everything the install screen needs in one read; never throws on a half-recorded install. */
 export async function getInstallView(user: SessionUser, id: string, now = new Date()) {
   const install = await findInstallFor(user, id);
@@ -219,3 +221,7 @@ function ruledPatchLength(defectLengthMm: number, overlapPerEndMm: number): numb
     throw error;
   }
 }
+
+/** The answers of POST /api/installs/:id/events and POST /api/installs. */
+export type RecordEventResponse = { event: InstallEventRow };
+export type CreateInstallResponse = { install: InstallRow };

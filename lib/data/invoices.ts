@@ -34,6 +34,8 @@ const detailInclude = [
   },
 ];
 
+export type InvoiceListResponse = Awaited<ReturnType<typeof listInvoices>>;
+
 export async function listInvoices(user: SessionUser, query: InvoiceListQuery, exportAll = false) {
   assertOfficeWriter(user); // invoices are the office's business: field roles read none either
   const { rows, count } = await Invoice.findAndCountAll({

@@ -29,6 +29,8 @@ export type JobDetail = Plain<Job> & {
   repairs: (Plain<Repair> & { segment: Plain<Segment> })[];
 };
 
+export type JobListResponse = Awaited<ReturnType<typeof listJobs>>;
+
 /** A page of the caller's jobs (field users: their crews' only), filtered and sorted as asked. */
 export async function listJobs(user: SessionUser, query: Omit<JobListQuery, 'archived'> & Partial<Pick<JobListQuery, 'archived'>>, exportAll = false) {
   const where = allOf(
@@ -80,6 +82,8 @@ export async function getJob(user: SessionUser, id: string) {
   });
   return job ? (job.get({ plain: true }) as JobDetail) : null;
 }
+
+export type JobResponse = Awaited<ReturnType<typeof findJob>>;
 
 /** getJob for pages and routes that want a 404 rather than null. */
 export async function findJob(user: SessionUser, id: string): Promise<JobDetail> {
@@ -187,7 +191,7 @@ export async function archiveJob(user: SessionUser, id: string, reason?: string 
  * row's lock until the transaction ends, so concurrent creates queue and never share a number; a number
  * is only given back if the whole create rolls back. A missing row starts after the year's highest number.
  */
-export async function nextJobNumber(companyId: string, timeZone: string, transaction: Transaction): Promise<string> {
+async function nextJobNumber(companyId: string, timeZone: string, transaction: Transaction): Promise<string> {
   const year = Number(dayInZone(new Date(), timeZone).slice(0, 4));
   const [row] = await sequelize.query<{ last_number: number }>(
     `INSERT INTO job_number_sequences (company_id, year, last_number)

@@ -12,6 +12,8 @@ import { archiveOrDelete, createAudited, lockOwnRow, updateAudited } from './rec
 
 const ENTITY = 'packer';
 
+export type PackerListResponse = Awaited<ReturnType<typeof listPackers>>;
+
 /** A page of the company's packers; every signed-in user of the company may read them (the crew picks one on site). */
 export async function listPackers(user: SessionUser, query: PackerListQuery, exportAll = false) {
   const { rows, count } = await Packer.findAndCountAll({
@@ -21,6 +23,8 @@ export async function listPackers(user: SessionUser, query: PackerListQuery, exp
   });
   return pageOf(rows.map((row) => row.get({ plain: true })), count, query);
 }
+
+export type PackerResponse = Awaited<ReturnType<typeof getPacker>>;
 
 export async function getPacker(user: SessionUser, id: string) {
   const row = await Packer.findOne({ where: { id, companyId: user.companyId } });

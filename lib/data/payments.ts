@@ -104,7 +104,7 @@ export async function applyPaymentEvent(event: Stripe.Event): Promise<PaymentOut
 /** The fields of a completed session that the webhook reads (checked by completedSessionSchema). */
 type PaidSession = z.infer<typeof completedSessionSchema>['session'];
 
-export function problemOf(
+function problemOf(
   invoice: Pick<Invoice, 'status' | 'totalCents' | 'currency'>,
   session: Pick<PaidSession, 'amount_total' | 'currency'>,
 ): PaymentProblem | null {
@@ -116,7 +116,7 @@ export function problemOf(
 }
 
 /** The sentence of a payment alert, for the office. */
-export function alertText(problem: PaymentProblem, invoice: Pick<Invoice, 'number' | 'status' | 'totalCents' | 'currency'>, paid: { amountCents: number | null; currency: string | null }) {
+function alertText(problem: PaymentProblem, invoice: Pick<Invoice, 'number' | 'status' | 'totalCents' | 'currency'>, paid: { amountCents: number | null; currency: string | null }) {
   const amount = paid.amountCents === null ? 'an unknown amount' : formatMoney(paid.amountCents, paid.currency ?? invoice.currency);
   const settle = 'refund it or settle it with the customer.';
   switch (problem) {

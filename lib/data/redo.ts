@@ -15,10 +15,12 @@ import { findInstallFor, type InstallRow } from './installs';
 export const REDO_ROLES = ['foreman', 'admin'] as const;
 
 /** Why an install cannot be redone, or null when it can: only a failed inspection or a sent-back install. */
-export function redoProblem(install: Pick<InstallRow, 'status' | 'inspectionResult'>): string | null {
+function redoProblem(install: Pick<InstallRow, 'status' | 'inspectionResult'>): string | null {
   if (install.inspectionResult === 'fail' || install.status === 'sent_back') return null;
   return 'Only an install whose inspection failed, or one the office sent back, can be redone.';
 }
+
+export type RedoInstallResponse = Awaited<ReturnType<typeof redoInstall>>;
 
 /**
  * Starts a new install on the same repair, linked to the one it replaces; both are kept. The id may

@@ -29,6 +29,8 @@ export type RepairDetail = Plain<Repair> & {
   installCount: number;
 };
 
+export type RepairListResponse = Awaited<ReturnType<typeof listRepairs>>;
+
 /**
  * A page of the caller's repairs (field users: of their crews' jobs). A cancelled repair counts as archived:
  * hidden unless `archived` or the status filter asks for it.
@@ -57,6 +59,8 @@ export async function listRepairs(user: SessionUser, query: RepairListQuery, exp
   });
   return pageOf(rows.map((row) => row.get({ plain: true }) as RepairListItem), count, query);
 }
+
+export type RepairResponse = Awaited<ReturnType<typeof getRepair>>;
 
 /** One repair with its job, segment, chosen packer and install count; 404 when it is not the caller's to see. */
 export async function getRepair(user: SessionUser, id: string): Promise<RepairDetail> {

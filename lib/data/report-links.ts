@@ -23,6 +23,8 @@ export async function isLinkLive(claims: Pick<LinkClaims, 'linkId' | 'jobId' | '
   return !!row && row.revokedAt === null;
 }
 
+export type RevokeReportLinksResponse = Awaited<ReturnType<typeof revokeReportLinks>>;
+
 /**
  * Revokes every link of the job made so far (office and admins). Sends still queued would carry a dead
  * link, so they are failed with a note in the same transaction. Answers when the links stopped working.

@@ -15,6 +15,8 @@ import { assertOfficeWriter } from './scope';
 /** Job statuses from which the report may be (re-)sent. */
 const SENDABLE = ['approved', 'reported'];
 
+export type ReportSendResponse = Awaited<ReturnType<typeof requestReportSend>>;
+
 /**
  * Queues the repair report of a job for e-mail. Refuses (409) until every repair of the job has an
  * approved install, and (422) when there is nobody to send it to.
@@ -45,6 +47,8 @@ export async function requestReportSend(user: SessionUser, jobId: string, input:
   });
   return send.get({ plain: true });
 }
+
+export type ReportSendsResponse = Awaited<ReturnType<typeof listReportSends>>;
 
 /** The send log of a job, newest first. */
 export async function listReportSends(user: SessionUser, jobId: string) {

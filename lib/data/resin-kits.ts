@@ -19,6 +19,8 @@ const ENTITY = 'resin_kit';
 const systemName = { model: ResinSystem, as: 'resinSystem', attributes: ['id', 'name', 'archivedAt'] };
 type KitWithSystem = InferAttributes<ResinKit> & { resinSystem: { id: string; name: string; archivedAt: Date | null } };
 
+export type ResinKitListResponse = Awaited<ReturnType<typeof listResinKits>>;
+
 /** A page of the company's kits, each with its resin system's name and whether it has expired (company's calendar day). */
 export async function listResinKits(user: SessionUser, query: ResinKitListQuery, exportAll = false) {
   const today = await todayOf(user);
@@ -37,6 +39,8 @@ export async function listResinKits(user: SessionUser, query: ResinKitListQuery,
   });
   return pageOf(rows.map((row) => withExpiry(row.get({ plain: true }) as KitWithSystem, today)), count, query);
 }
+
+export type ResinKitResponse = Awaited<ReturnType<typeof getResinKit>>;
 
 /**
  * One kit with the installs that used it, newest first (field users see only their crews' installs;

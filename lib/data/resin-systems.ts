@@ -12,6 +12,8 @@ import { archiveOrDelete, createAudited, lockOwnRow, updateAudited } from './rec
 
 const ENTITY = 'resin_system';
 
+export type ResinSystemListResponse = Awaited<ReturnType<typeof listResinSystems>>;
+
 /** A page of the company's resin systems; every signed-in user of the company may read them (the crew's clock needs them). */
 export async function listResinSystems(user: SessionUser, query: ResinSystemListQuery, exportAll = false) {
   const { rows, count } = await ResinSystem.findAndCountAll({
@@ -26,6 +28,8 @@ export async function listResinSystems(user: SessionUser, query: ResinSystemList
   });
   return pageOf(rows.map((row) => row.get({ plain: true })), count, query);
 }
+
+export type ResinSystemResponse = Awaited<ReturnType<typeof getResinSystem>>;
 
 /** One resin system with how many kits and installs name it. */
 export async function getResinSystem(user: SessionUser, id: string) {

@@ -22,6 +22,8 @@ import { assertOfficeWriter } from './scope';
 type Plain<M extends Model> = InferAttributes<M>;
 type Company = Awaited<ReturnType<typeof getCompany>>;
 
+export type InstallListResponse = Awaited<ReturnType<typeof listInstalls>>;
+
 /**
  * A page of the company's installs with their quality flags (field users: only their crews').
  * `sort=severity` orders in SQL by the worst flag kept on each install's row (plus the two that time passing
@@ -58,11 +60,6 @@ export async function listInstalls(user: SessionUser, query: InstallListQuery, e
 }
 
 export type InstallListItem = Awaited<ReturnType<typeof itemsOf>>[number];
-
-/** How many installs wait for the office (the count beside "Review" in the desk navigation). */
-export async function countAwaitingReview(user: SessionUser) {
-  return Install.count({ where: allOf({ companyId: user.companyId, status: 'awaiting_review' }, crewScope(user)) });
-}
 
 /**
  * Everything the review page (and the repair report) shows of one install: the install view of the
@@ -110,6 +107,8 @@ export async function getInstallReview(user: SessionUser, id: string, now = new 
     }),
   };
 }
+
+export type ReviewInstallResponse = Awaited<ReturnType<typeof reviewInstall>>;
 
 /**
  * The office approves a signed-off install or sends it back to the crew with a comment. The review,

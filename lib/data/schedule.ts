@@ -39,6 +39,8 @@ export type BoardCell = { date: string; jobs: BoardJob[]; count: number; overCap
 export type BoardCrew = { id: string; name: string; dailyCapacity: number; archived: boolean; cells: BoardCell[] };
 export type ScheduleBoard = Awaited<ReturnType<typeof getScheduleBoard>>;
 
+export type ScheduleBoardResponse = Awaited<ReturnType<typeof getScheduleBoard>>;
+
 /**
  * The crew schedule for the week holding `week` (default: this week in the company's zone): the company's
  * active crews (and any archived crew still holding a job that week) × the seven days, with each day's jobs
@@ -93,6 +95,8 @@ export async function getScheduleBoard(user: SessionUser, week?: string, now = n
     unscheduled,
   };
 }
+
+export type ScheduleJobResponse = Awaited<ReturnType<typeof scheduleJob>>;
 
 /**
  * Puts a job on a crew's day. A draft becomes scheduled; a job already under way on site, settled or

@@ -22,6 +22,8 @@ export type SegmentDetail = Plain<Segment> & {
   repairs: (Plain<Repair> & { job: Pick<Plain<Job>, 'id' | 'number' | 'status'> | null })[];
 };
 
+export type SegmentListResponse = Awaited<ReturnType<typeof listSegments>>;
+
 /** A page of the caller's segments (field users: only those on the sites of their crews' jobs). */
 export async function listSegments(user: SessionUser, query: SegmentListQuery, exportAll = false) {
   const where = allOf(
@@ -39,6 +41,8 @@ export async function listSegments(user: SessionUser, query: SegmentListQuery, e
   });
   return pageOf(rows.map((row) => row.get({ plain: true }) as SegmentListItem), count, query);
 }
+
+export type SegmentResponse = Awaited<ReturnType<typeof getSegment>>;
 
 /** One segment with its site, both access points and the repairs planned on it. */
 export async function getSegment(user: SessionUser, id: string): Promise<SegmentDetail> {

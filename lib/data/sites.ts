@@ -17,6 +17,8 @@ type Plain<T extends Site | Customer | AccessPoint | Segment> = InferAttributes<
 export type SiteListItem = Plain<Site> & { customer: Pick<Plain<Customer>, 'id' | 'name'> | null };
 export type SiteDetail = Plain<Site> & { customer: Plain<Customer>; accessPoints: Plain<AccessPoint>[]; segments: Plain<Segment>[] };
 
+export type SiteListResponse = Awaited<ReturnType<typeof listSites>>;
+
 /** A page of the caller's sites (field users: only those of their crews' jobs). */
 export async function listSites(user: SessionUser, query: SiteListQuery, exportAll = false) {
   const where = allOf(
@@ -34,6 +36,8 @@ export async function listSites(user: SessionUser, query: SiteListQuery, exportA
   });
   return pageOf(rows.map((row) => row.get({ plain: true }) as SiteListItem), count, query);
 }
+
+export type SiteResponse = Awaited<ReturnType<typeof getSite>>;
 
 /** One site with its customer, access points and segments; 404 when it is not the caller's to see. */
 export async function getSite(user: SessionUser, id: string): Promise<SiteDetail> {

@@ -24,6 +24,8 @@ const publicUser = (row: User): PublicUser => {
   return Object.fromEntries(PUBLIC_ATTRIBUTES.map((key) => [key, plain[key]])) as PublicUser;
 };
 
+export type UserListResponse = Awaited<ReturnType<typeof listUsers>>;
+
 /** A page of the company's users (admin only). */
 export async function listUsers(user: SessionUser, query: UserListQuery, exportAll = false) {
   assertAdmin(user);
@@ -41,6 +43,8 @@ export async function listUsers(user: SessionUser, query: UserListQuery, exportA
   });
   return pageOf(rows.map(publicUser), count, query);
 }
+
+export type UserResponse = Awaited<ReturnType<typeof getUser>>;
 
 /** One user of the caller's company with the crews they belong to (admin only). */
 export async function getUser(user: SessionUser, id: string) {

@@ -11,7 +11,7 @@ export const REPORT_QUEUE = 'report-send';
 export const REPORT_SWEEP_QUEUE = 'report-sweep';
 /** Removes uploads that were requested but never completed. */
 export const UPLOAD_SWEEP_QUEUE = 'upload-sweep';
-export const QUEUES = [REPORT_QUEUE, REPORT_SWEEP_QUEUE, UPLOAD_SWEEP_QUEUE] as const;
+const QUEUES = [REPORT_QUEUE, REPORT_SWEEP_QUEUE, UPLOAD_SWEEP_QUEUE] as const;
 export type ReportJob = { sendId: string };
 
 const globalForBoss = globalThis as unknown as { setlineBoss?: Promise<PgBoss> };
@@ -38,7 +38,7 @@ export async function enqueueReportSend(sendId: string, transaction?: Transactio
 }
 
 /** Retries with exponential backoff; REPORT_RETRY_* override the defaults (tests use short ones). */
-export function retryPolicy() {
+function retryPolicy() {
   const e = env();
   return {
     retryLimit: e.REPORT_RETRY_LIMIT,

@@ -43,4 +43,4 @@ ${p(escapeHtml(closing), 'font-size:13px;color:#475569')}
   return { subject, html, text };
 }
 
-export const escapeHtml = (value: string) => value.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
+const escapeHtml = (value: string) => value.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);

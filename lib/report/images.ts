@@ -1,9 +1,9 @@
 import 'server-only';
-import { GetObjectCommand, S3Client } from '@aws-sdk/client-s3';
-import { env } from '@/lib/env';
+import { headObject, readObject } from '@/lib/storage/s3';
 
-// Before/after/inspection images for the report. The bytes live in object storage (S3_* settings);
-// an image that cannot be read is left out rather than failing the whole report.
+// Before/after/inspection images for the report. The bytes live in object storage, read through the one
+// storage client of lib/storage (its settings: endpoint, region, path style); an image that cannot be read
+// is left out rather than failing the whole report.
 
 export type ReportImage = {
   id: string;
@@ -37,28 +37,14 @@ export async function loadReportImages(attachments: readonly AttachmentRow[]): P
   return images.filter((image): image is ReportImage => image !== null);
 }
 
-/** The stored bytes of one object, or null when storage is not configured or the read fails. */
-export async function fetchImageBytes(key: string): Promise<Buffer | null> {
-  const bucket = env().S3_BUCKET;
-  if (!bucket || !env().S3_ENDPOINT) return null;
+/** The stored bytes of one object, or null when it is missing, too large for a report or not readable. */
+async function fetchImageBytes(key: string): Promise<Buffer | null> {
   try {
-    const answer = await client().send(new GetObjectCommand({ Bucket: bucket, Key: key }));
-    const bytes = Buffer.from((await answer.Body?.transformToByteArray()) ?? []);
-    return bytes.length > 0 && bytes.length <= MAX_BYTES ? bytes : null;
+    const head = await headObject(key);
+    if (!head || head.byteSize === 0 || head.byteSize > MAX_BYTES) return null;
+    return await readObject(key);
   } catch (error) {
     console.error('report image not readable', key, error instanceof Error ? error.message : error);
     return null;
   }
-}
-
-function client() {
-  const e = env();
-  return new S3Client({
-    endpoint: e.S3_ENDPOINT,
-    region: e.S3_REGION ?? 'us-east-1',
-    forcePathStyle: true,
-    credentials: { accessKeyId: e.S3_ACCESS_KEY_ID ?? '', secretAccessKey: e.S3_SECRET_ACCESS_KEY ?? '' },
-    requestChecksumCalculation: 'WHEN_REQUIRED',
-    responseChecksumValidation: 'WHEN_REQUIRED',
-  });
 }

@@ -69,7 +69,7 @@ function appBaseUrl() {
 }
 
 /** REPORT_LINK_SECRET (lib/env): its own key, never derived from the session secret. */
-export function reportLinkSecret(): Buffer {
+function reportLinkSecret(): Buffer {
   return Buffer.from(env().REPORT_LINK_SECRET);
 }
 

@@ -1,7 +1,6 @@
 import 'server-only';
 import { createHash } from 'node:crypto';
-import { Op } from 'sequelize';
-import { Attachment, ReportSend } from '@/models';
+import { reportVersionInputs } from '@/lib/data/report-delivery';
 import { headObject, putObject, readObject } from '@/lib/storage/s3';
 import { buildReportData, type ReportData } from './data';
 import { renderReportPdf, reportFileName } from './pdf';
@@ -35,20 +34,15 @@ export async function cachedReportPdf(companyId: string, jobId: string, given: {
 
 /** The report version of a job (hex digest), or null when the job is not there. Reads rows only, no images. */
 export async function reportVersion(companyId: string, jobId: string): Promise<string | null> {
-  const [data, evidence, lastSend] = await Promise.all([
+  const [data, inputs] = await Promise.all([
     buildReportData(companyId, jobId, { images: false }),
-    Attachment.findAll({
-      where: { companyId, jobId, kind: { [Op.in]: ['before', 'after', 'inspection'] } },
-      attributes: ['id', 'status', 'storageKey', 'caption', 'updatedAt'],
-      order: [['id', 'ASC']],
-    }),
-    ReportSend.findOne({ where: { companyId, jobId, status: 'sent' }, attributes: ['id'], order: [['sentAt', 'DESC']] }),
+    reportVersionInputs(companyId, jobId),
   ]);
   if (!data) return null;
   const digest = createHash('sha256');
   digest.update(JSON.stringify({ ...data, preparedAt: null }));
-  digest.update(JSON.stringify(evidence.map((row) => row.get({ plain: true }))));
-  digest.update(lastSend?.id ?? '-');
+  digest.update(JSON.stringify(inputs.evidence));
+  digest.update(inputs.lastSendId ?? '-');
   return digest.digest('hex').slice(0, 40);
 }
 

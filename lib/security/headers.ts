@@ -20,7 +20,7 @@ export function storageOrigins(e: Env = env()): string[] {
 }
 
 /** Where "Pay now" sends the browser (a form post answered with a redirect, which form-action also governs). */
-export function checkoutOrigin(e: Env = env()): string {
+function checkoutOrigin(e: Env = env()): string {
   if (e.PAYMENT_CHECKOUT_ORIGIN) return new URL(e.PAYMENT_CHECKOUT_ORIGIN).origin;
   if (e.STRIPE_API_URL) return new URL(e.STRIPE_API_URL).origin;
   return 'https://checkout.stripe.com';

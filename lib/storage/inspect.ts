@@ -1,7 +1,7 @@
 import 'server-only';
 import { fileTypeFromBuffer } from 'file-type';
 import sharp from 'sharp';
-import { THUMBNAIL_WIDTH, allowedType } from './limits';
+import { THUMBNAIL_WIDTH } from './limits';
 
 /** The real type of a file from its first bytes (never from its name or the type the browser claimed). */
 export async function sniffType(firstBytes: Buffer): Promise<{ mime: string; ext: string } | null> {
@@ -11,8 +11,6 @@ export async function sniffType(firstBytes: Buffer): Promise<{ mime: string; ext
   if (found.mime === 'video/x-m4v') return { mime: 'video/mp4', ext: 'mp4' };
   return { mime: found.mime, ext: found.ext };
 }
-
-export const isAllowedSniffed = (mime: string) => !!allowedType(mime);
 
 /**
  * A small WebP preview of an image: turned upright by its EXIF orientation, metadata (place, device)

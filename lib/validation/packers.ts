@@ -55,7 +55,7 @@ export type PackerFormValues = PackerValues & { name: string; serial?: string | 
 export const packerFormSchema = (system: UnitSystem) => inCompanyUnits<PackerInput, PackerFormValues>((v) => packerToSi(v, system), packerSchemaIn(system));
 
 /** Entered values → SI body: whole millimetres and tenths of a kPa, as the columns keep them. */
-export function packerToSi(v: PackerFormValues, system: UnitSystem) {
+function packerToSi(v: PackerFormValues, system: UnitSystem) {
   const length = ifFinite((value) => roundTo(lengthToSi(value, system, 'short'), 0));
   const pressure = ifFinite((value) => roundTo(pressureToSi(value, system), 1));
   return {

@@ -109,7 +109,7 @@ export const resinSystemFormSchema = (system: UnitSystem) =>
   inCompanyUnits<ResinSystemInput, ResinSystemFormValues>((v) => resinSystemToSi(v, system), inputSchemaIn(system));
 
 /** Entered values → SI body. Absolute temperatures take the 32 °F offset; the doubling step is a difference and does not. */
-export function resinSystemToSi(v: ResinSystemFormValues, system: UnitSystem) {
+function resinSystemToSi(v: ResinSystemFormValues, system: UnitSystem) {
   const abs = ifFinite((value) => roundTo(temperatureToSi(value, system), 2));
   const step = ifFinite((value) => roundTo(temperatureDifferenceToSi(value, system), 2));
   return {

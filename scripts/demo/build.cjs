@@ -1,16 +1,16 @@
 'use strict';
 // Builders for the invented demo scenario: rows for bulkInsert, dates relative to "now" so the
 // scenario always has past, today's and coming work. Every name, address and number here is made up.
+// Plans, clocks and money come from the app's own TypeScript modules (domain.cjs), never from copies here.
 const { randomUUID } = require('node:crypto');
 const { TZDate } = require('@date-fns/tz');
+const { dayInZone, invoiceTotals, patchLength, resinClockSpec, timeFactor } = require('./domain.cjs');
 
 const MIN = 60_000;
 const DAY = 86_400_000;
 
-/** YYYY-MM-DD of an instant in a time zone. */
-function dayIn(instant, timeZone) {
-  return new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).format(instant);
-}
+/** YYYY-MM-DD of an instant in a time zone (lib/dates). */
+const dayIn = (instant, timeZone) => dayInZone(instant, timeZone);
 
 /** The instant of local hh:mm on the calendar day `offsetDays` from now, in the zone. */
 function localTime(now, timeZone, offsetDays, hh, mm) {
@@ -23,12 +23,18 @@ function row(companyId, fields, now) {
   return { id: randomUUID(), company_id: companyId, created_at: now, updated_at: now, ...fields };
 }
 
-/** A resin time at the reference temperature moved to another temperature (doubling rule or Arrhenius). */
+/** A resin row (snake_case, as inserted) as the clock's spec (lib/cure/resin-spec). */
+const clockSpecOf = (resin) =>
+  resinClockSpec({
+    refTempC: resin.ref_temp_c, potLifeMin: resin.pot_life_min, holdMin: resin.hold_min, fullCureMin: resin.full_cure_min,
+    minTempC: resin.min_temp_c, maxTempC: resin.max_temp_c, sensitivityKind: resin.sensitivity_kind,
+    doublingC: resin.doubling_c ?? null, activationEnergyKj: resin.activation_energy_kj ?? null,
+  });
+
+/** A resin time at the reference temperature moved to another temperature (lib/cure timeFactor). */
 function corrected(minutes, resin, tempC) {
-  if (resin.sensitivity_kind === 'doubling') return minutes * Math.pow(2, (resin.ref_temp_c - tempC) / resin.doubling_c);
-  const R = 8.314462618; // J/(mol·K), CODATA 2018
-  const k = (c) => c + 273.15;
-  return minutes * Math.exp(((resin.activation_energy_kj * 1000) / R) * (1 / k(tempC) - 1 / k(resin.ref_temp_c)));
+  const spec = clockSpecOf(resin);
+  return minutes * timeFactor(spec.sensitivity, spec.refTempC, tempC);
 }
 
 /**
@@ -78,7 +84,7 @@ function installEvents({ companyId, installId, userId, start, resin, mixTempC, p
   return { events, startedAt: new Date(t0), finishedAt: new Date(deflated + 20 * MIN) };
 }
 
-module.exports = { MIN, DAY, dayIn, localTime, row, corrected, installEvents };
+module.exports = { MIN, DAY, dayIn, localTime, row, corrected, clockSpecOf, installEvents };
 
 /**
  * Turns a company's scenario spec into rows, table by table, in foreign-key order.
@@ -142,7 +148,8 @@ function buildCompany(spec, { now, passwordHash }) {
     t.jobs.push(job);
     j.repairs.forEach((r, position) => {
       const segment = site.segs[r.segment ?? 0];
-      const patch = Math.ceil((r.defect_length_mm + 2 * spec.company.min_overlap_per_end_mm) / 50) * 50;
+      // The app's patch length (lib/sizing): the defect plus the company's overlap at each end, not rounded.
+      const patch = patchLength({ defectLengthMm: r.defect_length_mm, overlapPerEndMm: spec.company.min_overlap_per_end_mm });
       const repair = row(C, {
         job_id: job.id, segment_id: segment.id, from_access_point_id: segment.from_access_point_id, position: position + 1,
         distance_mm: r.distance_mm, defect_type: r.defect_type, condition_grade: r.condition_grade, defect_length_mm: r.defect_length_mm,
@@ -209,8 +216,8 @@ function addReportSend(t, C, job, now) {
 }
 
 /**
- * An invoice of one line per repair of the job, at an invented price, money in integer cents with the app's
- * rounding (lib/invoice/money.ts: line half up, tax on the subtotal half up).
+ * An invoice of one line per repair of the job, at an invented price; amounts, tax and totals from the app's
+ * own lib/invoice/money.ts.
  */
 function addInvoice(t, C, job, spec, now) {
   const repairs = t.repairs.filter((r) => r.job_id === job.id);
@@ -219,10 +226,10 @@ function addInvoice(t, C, job, spec, now) {
   const lines = repairs.map((repair, i) => row(C, { invoice_id: invoice.id, repair_id: repair.id, position: i + 1,
     description: `Point repair ${repair.position}: ${repair.defect_type.replace(/_/g, ' ')} at ${(repair.distance_mm / 304.8).toFixed(0)} ft`,
     quantity: 1, unit_price_cents: spec.price_cents, amount_cents: spec.price_cents }, now));
-  const subtotal = lines.reduce((sum, line) => sum + line.amount_cents, 0);
-  const tax = Math.floor((subtotal * spec.tax_rate_bp + 5000) / 10_000);
-  Object.assign(invoice, { subtotal_cents: subtotal, tax_cents: tax, total_cents: subtotal + tax,
-    paid_at: spec.status === 'paid' ? now : null, paid_cents: spec.status === 'paid' ? subtotal + tax : null });
+  const totals = invoiceTotals(lines.map((line) => ({ quantity: line.quantity, unitPriceCents: line.unit_price_cents })), spec.tax_rate_bp);
+  lines.forEach((line, i) => { line.amount_cents = totals.amounts[i]; });
+  Object.assign(invoice, { subtotal_cents: totals.subtotalCents, tax_cents: totals.taxCents, total_cents: totals.totalCents,
+    paid_at: spec.status === 'paid' ? now : null, paid_cents: spec.status === 'paid' ? totals.totalCents : null });
   t.invoices.push(invoice);
   t.invoice_lines.push(...lines);
 }

@@ -2,6 +2,7 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany, getSettingsCounts } from '@/lib/data/company';
+import { ADMIN_ONLY } from '@/lib/domain';
 import { formatLength } from '@/lib/units';
 import { PageHeader } from '@/components/ui/page-header';
 
@@ -9,7 +10,7 @@ export const metadata: Metadata = { title: 'Company settings' };
 
 /** The admin's settings index: one card per thing the company sets up, with how many there are. */
 export default async function Page() {
-  const user = await requirePageUser(['admin']);
+  const user = await requirePageUser(ADMIN_ONLY);
   const [company, counts] = await Promise.all([getCompany(user), getSettingsCounts(user)]);
   const sections = [
     {

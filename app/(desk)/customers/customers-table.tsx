@@ -4,7 +4,7 @@ import type { ColumnDef } from '@tanstack/react-table';
 import Link from 'next/link';
 import { DataTable } from '@/components/ui/data-table';
 import { label } from '@/lib/domain';
-import type { CustomerListResponse } from '@/app/api/customers/route';
+import type { CustomerListResponse } from '@/lib/data/customers';
 
 type Row = CustomerListResponse['items'][number];
 

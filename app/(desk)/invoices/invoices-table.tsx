@@ -5,7 +5,7 @@ import Link from 'next/link';
 import { Badge, StatusBadge } from '@/components/ui/badge';
 import { DataTable } from '@/components/ui/data-table';
 import { formatMoney } from '@/lib/invoice/money';
-import type { InvoiceListResponse } from '@/app/api/invoices/route';
+import type { InvoiceListResponse } from '@/lib/data/invoices';
 
 type Row = InvoiceListResponse['items'][number];
 

@@ -4,7 +4,7 @@ import type { ColumnDef } from '@tanstack/react-table';
 import Link from 'next/link';
 import { StatusBadge } from '@/components/ui/badge';
 import { DataTable } from '@/components/ui/data-table';
-import type { JobListResponse } from '@/app/api/jobs/route';
+import type { JobListResponse } from '@/lib/data/jobs';
 
 type Row = JobListResponse['items'][number];
 

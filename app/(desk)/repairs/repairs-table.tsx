@@ -6,7 +6,7 @@ import { DataTable } from '@/components/ui/data-table';
 import { formatInZone } from '@/lib/dates';
 import { label } from '@/lib/domain';
 import { formatLength, type UnitSystem } from '@/lib/units';
-import type { RepairListResponse } from '@/app/api/repairs/route';
+import type { RepairListResponse } from '@/lib/data/repairs';
 
 type Row = RepairListResponse['items'][number];
 

@@ -8,7 +8,7 @@ import type { z } from 'zod';
 import { FormField, errorProps } from '@/components/desk/form-field';
 import { Input, Select } from '@/components/ui/input';
 import { Button } from '@/components/ui/button';
-import type { ScheduleJobResponse } from '@/app/api/jobs/[id]/schedule/route';
+import type { ScheduleJobResponse } from '@/lib/data/schedule';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
 import { label } from '@/lib/domain';
 import { scheduleFormSchema } from '@/lib/validation/schedule';

@@ -3,7 +3,7 @@
 import type { ColumnDef } from '@tanstack/react-table';
 import Link from 'next/link';
 import { DataTable } from '@/components/ui/data-table';
-import type { SiteListResponse } from '@/app/api/sites/route';
+import type { SiteListResponse } from '@/lib/data/sites';
 
 type Row = SiteListResponse['items'][number];
 

@@ -4,9 +4,6 @@ import { listAttachments, requestUpload } from '@/lib/data/attachments';
 import { bodyOf, handle, parseOrThrow, searchParamsOf } from '@/lib/http';
 import { attachmentListQuerySchema, uploadRequestSchema } from '@/lib/validation/attachments';
 
-export type AttachmentListResponse = Awaited<ReturnType<typeof listAttachments>>;
-export type UploadRequestResponse = Awaited<ReturnType<typeof requestUpload>>;
-
 /** The ready evidence of `?repairId=`, `?installId=` or `?jobId=`, with short-lived signed links. */
 export const GET = handle(async (request: Request) => {
   const user = await requireUser();

@@ -1,13 +1,12 @@
+import { ADMIN_ONLY } from '@/lib/domain';
 import { createChecklistTemplate, listChecklistTemplates } from '@/lib/data/checklist-templates';
 import { recordCollection } from '@/lib/routes/records';
 import { checklistTemplateInputSchema, checklistTemplateListQuerySchema } from '@/lib/validation/checklist-templates';
 
-export type ChecklistTemplateListResponse = Awaited<ReturnType<typeof listChecklistTemplates>>;
-
 /** Check-list templates with their ordered items `{ id, label, required }`; `archived` filters on inactive ones. */
 const routes = recordCollection({
   csvName: 'checklist-templates',
-  writers: ['admin'],
+  writers: ADMIN_ONLY,
   querySchema: checklistTemplateListQuerySchema,
   inputSchema: checklistTemplateInputSchema,
   list: listChecklistTemplates,

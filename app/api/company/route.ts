@@ -1,10 +1,9 @@
 import { NextResponse } from 'next/server';
 import { requireUser } from '@/lib/auth/session';
 import { getCompany, updateCompany } from '@/lib/data/company';
+import { ADMIN_ONLY } from '@/lib/domain';
 import { bodyOf, handle, parseOrThrow } from '@/lib/http';
 import { companyPatchSchema } from '@/lib/validation/company';
-
-export type CompanyResponse = Awaited<ReturnType<typeof getCompany>>;
 
 /** The caller's company settings; every signed-in user of the company may read them. */
 export const GET = handle(async () => {
@@ -13,7 +12,7 @@ export const GET = handle(async () => {
 });
 
 export const PATCH = handle(async (request: Request) => {
-  const user = await requireUser(['admin']);
+  const user = await requireUser(ADMIN_ONLY);
   const patch = parseOrThrow(companyPatchSchema, await bodyOf(request));
   return NextResponse.json(await updateCompany(user, patch));
 });

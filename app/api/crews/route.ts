@@ -1,13 +1,12 @@
 import { createCrew, listCrews } from '@/lib/data/crews';
 import { recordCollection } from '@/lib/routes/records';
+import { ADMIN_ONLY } from '@/lib/domain';
 import { crewInputSchema, crewListQuerySchema } from '@/lib/validation/crews';
-
-export type CrewListResponse = Awaited<ReturnType<typeof listCrews>>;
 
 /** Desk roles: every crew of the company; field roles: only their own crews. `?format=csv` exports. */
 const routes = recordCollection({
   csvName: 'crews',
-  writers: ['admin'],
+  writers: ADMIN_ONLY,
   querySchema: crewListQuerySchema,
   inputSchema: crewInputSchema,
   list: listCrews,

@@ -3,8 +3,6 @@ import { DESK_ROLES, label } from '@/lib/domain';
 import { recordCollection } from '@/lib/routes/records';
 import { customerInputSchema, customerListQuerySchema } from '@/lib/validation/customers';
 
-export type CustomerListResponse = Awaited<ReturnType<typeof listCustomers>>;
-
 /** A page of customers, or with `?format=csv` every customer the same filter matches. */
 const routes = recordCollection({
   csvName: 'customers',

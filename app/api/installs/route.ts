@@ -1,15 +1,12 @@
 import { NextResponse } from 'next/server';
 import { requireUser } from '@/lib/auth/session';
 import { csvResponse, toCsv } from '@/lib/csv';
-import { createInstall, type InstallRow } from '@/lib/data/installs';
+import { createInstall, type CreateInstallResponse } from '@/lib/data/installs';
 import { listInstalls } from '@/lib/data/reviews';
 import { label } from '@/lib/domain';
 import { bodyOrUndefined, handle, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/http';
 import { createInstallSchema } from '@/lib/validation/install-events';
 import { installListQuerySchema } from '@/lib/validation/reviews';
-
-export type CreateInstallResponse = { install: InstallRow };
-export type InstallListResponse = Awaited<ReturnType<typeof listInstalls>>;
 
 /**
  * A page of installs with their quality flags (`?status=awaiting_review` is the office's queue;

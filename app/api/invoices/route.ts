@@ -6,8 +6,6 @@ import { DESK_ROLES, label } from '@/lib/domain';
 import { bodyOf, handle, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/http';
 import { invoiceInputSchema, invoiceListQuerySchema } from '@/lib/validation/invoices';
 
-export type InvoiceListResponse = Awaited<ReturnType<typeof listInvoices>>;
-
 export const GET = handle(async (request: Request) => {
   const user = await requireUser(DESK_ROLES);
   const query = parseOrThrow(invoiceListQuerySchema, searchParamsOf(request));

@@ -3,8 +3,6 @@ import { DESK_ROLES, label } from '@/lib/domain';
 import { recordCollection } from '@/lib/routes/records';
 import { jobInputSchema, jobListQuerySchema } from '@/lib/validation/jobs';
 
-export type JobListResponse = Awaited<ReturnType<typeof listJobs>>;
-
 /** A page of jobs, or with `?format=csv` every job the same filter matches. */
 const routes = recordCollection({
   csvName: 'jobs',

@@ -1,12 +1,11 @@
+import { ADMIN_ONLY } from '@/lib/domain';
 import { createPacker, listPackers } from '@/lib/data/packers';
 import { recordCollection } from '@/lib/routes/records';
 import { packerInputSchema, packerListQuerySchema } from '@/lib/validation/packers';
 
-export type PackerListResponse = Awaited<ReturnType<typeof listPackers>>;
-
 const routes = recordCollection({
   csvName: 'packers',
-  writers: ['admin'],
+  writers: ADMIN_ONLY,
   querySchema: packerListQuerySchema,
   inputSchema: packerInputSchema,
   list: listPackers,

@@ -3,8 +3,6 @@ import { DESK_ROLES, label } from '@/lib/domain';
 import { recordCollection } from '@/lib/routes/records';
 import { repairInputSchema, repairListQuerySchema } from '@/lib/validation/repairs';
 
-export type RepairListResponse = Awaited<ReturnType<typeof listRepairs>>;
-
 /** A page of repairs, or with `?format=csv` every repair the same filter matches (lengths in mm, as stored). */
 const routes = recordCollection({
   csvName: 'repairs',

@@ -1,13 +1,12 @@
+import { ADMIN_ONLY } from '@/lib/domain';
 import { createResinKit, listResinKits } from '@/lib/data/resin-kits';
 import { recordCollection } from '@/lib/routes/records';
 import { resinKitInputSchema, resinKitListQuerySchema } from '@/lib/validation/resin-kits';
 
-export type ResinKitListResponse = Awaited<ReturnType<typeof listResinKits>>;
-
 /** Resin kits (lots): `?resinSystemId=&expired=true|false&sort=expiresOn|lot|…`; POST for admins (409 on a lot already listed). */
 const routes = recordCollection({
   csvName: 'resin-kits',
-  writers: ['admin'],
+  writers: ADMIN_ONLY,
   querySchema: resinKitListQuerySchema,
   inputSchema: resinKitInputSchema,
   list: listResinKits,

@@ -1,14 +1,12 @@
 import { createResinSystem, listResinSystems } from '@/lib/data/resin-systems';
-import { label } from '@/lib/domain';
+import { label , ADMIN_ONLY } from '@/lib/domain';
 import { recordCollection } from '@/lib/routes/records';
 import { resinSystemInputSchema, resinSystemListQuerySchema } from '@/lib/validation/resin-systems';
-
-export type ResinSystemListResponse = Awaited<ReturnType<typeof listResinSystems>>;
 
 /** Resin systems: a page (or `?format=csv`) for any signed-in user of the company; POST for admins. SI throughout. */
 const routes = recordCollection({
   csvName: 'resin-systems',
-  writers: ['admin'],
+  writers: ADMIN_ONLY,
   querySchema: resinSystemListQuerySchema,
   inputSchema: resinSystemInputSchema,
   list: listResinSystems,

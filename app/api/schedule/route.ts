@@ -4,8 +4,6 @@ import { getScheduleBoard } from '@/lib/data/schedule';
 import { handle, parseOrThrow, searchParamsOf } from '@/lib/http';
 import { scheduleQuerySchema } from '@/lib/validation/schedule';
 
-export type ScheduleBoardResponse = Awaited<ReturnType<typeof getScheduleBoard>>;
-
 /** The crew schedule for `?week=` (any day of it; default this week in the company's zone). Field users get their own crews. */
 export const GET = handle(async (request: Request) => {
   const user = await requireUser();

@@ -3,8 +3,6 @@ import { DESK_ROLES, label } from '@/lib/domain';
 import { recordCollection } from '@/lib/routes/records';
 import { segmentInputSchema, segmentListQuerySchema } from '@/lib/validation/segments';
 
-export type SegmentListResponse = Awaited<ReturnType<typeof listSegments>>;
-
 // GET: A page of segments, or with `?format=csv` every segment the same filter matches (SI columns).
 // POST: A new segment between two access points of one site (422 when an end is on another site).
 const routes = recordCollection({

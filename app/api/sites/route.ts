@@ -3,8 +3,6 @@ import { DESK_ROLES } from '@/lib/domain';
 import { recordCollection } from '@/lib/routes/records';
 import { siteInputSchema, siteListQuerySchema } from '@/lib/validation/sites';
 
-export type SiteListResponse = Awaited<ReturnType<typeof listSites>>;
-
 // GET: A page of sites, or with `?format=csv` every site the same filter matches.
 // POST: A new site for one of the caller's customers (422 on customerId when it is not theirs).
 const routes = recordCollection({

@@ -1,15 +1,13 @@
 import { createUser, listUsers } from '@/lib/data/users';
-import { label } from '@/lib/domain';
+import { ADMIN_ONLY, label } from '@/lib/domain';
 import { recordCollection } from '@/lib/routes/records';
 import { userInputSchema, userListQuerySchema } from '@/lib/validation/users';
-
-export type UserListResponse = Awaited<ReturnType<typeof listUsers>>;
 
 /** A page of the company's users, or with `?format=csv` every user the same filter matches. Admin only. */
 const routes = recordCollection({
   csvName: 'users',
-  readers: ['admin'],
-  writers: ['admin'],
+  readers: ADMIN_ONLY,
+  writers: ADMIN_ONLY,
   querySchema: userListQuerySchema,
   inputSchema: userInputSchema,
   list: listUsers,

@@ -9,7 +9,6 @@ import {
   endThrust,
   resinFractionFromRatio,
   resinQuantity,
-  wrinkleLimitMm,
 } from '@/lib/sizing';
 
 describe('resinQuantity', () => {
@@ -88,16 +87,5 @@ describe('endThrust', () => {
     expect(() => endThrust({ pressureKpa: 150, insideDiameterMm: 0 })).toThrow(SizingInputError);
     expect(() => endThrust({ pressureKpa: NaN, insideDiameterMm: 150 })).toThrow(SizingInputError);
     expect(() => endThrust({ pressureKpa: -1, insideDiameterMm: 150 })).toThrow(SizingInputError);
-  });
-});
-
-describe('wrinkleLimitMm', () => {
-  it("is 5 % of the nominal diameter (a published trenchless handbook's acceptance table)", () => {
-    expect(wrinkleLimitMm(150)).toBeCloseTo(7.5, 12);
-    expect(wrinkleLimitMm(300)).toBeCloseTo(15, 12);
-  });
-
-  it('rejects a zero, negative or non-finite diameter', () => {
-    for (const bad of [0, -100, NaN, Infinity]) expect(() => wrinkleLimitMm(bad)).toThrow(SizingInputError);
   });
 });

@@ -4,6 +4,7 @@ import { FilterSelect, ListToolbar, exportHrefOf } from '@/components/desk/list-
 import { Badge } from '@/components/ui/badge';
 import { requirePageUser } from '@/lib/auth/session';
 import { listChecklistTemplates } from '@/lib/data/checklist-templates';
+import { ADMIN_ONLY } from '@/lib/domain';
 import { checklistTemplateListQuerySchema } from '@/lib/validation/checklist-templates';
 import { filledParams } from '@/lib/validation/list';
 import { PageHeader } from '@/components/ui/page-header';
@@ -11,7 +12,7 @@ import { PageHeader } from '@/components/ui/page-header';
 export const metadata: Metadata = { title: 'Check-lists' };
 
 export default async function Page({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
-  const user = await requirePageUser(['admin']);
+  const user = await requirePageUser(ADMIN_ONLY);
   const raw = await searchParams;
   const parsed = checklistTemplateListQuerySchema.safeParse(filledParams(raw));
   const query = parsed.success ? parsed.data : checklistTemplateListQuerySchema.parse({});

@@ -5,11 +5,12 @@ import { getCompany } from '@/lib/data/company';
 import { companyToForm, knownTimeZones } from '@/lib/validation/company';
 import { CompanyForm } from './company-form';
 import { PageHeader } from '@/components/ui/page-header';
+import { ADMIN_ONLY } from '@/lib/domain';
 
 export const metadata: Metadata = { title: 'Company settings' };
 
 export default async function Page() {
-  const user = await requirePageUser(['admin']);
+  const user = await requirePageUser(ADMIN_ONLY);
   const company = await getCompany(user);
   return (
     <div className="space-y-6">

@@ -3,7 +3,7 @@
 import type { ColumnDef } from '@tanstack/react-table';
 import Link from 'next/link';
 import { DataTable } from '@/components/ui/data-table';
-import type { CrewListResponse } from '@/app/api/crews/route';
+import type { CrewListResponse } from '@/lib/data/crews';
 
 type Row = CrewListResponse['items'][number];
 

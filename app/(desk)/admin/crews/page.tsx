@@ -4,13 +4,14 @@ import { requirePageUser } from '@/lib/auth/session';
 import { listCrews } from '@/lib/data/crews';
 import { crewListQuerySchema } from '@/lib/validation/crews';
 import { CrewsTable } from './crews-table';
+import { ADMIN_ONLY } from '@/lib/domain';
 import { filledParams } from '@/lib/validation/list';
 import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'Crews' };
 
 export default async function Page({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
-  const user = await requirePageUser(['admin']);
+  const user = await requirePageUser(ADMIN_ONLY);
   const raw = await searchParams;
   const parsed = crewListQuerySchema.safeParse(filledParams(raw));
   const query = parsed.success ? parsed.data : crewListQuerySchema.parse({});

@@ -4,7 +4,7 @@ import type { ColumnDef } from '@tanstack/react-table';
 import Link from 'next/link';
 import { DataTable } from '@/components/ui/data-table';
 import { formatLength, formatPressure, type UnitSystem } from '@/lib/units';
-import type { PackerListResponse } from '@/app/api/packers/route';
+import type { PackerListResponse } from '@/lib/data/packers';
 
 type Row = PackerListResponse['items'][number];
 

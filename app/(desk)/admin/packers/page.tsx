@@ -5,13 +5,14 @@ import { getCompany } from '@/lib/data/company';
 import { listPackers } from '@/lib/data/packers';
 import { packerListQuerySchema } from '@/lib/validation/packers';
 import { PackersTable } from './packers-table';
+import { ADMIN_ONLY } from '@/lib/domain';
 import { filledParams } from '@/lib/validation/list';
 import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'Packers' };
 
 export default async function Page({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
-  const user = await requirePageUser(['admin']);
+  const user = await requirePageUser(ADMIN_ONLY);
   const raw = await searchParams;
   const parsed = packerListQuerySchema.safeParse(filledParams(raw));
   const query = parsed.success ? parsed.data : packerListQuerySchema.parse({});

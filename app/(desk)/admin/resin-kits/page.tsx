@@ -7,13 +7,14 @@ import { listResinSystems } from '@/lib/data/resin-systems';
 import { resinKitListQuerySchema } from '@/lib/validation/resin-kits';
 import { resinSystemListQuerySchema } from '@/lib/validation/resin-systems';
 import { ResinKitsTable } from './resin-kits-table';
+import { ADMIN_ONLY } from '@/lib/domain';
 import { filledParams } from '@/lib/validation/list';
 import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'Resin kits' };
 
 export default async function Page({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
-  const user = await requirePageUser(['admin']);
+  const user = await requirePageUser(ADMIN_ONLY);
   const raw = await searchParams;
   const parsed = resinKitListQuerySchema.safeParse(filledParams(raw));
   const query = parsed.success ? parsed.data : resinKitListQuerySchema.parse({});

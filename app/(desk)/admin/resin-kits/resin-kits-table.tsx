@@ -5,7 +5,7 @@ import Link from 'next/link';
 import { Badge } from '@/components/ui/badge';
 import { DataTable } from '@/components/ui/data-table';
 import { formatVolume, type UnitSystem } from '@/lib/units';
-import type { ResinKitListResponse } from '@/app/api/resin-kits/route';
+import type { ResinKitListResponse } from '@/lib/data/resin-kits';
 
 type Row = ResinKitListResponse['items'][number];
 

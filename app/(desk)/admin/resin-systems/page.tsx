@@ -3,7 +3,7 @@ import { FilterSelect, ListToolbar, exportHrefOf } from '@/components/desk/list-
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { listResinSystems } from '@/lib/data/resin-systems';
-import { RESIN_CHEMISTRIES, label } from '@/lib/domain';
+import { ADMIN_ONLY, RESIN_CHEMISTRIES, label } from '@/lib/domain';
 import { resinSystemListQuerySchema } from '@/lib/validation/resin-systems';
 import { ResinSystemsTable } from './resin-systems-table';
 import { filledParams } from '@/lib/validation/list';
@@ -12,7 +12,7 @@ import { PageHeader } from '@/components/ui/page-header';
 export const metadata: Metadata = { title: 'Resin systems' };
 
 export default async function Page({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
-  const user = await requirePageUser(['admin']);
+  const user = await requirePageUser(ADMIN_ONLY);
   const raw = await searchParams;
   const parsed = resinSystemListQuerySchema.safeParse(filledParams(raw));
   const query = parsed.success ? parsed.data : resinSystemListQuerySchema.parse({});

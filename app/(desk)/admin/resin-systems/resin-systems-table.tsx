@@ -5,7 +5,7 @@ import Link from 'next/link';
 import { DataTable } from '@/components/ui/data-table';
 import { label } from '@/lib/domain';
 import { formatTemperature, type UnitSystem } from '@/lib/units';
-import type { ResinSystemListResponse } from '@/app/api/resin-systems/route';
+import type { ResinSystemListResponse } from '@/lib/data/resin-systems';
 
 type Row = ResinSystemListResponse['items'][number];
 

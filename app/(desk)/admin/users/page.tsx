@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import { ListToolbar, FilterSelect, exportHrefOf } from '@/components/desk/list-toolbar';
 import { requirePageUser } from '@/lib/auth/session';
 import { listUsers } from '@/lib/data/users';
-import { ROLES, label } from '@/lib/domain';
+import { ADMIN_ONLY, ROLES, label } from '@/lib/domain';
 import { userListQuerySchema } from '@/lib/validation/users';
 import { UsersTable } from './users-table';
 import { filledParams } from '@/lib/validation/list';
@@ -11,7 +11,7 @@ import { PageHeader } from '@/components/ui/page-header';
 export const metadata: Metadata = { title: 'Users' };
 
 export default async function Page({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
-  const user = await requirePageUser(['admin']);
+  const user = await requirePageUser(ADMIN_ONLY);
   const raw = await searchParams;
   // A hand-edited URL with a bad value falls back to the defaults rather than failing the page.
   const parsed = userListQuerySchema.safeParse(filledParams(raw));

@@ -5,7 +5,7 @@ import Link from 'next/link';
 import { DataTable } from '@/components/ui/data-table';
 import { Badge } from '@/components/ui/badge';
 import { label } from '@/lib/domain';
-import type { UserListResponse } from '@/app/api/users/route';
+import type { UserListResponse } from '@/lib/data/users';
 import { UserActions } from './user-actions';
 
 type Row = UserListResponse['items'][number];

@@ -5,7 +5,7 @@ import Link from 'next/link';
 import { useRouter } from 'next/navigation';
 import { useLocale, useTranslations } from 'next-intl';
 import { useEffect, useMemo, useState } from 'react';
-import type { InstallViewResponse } from '@/app/api/installs/[id]/route';
+import type { InstallViewResponse } from '@/lib/data/installs';
 import { useNow } from '@/components/install/countdown';
 import { resinClockSpec, type CurePlan, type QualityFlag } from '@/lib/cure';
 import { installClock } from '@/lib/install/clock';

@@ -2,7 +2,7 @@
 
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import useSWR from 'swr';
-import type { InstallViewResponse } from '@/app/api/installs/[id]/route';
+import type { InstallViewResponse } from '@/lib/data/installs';
 import { deriveInstallState, type InstallEventInput } from '@/lib/install/state';
 import { fetchJson } from '@/lib/client/fetch-json';
 import { refreshIntervalFor, useLiveStream } from '@/lib/client/live-stream';

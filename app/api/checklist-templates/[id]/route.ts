@@ -1,8 +1,7 @@
+import { ADMIN_ONLY } from '@/lib/domain';
 import { archiveChecklistTemplate, getChecklistTemplate, updateChecklistTemplate } from '@/lib/data/checklist-templates';
 import { recordItem } from '@/lib/routes/records';
 import { checklistTemplatePatchSchema } from '@/lib/validation/checklist-templates';
-
-export type ChecklistTemplateResponse = Awaited<ReturnType<typeof getChecklistTemplate>>;
 
 /** PATCH with `items` replaces the whole ordered list; items keep the ids they come with. */
 const routes = recordItem({
@@ -12,7 +11,7 @@ const routes = recordItem({
   get: getChecklistTemplate,
   update: updateChecklistTemplate,
   archive: archiveChecklistTemplate,
-  writers: ['admin'],
+  writers: ADMIN_ONLY,
 });
 export const GET = routes.GET;
 export const PATCH = routes.PATCH;

@@ -1,8 +1,7 @@
+import { ADMIN_ONLY } from '@/lib/domain';
 import { archiveCrew, getCrew, updateCrew } from '@/lib/data/crews';
 import { recordItem } from '@/lib/routes/records';
 import { crewPatchSchema } from '@/lib/validation/crews';
-
-export type CrewResponse = Awaited<ReturnType<typeof getCrew>>;
 
 const routes = recordItem({
   kind: 'crew',
@@ -11,7 +10,7 @@ const routes = recordItem({
   get: getCrew,
   update: updateCrew,
   archive: archiveCrew,
-  writers: ['admin'],
+  writers: ADMIN_ONLY,
 });
 export const GET = routes.GET;
 export const PATCH = routes.PATCH;

@@ -5,8 +5,6 @@ import { notFound } from '@/lib/errors';
 import { handle } from '@/lib/http';
 import { uuidSchema } from '@/lib/validation/common';
 
-export type InstallViewResponse = Awaited<ReturnType<typeof getInstallView>>;
-
 export const GET = handle(async (_request: Request, { params }: { params: Promise<{ id: string }> }) => {
   const user = await requireUser();
   const { id } = await params;

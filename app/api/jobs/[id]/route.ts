@@ -3,8 +3,6 @@ import { DESK_ROLES } from '@/lib/domain';
 import { recordItem } from '@/lib/routes/records';
 import { jobPatchSchema } from '@/lib/validation/jobs';
 
-export type JobResponse = Awaited<ReturnType<typeof findJob>>;
-
 const routes = recordItem({
   kind: 'job',
   what: 'Job',

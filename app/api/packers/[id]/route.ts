@@ -1,8 +1,7 @@
+import { ADMIN_ONLY } from '@/lib/domain';
 import { archivePacker, getPacker, updatePacker } from '@/lib/data/packers';
 import { recordItem } from '@/lib/routes/records';
 import { packerPatchSchema } from '@/lib/validation/packers';
-
-export type PackerResponse = Awaited<ReturnType<typeof getPacker>>;
 
 const routes = recordItem({
   kind: 'packer',
@@ -11,7 +10,7 @@ const routes = recordItem({
   get: getPacker,
   update: updatePacker,
   archive: archivePacker,
-  writers: ['admin'],
+  writers: ADMIN_ONLY,
 });
 export const GET = routes.GET;
 export const PATCH = routes.PATCH;

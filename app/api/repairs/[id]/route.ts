@@ -3,8 +3,6 @@ import { DESK_ROLES } from '@/lib/domain';
 import { recordItem } from '@/lib/routes/records';
 import { repairPatchSchema } from '@/lib/validation/repairs';
 
-export type RepairResponse = Awaited<ReturnType<typeof getRepair>>;
-
 const routes = recordItem({
   kind: 'repair',
   what: 'Repair',

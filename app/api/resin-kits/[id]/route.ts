@@ -1,8 +1,7 @@
+import { ADMIN_ONLY } from '@/lib/domain';
 import { archiveResinKit, getResinKit, updateResinKit } from '@/lib/data/resin-kits';
 import { recordItem } from '@/lib/routes/records';
 import { resinKitPatchSchema } from '@/lib/validation/resin-kits';
-
-export type ResinKitResponse = Awaited<ReturnType<typeof getResinKit>>;
 
 /** GET answers the kit with the installs that used it. */
 const routes = recordItem({
@@ -12,7 +11,7 @@ const routes = recordItem({
   get: getResinKit,
   update: updateResinKit,
   archive: archiveResinKit,
-  writers: ['admin'],
+  writers: ADMIN_ONLY,
 });
 export const GET = routes.GET;
 export const PATCH = routes.PATCH;

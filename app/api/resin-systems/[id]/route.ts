@@ -1,8 +1,7 @@
+import { ADMIN_ONLY } from '@/lib/domain';
 import { archiveResinSystem, getResinSystem, updateResinSystem } from '@/lib/data/resin-systems';
 import { recordItem } from '@/lib/routes/records';
 import { resinSystemPatchSchema } from '@/lib/validation/resin-systems';
-
-export type ResinSystemResponse = Awaited<ReturnType<typeof getResinSystem>>;
 
 const routes = recordItem({
   kind: 'resinSystem',
@@ -11,7 +10,7 @@ const routes = recordItem({
   get: getResinSystem,
   update: updateResinSystem,
   archive: archiveResinSystem,
-  writers: ['admin'],
+  writers: ADMIN_ONLY,
 });
 export const GET = routes.GET;
 export const PATCH = routes.PATCH;

@@ -3,8 +3,6 @@ import { DESK_ROLES } from '@/lib/domain';
 import { recordItem } from '@/lib/routes/records';
 import { segmentPatchSchema } from '@/lib/validation/segments';
 
-export type SegmentResponse = Awaited<ReturnType<typeof getSegment>>;
-
 const routes = recordItem({
   kind: 'segment',
   what: 'Segment',

@@ -3,8 +3,6 @@ import { DESK_ROLES } from '@/lib/domain';
 import { recordItem } from '@/lib/routes/records';
 import { sitePatchSchema } from '@/lib/validation/sites';
 
-export type SiteResponse = Awaited<ReturnType<typeof getSite>>;
-
 const routes = recordItem({
   kind: 'site',
   what: 'Site',

@@ -1,8 +1,7 @@
+import { ADMIN_ONLY } from '@/lib/domain';
 import { getUser, updateUser } from '@/lib/data/users';
 import { recordItem } from '@/lib/routes/records';
 import { userPatchSchema } from '@/lib/validation/users';
-
-export type UserResponse = Awaited<ReturnType<typeof getUser>>;
 
 const routes = recordItem({
   kind: 'user',
@@ -10,8 +9,8 @@ const routes = recordItem({
   patchSchema: userPatchSchema,
   get: getUser,
   update: updateUser,
-  readers: ['admin'],
-  writers: ['admin'],
+  readers: ADMIN_ONLY,
+  writers: ADMIN_ONLY,
 });
 export const GET = routes.GET;
 /** Rename, change role, `active: false` to deactivate (sessions end at once), `active: true` to reactivate. */

@@ -7,11 +7,12 @@ import { getCompany } from '@/lib/data/company';
 import { recordForPage } from '@/lib/page-record';
 import { ChecklistForm } from '../checklist-form';
 import { PageHeader } from '@/components/ui/page-header';
+import { ADMIN_ONLY } from '@/lib/domain';
 
 export const metadata: Metadata = { title: 'Check-list' };
 
 export default async function Page({ params }: { params: Promise<{ id: string }> }) {
-  const user = await requirePageUser(['admin']);
+  const user = await requirePageUser(ADMIN_ONLY);
   const template = await recordForPage((await params).id, (id) => getChecklistTemplate(user, id));
   const { timeZone } = await getCompany(user);
   return (

@@ -9,11 +9,12 @@ import { CrewForm } from '../crew-form';
 import { CrewMembers } from '../crew-members';
 import { RestoreCrewButton } from './restore-button';
 import { PageHeader } from '@/components/ui/page-header';
+import { ADMIN_ONLY } from '@/lib/domain';
 
 export const metadata: Metadata = { title: 'Crew' };
 
 export default async function Page({ params }: { params: Promise<{ id: string }> }) {
-  const user = await requirePageUser(['admin']);
+  const user = await requirePageUser(ADMIN_ONLY);
   const crew = await recordForPage((await params).id, (id) => getCrew(user, id));
   const [{ timeZone }, candidates] = await Promise.all([getCompany(user), listCrewCandidates(user)]);
   const archived = Boolean(crew.archivedAt);

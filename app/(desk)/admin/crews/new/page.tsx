@@ -2,11 +2,12 @@ import type { Metadata } from 'next';
 import { requirePageUser } from '@/lib/auth/session';
 import { CrewForm } from '../crew-form';
 import { PageHeader } from '@/components/ui/page-header';
+import { ADMIN_ONLY } from '@/lib/domain';
 
 export const metadata: Metadata = { title: 'New crew' };
 
 export default async function Page() {
-  await requirePageUser(['admin']);
+  await requirePageUser(ADMIN_ONLY);
   return (
     <div className="space-y-4">
       <PageHeader back={{ href: '/admin/crews', label: 'Crews' }} title="New crew" />

@@ -8,11 +8,12 @@ import { recordForPage } from '@/lib/page-record';
 import { packerToForm } from '@/lib/validation/packers';
 import { PackerForm } from '../packer-form';
 import { PageHeader } from '@/components/ui/page-header';
+import { ADMIN_ONLY } from '@/lib/domain';
 
 export const metadata: Metadata = { title: 'Packer' };
 
 export default async function Page({ params }: { params: Promise<{ id: string }> }) {
-  const user = await requirePageUser(['admin']);
+  const user = await requirePageUser(ADMIN_ONLY);
   const packer = await recordForPage((await params).id, (id) => getPacker(user, id));
   const { unitSystem, timeZone } = await getCompany(user);
   return (

@@ -3,11 +3,12 @@ import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { PackerForm } from '../packer-form';
 import { PageHeader } from '@/components/ui/page-header';
+import { ADMIN_ONLY } from '@/lib/domain';
 
 export const metadata: Metadata = { title: 'New packer' };
 
 export default async function Page() {
-  const user = await requirePageUser(['admin']);
+  const user = await requirePageUser(ADMIN_ONLY);
   const { unitSystem } = await getCompany(user);
   return (
     <div className="space-y-4">

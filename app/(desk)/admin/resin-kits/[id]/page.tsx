@@ -8,7 +8,7 @@ import { getCompany } from '@/lib/data/company';
 import { getResinKit } from '@/lib/data/resin-kits';
 import { listResinSystems } from '@/lib/data/resin-systems';
 import { formatInZone } from '@/lib/dates';
-import { label } from '@/lib/domain';
+import { ADMIN_ONLY, label } from '@/lib/domain';
 import { recordForPage } from '@/lib/page-record';
 import { formatVolume } from '@/lib/units';
 import { resinKitToForm } from '@/lib/validation/resin-kits';
@@ -19,7 +19,7 @@ import { PageHeader } from '@/components/ui/page-header';
 export const metadata: Metadata = { title: 'Resin kit' };
 
 export default async function Page({ params }: { params: Promise<{ id: string }> }) {
-  const user = await requirePageUser(['admin']);
+  const user = await requirePageUser(ADMIN_ONLY);
   const kit = await recordForPage((await params).id, (id) => getResinKit(user, id));
   const [{ unitSystem, timeZone }, systems] = await Promise.all([getCompany(user), listResinSystems(user, resinSystemListQuerySchema.parse({ pageSize: '100' }))]);
   // The kit's own system stays in the choice even when archived.

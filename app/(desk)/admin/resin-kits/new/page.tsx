@@ -7,6 +7,7 @@ import { listResinSystems } from '@/lib/data/resin-systems';
 import { isoDateSchema } from '@/lib/validation/common';
 import { resinSystemListQuerySchema } from '@/lib/validation/resin-systems';
 import { ResinKitForm } from '../resin-kit-form';
+import { ADMIN_ONLY } from '@/lib/domain';
 import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'New resin kit' };
@@ -18,7 +19,7 @@ const scannedSchema = z.object({
 
 /** `?lot=&expiresOn=` (from a scanned label) fill the form; anything malformed is left out. */
 export default async function Page({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
-  const user = await requirePageUser(['admin']);
+  const user = await requirePageUser(ADMIN_ONLY);
   const scanned = scannedSchema.parse(await searchParams);
   const [{ unitSystem }, systems] = await Promise.all([getCompany(user), listResinSystems(user, resinSystemListQuerySchema.parse({ pageSize: '100' }))]);
   return (

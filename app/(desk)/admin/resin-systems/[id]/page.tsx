@@ -9,11 +9,12 @@ import { recordForPage } from '@/lib/page-record';
 import { resinSystemToForm } from '@/lib/validation/resin-systems';
 import { ResinSystemForm } from '../resin-system-form';
 import { PageHeader } from '@/components/ui/page-header';
+import { ADMIN_ONLY } from '@/lib/domain';
 
 export const metadata: Metadata = { title: 'Resin system' };
 
 export default async function Page({ params }: { params: Promise<{ id: string }> }) {
-  const user = await requirePageUser(['admin']);
+  const user = await requirePageUser(ADMIN_ONLY);
   const system = await recordForPage((await params).id, (id) => getResinSystem(user, id));
   const { unitSystem, timeZone } = await getCompany(user);
   return (

@@ -5,7 +5,7 @@ import { Badge } from '@/components/ui/badge';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { getUser } from '@/lib/data/users';
-import { label } from '@/lib/domain';
+import { ADMIN_ONLY, label } from '@/lib/domain';
 import { recordForPage } from '@/lib/page-record';
 import { UserActions } from '../user-actions';
 import { EditUserForm } from '../user-form';
@@ -16,7 +16,7 @@ import { cn } from '@/lib/ui/cn';
 export const metadata: Metadata = { title: 'User' };
 
 export default async function Page({ params }: { params: Promise<{ id: string }> }) {
-  const admin = await requirePageUser(['admin']);
+  const admin = await requirePageUser(ADMIN_ONLY);
   const user = await recordForPage((await params).id, (id) => getUser(admin, id));
   const { timeZone } = await getCompany(admin);
   const isSelf = user.id === admin.id;

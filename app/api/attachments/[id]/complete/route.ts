@@ -4,7 +4,6 @@ import { completeUpload } from '@/lib/data/attachments';
 import { handle, idOf } from '@/lib/http';
 
 type Context = { params: Promise<{ id: string }> };
-export type CompleteUploadResponse = Awaited<ReturnType<typeof completeUpload>>;
 
 /** Step 2 of an upload: the server checks the stored bytes (size, real type), makes a thumbnail, marks it ready. */
 export const POST = handle(async (_request: Request, { params }: Context) => {

@@ -1,11 +1,9 @@
 import { NextResponse } from 'next/server';
 import { requireUserWithInstall } from '@/lib/auth/session';
 import { recordEvent } from '@/lib/data/install-events';
-import type { InstallEventRow } from '@/lib/data/installs';
+import type { RecordEventResponse } from '@/lib/data/installs';
 import { bodyOrUndefined, handle } from '@/lib/http';
 import { uuidSchema } from '@/lib/validation/common';
-
-export type RecordEventResponse = { event: InstallEventRow };
 
 /** Records one tap; a replay of the same tap answers 200 with the stored event and writes nothing. */
 export const POST = handle(async (request: Request, { params }: { params: Promise<{ id: string }> }) => {

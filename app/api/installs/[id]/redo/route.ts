@@ -4,8 +4,6 @@ import { REDO_ROLES, redoInstall } from '@/lib/data/redo';
 import { handle, idOf, optionalBodyOf, parseOrThrow } from '@/lib/http';
 import { redoInstallSchema } from '@/lib/validation/install-events';
 
-export type RedoInstallResponse = Awaited<ReturnType<typeof redoInstall>>;
-
 /**
  * "Redo this patch": a new install on the same repair, linked to the one it replaces (201; a retry
  * with the same id answers 200). Foreman of the install's crew or an admin (403 otherwise); another

@@ -6,8 +6,6 @@ import { DESK_ROLES } from '@/lib/domain';
 import { bodyOf, handle, parseOrThrow } from '@/lib/http';
 import { reviewDecisionSchema } from '@/lib/validation/reviews';
 
-export type ReviewInstallResponse = Awaited<ReturnType<typeof reviewInstall>>;
-
 /** The office approves a signed-off install or sends it back with a comment (409 unless it awaits review). */
 export const POST = handle(async (request: Request, { params }: { params: Promise<{ id: string }> }) => {
   const user = await requireUser(DESK_ROLES);

@@ -4,8 +4,6 @@ import { revokeReportLinks } from '@/lib/data/report-links';
 import { DESK_ROLES } from '@/lib/domain';
 import { handle, idOf } from '@/lib/http';
 
-export type RevokeReportLinksResponse = Awaited<ReturnType<typeof revokeReportLinks>>;
-
 /**
  * Revokes every customer link of the job's reports made so far (office and admins): each then answers
  * like any bad link, the PDF too. 200 { revokedAt }. A later report send makes a new, working link.

@@ -4,8 +4,6 @@ import { listReportSends } from '@/lib/data/report-sends';
 import { DESK_ROLES } from '@/lib/domain';
 import { handle, idOf } from '@/lib/http';
 
-export type ReportSendsResponse = Awaited<ReturnType<typeof listReportSends>>;
-
 export const GET = handle(async (_request: Request, { params }: { params: Promise<{ id: string }> }) => {
   const user = await requireUser(DESK_ROLES);
   const id = await idOf(params, 'Job');

@@ -9,8 +9,6 @@ import { getReportData } from '@/lib/report/data';
 import { renderReportPdf, reportFileName } from '@/lib/report/pdf';
 import { sendReportSchema } from '@/lib/validation/report';
 
-export type ReportSendResponse = Awaited<ReturnType<typeof requestReportSend>>;
-
 /** Queues the repair report e-mail: 202 with the send-log row; the worker does the sending. */
 export const POST = handle(async (request: Request, { params }: { params: Promise<{ id: string }> }) => {
   const user = await requireUser(DESK_ROLES);

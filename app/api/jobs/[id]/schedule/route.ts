@@ -8,8 +8,6 @@ import { scheduleInputSchema } from '@/lib/validation/schedule';
 
 type Context = { params: Promise<{ id: string }> };
 
-export type ScheduleJobResponse = Awaited<ReturnType<typeof scheduleJob>>;
-
 /** Puts the job on a crew's day: `{ crewId, date }`; the answer says when the day is now over capacity. */
 export const PUT = handle(async (request: Request, { params }: Context) => {
   const user = await requireUser(DESK_ROLES);

@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import { ATTACHMENT_KINDS, ATTACHMENT_STATUSES, REVIEW_DECISIONS } from '@/lib/domain';
+import { ATTACHMENT_KINDS, ATTACHMENT_STATUSES } from '@/lib/domain';
 
 /** A stored file (inspection image, document); the bytes live in object storage under storageKey. */
 export class Attachment extends Model<InferAttributes<Attachment>, InferCreationAttributes<Attachment>> {
@@ -24,31 +24,7 @@ export class Attachment extends Model<InferAttributes<Attachment>, InferCreation
   declare updatedAt: CreationOptional<Date>;
 }
 
-/** The office's decision on a finished install. */
-export class Review extends Model<InferAttributes<Review>, InferCreationAttributes<Review>> {
-  declare id: CreationOptional<string>;
-  declare companyId: string;
-  declare installId: string;
-  declare reviewerId: string;
-  declare decision: (typeof REVIEW_DECISIONS)[number];
-  declare comment: CreationOptional<string | null>;
-  declare createdAt: CreationOptional<Date>;
-}
-
-/** Who changed what, when and why. */
-export class AuditEntry extends Model<InferAttributes<AuditEntry>, InferCreationAttributes<AuditEntry>> {
-  declare id: CreationOptional<string>;
-  declare companyId: string;
-  declare userId: CreationOptional<string | null>;
-  declare action: string;
-  declare entityType: string;
-  declare entityId: string;
-  declare changes: CreationOptional<Record<string, unknown>>;
-  declare reason: CreationOptional<string | null>;
-  declare createdAt: CreationOptional<Date>;
-}
-
-export function initRecords(sequelize: Sequelize) {
+export function initAttachment(sequelize: Sequelize) {
   Attachment.init(
     {
       id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
@@ -71,31 +47,5 @@ export function initRecords(sequelize: Sequelize) {
       updatedAt: DataTypes.DATE,
     },
     { sequelize, modelName: 'Attachment', tableName: 'attachments', underscored: true },
-  );
-  Review.init(
-    {
-      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
-      companyId: { type: DataTypes.UUID, allowNull: false },
-      installId: { type: DataTypes.UUID, allowNull: false },
-      reviewerId: { type: DataTypes.UUID, allowNull: false },
-      decision: { type: DataTypes.STRING(16), allowNull: false, validate: { isIn: [REVIEW_DECISIONS] } },
-      comment: DataTypes.TEXT,
-      createdAt: DataTypes.DATE,
-    },
-    { sequelize, modelName: 'Review', tableName: 'reviews', underscored: true, updatedAt: false },
-  );
-  AuditEntry.init(
-    {
-      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
-      companyId: { type: DataTypes.UUID, allowNull: false },
-      userId: DataTypes.UUID,
-      action: { type: DataTypes.STRING(40), allowNull: false },
-      entityType: { type: DataTypes.STRING(40), allowNull: false },
-      entityId: { type: DataTypes.UUID, allowNull: false },
-      changes: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
-      reason: DataTypes.TEXT,
-      createdAt: DataTypes.DATE,
-    },
-    { sequelize, modelName: 'AuditEntry', tableName: 'audit_entries', underscored: true, updatedAt: false },
   );
 }
