@@ -1,6 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 import { LOCALES, type Locale } from '@/i18n/locales';
-import { ROLES, type Role } from '@/lib/domain';
+import { ROLES, type Role } from '@/lib/domain/vocabulary';
 
 export class User extends Model<InferAttributes<User>, InferCreationAttributes<User>> {
   declare id: CreationOptional<string>;

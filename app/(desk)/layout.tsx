@@ -7,7 +7,7 @@ import { SignOutButton } from '@/components/shell/sign-out-button';
 import { requirePageUser } from '@/lib/auth/session';
 import { deskNav, navFor } from '@/config/nav';
 import { siteConfig } from '@/config/site';
-import { DESK_ROLES } from '@/lib/domain';
+import { DESK_ROLES } from '@/lib/domain/vocabulary';
 
 export const dynamic = 'force-dynamic';
 

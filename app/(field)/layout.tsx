@@ -5,7 +5,7 @@ import { Logo } from '@/components/shell/logo';
 import { SignOutButton } from '@/components/shell/sign-out-button';
 import { requirePageUser } from '@/lib/auth/session';
 import { siteConfig } from '@/config/site';
-import { FIELD_ROLES } from '@/lib/domain';
+import { FIELD_ROLES } from '@/lib/domain/vocabulary';
 
 export const dynamic = 'force-dynamic';
 

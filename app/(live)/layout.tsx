@@ -5,7 +5,7 @@ import { SignOutButton } from '@/components/shell/sign-out-button';
 import { requirePageUser } from '@/lib/auth/session';
 import { isDeskRole } from '@/lib/auth/roles';
 import { LIVE_BOARD_ROLES } from '@/lib/data/live-board';
-import { label } from '@/lib/domain';
+import { label } from '@/lib/domain/vocabulary';
 
 export const dynamic = 'force-dynamic';
 

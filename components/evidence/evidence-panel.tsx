@@ -6,7 +6,7 @@ import { buttonVariants } from '@/components/ui/button';
 import type { AttachmentListResponse, UploadRequestResponse } from '@/lib/data/attachments';
 import { fetchJson } from '@/lib/client/fetch-json';
 import { submitJson } from '@/lib/client/submit-json';
-import { ATTACHMENT_KINDS, label } from '@/lib/domain';
+import { ATTACHMENT_KINDS, label } from '@/lib/domain/vocabulary';
 import { ALLOWED_SUMMARY, typeOfFile, uploadRefusal } from '@/lib/storage/limits';
 import { cn } from '@/lib/ui/cn';
 

@@ -3,8 +3,8 @@
 import { useTranslations } from 'next-intl';
 import { useEffect, useState } from 'react';
 import { countdownState, type CountdownTone } from '@/lib/client/countdown';
-import { serverNow } from '@/lib/client/server-clock';
-import { formatInZone } from '@/lib/dates';
+import { serverNow } from '@/lib/client/server-time';
+import { formatInZone } from '@/lib/time/dates';
 import { formatDuration } from '@/lib/units';
 
 // The words for each tone are in the `countdown` message namespace, under the tone's name.

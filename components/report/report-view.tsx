@@ -1,7 +1,7 @@
 import type { ReactNode } from 'react';
 import { translatorFor } from '@/i18n/translator';
-import { formatDay } from '@/lib/dates';
-import type { ReportData, ReportImage } from '@/lib/report/data';
+import { formatDay } from '@/lib/time/dates';
+import type { ReportData, ReportImage } from '@/lib/data/report';
 import { TimelineSvg } from './timeline-svg';
 import { cardClass } from '@/components/ui/card';
 

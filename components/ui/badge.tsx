@@ -1,6 +1,6 @@
 import { cva, type VariantProps } from 'class-variance-authority';
 import type { ReactNode } from 'react';
-import { label } from '@/lib/domain';
+import { label } from '@/lib/domain/vocabulary';
 import { cn } from '@/lib/ui/cn';
 
 export const badgeVariants = cva('inline-flex items-center rounded px-2 py-0.5 text-xs font-medium ring-1 ring-inset', {

@@ -2,9 +2,9 @@ import 'server-only';
 import { redirect } from 'next/navigation';
 import { QueryTypes } from 'sequelize';
 import { sequelize } from '@/models';
-import { AppError, forbidden, unauthorized } from '@/lib/errors';
+import { AppError, forbidden, unauthorized } from '@/lib/server/errors';
 import type { Locale } from '@/i18n/locales';
-import type { Role } from '@/lib/domain';
+import type { Role } from '@/lib/domain/vocabulary';
 import { getSessionClaims, type SessionClaims } from './claims';
 import { roleAllowed } from './roles';
 

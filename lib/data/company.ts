@@ -1,9 +1,9 @@
 import 'server-only';
 import { ChecklistTemplate, Company, Crew, Packer, ResinKit, ResinSystem, User } from '@/models';
-import { sequelize } from '@/lib/db';
-import { changedFields, recordAudit } from '@/lib/audit';
+import { sequelize } from '@/lib/data/db';
+import { changedFields, recordAudit } from '@/lib/data/audit';
 import type { SessionUser } from '@/lib/auth/session';
-import { notFound } from '@/lib/errors';
+import { notFound } from '@/lib/server/errors';
 import type { CompanyPatch } from '@/lib/validation/company';
 import { assertAdmin } from './scope';
 

@@ -1,11 +1,11 @@
 import 'server-only';
 import { Op, UniqueConstraintError, type Transaction } from 'sequelize';
 import { Crew, CrewMember, Install, Job, User } from '@/models';
-import { sequelize } from '@/lib/db';
-import { changedFields, recordAudit } from '@/lib/audit';
-import { AppError, notFound } from '@/lib/errors';
+import { sequelize } from '@/lib/data/db';
+import { changedFields, recordAudit } from '@/lib/data/audit';
+import { AppError, notFound } from '@/lib/server/errors';
 import { isDeskRole } from '@/lib/auth/roles';
-import { FIELD_ROLES } from '@/lib/domain';
+import { FIELD_ROLES } from '@/lib/domain/vocabulary';
 import type { SessionUser } from '@/lib/auth/session';
 import type { CrewListQuery, crewInputSchema, crewPatchSchema } from '@/lib/validation/crews';
 import type { z } from 'zod';

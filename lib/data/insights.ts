@@ -2,11 +2,11 @@ import 'server-only';
 import { ensureDerived, settingsOf } from './install-derive';
 import { QueryTypes } from 'sequelize';
 import { Crew } from '@/models';
-import { sequelize } from '@/lib/db';
+import { sequelize } from '@/lib/data/db';
 import type { SessionUser } from '@/lib/auth/session';
-import { dayInZone } from '@/lib/dates';
+import { dayInZone } from '@/lib/time/dates';
 import { isDeskRole } from '@/lib/auth/roles';
-import { AppError, forbidden, notFound } from '@/lib/errors';
+import { AppError, forbidden, notFound } from '@/lib/server/errors';
 import { MAX_INSIGHTS_DAYS, type InsightsQuery } from '@/lib/validation/insights';
 import { getCompany } from './company';
 

@@ -3,7 +3,7 @@ import { Op, UniqueConstraintError, type Transaction } from 'sequelize';
 import type { z } from 'zod';
 import { AuditEntry, Install, InstallEvent, Job, Packer, Repair, ResinKit, ResinSystem, sequelize } from '@/models';
 import type { InstallAccess, SessionUser } from '@/lib/auth/session';
-import { AppError, forbidden, notFound } from '@/lib/errors';
+import { AppError, forbidden, notFound } from '@/lib/server/errors';
 import { mayDecide, mayWorkOn } from '@/lib/install/access';
 import { deriveRow, foldEvent, foldsInOrder, stateOfFold, type DeriveSettings, type StoredFold } from '@/lib/install/derived';
 import { correctsDecision, deviceTimeProblem, isClosedInstall } from '@/lib/install/record-rules';
@@ -14,7 +14,7 @@ import { getCompany } from './company';
 import { loadMaterials, rederive, rowOf, settingsOf } from './install-derive';
 import { notifyTap } from './live';
 import { findInstallFor, type InstallEventRow } from './installs';
-import { dayInZone } from '@/lib/dates';
+import { dayInZone } from '@/lib/time/dates';
 
 type ParsedEvent = Extract<ReturnType<typeof parseEventBody>, { success: true }>['data'];
 type Company = Awaited<ReturnType<typeof getCompany>>;

@@ -5,8 +5,8 @@ import {
 } from '@/models';
 import type { SessionUser } from '@/lib/auth/session';
 import { resinClockSpec } from '@/lib/cure';
-import { AppError, forbidden, notFound } from '@/lib/errors';
-import { installClock } from '@/lib/install/clock';
+import { AppError, forbidden, notFound } from '@/lib/server/errors';
+import { installClock } from '@/lib/install/plan-and-flags';
 import { mayWorkOn } from '@/lib/install/access';
 import { deriveInstallState } from '@/lib/install/state';
 import { SizingInputError, fittingPackers, patchLength } from '@/lib/sizing';
@@ -15,7 +15,7 @@ import type { CreateInstallInput } from '@/lib/validation/install-events';
 import { getCompany } from './company';
 import { emptyDerived, settingsOf } from './install-derive';
 import { redoChainOf } from './redo';
-import { dayInZone } from '@/lib/dates';
+import { dayInZone } from '@/lib/time/dates';
 
 type Plain<M extends Model> = InferAttributes<M>;
 

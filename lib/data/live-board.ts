@@ -4,10 +4,10 @@ import { Crew, Install, InstallEvent, Job, Packer, Repair, ResinKit, ResinSystem
 import type { SessionUser } from '@/lib/auth/session';
 import { isDeskRole } from '@/lib/auth/roles';
 import { resinClockSpec } from '@/lib/cure';
-import { dayInZone } from '@/lib/dates';
-import type { Role } from '@/lib/domain';
-import { forbidden } from '@/lib/errors';
-import { installClock } from '@/lib/install/clock';
+import { dayInZone } from '@/lib/time/dates';
+import type { Role } from '@/lib/domain/vocabulary';
+import { forbidden } from '@/lib/server/errors';
+import { installClock } from '@/lib/install/plan-and-flags';
 import { deriveInstallState, type InstallStep } from '@/lib/install/state';
 import { getCompany } from './company';
 

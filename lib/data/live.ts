@@ -1,11 +1,11 @@
 import 'server-only';
 import { QueryTypes, type Transaction } from 'sequelize';
-import { sequelize } from '@/lib/db';
+import { sequelize } from '@/lib/data/db';
 import type { SessionUser } from '@/lib/auth/session';
 import { isDeskRole } from '@/lib/auth/roles';
 import { mayWorkOn } from '@/lib/install/access';
 import { deriveInstallState, type InstallStep } from '@/lib/install/state';
-import type { InstallEventType, InstallStatus } from '@/lib/domain';
+import type { InstallEventType, InstallStatus } from '@/lib/domain/vocabulary';
 
 // The live stream's data side: the NOTIFY a tap sends in its own transaction, who may receive it, and the
 // replay from the event log for a client that reconnects with Last-Event-ID. The listening and the SSE

@@ -1,7 +1,7 @@
 import 'server-only';
 import { User } from '@/models';
 import type { SessionUser } from '@/lib/auth/session';
-import { sequelize } from '@/lib/db';
+import { sequelize } from '@/lib/data/db';
 import type { ProfilePatch } from '@/lib/validation/profile';
 import { lockOwnRow, updateAudited } from './records';
 

@@ -3,7 +3,7 @@ import { Op } from 'sequelize';
 import { AccessPoint, Customer, Install, Job, Repair, Segment, Site } from '@/models';
 import type { SessionUser } from '@/lib/auth/session';
 import type { InstallStep } from '@/lib/install/state';
-import { dayInZone } from '@/lib/dates';
+import { dayInZone } from '@/lib/time/dates';
 import { getCompany } from './company';
 import { ensureDerived, settingsOf, type CompanySettings } from './install-derive';
 import type { JobDetail } from './jobs';

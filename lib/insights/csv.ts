@@ -1,4 +1,4 @@
-import { toCsv, type CsvColumn } from '@/lib/csv';
+import { toCsv, type CsvColumn } from '@/lib/server/csv';
 import { FLAG_LABELS } from '@/lib/review/flags';
 import type { Insights, InsightsWeek } from '@/lib/data/insights';
 

@@ -1,6 +1,6 @@
 import type { PackerPressureRating, ResinClockSpec } from '@/lib/cure';
 import type { UnitSystem } from '@/lib/units';
-import { installClock } from './clock';
+import { installClock } from '@/lib/install/plan-and-flags';
 import { toDate, type EffectiveEvent } from './log';
 import { applyEvent, emptyFold, nextStep, type FoldCore, type InstallState, type InstallStep } from './state';
 

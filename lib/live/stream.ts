@@ -2,7 +2,7 @@ import 'server-only';
 import { userFromClaims, type SessionUser } from '@/lib/auth/session';
 import type { SessionClaims } from '@/lib/auth/claims';
 import { currentLiveSeq, liveEventOf, mayReceive, replayLive, type LiveEvent, type LiveNotice } from '@/lib/data/live';
-import { AppError } from '@/lib/errors';
+import { AppError } from '@/lib/server/errors';
 import { liveHub, type LiveHub } from './hub';
 
 // The SSE framing of the live stream (WHATWG HTML, "Server-sent events"): every tap is a `message` whose `id:`

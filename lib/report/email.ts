@@ -1,6 +1,6 @@
 import { translatorFor } from '@/i18n/translator';
-import { formatDay } from '@/lib/dates';
-import type { ReportData } from './data';
+import { formatDay } from '@/lib/time/dates';
+import type { ReportData } from '@/lib/data/report';
 
 // The e-mail that carries the report: plain, inline-styled HTML (mail clients drop <style>) and a
 // text part saying the same, in the customer's language. The PDF is attached by the sender; the link opens the web copy.

@@ -1,8 +1,8 @@
 import 'server-only';
 import { Document, Font, Image, Line, Page, Rect, StyleSheet, Svg, Text, View, renderToBuffer } from '@react-pdf/renderer';
 import { translatorFor } from '@/i18n/translator';
-import { formatDay, formatInZone } from '@/lib/dates';
-import type { ReportData, ReportRepair } from './data';
+import { formatDay, formatInZone } from '@/lib/time/dates';
+import type { ReportData, ReportRepair } from '@/lib/data/report';
 import type { ReportImage } from './images';
 import { timelineLayout } from './timeline';
 

@@ -2,11 +2,11 @@ import 'server-only';
 import { NextResponse } from 'next/server';
 import type { z } from 'zod';
 import { requireUser, type SessionUser } from '@/lib/auth/session';
-import { csvResponse, toCsv, type CsvColumn } from '@/lib/csv';
+import { csvResponse, toCsv, type CsvColumn } from '@/lib/server/csv';
 import { ownRowId, type OwnRowKind } from '@/lib/data/access';
 import type { Page } from '@/lib/data/list';
-import type { Role } from '@/lib/domain';
-import { bodyOf, handle, idOf, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/http';
+import type { Role } from '@/lib/domain/vocabulary';
+import { bodyOf, handle, idOf, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/server/http';
 
 // The route handlers of every desk record (office records and company settings alike): one pattern, so a list,
 // a create, a read, a partial update and an archive answer the same statuses everywhere (DEVELOPERS.md, "Desk

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { LOCALES } from '@/i18n/locales';
-import { CUSTOMER_KINDS } from '@/lib/domain';
+import { CUSTOMER_KINDS } from '@/lib/domain/vocabulary';
 import { optionalText } from './common';
 import { listQuerySchema } from './list';
 

@@ -1,7 +1,7 @@
 import Papa from 'papaparse';
 import { beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { GET as insightsRoute } from '@/app/api/insights/route';
-import { dayInZone } from '@/lib/dates';
+import { dayInZone } from '@/lib/time/dates';
 import { Install } from '@/models';
 import { makeInstallWorld, makeWorld, type InstallWorld, type World } from './helpers/world';
 import { signInAs, signOut } from './helpers/session';

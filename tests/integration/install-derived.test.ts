@@ -4,7 +4,7 @@ import { afterEach, beforeAll, describe, expect, it, vi } from 'vitest';
 import { resinClockSpec } from '@/lib/cure';
 import { ensureDerived, flagKindsNowSql, settingsOf, severityRankSql } from '@/lib/data/install-derive';
 import { listInstalls } from '@/lib/data/reviews';
-import { installClock } from '@/lib/install/clock';
+import { installClock } from '@/lib/install/plan-and-flags';
 import { deriveInstallState } from '@/lib/install/state';
 import { worstRank } from '@/lib/review/flags';
 import { installListQuerySchema } from '@/lib/validation/reviews';

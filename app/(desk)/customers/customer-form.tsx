@@ -12,7 +12,7 @@ import { Input as TextInput, Select, Textarea } from '@/components/ui/input';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
 import { LOCALES } from '@/i18n/locales';
-import { CUSTOMER_KINDS, label } from '@/lib/domain';
+import { CUSTOMER_KINDS, label } from '@/lib/domain/vocabulary';
 import { customerInputSchema } from '@/lib/validation/customers';
 import { cardClass } from '@/components/ui/card';
 import { cn } from '@/lib/ui/cn';

@@ -10,7 +10,7 @@ import { FormField, errorProps } from '@/components/desk/form-field';
 import { Input as TextInput, Select, Textarea } from '@/components/ui/input';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson, type ApiFailure } from '@/lib/client/submit-json';
-import { DEFECT_TYPES, label } from '@/lib/domain';
+import { DEFECT_TYPES, label } from '@/lib/domain/vocabulary';
 import { formatLength, lengthToSi, unitLabels, type UnitSystem } from '@/lib/units';
 import { REPAIR_FORM_FIELDS, repairFormSchema } from '@/lib/validation/repairs';
 import { cardClass } from '@/components/ui/card';

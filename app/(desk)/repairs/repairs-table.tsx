@@ -3,8 +3,8 @@
 import type { ColumnDef } from '@tanstack/react-table';
 import Link from 'next/link';
 import { DataTable } from '@/components/ui/data-table';
-import { formatInZone } from '@/lib/dates';
-import { label } from '@/lib/domain';
+import { formatInZone } from '@/lib/time/dates';
+import { label } from '@/lib/domain/vocabulary';
 import { formatLength, type UnitSystem } from '@/lib/units';
 import type { RepairListResponse } from '@/lib/data/repairs';
 

@@ -10,7 +10,7 @@ import { Input, Select } from '@/components/ui/input';
 import { Button } from '@/components/ui/button';
 import type { ScheduleJobResponse } from '@/lib/data/schedule';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
-import { label } from '@/lib/domain';
+import { label } from '@/lib/domain/vocabulary';
 import { scheduleFormSchema } from '@/lib/validation/schedule';
 import { cardClass } from '@/components/ui/card';
 

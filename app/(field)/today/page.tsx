@@ -8,9 +8,9 @@ import { labelIn } from '@/i18n/labels';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { listTodayJobs } from '@/lib/data/today';
-import { FIELD_ROLES } from '@/lib/domain';
+import { FIELD_ROLES } from '@/lib/domain/vocabulary';
 import { formatLength } from '@/lib/units';
-import { RunningClock } from './running-clock';
+import { RunningClock } from '@/app/(field)/today/running-timer';
 import { StartInstallButton } from './start-install-button';
 
 export async function generateMetadata(): Promise<Metadata> {

@@ -15,8 +15,8 @@ import {
   type LiveStreamStatus,
 } from '@/lib/client/live-stream';
 import type { LiveBoard as Board, LiveBoardInstall } from '@/lib/data/live-board';
-import { formatInZone } from '@/lib/dates';
-import { label } from '@/lib/domain';
+import { formatInZone } from '@/lib/time/dates';
+import { label } from '@/lib/domain/vocabulary';
 import { formatLength } from '@/lib/units';
 
 const BOARD_URL = '/api/live/board';

@@ -1,4 +1,4 @@
-import { ADMIN_ONLY } from '@/lib/domain';
+import { ADMIN_ONLY } from '@/lib/domain/vocabulary';
 import { createChecklistTemplate, listChecklistTemplates } from '@/lib/data/checklist-templates';
 import { recordCollection } from '@/lib/routes/records';
 import { checklistTemplateInputSchema, checklistTemplateListQuerySchema } from '@/lib/validation/checklist-templates';

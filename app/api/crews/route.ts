@@ -1,6 +1,6 @@
 import { createCrew, listCrews } from '@/lib/data/crews';
 import { recordCollection } from '@/lib/routes/records';
-import { ADMIN_ONLY } from '@/lib/domain';
+import { ADMIN_ONLY } from '@/lib/domain/vocabulary';
 import { crewInputSchema, crewListQuerySchema } from '@/lib/validation/crews';
 
 /** Desk roles: every crew of the company; field roles: only their own crews. `?format=csv` exports. */

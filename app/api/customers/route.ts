@@ -1,5 +1,5 @@
 import { createCustomer, listCustomers } from '@/lib/data/customers';
-import { DESK_ROLES, label } from '@/lib/domain';
+import { DESK_ROLES, label } from '@/lib/domain/vocabulary';
 import { recordCollection } from '@/lib/routes/records';
 import { customerInputSchema, customerListQuerySchema } from '@/lib/validation/customers';
 

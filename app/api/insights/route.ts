@@ -1,10 +1,10 @@
 import { NextResponse } from 'next/server';
 import { requireUser } from '@/lib/auth/session';
 import { getInsights } from '@/lib/data/insights';
-import { DESK_ROLES } from '@/lib/domain';
-import { handle, parseOrThrow, searchParamsOf } from '@/lib/http';
+import { DESK_ROLES } from '@/lib/domain/vocabulary';
+import { handle, parseOrThrow, searchParamsOf } from '@/lib/server/http';
 import { insightsCsv } from '@/lib/insights/csv';
-import { csvResponse } from '@/lib/csv';
+import { csvResponse } from '@/lib/server/csv';
 import { insightsQuerySchema } from '@/lib/validation/insights';
 
 /**

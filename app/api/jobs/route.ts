@@ -1,5 +1,5 @@
 import { createJob, listJobs } from '@/lib/data/jobs';
-import { DESK_ROLES, label } from '@/lib/domain';
+import { DESK_ROLES, label } from '@/lib/domain/vocabulary';
 import { recordCollection } from '@/lib/routes/records';
 import { jobInputSchema, jobListQuerySchema } from '@/lib/validation/jobs';
 

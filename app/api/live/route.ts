@@ -1,6 +1,6 @@
 import { requireUser } from '@/lib/auth/session';
 import { getSessionClaims } from '@/lib/auth/claims';
-import { handle, parseOrThrow, searchParamsOf } from '@/lib/http';
+import { handle, parseOrThrow, searchParamsOf } from '@/lib/server/http';
 import { liveStreamResponse } from '@/lib/live/stream';
 import { liveQuerySchema, liveSeqSchema } from '@/lib/validation/live';
 

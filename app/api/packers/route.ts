@@ -1,4 +1,4 @@
-import { ADMIN_ONLY } from '@/lib/domain';
+import { ADMIN_ONLY } from '@/lib/domain/vocabulary';
 import { createPacker, listPackers } from '@/lib/data/packers';
 import { recordCollection } from '@/lib/routes/records';
 import { packerInputSchema, packerListQuerySchema } from '@/lib/validation/packers';

@@ -1,7 +1,7 @@
 import { NextResponse } from 'next/server';
 import { requireUser } from '@/lib/auth/session';
 import { getProfile, updateProfile } from '@/lib/data/profile';
-import { bodyOf, handle, parseOrThrow } from '@/lib/http';
+import { bodyOf, handle, parseOrThrow } from '@/lib/server/http';
 import { profilePatchSchema } from '@/lib/validation/profile';
 
 /** The signed-in user's own profile (any role): name, e-mail, role and language setting. */

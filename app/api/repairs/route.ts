@@ -1,5 +1,5 @@
 import { createRepair, listRepairs } from '@/lib/data/repairs';
-import { DESK_ROLES, label } from '@/lib/domain';
+import { DESK_ROLES, label } from '@/lib/domain/vocabulary';
 import { recordCollection } from '@/lib/routes/records';
 import { repairInputSchema, repairListQuerySchema } from '@/lib/validation/repairs';
 

@@ -1,4 +1,4 @@
-import { ADMIN_ONLY } from '@/lib/domain';
+import { ADMIN_ONLY } from '@/lib/domain/vocabulary';
 import { createResinKit, listResinKits } from '@/lib/data/resin-kits';
 import { recordCollection } from '@/lib/routes/records';
 import { resinKitInputSchema, resinKitListQuerySchema } from '@/lib/validation/resin-kits';

@@ -1,5 +1,5 @@
 import { createSegment, listSegments } from '@/lib/data/segments';
-import { DESK_ROLES, label } from '@/lib/domain';
+import { DESK_ROLES, label } from '@/lib/domain/vocabulary';
 import { recordCollection } from '@/lib/routes/records';
 import { segmentInputSchema, segmentListQuerySchema } from '@/lib/validation/segments';
 

@@ -1,5 +1,5 @@
 import { createSite, listSites } from '@/lib/data/sites';
-import { DESK_ROLES } from '@/lib/domain';
+import { DESK_ROLES } from '@/lib/domain/vocabulary';
 import { recordCollection } from '@/lib/routes/records';
 import { siteInputSchema, siteListQuerySchema } from '@/lib/validation/sites';
 

@@ -1,5 +1,5 @@
 import { createUser, listUsers } from '@/lib/data/users';
-import { ADMIN_ONLY, label } from '@/lib/domain';
+import { ADMIN_ONLY, label } from '@/lib/domain/vocabulary';
 import { recordCollection } from '@/lib/routes/records';
 import { userInputSchema, userListQuerySchema } from '@/lib/validation/users';
 

@@ -2,7 +2,7 @@ import { TZDate } from '@date-fns/tz';
 import { format } from 'date-fns';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { formatInZone } from '@/lib/dates';
+import { formatInZone } from '@/lib/time/dates';
 
 // formatInZone no longer uses date-fns (the field screens ship without it); it must still print
 // exactly what date-fns `format` over an @date-fns/tz TZDate printed, for every token we use.

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { installClock } from '@/lib/install/clock';
+import { installClock } from '@/lib/install/plan-and-flags';
 import { coreOf, deriveRow, emptyStoredFold, foldEvent, foldOfState, foldsInOrder, stateOfFold, type DeriveMaterials } from '@/lib/install/derived';
 import { deriveInstallState, type InstallEventInput } from '@/lib/install/state';
 import { at, cleanLog, conditions, ev } from './events';

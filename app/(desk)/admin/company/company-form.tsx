@@ -8,7 +8,7 @@ import { FormField, errorProps } from '@/components/desk/form-field';
 import { Input, Select } from '@/components/ui/input';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
-import { UNIT_SYSTEMS, type UnitSystemName } from '@/lib/domain';
+import { UNIT_SYSTEMS, type UnitSystemName } from '@/lib/domain/vocabulary';
 import { lengthFromSi, lengthToSi, unitLabels } from '@/lib/units';
 import { companyFormSchema, formToCompanyPatch, modulusInSystem, type CompanyFormValues } from '@/lib/validation/company';
 import { cn } from '@/lib/ui/cn';

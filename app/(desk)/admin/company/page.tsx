@@ -5,7 +5,7 @@ import { getCompany } from '@/lib/data/company';
 import { companyToForm, knownTimeZones } from '@/lib/validation/company';
 import { CompanyForm } from './company-form';
 import { PageHeader } from '@/components/ui/page-header';
-import { ADMIN_ONLY } from '@/lib/domain';
+import { ADMIN_ONLY } from '@/lib/domain/vocabulary';
 
 export const metadata: Metadata = { title: 'Company settings' };
 

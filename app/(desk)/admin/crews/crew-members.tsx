@@ -4,7 +4,7 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { submitJson } from '@/lib/client/submit-json';
-import { label } from '@/lib/domain';
+import { label } from '@/lib/domain/vocabulary';
 import { cn } from '@/lib/ui/cn';
 import { cardClass } from '@/components/ui/card';
 

@@ -9,7 +9,7 @@ import { FormField, errorProps } from '@/components/desk/form-field';
 import { Input, Select } from '@/components/ui/input';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
-import { ROLES, label } from '@/lib/domain';
+import { ROLES, label } from '@/lib/domain/vocabulary';
 import { PASSWORD_MIN_LENGTH, userInputSchema, userPatchSchema } from '@/lib/validation/users';
 import { cn } from '@/lib/ui/cn';
 import { cardClass } from '@/components/ui/card';

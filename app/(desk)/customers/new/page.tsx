@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import { requirePageUser } from '@/lib/auth/session';
-import { DESK_ROLES } from '@/lib/domain';
+import { DESK_ROLES } from '@/lib/domain/vocabulary';
 import { IntlScope } from '@/components/shell/intl-scope';
 import { CustomerForm } from '../customer-form';
 import { PageHeader } from '@/components/ui/page-header';

@@ -1,7 +1,7 @@
 import type { Metadata } from 'next';
 import { requirePageUser } from '@/lib/auth/session';
 import { jobFormOptions } from '@/lib/data/jobs';
-import { DESK_ROLES } from '@/lib/domain';
+import { DESK_ROLES } from '@/lib/domain/vocabulary';
 import { JobForm } from '../job-form';
 import { PageHeader } from '@/components/ui/page-header';
 

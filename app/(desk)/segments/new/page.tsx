@@ -4,8 +4,8 @@ import { notFound, redirect } from 'next/navigation';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { getSite } from '@/lib/data/sites';
-import { DESK_ROLES } from '@/lib/domain';
-import { recordForPage } from '@/lib/page-record';
+import { DESK_ROLES } from '@/lib/domain/vocabulary';
+import { recordForPage } from '@/lib/server/page-record';
 import { SegmentForm } from '../segment-form';
 import { PageHeader } from '@/components/ui/page-header';
 

@@ -9,7 +9,7 @@ import { FormField, errorProps } from '@/components/desk/form-field';
 import { Input, Select } from '@/components/ui/input';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
-import { ACCESS_POINT_KINDS, label } from '@/lib/domain';
+import { ACCESS_POINT_KINDS, label } from '@/lib/domain/vocabulary';
 import { formatLength, unitLabels, type UnitSystem } from '@/lib/units';
 import { mmToEntered } from '@/lib/units/entry';
 import { accessPointFormSchema } from '@/lib/validation/access-points';

@@ -1,7 +1,7 @@
 import type { Metadata } from 'next';
 import { requirePageUser } from '@/lib/auth/session';
 import { listCustomerChoices } from '@/lib/data/sites';
-import { DESK_ROLES } from '@/lib/domain';
+import { DESK_ROLES } from '@/lib/domain/vocabulary';
 import { SiteForm } from '../site-form';
 import { PageHeader } from '@/components/ui/page-header';
 

@@ -5,8 +5,8 @@ import { getTranslations } from 'next-intl/server';
 import { IntlScope } from '@/components/shell/intl-scope';
 import { requirePageUser } from '@/lib/auth/session';
 import { getInstallView } from '@/lib/data/installs';
-import { FIELD_ROLES } from '@/lib/domain';
-import { AppError } from '@/lib/errors';
+import { FIELD_ROLES } from '@/lib/domain/vocabulary';
+import { AppError } from '@/lib/server/errors';
 import { uuidSchema } from '@/lib/validation/common';
 import { InstallScreen } from './install-screen';
 

@@ -1,7 +1,7 @@
 'use client';
 
 import { useTranslations } from 'next-intl';
-import { SAFETY_REMINDERS } from '@/lib/safety';
+import { SAFETY_REMINDERS } from '@/lib/install/safety';
 import { PrimaryAction, StepCard } from './field-ui';
 
 /** Once per install, before the first step. */

@@ -8,8 +8,8 @@ import { fetchJson } from '@/lib/client/fetch-json';
 import { refreshIntervalFor, useLiveStream } from '@/lib/client/live-stream';
 import { loadOutbox } from '@/lib/client/load-outbox';
 import type { OutboxEntry, OutboxUser } from '@/lib/client/outbox';
-import { serverNow } from '@/lib/client/server-clock';
-import type { InstallEventType } from '@/lib/domain';
+import { serverNow } from '@/lib/client/server-time';
+import type { InstallEventType } from '@/lib/domain/vocabulary';
 
 /**
  * The install as this tablet knows it: the server's view (SWR, refetched when the live stream reports a tap

@@ -1,4 +1,4 @@
-import { ADMIN_ONLY } from '@/lib/domain';
+import { ADMIN_ONLY } from '@/lib/domain/vocabulary';
 import { archiveCrew, getCrew, updateCrew } from '@/lib/data/crews';
 import { recordItem } from '@/lib/routes/records';
 import { crewPatchSchema } from '@/lib/validation/crews';

@@ -1,5 +1,5 @@
 import { archiveCustomer, getCustomer, updateCustomer } from '@/lib/data/customers';
-import { DESK_ROLES } from '@/lib/domain';
+import { DESK_ROLES } from '@/lib/domain/vocabulary';
 import { recordItem } from '@/lib/routes/records';
 import { customerPatchSchema } from '@/lib/validation/customers';
 

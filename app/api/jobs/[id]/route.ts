@@ -1,5 +1,5 @@
 import { archiveJob, findJob, updateJob } from '@/lib/data/jobs';
-import { DESK_ROLES } from '@/lib/domain';
+import { DESK_ROLES } from '@/lib/domain/vocabulary';
 import { recordItem } from '@/lib/routes/records';
 import { jobPatchSchema } from '@/lib/validation/jobs';
 

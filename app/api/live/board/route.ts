@@ -1,7 +1,7 @@
 import { NextResponse } from 'next/server';
 import { requireUser } from '@/lib/auth/session';
 import { LIVE_BOARD_ROLES, getLiveBoard, type LiveBoardResponse } from '@/lib/data/live-board';
-import { handle } from '@/lib/http';
+import { handle } from '@/lib/server/http';
 
 export const dynamic = 'force-dynamic';
 

@@ -1,4 +1,4 @@
-import { ADMIN_ONLY } from '@/lib/domain';
+import { ADMIN_ONLY } from '@/lib/domain/vocabulary';
 import { archivePacker, getPacker, updatePacker } from '@/lib/data/packers';
 import { recordItem } from '@/lib/routes/records';
 import { packerPatchSchema } from '@/lib/validation/packers';

@@ -1,5 +1,5 @@
 import { getRepair, removeRepair, updateRepair } from '@/lib/data/repairs';
-import { DESK_ROLES } from '@/lib/domain';
+import { DESK_ROLES } from '@/lib/domain/vocabulary';
 import { recordItem } from '@/lib/routes/records';
 import { repairPatchSchema } from '@/lib/validation/repairs';
 

@@ -1,4 +1,4 @@
-import { ADMIN_ONLY } from '@/lib/domain';
+import { ADMIN_ONLY } from '@/lib/domain/vocabulary';
 import { archiveResinKit, getResinKit, updateResinKit } from '@/lib/data/resin-kits';
 import { recordItem } from '@/lib/routes/records';
 import { resinKitPatchSchema } from '@/lib/validation/resin-kits';

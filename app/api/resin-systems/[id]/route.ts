@@ -1,4 +1,4 @@
-import { ADMIN_ONLY } from '@/lib/domain';
+import { ADMIN_ONLY } from '@/lib/domain/vocabulary';
 import { archiveResinSystem, getResinSystem, updateResinSystem } from '@/lib/data/resin-systems';
 import { recordItem } from '@/lib/routes/records';
 import { resinSystemPatchSchema } from '@/lib/validation/resin-systems';

@@ -1,5 +1,5 @@
 import { archiveSegment, getSegment, updateSegment } from '@/lib/data/segments';
-import { DESK_ROLES } from '@/lib/domain';
+import { DESK_ROLES } from '@/lib/domain/vocabulary';
 import { recordItem } from '@/lib/routes/records';
 import { segmentPatchSchema } from '@/lib/validation/segments';
 

@@ -1,5 +1,5 @@
 import { archiveSite, getSite, updateSite } from '@/lib/data/sites';
-import { DESK_ROLES } from '@/lib/domain';
+import { DESK_ROLES } from '@/lib/domain/vocabulary';
 import { recordItem } from '@/lib/routes/records';
 import { sitePatchSchema } from '@/lib/validation/sites';
 

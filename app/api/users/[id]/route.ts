@@ -1,4 +1,4 @@
-import { ADMIN_ONLY } from '@/lib/domain';
+import { ADMIN_ONLY } from '@/lib/domain/vocabulary';
 import { getUser, updateUser } from '@/lib/data/users';
 import { recordItem } from '@/lib/routes/records';
 import { userPatchSchema } from '@/lib/validation/users';

@@ -7,7 +7,7 @@ import { listResinSystems } from '@/lib/data/resin-systems';
 import { isoDateSchema } from '@/lib/validation/common';
 import { resinSystemListQuerySchema } from '@/lib/validation/resin-systems';
 import { ResinKitForm } from '../resin-kit-form';
-import { ADMIN_ONLY } from '@/lib/domain';
+import { ADMIN_ONLY } from '@/lib/domain/vocabulary';
 import { PageHeader } from '@/components/ui/page-header';
 
 export const metadata: Metadata = { title: 'New resin kit' };

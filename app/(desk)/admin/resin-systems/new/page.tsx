@@ -3,7 +3,7 @@ import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { ResinSystemForm } from '../resin-system-form';
 import { PageHeader } from '@/components/ui/page-header';
-import { ADMIN_ONLY } from '@/lib/domain';
+import { ADMIN_ONLY } from '@/lib/domain/vocabulary';
 
 export const metadata: Metadata = { title: 'New resin system' };
 

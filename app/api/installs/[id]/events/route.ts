@@ -2,7 +2,7 @@ import { NextResponse } from 'next/server';
 import { requireUserWithInstall } from '@/lib/auth/session';
 import { recordEvent } from '@/lib/data/install-events';
 import type { RecordEventResponse } from '@/lib/data/installs';
-import { bodyOrUndefined, handle } from '@/lib/http';
+import { bodyOrUndefined, handle } from '@/lib/server/http';
 import { uuidSchema } from '@/lib/validation/common';
 
 /** Records one tap; a replay of the same tap answers 200 with the stored event and writes nothing. */

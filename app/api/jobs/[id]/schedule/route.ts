@@ -2,8 +2,8 @@ import { NextResponse } from 'next/server';
 import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { scheduleJob, unscheduleJob } from '@/lib/data/schedule';
-import { DESK_ROLES } from '@/lib/domain';
-import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/http';
+import { DESK_ROLES } from '@/lib/domain/vocabulary';
+import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/server/http';
 import { scheduleInputSchema } from '@/lib/validation/schedule';
 
 type Context = { params: Promise<{ id: string }> };

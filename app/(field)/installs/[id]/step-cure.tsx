@@ -4,7 +4,7 @@ import { useLocale, useTranslations } from 'next-intl';
 import { useState } from 'react';
 import { pressureVerdict } from '@/lib/sizing';
 import { formatNumber, pressureFromSi, pressureToSi, unitLabels, type UnitSystem } from '@/lib/units';
-import { Callout, FieldInput, PrimaryAction, StepCard } from './field-ui';
+import { Callout, FieldInput, PrimaryAction, StepCard } from '@/app/(field)/installs/[id]/field-ui';
 
 // groundwaterKpa: the pressure of the repair's planned groundwater head, when the office entered one.
 type Rating = { minPressureKpa: number; maxPressureKpa: number; groundwaterKpa?: number | null } | null;

@@ -1,7 +1,7 @@
-import { CureInputError } from './errors';
-import { MAX_DATE_MS } from './limits';
-import { timeFactor } from './time-factor';
-import type { ResinClockSpec } from './types';
+import { CureInputError } from '@/lib/cure/errors';
+import { MAX_DATE_MS } from '@/lib/cure/limits';
+import { timeFactor } from '@/lib/cure/time-factor';
+import type { ResinClockSpec } from '@/lib/cure/types';
 
 const MS_PER_MIN = 60_000;
 

@@ -8,13 +8,13 @@ import { resinClockSpec } from '@/lib/cure';
 import { labelIn } from '@/i18n/labels';
 import { DEFAULT_LOCALE, isLocale, type Locale } from '@/i18n/locales';
 import { translatorFor } from '@/i18n/translator';
-import { formatDateTimeIn, formatInZone } from '@/lib/dates';
-import { installClock } from '@/lib/install/clock';
+import { formatDateTimeIn, formatInZone } from '@/lib/time/dates';
+import { installClock } from '@/lib/install/plan-and-flags';
 import { deriveInstallState, type InstallState } from '@/lib/install/state';
-import { SAFETY_REMINDERS } from '@/lib/safety';
+import { SAFETY_REMINDERS } from '@/lib/install/safety';
 import { formatDuration, formatLength, formatPressure, formatTemperature, type UnitSystem } from '@/lib/units';
-import { loadReportImages, type ReportImage } from './images';
-import type { TimelineBand, TimelineMark } from './timeline';
+import { loadReportImages, type ReportImage } from '@/lib/report/images';
+import type { TimelineBand, TimelineMark } from '@/lib/report/timeline';
 
 // Everything the customer's repair report shows, built once for the PDF, the e-mail and the /r page.
 // What it leaves out on purpose: job and repair notes (gate codes, office remarks), crew and user
