@@ -1,7 +1,7 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 import { decimal } from './columns';
 import type { StoredFold } from '@/lib/install/derived';
-import { INSTALL_EVENT_TYPES, INSTALL_STATUSES, InstallEventType, InstallStatus } from '@/lib/domain/vocabulary';
+import { INSTALL_STATUSES, type InstallStatus } from '@/lib/domain/vocabulary';
 
 /** One attempt at installing the patch of one repair. */
 export class Install extends Model<InferAttributes<Install>, InferCreationAttributes<Install>> {
