@@ -14,7 +14,7 @@ export async function register() {
     process.exit(1);
   }
   if (reportWorker === 'off') return;
-  const { startReportWorkerWhenReady } = await import('@/lib/jobs/worker');
+  const { startReportWorkerWhenReady } = await import('@/lib/queue/worker');
   // Not awaited: the site serves pages while the database is still coming up, and the worker starts
   // (retrying with backoff) as soon as it answers; sends queued meanwhile wait in report_sends.
   startReportWorkerWhenReady();

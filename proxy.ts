@@ -2,9 +2,9 @@ import { NextResponse, type NextRequest } from 'next/server';
 import { getToken } from 'next-auth/jwt';
 import { authSecret } from '@/lib/auth/secret';
 import { IS_DEVELOPMENT } from '@/lib/env-public';
-import { MAX_BODY_BYTES } from '@/lib/http-limits';
+import { MAX_BODY_BYTES } from '@/lib/server/http-limits';
 import { DOCUMENT_POLICY, contentSecurityPolicy, crossSiteRefusal, ownOrigins, securityHeaders, servedOverHttps } from '@/lib/security/headers';
-import { clientIp, reportLinkLimited, tooManyAttempts } from '@/lib/throttle';
+import { clientIp, reportLinkLimited, tooManyAttempts } from '@/lib/security/throttle';
 
 // Runs before every request except the build's static files. It is never the authorization check:
 // every page, route handler and server action calls requireUser itself. Here:

@@ -1,5 +1,5 @@
 import 'server-only';
-import { sequelize } from '@/lib/db';
+import { sequelize } from '@/lib/data/db';
 import { Company, initCompany } from './company';
 import { User, initUser } from './user';
 import { Crew, initCrew } from './crew';

@@ -1,5 +1,5 @@
 import { listAudit } from '@/lib/data/audit';
-import { formatInZone } from '@/lib/dates';
+import { formatInZone } from '@/lib/time/dates';
 import type { SessionUser } from '@/lib/auth/session';
 
 /** "History" panel of a detail page: who changed what, when and why (from the audit trail). */

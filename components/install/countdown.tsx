@@ -3,7 +3,7 @@
 import { useEffect, useState } from 'react';
 import { countdownState, type CountdownTone } from '@/lib/client/countdown';
 import { serverNow } from '@/lib/client/server-clock';
-import { formatInZone } from '@/lib/dates';
+import { formatInZone } from '@/lib/time/dates';
 
 const TONES: Record<CountdownTone, { box: string; digits: string; words: string }> = {
   neutral: { box: 'border-slate-300 bg-white', digits: 'text-brand-800', words: 'on time' },

@@ -1,4 +1,4 @@
-import { formatInZone } from '@/lib/dates';
+import { formatInZone } from '@/lib/time/dates';
 
 /** The office's alert for a payment that did not match its invoice (a second payment, a wrong amount or currency). */
 export function PaymentAlert({ text, at, timeZone = 'UTC' }: { text: string; at: Date | string | null; timeZone?: string }) {

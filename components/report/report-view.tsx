@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import type { ReportData, ReportImage } from '@/lib/report/data';
+import type { ReportData, ReportImage } from '@/lib/data/report';
 import { TimelineSvg } from './timeline-svg';
 
 /** The read-only repair report as a web page (the customer's link); the PDF shows the same data. */

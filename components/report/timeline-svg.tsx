@@ -1,4 +1,4 @@
-import { formatInZone } from '@/lib/dates';
+import { formatInZone } from '@/lib/time/dates';
 import { timelineLayout, type TimelineBand, type TimelineMark } from '@/lib/report/timeline';
 
 const BAND_CLASSES: Record<string, string> = { window: 'fill-near-500/60', held: 'fill-brand-700/60', cure: 'fill-safe-600/50' };

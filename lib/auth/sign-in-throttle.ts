@@ -1,8 +1,8 @@
 import 'server-only';
 import { NextRequest } from 'next/server';
-import { AppError } from '@/lib/errors';
-import { readBodyText } from '@/lib/http';
-import { clientIp, recordSignInFailure, recordSignInSuccess, signInLockedFor, tooManyAttempts } from '@/lib/throttle';
+import { AppError } from '@/lib/server/errors';
+import { readBodyText } from '@/lib/server/http';
+import { clientIp, recordSignInFailure, recordSignInSuccess, signInLockedFor, tooManyAttempts } from '@/lib/security/throttle';
 
 const SESSION_COOKIE = /(^|,\s*)(__Secure-)?next-auth\.session-token=/;
 

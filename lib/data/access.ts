@@ -1,9 +1,9 @@
 import 'server-only';
 import type { Model, ModelStatic, WhereOptions } from 'sequelize';
 import type { SessionUser } from '@/lib/auth/session';
-import { idOf } from '@/lib/http';
+import { idOf } from '@/lib/server/http';
 import { AccessPoint, ChecklistTemplate, Crew, Customer, Install, Invoice, Job, Packer, Repair, ResinKit, ResinSystem, Segment, Site, User } from '@/models';
-import { notFound } from '@/lib/errors';
+import { notFound } from '@/lib/server/errors';
 
 // Authorization comes before validation: a handler that reads a body for one row first makes sure the row is
 // the caller's company's, so another company's caller gets the same 404 whatever they send (never a 400 that

@@ -1,9 +1,9 @@
 import 'server-only';
 import { ChecklistTemplate, Company, Crew, Packer, ResinKit, ResinSystem, User } from '@/models';
-import { sequelize } from '@/lib/db';
+import { sequelize } from '@/lib/data/db';
 import { changedFields, recordAudit } from '@/lib/audit';
 import type { SessionUser } from '@/lib/auth/session';
-import { notFound } from '@/lib/errors';
+import { notFound } from '@/lib/server/errors';
 import type { CompanyPatch } from '@/lib/validation/company';
 import { assertAdmin } from './scope';
 

@@ -1,9 +1,9 @@
 import 'server-only';
 import { Op, UniqueConstraintError, type Transaction } from 'sequelize';
 import { Crew, CrewMember, Install, Job, User } from '@/models';
-import { sequelize } from '@/lib/db';
+import { sequelize } from '@/lib/data/db';
 import { changedFields, recordAudit } from '@/lib/audit';
-import { AppError, notFound } from '@/lib/errors';
+import { AppError, notFound } from '@/lib/server/errors';
 import { isDeskRole } from '@/lib/auth/roles';
 import { FIELD_ROLES } from '@/lib/domain';
 import type { SessionUser } from '@/lib/auth/session';

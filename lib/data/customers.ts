@@ -1,8 +1,8 @@
 import 'server-only';
 import type { InferAttributes } from 'sequelize';
 import { Customer, Job, Site } from '@/models';
-import { sequelize } from '@/lib/db';
-import { notFound } from '@/lib/errors';
+import { sequelize } from '@/lib/data/db';
+import { notFound } from '@/lib/server/errors';
 import type { SessionUser } from '@/lib/auth/session';
 import type { CustomerListQuery, customerInputSchema, customerPatchSchema } from '@/lib/validation/customers';
 import type { z } from 'zod';

@@ -3,7 +3,7 @@ import { Op, UniqueConstraintError, type Transaction } from 'sequelize';
 import type { z } from 'zod';
 import { AuditEntry, Install, InstallEvent, Job, Packer, Repair, ResinKit, ResinSystem, sequelize } from '@/models';
 import type { SessionUser } from '@/lib/auth/session';
-import { AppError, forbidden } from '@/lib/errors';
+import { AppError, forbidden } from '@/lib/server/errors';
 import { mayDecide } from '@/lib/install/access';
 import { correctsDecision, deviceTimeProblem, isClosedInstall } from '@/lib/install/record-rules';
 import { isSameEvent } from '@/lib/install/same-event';
@@ -11,7 +11,7 @@ import { correctionTarget, deriveInstallState, orderProblem, type InstallState }
 import { eventPayloadSchemas, parseEventBody } from '@/lib/validation/install-events';
 import { getCompany } from './company';
 import { findInstallFor, type InstallEventRow } from './installs';
-import { dayInZone } from '@/lib/dates';
+import { dayInZone } from '@/lib/time/dates';
 
 type ParsedEvent = Extract<ReturnType<typeof parseEventBody>, { success: true }>['data'];
 

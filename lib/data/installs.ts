@@ -5,7 +5,7 @@ import {
 } from '@/models';
 import type { SessionUser } from '@/lib/auth/session';
 import { resinClockSpec } from '@/lib/cure';
-import { AppError, forbidden, notFound } from '@/lib/errors';
+import { AppError, forbidden, notFound } from '@/lib/server/errors';
 import { installClock } from '@/lib/install/clock';
 import { mayWorkOn } from '@/lib/install/access';
 import { deriveInstallState } from '@/lib/install/state';
@@ -14,7 +14,7 @@ import type { UnitSystem } from '@/lib/units';
 import type { CreateInstallInput } from '@/lib/validation/install-events';
 import { getCompany } from './company';
 import { redoChainOf } from './redo';
-import { dayInZone } from '@/lib/dates';
+import { dayInZone } from '@/lib/time/dates';
 
 type Plain<M extends Model> = InferAttributes<M>;
 

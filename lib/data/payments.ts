@@ -3,9 +3,9 @@ import type Stripe from 'stripe';
 import { z } from 'zod';
 import { UniqueConstraintError, type Transaction } from 'sequelize';
 import { AuditEntry, Customer, Invoice, Job, PaymentEvent } from '@/models';
-import { sequelize } from '@/lib/db';
+import { sequelize } from '@/lib/data/db';
 import type { PaymentProblem } from '@/lib/domain';
-import { AppError } from '@/lib/errors';
+import { AppError } from '@/lib/server/errors';
 import { formatMoney } from '@/lib/invoice/money';
 import { stripeClient } from '@/lib/payments/stripe';
 

@@ -1,8 +1,8 @@
 import 'server-only';
 import type { Model, ModelStatic, Transaction, WhereOptions } from 'sequelize';
-import { sequelize } from '@/lib/db';
+import { sequelize } from '@/lib/data/db';
 import { changedFields, recordAudit } from '@/lib/audit';
-import { notFound } from '@/lib/errors';
+import { notFound } from '@/lib/server/errors';
 import type { SessionUser } from '@/lib/auth/session';
 
 // The shared steps of writing a company's record: lock it, change it, archive or delete it — each audited.

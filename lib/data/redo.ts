@@ -3,7 +3,7 @@ import { UniqueConstraintError } from 'sequelize';
 import { ChecklistTemplate, Install, Job, Repair, sequelize } from '@/models';
 import { recordAudit } from '@/lib/audit';
 import type { SessionUser } from '@/lib/auth/session';
-import { AppError, forbidden, notFound } from '@/lib/errors';
+import { AppError, forbidden, notFound } from '@/lib/server/errors';
 import type { RedoInstallInput } from '@/lib/validation/install-events';
 import { findInstallFor, type InstallRow } from './installs';
 

@@ -1,8 +1,8 @@
 import 'server-only';
 import { Op } from 'sequelize';
-import { sequelize } from '@/lib/db';
+import { sequelize } from '@/lib/data/db';
 import { Attachment, AuditEntry, Job, ReportLink, ReportSend } from '@/models';
-import { enqueueReportSend } from '@/lib/jobs/queue';
+import { enqueueReportSend } from '@/lib/queue/boss';
 import { createReportLink } from './report-links';
 
 // The rows the report worker (lib/report/deliver.ts) reads and writes. These run for the queue, not

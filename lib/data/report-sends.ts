@@ -1,12 +1,12 @@
 import 'server-only';
 import { Op, type InferAttributes } from 'sequelize';
-import { sequelize } from '@/lib/db';
+import { sequelize } from '@/lib/data/db';
 import { Customer, Install, Job, Repair, ReportSend, User } from '@/models';
 import { recordAudit } from '@/lib/audit';
 import type { SessionUser } from '@/lib/auth/session';
 import { label } from '@/lib/domain';
-import { AppError, notFound } from '@/lib/errors';
-import { enqueueReportSend, getBoss } from '@/lib/jobs/queue';
+import { AppError, notFound } from '@/lib/server/errors';
+import { enqueueReportSend, getBoss } from '@/lib/queue/boss';
 import { linkExpiry } from '@/lib/report/link';
 import type { SendReport } from '@/lib/validation/report';
 import { createReportLink } from './report-links';

@@ -1,8 +1,8 @@
 import 'server-only';
 import type { z } from 'zod';
 import { Install, ResinKit, ResinSystem } from '@/models';
-import { sequelize } from '@/lib/db';
-import { notFound } from '@/lib/errors';
+import { sequelize } from '@/lib/data/db';
+import { notFound } from '@/lib/server/errors';
 import type { SessionUser } from '@/lib/auth/session';
 import { resinSystemProblems, type ResinSystemInput, type ResinSystemListQuery, type resinSystemPatchSchema } from '@/lib/validation/resin-systems';
 import { throwProblems } from '@/lib/validation/rules';

@@ -6,9 +6,9 @@ import {
 import type { SessionUser } from '@/lib/auth/session';
 import { recordAudit } from '@/lib/audit';
 import { resinClockSpec, type QualityFlag } from '@/lib/cure';
-import { formatInZone } from '@/lib/dates';
+import { formatInZone } from '@/lib/time/dates';
 import { isDeskRole } from '@/lib/auth/roles';
-import { AppError, notFound } from '@/lib/errors';
+import { AppError, notFound } from '@/lib/server/errors';
 import { installClock } from '@/lib/install/clock';
 import { deriveInstallState } from '@/lib/install/state';
 import { localiseSentence, worstRank, worstSeverity } from '@/lib/review/flags';

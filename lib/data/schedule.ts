@@ -1,12 +1,12 @@
 import 'server-only';
 import { Op, type Transaction, type WhereOptions } from 'sequelize';
 import { Crew, Customer, Install, Job, Site } from '@/models';
-import { sequelize } from '@/lib/db';
+import { sequelize } from '@/lib/data/db';
 import { changedFields, recordAudit } from '@/lib/audit';
 import { isDeskRole } from '@/lib/auth/roles';
-import { dayInZone } from '@/lib/dates';
+import { dayInZone } from '@/lib/time/dates';
 import { label, type JobStatus } from '@/lib/domain';
-import { AppError, notFound } from '@/lib/errors';
+import { AppError, notFound } from '@/lib/server/errors';
 import { currentWeekStart, shiftWeek, weekDays, weekStartOf } from '@/lib/schedule/week';
 import type { SessionUser } from '@/lib/auth/session';
 import { SCHEDULABLE_STATUSES, type ScheduleInput } from '@/lib/validation/schedule';

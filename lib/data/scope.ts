@@ -1,8 +1,8 @@
 import 'server-only';
 import { Op, type WhereOptions } from 'sequelize';
-import { sequelize } from '@/lib/db';
+import { sequelize } from '@/lib/data/db';
 import { isDeskRole } from '@/lib/auth/roles';
-import { forbidden } from '@/lib/errors';
+import { forbidden } from '@/lib/server/errors';
 import type { SessionUser } from '@/lib/auth/session';
 
 /** Office records (customers, sites, segments, jobs, repairs) are written by the office and admins only. */

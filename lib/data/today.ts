@@ -5,7 +5,7 @@ import type { SessionUser } from '@/lib/auth/session';
 import { resinClockSpec } from '@/lib/cure';
 import { installClock } from '@/lib/install/clock';
 import { deriveInstallState, type InstallStep } from '@/lib/install/state';
-import { dayInZone } from '@/lib/dates';
+import { dayInZone } from '@/lib/time/dates';
 import { getCompany } from './company';
 import type { JobDetail } from './jobs';
 

@@ -1,5 +1,5 @@
 import { CureInputError, flagsFor, planCure, type CurePlan, type PackerPressureRating, type QualityFlag, type ResinClockSpec } from '@/lib/cure';
-import { formatInZone } from '@/lib/dates';
+import { formatInZone } from '@/lib/time/dates';
 import { localiseSentence } from '@/lib/review/flags';
 import type { UnitSystem } from '@/lib/units';
 import type { InstallState } from './state';

@@ -2,7 +2,7 @@ import 'server-only';
 import Stripe from 'stripe';
 import { z } from 'zod';
 import { env } from '@/lib/env';
-import { AppError } from '@/lib/errors';
+import { AppError } from '@/lib/server/errors';
 
 // The payment provider through its official SDK. STRIPE_API_URL points it at the local fake in
 // development and tests (scripts/fakes/payments.fake.mjs); unset, the SDK talks to the real service.

@@ -1,12 +1,12 @@
 import 'server-only';
 import nodemailer from 'nodemailer';
 import { env } from '@/lib/env';
-import { formatInZone } from '@/lib/dates';
+import { formatInZone } from '@/lib/time/dates';
 import {
   CLAIM_LEASE_SECONDS, claimReportSend, markReportSent, releaseReportSend, reportLinkOfSend, requeueReportSend, staleReportSends,
 } from '@/lib/data/report-delivery';
-import { REPORT_QUEUE, getBoss } from '@/lib/jobs/queue';
-import { buildReportData } from './data';
+import { REPORT_QUEUE, getBoss } from '@/lib/queue/boss';
+import { buildReportData } from '@/lib/data/report';
 import { reportEmail } from './email';
 import { reportLinkUrl, signReportLink } from './link';
 import { cachedReportPdf, reportFileName } from './pdf-cache';

@@ -1,4 +1,4 @@
-import type { ReportData } from './data';
+import type { ReportData } from '@/lib/data/report';
 
 // The e-mail that carries the report: plain, inline-styled HTML (mail clients drop <style>) and a
 // text part saying the same. The PDF is attached by the sender; the link opens the web copy.

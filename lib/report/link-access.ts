@@ -1,6 +1,6 @@
 import 'server-only';
 import { isLinkLive } from '@/lib/data/report-links';
-import { companyNameOf, getReportDataForLink } from './data';
+import { companyNameOf, getReportDataForLink } from '@/lib/data/report';
 import { verifyReportLink, type LinkCheck } from './link';
 
 // What a customer link opens. Every refusal looks the same from outside: no word on whether the job

@@ -2,7 +2,7 @@ import 'server-only';
 import { createHash } from 'node:crypto';
 import { reportVersionInputs } from '@/lib/data/report-delivery';
 import { headObject, putObject, readObject } from '@/lib/storage/s3';
-import { buildReportData, type ReportData } from './data';
+import { buildReportData, type ReportData } from '@/lib/data/report';
 import { renderReportPdf, reportFileName } from './pdf';
 
 export { reportFileName };

@@ -1,7 +1,7 @@
 import 'server-only';
 import { Document, Font, Image, Line, Page, Rect, StyleSheet, Svg, Text, View, renderToBuffer } from '@react-pdf/renderer';
-import { formatInZone } from '@/lib/dates';
-import type { ReportData, ReportRepair } from './data';
+import { formatInZone } from '@/lib/time/dates';
+import type { ReportData, ReportRepair } from '@/lib/data/report';
 import type { ReportImage } from './images';
 import { timelineLayout } from './timeline';
 

@@ -1,6 +1,6 @@
 import { addDays, addWeeks, format, startOfWeek } from 'date-fns';
 import { TZDate } from '@date-fns/tz';
-import { dayInZone } from '@/lib/dates';
+import { dayInZone } from '@/lib/time/dates';
 
 /** One column of the board: a calendar day in the company's zone and the instants it spans. */
 export type WeekDay = {

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { AppError } from '@/lib/errors';
+import { AppError } from '@/lib/server/errors';
 
 /**
  * Rules across fields (min below max, pot life before hold…), written once over a whole record and

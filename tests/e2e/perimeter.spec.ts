@@ -3,7 +3,7 @@ import { randomBytes } from 'node:crypto';
 import http from 'node:http';
 import { expect, request as playwrightRequest, test, type APIRequestContext } from '@playwright/test';
 import { BASE_URL } from '../../playwright.config';
-import { LIMITS, recordSignInFailure } from '../../lib/throttle';
+import { LIMITS, recordSignInFailure } from '@/lib/security/throttle';
 import { DEMO_PASSWORD, hydrated } from './helpers';
 
 // The perimeter against the real production server: attempt limits, security headers, the API's

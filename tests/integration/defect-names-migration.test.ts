@@ -2,7 +2,7 @@ import { createRequire } from 'node:module';
 import pg from 'pg';
 import { Sequelize } from 'sequelize';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { sequelize } from '@/lib/db';
+import { sequelize } from '@/lib/data/db';
 
 // The migration runs up and down on a copy of the repairs table in a scratch schema of the real PostgreSQL,
 // so the test database the other files use is never altered.

@@ -2,7 +2,7 @@ import pg from 'pg';
 import { Sequelize } from 'sequelize';
 import { describe, expect, it } from 'vitest';
 import { GET } from '@/app/api/health/route';
-import { databaseUp } from '@/lib/health';
+import { databaseUp } from '@/lib/data/health';
 
 describe('GET /api/health', () => {
   it('reports the database as up', async () => {

@@ -1,7 +1,7 @@
 import { beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { GET as listRoute, POST as createRoute } from '@/app/api/jobs/route';
 import { DELETE as archiveRoute, GET as getRoute, PATCH as patchRoute } from '@/app/api/jobs/[id]/route';
-import { sequelize } from '@/lib/db';
+import { sequelize } from '@/lib/data/db';
 import { AuditEntry, Customer, Job, Site } from '@/models';
 import { makeWorld, type World } from './helpers/world';
 import { signInAs, signOut } from './helpers/session';

@@ -7,7 +7,7 @@ import { env } from '@/lib/env';
 import { transportOptions } from '@/lib/report/deliver';
 import { Customer } from '@/models';
 import { proxy } from '@/proxy';
-import { LIMITS, recordSignInFailure, recordSignInSuccess, signInLockedFor } from '@/lib/throttle';
+import { LIMITS, recordSignInFailure, recordSignInSuccess, signInLockedFor } from '@/lib/security/throttle';
 import { signInAs } from './helpers/session';
 import { call, jsonBody } from './helpers/call';
 import { makeWorld, type World } from './helpers/world';

@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { POST as reviewRoute } from '@/app/api/installs/[id]/review/route';
-import { sequelize } from '@/lib/db';
+import { sequelize } from '@/lib/data/db';
 import { AuditEntry, Install, InstallEvent, Job, Repair } from '@/models';
 import { call, jsonBody } from './helpers/call';
 import { body, cleanInstall, postAll, postEvent, startInstall } from './helpers/installs';

@@ -5,7 +5,7 @@ import { POST as reviewRoute } from '@/app/api/installs/[id]/review/route';
 import { PATCH as companyRoute } from '@/app/api/company/route';
 import { POST as createResinRoute } from '@/app/api/resin-systems/route';
 import { PATCH as patchResinRoute } from '@/app/api/resin-systems/[id]/route';
-import { buildReportData } from '@/lib/report/data';
+import { buildReportData } from '@/lib/data/report';
 import { AuditEntry, Company, Install, Repair, ResinSystem } from '@/models';
 import { call, jsonBody } from './helpers/call';
 import { body, cleanInstall, getInstall, postAll, postEvent, startInstall } from './helpers/installs';

@@ -1,7 +1,7 @@
 import { beforeEach, describe, expect, it } from 'vitest';
 import { GET as listJobsRoute } from '@/app/api/jobs/route';
 import { requireUser } from '@/lib/auth/session';
-import { AppError } from '@/lib/errors';
+import { AppError } from '@/lib/server/errors';
 import { makeWorld, type World } from './helpers/world';
 import { signInAs } from './helpers/session';
 import { call } from './helpers/call';

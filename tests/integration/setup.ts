@@ -12,6 +12,6 @@ vi.mock('next/headers', () => ({
 }));
 
 afterAll(async () => {
-  const { sequelize } = await import('@/lib/db');
+  const { sequelize } = await import('@/lib/data/db');
   await sequelize.close();
 });

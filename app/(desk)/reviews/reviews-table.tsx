@@ -6,7 +6,7 @@ import type { InstallListResponse } from '@/lib/data/reviews';
 import { FlagBadges } from '@/components/review/flag-badges';
 import { StatusBadge } from '@/components/ui/badge';
 import { DataTable } from '@/components/ui/data-table';
-import { formatInZone } from '@/lib/dates';
+import { formatInZone } from '@/lib/time/dates';
 import { label } from '@/lib/domain';
 import { formatLength, type UnitSystem } from '@/lib/units';
 

@@ -1,7 +1,7 @@
 import { NextResponse } from 'next/server';
 import { requireUser } from '@/lib/auth/session';
 import { listAttachments, requestUpload } from '@/lib/data/attachments';
-import { bodyOf, handle, parseOrThrow, searchParamsOf } from '@/lib/http';
+import { bodyOf, handle, parseOrThrow, searchParamsOf } from '@/lib/server/http';
 import { attachmentListQuerySchema, uploadRequestSchema } from '@/lib/validation/attachments';
 
 /** The ready evidence of `?repairId=`, `?installId=` or `?jobId=`, with short-lived signed links. */

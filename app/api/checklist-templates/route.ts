@@ -1,5 +1,5 @@
 import { createChecklistTemplate, listChecklistTemplates } from '@/lib/data/checklist-templates';
-import { settingsCollection } from '@/lib/settings-routes';
+import { settingsCollection } from '@/lib/server/settings-routes';
 import { checklistTemplateInputSchema, checklistTemplateListQuerySchema } from '@/lib/validation/checklist-templates';
 
 /** Check-list templates with their ordered items `{ id, label, required }`; `archived` filters on inactive ones. */

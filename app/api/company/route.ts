@@ -2,7 +2,7 @@ import { NextResponse } from 'next/server';
 import { requireUser } from '@/lib/auth/session';
 import { getCompany, updateCompany } from '@/lib/data/company';
 import { ADMIN_ONLY } from '@/lib/domain';
-import { bodyOf, handle, parseOrThrow } from '@/lib/http';
+import { bodyOf, handle, parseOrThrow } from '@/lib/server/http';
 import { companyPatchSchema } from '@/lib/validation/company';
 
 /** The caller's company settings; every signed-in user of the company may read them. */

@@ -1,9 +1,9 @@
 import { NextResponse } from 'next/server';
 import { requireUser } from '@/lib/auth/session';
 import { createCrew, listCrews } from '@/lib/data/crews';
-import { csvResponse, toCsv } from '@/lib/csv';
+import { csvResponse, toCsv } from '@/lib/server/csv';
 import { ADMIN_ONLY } from '@/lib/domain';
-import { bodyOf, handle, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/http';
+import { bodyOf, handle, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/server/http';
 import { crewInputSchema, crewListQuerySchema } from '@/lib/validation/crews';
 
 /** Desk roles: every crew of the company; field roles: only their own crews. `?format=csv` exports. */

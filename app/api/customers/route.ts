@@ -1,9 +1,9 @@
 import { NextResponse } from 'next/server';
 import { requireUser } from '@/lib/auth/session';
 import { createCustomer, listCustomers } from '@/lib/data/customers';
-import { csvResponse, toCsv } from '@/lib/csv';
+import { csvResponse, toCsv } from '@/lib/server/csv';
 import { DESK_ROLES, label } from '@/lib/domain';
-import { bodyOf, handle, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/http';
+import { bodyOf, handle, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/server/http';
 import { customerInputSchema, customerListQuerySchema } from '@/lib/validation/customers';
 
 /** A page of customers, or with `?format=csv` every customer the same filter matches. */

@@ -1,5 +1,5 @@
 import { NextResponse } from 'next/server';
-import { databaseUp } from '@/lib/health';
+import { databaseUp } from '@/lib/data/health';
 
 export const dynamic = 'force-dynamic';
 

@@ -1,10 +1,10 @@
 import { NextResponse } from 'next/server';
 import { requireUser } from '@/lib/auth/session';
-import { csvResponse, toCsv } from '@/lib/csv';
+import { csvResponse, toCsv } from '@/lib/server/csv';
 import { createInstall, type CreateInstallResponse } from '@/lib/data/installs';
 import { listInstalls } from '@/lib/data/reviews';
 import { label } from '@/lib/domain';
-import { bodyOrUndefined, handle, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/http';
+import { bodyOrUndefined, handle, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/server/http';
 import { createInstallSchema } from '@/lib/validation/install-events';
 import { installListQuerySchema } from '@/lib/validation/reviews';
 

@@ -1,9 +1,9 @@
 import { NextResponse } from 'next/server';
 import { requireUser } from '@/lib/auth/session';
 import { createJob, listJobs } from '@/lib/data/jobs';
-import { csvResponse, toCsv } from '@/lib/csv';
+import { csvResponse, toCsv } from '@/lib/server/csv';
 import { DESK_ROLES, label } from '@/lib/domain';
-import { bodyOf, handle, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/http';
+import { bodyOf, handle, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/server/http';
 import { jobInputSchema, jobListQuerySchema } from '@/lib/validation/jobs';
 
 /** A page of jobs, or with `?format=csv` every job the same filter matches. */

@@ -1,5 +1,5 @@
 import { createPacker, listPackers } from '@/lib/data/packers';
-import { settingsCollection } from '@/lib/settings-routes';
+import { settingsCollection } from '@/lib/server/settings-routes';
 import { packerInputSchema, packerListQuerySchema } from '@/lib/validation/packers';
 
 const routes = settingsCollection({

@@ -1,9 +1,9 @@
 import { NextResponse } from 'next/server';
 import { requireUser } from '@/lib/auth/session';
 import { createRepair, listRepairs } from '@/lib/data/repairs';
-import { csvResponse, toCsv } from '@/lib/csv';
+import { csvResponse, toCsv } from '@/lib/server/csv';
 import { DESK_ROLES, label } from '@/lib/domain';
-import { bodyOf, handle, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/http';
+import { bodyOf, handle, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/server/http';
 import { repairInputSchema, repairListQuerySchema } from '@/lib/validation/repairs';
 
 /** A page of repairs, or with `?format=csv` every repair the same filter matches (lengths in mm, as stored). */

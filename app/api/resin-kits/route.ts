@@ -1,5 +1,5 @@
 import { createResinKit, listResinKits } from '@/lib/data/resin-kits';
-import { settingsCollection } from '@/lib/settings-routes';
+import { settingsCollection } from '@/lib/server/settings-routes';
 import { resinKitInputSchema, resinKitListQuerySchema } from '@/lib/validation/resin-kits';
 
 /** Resin kits (lots): `?resinSystemId=&expired=true|false&sort=expiresOn|lot|…`; POST for admins (409 on a lot already listed). */

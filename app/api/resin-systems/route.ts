@@ -1,6 +1,6 @@
 import { createResinSystem, listResinSystems } from '@/lib/data/resin-systems';
 import { label } from '@/lib/domain';
-import { settingsCollection } from '@/lib/settings-routes';
+import { settingsCollection } from '@/lib/server/settings-routes';
 import { resinSystemInputSchema, resinSystemListQuerySchema } from '@/lib/validation/resin-systems';
 
 /** Resin systems: a page (or `?format=csv`) for any signed-in user of the company; POST for admins. SI throughout. */

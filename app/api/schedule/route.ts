@@ -1,7 +1,7 @@
 import { NextResponse } from 'next/server';
 import { requireUser } from '@/lib/auth/session';
 import { getScheduleBoard } from '@/lib/data/schedule';
-import { handle, parseOrThrow, searchParamsOf } from '@/lib/http';
+import { handle, parseOrThrow, searchParamsOf } from '@/lib/server/http';
 import { scheduleQuerySchema } from '@/lib/validation/schedule';
 
 /** The crew schedule for `?week=` (any day of it; default this week in the company's zone). Field users get their own crews. */

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { CureInputError, flagsFor, planCure, type InstallRecord } from '@/lib/cure';
 import { installClock } from '@/lib/install/clock';
 import { deriveInstallState } from '@/lib/install/state';
-import { SAFETY_DEFERRAL, SAFETY_REMINDERS } from '@/lib/safety';
+import { SAFETY_DEFERRAL, SAFETY_REMINDERS } from '@/lib/install/safety';
 import { at, plusMin, typicalEpoxy } from './fixtures';
 
 // The example epoxy of fixtures.ts: 30 min pot life, 90 min hold, 240 min full cure at 20 °C,

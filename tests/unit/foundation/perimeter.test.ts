@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { safeCallbackPath, safeRedirect } from '@/lib/auth/callback-url';
 import { parseEnv } from '@/lib/env';
 import { contentSecurityPolicy, crossSiteRefusal, securityHeaders, storageOrigins } from '@/lib/security/headers';
-import { clientIp } from '@/lib/throttle';
+import { clientIp } from '@/lib/security/throttle';
 
 const e = parseEnv({ DATABASE_URL: 'postgres://a:b@127.0.0.1:1/x', NODE_ENV: 'test', S3_ENDPOINT: 'http://127.0.0.1:54393', STRIPE_API_URL: 'http://127.0.0.1:54395' });
 const APP = 'http://127.0.0.1:3000';

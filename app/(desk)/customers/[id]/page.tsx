@@ -7,7 +7,7 @@ import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { getCustomer } from '@/lib/data/customers';
 import { DESK_ROLES, label } from '@/lib/domain';
-import { recordForPage } from '@/lib/page-record';
+import { recordForPage } from '@/lib/server/page-record';
 
 export const metadata: Metadata = { title: 'Customer' };
 

@@ -11,7 +11,7 @@ import { getCompany } from '@/lib/data/company';
 import { findJob } from '@/lib/data/jobs';
 import { DESK_ROLES, label } from '@/lib/domain';
 import { REPAIRS_EDITABLE } from '@/lib/jobs/status';
-import { recordForPage } from '@/lib/page-record';
+import { recordForPage } from '@/lib/server/page-record';
 import { formatLength } from '@/lib/units';
 import { JobStatusActions } from './status-actions';
 

@@ -1,6 +1,6 @@
 import Link from 'next/link';
 import { StatusBadge } from '@/components/ui/badge';
-import { formatInZone } from '@/lib/dates';
+import { formatInZone } from '@/lib/time/dates';
 
 type Attempt = { id: string; status: string; inspectionResult: string | null; startedAt: Date | null; createdAt: Date; replacesInstallId: string | null };
 

@@ -10,7 +10,7 @@ import { getCompany } from '@/lib/data/company';
 import { getRepair, getRepairPlan } from '@/lib/data/repairs';
 import { DESK_ROLES, label } from '@/lib/domain';
 import { REPAIRS_EDITABLE } from '@/lib/jobs/status';
-import { recordForPage } from '@/lib/page-record';
+import { recordForPage } from '@/lib/server/page-record';
 import { formatLength } from '@/lib/units';
 import { listRepairAttempts } from '@/lib/data/redo';
 import { InstallAttempts } from './install-attempts';

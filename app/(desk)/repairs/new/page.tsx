@@ -5,7 +5,7 @@ import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { repairFormOptions } from '@/lib/data/repairs';
 import { DESK_ROLES } from '@/lib/domain';
-import { recordForPage } from '@/lib/page-record';
+import { recordForPage } from '@/lib/server/page-record';
 import { RepairForm } from '../repair-form';
 
 export const metadata: Metadata = { title: 'New repair' };

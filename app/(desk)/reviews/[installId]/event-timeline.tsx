@@ -1,4 +1,4 @@
-import { formatInZone } from '@/lib/dates';
+import { formatInZone } from '@/lib/time/dates';
 import { label, type InstallEventType } from '@/lib/domain';
 import { correctionDetails, eventDetails } from '@/lib/review/event-text';
 import type { UnitSystem } from '@/lib/units';

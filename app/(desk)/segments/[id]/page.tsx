@@ -7,7 +7,7 @@ import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { getSegment } from '@/lib/data/segments';
 import { DESK_ROLES, label } from '@/lib/domain';
-import { recordForPage } from '@/lib/page-record';
+import { recordForPage } from '@/lib/server/page-record';
 import { formatLength } from '@/lib/units';
 
 export const metadata: Metadata = { title: 'Segment' };

@@ -5,7 +5,7 @@ import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { getSite } from '@/lib/data/sites';
 import { DESK_ROLES } from '@/lib/domain';
-import { recordForPage } from '@/lib/page-record';
+import { recordForPage } from '@/lib/server/page-record';
 import { SegmentForm } from '../segment-form';
 
 export const metadata: Metadata = { title: 'New segment' };

@@ -7,7 +7,7 @@ import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { getSite } from '@/lib/data/sites';
 import { DESK_ROLES, label } from '@/lib/domain';
-import { recordForPage } from '@/lib/page-record';
+import { recordForPage } from '@/lib/server/page-record';
 import { formatLength } from '@/lib/units';
 import { AccessPointsPanel } from './access-points-panel';
 

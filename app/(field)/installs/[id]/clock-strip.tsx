@@ -5,7 +5,7 @@ import { Countdown } from '@/components/install/countdown';
 import { alarmsDue } from '@/lib/client/countdown';
 import { notify, soundAlarm, vibrate } from '@/lib/client/alarm';
 import type { CurePlan } from '@/lib/cure';
-import { formatInZone } from '@/lib/dates';
+import { formatInZone } from '@/lib/time/dates';
 import type { InstallState } from '@/lib/install/state';
 
 type Deadline = { key: string; label: string; start: Date; deadline: Date };

@@ -3,7 +3,7 @@
 import Link from 'next/link';
 import { useState } from 'react';
 import type { CurePlan } from '@/lib/cure';
-import { formatInZone } from '@/lib/dates';
+import { formatInZone } from '@/lib/time/dates';
 import type { InstallState } from '@/lib/install/state';
 import { formatDuration, formatPressure, formatTemperature, type UnitSystem } from '@/lib/units';
 import { Callout, PrimaryAction } from './field-ui';

@@ -3,7 +3,7 @@ import { notFound, redirect } from 'next/navigation';
 import { requirePageUser } from '@/lib/auth/session';
 import { getInstallView } from '@/lib/data/installs';
 import { FIELD_ROLES } from '@/lib/domain';
-import { AppError } from '@/lib/errors';
+import { AppError } from '@/lib/server/errors';
 import { uuidSchema } from '@/lib/validation/common';
 import { InstallScreen } from './install-screen';
 

@@ -1,6 +1,6 @@
 'use client';
 
-import { SAFETY_DEFERRAL, SAFETY_REMINDERS } from '@/lib/safety';
+import { SAFETY_DEFERRAL, SAFETY_REMINDERS } from '@/lib/install/safety';
 import { PrimaryAction, StepCard } from './field-ui';
 
 /** Once per install, before the first step. */

@@ -1,7 +1,7 @@
 import { NextResponse } from 'next/server';
 import { requireUser } from '@/lib/auth/session';
 import { deleteAttachment } from '@/lib/data/attachments';
-import { handle, idOf, parseOrThrow, searchParamsOf } from '@/lib/http';
+import { handle, idOf, parseOrThrow, searchParamsOf } from '@/lib/server/http';
 import { attachmentDeleteQuerySchema } from '@/lib/validation/attachments';
 
 type Context = { params: Promise<{ id: string }> };

@@ -1,5 +1,5 @@
 import { archiveChecklistTemplate, getChecklistTemplate, updateChecklistTemplate } from '@/lib/data/checklist-templates';
-import { settingsRecord } from '@/lib/settings-routes';
+import { settingsRecord } from '@/lib/server/settings-routes';
 import { checklistTemplatePatchSchema } from '@/lib/validation/checklist-templates';
 
 /** PATCH with `items` replaces the whole ordered list; items keep the ids they come with. */

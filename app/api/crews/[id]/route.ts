@@ -3,7 +3,7 @@ import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { archiveCrew, getCrew, updateCrew } from '@/lib/data/crews';
 import { ADMIN_ONLY } from '@/lib/domain';
-import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/http';
+import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/server/http';
 import { crewPatchSchema } from '@/lib/validation/crews';
 
 type Context = { params: Promise<{ id: string }> };

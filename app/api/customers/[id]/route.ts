@@ -3,7 +3,7 @@ import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { DESK_ROLES } from '@/lib/domain';
 import { archiveCustomer, getCustomer, updateCustomer } from '@/lib/data/customers';
-import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/http';
+import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/server/http';
 import { customerPatchSchema } from '@/lib/validation/customers';
 
 type Context = { params: Promise<{ id: string }> };

@@ -1,8 +1,8 @@
 import { NextResponse } from 'next/server';
 import { requireUser } from '@/lib/auth/session';
 import { getInstallView } from '@/lib/data/installs';
-import { notFound } from '@/lib/errors';
-import { handle } from '@/lib/http';
+import { notFound } from '@/lib/server/errors';
+import { handle } from '@/lib/server/http';
 import { uuidSchema } from '@/lib/validation/common';
 
 export const GET = handle(async (_request: Request, { params }: { params: Promise<{ id: string }> }) => {

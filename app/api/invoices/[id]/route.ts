@@ -3,7 +3,7 @@ import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { getInvoice, updateInvoice } from '@/lib/data/invoices';
 import { DESK_ROLES } from '@/lib/domain';
-import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/http';
+import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/server/http';
 import { invoicePatchSchema } from '@/lib/validation/invoices';
 
 type Context = { params: Promise<{ id: string }> };

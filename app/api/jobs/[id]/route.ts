@@ -3,7 +3,7 @@ import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { archiveJob, findJob, updateJob } from '@/lib/data/jobs';
 import { DESK_ROLES } from '@/lib/domain';
-import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/http';
+import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/server/http';
 import { jobPatchSchema } from '@/lib/validation/jobs';
 
 type Context = { params: Promise<{ id: string }> };

@@ -1,5 +1,5 @@
 import { archivePacker, getPacker, updatePacker } from '@/lib/data/packers';
-import { settingsRecord } from '@/lib/settings-routes';
+import { settingsRecord } from '@/lib/server/settings-routes';
 import { packerPatchSchema } from '@/lib/validation/packers';
 
 const routes = settingsRecord({ kind: 'packer', what: 'Packer', patchSchema: packerPatchSchema, get: getPacker, update: updatePacker, archive: archivePacker });

@@ -1,6 +1,6 @@
 import { NextResponse } from 'next/server';
 import { applyPaymentEvent } from '@/lib/data/payments';
-import { handle, readBodyText } from '@/lib/http';
+import { handle, readBodyText } from '@/lib/server/http';
 import { verifiedEvent } from '@/lib/payments/stripe';
 
 /**

@@ -3,7 +3,7 @@ import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { getRepair, removeRepair, updateRepair } from '@/lib/data/repairs';
 import { DESK_ROLES } from '@/lib/domain';
-import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/http';
+import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/server/http';
 import { repairPatchSchema } from '@/lib/validation/repairs';
 
 type Context = { params: Promise<{ id: string }> };

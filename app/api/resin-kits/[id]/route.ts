@@ -1,5 +1,5 @@
 import { archiveResinKit, getResinKit, updateResinKit } from '@/lib/data/resin-kits';
-import { settingsRecord } from '@/lib/settings-routes';
+import { settingsRecord } from '@/lib/server/settings-routes';
 import { resinKitPatchSchema } from '@/lib/validation/resin-kits';
 
 /** GET answers the kit with the installs that used it. */

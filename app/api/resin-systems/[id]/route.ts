@@ -1,5 +1,5 @@
 import { archiveResinSystem, getResinSystem, updateResinSystem } from '@/lib/data/resin-systems';
-import { settingsRecord } from '@/lib/settings-routes';
+import { settingsRecord } from '@/lib/server/settings-routes';
 import { resinSystemPatchSchema } from '@/lib/validation/resin-systems';
 
 const routes = settingsRecord({ kind: 'resinSystem', what: 'Resin system', patchSchema: resinSystemPatchSchema, get: getResinSystem, update: updateResinSystem, archive: archiveResinSystem });

@@ -3,7 +3,7 @@ import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { DESK_ROLES } from '@/lib/domain';
 import { archiveSegment, getSegment, updateSegment } from '@/lib/data/segments';
-import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/http';
+import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/server/http';
 import { segmentPatchSchema } from '@/lib/validation/segments';
 
 type Context = { params: Promise<{ id: string }> };

@@ -3,7 +3,7 @@ import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { DESK_ROLES } from '@/lib/domain';
 import { archiveSite, getSite, updateSite } from '@/lib/data/sites';
-import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/http';
+import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/server/http';
 import { sitePatchSchema } from '@/lib/validation/sites';
 
 type Context = { params: Promise<{ id: string }> };

@@ -3,7 +3,7 @@ import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { getUser, updateUser } from '@/lib/data/users';
 import { ADMIN_ONLY } from '@/lib/domain';
-import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/http';
+import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/server/http';
 import { userPatchSchema } from '@/lib/validation/users';
 
 type Context = { params: Promise<{ id: string }> };

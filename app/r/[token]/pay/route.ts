@@ -1,6 +1,6 @@
 import { NextResponse } from 'next/server';
-import { AppError } from '@/lib/errors';
-import { handle } from '@/lib/http';
+import { AppError } from '@/lib/server/errors';
+import { handle } from '@/lib/server/http';
 import { startCheckout } from '@/lib/data/payments';
 import { RETURN_COOKIE, returnCookieOptions } from '@/lib/report/payment-return';
 import { checkLiveLink, refusedLinkText } from '@/lib/report/link-access';

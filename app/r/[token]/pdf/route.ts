@@ -1,4 +1,4 @@
-import { handle } from '@/lib/http';
+import { handle } from '@/lib/server/http';
 import { openReportLink, refusedLinkText } from '@/lib/report/link-access';
 import { cachedReportPdf, reportFileName } from '@/lib/report/pdf-cache';
 

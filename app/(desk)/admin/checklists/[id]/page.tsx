@@ -5,7 +5,7 @@ import { AuditHistory } from '@/components/desk/audit-history';
 import { requirePageUser } from '@/lib/auth/session';
 import { getChecklistTemplate } from '@/lib/data/checklist-templates';
 import { getCompany } from '@/lib/data/company';
-import { recordForPage } from '@/lib/page-record';
+import { recordForPage } from '@/lib/server/page-record';
 import { ChecklistForm } from '../checklist-form';
 import { ADMIN_ONLY } from '@/lib/domain';
 

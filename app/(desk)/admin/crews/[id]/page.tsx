@@ -5,7 +5,7 @@ import { AuditHistory } from '@/components/desk/audit-history';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { getCrew, listCrewCandidates } from '@/lib/data/crews';
-import { recordForPage } from '@/lib/page-record';
+import { recordForPage } from '@/lib/server/page-record';
 import { CrewForm } from '../crew-form';
 import { CrewMembers } from '../crew-members';
 import { RestoreCrewButton } from './restore-button';

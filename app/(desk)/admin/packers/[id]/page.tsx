@@ -5,7 +5,7 @@ import { AuditHistory } from '@/components/desk/audit-history';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { getPacker } from '@/lib/data/packers';
-import { recordForPage } from '@/lib/page-record';
+import { recordForPage } from '@/lib/server/page-record';
 import { packerToForm } from '@/lib/validation/packers';
 import { PackerForm } from '../packer-form';
 import { ADMIN_ONLY } from '@/lib/domain';

@@ -5,7 +5,7 @@ import { AuditHistory } from '@/components/desk/audit-history';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { getResinSystem } from '@/lib/data/resin-systems';
-import { recordForPage } from '@/lib/page-record';
+import { recordForPage } from '@/lib/server/page-record';
 import { resinSystemToForm } from '@/lib/validation/resin-systems';
 import { ResinSystemForm } from '../resin-system-form';
 import { ADMIN_ONLY } from '@/lib/domain';

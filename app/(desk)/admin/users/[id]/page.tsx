@@ -6,7 +6,7 @@ import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { getUser } from '@/lib/data/users';
 import { ADMIN_ONLY, label } from '@/lib/domain';
-import { recordForPage } from '@/lib/page-record';
+import { recordForPage } from '@/lib/server/page-record';
 import { UserActions } from '../user-actions';
 import { EditUserForm } from '../user-form';
 

@@ -3,7 +3,7 @@ import Link from 'next/link';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCustomer } from '@/lib/data/customers';
 import { DESK_ROLES } from '@/lib/domain';
-import { recordForPage } from '@/lib/page-record';
+import { recordForPage } from '@/lib/server/page-record';
 import { CustomerForm } from '../../customer-form';
 
 export const metadata: Metadata = { title: 'Edit customer' };

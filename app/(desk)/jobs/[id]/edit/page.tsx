@@ -4,7 +4,7 @@ import { requirePageUser } from '@/lib/auth/session';
 import { findJob, jobFormOptions } from '@/lib/data/jobs';
 import { DESK_ROLES } from '@/lib/domain';
 import { RESCHEDULABLE } from '@/lib/jobs/status';
-import { recordForPage } from '@/lib/page-record';
+import { recordForPage } from '@/lib/server/page-record';
 import { JobForm } from '../../job-form';
 
 export const metadata: Metadata = { title: 'Edit job' };

@@ -4,7 +4,7 @@ import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { getRepair, repairFormOptions } from '@/lib/data/repairs';
 import { DESK_ROLES } from '@/lib/domain';
-import { recordForPage } from '@/lib/page-record';
+import { recordForPage } from '@/lib/server/page-record';
 import { lengthFromSi } from '@/lib/units';
 import { RepairForm } from '../../repair-form';
 

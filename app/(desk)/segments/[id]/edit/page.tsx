@@ -5,7 +5,7 @@ import { getCompany } from '@/lib/data/company';
 import { getSegment } from '@/lib/data/segments';
 import { listAccessPoints } from '@/lib/data/access-points';
 import { DESK_ROLES } from '@/lib/domain';
-import { recordForPage } from '@/lib/page-record';
+import { recordForPage } from '@/lib/server/page-record';
 import { SegmentForm } from '../../segment-form';
 
 export const metadata: Metadata = { title: 'Edit segment' };

@@ -1,7 +1,7 @@
 import { NextResponse } from 'next/server';
 import { requireUser } from '@/lib/auth/session';
 import { completeUpload } from '@/lib/data/attachments';
-import { handle, idOf } from '@/lib/http';
+import { handle, idOf } from '@/lib/server/http';
 
 type Context = { params: Promise<{ id: string }> };
 

@@ -3,7 +3,7 @@ import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { setCrewMembers } from '@/lib/data/crews';
 import { ADMIN_ONLY } from '@/lib/domain';
-import { bodyOf, handle, parseOrThrow } from '@/lib/http';
+import { bodyOf, handle, parseOrThrow } from '@/lib/server/http';
 import { crewMembersSchema } from '@/lib/validation/crews';
 
 type Context = { params: Promise<{ id: string }> };

@@ -2,8 +2,8 @@ import { NextResponse } from 'next/server';
 import { requireUser } from '@/lib/auth/session';
 import { recordEvent } from '@/lib/data/install-events';
 import type { RecordEventResponse } from '@/lib/data/installs';
-import { notFound } from '@/lib/errors';
-import { bodyOrUndefined, handle } from '@/lib/http';
+import { notFound } from '@/lib/server/errors';
+import { bodyOrUndefined, handle } from '@/lib/server/http';
 import { uuidSchema } from '@/lib/validation/common';
 
 /** Records one tap; a replay of the same tap answers 200 with the stored event and writes nothing. */

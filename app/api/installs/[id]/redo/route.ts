@@ -1,7 +1,7 @@
 import { NextResponse } from 'next/server';
 import { requireUser } from '@/lib/auth/session';
 import { REDO_ROLES, redoInstall } from '@/lib/data/redo';
-import { handle, idOf, optionalBodyOf, parseOrThrow } from '@/lib/http';
+import { handle, idOf, optionalBodyOf, parseOrThrow } from '@/lib/server/http';
 import { redoInstallSchema } from '@/lib/validation/install-events';
 
 /**

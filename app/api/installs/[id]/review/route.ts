@@ -3,7 +3,7 @@ import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { reviewInstall } from '@/lib/data/reviews';
 import { DESK_ROLES } from '@/lib/domain';
-import { bodyOf, handle, parseOrThrow } from '@/lib/http';
+import { bodyOf, handle, parseOrThrow } from '@/lib/server/http';
 import { reviewDecisionSchema } from '@/lib/validation/reviews';
 
 /** The office approves a signed-off install or sends it back with a comment (409 unless it awaits review). */

@@ -3,7 +3,7 @@ import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { changeInvoiceStatus } from '@/lib/data/invoices';
 import { DESK_ROLES } from '@/lib/domain';
-import { bodyOf, handle, parseOrThrow } from '@/lib/http';
+import { bodyOf, handle, parseOrThrow } from '@/lib/server/http';
 import { invoiceActionSchema } from '@/lib/validation/invoices';
 
 /** `{ action: 'issue' | 'void', reason? }`: issue a draft to the customer, or void it. */

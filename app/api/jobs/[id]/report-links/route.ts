@@ -2,7 +2,7 @@ import { NextResponse } from 'next/server';
 import { requireUser } from '@/lib/auth/session';
 import { revokeReportLinks } from '@/lib/data/report-links';
 import { DESK_ROLES } from '@/lib/domain';
-import { handle, idOf } from '@/lib/http';
+import { handle, idOf } from '@/lib/server/http';
 
 /**
  * Revokes every customer link of the job's reports made so far (office and admins): each then answers

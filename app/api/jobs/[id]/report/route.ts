@@ -3,9 +3,9 @@ import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { requestReportSend } from '@/lib/data/report-sends';
 import { DESK_ROLES } from '@/lib/domain';
-import { notFound } from '@/lib/errors';
-import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/http';
-import { getReportData } from '@/lib/report/data';
+import { notFound } from '@/lib/server/errors';
+import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/server/http';
+import { getReportData } from '@/lib/data/report';
 import { renderReportPdf, reportFileName } from '@/lib/report/pdf';
 import { sendReportSchema } from '@/lib/validation/report';
 

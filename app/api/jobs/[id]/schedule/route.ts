@@ -3,7 +3,7 @@ import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { scheduleJob, unscheduleJob } from '@/lib/data/schedule';
 import { DESK_ROLES } from '@/lib/domain';
-import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/http';
+import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/server/http';
 import { scheduleInputSchema } from '@/lib/validation/schedule';
 
 type Context = { params: Promise<{ id: string }> };

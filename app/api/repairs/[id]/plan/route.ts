@@ -1,7 +1,7 @@
 import { NextResponse } from 'next/server';
 import { requireUser } from '@/lib/auth/session';
 import { getRepairPlan } from '@/lib/data/repairs';
-import { handle, idOf, parseOrThrow, searchParamsOf } from '@/lib/http';
+import { handle, idOf, parseOrThrow, searchParamsOf } from '@/lib/server/http';
 import { repairPlanQuerySchema } from '@/lib/validation/repairs';
 
 type Context = { params: Promise<{ id: string }> };

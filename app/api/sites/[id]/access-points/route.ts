@@ -3,7 +3,7 @@ import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { DESK_ROLES } from '@/lib/domain';
 import { createAccessPoint, listAccessPoints } from '@/lib/data/access-points';
-import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/http';
+import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/server/http';
 import { accessPointInputSchema } from '@/lib/validation/access-points';
 
 type Context = { params: Promise<{ id: string }> };

@@ -3,7 +3,7 @@ import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { resetPassword } from '@/lib/data/users';
 import { ADMIN_ONLY } from '@/lib/domain';
-import { bodyOf, handle, parseOrThrow } from '@/lib/http';
+import { bodyOf, handle, parseOrThrow } from '@/lib/server/http';
 import { passwordResetSchema } from '@/lib/validation/users';
 
 type Context = { params: Promise<{ id: string }> };

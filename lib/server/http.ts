@@ -2,8 +2,8 @@ import 'server-only';
 import { randomUUID } from 'node:crypto';
 import { NextResponse } from 'next/server';
 import type { z } from 'zod';
-import { AppError } from '@/lib/errors';
-import { MAX_BODY_BYTES } from '@/lib/http-limits';
+import { AppError } from '@/lib/server/errors';
+import { MAX_BODY_BYTES } from '@/lib/server/http-limits';
 import { filledParams } from '@/lib/validation/list';
 
 /**

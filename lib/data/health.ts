@@ -1,6 +1,6 @@
 import 'server-only';
 import type { Sequelize } from 'sequelize';
-import { sequelize } from '@/lib/db';
+import { sequelize } from '@/lib/data/db';
 
 /** True when the database answers a trivial query within the timeout. */
 export async function databaseUp(db: Sequelize = sequelize, timeoutMs = 3000): Promise<boolean> {

@@ -1,6 +1,6 @@
 import 'server-only';
 import { notFound } from 'next/navigation';
-import { AppError } from '@/lib/errors';
+import { AppError } from '@/lib/server/errors';
 import { uuidSchema } from '@/lib/validation/common';
 
 /**

@@ -5,14 +5,14 @@ import {
 } from '@/models';
 import type { SessionUser } from '@/lib/auth/session';
 import { resinClockSpec } from '@/lib/cure';
-import { formatInZone } from '@/lib/dates';
+import { formatInZone } from '@/lib/time/dates';
 import { label } from '@/lib/domain';
 import { installClock } from '@/lib/install/clock';
 import { deriveInstallState, type InstallState } from '@/lib/install/state';
-import { SAFETY_DEFERRAL, SAFETY_REMINDERS } from '@/lib/safety';
+import { SAFETY_DEFERRAL, SAFETY_REMINDERS } from '@/lib/install/safety';
 import { formatDuration, formatLength, formatPressure, formatTemperature, type UnitSystem } from '@/lib/units';
-import { loadReportImages, type ReportImage } from './images';
-import type { TimelineBand, TimelineMark } from './timeline';
+import { loadReportImages, type ReportImage } from '@/lib/report/images';
+import type { TimelineBand, TimelineMark } from '@/lib/report/timeline';
 
 // Everything the customer's repair report shows, built once for the PDF, the e-mail and the /r page.
 // What it leaves out on purpose: job and repair notes (gate codes, office remarks), crew and user

@@ -2,11 +2,11 @@ import 'server-only';
 import { NextResponse } from 'next/server';
 import type { z } from 'zod';
 import { requireUser, type SessionUser } from '@/lib/auth/session';
-import { csvResponse, toCsv, type CsvColumn } from '@/lib/csv';
+import { csvResponse, toCsv, type CsvColumn } from '@/lib/server/csv';
 import { ownRowId, type OwnRowKind } from '@/lib/data/access';
 import type { Page } from '@/lib/data/list';
 import { ADMIN_ONLY } from '@/lib/domain';
-import { bodyOf, handle, idOf, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/http';
+import { bodyOf, handle, idOf, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/server/http';
 
 // The route handlers of a company settings resource (resin systems and kits, packers, check-lists):
 // every signed-in user of the company reads (the crew's tablet needs them); only an admin writes,

@@ -1,7 +1,7 @@
 import 'server-only';
 import { sweepPendingUploads } from '@/lib/data/attachments';
 import { deliverReportSend, sweepReportSends } from '@/lib/report/deliver';
-import { REPORT_QUEUE, REPORT_SWEEP_QUEUE, UPLOAD_SWEEP_QUEUE, getBoss, type ReportJob } from './queue';
+import { REPORT_QUEUE, REPORT_SWEEP_QUEUE, UPLOAD_SWEEP_QUEUE, getBoss, type ReportJob } from '@/lib/queue/boss';
 
 // The background worker: takes report sends off the queue and delivers them, and runs the scheduled
 // housekeeping. Started in-process by the Next server (instrumentation.ts, through
