@@ -2,7 +2,7 @@
 
 import { useEffect, useState } from 'react';
 import { countdownState, type CountdownTone } from '@/lib/client/countdown';
-import { serverNow } from '@/lib/client/server-clock';
+import { serverNow } from '@/lib/client/server-time';
 import { formatInZone } from '@/lib/time/dates';
 
 const TONES: Record<CountdownTone, { box: string; digits: string; words: string }> = {

@@ -1,5 +1,5 @@
 import { FROM_CACHE_HEADER } from './cache-rules';
-import { recordServerDate } from './server-clock';
+import { recordServerDate } from './server-time';
 
 /** A non-2xx answer (status and the server's message) or no answer at all (status 0). */
 export class FetchError extends Error {

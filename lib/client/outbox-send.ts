@@ -1,6 +1,6 @@
 import { errorOf } from './fetch-json';
 import type { OutboxEntry } from './outbox-db';
-import { recordServerDate } from './server-clock';
+import { recordServerDate } from './server-time';
 
 // One outbox entry → one POST, and what its answer means for the entry (policy in outbox.ts).
 

@@ -1,5 +1,5 @@
 import { formatPressure, formatTemperature } from '@/lib/units';
-import { addMinutes, cureMinutes, workingWindowMinutes } from './clock';
+import { addMinutes, cureMinutes, workingWindowMinutes } from './resin-clock';
 import { CureInputError } from './errors';
 import { calendarDay } from './expiry';
 import { DEFAULT_PREP_MINUTES, DEFAULT_SAFETY_MARGIN } from './limits';

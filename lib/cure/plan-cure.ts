@@ -1,5 +1,5 @@
 import { CureInputError } from './errors';
-import { addMinutes, cureMinutes, workingWindowMinutes } from './clock';
+import { addMinutes, cureMinutes, workingWindowMinutes } from './resin-clock';
 import { DEFAULT_PREP_MINUTES, DEFAULT_SAFETY_MARGIN } from './limits';
 import { coldMixText, coldPipeText, countedText, hotMixText, hotPipeText, noClockText, noDryRunText, slowPullText } from './reasons';
 import type { CurePlan, CurePlanInput, ResinClockSpec } from './types';

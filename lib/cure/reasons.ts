@@ -1,5 +1,5 @@
 import { formatDuration, formatTemperature, type UnitSystem } from '@/lib/units';
-import { minutesToText } from './clock';
+import { minutesToText } from './resin-clock';
 import type { ResinClockSpec } from './types';
 
 // The words shown to a crew; shared by the go/no-go plan and the quality flags so the two

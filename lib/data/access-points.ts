@@ -3,7 +3,7 @@ import { Op, UniqueConstraintError, type Transaction } from 'sequelize';
 import type { z } from 'zod';
 import { AccessPoint, Repair, Segment, Site } from '@/models';
 import { sequelize } from '@/lib/data/db';
-import { changedFields, recordAudit } from '@/lib/audit';
+import { changedFields, recordAudit } from '@/lib/data/audit';
 import { AppError, notFound } from '@/lib/server/errors';
 import type { SessionUser } from '@/lib/auth/session';
 import type { accessPointInputSchema, accessPointPatchSchema } from '@/lib/validation/access-points';

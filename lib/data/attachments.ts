@@ -3,7 +3,7 @@ import { randomUUID } from 'node:crypto';
 import { Op, type InferAttributes } from 'sequelize';
 import { Attachment, Install, Job, Repair, User } from '@/models';
 import { sequelize } from '@/lib/data/db';
-import { recordAudit } from '@/lib/audit';
+import { recordAudit } from '@/lib/data/audit';
 import { isDeskRole } from '@/lib/auth/roles';
 import type { SessionUser } from '@/lib/auth/session';
 import { AppError, forbidden, notFound } from '@/lib/server/errors';

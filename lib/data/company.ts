@@ -1,7 +1,7 @@
 import 'server-only';
 import { ChecklistTemplate, Company, Crew, Packer, ResinKit, ResinSystem, User } from '@/models';
 import { sequelize } from '@/lib/data/db';
-import { changedFields, recordAudit } from '@/lib/audit';
+import { changedFields, recordAudit } from '@/lib/data/audit';
 import type { SessionUser } from '@/lib/auth/session';
 import { notFound } from '@/lib/server/errors';
 import type { CompanyPatch } from '@/lib/validation/company';

@@ -2,7 +2,7 @@ import 'server-only';
 import { Op, UniqueConstraintError, type Transaction } from 'sequelize';
 import { Crew, CrewMember, Install, Job, User } from '@/models';
 import { sequelize } from '@/lib/data/db';
-import { changedFields, recordAudit } from '@/lib/audit';
+import { changedFields, recordAudit } from '@/lib/data/audit';
 import { AppError, notFound } from '@/lib/server/errors';
 import { isDeskRole } from '@/lib/auth/roles';
 import { FIELD_ROLES } from '@/lib/domain';

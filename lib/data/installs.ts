@@ -6,7 +6,7 @@ import {
 import type { SessionUser } from '@/lib/auth/session';
 import { resinClockSpec } from '@/lib/cure';
 import { AppError, forbidden, notFound } from '@/lib/server/errors';
-import { installClock } from '@/lib/install/clock';
+import { installClock } from '@/lib/install/plan-and-flags';
 import { mayWorkOn } from '@/lib/install/access';
 import { deriveInstallState } from '@/lib/install/state';
 import { SizingInputError, fittingPackers, patchLength } from '@/lib/sizing';

@@ -2,7 +2,7 @@ import 'server-only';
 import { Op, type InferAttributes, type Transaction } from 'sequelize';
 import { Customer, Invoice, InvoiceLine, Job, Repair, Site } from '@/models';
 import { sequelize } from '@/lib/data/db';
-import { changedFields, recordAudit } from '@/lib/audit';
+import { changedFields, recordAudit } from '@/lib/data/audit';
 import { AppError, notFound } from '@/lib/server/errors';
 import { invoiceTotals, percentToBp } from '@/lib/invoice/money';
 import type { SessionUser } from '@/lib/auth/session';

@@ -3,7 +3,7 @@ import { Op, QueryTypes, type InferAttributes, type Model, type Transaction } fr
 import type { z } from 'zod';
 import { AccessPoint, Company, Crew, Customer, Install, Job, Repair, Segment, Site } from '@/models';
 import { sequelize } from '@/lib/data/db';
-import { changedFields, recordAudit } from '@/lib/audit';
+import { changedFields, recordAudit } from '@/lib/data/audit';
 import { dayInZone } from '@/lib/time/dates';
 import { AppError, notFound } from '@/lib/server/errors';
 import { RESCHEDULABLE, nextJobStatus } from '@/lib/jobs/status';

@@ -1,7 +1,7 @@
 import 'server-only';
 import type { Model, ModelStatic, Transaction, WhereOptions } from 'sequelize';
 import { sequelize } from '@/lib/data/db';
-import { changedFields, recordAudit } from '@/lib/audit';
+import { changedFields, recordAudit } from '@/lib/data/audit';
 import { notFound } from '@/lib/server/errors';
 import type { SessionUser } from '@/lib/auth/session';
 

@@ -1,7 +1,7 @@
 import 'server-only';
 import { UniqueConstraintError } from 'sequelize';
 import { ChecklistTemplate, Install, Job, Repair, sequelize } from '@/models';
-import { recordAudit } from '@/lib/audit';
+import { recordAudit } from '@/lib/data/audit';
 import type { SessionUser } from '@/lib/auth/session';
 import { AppError, forbidden, notFound } from '@/lib/server/errors';
 import type { RedoInstallInput } from '@/lib/validation/install-events';

@@ -2,7 +2,7 @@ import 'server-only';
 import { Op, type InferAttributes, type Model, type Transaction } from 'sequelize';
 import { AccessPoint, Company, Install, Job, Packer, Repair, ResinSystem, Segment } from '@/models';
 import { sequelize } from '@/lib/data/db';
-import { changedFields, recordAudit } from '@/lib/audit';
+import { changedFields, recordAudit } from '@/lib/data/audit';
 import { AppError, notFound } from '@/lib/server/errors';
 import { REPAIRS_EDITABLE } from '@/lib/jobs/status';
 import { PLAN_CAUTION, planRepair } from '@/lib/planning/plan-repair';

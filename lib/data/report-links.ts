@@ -2,7 +2,7 @@ import 'server-only';
 import type { Transaction } from 'sequelize';
 import { sequelize } from '@/lib/data/db';
 import { Job, ReportLink, ReportSend } from '@/models';
-import { recordAudit } from '@/lib/audit';
+import { recordAudit } from '@/lib/data/audit';
 import type { SessionUser } from '@/lib/auth/session';
 import { notFound } from '@/lib/server/errors';
 import type { LinkClaims } from '@/lib/report/link';

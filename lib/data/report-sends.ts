@@ -2,7 +2,7 @@ import 'server-only';
 import { Op, type InferAttributes } from 'sequelize';
 import { sequelize } from '@/lib/data/db';
 import { Customer, Install, Job, Repair, ReportSend, User } from '@/models';
-import { recordAudit } from '@/lib/audit';
+import { recordAudit } from '@/lib/data/audit';
 import type { SessionUser } from '@/lib/auth/session';
 import { label } from '@/lib/domain';
 import { AppError, notFound } from '@/lib/server/errors';

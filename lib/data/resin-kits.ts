@@ -3,7 +3,7 @@ import { Op, UniqueConstraintError, type InferAttributes, type Transaction } fro
 import type { z } from 'zod';
 import { Install, Job, ResinKit, ResinSystem } from '@/models';
 import { sequelize } from '@/lib/data/db';
-import { recordAudit } from '@/lib/audit';
+import { recordAudit } from '@/lib/data/audit';
 import { dayInZone } from '@/lib/time/dates';
 import { AppError, notFound } from '@/lib/server/errors';
 import { isDeskRole } from '@/lib/auth/roles';

@@ -4,12 +4,12 @@ import {
   AccessPoint, Crew, Customer, Install, InstallEvent, Job, Packer, Repair, ResinKit, ResinSystem, Review, Segment, Site, User, sequelize,
 } from '@/models';
 import type { SessionUser } from '@/lib/auth/session';
-import { recordAudit } from '@/lib/audit';
+import { recordAudit } from '@/lib/data/audit';
 import { resinClockSpec, type QualityFlag } from '@/lib/cure';
 import { formatInZone } from '@/lib/time/dates';
 import { isDeskRole } from '@/lib/auth/roles';
 import { AppError, notFound } from '@/lib/server/errors';
-import { installClock } from '@/lib/install/clock';
+import { installClock } from '@/lib/install/plan-and-flags';
 import { deriveInstallState } from '@/lib/install/state';
 import { localiseSentence, worstRank, worstSeverity } from '@/lib/review/flags';
 import type { InstallListQuery, ReviewDecision } from '@/lib/validation/reviews';

@@ -2,7 +2,7 @@ import 'server-only';
 import { Op, type Transaction, type WhereOptions } from 'sequelize';
 import { Crew, Customer, Install, Job, Site } from '@/models';
 import { sequelize } from '@/lib/data/db';
-import { changedFields, recordAudit } from '@/lib/audit';
+import { changedFields, recordAudit } from '@/lib/data/audit';
 import { isDeskRole } from '@/lib/auth/roles';
 import { dayInZone } from '@/lib/time/dates';
 import { label, type JobStatus } from '@/lib/domain';

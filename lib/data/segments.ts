@@ -3,7 +3,7 @@ import { Op, type InferAttributes, type Transaction } from 'sequelize';
 import type { z } from 'zod';
 import { AccessPoint, Customer, Job, Repair, Segment, Site } from '@/models';
 import { sequelize } from '@/lib/data/db';
-import { changedFields, recordAudit } from '@/lib/audit';
+import { changedFields, recordAudit } from '@/lib/data/audit';
 import { AppError, notFound } from '@/lib/server/errors';
 import type { SessionUser } from '@/lib/auth/session';
 import { segmentShapeIssues, type SegmentListQuery, type segmentInputSchema, type segmentPatchSchema } from '@/lib/validation/segments';

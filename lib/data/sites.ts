@@ -3,7 +3,7 @@ import type { InferAttributes } from 'sequelize';
 import type { z } from 'zod';
 import { AccessPoint, Customer, Job, Segment, Site } from '@/models';
 import { sequelize } from '@/lib/data/db';
-import { changedFields, recordAudit } from '@/lib/audit';
+import { changedFields, recordAudit } from '@/lib/data/audit';
 import { AppError, notFound } from '@/lib/server/errors';
 import type { SessionUser } from '@/lib/auth/session';
 import type { SiteListQuery, siteInputSchema, sitePatchSchema } from '@/lib/validation/sites';

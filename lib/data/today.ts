@@ -3,7 +3,7 @@ import { Op } from 'sequelize';
 import { AccessPoint, Customer, Install, InstallEvent, Job, Packer, Repair, ResinKit, ResinSystem, Segment, Site } from '@/models';
 import type { SessionUser } from '@/lib/auth/session';
 import { resinClockSpec } from '@/lib/cure';
-import { installClock } from '@/lib/install/clock';
+import { installClock } from '@/lib/install/plan-and-flags';
 import { deriveInstallState, type InstallStep } from '@/lib/install/state';
 import { dayInZone } from '@/lib/time/dates';
 import { getCompany } from './company';

@@ -3,7 +3,7 @@ import bcrypt from 'bcryptjs';
 import { UniqueConstraintError, type Transaction } from 'sequelize';
 import { Crew, CrewMember, User } from '@/models';
 import { sequelize } from '@/lib/data/db';
-import { changedFields, recordAudit } from '@/lib/audit';
+import { changedFields, recordAudit } from '@/lib/data/audit';
 import { AppError, notFound } from '@/lib/server/errors';
 import { isDeskRole } from '@/lib/auth/roles';
 import type { SessionUser } from '@/lib/auth/session';

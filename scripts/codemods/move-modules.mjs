@@ -4,7 +4,8 @@
 //   node scripts/codemods/move-modules.mjs old/path.ts=new/path.ts [more pairs…]
 // For each pair: `git mv` (skipped when the old file is already gone and the new one exists), then in every
 // tracked .ts/.tsx/.mjs/.cjs/.mts file: `@/old` imports (and vi.mock / import() strings) become `@/new`;
-// relative imports that reach a moved file, and relative imports inside a moved file, become `@/…` imports.
+// relative imports that reach a moved file, and relative imports inside a moved file, are rewritten from where
+// the importing file now stands.
 import { execFileSync } from 'node:child_process';
 import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { dirname, join, normalize, relative } from 'node:path';
@@ -48,10 +49,13 @@ for (const file of files) {
     else return whole;
     const key = noExt(target);
     const moved = moves.get(key) ?? moves.get(join(key, 'index'));
-    if (moved) return `${lead}${quote}@/${moved}${quote}`;
-    // A relative import inside a moved file still names an unmoved file: write it from the root.
-    if (wasAt && spec.startsWith('.')) return `${lead}${quote}@/${relative(ROOT, join(ROOT, target))}${quote}`;
-    return whole;
+    if (!moved && !(wasAt && spec.startsWith('.'))) return whole;
+    const finalTarget = moved ?? target;
+    // Alias stays alias; a relative import stays relative, written from where the file stands now.
+    if (spec.startsWith('@/')) return `${lead}${quote}@/${finalTarget}${quote}`;
+    let rel = relative(dirname(file), finalTarget);
+    if (!rel.startsWith('.')) rel = `./${rel}`;
+    return `${lead}${quote}${rel}${quote}`;
   });
   if (out !== text) {
     writeFileSync(file, out);

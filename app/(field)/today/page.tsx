@@ -6,7 +6,7 @@ import { getCompany } from '@/lib/data/company';
 import { listTodayJobs } from '@/lib/data/today';
 import { FIELD_ROLES, label } from '@/lib/domain';
 import { formatLength } from '@/lib/units';
-import { RunningClock } from './running-clock';
+import { RunningClock } from './running-timer';
 import { StartInstallButton } from './start-install-button';
 
 export const metadata: Metadata = { title: 'Today' };

@@ -2,7 +2,7 @@
 import { act, cleanup, render, renderHook, screen } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { Countdown, useNow } from '@/components/install/countdown';
-import { recordServerDate, resetServerClock } from '@/lib/client/server-clock';
+import { recordServerDate, resetServerClock } from '@/lib/client/server-time';
 
 const START = new Date(Date.UTC(2026, 4, 4, 8, 0, 0));
 const at = (minutes: number) => new Date(START.getTime() + minutes * 60_000);

@@ -1,7 +1,7 @@
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { FROM_CACHE_HEADER } from '@/lib/client/cache-rules';
 import { FetchError, fetchJson } from '@/lib/client/fetch-json';
-import { clockOffsetMs, resetServerClock } from '@/lib/client/server-clock';
+import { clockOffsetMs, resetServerClock } from '@/lib/client/server-time';
 
 const HOUR_AHEAD = new Date(Date.now() + 3_600_000).toUTCString();
 

@@ -1,5 +1,5 @@
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
-import { clockOffsetMs, recordServerDate, resetServerClock, serverNow } from '@/lib/client/server-clock';
+import { clockOffsetMs, recordServerDate, resetServerClock, serverNow } from '@/lib/client/server-time';
 
 const T0 = Date.UTC(2026, 4, 4, 8, 0, 0);
 const httpDate = (ms: number) => new Date(ms).toUTCString(); // whole seconds, truncated

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { CureInputError, flagsFor, planCure, type InstallRecord } from '@/lib/cure';
-import { installClock } from '@/lib/install/clock';
+import { installClock } from '@/lib/install/plan-and-flags';
 import { deriveInstallState } from '@/lib/install/state';
 import { SAFETY_DEFERRAL, SAFETY_REMINDERS } from '@/lib/install/safety';
 import { at, plusMin, typicalEpoxy } from './fixtures';

@@ -2,7 +2,7 @@ import { createRequire } from 'node:module';
 import { describe, expect, it } from 'vitest';
 import { resinClockSpec } from '@/lib/cure/resin-spec';
 import { dayInZone } from '@/lib/time/dates';
-import { installClock } from '@/lib/install/clock';
+import { installClock } from '@/lib/install/plan-and-flags';
 import { deriveInstallState } from '@/lib/install/state';
 import { invoiceTotals } from '@/lib/invoice/money';
 import { patchLength } from '@/lib/sizing/patch-length';

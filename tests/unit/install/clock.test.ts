@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { installClock, type InstallClockInput } from '@/lib/install/clock';
+import { installClock, type InstallClockInput } from '@/lib/install/plan-and-flags';
 import { deriveInstallState } from '@/lib/install/state';
 import { typicalEpoxy } from '../cure/fixtures';
 import { at, cleanLog, conditions, ev } from './events';

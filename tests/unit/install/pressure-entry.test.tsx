@@ -1,7 +1,7 @@
 // @vitest-environment jsdom
 import { cleanup, fireEvent, render, screen } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { StepInflate } from '@/app/(field)/installs/[id]/step-clock';
+import { StepInflate } from '@/app/(field)/installs/[id]/step-cure';
 
 // Vitest runs without globals, so Testing Library cannot unmount by itself between tests.
 afterEach(() => cleanup());

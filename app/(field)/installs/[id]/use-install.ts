@@ -6,7 +6,7 @@ import type { InstallViewResponse } from '@/lib/data/installs';
 import { deriveInstallState, type InstallEventInput } from '@/lib/install/state';
 import { fetchJson } from '@/lib/client/fetch-json';
 import { enqueueEvent, flushOutbox, listEntries, subscribe, type OutboxEntry, type OutboxUser } from '@/lib/client/outbox';
-import { serverNow } from '@/lib/client/server-clock';
+import { serverNow } from '@/lib/client/server-time';
 import type { InstallEventType } from '@/lib/domain';
 
 /**
