@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import { ATTACHMENT_KINDS, ATTACHMENT_STATUSES } from '@/lib/domain';
+import { ATTACHMENT_KINDS, ATTACHMENT_STATUSES } from '@/lib/domain/vocabulary';
 
 /** A stored file (inspection image, document); the bytes live in object storage under storageKey. */
 export class Attachment extends Model<InferAttributes<Attachment>, InferCreationAttributes<Attachment>> {

@@ -1,6 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 import { decimal } from './columns';
-import { UNIT_SYSTEMS, type UnitSystemName } from '@/lib/domain';
+import { UNIT_SYSTEMS, type UnitSystemName } from '@/lib/domain/vocabulary';
 
 export class Company extends Model<InferAttributes<Company>, InferCreationAttributes<Company>> {
   declare id: CreationOptional<string>;

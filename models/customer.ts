@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import { CUSTOMER_KINDS } from '@/lib/domain';
+import { CUSTOMER_KINDS } from '@/lib/domain/vocabulary';
 
 export class Customer extends Model<InferAttributes<Customer>, InferCreationAttributes<Customer>> {
   declare id: CreationOptional<string>;

@@ -1,6 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 import { decimal } from './columns';
-import { INSTALL_STATUSES, type InstallStatus } from '@/lib/domain';
+import { INSTALL_STATUSES, type InstallStatus } from '@/lib/domain/vocabulary';
 
 /** One attempt at installing the patch of one repair. */
 export class Install extends Model<InferAttributes<Install>, InferCreationAttributes<Install>> {

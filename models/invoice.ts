@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import { INVOICE_STATUSES } from '@/lib/domain';
+import { INVOICE_STATUSES } from '@/lib/domain/vocabulary';
 
 /** What the customer owes for one job: integer cents, tax in basis points. */
 export class Invoice extends Model<InferAttributes<Invoice>, InferCreationAttributes<Invoice>> {

@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import { JOB_STATUSES, type JobStatus } from '@/lib/domain';
+import { JOB_STATUSES, type JobStatus } from '@/lib/domain/vocabulary';
 
 export class Job extends Model<InferAttributes<Job>, InferCreationAttributes<Job>> {
   declare id: CreationOptional<string>;

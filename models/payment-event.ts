@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import { PAYMENT_PROBLEMS, type PaymentProblem } from '@/lib/domain';
+import { PAYMENT_PROBLEMS, type PaymentProblem } from '@/lib/domain/vocabulary';
 
 /** A payment provider event applied to an invoice; the unique provider id makes a replayed webhook harmless. */
 export class PaymentEvent extends Model<InferAttributes<PaymentEvent>, InferCreationAttributes<PaymentEvent>> {

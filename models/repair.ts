@@ -1,6 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 import { decimal } from './columns';
-import { DEFECT_TYPES, REPAIR_STATUSES } from '@/lib/domain';
+import { DEFECT_TYPES, REPAIR_STATUSES } from '@/lib/domain/vocabulary';
 
 /** One defect to be fixed with one patch. */
 export class Repair extends Model<InferAttributes<Repair>, InferCreationAttributes<Repair>> {

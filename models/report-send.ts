@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import { REPORT_SEND_STATUSES, type ReportSendStatus } from '@/lib/domain';
+import { REPORT_SEND_STATUSES, type ReportSendStatus } from '@/lib/domain/vocabulary';
 
 /** One request to e-mail a job's repair report; the worker updates it on every try. */
 export class ReportSend extends Model<InferAttributes<ReportSend>, InferCreationAttributes<ReportSend>> {

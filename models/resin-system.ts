@@ -1,6 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 import { decimal, tenantRowColumns } from './columns';
-import { RESIN_CHEMISTRIES, SENSITIVITY_KINDS } from '@/lib/domain';
+import { RESIN_CHEMISTRIES, SENSITIVITY_KINDS } from '@/lib/domain/vocabulary';
 
 /** A resin product's clock at its reference temperature, as its data sheet gives it. */
 export class ResinSystem extends Model<InferAttributes<ResinSystem>, InferCreationAttributes<ResinSystem>> {

@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import { REVIEW_DECISIONS } from '@/lib/domain';
+import { REVIEW_DECISIONS } from '@/lib/domain/vocabulary';
 
 /** The office's decision on a finished install. */
 export class Review extends Model<InferAttributes<Review>, InferCreationAttributes<Review>> {

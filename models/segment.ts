@@ -1,6 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 import { decimal } from './columns';
-import { PIPE_MATERIALS } from '@/lib/domain';
+import { PIPE_MATERIALS } from '@/lib/domain/vocabulary';
 
 /** A pipe run between two access points (the far end may be unknown, e.g. a lateral to the main). */
 export class Segment extends Model<InferAttributes<Segment>, InferCreationAttributes<Segment>> {

@@ -2,7 +2,7 @@ import { Logo } from '@/components/shell/logo';
 import { DeskNav, type NavItem } from '@/components/shell/desk-nav';
 import { SignOutButton } from '@/components/shell/sign-out-button';
 import { requirePageUser } from '@/lib/auth/session';
-import { DESK_ROLES, label } from '@/lib/domain';
+import { DESK_ROLES, label } from '@/lib/domain/vocabulary';
 import { REVIEW_COUNT_URL } from '@/lib/review/queue';
 
 export const dynamic = 'force-dynamic';

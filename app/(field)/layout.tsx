@@ -1,7 +1,7 @@
 import { Logo } from '@/components/shell/logo';
 import { SignOutButton } from '@/components/shell/sign-out-button';
 import { requirePageUser } from '@/lib/auth/session';
-import { FIELD_ROLES, label } from '@/lib/domain';
+import { FIELD_ROLES, label } from '@/lib/domain/vocabulary';
 
 export const dynamic = 'force-dynamic';
 

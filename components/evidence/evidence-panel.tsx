@@ -6,7 +6,7 @@ import type { AttachmentListResponse, UploadRequestResponse } from '@/lib/data/a
 import { buttonClass } from '@/components/ui/button';
 import { fetchJson } from '@/lib/client/fetch-json';
 import { submitJson } from '@/lib/client/submit-json';
-import { ATTACHMENT_KINDS, label } from '@/lib/domain';
+import { ATTACHMENT_KINDS, label } from '@/lib/domain/vocabulary';
 import { ALLOWED_SUMMARY, typeOfFile, uploadRefusal } from '@/lib/storage/limits';
 
 type Target = { repairId: string } | { installId: string };

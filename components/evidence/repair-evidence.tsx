@@ -1,7 +1,7 @@
 import 'server-only';
 import { requirePageUser } from '@/lib/auth/session';
 import { listAttachments } from '@/lib/data/attachments';
-import { DESK_ROLES } from '@/lib/domain';
+import { DESK_ROLES } from '@/lib/domain/vocabulary';
 import { EvidencePanel } from './evidence-panel';
 
 /**

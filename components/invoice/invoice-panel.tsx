@@ -1,6 +1,6 @@
 import { addDays, format } from 'date-fns';
 import { invoiceOfJob } from '@/lib/data/invoices';
-import { label } from '@/lib/domain';
+import { label } from '@/lib/domain/vocabulary';
 import { formatLength, type UnitSystem } from '@/lib/units';
 import type { SessionUser } from '@/lib/auth/session';
 import { InvoiceActions } from './invoice-actions';

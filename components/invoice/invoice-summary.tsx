@@ -1,5 +1,5 @@
 import { Badge } from '@/components/ui/badge';
-import { label } from '@/lib/domain';
+import { label } from '@/lib/domain/vocabulary';
 import { bpToPercent, formatMoney } from '@/lib/invoice/money';
 import type { InvoiceDetail } from '@/lib/data/invoices';
 

@@ -1,7 +1,7 @@
 import type { SessionUser } from '@/lib/auth/session';
 import type { JobDetail } from '@/lib/data/jobs';
 import { reportLinkSummary } from '@/lib/data/report-links';
-import { label } from '@/lib/domain';
+import { label } from '@/lib/domain/vocabulary';
 import { ReportPanelClient } from './report-panel-client';
 import { RevokeLinksButton } from './revoke-links-button';
 

@@ -1,4 +1,4 @@
-import { label } from '@/lib/domain';
+import { label } from '@/lib/domain/vocabulary';
 
 type Tone = 'neutral' | 'brand' | 'near' | 'missed' | 'safe';
 

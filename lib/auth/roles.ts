@@ -1,4 +1,4 @@
-import { DESK_ROLES, FIELD_ROLES, type Role } from '@/lib/domain';
+import { DESK_ROLES, FIELD_ROLES, type Role } from '@/lib/domain/vocabulary';
 
 /** Where each role starts after signing in. */
 export function homeFor(role: Role): string {

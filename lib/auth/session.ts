@@ -2,7 +2,7 @@ import 'server-only';
 import { redirect } from 'next/navigation';
 import { User, CrewMember } from '@/models';
 import { AppError, forbidden, unauthorized } from '@/lib/server/errors';
-import type { Role } from '@/lib/domain';
+import type { Role } from '@/lib/domain/vocabulary';
 import { getSessionClaims, type SessionClaims } from './claims';
 import { roleAllowed } from './roles';
 

@@ -5,7 +5,7 @@ import { sequelize } from '@/lib/data/db';
 import { changedFields, recordAudit } from '@/lib/data/audit';
 import { AppError, notFound } from '@/lib/server/errors';
 import { isDeskRole } from '@/lib/auth/roles';
-import { FIELD_ROLES } from '@/lib/domain';
+import { FIELD_ROLES } from '@/lib/domain/vocabulary';
 import type { SessionUser } from '@/lib/auth/session';
 import type { CrewListQuery, crewInputSchema, crewPatchSchema } from '@/lib/validation/crews';
 import type { z } from 'zod';

@@ -4,7 +4,7 @@ import { z } from 'zod';
 import { UniqueConstraintError, type Transaction } from 'sequelize';
 import { AuditEntry, Customer, Invoice, Job, PaymentEvent } from '@/models';
 import { sequelize } from '@/lib/data/db';
-import type { PaymentProblem } from '@/lib/domain';
+import type { PaymentProblem } from '@/lib/domain/vocabulary';
 import { AppError } from '@/lib/server/errors';
 import { formatMoney } from '@/lib/invoice/money';
 import { stripeClient } from '@/lib/payments/stripe';

@@ -4,7 +4,7 @@ import { sequelize } from '@/lib/data/db';
 import { Customer, Install, Job, Repair, ReportSend, User } from '@/models';
 import { recordAudit } from '@/lib/data/audit';
 import type { SessionUser } from '@/lib/auth/session';
-import { label } from '@/lib/domain';
+import { label } from '@/lib/domain/vocabulary';
 import { AppError, notFound } from '@/lib/server/errors';
 import { enqueueReportSend, getBoss } from '@/lib/queue/boss';
 import { linkExpiry } from '@/lib/report/link';

@@ -6,7 +6,7 @@ import {
 import type { SessionUser } from '@/lib/auth/session';
 import { resinClockSpec } from '@/lib/cure';
 import { formatInZone } from '@/lib/time/dates';
-import { label } from '@/lib/domain';
+import { label } from '@/lib/domain/vocabulary';
 import { installClock } from '@/lib/install/plan-and-flags';
 import { deriveInstallState, type InstallState } from '@/lib/install/state';
 import { SAFETY_DEFERRAL, SAFETY_REMINDERS } from '@/lib/install/safety';

@@ -5,7 +5,7 @@ import { sequelize } from '@/lib/data/db';
 import { changedFields, recordAudit } from '@/lib/data/audit';
 import { isDeskRole } from '@/lib/auth/roles';
 import { dayInZone } from '@/lib/time/dates';
-import { label, type JobStatus } from '@/lib/domain';
+import { label, type JobStatus } from '@/lib/domain/vocabulary';
 import { AppError, notFound } from '@/lib/server/errors';
 import { currentWeekStart, shiftWeek, weekDays, weekStartOf } from '@/lib/schedule/week';
 import type { SessionUser } from '@/lib/auth/session';

@@ -1,5 +1,5 @@
 import { isDeskRole } from '@/lib/auth/roles';
-import type { Role } from '@/lib/domain';
+import type { Role } from '@/lib/domain/vocabulary';
 
 type Caller = { role: Role; crewIds: readonly string[] };
 

@@ -1,4 +1,4 @@
-import type { InstallEventType } from '@/lib/domain';
+import type { InstallEventType } from '@/lib/domain/vocabulary';
 
 // The install's event log as the step machine reads it: stored rows or taps queued on the device
 // (whose times are still ISO strings), sorted and with corrections applied.

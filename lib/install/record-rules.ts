@@ -1,4 +1,4 @@
-import type { InstallStatus } from '@/lib/domain';
+import type { InstallStatus } from '@/lib/domain/vocabulary';
 
 // Rules of the install record that do not depend on the log's order (that is lib/install/state.ts):
 // how far a device's clock may be from the server's, which installs are closed, which corrections

@@ -1,4 +1,4 @@
-import type { InstallEventType } from '@/lib/domain';
+import type { InstallEventType } from '@/lib/domain/vocabulary';
 import { applyCorrection, sortEvents, toDate, type EffectiveEvent, type InstallEventInput } from './log';
 
 // The install's step machine: what has happened (from the stored events, corrections applied)

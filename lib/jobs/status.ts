@@ -1,4 +1,4 @@
-import type { JobStatus } from '@/lib/domain';
+import type { JobStatus } from '@/lib/domain/vocabulary';
 
 /**
  * The status changes the office makes by hand. The rest of a job's life (in progress, awaiting review,

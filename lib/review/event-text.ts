@@ -1,4 +1,4 @@
-import type { InstallEventType } from '@/lib/domain';
+import type { InstallEventType } from '@/lib/domain/vocabulary';
 import { formatDuration, formatLength, formatPressure, formatTemperature, type UnitSystem } from '@/lib/units';
 
 // What an install event recorded, in words and the company's units, for the review page and the

@@ -5,7 +5,7 @@ import { requireUser, type SessionUser } from '@/lib/auth/session';
 import { csvResponse, toCsv, type CsvColumn } from '@/lib/server/csv';
 import { ownRowId, type OwnRowKind } from '@/lib/data/access';
 import type { Page } from '@/lib/data/list';
-import { ADMIN_ONLY } from '@/lib/domain';
+import { ADMIN_ONLY } from '@/lib/domain/vocabulary';
 import { bodyOf, handle, idOf, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/server/http';
 
 // The route handlers of a company settings resource (resin systems and kits, packers, check-lists):

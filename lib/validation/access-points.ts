@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { ACCESS_POINT_KINDS } from '@/lib/domain';
+import { ACCESS_POINT_KINDS } from '@/lib/domain/vocabulary';
 import { enteredToMm } from '@/lib/units/entry';
 import type { UnitSystem } from '@/lib/units';
 import { optionalText } from './common';

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { ATTACHMENT_KINDS } from '@/lib/domain';
+import { ATTACHMENT_KINDS } from '@/lib/domain/vocabulary';
 import { ALLOWED_SUMMARY, allowedType, uploadRefusal } from '@/lib/storage/limits';
 import { optionalText, uuidSchema } from './common';
 

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { UNIT_SYSTEMS } from '@/lib/domain';
+import { UNIT_SYSTEMS } from '@/lib/domain/vocabulary';
 import { convertPressure, formatLength, lengthFromSi, lengthToSi, type UnitSystem } from '@/lib/units';
 
 // Intl lists canonical zone names only and leaves out UTC, the column's default, so it is added here.

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { CUSTOMER_KINDS } from '@/lib/domain';
+import { CUSTOMER_KINDS } from '@/lib/domain/vocabulary';
 import { optionalText } from './common';
 import { listQuerySchema } from './list';
 

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { INSTALL_EVENT_TYPES } from '@/lib/domain';
+import { INSTALL_EVENT_TYPES } from '@/lib/domain/vocabulary';
 import { uuidSchema } from './common';
 
 // Payload of each install event type. Shared by the tablet (before it queues a tap) and the

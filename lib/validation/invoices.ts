@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { INVOICE_STATUSES } from '@/lib/domain';
+import { INVOICE_STATUSES } from '@/lib/domain/vocabulary';
 import { MAX_QUANTITY, MAX_UNIT_PRICE_CENTS } from '@/lib/invoice/money';
 import { isoDateSchema, optionalText, uuidSchema } from './common';
 import { listQuerySchema } from './list';

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { JOB_STATUSES } from '@/lib/domain';
+import { JOB_STATUSES } from '@/lib/domain/vocabulary';
 import { isoDateSchema, optionalText, uuidSchema } from './common';
 import { listQuerySchema } from './list';
 

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { DEFECT_TYPES, REPAIR_STATUSES } from '@/lib/domain';
+import { DEFECT_TYPES, REPAIR_STATUSES } from '@/lib/domain/vocabulary';
 import { formatLength, lengthFromSi, type LengthKind, type UnitSystem } from '@/lib/units';
 import { optionalText } from './common';
 import { codeListSchema, optionalId } from './jobs';

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { MAX_TEMP_C, MIN_TEMP_C } from '@/lib/cure';
-import { RESIN_CHEMISTRIES, SENSITIVITY_KINDS } from '@/lib/domain';
+import { RESIN_CHEMISTRIES, SENSITIVITY_KINDS } from '@/lib/domain/vocabulary';
 import { DEFAULT_EXCESS_PCT, DEFAULT_RESIN_TO_FABRIC_RATIO } from '@/lib/sizing';
 import {
   formatTemperature,

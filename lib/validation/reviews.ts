@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { INSTALL_STATUSES, REVIEW_DECISIONS } from '@/lib/domain';
+import { INSTALL_STATUSES, REVIEW_DECISIONS } from '@/lib/domain/vocabulary';
 import { listQuerySchema } from './list';
 
 /**

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import type { JobStatus } from '@/lib/domain';
+import type { JobStatus } from '@/lib/domain/vocabulary';
 
 /** Statuses the schedule may still move (the server also refuses once an install has started on site). */
 export const SCHEDULABLE_STATUSES: readonly JobStatus[] = ['draft', 'scheduled', 'in_progress', 'sent_back'];

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { PIPE_MATERIALS } from '@/lib/domain';
+import { PIPE_MATERIALS } from '@/lib/domain/vocabulary';
 import { enteredToMm } from '@/lib/units/entry';
 import type { UnitSystem } from '@/lib/units';
 import { uuidSchema } from './common';

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { ROLES } from '@/lib/domain';
+import { ROLES } from '@/lib/domain/vocabulary';
 import { blankAsUndefined } from './common';
 import { listQuerySchema } from './list';
 

@@ -3,7 +3,7 @@ import { beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { GET as listRoute } from '@/app/api/installs/route';
 import { POST as reviewRoute } from '@/app/api/installs/[id]/review/route';
 import { listTodayJobs } from '@/lib/data/today';
-import type { InstallEventType } from '@/lib/domain';
+import type { InstallEventType } from '@/lib/domain/vocabulary';
 import { AuditEntry, Customer, Install, InstallEvent, Job, Repair, Review, type User } from '@/models';
 import { call, jsonBody } from './helpers/call';
 import { body, cleanInstall, postAll, postEvent, startInstall } from './helpers/installs';

@@ -2,7 +2,7 @@ import { beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { GET as boardRoute } from '@/app/api/schedule/route';
 import { DELETE as unscheduleRoute, PUT as scheduleRoute } from '@/app/api/jobs/[id]/schedule/route';
 import { getScheduleBoard, type BoardCrew } from '@/lib/data/schedule';
-import type { JobStatus } from '@/lib/domain';
+import type { JobStatus } from '@/lib/domain/vocabulary';
 import { AuditEntry, Crew, Install, Job, Repair } from '@/models';
 import { makeWorld, type World } from './helpers/world';
 import { signInAs, signOut } from './helpers/session';

@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany, getSettingsCounts } from '@/lib/data/company';
-import { ADMIN_ONLY } from '@/lib/domain';
+import { ADMIN_ONLY } from '@/lib/domain/vocabulary';
 import { formatLength } from '@/lib/units';
 
 export const metadata: Metadata = { title: 'Company settings' };

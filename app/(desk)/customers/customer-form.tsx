@@ -8,7 +8,7 @@ import type { z } from 'zod';
 import { FormField, errorProps, inputClass, textareaClass } from '@/components/desk/form-field';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
-import { CUSTOMER_KINDS, label } from '@/lib/domain';
+import { CUSTOMER_KINDS, label } from '@/lib/domain/vocabulary';
 import { customerInputSchema } from '@/lib/validation/customers';
 
 type Input = z.input<typeof customerInputSchema>;

@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import { ListToolbar, FilterSelect, exportHrefOf } from '@/components/desk/list-toolbar';
 import { requirePageUser } from '@/lib/auth/session';
 import { listCustomers } from '@/lib/data/customers';
-import { CUSTOMER_KINDS, DESK_ROLES, label } from '@/lib/domain';
+import { CUSTOMER_KINDS, DESK_ROLES, label } from '@/lib/domain/vocabulary';
 import { customerListQuerySchema } from '@/lib/validation/customers';
 import { CustomersTable } from './customers-table';
 import { filledParams } from '@/lib/validation/list';

@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import { FilterSelect, ListToolbar, exportHrefOf } from '@/components/desk/list-toolbar';
 import { requirePageUser } from '@/lib/auth/session';
 import { listInvoices } from '@/lib/data/invoices';
-import { DESK_ROLES, INVOICE_STATUSES, label } from '@/lib/domain';
+import { DESK_ROLES, INVOICE_STATUSES, label } from '@/lib/domain/vocabulary';
 import { invoiceListQuerySchema } from '@/lib/validation/invoices';
 import { InvoicesTable } from './invoices-table';
 import { filledParams } from '@/lib/validation/list';

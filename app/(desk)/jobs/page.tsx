@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import { ListToolbar, FilterSelect, exportHrefOf } from '@/components/desk/list-toolbar';
 import { requirePageUser } from '@/lib/auth/session';
 import { jobFormOptions, listJobs } from '@/lib/data/jobs';
-import { DESK_ROLES, JOB_STATUSES, label } from '@/lib/domain';
+import { DESK_ROLES, JOB_STATUSES, label } from '@/lib/domain/vocabulary';
 import { jobListQuerySchema } from '@/lib/validation/jobs';
 import { JobsTable } from './jobs-table';
 import { filledParams } from '@/lib/validation/list';

@@ -3,7 +3,7 @@ import { ListToolbar, FilterSelect, exportHrefOf } from '@/components/desk/list-
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { listRepairs } from '@/lib/data/repairs';
-import { DESK_ROLES, REPAIR_STATUSES, label } from '@/lib/domain';
+import { DESK_ROLES, REPAIR_STATUSES, label } from '@/lib/domain/vocabulary';
 import { repairListQuerySchema } from '@/lib/validation/repairs';
 import { RepairsTable } from './repairs-table';
 

@@ -8,7 +8,7 @@ import type { z } from 'zod';
 import { FormField, errorProps, inputClass, textareaClass } from '@/components/desk/form-field';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson, type ApiFailure } from '@/lib/client/submit-json';
-import { DEFECT_TYPES, label } from '@/lib/domain';
+import { DEFECT_TYPES, label } from '@/lib/domain/vocabulary';
 import { formatLength, lengthToSi, unitLabels, type UnitSystem } from '@/lib/units';
 import { REPAIR_FORM_FIELDS, repairFormSchema } from '@/lib/validation/repairs';
 

@@ -4,7 +4,7 @@ import type { ColumnDef } from '@tanstack/react-table';
 import Link from 'next/link';
 import { DataTable } from '@/components/ui/data-table';
 import { formatInZone } from '@/lib/time/dates';
-import { label } from '@/lib/domain';
+import { label } from '@/lib/domain/vocabulary';
 import { formatLength, type UnitSystem } from '@/lib/units';
 import type { RepairListResponse } from '@/lib/data/repairs';
 

@@ -3,7 +3,7 @@ import { ListToolbar, FilterSelect, exportHrefOf } from '@/components/desk/list-
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { listInstalls } from '@/lib/data/reviews';
-import { DESK_ROLES, INSTALL_STATUSES, label } from '@/lib/domain';
+import { DESK_ROLES, INSTALL_STATUSES, label } from '@/lib/domain/vocabulary';
 import { installListQuerySchema } from '@/lib/validation/reviews';
 import { ReviewsTable } from './reviews-table';
 

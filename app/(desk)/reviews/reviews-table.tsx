@@ -7,7 +7,7 @@ import { FlagBadges } from '@/components/review/flag-badges';
 import { StatusBadge } from '@/components/ui/badge';
 import { DataTable } from '@/components/ui/data-table';
 import { formatInZone } from '@/lib/time/dates';
-import { label } from '@/lib/domain';
+import { label } from '@/lib/domain/vocabulary';
 import { formatLength, type UnitSystem } from '@/lib/units';
 
 type Row = InstallListResponse['items'][number];

@@ -3,7 +3,7 @@ import Link from 'next/link';
 import { buttonClass } from '@/components/ui/button';
 import { requirePageUser } from '@/lib/auth/session';
 import { getScheduleBoard } from '@/lib/data/schedule';
-import { DESK_ROLES } from '@/lib/domain';
+import { DESK_ROLES } from '@/lib/domain/vocabulary';
 import { SCHEDULABLE_STATUSES, scheduleQuerySchema } from '@/lib/validation/schedule';
 import { ScheduleBoard, UnscheduledList } from './schedule-board';
 import { ScheduleForm } from './schedule-form';

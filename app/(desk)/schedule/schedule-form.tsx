@@ -9,7 +9,7 @@ import { FormField, errorProps, inputClass } from '@/components/desk/form-field'
 import { Button } from '@/components/ui/button';
 import type { ScheduleJobResponse } from '@/lib/data/schedule';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
-import { label } from '@/lib/domain';
+import { label } from '@/lib/domain/vocabulary';
 import { scheduleFormSchema } from '@/lib/validation/schedule';
 
 type Values = z.infer<typeof scheduleFormSchema>;

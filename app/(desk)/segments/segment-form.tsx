@@ -8,7 +8,7 @@ import type { z } from 'zod';
 import { FormField, errorProps, inputClass } from '@/components/desk/form-field';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
-import { PIPE_MATERIALS, label } from '@/lib/domain';
+import { PIPE_MATERIALS, label } from '@/lib/domain/vocabulary';
 import { unitLabels, type UnitSystem } from '@/lib/units';
 import { mmToEntered, nominalToEntered } from '@/lib/units/entry';
 import { segmentFormSchema } from '@/lib/validation/segments';

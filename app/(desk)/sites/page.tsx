@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import { ListToolbar, FilterSelect, exportHrefOf } from '@/components/desk/list-toolbar';
 import { requirePageUser } from '@/lib/auth/session';
 import { listCustomerChoices, listSites } from '@/lib/data/sites';
-import { DESK_ROLES } from '@/lib/domain';
+import { DESK_ROLES } from '@/lib/domain/vocabulary';
 import { siteListQuerySchema } from '@/lib/validation/sites';
 import { SitesTable } from './sites-table';
 import { filledParams } from '@/lib/validation/list';

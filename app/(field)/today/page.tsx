@@ -4,7 +4,7 @@ import { buttonClass } from '@/components/ui/button';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { listTodayJobs } from '@/lib/data/today';
-import { FIELD_ROLES, label } from '@/lib/domain';
+import { FIELD_ROLES, label } from '@/lib/domain/vocabulary';
 import { formatLength } from '@/lib/units';
 import { RunningClock } from './running-timer';
 import { StartInstallButton } from './start-install-button';

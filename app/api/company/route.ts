@@ -1,7 +1,7 @@
 import { NextResponse } from 'next/server';
 import { requireUser } from '@/lib/auth/session';
 import { getCompany, updateCompany } from '@/lib/data/company';
-import { ADMIN_ONLY } from '@/lib/domain';
+import { ADMIN_ONLY } from '@/lib/domain/vocabulary';
 import { bodyOf, handle, parseOrThrow } from '@/lib/server/http';
 import { companyPatchSchema } from '@/lib/validation/company';
 

@@ -2,7 +2,7 @@ import { NextResponse } from 'next/server';
 import { requireUser } from '@/lib/auth/session';
 import { createCrew, listCrews } from '@/lib/data/crews';
 import { csvResponse, toCsv } from '@/lib/server/csv';
-import { ADMIN_ONLY } from '@/lib/domain';
+import { ADMIN_ONLY } from '@/lib/domain/vocabulary';
 import { bodyOf, handle, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/server/http';
 import { crewInputSchema, crewListQuerySchema } from '@/lib/validation/crews';
 

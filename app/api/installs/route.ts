@@ -3,7 +3,7 @@ import { requireUser } from '@/lib/auth/session';
 import { csvResponse, toCsv } from '@/lib/server/csv';
 import { createInstall, type CreateInstallResponse } from '@/lib/data/installs';
 import { listInstalls } from '@/lib/data/reviews';
-import { label } from '@/lib/domain';
+import { label } from '@/lib/domain/vocabulary';
 import { bodyOrUndefined, handle, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/server/http';
 import { createInstallSchema } from '@/lib/validation/install-events';
 import { installListQuerySchema } from '@/lib/validation/reviews';

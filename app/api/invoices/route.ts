@@ -2,7 +2,7 @@ import { NextResponse } from 'next/server';
 import { requireUser } from '@/lib/auth/session';
 import { csvResponse, toCsv } from '@/lib/server/csv';
 import { createInvoice, listInvoices } from '@/lib/data/invoices';
-import { DESK_ROLES, label } from '@/lib/domain';
+import { DESK_ROLES, label } from '@/lib/domain/vocabulary';
 import { bodyOf, handle, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/server/http';
 import { invoiceInputSchema, invoiceListQuerySchema } from '@/lib/validation/invoices';
 

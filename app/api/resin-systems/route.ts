@@ -1,5 +1,5 @@
 import { createResinSystem, listResinSystems } from '@/lib/data/resin-systems';
-import { label } from '@/lib/domain';
+import { label } from '@/lib/domain/vocabulary';
 import { settingsCollection } from '@/lib/server/settings-routes';
 import { resinSystemInputSchema, resinSystemListQuerySchema } from '@/lib/validation/resin-systems';
 

@@ -2,7 +2,7 @@ import { NextResponse } from 'next/server';
 import { requireUser } from '@/lib/auth/session';
 import { createSegment, listSegments } from '@/lib/data/segments';
 import { csvResponse, toCsv } from '@/lib/server/csv';
-import { DESK_ROLES, label } from '@/lib/domain';
+import { DESK_ROLES, label } from '@/lib/domain/vocabulary';
 import { bodyOf, handle, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/server/http';
 import { segmentInputSchema, segmentListQuerySchema } from '@/lib/validation/segments';
 

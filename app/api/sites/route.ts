@@ -2,7 +2,7 @@ import { NextResponse } from 'next/server';
 import { requireUser } from '@/lib/auth/session';
 import { createSite, listSites } from '@/lib/data/sites';
 import { csvResponse, toCsv } from '@/lib/server/csv';
-import { DESK_ROLES } from '@/lib/domain';
+import { DESK_ROLES } from '@/lib/domain/vocabulary';
 import { bodyOf, handle, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/server/http';
 import { siteInputSchema, siteListQuerySchema } from '@/lib/validation/sites';
 

@@ -2,7 +2,7 @@ import { NextResponse } from 'next/server';
 import { requireUser } from '@/lib/auth/session';
 import { createUser, listUsers } from '@/lib/data/users';
 import { csvResponse, toCsv } from '@/lib/server/csv';
-import { ADMIN_ONLY, label } from '@/lib/domain';
+import { ADMIN_ONLY, label } from '@/lib/domain/vocabulary';
 import { bodyOf, handle, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/server/http';
 import { userInputSchema, userListQuerySchema } from '@/lib/validation/users';
 

@@ -3,7 +3,7 @@ import fc from 'fast-check';
 import Stripe from 'stripe';
 import { z } from 'zod';
 import { POST as createInvoiceRoute } from '@/app/api/invoices/route';
-import { INSTALL_EVENT_TYPES } from '@/lib/domain';
+import { INSTALL_EVENT_TYPES } from '@/lib/domain/vocabulary';
 import { accessPointInputSchema, accessPointPatchSchema } from '@/lib/validation/access-points';
 import { uploadRequestSchema } from '@/lib/validation/attachments';
 import { checklistTemplateInputSchema, checklistTemplatePatchSchema } from '@/lib/validation/checklist-templates';

@@ -2,7 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { POST as createInstallRoute } from '@/app/api/installs/route';
 import { GET as getInstallRoute } from '@/app/api/installs/[id]/route';
 import { POST as postEventRoute } from '@/app/api/installs/[id]/events/route';
-import type { InstallEventType } from '@/lib/domain';
+import type { InstallEventType } from '@/lib/domain/vocabulary';
 import { call } from './call';
 import type { InstallWorld } from './world';
 

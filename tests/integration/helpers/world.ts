@@ -2,7 +2,7 @@ import { randomUUID } from 'node:crypto';
 import {
   AccessPoint, ChecklistTemplate, Company, Crew, CrewMember, Customer, Job, Packer, Repair, ResinKit, ResinSystem, Segment, Site, User,
 } from '@/models';
-import type { Role } from '@/lib/domain';
+import type { Role } from '@/lib/domain/vocabulary';
 
 // A bcrypt hash made once: the tests sign in with cookies, not passwords.
 const HASH = '$2b$12$KmJz3YskaqY8OKmQx6oTFeAcu9JZGSd7OaZFf2WtWTl6JKW3RK0sG';

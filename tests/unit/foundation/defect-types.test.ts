@@ -1,6 +1,6 @@
 import { createRequire } from 'node:module';
 import { describe, expect, it } from 'vitest';
-import { DEFECT_TYPES, LABELS, label } from '@/lib/domain';
+import { DEFECT_TYPES, LABELS, label } from '@/lib/domain/vocabulary';
 import { repairInputSchema, repairPatchSchema } from '@/lib/validation/repairs';
 
 const require = createRequire(import.meta.url);

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { homeFor, isDeskRole, isFieldRole, roleAllowed } from '@/lib/auth/roles';
-import { ROLES } from '@/lib/domain';
+import { ROLES } from '@/lib/domain/vocabulary';
 
 describe('role helpers', () => {
   it('sends each role to its own home', () => {

@@ -1,4 +1,4 @@
-import type { InstallEventType } from '@/lib/domain';
+import type { InstallEventType } from '@/lib/domain/vocabulary';
 import type { InstallEventInput } from '@/lib/install/state';
 
 // A small builder of install event logs for the step-machine tests: times are minutes after 08:00 UTC.

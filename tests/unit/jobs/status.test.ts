@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { JOB_STATUSES } from '@/lib/domain';
+import { JOB_STATUSES } from '@/lib/domain/vocabulary';
 import { OFFICE_TRANSITIONS, nextJobStatus } from '@/lib/jobs/status';
 
 const crewAndDay = { crewId: 'c', scheduledDate: '2026-12-01', changed: true };

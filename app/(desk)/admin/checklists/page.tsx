@@ -4,7 +4,7 @@ import { FilterSelect, ListToolbar, exportHrefOf } from '@/components/desk/list-
 import { Badge } from '@/components/ui/badge';
 import { requirePageUser } from '@/lib/auth/session';
 import { listChecklistTemplates } from '@/lib/data/checklist-templates';
-import { ADMIN_ONLY } from '@/lib/domain';
+import { ADMIN_ONLY } from '@/lib/domain/vocabulary';
 import { checklistTemplateListQuerySchema } from '@/lib/validation/checklist-templates';
 import { filledParams } from '@/lib/validation/list';
 

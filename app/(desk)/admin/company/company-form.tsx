@@ -7,7 +7,7 @@ import { useForm, useWatch } from 'react-hook-form';
 import { FormField, errorProps, inputClass } from '@/components/desk/form-field';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
-import { UNIT_SYSTEMS, type UnitSystemName } from '@/lib/domain';
+import { UNIT_SYSTEMS, type UnitSystemName } from '@/lib/domain/vocabulary';
 import { lengthFromSi, lengthToSi, unitLabels } from '@/lib/units';
 import { companyFormSchema, formToCompanyPatch, modulusInSystem, type CompanyFormValues } from '@/lib/validation/company';
 

@@ -5,7 +5,7 @@ import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { companyToForm, knownTimeZones } from '@/lib/validation/company';
 import { CompanyForm } from './company-form';
-import { ADMIN_ONLY } from '@/lib/domain';
+import { ADMIN_ONLY } from '@/lib/domain/vocabulary';
 
 export const metadata: Metadata = { title: 'Company settings' };
 

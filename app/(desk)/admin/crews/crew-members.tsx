@@ -4,7 +4,7 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { submitJson } from '@/lib/client/submit-json';
-import { label } from '@/lib/domain';
+import { label } from '@/lib/domain/vocabulary';
 
 type Person = { id: string; name: string; role: string; active: boolean };
 

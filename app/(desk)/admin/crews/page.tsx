@@ -5,7 +5,7 @@ import { requirePageUser } from '@/lib/auth/session';
 import { listCrews } from '@/lib/data/crews';
 import { crewListQuerySchema } from '@/lib/validation/crews';
 import { CrewsTable } from './crews-table';
-import { ADMIN_ONLY } from '@/lib/domain';
+import { ADMIN_ONLY } from '@/lib/domain/vocabulary';
 import { filledParams } from '@/lib/validation/list';
 
 export const metadata: Metadata = { title: 'Crews' };

@@ -6,7 +6,7 @@ import { getCompany } from '@/lib/data/company';
 import { listPackers } from '@/lib/data/packers';
 import { packerListQuerySchema } from '@/lib/validation/packers';
 import { PackersTable } from './packers-table';
-import { ADMIN_ONLY } from '@/lib/domain';
+import { ADMIN_ONLY } from '@/lib/domain/vocabulary';
 import { filledParams } from '@/lib/validation/list';
 
 export const metadata: Metadata = { title: 'Packers' };

@@ -8,7 +8,7 @@ import { listResinSystems } from '@/lib/data/resin-systems';
 import { resinKitListQuerySchema } from '@/lib/validation/resin-kits';
 import { resinSystemListQuerySchema } from '@/lib/validation/resin-systems';
 import { ResinKitsTable } from './resin-kits-table';
-import { ADMIN_ONLY } from '@/lib/domain';
+import { ADMIN_ONLY } from '@/lib/domain/vocabulary';
 import { filledParams } from '@/lib/validation/list';
 
 export const metadata: Metadata = { title: 'Resin kits' };

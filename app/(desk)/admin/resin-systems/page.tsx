@@ -4,7 +4,7 @@ import { FilterSelect, ListToolbar, exportHrefOf } from '@/components/desk/list-
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { listResinSystems } from '@/lib/data/resin-systems';
-import { ADMIN_ONLY, RESIN_CHEMISTRIES, label } from '@/lib/domain';
+import { ADMIN_ONLY, RESIN_CHEMISTRIES, label } from '@/lib/domain/vocabulary';
 import { resinSystemListQuerySchema } from '@/lib/validation/resin-systems';
 import { ResinSystemsTable } from './resin-systems-table';
 import { filledParams } from '@/lib/validation/list';

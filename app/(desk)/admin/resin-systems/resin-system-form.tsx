@@ -7,7 +7,7 @@ import { useForm, useWatch } from 'react-hook-form';
 import { saveSettings } from '@/components/materials/save-settings';
 import { FormField, errorProps, inputClass } from '@/components/desk/form-field';
 import { Button } from '@/components/ui/button';
-import { RESIN_CHEMISTRIES, label } from '@/lib/domain';
+import { RESIN_CHEMISTRIES, label } from '@/lib/domain/vocabulary';
 import { DEFAULT_EXCESS_PCT, DEFAULT_RESIN_TO_FABRIC_RATIO } from '@/lib/sizing';
 import { unitLabels, type UnitSystem } from '@/lib/units';
 import { resinSystemFormSchema, type ResinSystemFormValues, type ResinSystemInput } from '@/lib/validation/resin-systems';

@@ -3,7 +3,7 @@
 import type { ColumnDef } from '@tanstack/react-table';
 import Link from 'next/link';
 import { DataTable } from '@/components/ui/data-table';
-import { label } from '@/lib/domain';
+import { label } from '@/lib/domain/vocabulary';
 import { formatTemperature, type UnitSystem } from '@/lib/units';
 import type { ResinSystemListResponse } from '@/lib/data/resin-systems';
 

@@ -3,7 +3,7 @@ import Link from 'next/link';
 import { ListToolbar, FilterSelect, exportHrefOf } from '@/components/desk/list-toolbar';
 import { requirePageUser } from '@/lib/auth/session';
 import { listUsers } from '@/lib/data/users';
-import { ADMIN_ONLY, ROLES, label } from '@/lib/domain';
+import { ADMIN_ONLY, ROLES, label } from '@/lib/domain/vocabulary';
 import { userListQuerySchema } from '@/lib/validation/users';
 import { UsersTable } from './users-table';
 import { filledParams } from '@/lib/validation/list';

@@ -8,7 +8,7 @@ import type { z } from 'zod';
 import { FormField, errorProps, inputClass } from '@/components/desk/form-field';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
-import { ROLES, label } from '@/lib/domain';
+import { ROLES, label } from '@/lib/domain/vocabulary';
 import { PASSWORD_MIN_LENGTH, userInputSchema, userPatchSchema } from '@/lib/validation/users';
 
 type NewInput = z.input<typeof userInputSchema>;

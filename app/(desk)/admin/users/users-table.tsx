@@ -4,7 +4,7 @@ import type { ColumnDef } from '@tanstack/react-table';
 import Link from 'next/link';
 import { DataTable } from '@/components/ui/data-table';
 import { Badge } from '@/components/ui/badge';
-import { label } from '@/lib/domain';
+import { label } from '@/lib/domain/vocabulary';
 import type { UserListResponse } from '@/lib/data/users';
 import { UserActions } from './user-actions';
 

@@ -1,7 +1,7 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { requirePageUser } from '@/lib/auth/session';
-import { DESK_ROLES } from '@/lib/domain';
+import { DESK_ROLES } from '@/lib/domain/vocabulary';
 import { CustomerForm } from '../customer-form';
 
 export const metadata: Metadata = { title: 'New customer' };

@@ -4,7 +4,7 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { submitJson } from '@/lib/client/submit-json';
-import { label, type JobStatus } from '@/lib/domain';
+import { label, type JobStatus } from '@/lib/domain/vocabulary';
 import { OFFICE_TRANSITIONS } from '@/lib/jobs/status';
 
 // Scheduling is done by giving the job a crew and a day, not by a button here.

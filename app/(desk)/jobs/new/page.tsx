@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { requirePageUser } from '@/lib/auth/session';
 import { jobFormOptions } from '@/lib/data/jobs';
-import { DESK_ROLES } from '@/lib/domain';
+import { DESK_ROLES } from '@/lib/domain/vocabulary';
 import { JobForm } from '../job-form';
 
 export const metadata: Metadata = { title: 'New job' };

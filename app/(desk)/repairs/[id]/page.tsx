@@ -8,7 +8,7 @@ import { buttonClass } from '@/components/ui/button';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { getRepair, getRepairPlan } from '@/lib/data/repairs';
-import { DESK_ROLES, label } from '@/lib/domain';
+import { DESK_ROLES, label } from '@/lib/domain/vocabulary';
 import { REPAIRS_EDITABLE } from '@/lib/jobs/status';
 import { recordForPage } from '@/lib/server/page-record';
 import { formatLength } from '@/lib/units';

@@ -4,7 +4,7 @@ import { notFound } from 'next/navigation';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { repairFormOptions } from '@/lib/data/repairs';
-import { DESK_ROLES } from '@/lib/domain';
+import { DESK_ROLES } from '@/lib/domain/vocabulary';
 import { recordForPage } from '@/lib/server/page-record';
 import { RepairForm } from '../repair-form';
 

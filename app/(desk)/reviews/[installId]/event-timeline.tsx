@@ -1,5 +1,5 @@
 import { formatInZone } from '@/lib/time/dates';
-import { label, type InstallEventType } from '@/lib/domain';
+import { label, type InstallEventType } from '@/lib/domain/vocabulary';
 import { correctionDetails, eventDetails } from '@/lib/review/event-text';
 import type { UnitSystem } from '@/lib/units';
 

@@ -7,7 +7,7 @@ import { StatusBadge } from '@/components/ui/badge';
 import { requirePageUser } from '@/lib/auth/session';
 import { getInstallReview } from '@/lib/data/reviews';
 import { formatInZone } from '@/lib/time/dates';
-import { DESK_ROLES, label } from '@/lib/domain';
+import { DESK_ROLES, label } from '@/lib/domain/vocabulary';
 import { recordForPage } from '@/lib/server/page-record';
 import { formatDuration, formatLength, formatPressure, formatTemperature } from '@/lib/units';
 import { EventTimeline } from './event-timeline';

@@ -6,7 +6,7 @@ import { buttonClass } from '@/components/ui/button';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { getSegment } from '@/lib/data/segments';
-import { DESK_ROLES, label } from '@/lib/domain';
+import { DESK_ROLES, label } from '@/lib/domain/vocabulary';
 import { recordForPage } from '@/lib/server/page-record';
 import { formatLength } from '@/lib/units';
 

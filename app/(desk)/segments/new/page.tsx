@@ -4,7 +4,7 @@ import { notFound, redirect } from 'next/navigation';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { getSite } from '@/lib/data/sites';
-import { DESK_ROLES } from '@/lib/domain';
+import { DESK_ROLES } from '@/lib/domain/vocabulary';
 import { recordForPage } from '@/lib/server/page-record';
 import { SegmentForm } from '../segment-form';
 

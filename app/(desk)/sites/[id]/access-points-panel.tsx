@@ -8,7 +8,7 @@ import type { z } from 'zod';
 import { FormField, errorProps, inputClass } from '@/components/desk/form-field';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
-import { ACCESS_POINT_KINDS, label } from '@/lib/domain';
+import { ACCESS_POINT_KINDS, label } from '@/lib/domain/vocabulary';
 import { formatLength, unitLabels, type UnitSystem } from '@/lib/units';
 import { mmToEntered } from '@/lib/units/entry';
 import { accessPointFormSchema } from '@/lib/validation/access-points';

@@ -1,6 +1,6 @@
 'use client';
 
-import { label } from '@/lib/domain';
+import { label } from '@/lib/domain/vocabulary';
 
 type LoggedEvent = { clientEventId: string; type: string; deviceTime: string; synced: boolean; userName?: string | null };
 

@@ -12,7 +12,7 @@ import { requestNotificationPermission, unlockAudio } from '@/lib/client/alarm';
 import { submitJson } from '@/lib/client/submit-json';
 import { startOutboxSync } from '@/lib/client/outbox';
 import { useWakeLock } from '@/lib/client/wake-lock';
-import { label } from '@/lib/domain';
+import { label } from '@/lib/domain/vocabulary';
 import type { InstallState } from '@/lib/install/state';
 import { groundwaterPressureKpa } from '@/lib/sizing';
 import { formatDuration, formatLength } from '@/lib/units';

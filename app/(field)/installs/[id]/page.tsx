@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import { notFound, redirect } from 'next/navigation';
 import { requirePageUser } from '@/lib/auth/session';
 import { getInstallView } from '@/lib/data/installs';
-import { FIELD_ROLES } from '@/lib/domain';
+import { FIELD_ROLES } from '@/lib/domain/vocabulary';
 import { AppError } from '@/lib/server/errors';
 import { uuidSchema } from '@/lib/validation/common';
 import { InstallScreen } from './install-screen';

@@ -7,7 +7,7 @@ import { deriveInstallState, type InstallEventInput } from '@/lib/install/state'
 import { fetchJson } from '@/lib/client/fetch-json';
 import { enqueueEvent, flushOutbox, listEntries, subscribe, type OutboxEntry, type OutboxUser } from '@/lib/client/outbox';
 import { serverNow } from '@/lib/client/server-time';
-import type { InstallEventType } from '@/lib/domain';
+import type { InstallEventType } from '@/lib/domain/vocabulary';
 
 /**
  * The install as this tablet knows it: the server's view (SWR, revalidated every few seconds so a

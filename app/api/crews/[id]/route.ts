@@ -2,7 +2,7 @@ import { NextResponse } from 'next/server';
 import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { archiveCrew, getCrew, updateCrew } from '@/lib/data/crews';
-import { ADMIN_ONLY } from '@/lib/domain';
+import { ADMIN_ONLY } from '@/lib/domain/vocabulary';
 import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/server/http';
 import { crewPatchSchema } from '@/lib/validation/crews';
 

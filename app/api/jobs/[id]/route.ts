@@ -2,7 +2,7 @@ import { NextResponse } from 'next/server';
 import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { archiveJob, findJob, updateJob } from '@/lib/data/jobs';
-import { DESK_ROLES } from '@/lib/domain';
+import { DESK_ROLES } from '@/lib/domain/vocabulary';
 import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/server/http';
 import { jobPatchSchema } from '@/lib/validation/jobs';
 

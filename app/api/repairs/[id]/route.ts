@@ -2,7 +2,7 @@ import { NextResponse } from 'next/server';
 import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { getRepair, removeRepair, updateRepair } from '@/lib/data/repairs';
-import { DESK_ROLES } from '@/lib/domain';
+import { DESK_ROLES } from '@/lib/domain/vocabulary';
 import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/server/http';
 import { repairPatchSchema } from '@/lib/validation/repairs';
 

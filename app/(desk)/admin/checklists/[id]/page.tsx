@@ -7,7 +7,7 @@ import { getChecklistTemplate } from '@/lib/data/checklist-templates';
 import { getCompany } from '@/lib/data/company';
 import { recordForPage } from '@/lib/server/page-record';
 import { ChecklistForm } from '../checklist-form';
-import { ADMIN_ONLY } from '@/lib/domain';
+import { ADMIN_ONLY } from '@/lib/domain/vocabulary';
 
 export const metadata: Metadata = { title: 'Check-list' };
 

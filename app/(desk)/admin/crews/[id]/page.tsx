@@ -9,7 +9,7 @@ import { recordForPage } from '@/lib/server/page-record';
 import { CrewForm } from '../crew-form';
 import { CrewMembers } from '../crew-members';
 import { RestoreCrewButton } from './restore-button';
-import { ADMIN_ONLY } from '@/lib/domain';
+import { ADMIN_ONLY } from '@/lib/domain/vocabulary';
 
 export const metadata: Metadata = { title: 'Crew' };
 

@@ -8,7 +8,7 @@ import { getPacker } from '@/lib/data/packers';
 import { recordForPage } from '@/lib/server/page-record';
 import { packerToForm } from '@/lib/validation/packers';
 import { PackerForm } from '../packer-form';
-import { ADMIN_ONLY } from '@/lib/domain';
+import { ADMIN_ONLY } from '@/lib/domain/vocabulary';
 
 export const metadata: Metadata = { title: 'Packer' };
 

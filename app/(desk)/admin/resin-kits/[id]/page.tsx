@@ -8,7 +8,7 @@ import { getCompany } from '@/lib/data/company';
 import { getResinKit } from '@/lib/data/resin-kits';
 import { listResinSystems } from '@/lib/data/resin-systems';
 import { formatInZone } from '@/lib/time/dates';
-import { ADMIN_ONLY, label } from '@/lib/domain';
+import { ADMIN_ONLY, label } from '@/lib/domain/vocabulary';
 import { recordForPage } from '@/lib/server/page-record';
 import { formatVolume } from '@/lib/units';
 import { resinKitToForm } from '@/lib/validation/resin-kits';

@@ -5,7 +5,7 @@ import { getCompany } from '@/lib/data/company';
 import { listResinSystems } from '@/lib/data/resin-systems';
 import { resinSystemListQuerySchema } from '@/lib/validation/resin-systems';
 import { ResinKitForm } from '../resin-kit-form';
-import { ADMIN_ONLY } from '@/lib/domain';
+import { ADMIN_ONLY } from '@/lib/domain/vocabulary';
 
 export const metadata: Metadata = { title: 'New resin kit' };
 

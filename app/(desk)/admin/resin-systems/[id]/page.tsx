@@ -8,7 +8,7 @@ import { getResinSystem } from '@/lib/data/resin-systems';
 import { recordForPage } from '@/lib/server/page-record';
 import { resinSystemToForm } from '@/lib/validation/resin-systems';
 import { ResinSystemForm } from '../resin-system-form';
-import { ADMIN_ONLY } from '@/lib/domain';
+import { ADMIN_ONLY } from '@/lib/domain/vocabulary';
 
 export const metadata: Metadata = { title: 'Resin system' };
 

@@ -5,7 +5,7 @@ import { Badge } from '@/components/ui/badge';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { getUser } from '@/lib/data/users';
-import { ADMIN_ONLY, label } from '@/lib/domain';
+import { ADMIN_ONLY, label } from '@/lib/domain/vocabulary';
 import { recordForPage } from '@/lib/server/page-record';
 import { UserActions } from '../user-actions';
 import { EditUserForm } from '../user-form';

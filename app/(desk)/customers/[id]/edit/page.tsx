@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCustomer } from '@/lib/data/customers';
-import { DESK_ROLES } from '@/lib/domain';
+import { DESK_ROLES } from '@/lib/domain/vocabulary';
 import { recordForPage } from '@/lib/server/page-record';
 import { CustomerForm } from '../../customer-form';
 

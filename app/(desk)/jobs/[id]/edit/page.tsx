@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { requirePageUser } from '@/lib/auth/session';
 import { findJob, jobFormOptions } from '@/lib/data/jobs';
-import { DESK_ROLES } from '@/lib/domain';
+import { DESK_ROLES } from '@/lib/domain/vocabulary';
 import { RESCHEDULABLE } from '@/lib/jobs/status';
 import { recordForPage } from '@/lib/server/page-record';
 import { JobForm } from '../../job-form';

@@ -3,7 +3,7 @@ import Link from 'next/link';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { getRepair, repairFormOptions } from '@/lib/data/repairs';
-import { DESK_ROLES } from '@/lib/domain';
+import { DESK_ROLES } from '@/lib/domain/vocabulary';
 import { recordForPage } from '@/lib/server/page-record';
 import { lengthFromSi } from '@/lib/units';
 import { RepairForm } from '../../repair-form';

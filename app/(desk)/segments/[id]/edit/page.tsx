@@ -4,7 +4,7 @@ import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
 import { getSegment } from '@/lib/data/segments';
 import { listAccessPoints } from '@/lib/data/access-points';
-import { DESK_ROLES } from '@/lib/domain';
+import { DESK_ROLES } from '@/lib/domain/vocabulary';
 import { recordForPage } from '@/lib/server/page-record';
 import { SegmentForm } from '../../segment-form';
 

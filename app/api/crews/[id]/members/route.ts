@@ -2,7 +2,7 @@ import { NextResponse } from 'next/server';
 import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { setCrewMembers } from '@/lib/data/crews';
-import { ADMIN_ONLY } from '@/lib/domain';
+import { ADMIN_ONLY } from '@/lib/domain/vocabulary';
 import { bodyOf, handle, parseOrThrow } from '@/lib/server/http';
 import { crewMembersSchema } from '@/lib/validation/crews';
 

@@ -2,7 +2,7 @@ import { NextResponse } from 'next/server';
 import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { reviewInstall } from '@/lib/data/reviews';
-import { DESK_ROLES } from '@/lib/domain';
+import { DESK_ROLES } from '@/lib/domain/vocabulary';
 import { bodyOf, handle, parseOrThrow } from '@/lib/server/http';
 import { reviewDecisionSchema } from '@/lib/validation/reviews';
 

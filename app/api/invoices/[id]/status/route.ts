@@ -2,7 +2,7 @@ import { NextResponse } from 'next/server';
 import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { changeInvoiceStatus } from '@/lib/data/invoices';
-import { DESK_ROLES } from '@/lib/domain';
+import { DESK_ROLES } from '@/lib/domain/vocabulary';
 import { bodyOf, handle, parseOrThrow } from '@/lib/server/http';
 import { invoiceActionSchema } from '@/lib/validation/invoices';
 

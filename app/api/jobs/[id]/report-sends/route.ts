@@ -1,7 +1,7 @@
 import { NextResponse } from 'next/server';
 import { requireUser } from '@/lib/auth/session';
 import { listReportSends } from '@/lib/data/report-sends';
-import { DESK_ROLES } from '@/lib/domain';
+import { DESK_ROLES } from '@/lib/domain/vocabulary';
 import { handle, idOf } from '@/lib/server/http';
 
 export const GET = handle(async (_request: Request, { params }: { params: Promise<{ id: string }> }) => {

@@ -2,7 +2,7 @@ import { NextResponse } from 'next/server';
 import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { requestReportSend } from '@/lib/data/report-sends';
-import { DESK_ROLES } from '@/lib/domain';
+import { DESK_ROLES } from '@/lib/domain/vocabulary';
 import { notFound } from '@/lib/server/errors';
 import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/server/http';
 import { getReportData } from '@/lib/data/report';

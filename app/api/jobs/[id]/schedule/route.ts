@@ -2,7 +2,7 @@ import { NextResponse } from 'next/server';
 import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { scheduleJob, unscheduleJob } from '@/lib/data/schedule';
-import { DESK_ROLES } from '@/lib/domain';
+import { DESK_ROLES } from '@/lib/domain/vocabulary';
 import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/server/http';
 import { scheduleInputSchema } from '@/lib/validation/schedule';
 

@@ -1,7 +1,7 @@
 import { NextResponse } from 'next/server';
 import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
-import { DESK_ROLES } from '@/lib/domain';
+import { DESK_ROLES } from '@/lib/domain/vocabulary';
 import { createAccessPoint, listAccessPoints } from '@/lib/data/access-points';
 import { bodyOf, handle, idOf, parseOrThrow } from '@/lib/server/http';
 import { accessPointInputSchema } from '@/lib/validation/access-points';

@@ -2,7 +2,7 @@ import { NextResponse } from 'next/server';
 import { ownRowId } from '@/lib/data/access';
 import { requireUser } from '@/lib/auth/session';
 import { resetPassword } from '@/lib/data/users';
-import { ADMIN_ONLY } from '@/lib/domain';
+import { ADMIN_ONLY } from '@/lib/domain/vocabulary';
 import { bodyOf, handle, parseOrThrow } from '@/lib/server/http';
 import { passwordResetSchema } from '@/lib/validation/users';
 
