@@ -125,5 +125,6 @@ function associate() {
 
 export {
   sequelize, Company, User, Crew, CrewMember, Customer, Site, AccessPoint, Segment, Job, Repair,
-  ResinSystem, ResinKit, Packer, ChecklistTemplate, Install, InstallEvent, Attachment, Review, AuditEntry, Invoice, InvoiceLine, PaymentEvent, ReportSend, ReportLink,
+  ResinSystem, ResinKit, Packer, ChecklistTemplate, Install, InstallEvent, Attachment, Review, AuditEntry,
+  Invoice, InvoiceLine, PaymentEvent, ReportSend, ReportLink,
 };

@@ -25,7 +25,15 @@ type Audit = {
 /** One line of the audit trail: who, when (created_at), what and why. Written in the caller's transaction. */
 export async function recordAudit(user: SessionUser, entry: Audit, transaction?: Transaction) {
   await AuditEntry.create(
-    { companyId: user.companyId, userId: user.id, action: entry.action, entityType: entry.entityType, entityId: entry.entityId, changes: entry.changes ?? {}, reason: entry.reason ?? null },
+    {
+      companyId: user.companyId,
+      userId: user.id,
+      action: entry.action,
+      entityType: entry.entityType,
+      entityId: entry.entityId,
+      changes: entry.changes ?? {},
+      reason: entry.reason ?? null,
+    },
     { transaction },
   );
 }

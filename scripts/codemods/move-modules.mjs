@@ -10,7 +10,6 @@ import { execFileSync } from 'node:child_process';
 import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { dirname, join, normalize, relative } from 'node:path';
 
-const ROOT = process.cwd();
 const pairs = process.argv.slice(2).map((arg) => arg.split('='));
 if (!pairs.length || pairs.some((p) => p.length !== 2)) {
   console.error('usage: move-modules.mjs old.ts=new.ts …');
