@@ -1,4 +1,4 @@
-import type { Role } from '@/lib/domain';
+import type { Role } from '@/lib/domain/vocabulary';
 
 declare module 'next-auth' {
   interface User {
