@@ -3,7 +3,14 @@ import { getToken } from 'next-auth/jwt';
 import { authSecret } from '@/lib/auth/secret';
 import { IS_DEVELOPMENT } from '@/lib/env-public';
 import { MAX_BODY_BYTES } from '@/lib/server/http-limits';
-import { DOCUMENT_POLICY, contentSecurityPolicy, crossSiteRefusal, ownOrigins, securityHeaders, servedOverHttps } from '@/lib/security/headers';
+import {
+  DOCUMENT_POLICY,
+  contentSecurityPolicy,
+  crossSiteRefusal,
+  ownOrigins,
+  securityHeaders,
+  servedOverHttps,
+} from '@/lib/security/headers';
 import { clientIp, reportLinkLimited, tooManyAttempts } from '@/lib/security/throttle';
 
 // Runs before every request except the build's static files. It is never the authorization check:
@@ -27,10 +34,12 @@ export async function proxy(request: NextRequest) {
     if (policy) response.headers.set('Content-Security-Policy', policy);
     return response;
   };
-  const refuse = (status: number, message: string) => finish(NextResponse.json({ error: { message } }, { status }), DOCUMENT_POLICY);
+  const refuse = (status: number, message: string) =>
+    finish(NextResponse.json({ error: { message } }, { status }), DOCUMENT_POLICY);
 
   const declared = Number(request.headers.get('content-length'));
-  if (Number.isFinite(declared) && declared > MAX_BODY_BYTES) return refuse(413, `The request body is larger than ${MAX_BODY_BYTES / 1024} KB.`);
+  if (Number.isFinite(declared) && declared > MAX_BODY_BYTES)
+    return refuse(413, `The request body is larger than ${MAX_BODY_BYTES / 1024} KB.`);
 
   const crossSite = crossSiteRefusal(request, ownOrigins(request));
   if (crossSite) return refuse(403, crossSite);
@@ -54,7 +63,8 @@ export async function proxy(request: NextRequest) {
   }
 
   // The PDF runs no script: it gets a policy without a nonce (and the browser's viewer keeps working).
-  if (/^\/r\/[^/]+\/pdf$/.test(pathname) || pathname.startsWith('/api/')) return finish(NextResponse.next(), DOCUMENT_POLICY);
+  if (/^\/r\/[^/]+\/pdf$/.test(pathname) || pathname.startsWith('/api/'))
+    return finish(NextResponse.next(), DOCUMENT_POLICY);
 
   const nonce = Buffer.from(crypto.randomUUID()).toString('base64');
   const policy = contentSecurityPolicy(nonce, { dev: IS_DEVELOPMENT, https });

@@ -1,6 +1,15 @@
 /// <reference lib="webworker" />
 // The service worker: bundled by esbuild and served by app/serwist/[path]/route.ts.
-import { CacheFirst, ExpirationPlugin, NetworkFirst, Serwist, StaleWhileRevalidate, type PrecacheEntry, type RouteMatchCallback, type SerwistPlugin } from 'serwist';
+import {
+  CacheFirst,
+  ExpirationPlugin,
+  NetworkFirst,
+  Serwist,
+  StaleWhileRevalidate,
+  type PrecacheEntry,
+  type RouteMatchCallback,
+  type SerwistPlugin,
+} from 'serwist';
 import { cacheRuleFor, FROM_CACHE_HEADER, type CacheRule } from '@/lib/client/cache-rules';
 import { offlinePageResponse } from '@/lib/client/offline-page';
 
@@ -47,7 +56,11 @@ const markCopy: SerwistPlugin = {
     if (!cachedResponse) return cachedResponse;
     const headers = new Headers(cachedResponse.headers);
     headers.set(FROM_CACHE_HEADER, '1');
-    return new Response(cachedResponse.body, { status: cachedResponse.status, statusText: cachedResponse.statusText, headers });
+    return new Response(cachedResponse.body, {
+      status: cachedResponse.status,
+      statusText: cachedResponse.statusText,
+      headers,
+    });
   },
 };
 
@@ -55,10 +68,12 @@ const offlineFallback: SerwistPlugin = { handlerDidError: async () => offlinePag
 
 // A page kept from before a deploy still names the old build's scripts (see keepPreviousBuild).
 const previousBuildFallback: SerwistPlugin = {
-  cachedResponseWillBeUsed: async ({ request, cachedResponse }) => cachedResponse ?? (await caches.match(request, { cacheName: CACHES.previousBuild })) ?? null,
+  cachedResponseWillBeUsed: async ({ request, cachedResponse }) =>
+    cachedResponse ?? (await caches.match(request, { cacheName: CACHES.previousBuild })) ?? null,
 };
 
-const expire = (maxEntries: number, days: number) => new ExpirationPlugin({ maxEntries, maxAgeSeconds: days * DAY_S, purgeOnQuotaError: true });
+const expire = (maxEntries: number, days: number) =>
+  new ExpirationPlugin({ maxEntries, maxAgeSeconds: days * DAY_S, purgeOnQuotaError: true });
 
 // Next varies page answers on router headers; the RSC payloads are in a cache of their own
 // (and carry `_rsc` in the URL), so the copy of a page may match any plain request for it.
@@ -76,18 +91,42 @@ const serwist = new Serwist({
   runtimeCaching: [
     {
       matcher: matches('page'),
-      handler: new NetworkFirst({ cacheName: CACHES.pages, networkTimeoutSeconds: NETWORK_TIMEOUT_S, matchOptions, plugins: [onlyComplete, expire(100, 7), offlineFallback] }),
+      handler: new NetworkFirst({
+        cacheName: CACHES.pages,
+        networkTimeoutSeconds: NETWORK_TIMEOUT_S,
+        matchOptions,
+        plugins: [onlyComplete, expire(100, 7), offlineFallback],
+      }),
     },
     {
       matcher: matches('page-data'),
-      handler: new NetworkFirst({ cacheName: CACHES.pageData, networkTimeoutSeconds: NETWORK_TIMEOUT_S, matchOptions, plugins: [onlyComplete, expire(100, 7)] }),
+      handler: new NetworkFirst({
+        cacheName: CACHES.pageData,
+        networkTimeoutSeconds: NETWORK_TIMEOUT_S,
+        matchOptions,
+        plugins: [onlyComplete, expire(100, 7)],
+      }),
     },
     {
       matcher: matches('api'),
-      handler: new NetworkFirst({ cacheName: CACHES.api, networkTimeoutSeconds: NETWORK_TIMEOUT_S, matchOptions, plugins: [onlyComplete, markCopy, expire(200, 7)] }),
+      handler: new NetworkFirst({
+        cacheName: CACHES.api,
+        networkTimeoutSeconds: NETWORK_TIMEOUT_S,
+        matchOptions,
+        plugins: [onlyComplete, markCopy, expire(200, 7)],
+      }),
     },
-    { matcher: matches('static'), handler: new CacheFirst({ cacheName: CACHES.static, plugins: [onlyComplete, expire(300, 30), previousBuildFallback] }) },
-    { matcher: matches('public-file'), handler: new StaleWhileRevalidate({ cacheName: CACHES.public, plugins: [onlyComplete, expire(50, 30)] }) },
+    {
+      matcher: matches('static'),
+      handler: new CacheFirst({
+        cacheName: CACHES.static,
+        plugins: [onlyComplete, expire(300, 30), previousBuildFallback],
+      }),
+    },
+    {
+      matcher: matches('public-file'),
+      handler: new StaleWhileRevalidate({ cacheName: CACHES.public, plugins: [onlyComplete, expire(50, 30)] }),
+    },
   ],
 });
 
@@ -97,7 +136,8 @@ const serwist = new Serwist({
 // outbox (IndexedDB) is left alone — unsent taps are never thrown away.
 self.addEventListener('fetch', (event) => {
   const url = new URL(event.request.url);
-  if (event.request.method !== 'POST' || url.origin !== self.location.origin || url.pathname !== '/api/auth/signout') return;
+  if (event.request.method !== 'POST' || url.origin !== self.location.origin || url.pathname !== '/api/auth/signout')
+    return;
   event.respondWith(
     fetch(event.request).then(async (response) => {
       signedOutAt = Date.now();
@@ -109,7 +149,9 @@ self.addEventListener('fetch', (event) => {
 
 // serwist.addEventListeners(), except that activation first keeps the old build's files.
 self.addEventListener('install', serwist.handleInstall);
-self.addEventListener('activate', (event) => event.waitUntil(keepPreviousBuild().then(() => serwist.handleActivate(event))));
+self.addEventListener('activate', (event) =>
+  event.waitUntil(keepPreviousBuild().then(() => serwist.handleActivate(event))),
+);
 self.addEventListener('fetch', serwist.handleFetch);
 self.addEventListener('message', serwist.handleCache);
 
@@ -120,9 +162,15 @@ self.addEventListener('message', serwist.handleCache);
  * so it cannot grow), and the RSC payloads, which name chunks too, are dropped.
  */
 async function keepPreviousBuild(): Promise<void> {
-  const current = new Set((self.__SW_MANIFEST ?? []).map((entry) => new URL(typeof entry === 'string' ? entry : entry.url, self.location.origin).href));
+  const current = new Set(
+    (self.__SW_MANIFEST ?? []).map(
+      (entry) => new URL(typeof entry === 'string' ? entry : entry.url, self.location.origin).href,
+    ),
+  );
   const precache = await caches.open(serwist.precacheStrategy.cacheName);
-  const outgoing = (await precache.keys()).filter((request) => new URL(request.url).pathname.startsWith('/_next/static/') && !current.has(request.url));
+  const outgoing = (await precache.keys()).filter(
+    (request) => new URL(request.url).pathname.startsWith('/_next/static/') && !current.has(request.url),
+  );
   if (outgoing.length === 0) return;
   await Promise.all([caches.delete(CACHES.previousBuild), caches.delete(CACHES.pageData)]);
   const previous = await caches.open(CACHES.previousBuild);

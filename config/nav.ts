@@ -1,4 +1,4 @@
-import { DESK_ROLES, FIELD_ROLES, type Role , ADMIN_ONLY } from '@/lib/domain/vocabulary';
+import { DESK_ROLES, FIELD_ROLES, type Role, ADMIN_ONLY } from '@/lib/domain/vocabulary';
 import { REVIEW_COUNT_URL } from '@/lib/review/queue';
 
 // The one source of the desk and field navigation: plain data (href, label, who sees it) so the labels can

@@ -41,8 +41,7 @@ function declaresServerOnly(file) {
 
 const isClientFile = (program) =>
   program.body.some(
-    (node, index) =>
-      index < 3 && node.type === 'ExpressionStatement' && node.directive === 'use client',
+    (node, index) => index < 3 && node.type === 'ExpressionStatement' && node.directive === 'use client',
   );
 
 export const noServerImportInClient = {

@@ -8,7 +8,11 @@ import { z } from 'zod';
 const SECRET_MIN = 32;
 const secret = (name: string) => z.string().min(SECRET_MIN, `${name} must be at least ${SECRET_MIN} characters`);
 const int = (name: string, min: number, max: number) =>
-  z.coerce.number({ error: `${name} must be a whole number` }).int(`${name} must be a whole number`).min(min, `${name} must be at least ${min}`).max(max, `${name} must be at most ${max}`);
+  z.coerce
+    .number({ error: `${name} must be a whole number` })
+    .int(`${name} must be a whole number`)
+    .min(min, `${name} must be at least ${min}`)
+    .max(max, `${name} must be at most ${max}`);
 
 export const envSchema = z.object({
   DATABASE_URL: z
@@ -79,21 +83,30 @@ const isLoopback = (url: string) => {
 export function parseEnv(source: Record<string, string | undefined>): Env {
   const cleaned = Object.fromEntries(Object.entries(source).map(([k, v]) => [k, v === '' ? undefined : v]));
   const result = envSchema.safeParse(cleaned);
-  const problems = result.success ? [] : result.error.issues.map((issue) => `- ${issue.path.join('.')}: ${issue.message}`);
+  const problems = result.success
+    ? []
+    : result.error.issues.map((issue) => `- ${issue.path.join('.')}: ${issue.message}`);
   if (result.success) {
     const e = result.data;
     const strict = e.NODE_ENV === 'production';
     if (strict) {
-      if (!e.NEXTAUTH_SECRET) problems.push(`- NEXTAUTH_SECRET: required outside development and test (${SECRET_MIN}+ random characters)`);
-      if (!e.REPORT_LINK_SECRET) problems.push(`- REPORT_LINK_SECRET: required outside development and test (${SECRET_MIN}+ random characters, not the session secret)`);
+      if (!e.NEXTAUTH_SECRET)
+        problems.push(`- NEXTAUTH_SECRET: required outside development and test (${SECRET_MIN}+ random characters)`);
+      if (!e.REPORT_LINK_SECRET)
+        problems.push(
+          `- REPORT_LINK_SECRET: required outside development and test (${SECRET_MIN}+ random characters, not the session secret)`,
+        );
       for (const name of ['NEXTAUTH_URL', 'APP_URL'] as const) {
         const url = e[name];
-        if (url && new URL(url).protocol !== 'https:' && !isLoopback(url)) problems.push(`- ${name}: must be an https:// address (only loopback may be http)`);
+        if (url && new URL(url).protocol !== 'https:' && !isLoopback(url))
+          problems.push(`- ${name}: must be an https:// address (only loopback may be http)`);
       }
     }
-    if (e.NEXTAUTH_SECRET && e.NEXTAUTH_SECRET === e.REPORT_LINK_SECRET) problems.push('- REPORT_LINK_SECRET: must differ from NEXTAUTH_SECRET');
+    if (e.NEXTAUTH_SECRET && e.NEXTAUTH_SECRET === e.REPORT_LINK_SECRET)
+      problems.push('- REPORT_LINK_SECRET: must differ from NEXTAUTH_SECRET');
   }
-  if (problems.length || !result.success) throw new EnvError(`Setline cannot start, the environment is not right:\n${problems.join('\n')}`);
+  if (problems.length || !result.success)
+    throw new EnvError(`Setline cannot start, the environment is not right:\n${problems.join('\n')}`);
   const e = result.data;
   return {
     ...e,
@@ -136,7 +149,14 @@ export const S3_FAKE_DEFAULTS = {
   secretAccessKey: 'S3RVER',
 } as const;
 
-export type StorageEnv = { endpoint?: string; region: string; bucket: string; accessKeyId: string; secretAccessKey: string; forcePathStyle: boolean };
+export type StorageEnv = {
+  endpoint?: string;
+  region: string;
+  bucket: string;
+  accessKeyId: string;
+  secretAccessKey: string;
+  forcePathStyle: boolean;
+};
 
 /**
  * Where evidence is stored. In production S3_REGION, S3_BUCKET and the key pair are required (S3_ENDPOINT
@@ -144,10 +164,22 @@ export type StorageEnv = { endpoint?: string; region: string; bucket: string; ac
  * first used, so pages that never touch it keep working while it is being set up.
  */
 export function storageEnv(e: Env = env()): StorageEnv {
-  const given = { region: e.S3_REGION, bucket: e.S3_BUCKET, accessKeyId: e.S3_ACCESS_KEY_ID, secretAccessKey: e.S3_SECRET_ACCESS_KEY };
+  const given = {
+    region: e.S3_REGION,
+    bucket: e.S3_BUCKET,
+    accessKeyId: e.S3_ACCESS_KEY_ID,
+    secretAccessKey: e.S3_SECRET_ACCESS_KEY,
+  };
   if (e.NODE_ENV === 'production') {
-    const names = { region: 'S3_REGION', bucket: 'S3_BUCKET', accessKeyId: 'S3_ACCESS_KEY_ID', secretAccessKey: 'S3_SECRET_ACCESS_KEY' } as const;
-    const missing = (Object.keys(names) as (keyof typeof names)[]).filter((key) => !given[key]).map((key) => `- ${names[key]}: required in production (object storage for evidence)`);
+    const names = {
+      region: 'S3_REGION',
+      bucket: 'S3_BUCKET',
+      accessKeyId: 'S3_ACCESS_KEY_ID',
+      secretAccessKey: 'S3_SECRET_ACCESS_KEY',
+    } as const;
+    const missing = (Object.keys(names) as (keyof typeof names)[])
+      .filter((key) => !given[key])
+      .map((key) => `- ${names[key]}: required in production (object storage for evidence)`);
     if (missing.length) throw new EnvError(`Evidence storage is not set up:\n${missing.join('\n')}`);
   }
   const endpoint = e.S3_ENDPOINT ?? (e.NODE_ENV === 'production' ? undefined : S3_FAKE_DEFAULTS.endpoint);

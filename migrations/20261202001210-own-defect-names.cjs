@@ -22,10 +22,24 @@ const RENAMES = [
 ];
 
 async function recode(queryInterface, transaction, pairs) {
-  await queryInterface.sequelize.query('ALTER TABLE "repairs" DROP CONSTRAINT IF EXISTS "repairs_defect_type_check"', { transaction });
+  await queryInterface.sequelize.query('ALTER TABLE "repairs" DROP CONSTRAINT IF EXISTS "repairs_defect_type_check"', {
+    transaction,
+  });
   const cases = pairs.map(([from, to]) => `WHEN '${from}' THEN '${to}'`).join(' ');
-  await queryInterface.sequelize.query(`UPDATE "repairs" SET defect_type = CASE defect_type ${cases} ELSE defect_type END`, { transaction });
-  await addCheck(queryInterface, 'repairs', 'repairs_defect_type_check', inList('defect_type', pairs.map(([, to]) => to)), transaction);
+  await queryInterface.sequelize.query(
+    `UPDATE "repairs" SET defect_type = CASE defect_type ${cases} ELSE defect_type END`,
+    { transaction },
+  );
+  await addCheck(
+    queryInterface,
+    'repairs',
+    'repairs_defect_type_check',
+    inList(
+      'defect_type',
+      pairs.map(([, to]) => to),
+    ),
+    transaction,
+  );
 }
 
 module.exports = {
@@ -34,14 +48,20 @@ module.exports = {
     await queryInterface.sequelize.transaction(async (transaction) => {
       await recode(queryInterface, transaction, RENAMES);
       // Raw SQL on the unqualified name (not addColumn, which pins "public"), so the test can run this on a scratch schema.
-      await queryInterface.sequelize.query('ALTER TABLE "repairs" ADD COLUMN "owner_defect_code" VARCHAR(60)', { transaction });
+      await queryInterface.sequelize.query('ALTER TABLE "repairs" ADD COLUMN "owner_defect_code" VARCHAR(60)', {
+        transaction,
+      });
     });
   },
 
   async down(queryInterface) {
     await queryInterface.sequelize.transaction(async (transaction) => {
       await queryInterface.sequelize.query('ALTER TABLE "repairs" DROP COLUMN "owner_defect_code"', { transaction });
-      await recode(queryInterface, transaction, RENAMES.map(([from, to]) => [to, from]));
+      await recode(
+        queryInterface,
+        transaction,
+        RENAMES.map(([from, to]) => [to, from]),
+      );
     });
   },
 };

@@ -24,13 +24,20 @@ const COLUMNS = {
 module.exports = {
   async up(queryInterface) {
     await queryInterface.sequelize.transaction(async (transaction) => {
-      for (const [name, spec] of Object.entries(COLUMNS)) await queryInterface.addColumn('installs', name, spec, { transaction });
+      for (const [name, spec] of Object.entries(COLUMNS))
+        await queryInterface.addColumn('installs', name, spec, { transaction });
       await queryInterface.sequelize.query(
         `ALTER TABLE installs ADD CONSTRAINT installs_worst_severity_check CHECK (worst_severity IS NULL OR worst_severity IN ('critical', 'warning'))`,
         { transaction },
       );
-      await queryInterface.addIndex('installs', ['company_id', 'mixed_at'], { name: 'installs_company_mixed_at', transaction });
-      await queryInterface.addIndex('installs', ['company_id', 'worst_severity'], { name: 'installs_company_worst_severity', transaction });
+      await queryInterface.addIndex('installs', ['company_id', 'mixed_at'], {
+        name: 'installs_company_mixed_at',
+        transaction,
+      });
+      await queryInterface.addIndex('installs', ['company_id', 'worst_severity'], {
+        name: 'installs_company_worst_severity',
+        transaction,
+      });
     });
   },
 
@@ -38,8 +45,12 @@ module.exports = {
     await queryInterface.sequelize.transaction(async (transaction) => {
       await queryInterface.removeIndex('installs', 'installs_company_worst_severity', { transaction });
       await queryInterface.removeIndex('installs', 'installs_company_mixed_at', { transaction });
-      await queryInterface.sequelize.query('ALTER TABLE installs DROP CONSTRAINT IF EXISTS installs_worst_severity_check', { transaction });
-      for (const name of Object.keys(COLUMNS).reverse()) await queryInterface.removeColumn('installs', name, { transaction });
+      await queryInterface.sequelize.query(
+        'ALTER TABLE installs DROP CONSTRAINT IF EXISTS installs_worst_severity_check',
+        { transaction },
+      );
+      for (const name of Object.keys(COLUMNS).reverse())
+        await queryInterface.removeColumn('installs', name, { transaction });
     });
   },
 };

@@ -7,7 +7,12 @@ const { DataTypes } = require('sequelize');
 module.exports = {
   async up(queryInterface) {
     await queryInterface.sequelize.transaction(async (transaction) => {
-      await queryInterface.addColumn('installs', 'derived_fold', { type: DataTypes.JSONB, allowNull: true }, { transaction });
+      await queryInterface.addColumn(
+        'installs',
+        'derived_fold',
+        { type: DataTypes.JSONB, allowNull: true },
+        { transaction },
+      );
       await queryInterface.sequelize.query(
         'CREATE INDEX installs_company_underived ON installs (company_id) WHERE derived_at IS NULL',
         { transaction },

@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 import { ACCESS_POINT_KINDS } from '@/lib/domain/vocabulary';
 
 export class AccessPoint extends Model<InferAttributes<AccessPoint>, InferCreationAttributes<AccessPoint>> {

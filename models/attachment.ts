@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 import { ATTACHMENT_KINDS, ATTACHMENT_STATUSES } from '@/lib/domain/vocabulary';
 
 /** A stored file (inspection image, document); the bytes live in object storage under storageKey. */
@@ -40,7 +47,12 @@ export function initAttachment(sequelize: Sequelize) {
       originalName: DataTypes.STRING(255),
       caption: DataTypes.STRING(300),
       uploadedById: DataTypes.UUID,
-      status: { type: DataTypes.STRING(10), allowNull: false, defaultValue: 'pending', validate: { isIn: [ATTACHMENT_STATUSES] } },
+      status: {
+        type: DataTypes.STRING(10),
+        allowNull: false,
+        defaultValue: 'pending',
+        validate: { isIn: [ATTACHMENT_STATUSES] },
+      },
       width: DataTypes.INTEGER,
       height: DataTypes.INTEGER,
       createdAt: DataTypes.DATE,

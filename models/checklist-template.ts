@@ -1,9 +1,19 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 import { tenantRowColumns } from './columns';
 
 export type ChecklistItem = { id: string; label: string; required: boolean };
 
-export class ChecklistTemplate extends Model<InferAttributes<ChecklistTemplate>, InferCreationAttributes<ChecklistTemplate>> {
+export class ChecklistTemplate extends Model<
+  InferAttributes<ChecklistTemplate>,
+  InferCreationAttributes<ChecklistTemplate>
+> {
   declare id: CreationOptional<string>;
   declare companyId: string;
   declare name: string;

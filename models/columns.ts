@@ -4,7 +4,11 @@ import { DataTypes, type Model } from 'sequelize';
  * A NUMERIC column read as a JavaScript number. pg (and Sequelize's own parser) hand NUMERIC back
  * as a string to keep arbitrary precision; our decimals (temperatures, minutes, pressures) fit a double.
  */
-export function decimal(precision: number, scale: number, options: { allowNull?: boolean; defaultValue?: number; field?: string } = {}) {
+export function decimal(
+  precision: number,
+  scale: number,
+  options: { allowNull?: boolean; defaultValue?: number; field?: string } = {},
+) {
   return {
     type: DataTypes.DECIMAL(precision, scale),
     allowNull: options.allowNull ?? true,

@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 import { decimal } from './columns';
 import { UNIT_SYSTEMS, type UnitSystemName } from '@/lib/domain/vocabulary';
 
@@ -25,7 +32,12 @@ export function initCompany(sequelize: Sequelize) {
       id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
       name: { type: DataTypes.STRING(200), allowNull: false },
       timeZone: { type: DataTypes.STRING(64), allowNull: false, defaultValue: 'UTC' },
-      unitSystem: { type: DataTypes.STRING(16), allowNull: false, defaultValue: 'imperial', validate: { isIn: [UNIT_SYSTEMS] } },
+      unitSystem: {
+        type: DataTypes.STRING(16),
+        allowNull: false,
+        defaultValue: 'imperial',
+        validate: { isIn: [UNIT_SYSTEMS] },
+      },
       minOverlapPerEndMm: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 305 },
       workingWindowSafetyMargin: decimal(4, 3, { allowNull: false, defaultValue: 0.2 }),
       holdReserve: decimal(4, 3, { allowNull: false, defaultValue: 0.1 }),

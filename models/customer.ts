@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 import { LOCALES, type Locale } from '@/i18n/locales';
 import { CUSTOMER_KINDS } from '@/lib/domain/vocabulary';
 
@@ -25,7 +32,12 @@ export function initCustomer(sequelize: Sequelize) {
       id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
       companyId: { type: DataTypes.UUID, allowNull: false },
       name: { type: DataTypes.STRING(200), allowNull: false },
-      kind: { type: DataTypes.STRING(24), allowNull: false, defaultValue: 'homeowner', validate: { isIn: [CUSTOMER_KINDS] } },
+      kind: {
+        type: DataTypes.STRING(24),
+        allowNull: false,
+        defaultValue: 'homeowner',
+        validate: { isIn: [CUSTOMER_KINDS] },
+      },
       contactName: DataTypes.STRING(200),
       email: DataTypes.STRING(254),
       phone: DataTypes.STRING(40),

@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 import { INSTALL_EVENT_TYPES, type InstallEventType } from '@/lib/domain/vocabulary';
 
 /** Append-only evidence: what was tapped on the device and when the server heard of it. */

@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 import { decimal } from './columns';
 import type { StoredFold } from '@/lib/install/derived';
 import { INSTALL_STATUSES, type InstallStatus } from '@/lib/domain/vocabulary';
@@ -56,7 +63,12 @@ export function initInstall(sequelize: Sequelize) {
       repairId: { type: DataTypes.UUID, allowNull: false },
       jobId: { type: DataTypes.UUID, allowNull: false },
       crewId: DataTypes.UUID,
-      status: { type: DataTypes.STRING(20), allowNull: false, defaultValue: 'not_started', validate: { isIn: [INSTALL_STATUSES] } },
+      status: {
+        type: DataTypes.STRING(20),
+        allowNull: false,
+        defaultValue: 'not_started',
+        validate: { isIn: [INSTALL_STATUSES] },
+      },
       resinSystemId: DataTypes.UUID,
       resinKitId: DataTypes.UUID,
       packerId: DataTypes.UUID,

@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 import { INVOICE_STATUSES } from '@/lib/domain/vocabulary';
 
 /** What the customer owes for one job: integer cents, tax in basis points. */
@@ -33,7 +40,12 @@ export function initInvoice(sequelize: Sequelize) {
       companyId: { type: DataTypes.UUID, allowNull: false },
       jobId: { type: DataTypes.UUID, allowNull: false },
       number: { type: DataTypes.STRING(30), allowNull: false },
-      status: { type: DataTypes.STRING(12), allowNull: false, defaultValue: 'draft', validate: { isIn: [INVOICE_STATUSES] } },
+      status: {
+        type: DataTypes.STRING(12),
+        allowNull: false,
+        defaultValue: 'draft',
+        validate: { isIn: [INVOICE_STATUSES] },
+      },
       currency: { type: DataTypes.STRING(3), allowNull: false, defaultValue: 'usd' },
       taxRateBp: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
       subtotalCents: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },

@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 import { JOB_STATUSES, type JobStatus } from '@/lib/domain/vocabulary';
 
 export class Job extends Model<InferAttributes<Job>, InferCreationAttributes<Job>> {
@@ -30,7 +37,12 @@ export function initJob(sequelize: Sequelize) {
       customerId: { type: DataTypes.UUID, allowNull: false },
       siteId: { type: DataTypes.UUID, allowNull: false },
       crewId: DataTypes.UUID,
-      status: { type: DataTypes.STRING(20), allowNull: false, defaultValue: 'draft', validate: { isIn: [JOB_STATUSES] } },
+      status: {
+        type: DataTypes.STRING(20),
+        allowNull: false,
+        defaultValue: 'draft',
+        validate: { isIn: [JOB_STATUSES] },
+      },
       scheduledDate: DataTypes.DATEONLY,
       title: DataTypes.STRING(200),
       notes: DataTypes.TEXT,

@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 import { PAYMENT_PROBLEMS, type PaymentProblem } from '@/lib/domain/vocabulary';
 
 /** A payment provider event applied to an invoice; the unique provider id makes a replayed webhook harmless. */

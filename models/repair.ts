@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 import { decimal } from './columns';
 import { DEFECT_TYPES, REPAIR_STATUSES } from '@/lib/domain/vocabulary';
 
@@ -50,7 +57,12 @@ export function initRepair(sequelize: Sequelize) {
       plannedThicknessMm: decimal(5, 2),
       plannedGroundwaterHeadMm: DataTypes.INTEGER,
       plannedOvalityPct: decimal(4, 1),
-      status: { type: DataTypes.STRING(16), allowNull: false, defaultValue: 'planned', validate: { isIn: [REPAIR_STATUSES] } },
+      status: {
+        type: DataTypes.STRING(16),
+        allowNull: false,
+        defaultValue: 'planned',
+        validate: { isIn: [REPAIR_STATUSES] },
+      },
       notes: DataTypes.TEXT,
       ownerDefectCode: DataTypes.STRING(60),
       createdAt: DataTypes.DATE,

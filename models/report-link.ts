@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 
 /** One customer link to a job's report. The token names the row; a revoked or missing row refuses the link. */
 export class ReportLink extends Model<InferAttributes<ReportLink>, InferCreationAttributes<ReportLink>> {

@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 import { REPORT_SEND_STATUSES, type ReportSendStatus } from '@/lib/domain/vocabulary';
 
 /** One request to e-mail a job's repair report; the worker updates it on every try. */
@@ -34,7 +41,12 @@ export function initReportSend(sequelize: Sequelize) {
       jobId: { type: DataTypes.UUID, allowNull: false },
       toAddress: { type: DataTypes.STRING(254), allowNull: false },
       message: DataTypes.TEXT,
-      status: { type: DataTypes.STRING(12), allowNull: false, defaultValue: 'queued', validate: { isIn: [REPORT_SEND_STATUSES] } },
+      status: {
+        type: DataTypes.STRING(12),
+        allowNull: false,
+        defaultValue: 'queued',
+        validate: { isIn: [REPORT_SEND_STATUSES] },
+      },
       attempts: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
       lastError: DataTypes.TEXT,
       messageId: DataTypes.STRING(300),

@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 import { decimal, tenantRowColumns } from './columns';
 import { RESIN_CHEMISTRIES, SENSITIVITY_KINDS } from '@/lib/domain/vocabulary';
 
@@ -32,14 +39,24 @@ export function initResinSystem(sequelize: Sequelize) {
     {
       ...tenantRowColumns(),
       name: { type: DataTypes.STRING(120), allowNull: false },
-      chemistry: { type: DataTypes.STRING(16), allowNull: false, defaultValue: 'epoxy', validate: { isIn: [RESIN_CHEMISTRIES] } },
+      chemistry: {
+        type: DataTypes.STRING(16),
+        allowNull: false,
+        defaultValue: 'epoxy',
+        validate: { isIn: [RESIN_CHEMISTRIES] },
+      },
       refTempC: decimal(5, 2, { allowNull: false }),
       potLifeMin: decimal(7, 2, { allowNull: false }),
       holdMin: decimal(7, 2, { allowNull: false }),
       fullCureMin: decimal(8, 2, { allowNull: false }),
       minTempC: decimal(5, 2, { allowNull: false }),
       maxTempC: decimal(5, 2, { allowNull: false }),
-      sensitivityKind: { type: DataTypes.STRING(16), allowNull: false, defaultValue: 'doubling', validate: { isIn: [SENSITIVITY_KINDS] } },
+      sensitivityKind: {
+        type: DataTypes.STRING(16),
+        allowNull: false,
+        defaultValue: 'doubling',
+        validate: { isIn: [SENSITIVITY_KINDS] },
+      },
       doublingC: decimal(5, 2),
       activationEnergyKj: decimal(6, 2, { field: 'activation_energy_kj' }),
       resinToFabricRatio: decimal(4, 2, { allowNull: false, defaultValue: 1 }),

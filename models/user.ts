@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 import { LOCALES, type Locale } from '@/i18n/locales';
 import { ROLES, type Role } from '@/lib/domain/vocabulary';
 
@@ -23,7 +30,14 @@ export function initUser(sequelize: Sequelize) {
     {
       id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
       companyId: { type: DataTypes.UUID, allowNull: false },
-      email: { type: DataTypes.STRING(254), allowNull: false, unique: true, set(value: string) { this.setDataValue('email', value.trim().toLowerCase()); } },
+      email: {
+        type: DataTypes.STRING(254),
+        allowNull: false,
+        unique: true,
+        set(value: string) {
+          this.setDataValue('email', value.trim().toLowerCase());
+        },
+      },
       name: { type: DataTypes.STRING(200), allowNull: false },
       passwordHash: { type: DataTypes.STRING(100), allowNull: false },
       role: { type: DataTypes.STRING(16), allowNull: false, validate: { isIn: [ROLES] } },
@@ -33,6 +47,12 @@ export function initUser(sequelize: Sequelize) {
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },
-    { sequelize, modelName: 'User', tableName: 'users', underscored: true, defaultScope: { attributes: { exclude: ['passwordHash'] } } },
+    {
+      sequelize,
+      modelName: 'User',
+      tableName: 'users',
+      underscored: true,
+      defaultScope: { attributes: { exclude: ['passwordHash'] } },
+    },
   );
 }

@@ -22,8 +22,13 @@ async function markSvg() {
   const out = path.join(root, '.data', 'icons', 'logo.mjs');
   await build({
     entryPoints: [path.join(root, 'components/shell/logo.tsx')],
-    bundle: true, format: 'esm', platform: 'node', jsx: 'automatic', outfile: out,
-    external: ['react', 'react/jsx-runtime'], logLevel: 'error',
+    bundle: true,
+    format: 'esm',
+    platform: 'node',
+    jsx: 'automatic',
+    outfile: out,
+    external: ['react', 'react/jsx-runtime'],
+    logLevel: 'error',
   });
   const { Logo } = await import(pathToFileURL(out).href);
   return renderToStaticMarkup(createElement(Logo, { className: '' })).replaceAll('currentColor', MARK);
@@ -38,22 +43,35 @@ function iconSvg(mark, { scale, radius }) {
     .replace(/ class="[^"]*"/, '')
     .replace(/ aria-hidden="true"/, '')
     .replace('<svg ', `<svg x="${offset}" y="${offset}" width="${inner}" height="${inner}" `);
-  return `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${side} ${side}" width="${side}" height="${side}">`
-    + `<rect width="${side}" height="${side}" rx="${radius}" fill="${BRAND}"/>${placed}</svg>`;
+  return (
+    `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${side} ${side}" width="${side}" height="${side}">` +
+    `<rect width="${side}" height="${side}" rx="${radius}" fill="${BRAND}"/>${placed}</svg>`
+  );
 }
 
-const png = (svg, size) => sharp(Buffer.from(svg), { density: 72 * (size / 512) * 4 }).resize(size, size).png().toBuffer();
+const png = (svg, size) =>
+  sharp(Buffer.from(svg), { density: 72 * (size / 512) * 4 })
+    .resize(size, size)
+    .png()
+    .toBuffer();
 
 /** An ICO holding PNG images (the format allows PNG entries; every current browser reads them). */
 function ico(images) {
   const header = Buffer.alloc(6);
-  header.writeUInt16LE(0, 0); header.writeUInt16LE(1, 2); header.writeUInt16LE(images.length, 4);
+  header.writeUInt16LE(0, 0);
+  header.writeUInt16LE(1, 2);
+  header.writeUInt16LE(images.length, 4);
   let offset = 6 + 16 * images.length;
   const entries = images.map(({ size, data }) => {
     const entry = Buffer.alloc(16);
-    entry.writeUInt8(size >= 256 ? 0 : size, 0); entry.writeUInt8(size >= 256 ? 0 : size, 1);
-    entry.writeUInt8(0, 2); entry.writeUInt8(0, 3); entry.writeUInt16LE(1, 4); entry.writeUInt16LE(32, 6);
-    entry.writeUInt32LE(data.length, 8); entry.writeUInt32LE(offset, 12);
+    entry.writeUInt8(size >= 256 ? 0 : size, 0);
+    entry.writeUInt8(size >= 256 ? 0 : size, 1);
+    entry.writeUInt8(0, 2);
+    entry.writeUInt8(0, 3);
+    entry.writeUInt16LE(1, 4);
+    entry.writeUInt16LE(32, 6);
+    entry.writeUInt32LE(data.length, 8);
+    entry.writeUInt32LE(offset, 12);
     offset += data.length;
     return entry;
   });
@@ -71,5 +89,8 @@ await writeFile(path.join(root, 'public/icons/icon-512.png'), await png(any, 512
 await writeFile(path.join(root, 'public/icons/maskable-512.png'), await png(maskable, 512));
 await writeFile(path.join(root, 'app/apple-icon.png'), await png(iconSvg(mark, { scale: 0.7, radius: 0 }), 180));
 await writeFile(path.join(root, 'app/icon.svg'), `${any}\n`);
-await writeFile(path.join(root, 'public/favicon.ico'), ico(await Promise.all([16, 32, 48].map(async (size) => ({ size, data: await png(any, size) })))));
+await writeFile(
+  path.join(root, 'public/favicon.ico'),
+  ico(await Promise.all([16, 32, 48].map(async (size) => ({ size, data: await png(any, size) })))),
+);
 console.log('icons written: public/icons/*.png, public/favicon.ico, app/icon.svg, app/apple-icon.png');

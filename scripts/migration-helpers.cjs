@@ -28,7 +28,9 @@ const timestamps = () => ({
 const inList = (column, values) => `${column} IN (${values.map((v) => `'${v}'`).join(', ')})`;
 
 async function addCheck(queryInterface, table, name, sql, transaction) {
-  await queryInterface.sequelize.query(`ALTER TABLE "${table}" ADD CONSTRAINT "${name}" CHECK (${sql})`, { transaction });
+  await queryInterface.sequelize.query(`ALTER TABLE "${table}" ADD CONSTRAINT "${name}" CHECK (${sql})`, {
+    transaction,
+  });
 }
 
 async function indexCompany(queryInterface, table, transaction) {

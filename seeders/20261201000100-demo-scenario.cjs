@@ -27,9 +27,11 @@ module.exports = {
     // inside this transaction.
     await queryInterface.sequelize.transaction(async (transaction) => {
       const guarded = ['install_events', 'audit_entries'];
-      for (const table of guarded) await queryInterface.sequelize.query(`ALTER TABLE ${table} DISABLE TRIGGER USER`, { transaction });
+      for (const table of guarded)
+        await queryInterface.sequelize.query(`ALTER TABLE ${table} DISABLE TRIGGER USER`, { transaction });
       await queryInterface.bulkDelete('companies', { name: names }, { transaction });
-      for (const table of guarded) await queryInterface.sequelize.query(`ALTER TABLE ${table} ENABLE TRIGGER USER`, { transaction });
+      for (const table of guarded)
+        await queryInterface.sequelize.query(`ALTER TABLE ${table} ENABLE TRIGGER USER`, { transaction });
     });
   },
 };

@@ -25,9 +25,13 @@ export default async function DeskLayout({ children }: { children: React.ReactNo
         <IntlScope namespaces={['nav']}>
           <DeskNav items={navFor(deskNav, user.role)} />
           <div className="mt-auto border-t border-slate-700 pt-4 text-sm">
-            <p className="font-medium" data-testid="user-name">{user.name}</p>
+            <p className="font-medium" data-testid="user-name">
+              {user.name}
+            </p>
             <p className="text-slate-400">{t(`labels.${user.role}`)}</p>
-            <Link href="/profile" className="mt-2 block text-slate-200 underline hover:text-white">{t('nav.profile')}</Link>
+            <Link href="/profile" className="mt-2 block text-slate-200 underline hover:text-white">
+              {t('nav.profile')}
+            </Link>
             <SignOutButton className="mt-2 text-slate-200 underline hover:text-white" />
           </div>
         </IntlScope>

@@ -22,12 +22,19 @@ export default async function FieldLayout({ children }: { children: React.ReactN
         </div>
         <div className="flex items-center gap-4">
           {user.role === 'foreman' && (
-            <Link href="/live" className="min-h-touch content-center rounded-md px-3 font-semibold underline hover:bg-slate-800">
+            <Link
+              href="/live"
+              className="min-h-touch content-center rounded-md px-3 font-semibold underline hover:bg-slate-800"
+            >
               {t('nav.live')}
             </Link>
           )}
-          <span data-testid="user-name">{user.name} · {t(`labels.${user.role}`)}</span>
-          <Link href="/profile" className="underline">{t('nav.profile')}</Link>
+          <span data-testid="user-name">
+            {user.name} · {t(`labels.${user.role}`)}
+          </span>
+          <Link href="/profile" className="underline">
+            {t('nav.profile')}
+          </Link>
           <IntlScope namespaces={[]}>
             <SignOutButton className="min-h-touch rounded-md px-4 font-semibold ring-1 ring-slate-500 hover:bg-slate-800" />
           </IntlScope>

@@ -21,29 +21,29 @@ export default async function LiveLayout({ children }: { children: React.ReactNo
   // The sign-out button and the board's countdowns speak the reader's language.
   return (
     <IntlScope namespaces={[]}>
-    <div className="min-h-screen bg-slate-100">
-      <header className="flex flex-wrap items-center justify-between gap-3 bg-slate-900 px-4 py-3 text-white">
-        <div className="flex items-center gap-4">
-          <div className="flex items-center gap-2 text-brand-100">
-            <Logo />
-            <span className="text-lg font-bold text-white">Setline</span>
+      <div className="min-h-screen bg-slate-100">
+        <header className="flex flex-wrap items-center justify-between gap-3 bg-slate-900 px-4 py-3 text-white">
+          <div className="flex items-center gap-4">
+            <div className="flex items-center gap-2 text-brand-100">
+              <Logo />
+              <span className="text-lg font-bold text-white">Setline</span>
+            </div>
+            <Link
+              href={back.href}
+              className="rounded-md px-3 py-2 text-sm font-medium text-slate-200 underline hover:bg-slate-800"
+            >
+              {back.text}
+            </Link>
           </div>
-          <Link
-            href={back.href}
-            className="rounded-md px-3 py-2 text-sm font-medium text-slate-200 underline hover:bg-slate-800"
-          >
-            {back.text}
-          </Link>
-        </div>
-        <div className="flex items-center gap-4 text-sm">
-          <span data-testid="user-name">
-            {user.name} · {label(user.role)}
-          </span>
-          <SignOutButton className="text-slate-200 underline hover:text-white" />
-        </div>
-      </header>
-      <main className="p-4 sm:p-6">{children}</main>
-    </div>
+          <div className="flex items-center gap-4 text-sm">
+            <span data-testid="user-name">
+              {user.name} · {label(user.role)}
+            </span>
+            <SignOutButton className="text-slate-200 underline hover:text-white" />
+          </div>
+        </header>
+        <main className="p-4 sm:p-6">{children}</main>
+      </div>
     </IntlScope>
   );
 }

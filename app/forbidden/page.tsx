@@ -4,8 +4,12 @@ export default function Page() {
   return (
     <main className="mx-auto max-w-lg p-8 text-center">
       <h1 className="text-2xl font-bold">Not for your role</h1>
-      <p className="mt-2 text-slate-600">Your account cannot open this page. Ask your office or admin if you need it.</p>
-      <Link href="/" className="mt-6 inline-block font-semibold text-brand-700 underline">Go to your start page</Link>
+      <p className="mt-2 text-slate-600">
+        Your account cannot open this page. Ask your office or admin if you need it.
+      </p>
+      <Link href="/" className="mt-6 inline-block font-semibold text-brand-700 underline">
+        Go to your start page
+      </Link>
     </main>
   );
 }

@@ -21,7 +21,9 @@ export default async function Page() {
   const browser = localeFromAcceptLanguage((await headers()).get('accept-language'));
   return (
     <main className="mx-auto max-w-xl space-y-4 p-6">
-      <Link href="/" className="text-base font-semibold text-brand-700 underline">← {tc('back')}</Link>
+      <Link href="/" className="text-base font-semibold text-brand-700 underline">
+        ← {tc('back')}
+      </Link>
       <h1 className="text-3xl font-bold">{t('title')}</h1>
       <p className="text-slate-700">{t('intro', { name: profile.name, email: profile.email })}</p>
       <IntlScope namespaces={['profile']}>

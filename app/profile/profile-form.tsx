@@ -22,9 +22,12 @@ export function ProfileForm({ locale, browserLocale }: { locale: Locale | null; 
     event.preventDefault();
     setPending(true);
     setStatus(null);
-    const result = await submitJson('/api/profile', 'PATCH', { locale: choice === '' ? null : choice }).catch(() => null);
+    const result = await submitJson('/api/profile', 'PATCH', { locale: choice === '' ? null : choice }).catch(
+      () => null,
+    );
     setPending(false);
-    if (!result || !result.ok) return setStatus({ ok: false, text: t('failed', { message: result?.error.message ?? '—' }) });
+    if (!result || !result.ok)
+      return setStatus({ ok: false, text: t('failed', { message: result?.error.message ?? '—' }) });
     setStatus({ ok: true, text: t('saved') });
     // The next render reads the new setting (i18n/request.ts).
     router.refresh();
@@ -36,7 +39,14 @@ export function ProfileForm({ locale, browserLocale }: { locale: Locale | null; 
         <legend className="text-lg font-semibold">{t('language')}</legend>
         {CHOICES.map((value) => (
           <label key={value} className="mt-2 flex min-h-touch cursor-pointer items-center gap-3 text-lg">
-            <input type="radio" name="locale" value={value} checked={choice === value} onChange={() => setChoice(value)} className="h-6 w-6 accent-brand-700" />
+            <input
+              type="radio"
+              name="locale"
+              value={value}
+              checked={choice === value}
+              onChange={() => setChoice(value)}
+              className="h-6 w-6 accent-brand-700"
+            />
             {value === '' ? t('browser', { current: t(`languages.${browserLocale}`) }) : t(`languages.${value}`)}
           </label>
         ))}
@@ -44,7 +54,9 @@ export function ProfileForm({ locale, browserLocale }: { locale: Locale | null; 
       <div role="status" aria-live="polite">
         {status && <p className={status.ok ? 'text-safe-700' : 'text-missed-700'}>{status.text}</p>}
       </div>
-      <Button type="submit" size="field" disabled={pending}>{pending ? tc('saving') : tc('save')}</Button>
+      <Button type="submit" size="field" disabled={pending}>
+        {pending ? tc('saving') : tc('save')}
+      </Button>
     </form>
   );
 }

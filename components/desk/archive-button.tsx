@@ -21,8 +21,14 @@ export function ArchiveButton({ url, what, backTo }: { url: string; what: string
   };
   return (
     <span className="inline-flex items-center gap-2">
-      <Button type="button" variant="secondary" onClick={archive} disabled={busy}>Archive</Button>
-      {message && <span role="alert" className="text-sm text-missed-700">{message}</span>}
+      <Button type="button" variant="secondary" onClick={archive} disabled={busy}>
+        Archive
+      </Button>
+      {message && (
+        <span role="alert" className="text-sm text-missed-700">
+          {message}
+        </span>
+      )}
     </span>
   );
 }

@@ -30,11 +30,19 @@ export function ListToolbar({
           <Input name="q" type="search" defaultValue={search ?? ''} placeholder={placeholder} className="w-64" />
         </label>
         {children}
-        <button type="submit" className={buttonVariants({ variant: 'secondary' })}>Filter</button>
+        <button type="submit" className={buttonVariants({ variant: 'secondary' })}>
+          Filter
+        </button>
       </form>
       <div className="flex gap-2">
-        <a href={exportHref} className={buttonVariants({ variant: 'secondary' })} download>Export CSV</a>
-        {newHref && <Link href={newHref} className={buttonVariants({ variant: 'primary' })}>{newLabel ?? 'New'}</Link>}
+        <a href={exportHref} className={buttonVariants({ variant: 'secondary' })} download>
+          Export CSV
+        </a>
+        {newHref && (
+          <Link href={newHref} className={buttonVariants({ variant: 'primary' })}>
+            {newLabel ?? 'New'}
+          </Link>
+        )}
       </div>
     </div>
   );
@@ -51,14 +59,26 @@ export function exportHrefOf(apiPath: string, params: Record<string, string | st
 }
 
 /** A <select> filter for a ListToolbar. */
-export function FilterSelect({ name, label, value, options }: { name: string; label: string; value?: string; options: { value: string; label: string }[] }) {
+export function FilterSelect({
+  name,
+  label,
+  value,
+  options,
+}: {
+  name: string;
+  label: string;
+  value?: string;
+  options: { value: string; label: string }[];
+}) {
   return (
     <label className="flex flex-col">
       <span className="font-medium">{label}</span>
       <Select name={name} defaultValue={value ?? ''}>
         <option value="">Any</option>
         {options.map((option) => (
-          <option key={option.value} value={option.value}>{option.label}</option>
+          <option key={option.value} value={option.value}>
+            {option.label}
+          </option>
         ))}
       </Select>
     </label>

@@ -1,7 +1,13 @@
 import type { InputHTMLAttributes } from 'react';
 
 /** A field-mode input: large label and text, its hint and error tied to it for screen readers. */
-export function FieldInput({ id, label, hint, error, ...props }: InputHTMLAttributes<HTMLInputElement> & {
+export function FieldInput({
+  id,
+  label,
+  hint,
+  error,
+  ...props
+}: InputHTMLAttributes<HTMLInputElement> & {
   id: string;
   label: string;
   hint?: string;
@@ -9,7 +15,9 @@ export function FieldInput({ id, label, hint, error, ...props }: InputHTMLAttrib
 }) {
   return (
     <div>
-      <label htmlFor={id} className="block text-lg font-semibold">{label}</label>
+      <label htmlFor={id} className="block text-lg font-semibold">
+        {label}
+      </label>
       {hint && <p className="text-base text-slate-600">{hint}</p>}
       <input
         id={id}
@@ -18,7 +26,11 @@ export function FieldInput({ id, label, hint, error, ...props }: InputHTMLAttrib
         aria-describedby={error ? `${id}-error` : undefined}
         {...props}
       />
-      {error && <p id={`${id}-error`} className="mt-1 text-base font-medium text-missed-700">{error}</p>}
+      {error && (
+        <p id={`${id}-error`} className="mt-1 text-base font-medium text-missed-700">
+          {error}
+        </p>
+      )}
     </div>
   );
 }

@@ -41,7 +41,12 @@ export function Countdown({
   const digits = tone === 'missed' ? t('over', { time: formatDuration(Math.ceil(-remainingMs / 1000)) }) : left;
   const style = TONES[tone];
   return (
-    <section className={`rounded-xl border-2 ${compact ? 'p-3' : 'p-4'} ${style.box}`} data-tone={tone} data-testid="countdown" aria-label={label}>
+    <section
+      className={`rounded-xl border-2 ${compact ? 'p-3' : 'p-4'} ${style.box}`}
+      data-tone={tone}
+      data-testid="countdown"
+      aria-label={label}
+    >
       <div className="flex items-baseline justify-between gap-2">
         <h3 className="text-lg font-semibold text-slate-800">{label}</h3>
         <time className="text-base text-slate-600" dateTime={deadline.toISOString()} suppressHydrationWarning>

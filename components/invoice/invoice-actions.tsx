@@ -21,9 +21,21 @@ export function InvoiceActions({ invoiceId, status }: { invoiceId: string; statu
   };
   return (
     <div className="flex items-center gap-2">
-      {status === 'draft' && <Button type="button" onClick={() => act('issue')} disabled={busy}>Issue invoice</Button>}
-      {(status === 'draft' || status === 'issued') && <Button type="button" variant="secondary" onClick={() => act('void')} disabled={busy}>Void</Button>}
-      {message && <span role="alert" className="text-sm text-missed-700">{message}</span>}
+      {status === 'draft' && (
+        <Button type="button" onClick={() => act('issue')} disabled={busy}>
+          Issue invoice
+        </Button>
+      )}
+      {(status === 'draft' || status === 'issued') && (
+        <Button type="button" variant="secondary" onClick={() => act('void')} disabled={busy}>
+          Void
+        </Button>
+      )}
+      {message && (
+        <span role="alert" className="text-sm text-missed-700">
+          {message}
+        </span>
+      )}
     </div>
   );
 }

@@ -13,11 +13,18 @@ export function InvoiceSummary({ invoice }: { invoice: InvoiceDetail }) {
         <span className="font-semibold">Invoice {invoice.number}</span>
         <Badge tone={tone}>{label(invoice.status)}</Badge>
         <span className="text-slate-600">Due {invoice.dueOn}</span>
-        {invoice.paidAt && <span className="text-safe-700">Paid {new Date(invoice.paidAt).toISOString().slice(0, 10)}</span>}
+        {invoice.paidAt && (
+          <span className="text-safe-700">Paid {new Date(invoice.paidAt).toISOString().slice(0, 10)}</span>
+        )}
       </p>
       <table className="min-w-full">
         <thead className="text-left text-xs uppercase text-slate-600">
-          <tr><th className="py-1 pr-2">Description</th><th className="py-1 pr-2 text-right">Qty</th><th className="py-1 pr-2 text-right">Unit price</th><th className="py-1 text-right">Amount</th></tr>
+          <tr>
+            <th className="py-1 pr-2">Description</th>
+            <th className="py-1 pr-2 text-right">Qty</th>
+            <th className="py-1 pr-2 text-right">Unit price</th>
+            <th className="py-1 text-right">Amount</th>
+          </tr>
         </thead>
         <tbody className="divide-y divide-slate-100">
           {invoice.lines.map((line) => (
@@ -30,9 +37,26 @@ export function InvoiceSummary({ invoice }: { invoice: InvoiceDetail }) {
           ))}
         </tbody>
         <tfoot className="tabular-nums">
-          <tr><td colSpan={3} className="pt-2 text-right">Subtotal</td><td className="pt-2 text-right">{money(invoice.subtotalCents)}</td></tr>
-          <tr><td colSpan={3} className="text-right">Tax ({bpToPercent(invoice.taxRateBp)} %)</td><td className="text-right">{money(invoice.taxCents)}</td></tr>
-          <tr className="font-semibold"><td colSpan={3} className="text-right">Total</td><td className="text-right" data-testid="invoice-total">{money(invoice.totalCents)}</td></tr>
+          <tr>
+            <td colSpan={3} className="pt-2 text-right">
+              Subtotal
+            </td>
+            <td className="pt-2 text-right">{money(invoice.subtotalCents)}</td>
+          </tr>
+          <tr>
+            <td colSpan={3} className="text-right">
+              Tax ({bpToPercent(invoice.taxRateBp)} %)
+            </td>
+            <td className="text-right">{money(invoice.taxCents)}</td>
+          </tr>
+          <tr className="font-semibold">
+            <td colSpan={3} className="text-right">
+              Total
+            </td>
+            <td className="text-right" data-testid="invoice-total">
+              {money(invoice.totalCents)}
+            </td>
+          </tr>
         </tfoot>
       </table>
     </div>

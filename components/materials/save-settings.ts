@@ -10,7 +10,13 @@ import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
  * Resolves with the saved row's id, or undefined after putting the server's messages on the form.
  */
 export async function saveSettings<F extends FieldValues>({
-  collection, id, values, dirty, together = [], setError, setMessage,
+  collection,
+  id,
+  values,
+  dirty,
+  together = [],
+  setError,
+  setMessage,
 }: {
   collection: string;
   id?: string;
@@ -27,7 +33,9 @@ export async function saveSettings<F extends FieldValues>({
     body = Object.fromEntries([...changed].map((key) => [key, values[key]]));
     if (changed.size === 0) return id;
   }
-  const result = id ? await submitJson<{ id: string }>(`${collection}/${id}`, 'PATCH', body) : await submitJson<{ id: string }>(collection, 'POST', body);
+  const result = id
+    ? await submitJson<{ id: string }>(`${collection}/${id}`, 'PATCH', body)
+    : await submitJson<{ id: string }>(collection, 'POST', body);
   if (!result.ok) {
     setMessage(applyServerErrors(result.error, setError));
     return undefined;

@@ -12,7 +12,12 @@ export function RevokeLinksButton({ jobId, live }: { jobId: string; live: number
   const [message, setMessage] = useState<{ tone: 'ok' | 'error'; text: string }>();
   const [busy, setBusy] = useState(false);
   const revoke = async () => {
-    if (!window.confirm('Revoke every customer link to this job’s report? They stop working at once; send the report again to give the customer a new one.')) return;
+    if (
+      !window.confirm(
+        'Revoke every customer link to this job’s report? They stop working at once; send the report again to give the customer a new one.',
+      )
+    )
+      return;
     setBusy(true);
     const result = await submitJson<RevokeReportLinksResponse>(`/api/jobs/${jobId}/report-links`, 'DELETE');
     setBusy(false);
@@ -22,10 +27,15 @@ export function RevokeLinksButton({ jobId, live }: { jobId: string; live: number
   };
   return (
     <span className="inline-flex flex-wrap items-center gap-2">
-      <Button type="button" variant="secondary" onClick={revoke} disabled={busy || live === 0}>Revoke customer links</Button>
+      <Button type="button" variant="secondary" onClick={revoke} disabled={busy || live === 0}>
+        Revoke customer links
+      </Button>
       <span className="text-sm text-slate-600">{live === 1 ? '1 link open' : `${live} links open`}</span>
       {message && (
-        <span role={message.tone === 'error' ? 'alert' : 'status'} className={message.tone === 'error' ? 'text-sm text-missed-700' : 'text-sm text-safe-700'}>
+        <span
+          role={message.tone === 'error' ? 'alert' : 'status'}
+          className={message.tone === 'error' ? 'text-sm text-missed-700' : 'text-sm text-safe-700'}
+        >
           {message.text}
         </span>
       )}

@@ -22,12 +22,27 @@ export function FlagBadges({ flags }: { flags: Pick<QualityFlag, 'kind' | 'sever
 
 /** The flags with their full sentences, as the review page lists them. */
 export function FlagList({ flags }: { flags: Pick<QualityFlag, 'kind' | 'severity' | 'message'>[] }) {
-  if (flags.length === 0) return <p className="text-sm text-safe-700">No quality flags: the record kept to the resin’s clock and the packer’s rating.</p>;
+  if (flags.length === 0)
+    return (
+      <p className="text-sm text-safe-700">
+        No quality flags: the record kept to the resin’s clock and the packer’s rating.
+      </p>
+    );
   return (
     <ul className="space-y-2" data-testid="flag-list">
       {flags.map((flag) => (
-        <li key={flag.kind} data-kind={flag.kind} className={cn('rounded-md px-3 py-2 text-sm', flag.severity === 'critical' ? 'bg-missed-100 text-missed-700' : 'bg-near-100 text-near-700')}>
-          <span className="font-semibold">{flag.severity === 'critical' ? 'Critical' : 'Warning'} · {FLAG_LABELS[flag.kind] ?? flag.kind}:</span> {flag.message}
+        <li
+          key={flag.kind}
+          data-kind={flag.kind}
+          className={cn(
+            'rounded-md px-3 py-2 text-sm',
+            flag.severity === 'critical' ? 'bg-missed-100 text-missed-700' : 'bg-near-100 text-near-700',
+          )}
+        >
+          <span className="font-semibold">
+            {flag.severity === 'critical' ? 'Critical' : 'Warning'} · {FLAG_LABELS[flag.kind] ?? flag.kind}:
+          </span>{' '}
+          {flag.message}
         </li>
       ))}
     </ul>

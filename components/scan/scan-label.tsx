@@ -92,7 +92,11 @@ export function ScanLabel({
         >
           {scanning ? 'Stop scanning' : 'Scan label'}
         </button>
-        <button type="button" className={buttonVariants({ variant: 'ghost', size })} onClick={() => photo.current?.click()}>
+        <button
+          type="button"
+          className={buttonVariants({ variant: 'ghost', size })}
+          onClick={() => photo.current?.click()}
+        >
           Scan from photo
         </button>
         <input

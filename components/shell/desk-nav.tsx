@@ -29,7 +29,9 @@ export function DeskNav({ items }: { items: NavItem[] }) {
             )}
           >
             {item.key ? t(item.key) : item.label}
-            {item.countUrl && <NavCount url={item.countUrl} id={item.key ?? String(item.label).toLowerCase()} waiting={t('waiting')} />}
+            {item.countUrl && (
+              <NavCount url={item.countUrl} id={item.key ?? String(item.label).toLowerCase()} waiting={t('waiting')} />
+            )}
           </Link>
         );
       })}
@@ -41,7 +43,10 @@ function NavCount({ url, id, waiting }: { url: string; id: string; waiting: stri
   const { data } = useSWR<{ total: number }>(url, fetchJson, { refreshInterval: 60_000, revalidateOnFocus: true });
   if (!data?.total) return null;
   return (
-    <span data-testid={`nav-count-${id}`} className="ml-2 rounded-full bg-near-500 px-2 text-xs font-bold text-slate-900">
+    <span
+      data-testid={`nav-count-${id}`}
+      className="ml-2 rounded-full bg-near-500 px-2 text-xs font-bold text-slate-900"
+    >
       {data.total}
       <span className="sr-only"> {waiting}</span>
     </span>

@@ -23,9 +23,18 @@ export function Badge({ tone, className, children }: { tone?: Tone; className?: 
 }
 
 const STATUS_TONES: Record<string, Tone> = {
-  draft: 'neutral', scheduled: 'brand', in_progress: 'near', awaiting_review: 'near', sent_back: 'missed',
-  approved: 'safe', reported: 'safe', closed: 'neutral', cancelled: 'neutral',
-  issued: 'brand', paid: 'safe', void: 'neutral',
+  draft: 'neutral',
+  scheduled: 'brand',
+  in_progress: 'near',
+  awaiting_review: 'near',
+  sent_back: 'missed',
+  approved: 'safe',
+  reported: 'safe',
+  closed: 'neutral',
+  cancelled: 'neutral',
+  issued: 'brand',
+  paid: 'safe',
+  void: 'neutral',
 };
 
 export function StatusBadge({ status }: { status: string }) {

@@ -30,7 +30,14 @@ export function DataTable<Row>({
   const pathname = usePathname();
   const params = useSearchParams();
   // eslint-disable-next-line react-hooks/incompatible-library -- the app does not use the React Compiler
-  const table = useReactTable({ data, columns, getCoreRowModel: getCoreRowModel(), manualPagination: true, manualSorting: true, pageCount });
+  const table = useReactTable({
+    data,
+    columns,
+    getCoreRowModel: getCoreRowModel(),
+    manualPagination: true,
+    manualSorting: true,
+    pageCount,
+  });
 
   const go = (changes: Record<string, string>) => {
     const next = new URLSearchParams(params.toString());
@@ -55,7 +62,9 @@ export function DataTable<Row>({
                       <button
                         type="button"
                         className="inline-flex items-center gap-1 uppercase hover:text-slate-900"
-                        onClick={() => go({ sort: header.column.id, dir: active && dir === 'asc' ? 'desc' : 'asc', page: '1' })}
+                        onClick={() =>
+                          go({ sort: header.column.id, dir: active && dir === 'asc' ? 'desc' : 'asc', page: '1' })
+                        }
                       >
                         {flexRender(header.column.columnDef.header, header.getContext())}
                         <span aria-hidden="true">{active ? (dir === 'asc' ? '▲' : '▼') : '↕'}</span>
@@ -81,18 +90,32 @@ export function DataTable<Row>({
           ))}
           {data.length === 0 && (
             <tr>
-              <td colSpan={columns.length} className="px-3 py-8 text-center text-slate-500">Nothing matches.</td>
+              <td colSpan={columns.length} className="px-3 py-8 text-center text-slate-500">
+                Nothing matches.
+              </td>
             </tr>
           )}
         </tbody>
       </table>
       <div className="flex items-center justify-between border-t border-slate-200 px-3 py-2 text-sm text-slate-600">
-        <span>{total} in all · page {page} of {pageCount}</span>
+        <span>
+          {total} in all · page {page} of {pageCount}
+        </span>
         <div className="flex gap-2">
-          <button type="button" className="rounded px-2 py-1 ring-1 ring-slate-300 disabled:opacity-40" disabled={page <= 1} onClick={() => go({ page: String(page - 1) })}>
+          <button
+            type="button"
+            className="rounded px-2 py-1 ring-1 ring-slate-300 disabled:opacity-40"
+            disabled={page <= 1}
+            onClick={() => go({ page: String(page - 1) })}
+          >
             Previous
           </button>
-          <button type="button" className="rounded px-2 py-1 ring-1 ring-slate-300 disabled:opacity-40" disabled={page >= pageCount} onClick={() => go({ page: String(page + 1) })}>
+          <button
+            type="button"
+            className="rounded px-2 py-1 ring-1 ring-slate-300 disabled:opacity-40"
+            disabled={page >= pageCount}
+            onClick={() => go({ page: String(page + 1) })}
+          >
             Next
           </button>
         </div>

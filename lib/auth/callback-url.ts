@@ -7,7 +7,8 @@ const PLACEHOLDER = 'http://setline.invalid';
 /** A same-origin path (with its query and fragment) or `fallback`. */
 export function safeCallbackPath(value: string | null | undefined, fallback = '/'): string {
   if (typeof value !== 'string' || value.length === 0 || value.length > 2000) return fallback;
-  if (!value.startsWith('/') || value.startsWith('//') || value.includes('\\') || /[\u0000-\u001f\u007f]/.test(value)) return fallback;
+  if (!value.startsWith('/') || value.startsWith('//') || value.includes('\\') || /[\u0000-\u001f\u007f]/.test(value))
+    return fallback;
   let url: URL;
   try {
     url = new URL(value, PLACEHOLDER);
@@ -24,7 +25,8 @@ export function safeRedirect(url: string, baseUrl: string): string {
   if (url.startsWith('/')) return `${base}${safeCallbackPath(url)}`;
   try {
     const target = new URL(url);
-    if (target.origin === new URL(base).origin && !url.includes('\\')) return `${base}${safeCallbackPath(`${target.pathname}${target.search}${target.hash}`)}`;
+    if (target.origin === new URL(base).origin && !url.includes('\\'))
+      return `${base}${safeCallbackPath(`${target.pathname}${target.search}${target.hash}`)}`;
   } catch {
     // not a URL: the default below
   }

@@ -16,7 +16,12 @@ export async function getSessionClaims(): Promise<SessionClaims | null> {
   try {
     const token = await decode({ token: raw, secret: authSecret() });
     if (!token || typeof token.sub !== 'string' || typeof token.companyId !== 'string') return null;
-    return { sub: token.sub, companyId: token.companyId, role: String(token.role), tokenVersion: Number(token.tokenVersion) };
+    return {
+      sub: token.sub,
+      companyId: token.companyId,
+      role: String(token.role),
+      tokenVersion: Number(token.tokenVersion),
+    };
   } catch {
     return null;
   }

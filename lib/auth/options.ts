@@ -24,7 +24,14 @@ export const authOptions: NextAuthOptions = {
         const user = await User.unscoped().findOne({ where: { email: parsed.data.email } });
         const ok = await bcrypt.compare(parsed.data.password, user?.passwordHash ?? DUMMY_HASH);
         if (!user || !ok || !user.active) return null;
-        return { id: user.id, name: user.name, email: user.email, companyId: user.companyId, role: user.role, tokenVersion: user.tokenVersion };
+        return {
+          id: user.id,
+          name: user.name,
+          email: user.email,
+          companyId: user.companyId,
+          role: user.role,
+          tokenVersion: user.tokenVersion,
+        };
       },
     }),
   ],

@@ -47,10 +47,13 @@ export async function requirePageUser(roles?: readonly Role[]): Promise<SessionU
 /** Checks the claims against the user row: the row, not the token, decides (deactivation and role changes bite at once). */
 export async function userFromClaims(claims: SessionClaims | null): Promise<SessionUser | null> {
   if (!claims) return null;
-  const [row] = await sequelize.query<UserRow>(`${USER_SQL} FROM users u WHERE u.id = :sub AND u.company_id = :companyId`, {
-    replacements: { sub: claims.sub, companyId: claims.companyId },
-    type: QueryTypes.SELECT,
-  });
+  const [row] = await sequelize.query<UserRow>(
+    `${USER_SQL} FROM users u WHERE u.id = :sub AND u.company_id = :companyId`,
+    {
+      replacements: { sub: claims.sub, companyId: claims.companyId },
+      type: QueryTypes.SELECT,
+    },
+  );
   return sessionUserOf(row, claims);
 }
 
@@ -61,10 +64,14 @@ export type InstallAccess = { id: string; crewId: string | null; jobCrewId: stri
  * `requireUser` for a route about one install: the user, their crews and the install's crews in one query
  * (the tap's first round trip). `install` is null when the company has no such install.
  */
-export async function requireUserWithInstall(installId: string | null): Promise<{ user: SessionUser; install: InstallAccess | null }> {
+export async function requireUserWithInstall(
+  installId: string | null,
+): Promise<{ user: SessionUser; install: InstallAccess | null }> {
   const claims = await getSessionClaims();
   if (!claims) throw unauthorized();
-  const [row] = await sequelize.query<UserRow & { installId: string | null; installCrewId: string | null; jobCrewId: string | null }>(
+  const [row] = await sequelize.query<
+    UserRow & { installId: string | null; installCrewId: string | null; jobCrewId: string | null }
+  >(
     `${USER_SQL}, i.id AS "installId", i.crew_id AS "installCrewId", j.crew_id AS "jobCrewId"
      FROM users u
      LEFT JOIN installs i ON i.id = :installId AND i.company_id = u.company_id
@@ -96,5 +103,13 @@ const USER_SQL = `SELECT u.id, u.company_id AS "companyId", u.role, u.name, u.em
 
 function sessionUserOf(row: UserRow | undefined, claims: SessionClaims): SessionUser | null {
   if (!row || !row.active || row.tokenVersion !== claims.tokenVersion) return null;
-  return { id: row.id, companyId: row.companyId, role: row.role, name: row.name, email: row.email, crewIds: row.crewIds, locale: row.locale ?? null };
+  return {
+    id: row.id,
+    companyId: row.companyId,
+    role: row.role,
+    name: row.name,
+    email: row.email,
+    crewIds: row.crewIds,
+    locale: row.locale ?? null,
+  };
 }

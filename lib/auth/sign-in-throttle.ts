@@ -2,7 +2,13 @@ import 'server-only';
 import { NextRequest } from 'next/server';
 import { AppError } from '@/lib/server/errors';
 import { readBodyText } from '@/lib/server/http';
-import { clientIp, recordSignInFailure, recordSignInSuccess, signInLockedFor, tooManyAttempts } from '@/lib/security/throttle';
+import {
+  clientIp,
+  recordSignInFailure,
+  recordSignInSuccess,
+  signInLockedFor,
+  tooManyAttempts,
+} from '@/lib/security/throttle';
 
 const SESSION_COOKIE = /(^|,\s*)(__Secure-)?next-auth\.session-token=/;
 
@@ -11,12 +17,16 @@ const SESSION_COOKIE = /(^|,\s*)(__Secure-)?next-auth\.session-token=/;
  * address answers 429 before next-auth runs, so even the right password creates no session; next-auth's
  * answer then tells a failure (401) from a success (a session cookie), which are counted.
  */
-export async function throttledCredentialsSignIn(request: NextRequest, run: (request: NextRequest) => Promise<Response>): Promise<Response> {
+export async function throttledCredentialsSignIn(
+  request: NextRequest,
+  run: (request: NextRequest) => Promise<Response>,
+): Promise<Response> {
   let text: string;
   try {
     text = await readBodyText(request);
   } catch (error) {
-    if (error instanceof AppError) return Response.json({ error: { message: error.message } }, { status: error.status });
+    if (error instanceof AppError)
+      return Response.json({ error: { message: error.message } }, { status: error.status });
     throw error;
   }
   const email = emailOf(text, request.headers.get('content-type'));
@@ -26,7 +36,9 @@ export async function throttledCredentialsSignIn(request: NextRequest, run: (req
   if (locked !== null) return tooManyAttempts(locked);
 
   // The body was read to learn the e-mail: next-auth gets an identical request to read it again.
-  const response = await run(new NextRequest(request.url, { method: request.method, headers: request.headers, body: text }));
+  const response = await run(
+    new NextRequest(request.url, { method: request.method, headers: request.headers, body: text }),
+  );
   if (response.status === 401) {
     const lock = await recordSignInFailure(email, ip);
     if (lock !== null) return tooManyAttempts(lock);

@@ -38,8 +38,18 @@ export type AlarmSound = 'warning' | 'urgent';
 // Square waves in the 800–1000 Hz band carry over traffic and pumps better than a soft sine;
 // the urgent pattern alternates pitch so it is not mistaken for the warning.
 const PATTERNS: Record<AlarmSound, { hz: number; ms: number }[]> = {
-  warning: [{ hz: 880, ms: 180 }, { hz: 880, ms: 180 }, { hz: 880, ms: 180 }],
-  urgent: [{ hz: 988, ms: 220 }, { hz: 784, ms: 220 }, { hz: 988, ms: 220 }, { hz: 784, ms: 220 }, { hz: 988, ms: 400 }],
+  warning: [
+    { hz: 880, ms: 180 },
+    { hz: 880, ms: 180 },
+    { hz: 880, ms: 180 },
+  ],
+  urgent: [
+    { hz: 988, ms: 220 },
+    { hz: 784, ms: 220 },
+    { hz: 988, ms: 220 },
+    { hz: 784, ms: 220 },
+    { hz: 988, ms: 400 },
+  ],
 };
 const GAP_MS = 120;
 

@@ -42,6 +42,7 @@ export async function fetchJson<T = unknown>(url: string, init?: RequestInit): P
 export function errorOf(body: unknown): { message: string; fields?: Record<string, string[]> } | undefined {
   if (typeof body !== 'object' || body === null || !('error' in body)) return undefined;
   const error = (body as { error: unknown }).error;
-  if (typeof error !== 'object' || error === null || typeof (error as { message?: unknown }).message !== 'string') return undefined;
+  if (typeof error !== 'object' || error === null || typeof (error as { message?: unknown }).message !== 'string')
+    return undefined;
   return error as { message: string; fields?: Record<string, string[]> };
 }

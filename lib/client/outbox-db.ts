@@ -57,9 +57,11 @@ export function firstSendable(userId: string | null): Promise<OutboxEntry | unde
     .first();
 }
 
-export const mayBeSentBy = (entry: Pick<OutboxEntry, 'userId'>, userId: string | null) => entry.userId === undefined || entry.userId === userId;
+export const mayBeSentBy = (entry: Pick<OutboxEntry, 'userId'>, userId: string | null) =>
+  entry.userId === undefined || entry.userId === userId;
 
-const pendingInOrder = () => outboxDb().entries.where('[status+seq]').between(['pending', Dexie.minKey], ['pending', Dexie.maxKey]);
+const pendingInOrder = () =>
+  outboxDb().entries.where('[status+seq]').between(['pending', Dexie.minKey], ['pending', Dexie.maxKey]);
 
 export async function deleteOutboxDb(): Promise<void> {
   database?.close();

@@ -24,7 +24,10 @@ import { sendEntry } from './outbox-send';
 
 export type { OutboxEntry, OutboxStatus } from './outbox-db';
 
-export type NewOutboxEvent = Pick<OutboxEntry, 'installId' | 'clientEventId' | 'type' | 'deviceTime' | 'payload' | 'correctsEventId' | 'userId' | 'userName'>;
+export type NewOutboxEvent = Pick<
+  OutboxEntry,
+  'installId' | 'clientEventId' | 'type' | 'deviceTime' | 'payload' | 'correctsEventId' | 'userId' | 'userName'
+>;
 
 /** Who is signed in on this tablet, as far as the outbox knows. */
 export type OutboxUser = { id: string; name: string };
@@ -219,14 +222,24 @@ export async function resetOutboxForTests(): Promise<void> {
 
 const enqueuedListeners = new Set<() => void>();
 
-async function drain({ fetchImpl = fetch, baseUrl = '', timeoutMs = DEFAULT_TIMEOUT_MS, userId = signedInUserId }: FlushOptions): Promise<FlushResult> {
+async function drain({
+  fetchImpl = fetch,
+  baseUrl = '',
+  timeoutMs = DEFAULT_TIMEOUT_MS,
+  userId = signedInUserId,
+}: FlushOptions): Promise<FlushResult> {
   const table = outboxDb().entries;
   const result: FlushResult = { synced: 0, rejected: 0, remaining: 0 };
   for (let entry = await firstSendable(userId); entry; entry = await firstSendable(userId)) {
     const outcome = await sendEntry(entry, fetchImpl, baseUrl, timeoutMs);
     const attempts = entry.attempts + 1;
     if (outcome.kind === 'synced') {
-      await table.update(entry.seq, { status: 'synced', attempts, syncedAt: new Date().toISOString(), lastError: undefined });
+      await table.update(entry.seq, {
+        status: 'synced',
+        attempts,
+        syncedAt: new Date().toISOString(),
+        lastError: undefined,
+      });
       result.synced += 1;
     } else if (outcome.kind === 'rejected') {
       await table.update(entry.seq, { status: 'rejected', attempts, lastError: outcome.message });
@@ -238,7 +251,11 @@ async function drain({ fetchImpl = fetch, baseUrl = '', timeoutMs = DEFAULT_TIME
     }
   }
   result.remaining = await pendingCount();
-  const waiting = await table.where('status').equals('pending').filter((entry) => !mayBeSentBy(entry, userId)).count();
+  const waiting = await table
+    .where('status')
+    .equals('pending')
+    .filter((entry) => !mayBeSentBy(entry, userId))
+    .count();
   if (waiting > 0) result.waiting = waiting;
   return result;
 }
@@ -248,7 +265,9 @@ async function drain({ fetchImpl = fetch, baseUrl = '', timeoutMs = DEFAULT_TIME
 async function acrossTabs(run: () => Promise<FlushResult>): Promise<FlushResult> {
   const locks = typeof navigator === 'undefined' ? undefined : navigator.locks;
   if (!locks) return run();
-  return locks.request(LOCK_NAME, { ifAvailable: true }, async (lock) => (lock ? run() : { synced: 0, rejected: 0, remaining: await pendingCount() }));
+  return locks.request(LOCK_NAME, { ifAvailable: true }, async (lock) =>
+    lock ? run() : { synced: 0, rejected: 0, remaining: await pendingCount() },
+  );
 }
 
 // Without this the browser may evict IndexedDB under storage pressure — unsent taps included.
@@ -271,7 +290,16 @@ function validate(body: NewOutboxEvent): Omit<OutboxEntry, 'seq' | 'status' | 'a
     throw new OutboxInputError(path ? `${path}: ${issue.message}` : issue.message);
   }
   const { clientEventId, type, deviceTime, payload, correctsEventId } = parsed.data;
-  if (body.userId !== undefined && !uuidSchema.safeParse(body.userId).success) throw new OutboxInputError('userId: Not a valid id');
+  if (body.userId !== undefined && !uuidSchema.safeParse(body.userId).success)
+    throw new OutboxInputError('userId: Not a valid id');
   const who = body.userId === undefined ? {} : { userId: body.userId, userName: body.userName ?? '' };
-  return { installId: body.installId, clientEventId, type, deviceTime, payload, ...(correctsEventId ? { correctsEventId } : {}), ...who };
+  return {
+    installId: body.installId,
+    clientEventId,
+    type,
+    deviceTime,
+    payload,
+    ...(correctsEventId ? { correctsEventId } : {}),
+    ...who,
+  };
 }

@@ -29,14 +29,22 @@ let offsetMs: number | null = null;
  * Takes one sample from a response's `Date` header and the device times (Date.now()) the
  * request was sent and the response received. Returns false when the sample was unusable.
  */
-export function recordServerDate(dateHeader: string | null, requestStartedMs: number, responseReceivedMs: number): boolean {
+export function recordServerDate(
+  dateHeader: string | null,
+  requestStartedMs: number,
+  responseReceivedMs: number,
+): boolean {
   if (!dateHeader) return false;
   const serverMs = Date.parse(dateHeader);
   const roundTrip = responseReceivedMs - requestStartedMs;
-  if (!Number.isFinite(serverMs) || !Number.isFinite(roundTrip) || roundTrip < 0 || roundTrip > MAX_ROUND_TRIP_MS) return false;
+  if (!Number.isFinite(serverMs) || !Number.isFinite(roundTrip) || roundTrip < 0 || roundTrip > MAX_ROUND_TRIP_MS)
+    return false;
 
   const sample = { lo: serverMs - responseReceivedMs, hi: serverMs + 1000 - requestStartedMs, at: responseReceivedMs };
-  samples = [...samples.filter((s) => responseReceivedMs - s.at <= MAX_SAMPLE_AGE_MS && s.at <= responseReceivedMs), sample].slice(-MAX_SAMPLES);
+  samples = [
+    ...samples.filter((s) => responseReceivedMs - s.at <= MAX_SAMPLE_AGE_MS && s.at <= responseReceivedMs),
+    sample,
+  ].slice(-MAX_SAMPLES);
   offsetMs = estimate(samples);
   persist(offsetMs);
   return true;

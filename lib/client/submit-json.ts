@@ -4,9 +4,16 @@ import { fetchJson, FetchError } from './fetch-json';
 export type ApiFailure = { message: string; fields?: Record<string, string[]> };
 
 /** Sends JSON to one of our API routes; resolves with the body, or with the API's error shape (never throws). */
-export async function submitJson<T>(url: string, method: 'POST' | 'PATCH' | 'PUT' | 'DELETE', body?: unknown): Promise<{ ok: true; data: T } | { ok: false; error: ApiFailure }> {
+export async function submitJson<T>(
+  url: string,
+  method: 'POST' | 'PATCH' | 'PUT' | 'DELETE',
+  body?: unknown,
+): Promise<{ ok: true; data: T } | { ok: false; error: ApiFailure }> {
   try {
-    const init: RequestInit = body === undefined ? { method } : { method, headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) };
+    const init: RequestInit =
+      body === undefined
+        ? { method }
+        : { method, headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) };
     return { ok: true, data: await fetchJson<T>(url, init) };
   } catch (error) {
     if (error instanceof FetchError) return { ok: false, error: { message: error.message, fields: error.fields } };

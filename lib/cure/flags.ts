@@ -36,12 +36,16 @@ export function flagsFor(install: InstallRecord): QualityFlag[] {
   const mixTempC = install.mixTempC == null ? undefined : requireTemperature(install.mixTempC, 'Mixing temperature');
   const airTempC = install.airTempC == null ? undefined : requireTemperature(install.airTempC, 'Air temperature');
   // The warmer of resin and air sets the working window (as in planCure).
-  const windowTempC = mixTempC === undefined ? undefined : airTempC === undefined ? mixTempC : Math.max(mixTempC, airTempC);
+  const windowTempC =
+    mixTempC === undefined ? undefined : airTempC === undefined ? mixTempC : Math.max(mixTempC, airTempC);
   const holdReserve = install.holdReserve == null ? 0 : requireHoldReserve(install.holdReserve);
-  const makerHoldMin = install.makerHoldMin == null ? undefined : requirePositive(install.makerHoldMin, "Maker's hold time");
+  const makerHoldMin =
+    install.makerHoldMin == null ? undefined : requirePositive(install.makerHoldMin, "Maker's hold time");
   const pipeTempC = install.pipeTempC == null ? undefined : requireTemperature(install.pipeTempC, 'Pipe temperature');
-  const dryRunSeconds = install.dryRunSeconds == null ? undefined : requireNonNegative(install.dryRunSeconds, 'Dry run time');
-  const prepMinutes = install.prepMinutes == null ? DEFAULT_PREP_MINUTES : requireNonNegative(install.prepMinutes, 'Preparation time');
+  const dryRunSeconds =
+    install.dryRunSeconds == null ? undefined : requireNonNegative(install.dryRunSeconds, 'Dry run time');
+  const prepMinutes =
+    install.prepMinutes == null ? DEFAULT_PREP_MINUTES : requireNonNegative(install.prepMinutes, 'Preparation time');
   const safetyMargin = install.safetyMargin == null ? DEFAULT_SAFETY_MARGIN : requireSafetyMargin(install.safetyMargin);
   const packer = install.packer == null ? undefined : validatePacker(install.packer);
   const pressures = install.pressuresKpa == null ? [] : install.pressuresKpa;
@@ -59,7 +63,9 @@ export function flagsFor(install: InstallRecord): QualityFlag[] {
       flags.push({
         kind: 'late-inflate',
         severity: 'critical',
-        message: `Inflated at ${timeText(inflatedAt)}, after the inflate-by time ${timeText(inflateBy)}: the resin may have begun to set before the patch was pressed home.`,
+        message:
+          `Inflated at ${timeText(inflatedAt)}, after the inflate-by time ${timeText(inflateBy)}: the resin may have begun to set before the ` +
+          `patch was pressed home.`,
       });
     } else if (inflatedAt == null && now !== undefined && now.getTime() > inflateBy.getTime()) {
       flags.push({
@@ -72,7 +78,11 @@ export function flagsFor(install: InstallRecord): QualityFlag[] {
 
   // Outside the rated range the resin's times do not apply; only the maker's hold (override) counts.
   const pipeInRange = pipeTempC !== undefined && pipeTempC >= resin.minTempC && pipeTempC <= resin.maxTempC;
-  const holdMin = pipeInRange ? cureMinutes(resin, pipeTempC).holdMin : pipeTempC !== undefined ? makerHoldMin : undefined;
+  const holdMin = pipeInRange
+    ? cureMinutes(resin, pipeTempC).holdMin
+    : pipeTempC !== undefined
+      ? makerHoldMin
+      : undefined;
 
   // early-deflate: the bladder came off before the hold was up (critical), or inside the
   // company's hold reserve (warning: the hold was kept, the company's extra was not).
@@ -90,7 +100,9 @@ export function flagsFor(install: InstallRecord): QualityFlag[] {
       flags.push({
         kind: 'early-deflate',
         severity: 'warning',
-        message: `Deflated at ${timeText(deflatedAt)}: after ${whose} (${timeText(holdEnds)}) but inside the company's ${Math.round(holdReserve * 100)} % hold reserve, which ran to ${timeText(reserveEnds)}.`,
+        message:
+          `Deflated at ${timeText(deflatedAt)}: after ${whose} (${timeText(holdEnds)}) but inside the company's ` +
+          `${Math.round(holdReserve * 100)} % hold reserve, which ran to ${timeText(reserveEnds)}.`,
       });
     }
   }
@@ -100,16 +112,24 @@ export function flagsFor(install: InstallRecord): QualityFlag[] {
   const cold: string[] = [];
   const hot: string[] = [];
   if (pipeTempC !== undefined && pipeTempC < resin.minTempC) {
-    cold.push(`Cured in a pipe at ${formatTemperature(pipeTempC, system)}, below the resin's minimum of ${formatTemperature(resin.minTempC, system)}.`);
+    cold.push(
+      `Cured in a pipe at ${formatTemperature(pipeTempC, system)}, below the resin's minimum of ${formatTemperature(resin.minTempC, system)}.`,
+    );
   }
   if (mixTempC !== undefined && mixTempC < resin.minTempC) {
-    cold.push(`Resin mixed at ${formatTemperature(mixTempC, system)}, below the resin's minimum of ${formatTemperature(resin.minTempC, system)}.`);
+    cold.push(
+      `Resin mixed at ${formatTemperature(mixTempC, system)}, below the resin's minimum of ${formatTemperature(resin.minTempC, system)}.`,
+    );
   }
   if (pipeTempC !== undefined && pipeTempC > resin.maxTempC) {
-    hot.push(`Cured in a pipe at ${formatTemperature(pipeTempC, system)}, above the resin's maximum of ${formatTemperature(resin.maxTempC, system)}.`);
+    hot.push(
+      `Cured in a pipe at ${formatTemperature(pipeTempC, system)}, above the resin's maximum of ${formatTemperature(resin.maxTempC, system)}.`,
+    );
   }
   if (windowTempC !== undefined && windowTempC > resin.maxTempC) {
-    hot.push(`Mixed at ${formatTemperature(windowTempC, system)}, above the resin's maximum of ${formatTemperature(resin.maxTempC, system)}.`);
+    hot.push(
+      `Mixed at ${formatTemperature(windowTempC, system)}, above the resin's maximum of ${formatTemperature(resin.maxTempC, system)}.`,
+    );
   }
   if (cold.length) flags.push({ kind: 'cold-cure', severity: 'critical', message: cold.join(' ') });
   if (hot.length) flags.push({ kind: 'hot-cure', severity: 'critical', message: hot.join(' ') });
@@ -123,7 +143,15 @@ export function flagsFor(install: InstallRecord): QualityFlag[] {
       flags.push({
         kind: 'slow-dry-run',
         severity: 'warning',
-        message: slowPullText({ dryRunSeconds, prepMinutes, neededMin, safeWindowMin, safetyMargin, mixTempC: windowTempC, system }),
+        message: slowPullText({
+          dryRunSeconds,
+          prepMinutes,
+          neededMin,
+          safeWindowMin,
+          safetyMargin,
+          mixTempC: windowTempC,
+          system,
+        }),
       });
     }
   }
@@ -148,7 +176,8 @@ export function flagsFor(install: InstallRecord): QualityFlag[] {
 
   // The kit is judged on the day it was mixed, or today when it is not mixed yet.
   const usedOn = mixedAt ?? now;
-  const expires = install.resinKitExpiresOn == null ? undefined : calendarDay(install.resinKitExpiresOn, 'Resin kit expiry');
+  const expires =
+    install.resinKitExpiresOn == null ? undefined : calendarDay(install.resinKitExpiresOn, 'Resin kit expiry');
   if (expires !== undefined && usedOn != null) {
     const used = calendarDay(usedOn, 'Mix date');
     if (expires < used) {

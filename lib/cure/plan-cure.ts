@@ -1,7 +1,16 @@
 import { CureInputError } from './errors';
 import { addMinutes, cureMinutes, workingWindowMinutes } from '@/lib/cure/resin-clock';
 import { DEFAULT_PREP_MINUTES, DEFAULT_SAFETY_MARGIN } from './limits';
-import { coldMixText, coldPipeText, countedText, hotMixText, hotPipeText, noClockText, noDryRunText, slowPullText } from './reasons';
+import {
+  coldMixText,
+  coldPipeText,
+  countedText,
+  hotMixText,
+  hotPipeText,
+  noClockText,
+  noDryRunText,
+  slowPullText,
+} from './reasons';
 import type { CurePlan, CurePlanInput, ResinClockSpec } from './types';
 import {
   requireDate,
@@ -36,11 +45,14 @@ export function planCure(resin: ResinClockSpec, input: CurePlanInput): CurePlan 
   const airTempC = input.airTempC == null ? undefined : requireTemperature(input.airTempC, 'Air temperature');
   const pipeTempC = requireTemperature(input.pipeTempC, 'Pipe temperature');
   validateEventOrder(mixedAt, input.inflatedAt, input.deflatedAt);
-  const dryRunSeconds = input.dryRunSeconds == null ? undefined : requireNonNegative(input.dryRunSeconds, 'Dry run time');
-  const prepMinutes = input.prepMinutes == null ? DEFAULT_PREP_MINUTES : requireNonNegative(input.prepMinutes, 'Preparation time');
+  const dryRunSeconds =
+    input.dryRunSeconds == null ? undefined : requireNonNegative(input.dryRunSeconds, 'Dry run time');
+  const prepMinutes =
+    input.prepMinutes == null ? DEFAULT_PREP_MINUTES : requireNonNegative(input.prepMinutes, 'Preparation time');
   const safetyMargin = input.safetyMargin == null ? DEFAULT_SAFETY_MARGIN : requireSafetyMargin(input.safetyMargin);
   const holdReserve = input.holdReserve == null ? 0 : requireHoldReserve(input.holdReserve);
-  const makerHoldMin = input.makerHoldMin == null ? undefined : requirePositive(input.makerHoldMin, "Maker's hold time");
+  const makerHoldMin =
+    input.makerHoldMin == null ? undefined : requirePositive(input.makerHoldMin, "Maker's hold time");
   const system = input.unitSystem ?? 'metric';
 
   const windowTempC = airTempC === undefined ? mixTempC : Math.max(mixTempC, airTempC);
@@ -69,7 +81,17 @@ export function planCure(resin: ResinClockSpec, input: CurePlanInput): CurePlan 
     ...(holdSource === 'maker' ? { makerHoldMin } : {}),
     prepMinutes,
     ...(neededMin === undefined ? {} : { neededMin }),
-    counted: countedText({ prepMinutes, dryRunSeconds, neededMin, workingWindowMin, safeWindowMin: safeWorkingWindowMin, safetyMargin, mixTempC, airTempC, system }),
+    counted: countedText({
+      prepMinutes,
+      dryRunSeconds,
+      neededMin,
+      workingWindowMin,
+      safeWindowMin: safeWorkingWindowMin,
+      safetyMargin,
+      mixTempC,
+      airTempC,
+      system,
+    }),
     go: false,
     reasons: [],
   };
@@ -88,7 +110,15 @@ export function planCure(resin: ResinClockSpec, input: CurePlanInput): CurePlan 
     reasons.push(noDryRunText());
   } else if (neededMin > safeWorkingWindowMin) {
     reasons.push(
-      slowPullText({ dryRunSeconds, prepMinutes, neededMin, safeWindowMin: safeWorkingWindowMin, safetyMargin, mixTempC: windowTempC, system }),
+      slowPullText({
+        dryRunSeconds,
+        prepMinutes,
+        neededMin,
+        safeWindowMin: safeWorkingWindowMin,
+        safetyMargin,
+        mixTempC: windowTempC,
+        system,
+      }),
     );
   }
   plan.reasons = reasons;

@@ -24,7 +24,9 @@ export function requireNonNegative(value: unknown, what: string): number {
 export function requireTemperature(value: unknown, what: string): number {
   const n = requireNumber(value, what);
   if (n < MIN_TEMP_C || n > MAX_TEMP_C) {
-    throw new CureInputError(`${what} ${n} °C is outside ${MIN_TEMP_C}…${MAX_TEMP_C} °C; check the reading and its unit.`);
+    throw new CureInputError(
+      `${what} ${n} °C is outside ${MIN_TEMP_C}…${MAX_TEMP_C} °C; check the reading and its unit.`,
+    );
   }
   return n;
 }
@@ -88,13 +90,19 @@ export function validatePacker(packer: unknown): PackerPressureRating {
   requireNonNegative(p.minPressureKpa, 'Packer minimum pressure');
   requireNonNegative(p.maxPressureKpa, 'Packer maximum pressure');
   if (p.minPressureKpa > p.maxPressureKpa) {
-    throw new CureInputError(`Packer minimum pressure ${p.minPressureKpa} kPa is above its maximum ${p.maxPressureKpa} kPa.`);
+    throw new CureInputError(
+      `Packer minimum pressure ${p.minPressureKpa} kPa is above its maximum ${p.maxPressureKpa} kPa.`,
+    );
   }
   return p;
 }
 
 /** The clock's order of events: mixed, then inflated, then deflated. */
-export function validateEventOrder(mixedAt: Date | null | undefined, inflatedAt: Date | null | undefined, deflatedAt: Date | null | undefined): void {
+export function validateEventOrder(
+  mixedAt: Date | null | undefined,
+  inflatedAt: Date | null | undefined,
+  deflatedAt: Date | null | undefined,
+): void {
   if (mixedAt != null) requireDate(mixedAt, 'Mix time');
   if (inflatedAt != null) requireDate(inflatedAt, 'Inflate time');
   if (deflatedAt != null) requireDate(deflatedAt, 'Deflate time');

@@ -15,18 +15,35 @@ const ENTITY = 'access_point';
 /** The access points of a site the caller may read, by label. */
 export async function listAccessPoints(user: SessionUser, siteId: string) {
   const site = await findVisibleSite(user, siteId);
-  const rows = await AccessPoint.findAll({ where: { siteId: site.id, companyId: user.companyId }, order: [['label', 'ASC']] });
+  const rows = await AccessPoint.findAll({
+    where: { siteId: site.id, companyId: user.companyId },
+    order: [['label', 'ASC']],
+  });
   return rows.map((row) => row.get({ plain: true }));
 }
 
-export async function createAccessPoint(user: SessionUser, siteId: string, input: z.output<typeof accessPointInputSchema>) {
+export async function createAccessPoint(
+  user: SessionUser,
+  siteId: string,
+  input: z.output<typeof accessPointInputSchema>,
+) {
   assertOfficeWriter(user);
   return sequelize.transaction(async (transaction) => {
-    const site = await Site.findOne({ where: { id: siteId, companyId: user.companyId }, transaction, lock: transaction.LOCK.UPDATE });
+    const site = await Site.findOne({
+      where: { id: siteId, companyId: user.companyId },
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
     if (!site) throw notFound('Site');
     await assertLabelFree(siteId, input.label, null, transaction);
-    const point = await AccessPoint.create({ ...input, siteId, companyId: user.companyId }, { transaction }).catch(duplicateLabel);
-    await recordAudit(user, { action: 'create', entityType: ENTITY, entityId: point.id, changes: { siteId, ...input } }, transaction);
+    const point = await AccessPoint.create({ ...input, siteId, companyId: user.companyId }, { transaction }).catch(
+      duplicateLabel,
+    );
+    await recordAudit(
+      user,
+      { action: 'create', entityType: ENTITY, entityId: point.id, changes: { siteId, ...input } },
+      transaction,
+    );
     return point.get({ plain: true });
   });
 }
@@ -34,7 +51,11 @@ export async function createAccessPoint(user: SessionUser, siteId: string, input
 export async function updateAccessPoint(user: SessionUser, id: string, patch: z.output<typeof accessPointPatchSchema>) {
   assertOfficeWriter(user);
   return sequelize.transaction(async (transaction) => {
-    const point = await AccessPoint.findOne({ where: { id, companyId: user.companyId }, transaction, lock: transaction.LOCK.UPDATE });
+    const point = await AccessPoint.findOne({
+      where: { id, companyId: user.companyId },
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
     if (!point) throw notFound('Access point');
     if (patch.label !== undefined) await assertLabelFree(point.siteId, patch.label, id, transaction);
     const changes = changedFields(point.get({ plain: true }), patch);
@@ -53,22 +74,51 @@ export async function updateAccessPoint(user: SessionUser, id: string, patch: z.
 export async function deleteAccessPoint(user: SessionUser, id: string, reason?: string | null) {
   assertOfficeWriter(user);
   return sequelize.transaction(async (transaction) => {
-    const point = await AccessPoint.findOne({ where: { id, companyId: user.companyId }, transaction, lock: transaction.LOCK.UPDATE });
+    const point = await AccessPoint.findOne({
+      where: { id, companyId: user.companyId },
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
     if (!point) throw notFound('Access point');
     const [segments, repairs] = await Promise.all([
-      Segment.findAll({ where: { companyId: user.companyId, [Op.or]: [{ fromAccessPointId: id }, { toAccessPointId: id }] }, attributes: ['label'], transaction }),
+      Segment.findAll({
+        where: { companyId: user.companyId, [Op.or]: [{ fromAccessPointId: id }, { toAccessPointId: id }] },
+        attributes: ['label'],
+        transaction,
+      }),
       Repair.count({ where: { companyId: user.companyId, fromAccessPointId: id }, transaction }),
     ]);
-    if (segments.length) throw new AppError(409, `Segment ${segments.map((s) => s.label).join(', ')} runs from or to ${point.label}: change or remove the segment first.`);
-    if (repairs) throw new AppError(409, `${repairs} repair${repairs === 1 ? ' is' : 's are'} measured from ${point.label}: it cannot be removed.`);
+    if (segments.length)
+      throw new AppError(
+        409,
+        `Segment ${segments.map((s) => s.label).join(', ')} runs from or to ${point.label}: change or remove the segment first.`,
+      );
+    if (repairs)
+      throw new AppError(
+        409,
+        `${repairs} repair${repairs === 1 ? ' is' : 's are'} measured from ${point.label}: it cannot be removed.`,
+      );
     await point.destroy({ transaction });
-    await recordAudit(user, { action: 'delete', entityType: ENTITY, entityId: id, changes: { siteId: point.siteId, label: point.label }, reason }, transaction);
+    await recordAudit(
+      user,
+      {
+        action: 'delete',
+        entityType: ENTITY,
+        entityId: id,
+        changes: { siteId: point.siteId, label: point.label },
+        reason,
+      },
+      transaction,
+    );
     return { id, archived: false, deleted: true };
   });
 }
 
 async function assertLabelFree(siteId: string, label: string, exceptId: string | null, transaction: Transaction) {
-  const clash = await AccessPoint.findOne({ where: { siteId, label, ...(exceptId ? { id: { [Op.ne]: exceptId } } : {}) }, transaction });
+  const clash = await AccessPoint.findOne({
+    where: { siteId, label, ...(exceptId ? { id: { [Op.ne]: exceptId } } : {}) },
+    transaction,
+  });
   if (clash) throw labelTaken(label);
 }
 
@@ -79,4 +129,6 @@ function duplicateLabel(error: unknown): never {
 }
 
 const labelTaken = (label?: string) =>
-  new AppError(409, `This site already has an access point labelled ${label ?? 'that'}.`, { label: ['Already used on this site — pick another label'] });
+  new AppError(409, `This site already has an access point labelled ${label ?? 'that'}.`, {
+    label: ['Already used on this site — pick another label'],
+  });

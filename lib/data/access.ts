@@ -2,7 +2,22 @@ import 'server-only';
 import type { Model, ModelStatic, WhereOptions } from 'sequelize';
 import type { SessionUser } from '@/lib/auth/session';
 import { idOf } from '@/lib/server/http';
-import { AccessPoint, ChecklistTemplate, Crew, Customer, Install, Invoice, Job, Packer, Repair, ResinKit, ResinSystem, Segment, Site, User } from '@/models';
+import {
+  AccessPoint,
+  ChecklistTemplate,
+  Crew,
+  Customer,
+  Install,
+  Invoice,
+  Job,
+  Packer,
+  Repair,
+  ResinKit,
+  ResinSystem,
+  Segment,
+  Site,
+  User,
+} from '@/models';
 import { notFound } from '@/lib/server/errors';
 
 // Authorization comes before validation: a handler that reads a body for one row first makes sure the row is
@@ -29,10 +44,17 @@ const MODELS = {
 export type OwnRowKind = keyof typeof MODELS;
 
 /** The `[id]` of the route when it names a row of the caller's company; 404 otherwise (malformed ids too). */
-export async function ownRowId(user: SessionUser, kind: OwnRowKind, params: Promise<Record<string, string>>, what: string): Promise<string> {
+export async function ownRowId(
+  user: SessionUser,
+  kind: OwnRowKind,
+  params: Promise<Record<string, string>>,
+  what: string,
+): Promise<string> {
   const id = await idOf(params, what);
   const model = MODELS[kind] as unknown as ModelStatic<Model>;
-  const row = await model.unscoped().findOne({ where: { id, companyId: user.companyId } as WhereOptions, attributes: ['id'] });
+  const row = await model
+    .unscoped()
+    .findOne({ where: { id, companyId: user.companyId } as WhereOptions, attributes: ['id'] });
   if (!row) throw notFound(what);
   return id;
 }

@@ -11,7 +11,14 @@ import { mayWorkOn } from '@/lib/install/access';
 import { isClosedInstall } from '@/lib/install/record-rules';
 import { makeThumbnail, sniffType } from '@/lib/storage/inspect';
 import {
-  ALLOWED_SUMMARY, PENDING_UPLOAD_MAX_AGE_MS, SNIFF_BYTES, allowedType, formatBytes, objectKey, thumbnailKey, uploadRefusal,
+  ALLOWED_SUMMARY,
+  PENDING_UPLOAD_MAX_AGE_MS,
+  SNIFF_BYTES,
+  allowedType,
+  formatBytes,
+  objectKey,
+  thumbnailKey,
+  uploadRefusal,
 } from '@/lib/storage/limits';
 import { deleteObjects, headObject, presignUpload, putObject, readObject, signedDownloadUrl } from '@/lib/storage/s3';
 import type { AttachmentListQuery, UploadRequest } from '@/lib/validation/attachments';
@@ -49,7 +56,10 @@ export async function requestUpload(user: SessionUser, input: UploadRequest) {
     uploadedById: user.id,
     status: 'pending',
   });
-  return { attachment: { id, status: 'pending' as const }, upload: await presignUpload(storageKey, input.contentType, input.byteSize) };
+  return {
+    attachment: { id, status: 'pending' as const },
+    upload: await presignUpload(storageKey, input.contentType, input.byteSize),
+  };
 }
 
 export type CompleteUploadResponse = Awaited<ReturnType<typeof completeUpload>>;
@@ -61,21 +71,32 @@ export type CompleteUploadResponse = Awaited<ReturnType<typeof completeUpload>>;
 export async function completeUpload(user: SessionUser, id: string) {
   const row = await Attachment.findOne({ where: { id, companyId: user.companyId } });
   if (!row) throw notFound('Attachment');
-  if (!isDeskRole(user.role) && row.uploadedById !== user.id) throw forbidden('Only whoever uploaded the file can complete it.');
+  if (!isDeskRole(user.role) && row.uploadedById !== user.id)
+    throw forbidden('Only whoever uploaded the file can complete it.');
   if (row.status === 'ready') return itemOf(user, row.get({ plain: true }), null);
   // An upload asked for before approval and finished after it would slip into the customer's report.
-  if (row.installId) refuseClosedInstall((await Install.findOne({ where: { id: row.installId, companyId: user.companyId }, attributes: ['status'] }))?.status);
+  if (row.installId)
+    refuseClosedInstall(
+      (await Install.findOne({ where: { id: row.installId, companyId: user.companyId }, attributes: ['status'] }))
+        ?.status,
+    );
 
   const head = await headObject(row.storageKey);
   if (!head) throw new AppError(409, 'The upload was not found: send the file first, then complete it.');
   if (head.byteSize !== row.byteSize) {
-    await refuse(row, `The file that arrived is ${formatBytes(head.byteSize)}, not the ${formatBytes(row.byteSize)} declared. Nothing was kept; upload it again.`);
+    await refuse(
+      row,
+      `The file that arrived is ${formatBytes(head.byteSize)}, not the ${formatBytes(row.byteSize)} declared. Nothing was kept; upload it again.`,
+    );
   }
   const sniffed = await sniffType(await readObject(row.storageKey, SNIFF_BYTES));
   const type = sniffed && allowedType(sniffed.mime);
   if (!sniffed || !type) {
     const what = sniffed ? `a ${sniffed.ext.toUpperCase()} file` : 'not an image or video we can read';
-    await refuse(row, `${row.originalName ?? 'This file'} is ${what}, whatever its name says. Send ${ALLOWED_SUMMARY}. Nothing was kept.`);
+    await refuse(
+      row,
+      `${row.originalName ?? 'This file'} is ${what}, whatever its name says. Send ${ALLOWED_SUMMARY}. Nothing was kept.`,
+    );
   }
   const tooLarge = uploadRefusal(type!.mime, head.byteSize);
   if (tooLarge) await refuse(row, `${tooLarge} Nothing was kept.`);
@@ -86,7 +107,10 @@ export async function completeUpload(user: SessionUser, id: string) {
     try {
       made = await makeThumbnail(await readObject(row.storageKey));
     } catch {
-      await refuse(row, `${row.originalName ?? 'This image'} could not be read as a ${type!.name} image (damaged or cut short). Nothing was kept.`);
+      await refuse(
+        row,
+        `${row.originalName ?? 'This image'} could not be read as a ${type!.name} image (damaged or cut short). Nothing was kept.`,
+      );
     }
     const key = thumbnailKey(row.companyId, row.jobId!, row.id);
     await putObject(key, made!.thumbnail, 'image/webp');
@@ -94,14 +118,38 @@ export async function completeUpload(user: SessionUser, id: string) {
   }
 
   const ready = await sequelize.transaction(async (transaction) => {
-    const changes = { status: 'ready' as const, contentType: type!.mime, byteSize: head.byteSize, thumbnailKey: picture?.thumbnailKey ?? null, width: picture?.width ?? null, height: picture?.height ?? null };
+    const changes = {
+      status: 'ready' as const,
+      contentType: type!.mime,
+      byteSize: head.byteSize,
+      thumbnailKey: picture?.thumbnailKey ?? null,
+      width: picture?.width ?? null,
+      height: picture?.height ?? null,
+    };
     // Only a pending row: a second complete racing this one changes nothing.
-    const [count] = await Attachment.update(changes, { where: { id: row.id, companyId: user.companyId, status: 'pending' }, transaction });
+    const [count] = await Attachment.update(changes, {
+      where: { id: row.id, companyId: user.companyId, status: 'pending' },
+      transaction,
+    });
     if (count === 1) {
-      await recordAudit(user, {
-        action: 'upload', entityType: ENTITY, entityId: row.id,
-        changes: { kind: row.kind, originalName: row.originalName, contentType: type!.mime, byteSize: head.byteSize, repairId: row.repairId, installId: row.installId, jobId: row.jobId },
-      }, transaction);
+      await recordAudit(
+        user,
+        {
+          action: 'upload',
+          entityType: ENTITY,
+          entityId: row.id,
+          changes: {
+            kind: row.kind,
+            originalName: row.originalName,
+            contentType: type!.mime,
+            byteSize: head.byteSize,
+            repairId: row.repairId,
+            installId: row.installId,
+            jobId: row.jobId,
+          },
+        },
+        transaction,
+      );
     }
     return Attachment.findOne({ where: { id: row.id, companyId: user.companyId }, transaction });
   });
@@ -114,18 +162,28 @@ export type AttachmentListResponse = Awaited<ReturnType<typeof listAttachments>>
 /** The ready evidence of a repair, an install or a job, each with short-lived links to the file and its thumbnail. */
 export async function listAttachments(user: SessionUser, query: AttachmentListQuery) {
   await targetOf(user, query);
-  const where = query.installId ? { installId: query.installId } : query.repairId ? { repairId: query.repairId } : { jobId: query.jobId! };
+  const where = query.installId
+    ? { installId: query.installId }
+    : query.repairId
+      ? { repairId: query.repairId }
+      : { jobId: query.jobId! };
   const rows = await Attachment.findAll({
     where: { ...where, companyId: user.companyId, status: 'ready' },
     include: [
       { model: User, as: 'uploadedBy', attributes: ['name'] },
       { model: Install, as: 'install', attributes: ['status'] },
     ],
-    order: [['createdAt', 'ASC'], ['id', 'ASC']],
+    order: [
+      ['createdAt', 'ASC'],
+      ['id', 'ASC'],
+    ],
   });
   const items = await Promise.all(
     rows.map((row) => {
-      const { uploadedBy, install, ...columns } = row.get({ plain: true }) as AttachmentRow & { uploadedBy?: { name: string } | null; install?: { status: string } | null };
+      const { uploadedBy, install, ...columns } = row.get({ plain: true }) as AttachmentRow & {
+        uploadedBy?: { name: string } | null;
+        install?: { status: string } | null;
+      };
       return itemOf(user, columns, install?.status ?? null, uploadedBy?.name ?? null);
     }),
   );
@@ -142,18 +200,36 @@ export async function deleteAttachment(user: SessionUser, id: string, reason?: s
     ],
   });
   if (!row) throw notFound('Attachment');
-  const { install, job } = row as Attachment & { install?: Pick<Install, 'status' | 'crewId'> | null; job?: Pick<Job, 'crewId'> | null };
+  const { install, job } = row as Attachment & {
+    install?: Pick<Install, 'status' | 'crewId'> | null;
+    job?: Pick<Job, 'crewId'> | null;
+  };
   if (!isDeskRole(user.role)) {
     if (!mayWorkOn(user, [install?.crewId, job?.crewId])) throw forbidden('This file belongs to another crew’s job.');
     if (row.uploadedById !== user.id) throw forbidden('Only the office or whoever uploaded the file can remove it.');
-    if (install && LOCKED_INSTALL_STATUSES.includes(install.status)) throw new AppError(409, 'This install is signed off: ask the office to remove the file.');
+    if (install && LOCKED_INSTALL_STATUSES.includes(install.status))
+      throw new AppError(409, 'This install is signed off: ask the office to remove the file.');
   }
   await sequelize.transaction(async (transaction) => {
     await Attachment.destroy({ where: { id: row.id, companyId: user.companyId }, transaction });
-    await recordAudit(user, {
-      action: 'delete', entityType: ENTITY, entityId: row.id, reason,
-      changes: { kind: row.kind, originalName: row.originalName, caption: row.caption, repairId: row.repairId, installId: row.installId, jobId: row.jobId },
-    }, transaction);
+    await recordAudit(
+      user,
+      {
+        action: 'delete',
+        entityType: ENTITY,
+        entityId: row.id,
+        reason,
+        changes: {
+          kind: row.kind,
+          originalName: row.originalName,
+          caption: row.caption,
+          repairId: row.repairId,
+          installId: row.installId,
+          jobId: row.jobId,
+        },
+      },
+      transaction,
+    );
     // Last, inside the transaction: if storage fails the row stays and the delete can be tried again.
     await deleteObjects([row.storageKey, row.thumbnailKey]);
   });
@@ -169,12 +245,21 @@ export async function sweepPendingUploads(now = new Date(), maxAgeMs = PENDING_U
   const cutoff = new Date(now.getTime() - maxAgeMs);
   let swept = 0;
   for (;;) {
-    const stale = await Attachment.findAll({ where: { status: 'pending', createdAt: { [Op.lt]: cutoff } }, order: [['createdAt', 'ASC']], limit: SWEEP_BATCH });
+    const stale = await Attachment.findAll({
+      where: { status: 'pending', createdAt: { [Op.lt]: cutoff } },
+      order: [['createdAt', 'ASC']],
+      limit: SWEEP_BATCH,
+    });
     const before = swept;
     for (const row of stale) {
       // Locked and still pending, or skipped: a completion racing the sweep wins, and a second sweeper passes by.
       swept += await sequelize.transaction(async (transaction) => {
-        const locked = await Attachment.findOne({ where: { id: row.id, status: 'pending' }, lock: transaction.LOCK.UPDATE, skipLocked: true, transaction });
+        const locked = await Attachment.findOne({
+          where: { id: row.id, status: 'pending' },
+          lock: transaction.LOCK.UPDATE,
+          skipLocked: true,
+          transaction,
+        });
         if (!locked) return 0;
         await deleteObjects([locked.storageKey, locked.thumbnailKey]);
         return Attachment.destroy({ where: { id: locked.id }, transaction });
@@ -189,21 +274,33 @@ const SWEEP_BATCH = 200;
 type Target = { jobId: string; repairId: string | null; installId: string | null; installStatus: string | null };
 
 /** The job a repair, install or job id names, if the caller's company owns it (404) and their crew works it (403). */
-async function targetOf(user: SessionUser, ref: { repairId?: string; installId?: string; jobId?: string }): Promise<Target> {
+async function targetOf(
+  user: SessionUser,
+  ref: { repairId?: string; installId?: string; jobId?: string },
+): Promise<Target> {
   let target: Target;
   let crewIds: (string | null)[];
   if (ref.installId) {
-    const install = await Install.findOne({ where: { id: ref.installId, companyId: user.companyId }, include: [{ model: Job, as: 'job', attributes: ['crewId'] }] });
+    const install = await Install.findOne({
+      where: { id: ref.installId, companyId: user.companyId },
+      include: [{ model: Job, as: 'job', attributes: ['crewId'] }],
+    });
     if (!install) throw notFound('Install');
     target = { jobId: install.jobId, repairId: install.repairId, installId: install.id, installStatus: install.status };
     crewIds = [install.crewId ?? null, (install as Install & { job?: Pick<Job, 'crewId'> }).job?.crewId ?? null];
   } else if (ref.repairId) {
-    const repair = await Repair.findOne({ where: { id: ref.repairId, companyId: user.companyId }, include: [{ model: Job, as: 'job', attributes: ['crewId'] }] });
+    const repair = await Repair.findOne({
+      where: { id: ref.repairId, companyId: user.companyId },
+      include: [{ model: Job, as: 'job', attributes: ['crewId'] }],
+    });
     if (!repair) throw notFound('Repair');
     target = { jobId: repair.jobId, repairId: repair.id, installId: null, installStatus: null };
     crewIds = [(repair as Repair & { job?: Pick<Job, 'crewId'> }).job?.crewId ?? null];
   } else {
-    const job = await Job.findOne({ where: { id: ref.jobId!, companyId: user.companyId }, attributes: ['id', 'crewId'] });
+    const job = await Job.findOne({
+      where: { id: ref.jobId!, companyId: user.companyId },
+      attributes: ['id', 'crewId'],
+    });
     if (!job) throw notFound('Job');
     target = { jobId: job.id, repairId: null, installId: null, installStatus: null };
     crewIds = [job.crewId ?? null];
@@ -214,7 +311,8 @@ async function targetOf(user: SessionUser, ref: { repairId?: string; installId?:
 
 /** An approved or abandoned install's evidence is closed: nothing new is added to it (409). */
 function refuseClosedInstall(status: string | null | undefined) {
-  if (status && isClosedInstall(status)) throw new AppError(409, `This install is closed (${status}): no more files can be added to it.`);
+  if (status && isClosedInstall(status))
+    throw new AppError(409, `This install is closed (${status}): no more files can be added to it.`);
 }
 
 /** Deletes what arrived and the row, then answers 422: a refused upload leaves nothing behind. */
@@ -224,7 +322,12 @@ async function refuse(row: Attachment, message: string): Promise<never> {
   throw new AppError(422, message);
 }
 
-async function itemOf(user: SessionUser, row: AttachmentRow, installStatus: string | null, uploadedByName: string | null = null) {
+async function itemOf(
+  user: SessionUser,
+  row: AttachmentRow,
+  installStatus: string | null,
+  uploadedByName: string | null = null,
+) {
   const [url, thumbnailUrl] = await Promise.all([
     signedDownloadUrl(row.storageKey, row.contentType),
     row.thumbnailKey ? signedDownloadUrl(row.thumbnailKey, 'image/webp') : null,

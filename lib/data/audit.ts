@@ -11,7 +11,9 @@ export async function listAudit(user: SessionUser, entityType: string, entityId:
     order: [['createdAt', 'DESC']],
     limit,
   });
-  return rows.map((row) => row.get({ plain: true }) as InferAttributes<AuditEntry> & { user: { id: string; name: string } | null });
+  return rows.map(
+    (row) => row.get({ plain: true }) as InferAttributes<AuditEntry> & { user: { id: string; name: string } | null },
+  );
 }
 
 type Audit = {

@@ -26,10 +26,29 @@ export type CrewListResponse = Awaited<ReturnType<typeof listCrews>>;
 
 /** A page of crews, each with its members. */
 export async function listCrews(user: SessionUser, query: CrewListQuery, exportAll = false) {
-  const where = allOf({ companyId: user.companyId }, archivedWhere(query.archived), searchWhere(query.q, ['name']), visibleCrews(user));
-  const { rows, count } = await Crew.findAndCountAll({ where, order: [[query.sort, query.dir.toUpperCase()], ['id', 'ASC']], ...windowOf(query, exportAll) });
-  const members = await membersOf(user, rows.map((row) => row.id));
-  return pageOf(rows.map((row) => ({ ...row.get({ plain: true }), members: members.get(row.id) ?? [] })), count, query);
+  const where = allOf(
+    { companyId: user.companyId },
+    archivedWhere(query.archived),
+    searchWhere(query.q, ['name']),
+    visibleCrews(user),
+  );
+  const { rows, count } = await Crew.findAndCountAll({
+    where,
+    order: [
+      [query.sort, query.dir.toUpperCase()],
+      ['id', 'ASC'],
+    ],
+    ...windowOf(query, exportAll),
+  });
+  const members = await membersOf(
+    user,
+    rows.map((row) => row.id),
+  );
+  return pageOf(
+    rows.map((row) => ({ ...row.get({ plain: true }), members: members.get(row.id) ?? [] })),
+    count,
+    query,
+  );
 }
 
 export type CrewResponse = Awaited<ReturnType<typeof getCrew>>;
@@ -45,7 +64,11 @@ export async function getCrew(user: SessionUser, id: string) {
 /** The people who can be put on a crew: the company's active foremen and technicians. */
 export async function listCrewCandidates(user: SessionUser) {
   assertAdmin(user);
-  const rows = await User.findAll({ where: { companyId: user.companyId, role: { [Op.in]: [...FIELD_ROLES] }, active: true }, attributes: ['id', 'name', 'role', 'active'], order: [['name', 'ASC']] });
+  const rows = await User.findAll({
+    where: { companyId: user.companyId, role: { [Op.in]: [...FIELD_ROLES] }, active: true },
+    attributes: ['id', 'name', 'role', 'active'],
+    order: [['name', 'ASC']],
+  });
   return rows.map((row) => row.get({ plain: true }) as Member);
 }
 
@@ -70,7 +93,11 @@ export async function updateCrew(user: SessionUser, id: string, patch: z.output<
       const restore = archived === false && crew.archivedAt !== null;
       if (Object.keys(changes).length || restore) {
         await crew.update({ ...fields, ...(restore ? { archivedAt: null } : {}) }, { transaction });
-        await recordAudit(user, { action: restore ? 'restore' : 'update', entityType: ENTITY, entityId: id, changes }, transaction);
+        await recordAudit(
+          user,
+          { action: restore ? 'restore' : 'update', entityType: ENTITY, entityId: id, changes },
+          transaction,
+        );
       }
       return crew.get({ plain: true });
     }),
@@ -83,9 +110,17 @@ export async function archiveCrew(user: SessionUser, id: string) {
   return sequelize.transaction(async (transaction) => {
     const crew = await lockCrew(user, id, transaction);
     const where = { crewId: id, companyId: user.companyId };
-    const [jobs, installs] = await Promise.all([Job.count({ where, transaction }), Install.count({ where, transaction })]);
+    const [jobs, installs] = await Promise.all([
+      Job.count({ where, transaction }),
+      Install.count({ where, transaction }),
+    ]);
     // A deleted crew's memberships go with it (ON DELETE CASCADE).
-    return archiveOrDelete(user, crew, { entityType: ENTITY, inUse: jobs + installs > 0, summary: { name: crew.name } }, transaction);
+    return archiveOrDelete(
+      user,
+      crew,
+      { entityType: ENTITY, inUse: jobs + installs > 0, summary: { name: crew.name } },
+      transaction,
+    );
   });
 }
 
@@ -98,29 +133,53 @@ export async function setCrewMembers(user: SessionUser, id: string, userIds: str
   return sequelize.transaction(async (transaction) => {
     const crew = await lockCrew(user, id, transaction);
     if (crew.archivedAt) throw new AppError(409, 'This crew is archived: restore it before changing its members.');
-    const current = (await CrewMember.findAll({ where: { crewId: id, companyId: user.companyId }, attributes: ['userId'], transaction })).map((m) => m.userId);
-    const found = await User.findAll({ where: { id: { [Op.in]: userIds }, companyId: user.companyId }, attributes: ['id', 'name', 'role', 'active'], transaction });
+    const current = (
+      await CrewMember.findAll({
+        where: { crewId: id, companyId: user.companyId },
+        attributes: ['userId'],
+        transaction,
+      })
+    ).map((m) => m.userId);
+    const found = await User.findAll({
+      where: { id: { [Op.in]: userIds }, companyId: user.companyId },
+      attributes: ['id', 'name', 'role', 'active'],
+      transaction,
+    });
     const byId = new Map(found.map((row) => [row.id, row]));
     const refused = userIds.filter((userId) => {
       const row = byId.get(userId);
       return !row || !FIELD_ROLES.includes(row.role) || (!row.active && !current.includes(userId));
     });
     if (refused.length) {
-      throw new AppError(422, 'Only active foremen and technicians of this company can be on a crew.', { userIds: refused.map((userId) => `${userId} cannot be on a crew`) });
+      throw new AppError(422, 'Only active foremen and technicians of this company can be on a crew.', {
+        userIds: refused.map((userId) => `${userId} cannot be on a crew`),
+      });
     }
     const added = userIds.filter((userId) => !current.includes(userId));
     const removed = current.filter((userId) => !userIds.includes(userId));
     if (removed.length) await CrewMember.destroy({ where: { crewId: id, userId: { [Op.in]: removed } }, transaction });
-    if (added.length) await CrewMember.bulkCreate(added.map((userId) => ({ companyId: user.companyId, crewId: id, userId })), { transaction });
+    if (added.length)
+      await CrewMember.bulkCreate(
+        added.map((userId) => ({ companyId: user.companyId, crewId: id, userId })),
+        { transaction },
+      );
     if (added.length || removed.length) {
-      await recordAudit(user, { action: 'members', entityType: ENTITY, entityId: id, changes: { added, removed } }, transaction);
+      await recordAudit(
+        user,
+        { action: 'members', entityType: ENTITY, entityId: id, changes: { added, removed } },
+        transaction,
+      );
     }
     return { ...crew.get({ plain: true }), members: (await membersOf(user, [id], transaction)).get(id) ?? [] };
   });
 }
 
 async function lockCrew(user: SessionUser, id: string, transaction: Transaction) {
-  const crew = await Crew.findOne({ where: { id, companyId: user.companyId }, transaction, lock: transaction.LOCK.UPDATE });
+  const crew = await Crew.findOne({
+    where: { id, companyId: user.companyId },
+    transaction,
+    lock: transaction.LOCK.UPDATE,
+  });
   if (!crew) throw notFound('Crew');
   return crew;
 }
@@ -147,7 +206,10 @@ async function uniqueName<T>(write: () => Promise<T>): Promise<T> {
   try {
     return await write();
   } catch (error) {
-    if (error instanceof UniqueConstraintError) throw new AppError(409, 'There is already a crew of that name.', { name: ['There is already a crew of that name'] });
+    if (error instanceof UniqueConstraintError)
+      throw new AppError(409, 'There is already a crew of that name.', {
+        name: ['There is already a crew of that name'],
+      });
     throw error;
   }
 }

@@ -25,10 +25,17 @@ export async function listCustomers(user: SessionUser, query: CustomerListQuery,
   );
   const { rows, count } = await Customer.findAndCountAll({
     where,
-    order: [[query.sort, query.dir.toUpperCase()], ['id', 'ASC']],
+    order: [
+      [query.sort, query.dir.toUpperCase()],
+      ['id', 'ASC'],
+    ],
     ...windowOf(query, exportAll),
   });
-  return pageOf(rows.map((row) => row.get({ plain: true })), count, query);
+  return pageOf(
+    rows.map((row) => row.get({ plain: true })),
+    count,
+    query,
+  );
 }
 
 /** One customer with its sites; throws 404 when it is not the caller's to see. */
@@ -65,6 +72,11 @@ export async function archiveCustomer(user: SessionUser, id: string, reason?: st
       Site.count({ where: { customerId: id, companyId: user.companyId }, transaction }),
       Job.count({ where: { customerId: id, companyId: user.companyId }, transaction }),
     ]);
-    return archiveOrDelete(user, customer, { entityType: ENTITY, inUse: sites + jobs > 0, summary: { name: customer.name }, reason }, transaction);
+    return archiveOrDelete(
+      user,
+      customer,
+      { entityType: ENTITY, inUse: sites + jobs > 0, summary: { name: customer.name }, reason },
+      transaction,
+    );
   });
 }

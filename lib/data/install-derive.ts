@@ -3,7 +3,15 @@ import { QueryTypes, type Transaction } from 'sequelize';
 import { Install, InstallEvent, Packer, ResinKit, ResinSystem, sequelize } from '@/models';
 import type { SessionUser } from '@/lib/auth/session';
 import { resinClockSpec } from '@/lib/cure';
-import { deriveRow, emptyStoredFold, foldOfState, type DeriveMaterials, type DeriveSettings, type DerivedColumns, type StoredFold } from '@/lib/install/derived';
+import {
+  deriveRow,
+  emptyStoredFold,
+  foldOfState,
+  type DeriveMaterials,
+  type DeriveSettings,
+  type DerivedColumns,
+  type StoredFold,
+} from '@/lib/install/derived';
 import { deriveInstallState, type InstallConditions, type InstallState } from '@/lib/install/state';
 import type { UnitSystem } from '@/lib/units';
 
@@ -22,7 +30,8 @@ export const settingsOf = (company: CompanySettings): DeriveSettings => ({
 
 /** The kit, its resin system and the packer of recorded conditions, as the flags need them (null when unknown). */
 export async function loadMaterials(companyId: string, conditions: InstallConditions | null, t?: Transaction) {
-  if (!conditions) return { kit: null, materials: { resin: null, packer: null, resinKitExpiresOn: null } satisfies DeriveMaterials };
+  if (!conditions)
+    return { kit: null, materials: { resin: null, packer: null, resinKitExpiresOn: null } satisfies DeriveMaterials };
   const [kit, packer] = await Promise.all([
     ResinKit.findOne({
       where: { id: conditions.resinKitId, companyId },
@@ -30,7 +39,11 @@ export async function loadMaterials(companyId: string, conditions: InstallCondit
       include: [{ model: ResinSystem, as: 'resinSystem' }],
       transaction: t,
     }),
-    Packer.findOne({ where: { id: conditions.packerId, companyId }, attributes: ['minPressureKpa', 'maxPressureKpa'], transaction: t }),
+    Packer.findOne({
+      where: { id: conditions.packerId, companyId },
+      attributes: ['minPressureKpa', 'maxPressureKpa'],
+      transaction: t,
+    }),
   ]);
   const resin = (kit as (ResinKit & { resinSystem?: ResinSystem }) | null)?.resinSystem;
   const materials: DeriveMaterials = {
@@ -50,7 +63,12 @@ export type Rederived = {
 };
 
 /** The install's state from its whole log (corrections applied), with its row's derived columns. */
-export async function rederive(companyId: string, installId: string, settings: DeriveSettings, t: Transaction): Promise<Rederived> {
+export async function rederive(
+  companyId: string,
+  installId: string,
+  settings: DeriveSettings,
+  t: Transaction,
+): Promise<Rederived> {
   const events = await InstallEvent.findAll({ where: { installId, companyId }, transaction: t });
   const state = deriveInstallState(events.map((e) => e.get({ plain: true })));
   const { kit, materials } = await loadMaterials(companyId, state.conditions, t);
@@ -75,7 +93,11 @@ export async function ensureDerived(user: Pick<SessionUser, 'companyId'>, settin
   );
   for (const { id } of rows) {
     await sequelize.transaction(async (t) => {
-      const install = await Install.findOne({ where: { id, companyId: user.companyId }, lock: t.LOCK.UPDATE, transaction: t });
+      const install = await Install.findOne({
+        where: { id, companyId: user.companyId },
+        lock: t.LOCK.UPDATE,
+        transaction: t,
+      });
       if (!install || install.derivedAt !== null) return;
       const derived = await rederive(user.companyId, id, settings, t);
       await install.update(rowOf(derived), { transaction: t });
@@ -98,7 +120,8 @@ export const rowOf = (derived: Rederived) => ({
  * - late-inflate: mixed, not inflated, and the inflate-by time has passed;
  * - expired-resin: not mixed yet and the kit's last day (read in UTC, as lib/cure/expiry.ts) is before today.
  */
-export const lateInflateNowSql = (i = 'i') => `(${i}.mixed_at IS NOT NULL AND ${i}.inflated_at IS NULL AND ${i}.inflate_by < now())`;
+export const lateInflateNowSql = (i = 'i') =>
+  `(${i}.mixed_at IS NOT NULL AND ${i}.inflated_at IS NULL AND ${i}.inflate_by < now())`;
 export const expiredNowSql = (i = 'i', k = 'k') =>
   `(${i}.mixed_at IS NULL AND (${i}.derived_fold->>'clockOk')::boolean AND ${k}.expires_on < (now() AT TIME ZONE 'UTC')::date)`;
 

@@ -5,7 +5,14 @@ import { AuditEntry, Install, InstallEvent, Job, Packer, Repair, ResinKit, Resin
 import type { InstallAccess, SessionUser } from '@/lib/auth/session';
 import { AppError, forbidden, notFound } from '@/lib/server/errors';
 import { mayDecide, mayWorkOn } from '@/lib/install/access';
-import { deriveRow, foldEvent, foldsInOrder, stateOfFold, type DeriveSettings, type StoredFold } from '@/lib/install/derived';
+import {
+  deriveRow,
+  foldEvent,
+  foldsInOrder,
+  stateOfFold,
+  type DeriveSettings,
+  type StoredFold,
+} from '@/lib/install/derived';
 import { correctsDecision, deviceTimeProblem, isClosedInstall } from '@/lib/install/record-rules';
 import { isSameEvent } from '@/lib/install/same-event';
 import { correctionTarget, orderProblem, type InstallState } from '@/lib/install/state';
@@ -33,7 +40,10 @@ export type TapContext = { install: InstallAccess | null };
  * of log order re-derives from the whole log (lib/data/install-derive.ts).
  */
 export async function recordEvent(
-  user: SessionUser, installId: string, input: unknown, context?: TapContext,
+  user: SessionUser,
+  installId: string,
+  input: unknown,
+  context?: TapContext,
 ): Promise<{ event: InstallEventRow; created: boolean }> {
   const receivedAt = new Date();
   if (context) checkAccess(user, context.install);
@@ -52,7 +62,8 @@ export async function recordEvent(
   // The company's settings are read once for the whole tap.
   const company = await getCompany(user);
   const today = dayInZone(new Date(), company.timeZone);
-  const run = () => sequelize.transaction((t) => recordInTransaction(user, installId, body, { today, receivedAt, company }, t));
+  const run = () =>
+    sequelize.transaction((t) => recordInTransaction(user, installId, body, { today, receivedAt, company }, t));
   try {
     return await run();
   } catch (error) {
@@ -65,10 +76,20 @@ export async function recordEvent(
 
 type TapRun = { today: string; receivedAt: Date; company: Company };
 
-async function recordInTransaction(user: SessionUser, installId: string, body: ParsedEvent, run: TapRun, t: Transaction) {
+async function recordInTransaction(
+  user: SessionUser,
+  installId: string,
+  body: ParsedEvent,
+  run: TapRun,
+  t: Transaction,
+) {
   const { today, receivedAt, company } = run;
   const settings = settingsOf(company);
-  const install = await Install.findOne({ where: { id: installId, companyId: user.companyId }, lock: t.LOCK.UPDATE, transaction: t });
+  const install = await Install.findOne({
+    where: { id: installId, companyId: user.companyId },
+    lock: t.LOCK.UPDATE,
+    transaction: t,
+  });
   if (!install) throw new AppError(404, 'Install was not found.');
 
   // Indexed reads only: the tap's own id (a replay?) and, for a correction, the event it names.
@@ -89,15 +110,20 @@ async function recordInTransaction(user: SessionUser, installId: string, body: P
     throw new AppError(409, `This install is closed (${install.status}): nothing more can be recorded on it.`);
   }
   checkDeviceTimes(body, receivedAt);
-  if (body.type === 'correction' && !mayDecide(user) && correctsDecision(namedOriginal?.type, correctionChanges(body.payload))) {
+  if (
+    body.type === 'correction' &&
+    !mayDecide(user) &&
+    correctsDecision(namedOriginal?.type, correctionChanges(body.payload))
+  ) {
     throw forbidden('Only the foreman can correct a go / no-go decision or a sign-off.');
   }
 
   // The state before this tap: the whole log for a correction (it may change anything), else the row's fold
   // (derived from the log first when the row never was).
-  let stored = body.type === 'correction' || !install.derivedFold || install.derivedAt === null
-    ? await rederive(user.companyId, installId, settings, t)
-    : null;
+  let stored =
+    body.type === 'correction' || !install.derivedFold || install.derivedAt === null
+      ? await rederive(user.companyId, installId, settings, t)
+      : null;
   const fold = stored?.fold ?? install.derivedFold!;
   const state = stored?.state ?? stateOfFold(fold);
   const target = body.type === 'correction' ? correctionTarget(state, body.correctsEventId) : undefined;
@@ -143,12 +169,26 @@ async function recordInTransaction(user: SessionUser, installId: string, body: P
   return { event: plainEvent, created: true };
 }
 
-type Next = { state: InstallState; kit: { id: string; resinSystemId: string } | null; derived: Record<string, unknown> };
+type Next = {
+  state: InstallState;
+  kit: { id: string; resinSystemId: string } | null;
+  derived: Record<string, unknown>;
+};
 
 /** The state after one tap in log order: its event folded into the stored fold; materials re-read if it names them. */
-async function foldIn(user: SessionUser, install: Install, fold: StoredFold, event: InstallEventRow, settings: DeriveSettings, t: Transaction): Promise<Next> {
+async function foldIn(
+  user: SessionUser,
+  install: Install,
+  fold: StoredFold,
+  event: InstallEventRow,
+  settings: DeriveSettings,
+  t: Transaction,
+): Promise<Next> {
   let folded = foldEvent(fold, event);
-  let kit = install.resinKitId && install.resinSystemId ? { id: install.resinKitId, resinSystemId: install.resinSystemId } : null;
+  let kit =
+    install.resinKitId && install.resinSystemId
+      ? { id: install.resinKitId, resinSystemId: install.resinSystemId }
+      : null;
   if (event.type === 'conditions_recorded') {
     const loaded = await loadMaterials(user.companyId, stateOfFold(folded).conditions, t);
     folded = { ...folded, materials: loaded.materials };
@@ -190,15 +230,25 @@ async function updateSummary(user: SessionUser, install: Install, next: Next, bo
   );
   if (!firstEvent && !signedOff) return;
 
-  const job = await Job.findOne({ where: { id: install.jobId, companyId: user.companyId }, lock: t.LOCK.UPDATE, transaction: t });
+  const job = await Job.findOne({
+    where: { id: install.jobId, companyId: user.companyId },
+    lock: t.LOCK.UPDATE,
+    transaction: t,
+  });
   if (!job) return;
   if (firstEvent && ['draft', 'scheduled', 'sent_back', 'awaiting_review'].includes(job.status)) {
     await job.update({ status: 'in_progress' }, { transaction: t });
   }
   if (signedOff) {
-    await Repair.update({ status: 'installed' }, { where: { id: install.repairId, companyId: user.companyId }, transaction: t });
+    await Repair.update(
+      { status: 'installed' },
+      { where: { id: install.repairId, companyId: user.companyId }, transaction: t },
+    );
     // A resubmitted install (sent back, signed off again) puts its job back in the queue the same way.
-    if ((job.status === 'in_progress' || job.status === 'sent_back') && (await allRepairsAwaitReview(user, job.id, t))) {
+    if (
+      (job.status === 'in_progress' || job.status === 'sent_back') &&
+      (await allRepairsAwaitReview(user, job.id, t))
+    ) {
       await job.update({ status: 'awaiting_review' }, { transaction: t });
     }
   }
@@ -208,7 +258,10 @@ async function updateSummary(user: SessionUser, install: Install, next: Next, bo
 async function namedEvent(user: SessionUser, installId: string, ref: string, t: Transaction) {
   const where = { companyId: user.companyId, installId };
   const byId = isUuid(ref) ? await InstallEvent.findOne({ where: { ...where, id: ref }, transaction: t }) : null;
-  return byId ?? (isUuid(ref) ? await InstallEvent.findOne({ where: { ...where, clientEventId: ref }, transaction: t }) : null);
+  return (
+    byId ??
+    (isUuid(ref) ? await InstallEvent.findOne({ where: { ...where, clientEventId: ref }, transaction: t }) : null)
+  );
 }
 
 /** 404 for an install the company does not have, 403 for a field user of another crew (as `findInstallFor`). */
@@ -221,8 +274,15 @@ const isUuid = (value: string) => /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]
 
 /** True when the latest install of every live repair of the job is signed off (or already approved). */
 async function allRepairsAwaitReview(user: SessionUser, jobId: string, t: Transaction) {
-  const repairs = await Repair.findAll({ where: { jobId, companyId: user.companyId, status: { [Op.ne]: 'cancelled' } }, transaction: t });
-  const installs = await Install.findAll({ where: { jobId, companyId: user.companyId }, order: [['createdAt', 'DESC']], transaction: t });
+  const repairs = await Repair.findAll({
+    where: { jobId, companyId: user.companyId, status: { [Op.ne]: 'cancelled' } },
+    transaction: t,
+  });
+  const installs = await Install.findAll({
+    where: { jobId, companyId: user.companyId },
+    order: [['createdAt', 'DESC']],
+    transaction: t,
+  });
   return repairs.every((repair) => {
     const latest = installs.find((i) => i.repairId === repair.id);
     return latest !== undefined && (latest.status === 'awaiting_review' || latest.status === 'approved');
@@ -235,15 +295,28 @@ async function allRepairsAwaitReview(user: SessionUser, jobId: string, t: Transa
  * company's time zone; null skips it). Checked only when conditions are recorded or corrected, so
  * a kit that expires overnight does not stop the crew from finishing the install.
  */
-async function checkConditions(user: SessionUser, conditions: Record<string, unknown>, today: string | null, t: Transaction) {
+async function checkConditions(
+  user: SessionUser,
+  conditions: Record<string, unknown>,
+  today: string | null,
+  t: Transaction,
+) {
   const [kit, packer] = await Promise.all([
     ResinKit.findOne({ where: { id: String(conditions.resinKitId), companyId: user.companyId }, transaction: t }),
     Packer.findOne({ where: { id: String(conditions.packerId), companyId: user.companyId }, transaction: t }),
   ]);
-  if (!kit) throw new AppError(422, 'That resin kit was not found; choose one from the list.', { 'payload.resinKitId': ['Unknown resin kit'] });
-  if (!packer) throw new AppError(422, 'That packer was not found; choose one from the list.', { 'payload.packerId': ['Unknown packer'] });
+  if (!kit)
+    throw new AppError(422, 'That resin kit was not found; choose one from the list.', {
+      'payload.resinKitId': ['Unknown resin kit'],
+    });
+  if (!packer)
+    throw new AppError(422, 'That packer was not found; choose one from the list.', {
+      'payload.packerId': ['Unknown packer'],
+    });
   if (today !== null && kit.expiresOn < today) {
-    throw new AppError(422, `Resin kit lot ${kit.lot} expired on ${kit.expiresOn}; choose another kit`, { 'payload.resinKitId': ['Expired kit'] });
+    throw new AppError(422, `Resin kit lot ${kit.lot} expired on ${kit.expiresOn}; choose another kit`, {
+      'payload.resinKitId': ['Expired kit'],
+    });
   }
 }
 
@@ -251,7 +324,12 @@ async function checkConditions(user: SessionUser, conditions: Record<string, unk
  * Going on with the pipe outside the resin's rated range leaves the clock without a hold of its own: the
  * foreman's override must carry the hold time from the resin maker's sheet, which the countdown then uses.
  */
-async function checkMakerHold(user: SessionUser, state: InstallState, payload: Record<string, unknown>, t: Transaction) {
+async function checkMakerHold(
+  user: SessionUser,
+  state: InstallState,
+  payload: Record<string, unknown>,
+  t: Transaction,
+) {
   const pipeTempC = state.conditions?.pipeTempC;
   const goesOn = payload.go === true || typeof payload.overrideReason === 'string';
   if (!goesOn || typeof payload.makerHoldMin === 'number' || typeof pipeTempC !== 'number') return;
@@ -262,12 +340,22 @@ async function checkMakerHold(user: SessionUser, state: InstallState, payload: R
   });
   const resin = (kit as (ResinKit & { resinSystem?: ResinSystem }) | null)?.resinSystem;
   if (!resin || (pipeTempC >= resin.minTempC && pipeTempC <= resin.maxTempC)) return;
-  throw new AppError(422, "The pipe is outside the resin's rated range: going on needs the hold time from the resin maker's sheet.", {
-    'payload.makerHoldMin': ["Enter the hold time from the resin maker's sheet"],
-  });
+  throw new AppError(
+    422,
+    "The pipe is outside the resin's rated range: going on needs the hold time from the resin maker's sheet.",
+    {
+      'payload.makerHoldMin': ["Enter the hold time from the resin maker's sheet"],
+    },
+  );
 }
 
-async function writeAudit(user: SessionUser, install: Install, body: ParsedEvent, target: InstallState['log'][number] | undefined, t: Transaction) {
+async function writeAudit(
+  user: SessionUser,
+  install: Install,
+  body: ParsedEvent,
+  target: InstallState['log'][number] | undefined,
+  t: Transaction,
+) {
   const base = { companyId: user.companyId, userId: user.id };
   if (body.type === 'correction' && target) {
     const changes = correctionChanges(body.payload);
@@ -280,8 +368,12 @@ async function writeAudit(user: SessionUser, install: Install, body: ParsedEvent
         changes: {
           installId: install.id,
           type: target.type,
-          ...(typeof body.payload.deviceTime === 'string' ? { deviceTime: { from: target.deviceTime.toISOString(), to: body.payload.deviceTime } } : {}),
-          ...(Object.keys(changes).length ? { payload: { from: pick(target.payload, Object.keys(changes)), to: changes } } : {}),
+          ...(typeof body.payload.deviceTime === 'string'
+            ? { deviceTime: { from: target.deviceTime.toISOString(), to: body.payload.deviceTime } }
+            : {}),
+          ...(Object.keys(changes).length
+            ? { payload: { from: pick(target.payload, Object.keys(changes)), to: changes } }
+            : {}),
         },
         reason: String(body.payload.reason),
       },
@@ -290,13 +382,26 @@ async function writeAudit(user: SessionUser, install: Install, body: ParsedEvent
   }
   if (body.type === 'signed_off') {
     await AuditEntry.create(
-      { ...base, action: 'install.signed_off', entityType: 'install', entityId: install.id, changes: { status: { to: 'awaiting_review' }, name: body.payload.name } },
+      {
+        ...base,
+        action: 'install.signed_off',
+        entityType: 'install',
+        entityId: install.id,
+        changes: { status: { to: 'awaiting_review' }, name: body.payload.name },
+      },
       { transaction: t },
     );
   }
   if (body.type === 'go_decision' && typeof body.payload.overrideReason === 'string') {
     await AuditEntry.create(
-      { ...base, action: 'install.no_go_overridden', entityType: 'install', entityId: install.id, changes: { go: body.payload.go }, reason: body.payload.overrideReason },
+      {
+        ...base,
+        action: 'install.no_go_overridden',
+        entityType: 'install',
+        entityId: install.id,
+        changes: { go: body.payload.go },
+        reason: body.payload.overrideReason,
+      },
       { transaction: t },
     );
   }
@@ -338,4 +443,5 @@ function badRequest(error: z.ZodError, prefix?: string) {
 const correctionChanges = (payload: Record<string, unknown>) =>
   typeof payload.payload === 'object' && payload.payload !== null ? (payload.payload as Record<string, unknown>) : {};
 
-const pick = (from: Record<string, unknown>, keys: string[]) => Object.fromEntries(keys.map((k) => [k, from[k] ?? null]));
+const pick = (from: Record<string, unknown>, keys: string[]) =>
+  Object.fromEntries(keys.map((k) => [k, from[k] ?? null]));

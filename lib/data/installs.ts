@@ -1,7 +1,18 @@
 import 'server-only';
 import { UniqueConstraintError, type InferAttributes, type Model } from 'sequelize';
 import {
-  AccessPoint, ChecklistTemplate, Install, InstallEvent, Job, Packer, Repair, ResinKit, ResinSystem, Segment, Site, User,
+  AccessPoint,
+  ChecklistTemplate,
+  Install,
+  InstallEvent,
+  Job,
+  Packer,
+  Repair,
+  ResinKit,
+  ResinSystem,
+  Segment,
+  Site,
+  User,
 } from '@/models';
 import type { SessionUser } from '@/lib/auth/session';
 import { resinClockSpec } from '@/lib/cure';
@@ -26,15 +37,22 @@ export type InstallEventRow = Plain<InstallEvent>;
  * Starts an install of a repair. The id is made on the device, so a create that is retried after
  * a lost answer finds the first one (`created: false`) instead of making a second.
  */
-export async function createInstall(user: SessionUser, input: CreateInstallInput): Promise<{ install: InstallRow; created: boolean }> {
-  const repair = await Repair.findOne({ where: { id: input.repairId, companyId: user.companyId }, include: [{ model: Job, as: 'job' }] });
+export async function createInstall(
+  user: SessionUser,
+  input: CreateInstallInput,
+): Promise<{ install: InstallRow; created: boolean }> {
+  const repair = await Repair.findOne({
+    where: { id: input.repairId, companyId: user.companyId },
+    include: [{ model: Job, as: 'job' }],
+  });
   const job = (repair as (Repair & { job?: Job }) | null)?.job;
   if (!repair || !job) throw notFound('Repair');
   if (!mayWorkOn(user, [job.crewId])) throw forbidden('Only the crew assigned to this job can start an install on it.');
 
   const existing = await findExisting(user, input);
   if (existing) return { install: existing, created: false };
-  if (repair.status === 'cancelled' || job.status === 'cancelled') throw new AppError(422, 'This repair was cancelled: there is nothing to install.');
+  if (repair.status === 'cancelled' || job.status === 'cancelled')
+    throw new AppError(422, 'This repair was cancelled: there is nothing to install.');
 
   const checklist = await ChecklistTemplate.findOne({
     where: { companyId: user.companyId, active: true },
@@ -89,14 +107,26 @@ export async function getInstallView(user: SessionUser, id: string, now = new Da
     InstallEvent.findAll({
       where: { installId: install.id, companyId: user.companyId },
       include: [{ model: User, as: 'user', attributes: ['name'] }],
-      order: [['deviceTime', 'ASC'], ['receivedAt', 'ASC']],
+      order: [
+        ['deviceTime', 'ASC'],
+        ['receivedAt', 'ASC'],
+      ],
     }),
     ResinKit.findAll({
       where: { companyId: user.companyId, archivedAt: null },
       include: [{ model: ResinSystem, as: 'resinSystem', where: { archivedAt: null } }],
-      order: [['expiresOn', 'ASC'], ['lot', 'ASC']],
+      order: [
+        ['expiresOn', 'ASC'],
+        ['lot', 'ASC'],
+      ],
     }),
-    Packer.findAll({ where: { companyId: user.companyId, archivedAt: null }, order: [['minDiameterMm', 'ASC'], ['name', 'ASC']] }),
+    Packer.findAll({
+      where: { companyId: user.companyId, archivedAt: null },
+      order: [
+        ['minDiameterMm', 'ASC'],
+        ['name', 'ASC'],
+      ],
+    }),
   ]);
   if (!row) throw notFound('Install');
   const full = row.get({ plain: true }) as InstallDetail;
@@ -105,7 +135,9 @@ export async function getInstallView(user: SessionUser, id: string, now = new Da
   const { fromAccessPoint: segmentStart, ...segment } = repair.segment;
 
   const eventRows = events.map((event) => {
-    const { user: author, ...columns } = event.get({ plain: true }) as InstallEventRow & { user?: { name: string } | null };
+    const { user: author, ...columns } = event.get({ plain: true }) as InstallEventRow & {
+      user?: { name: string } | null;
+    };
     return { ...columns, userName: author?.name ?? null };
   });
   const state = deriveInstallState(eventRows);
@@ -122,7 +154,8 @@ export async function getInstallView(user: SessionUser, id: string, now = new Da
     now,
   });
   const chain = await redoChainOf(user, installColumns);
-  const patchLengthMm = repair.plannedPatchLengthMm ?? ruledPatchLength(repair.defectLengthMm, company.minOverlapPerEndMm);
+  const patchLengthMm =
+    repair.plannedPatchLengthMm ?? ruledPatchLength(repair.defectLengthMm, company.minOverlapPerEndMm);
 
   return {
     install: installColumns,
@@ -133,15 +166,28 @@ export async function getInstallView(user: SessionUser, id: string, now = new Da
     plan,
     flags,
     repair: { ...repairColumns, segment, accessPoint: fromAccessPoint ?? segmentStart ?? null },
-    job: { id: job.id, number: job.number, title: job.title, site: { addressLine: job.site.addressLine, city: job.site.city } },
+    job: {
+      id: job.id,
+      number: job.number,
+      title: job.title,
+      site: { addressLine: job.site.addressLine, city: job.site.city },
+    },
     resinSystem,
     resinKit,
     packer,
     options: {
-      resinKits: kits.map((kit) => ({ ...(kit.get({ plain: true }) as ResinKitWithSystem), expired: kit.expiresOn < today })),
+      resinKits: kits.map((kit) => ({
+        ...(kit.get({ plain: true }) as ResinKitWithSystem),
+        expired: kit.expiresOn < today,
+      })),
       patchLengthMm,
-      packers: patchLengthMm === null ? [] : packerFits(packers, segment.insideDiameterMm, patchLengthMm, company.unitSystem as UnitSystem),
-      checklist: checklistTemplate ? { id: checklistTemplate.id, name: checklistTemplate.name, items: checklistTemplate.items } : null,
+      packers:
+        patchLengthMm === null
+          ? []
+          : packerFits(packers, segment.insideDiameterMm, patchLengthMm, company.unitSystem as UnitSystem),
+      checklist: checklistTemplate
+        ? { id: checklistTemplate.id, name: checklistTemplate.name, items: checklistTemplate.items }
+        : null,
     },
     company: {
       unitSystem: company.unitSystem,
@@ -159,7 +205,10 @@ export async function getInstallView(user: SessionUser, id: string, now = new Da
  * outside the crew doing it gets 403. The crew of the job counts too, should the office reassign it.
  */
 export async function findInstallFor(user: SessionUser, id: string): Promise<Install> {
-  const install = await Install.findOne({ where: { id, companyId: user.companyId }, include: [{ model: Job, as: 'job', attributes: ['crewId'] }] });
+  const install = await Install.findOne({
+    where: { id, companyId: user.companyId },
+    include: [{ model: Job, as: 'job', attributes: ['crewId'] }],
+  });
   if (!install) throw notFound('Install');
   const job = (install as Install & { job?: Pick<Job, 'crewId'> }).job;
   if (!mayWorkOn(user, [install.crewId, job?.crewId])) throw forbidden('This install belongs to another crew.');
@@ -204,7 +253,12 @@ function packerFits(packers: Packer[], insideDiameterMm: number, patchLengthMm: 
   }));
   try {
     const fits = fittingPackers(fleet, { insideDiameterMm, patchLengthMm }, system);
-    return fleet.map((packer, i) => ({ ...packer, fits: fits[i].fits, endMarginEachMm: fits[i].endMarginEachMm, reasons: fits[i].reasons }));
+    return fleet.map((packer, i) => ({
+      ...packer,
+      fits: fits[i].fits,
+      endMarginEachMm: fits[i].endMarginEachMm,
+      reasons: fits[i].reasons,
+    }));
   } catch (error) {
     // A packer row or repair the sizing cannot read must not take the install screen down.
     if (error instanceof SizingInputError) return [];

@@ -32,7 +32,11 @@ export type JobDetail = Plain<Job> & {
 export type JobListResponse = Awaited<ReturnType<typeof listJobs>>;
 
 /** A page of the caller's jobs (field users: their crews' only), filtered and sorted as asked. */
-export async function listJobs(user: SessionUser, query: Omit<JobListQuery, 'archived'> & Partial<Pick<JobListQuery, 'archived'>>, exportAll = false) {
+export async function listJobs(
+  user: SessionUser,
+  query: Omit<JobListQuery, 'archived'> & Partial<Pick<JobListQuery, 'archived'>>,
+  exportAll = false,
+) {
   const where = allOf(
     { companyId: user.companyId },
     archivedWhere(query.archived ?? 'false'),
@@ -51,11 +55,18 @@ export async function listJobs(user: SessionUser, query: Omit<JobListQuery, 'arc
       { model: Crew, as: 'crew', attributes: ['id', 'name'] },
     ],
     // NULLS LAST keeps undated drafts out of the way whichever direction the office sorts.
-    order: [[query.sort, `${query.dir.toUpperCase()} NULLS LAST`], ['number', 'DESC']],
+    order: [
+      [query.sort, `${query.dir.toUpperCase()} NULLS LAST`],
+      ['number', 'DESC'],
+    ],
     ...windowOf(query, exportAll),
     distinct: true,
   });
-  return pageOf(rows.map((row) => row.get({ plain: true }) as JobListItem), count, query);
+  return pageOf(
+    rows.map((row) => row.get({ plain: true }) as JobListItem),
+    count,
+    query,
+  );
 }
 
 /** One job of the caller's (field users: of their crews) with its site, customer, crew and repairs; null when it is not theirs. */
@@ -98,13 +109,33 @@ export async function jobFormOptions(user: SessionUser) {
     Customer.findAll({
       where: { companyId: user.companyId, archivedAt: null },
       attributes: ['id', 'name'],
-      include: [{ model: Site, as: 'sites', attributes: ['id', 'name', 'addressLine', 'city'], where: { archivedAt: null }, required: false }],
-      order: [['name', 'ASC'], [{ model: Site, as: 'sites' }, 'name', 'ASC']],
+      include: [
+        {
+          model: Site,
+          as: 'sites',
+          attributes: ['id', 'name', 'addressLine', 'city'],
+          where: { archivedAt: null },
+          required: false,
+        },
+      ],
+      order: [
+        ['name', 'ASC'],
+        [{ model: Site, as: 'sites' }, 'name', 'ASC'],
+      ],
     }),
-    Crew.findAll({ where: { companyId: user.companyId, archivedAt: null }, attributes: ['id', 'name'], order: [['name', 'ASC']] }),
+    Crew.findAll({
+      where: { companyId: user.companyId, archivedAt: null },
+      attributes: ['id', 'name'],
+      order: [['name', 'ASC']],
+    }),
   ]);
   return {
-    customers: customers.map((c) => c.get({ plain: true }) as unknown as Pick<Plain<Customer>, 'id' | 'name'> & { sites: Pick<Plain<Site>, 'id' | 'name' | 'addressLine' | 'city'>[] }),
+    customers: customers.map(
+      (c) =>
+        c.get({ plain: true }) as unknown as Pick<Plain<Customer>, 'id' | 'name'> & {
+          sites: Pick<Plain<Site>, 'id' | 'name' | 'addressLine' | 'city'>[];
+        },
+    ),
     crews: crews.map((c) => ({ id: c.id, name: c.name })),
   };
 }
@@ -124,7 +155,11 @@ export async function createJob(user: SessionUser, input: z.output<typeof jobInp
     const number = await nextJobNumber(user.companyId, company.timeZone, transaction);
     const status = input.crewId && input.scheduledDate ? 'scheduled' : 'draft';
     const job = await Job.create({ ...input, companyId: user.companyId, number, status }, { transaction });
-    await recordAudit(user, { action: 'create', entityType: ENTITY, entityId: job.id, changes: { ...input, number, status } }, transaction);
+    await recordAudit(
+      user,
+      { action: 'create', entityType: ENTITY, entityId: job.id, changes: { ...input, number, status } },
+      transaction,
+    );
     return job.get({ plain: true });
   });
 }
@@ -136,7 +171,11 @@ export async function createJob(user: SessionUser, input: z.output<typeof jobInp
 export async function updateJob(user: SessionUser, id: string, patch: JobPatch) {
   assertOfficeWriter(user);
   return sequelize.transaction(async (transaction) => {
-    const job = await Job.findOne({ where: { id, companyId: user.companyId }, transaction, lock: transaction.LOCK.UPDATE });
+    const job = await Job.findOne({
+      where: { id, companyId: user.companyId },
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
     if (!job) throw notFound('Job');
     if (job.archivedAt) throw new AppError(409, 'This job is archived; it can no longer be changed.');
     const { status: requested, ...fields } = patch;
@@ -148,11 +187,17 @@ export async function updateJob(user: SessionUser, id: string, patch: JobPatch) 
     if (changes.customerId || changes.siteId) {
       await assertCustomerSite(user, fields.customerId ?? job.customerId, fields.siteId ?? job.siteId, transaction);
       if (await Repair.count({ where: { jobId: id }, transaction })) {
-        throw new AppError(409, 'This job already has repairs on its site: remove them before moving the job to another site.');
+        throw new AppError(
+          409,
+          'This job already has repairs on its site: remove them before moving the job to another site.',
+        );
       }
     }
     if ((changes.crewId || changes.scheduledDate) && !RESCHEDULABLE.includes(job.status)) {
-      throw new AppError(409, 'The crew and day can no longer be changed: the crew has started or the job is finished.');
+      throw new AppError(
+        409,
+        'The crew and day can no longer be changed: the crew has started or the job is finished.',
+      );
     }
     if (changes.crewId && fields.crewId) await assertCrew(user, fields.crewId, transaction);
 
@@ -161,7 +206,12 @@ export async function updateJob(user: SessionUser, id: string, patch: JobPatch) 
       scheduledDate: fields.scheduledDate === undefined ? job.scheduledDate : fields.scheduledDate,
       changed: Boolean(changes.crewId || changes.scheduledDate),
     });
-    if (!decision.ok) throw new AppError(decision.code, decision.message, decision.code === 422 ? { status: [decision.message] } : undefined);
+    if (!decision.ok)
+      throw new AppError(
+        decision.code,
+        decision.message,
+        decision.code === 422 ? { status: [decision.message] } : undefined,
+      );
     if (decision.status !== job.status) changes.status = { from: job.status, to: decision.status };
 
     if (Object.keys(changes).length) {
@@ -176,13 +226,22 @@ export async function updateJob(user: SessionUser, id: string, patch: JobPatch) 
 export async function archiveJob(user: SessionUser, id: string, reason?: string | null) {
   assertOfficeWriter(user);
   return sequelize.transaction(async (transaction) => {
-    const job = await Job.findOne({ where: { id, companyId: user.companyId }, transaction, lock: transaction.LOCK.UPDATE });
+    const job = await Job.findOne({
+      where: { id, companyId: user.companyId },
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
     if (!job) throw notFound('Job');
     const [repairs, installs] = await Promise.all([
       Repair.count({ where: { jobId: id, companyId: user.companyId }, transaction }),
       Install.count({ where: { jobId: id, companyId: user.companyId }, transaction }),
     ]);
-    return archiveOrDelete(user, job, { entityType: ENTITY, inUse: repairs + installs > 0, summary: { number: job.number }, reason }, transaction);
+    return archiveOrDelete(
+      user,
+      job,
+      { entityType: ENTITY, inUse: repairs + installs > 0, summary: { number: job.number }, reason },
+      transaction,
+    );
   });
 }
 

@@ -6,13 +6,21 @@ import type { ListQuery } from '@/lib/validation/list';
 export type Page<T> = { items: T[]; total: number; page: number; pageSize: number; pageCount: number };
 
 export function pageOf<T>(items: T[], total: number, query: Pick<ListQuery, 'page' | 'pageSize'>): Page<T> {
-  return { items, total, page: query.page, pageSize: query.pageSize, pageCount: Math.max(1, Math.ceil(total / query.pageSize)) };
+  return {
+    items,
+    total,
+    page: query.page,
+    pageSize: query.pageSize,
+    pageCount: Math.max(1, Math.ceil(total / query.pageSize)),
+  };
 }
 
 /** limit/offset for Sequelize; an export asks for every matching row (capped, so one request cannot eat the server). */
 export const EXPORT_LIMIT = 10_000;
 export function windowOf(query: Pick<ListQuery, 'page' | 'pageSize'>, exportAll = false) {
-  return exportAll ? { limit: EXPORT_LIMIT, offset: 0 } : { limit: query.pageSize, offset: (query.page - 1) * query.pageSize };
+  return exportAll
+    ? { limit: EXPORT_LIMIT, offset: 0 }
+    : { limit: query.pageSize, offset: (query.page - 1) * query.pageSize };
 }
 
 /** An ILIKE pattern that matches the text literally (%, _ and \ escaped). */
@@ -33,6 +41,9 @@ export function archivedWhere(archived: ListQuery['archived']): WhereOptions {
 
 /** Joins the parts of a where clause that are present. */
 export function allOf(...parts: (WhereOptions | undefined)[]): WhereOptions {
-  const present = parts.filter((part): part is WhereOptions => part !== undefined && Object.keys(part).length + Object.getOwnPropertySymbols(part).length > 0);
+  const present = parts.filter(
+    (part): part is WhereOptions =>
+      part !== undefined && Object.keys(part).length + Object.getOwnPropertySymbols(part).length > 0,
+  );
   return present.length === 1 ? present[0] : { [Op.and]: present };
 }

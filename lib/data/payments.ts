@@ -9,7 +9,11 @@ import { AppError } from '@/lib/server/errors';
 import { formatMoney } from '@/lib/invoice/money';
 import { stripeClient } from '@/lib/payments/stripe';
 
-const text = (max: number) => z.string().max(max).refine((value) => !value.includes('\u0000'));
+const text = (max: number) =>
+  z
+    .string()
+    .max(max)
+    .refine((value) => !value.includes('\u0000'));
 
 /** The fields of a completed checkout session we read, as our columns can hold them. */
 const completedSessionSchema = z.object({
@@ -32,14 +36,22 @@ const completedSessionSchema = z.object({
  */
 export async function startCheckout(companyId: string, jobId: string, returnUrl: string): Promise<string> {
   return sequelize.transaction(async (transaction) => {
-    const invoice = await Invoice.findOne({ where: { companyId, jobId, status: ['issued', 'paid'] }, transaction, lock: transaction.LOCK.UPDATE });
+    const invoice = await Invoice.findOne({
+      where: { companyId, jobId, status: ['issued', 'paid'] },
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
     if (!invoice) throw new AppError(404, 'There is no invoice to pay for this job.');
     if (invoice.status === 'paid') throw new AppError(409, `Invoice ${invoice.number} is already paid. Thank you.`);
     const successUrl = `${returnUrl}?paid=1`;
     const open = invoice.paymentSessionId ? await currentSession(invoice.paymentSessionId) : null;
-    if (open?.status === 'complete') throw new AppError(409, `A payment of invoice ${invoice.number} is being confirmed.`);
+    if (open?.status === 'complete')
+      throw new AppError(409, `A payment of invoice ${invoice.number} is being confirmed.`);
     if (open?.status === 'open') {
-      const same = open.amount_total === invoice.totalCents && open.currency === invoice.currency && open.success_url === successUrl;
+      const same =
+        open.amount_total === invoice.totalCents &&
+        open.currency === invoice.currency &&
+        open.success_url === successUrl;
       if (same && open.url) return open.url;
       await expireSession(open.id, invoice.number);
     }
@@ -76,11 +88,23 @@ export async function applyPaymentEvent(event: Stripe.Event): Promise<PaymentOut
   if (session.payment_status !== 'paid') return 'ignored';
   try {
     return await sequelize.transaction(async (transaction) => {
-      const invoice = await Invoice.findOne({ where: { id: invoiceId, companyId }, transaction, lock: transaction.LOCK.UPDATE });
+      const invoice = await Invoice.findOne({
+        where: { id: invoiceId, companyId },
+        transaction,
+        lock: transaction.LOCK.UPDATE,
+      });
       if (!invoice) return 'ignored';
       const problem = problemOf(invoice, session);
       await PaymentEvent.create(
-        { companyId, invoiceId, providerEventId: eventId, type: event.type, amountCents: session.amount_total ?? null, problem, payload: { session: session.id, currency: session.currency } },
+        {
+          companyId,
+          invoiceId,
+          providerEventId: eventId,
+          type: event.type,
+          amountCents: session.amount_total ?? null,
+          problem,
+          payload: { session: session.id, currency: session.currency },
+        },
         { transaction },
       );
       if (problem) {
@@ -89,7 +113,15 @@ export async function applyPaymentEvent(event: Stripe.Event): Promise<PaymentOut
       }
       await invoice.update({ status: 'paid', paidAt: new Date(), paidCents: session.amount_total }, { transaction });
       await AuditEntry.create(
-        { companyId, userId: null, action: 'paid', entityType: 'invoice', entityId: invoice.id, changes: { paidCents: session.amount_total, session: session.id }, reason: 'Paid online by the customer' },
+        {
+          companyId,
+          userId: null,
+          action: 'paid',
+          entityType: 'invoice',
+          entityId: invoice.id,
+          changes: { paidCents: session.amount_total, session: session.id },
+          reason: 'Paid online by the customer',
+        },
         { transaction },
       );
       return 'paid';
@@ -116,8 +148,13 @@ function problemOf(
 }
 
 /** The sentence of a payment alert, for the office. */
-function alertText(problem: PaymentProblem, invoice: Pick<Invoice, 'number' | 'status' | 'totalCents' | 'currency'>, paid: { amountCents: number | null; currency: string | null }) {
-  const amount = paid.amountCents === null ? 'an unknown amount' : formatMoney(paid.amountCents, paid.currency ?? invoice.currency);
+function alertText(
+  problem: PaymentProblem,
+  invoice: Pick<Invoice, 'number' | 'status' | 'totalCents' | 'currency'>,
+  paid: { amountCents: number | null; currency: string | null },
+) {
+  const amount =
+    paid.amountCents === null ? 'an unknown amount' : formatMoney(paid.amountCents, paid.currency ?? invoice.currency);
   const settle = 'refund it or settle it with the customer.';
   switch (problem) {
     case 'already_paid':
@@ -125,31 +162,79 @@ function alertText(problem: PaymentProblem, invoice: Pick<Invoice, 'number' | 's
     case 'not_open':
       return `A payment of ${amount} was received for invoice ${invoice.number} while it is ${invoice.status}; it was not applied: ${settle}`;
     case 'currency':
-      return `A payment of ${amount} in ${(paid.currency ?? '?').toUpperCase()} was received for invoice ${invoice.number}, billed in ${invoice.currency.toUpperCase()}; it was not applied: ${settle}`;
+      return (
+        `A payment of ${amount} in ${(paid.currency ?? '?').toUpperCase()} was received for invoice ${invoice.number}, billed in ` +
+        `${invoice.currency.toUpperCase()}; it was not applied: ${settle}`
+      );
     case 'amount':
-      return `A payment of ${amount} was received for invoice ${invoice.number}, which totals ${formatMoney(invoice.totalCents, invoice.currency)}; it was not applied: ${settle}`;
+      return (
+        `A payment of ${amount} was received for invoice ${invoice.number}, which totals ${formatMoney(invoice.totalCents, invoice.currency)}; it ` +
+        `was not applied: ${settle}`
+      );
   }
 }
 
 async function raiseAlert(invoice: Invoice, problem: PaymentProblem, session: PaidSession, transaction: Transaction) {
-  const text = alertText(problem, invoice, { amountCents: session.amount_total ?? null, currency: session.currency ?? null });
+  const text = alertText(problem, invoice, {
+    amountCents: session.amount_total ?? null,
+    currency: session.currency ?? null,
+  });
   await invoice.update({ paymentAlert: text, paymentAlertAt: new Date() }, { transaction });
-  const changes = { invoice: invoice.number, problem, amountCents: session.amount_total ?? null, currency: session.currency ?? null, session: session.id ?? null };
+  const changes = {
+    invoice: invoice.number,
+    problem,
+    amountCents: session.amount_total ?? null,
+    currency: session.currency ?? null,
+    session: session.id ?? null,
+  };
   // In the job's history (the job page) and the invoice's own.
-  for (const [entityType, entityId] of [['job', invoice.jobId], ['invoice', invoice.id]] as const) {
-    await AuditEntry.create({ companyId: invoice.companyId, userId: null, action: 'payment_mismatch', entityType, entityId, changes, reason: text }, { transaction });
+  for (const [entityType, entityId] of [
+    ['job', invoice.jobId],
+    ['invoice', invoice.id],
+  ] as const) {
+    await AuditEntry.create(
+      {
+        companyId: invoice.companyId,
+        userId: null,
+        action: 'payment_mismatch',
+        entityType,
+        entityId,
+        changes,
+        reason: text,
+      },
+      { transaction },
+    );
   }
 }
 
 async function createSession(invoice: Invoice, successUrl: string, cancelUrl: string, transaction: Transaction) {
-  const job = await Job.findOne({ where: { id: invoice.jobId, companyId: invoice.companyId }, attributes: ['id', 'customerId'], transaction });
-  const customer = job ? await Customer.findOne({ where: { id: job.customerId, companyId: invoice.companyId }, attributes: ['email'], transaction }) : null;
+  const job = await Job.findOne({
+    where: { id: invoice.jobId, companyId: invoice.companyId },
+    attributes: ['id', 'customerId'],
+    transaction,
+  });
+  const customer = job
+    ? await Customer.findOne({
+        where: { id: job.customerId, companyId: invoice.companyId },
+        attributes: ['email'],
+        transaction,
+      })
+    : null;
   return stripeClient().checkout.sessions.create({
     mode: 'payment',
     client_reference_id: invoice.id,
     customer_email: customer?.email ?? undefined,
     metadata: { invoiceId: invoice.id, companyId: invoice.companyId },
-    line_items: [{ quantity: 1, price_data: { currency: invoice.currency, unit_amount: invoice.totalCents, product_data: { name: `Invoice ${invoice.number}` } } }],
+    line_items: [
+      {
+        quantity: 1,
+        price_data: {
+          currency: invoice.currency,
+          unit_amount: invoice.totalCents,
+          product_data: { name: `Invoice ${invoice.number}` },
+        },
+      },
+    ],
     success_url: successUrl,
     cancel_url: cancelUrl,
   });
@@ -173,7 +258,8 @@ async function expireSession(id: string, invoiceNumber: string) {
     const status = (error as { statusCode?: number }).statusCode;
     if (status === 404) return;
     const now = await currentSession(id);
-    if (now?.status === 'complete') throw new AppError(409, `A payment of invoice ${invoiceNumber} is being confirmed.`);
+    if (now?.status === 'complete')
+      throw new AppError(409, `A payment of invoice ${invoiceNumber} is being confirmed.`);
     if (now?.status === 'expired') return;
     throw error;
   }

@@ -9,7 +9,10 @@ import { lockOwnRow, updateAudited } from './records';
 // no id in the request to point elsewhere.
 
 export async function getProfile(user: SessionUser) {
-  const row = await User.findOne({ where: { id: user.id, companyId: user.companyId }, attributes: ['id', 'name', 'email', 'role', 'locale'] });
+  const row = await User.findOne({
+    where: { id: user.id, companyId: user.companyId },
+    attributes: ['id', 'name', 'email', 'role', 'locale'],
+  });
   if (!row) throw new Error('The signed-in user has no row');
   return { id: row.id, name: row.name, email: row.email, role: row.role, locale: row.locale ?? null };
 }

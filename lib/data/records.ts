@@ -10,14 +10,30 @@ import type { SessionUser } from '@/lib/auth/session';
 type Row = Model & { id: string; get(options: { plain: true }): Record<string, unknown>; get(key: string): unknown };
 
 /** One of the company's rows, locked for a change in this transaction; 404 when missing or another company's. */
-export async function lockOwnRow<M extends Row>(model: ModelStatic<M>, user: SessionUser, id: string, what: string, transaction: Transaction): Promise<M> {
-  const row = await model.findOne({ where: { id, companyId: user.companyId } as WhereOptions, transaction, lock: transaction.LOCK.UPDATE });
+export async function lockOwnRow<M extends Row>(
+  model: ModelStatic<M>,
+  user: SessionUser,
+  id: string,
+  what: string,
+  transaction: Transaction,
+): Promise<M> {
+  const row = await model.findOne({
+    where: { id, companyId: user.companyId } as WhereOptions,
+    transaction,
+    lock: transaction.LOCK.UPDATE,
+  });
   if (!row) throw notFound(what);
   return row;
 }
 
 /** Writes the fields a PATCH really changes and audits them as { field: { from, to } }. */
-export async function updateAudited(user: SessionUser, row: Row, entityType: string, patch: Record<string, unknown>, transaction: Transaction) {
+export async function updateAudited(
+  user: SessionUser,
+  row: Row,
+  entityType: string,
+  patch: Record<string, unknown>,
+  transaction: Transaction,
+) {
   const changes = changedFields(row.get({ plain: true }), patch);
   if (Object.keys(changes).length) {
     await row.update(patch, { transaction });
@@ -27,7 +43,12 @@ export async function updateAudited(user: SessionUser, row: Row, entityType: str
 }
 
 /** Creates one of the company's records and audits it, in one transaction. */
-export async function createAudited<M extends Row>(user: SessionUser, model: ModelStatic<M>, entityType: string, values: Record<string, unknown>) {
+export async function createAudited<M extends Row>(
+  user: SessionUser,
+  model: ModelStatic<M>,
+  entityType: string,
+  values: Record<string, unknown>,
+) {
   return sequelize.transaction(async (transaction) => {
     const row = await model.create({ ...values, companyId: user.companyId } as never, { transaction });
     await recordAudit(user, { action: 'create', entityType, entityId: row.id, changes: values }, transaction);
@@ -43,7 +64,13 @@ export async function createAudited<M extends Row>(user: SessionUser, model: Mod
 export async function archiveOrDelete(
   user: SessionUser,
   row: Row,
-  { entityType, inUse, summary, reason, archive }: {
+  {
+    entityType,
+    inUse,
+    summary,
+    reason,
+    archive,
+  }: {
     entityType: string;
     inUse: boolean;
     summary: Record<string, unknown>;
@@ -57,7 +84,10 @@ export async function archiveOrDelete(
     await recordAudit(user, { action: 'delete', entityType, entityId: row.id, changes: summary, reason }, transaction);
     return { id: row.id, archived: false, deleted: true };
   }
-  const { values, isArchived } = archive ?? { values: { archivedAt: new Date() }, isArchived: row.get('archivedAt') != null };
+  const { values, isArchived } = archive ?? {
+    values: { archivedAt: new Date() },
+    isArchived: row.get('archivedAt') != null,
+  };
   if (!isArchived) {
     await row.update(values, { transaction });
     await recordAudit(user, { action: 'archive', entityType, entityId: row.id, reason }, transaction);

@@ -26,14 +26,26 @@ export type RedoInstallResponse = Awaited<ReturnType<typeof redoInstall>>;
  * Starts a new install on the same repair, linked to the one it replaces; both are kept. The id may
  * be made on the device, so a retried redo finds the first (`created: false`). One redo per install.
  */
-export async function redoInstall(user: SessionUser, installId: string, input: RedoInstallInput): Promise<{ install: InstallRow; created: boolean }> {
+export async function redoInstall(
+  user: SessionUser,
+  installId: string,
+  input: RedoInstallInput,
+): Promise<{ install: InstallRow; created: boolean }> {
   await findInstallFor(user, installId);
-  if (!(REDO_ROLES as readonly string[]).includes(user.role)) throw forbidden('Only the foreman (or an admin) can start a redo of a patch.');
+  if (!(REDO_ROLES as readonly string[]).includes(user.role))
+    throw forbidden('Only the foreman (or an admin) can start a redo of a patch.');
   try {
     return await sequelize.transaction(async (t) => {
-      const old = await Install.findOne({ where: { id: installId, companyId: user.companyId }, lock: t.LOCK.UPDATE, transaction: t });
+      const old = await Install.findOne({
+        where: { id: installId, companyId: user.companyId },
+        lock: t.LOCK.UPDATE,
+        transaction: t,
+      });
       if (!old) throw notFound('Install');
-      const existing = await Install.findOne({ where: { replacesInstallId: old.id, companyId: user.companyId }, transaction: t });
+      const existing = await Install.findOne({
+        where: { replacesInstallId: old.id, companyId: user.companyId },
+        transaction: t,
+      });
       if (existing) {
         if (input.id && existing.id === input.id) return { install: existing.get({ plain: true }), created: false };
         throw new AppError(409, 'This install was already redone: open the redo to carry on.');
@@ -45,10 +57,16 @@ export async function redoInstall(user: SessionUser, installId: string, input: R
         Job.findOne({ where: { id: old.jobId, companyId: user.companyId }, transaction: t }),
       ]);
       if (!repair || !job) throw notFound('Repair');
-      if (repair.status === 'cancelled' || job.status === 'cancelled') throw new AppError(422, 'This repair was cancelled: there is nothing to redo.');
-      if (input.id && (await Install.findByPk(input.id, { transaction: t }))) throw new AppError(409, 'That install id is already used.');
+      if (repair.status === 'cancelled' || job.status === 'cancelled')
+        throw new AppError(422, 'This repair was cancelled: there is nothing to redo.');
+      if (input.id && (await Install.findByPk(input.id, { transaction: t })))
+        throw new AppError(409, 'That install id is already used.');
 
-      const checklist = await ChecklistTemplate.findOne({ where: { companyId: user.companyId, active: true }, order: [['updatedAt', 'DESC']], transaction: t });
+      const checklist = await ChecklistTemplate.findOne({
+        where: { companyId: user.companyId, active: true },
+        order: [['updatedAt', 'DESC']],
+        transaction: t,
+      });
       const install = await Install.create(
         {
           ...(input.id ? { id: input.id } : {}),
@@ -65,14 +83,20 @@ export async function redoInstall(user: SessionUser, installId: string, input: R
       if (repair.status !== 'planned') await repair.update({ status: 'planned' }, { transaction: t });
       await recordAudit(
         user,
-        { action: 'install.redone', entityType: 'install', entityId: install.id, changes: { replacesInstallId: old.id, replacedStatus: old.status, replacedInspection: old.inspectionResult } },
+        {
+          action: 'install.redone',
+          entityType: 'install',
+          entityId: install.id,
+          changes: { replacesInstallId: old.id, replacedStatus: old.status, replacedInspection: old.inspectionResult },
+        },
         t,
       );
       return { install: install.get({ plain: true }), created: true };
     });
   } catch (error) {
     // Two redos of the same install raced: the unique index on replaces_install_id refused the second.
-    if (error instanceof UniqueConstraintError) throw new AppError(409, 'This install was already redone: open the redo to carry on.');
+    if (error instanceof UniqueConstraintError)
+      throw new AppError(409, 'This install was already redone: open the redo to carry on.');
     throw error;
   }
 }
@@ -82,12 +106,27 @@ export async function redoChainOf(user: SessionUser, install: Pick<InstallRow, '
   const attributes = ['id', 'status', 'inspectionResult', 'startedAt', 'finishedAt', 'createdAt'] as const;
   const [replaces, replacedBy] = await Promise.all([
     install.replacesInstallId
-      ? Install.findOne({ where: { id: install.replacesInstallId, companyId: user.companyId }, attributes: [...attributes] })
+      ? Install.findOne({
+          where: { id: install.replacesInstallId, companyId: user.companyId },
+          attributes: [...attributes],
+        })
       : Promise.resolve(null),
-    Install.findOne({ where: { replacesInstallId: install.id, companyId: user.companyId }, attributes: [...attributes] }),
+    Install.findOne({
+      where: { replacesInstallId: install.id, companyId: user.companyId },
+      attributes: [...attributes],
+    }),
   ]);
   const brief = (row: Install | null) =>
-    row ? { id: row.id, status: row.status, inspectionResult: row.inspectionResult, startedAt: row.startedAt, finishedAt: row.finishedAt, createdAt: row.createdAt } : null;
+    row
+      ? {
+          id: row.id,
+          status: row.status,
+          inspectionResult: row.inspectionResult,
+          startedAt: row.startedAt,
+          finishedAt: row.finishedAt,
+          createdAt: row.createdAt,
+        }
+      : null;
   return { replaces: brief(replaces), replacedBy: brief(replacedBy) };
 }
 

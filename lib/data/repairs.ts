@@ -37,7 +37,11 @@ export type RepairListResponse = Awaited<ReturnType<typeof listRepairs>>;
  */
 export async function listRepairs(user: SessionUser, query: RepairListQuery, exportAll = false) {
   const cancelled =
-    query.archived === 'only' ? { status: 'cancelled' } : query.archived === 'true' || query.status?.length ? undefined : { status: { [Op.ne]: 'cancelled' } };
+    query.archived === 'only'
+      ? { status: 'cancelled' }
+      : query.archived === 'true' || query.status?.length
+        ? undefined
+        : { status: { [Op.ne]: 'cancelled' } };
   const where = allOf(
     { companyId: user.companyId },
     cancelled,
@@ -53,11 +57,20 @@ export async function listRepairs(user: SessionUser, query: RepairListQuery, exp
       { model: Job, as: 'job', attributes: ['id', 'number', 'status', 'title'] },
       { model: Segment, as: 'segment', attributes: ['id', 'label', 'insideDiameterMm', 'lengthMm'] },
     ],
-    order: [[query.sort, query.dir.toUpperCase()], [{ model: Job, as: 'job' }, 'number', 'DESC'], ['position', 'ASC'], ['id', 'ASC']],
+    order: [
+      [query.sort, query.dir.toUpperCase()],
+      [{ model: Job, as: 'job' }, 'number', 'DESC'],
+      ['position', 'ASC'],
+      ['id', 'ASC'],
+    ],
     ...windowOf(query, exportAll),
     distinct: true,
   });
-  return pageOf(rows.map((row) => row.get({ plain: true }) as RepairListItem), count, query);
+  return pageOf(
+    rows.map((row) => row.get({ plain: true }) as RepairListItem),
+    count,
+    query,
+  );
 }
 
 export type RepairResponse = Awaited<ReturnType<typeof getRepair>>;
@@ -68,12 +81,18 @@ export async function getRepair(user: SessionUser, id: string): Promise<RepairDe
     where: allOf({ id, companyId: user.companyId }, crewJobsWhere(user, 'jobId', 'id')),
     include: [
       { model: Job, as: 'job', attributes: ['id', 'number', 'status', 'title', 'siteId', 'archivedAt'] },
-      { model: Segment, as: 'segment', include: [{ model: AccessPoint, as: 'fromAccessPoint', attributes: ['id', 'label', 'kind'] }] },
+      {
+        model: Segment,
+        as: 'segment',
+        include: [{ model: AccessPoint, as: 'fromAccessPoint', attributes: ['id', 'label', 'kind'] }],
+      },
     ],
   });
   if (!repair) throw notFound('Repair');
   const [packer, installCount] = await Promise.all([
-    repair.plannedPackerId ? Packer.findOne({ where: { id: repair.plannedPackerId, companyId: user.companyId }, attributes: ['id', 'name'] }) : null,
+    repair.plannedPackerId
+      ? Packer.findOne({ where: { id: repair.plannedPackerId, companyId: user.companyId }, attributes: ['id', 'name'] })
+      : null,
     Install.count({ where: { repairId: id, companyId: user.companyId } }),
   ]);
   const plain = repair.get({ plain: true }) as Omit<RepairDetail, 'plannedPacker' | 'installCount'>;
@@ -83,7 +102,10 @@ export async function getRepair(user: SessionUser, id: string): Promise<RepairDe
 /** The job a new repair goes on and the segments of its site, for the repair form. */
 export async function repairFormOptions(user: SessionUser, jobId: string) {
   assertOfficeWriter(user);
-  const job = await Job.findOne({ where: { id: jobId, companyId: user.companyId }, attributes: ['id', 'number', 'title', 'siteId', 'status', 'archivedAt'] });
+  const job = await Job.findOne({
+    where: { id: jobId, companyId: user.companyId },
+    attributes: ['id', 'number', 'title', 'siteId', 'status', 'archivedAt'],
+  });
   if (!job) throw notFound('Job');
   const segments = await Segment.findAll({
     where: { siteId: job.siteId, companyId: user.companyId, archivedAt: null },
@@ -98,7 +120,11 @@ export async function createRepair(user: SessionUser, input: RepairInput) {
   assertOfficeWriter(user);
   return sequelize.transaction(async (transaction) => {
     // The job row's lock makes concurrent adds queue, so positions stay 1, 2, 3…
-    const job = await Job.findOne({ where: { id: input.jobId, companyId: user.companyId }, transaction, lock: transaction.LOCK.UPDATE });
+    const job = await Job.findOne({
+      where: { id: input.jobId, companyId: user.companyId },
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
     if (!job) throw unprocessable('jobId', 'Pick one of your jobs.');
     assertJobOpen(job);
     const segment = await segmentOnSite(user, input.segmentId, job.siteId, transaction);
@@ -109,7 +135,11 @@ export async function createRepair(user: SessionUser, input: RepairInput) {
       { ...input, companyId: user.companyId, fromAccessPointId: segment.fromAccessPointId, position: last + 1 },
       { transaction },
     );
-    await recordAudit(user, { action: 'create', entityType: ENTITY, entityId: repair.id, changes: { ...input, position: last + 1 } }, transaction);
+    await recordAudit(
+      user,
+      { action: 'create', entityType: ENTITY, entityId: repair.id, changes: { ...input, position: last + 1 } },
+      transaction,
+    );
     return repair.get({ plain: true });
   });
 }
@@ -121,7 +151,11 @@ export async function createRepair(user: SessionUser, input: RepairInput) {
 export async function updateRepair(user: SessionUser, id: string, patch: RepairPatch) {
   assertOfficeWriter(user);
   return sequelize.transaction(async (transaction) => {
-    const repair = await Repair.findOne({ where: { id, companyId: user.companyId }, transaction, lock: transaction.LOCK.UPDATE });
+    const repair = await Repair.findOne({
+      where: { id, companyId: user.companyId },
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
     if (!repair) throw notFound('Repair');
     const job = await Job.findOne({ where: { id: repair.jobId, companyId: user.companyId }, transaction });
     if (!job) throw notFound('Repair');
@@ -130,7 +164,9 @@ export async function updateRepair(user: SessionUser, id: string, patch: RepairP
     const beyondNotes = Object.keys(changes).filter((field) => field !== 'notes' && field !== 'ownerDefectCode');
     if (beyondNotes.length === 0) {
       if (changes.notes || changes.ownerDefectCode) {
-        const words = Object.fromEntries(Object.keys(changes).map((field) => [field, patch[field as 'notes' | 'ownerDefectCode']]));
+        const words = Object.fromEntries(
+          Object.keys(changes).map((field) => [field, patch[field as 'notes' | 'ownerDefectCode']]),
+        );
         await repair.update(words, { transaction });
         await recordAudit(user, { action: 'update', entityType: ENTITY, entityId: id, changes }, transaction);
       }
@@ -155,18 +191,29 @@ export async function updateRepair(user: SessionUser, id: string, patch: RepairP
     const company = await Company.findByPk(user.companyId, { transaction });
     if (!company) throw notFound('Company');
     const system = company.unitSystem as UnitSystem;
-    if (changes.segmentId || changes.distanceMm) assertWithinSegment(patch.distanceMm ?? repair.distanceMm, segment, system);
+    if (changes.segmentId || changes.distanceMm)
+      assertWithinSegment(patch.distanceMm ?? repair.distanceMm, segment, system);
 
     const packerId = patch.plannedPackerId === undefined ? repair.plannedPackerId : patch.plannedPackerId;
-    if (packerId && (changes.plannedPackerId || changes.plannedPatchLengthMm || changes.segmentId || changes.defectLengthMm)) {
+    if (
+      packerId &&
+      (changes.plannedPackerId || changes.plannedPatchLengthMm || changes.segmentId || changes.defectLengthMm)
+    ) {
       const patchMm =
         (patch.plannedPatchLengthMm === undefined ? repair.plannedPatchLengthMm : patch.plannedPatchLengthMm) ??
-        patchLength({ defectLengthMm: patch.defectLengthMm ?? repair.defectLengthMm, overlapPerEndMm: company.minOverlapPerEndMm });
+        patchLength({
+          defectLengthMm: patch.defectLengthMm ?? repair.defectLengthMm,
+          overlapPerEndMm: company.minOverlapPerEndMm,
+        });
       await assertPackerFits(user, packerId, segment.insideDiameterMm, patchMm, system, transaction);
     }
 
     await repair.update(updates, { transaction });
-    await recordAudit(user, { action: changes.status ? statusAction(patch.status!) : 'update', entityType: ENTITY, entityId: id, changes }, transaction);
+    await recordAudit(
+      user,
+      { action: changes.status ? statusAction(patch.status!) : 'update', entityType: ENTITY, entityId: id, changes },
+      transaction,
+    );
     return repair.get({ plain: true });
   });
 }
@@ -178,19 +225,47 @@ export async function updateRepair(user: SessionUser, id: string, patch: RepairP
 export async function removeRepair(user: SessionUser, id: string, reason?: string | null) {
   assertOfficeWriter(user);
   return sequelize.transaction(async (transaction) => {
-    const repair = await Repair.findOne({ where: { id, companyId: user.companyId }, transaction, lock: transaction.LOCK.UPDATE });
+    const repair = await Repair.findOne({
+      where: { id, companyId: user.companyId },
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
     if (!repair) throw notFound('Repair');
     if (await Install.count({ where: { repairId: id }, transaction })) {
       if (repair.status !== 'cancelled') {
         await repair.update({ status: 'cancelled' }, { transaction });
-        await recordAudit(user, { action: 'archive', entityType: ENTITY, entityId: id, changes: { status: { from: repair.status, to: 'cancelled' } }, reason }, transaction);
+        await recordAudit(
+          user,
+          {
+            action: 'archive',
+            entityType: ENTITY,
+            entityId: id,
+            changes: { status: { from: repair.status, to: 'cancelled' } },
+            reason,
+          },
+          transaction,
+        );
       }
       return { id, archived: true, deleted: false, status: 'cancelled' as const };
     }
     await Job.findOne({ where: { id: repair.jobId }, transaction, lock: transaction.LOCK.UPDATE });
     await repair.destroy({ transaction });
-    await Repair.decrement('position', { by: 1, where: { jobId: repair.jobId, position: { [Op.gt]: repair.position } }, transaction });
-    await recordAudit(user, { action: 'delete', entityType: ENTITY, entityId: id, changes: { jobId: repair.jobId, position: repair.position }, reason }, transaction);
+    await Repair.decrement('position', {
+      by: 1,
+      where: { jobId: repair.jobId, position: { [Op.gt]: repair.position } },
+      transaction,
+    });
+    await recordAudit(
+      user,
+      {
+        action: 'delete',
+        entityType: ENTITY,
+        entityId: id,
+        changes: { jobId: repair.jobId, position: repair.position },
+        reason,
+      },
+      transaction,
+    );
     return { id, archived: false, deleted: true };
   });
 }
@@ -203,11 +278,21 @@ export async function getRepairPlan(user: SessionUser, id: string, query: Repair
   const repair = await getRepair(user, id);
   const [company, packers, resinSystems] = await Promise.all([
     Company.findByPk(user.companyId),
-    Packer.findAll({ where: { companyId: user.companyId, archivedAt: null }, order: [['minDiameterMm', 'ASC'], ['bladderLengthMm', 'ASC'], ['name', 'ASC']] }),
+    Packer.findAll({
+      where: { companyId: user.companyId, archivedAt: null },
+      order: [
+        ['minDiameterMm', 'ASC'],
+        ['bladderLengthMm', 'ASC'],
+        ['name', 'ASC'],
+      ],
+    }),
     ResinSystem.findAll({
       where: { companyId: user.companyId, archivedAt: null },
       attributes: ['id', 'name', 'resinToFabricRatio', 'resinExcessPct'],
-      order: [['name', 'ASC'], ['id', 'ASC']],
+      order: [
+        ['name', 'ASC'],
+        ['id', 'ASC'],
+      ],
     }),
   ]);
   if (!company) throw notFound('Company');
@@ -222,7 +307,8 @@ export async function getRepairPlan(user: SessionUser, id: string, query: Repair
     thicknessMm: query.thicknessMm ?? repair.plannedThicknessMm,
     groundwaterHeadMm: query.groundwaterHeadMm ?? repair.plannedGroundwaterHeadMm,
     ovalityPct: query.ovalityPct ?? repair.plannedOvalityPct,
-    longTermModulusPsi: query.longTermModulusMpa === undefined ? null : convertPressure(query.longTermModulusMpa * 1000, 'kPa', 'psi'),
+    longTermModulusPsi:
+      query.longTermModulusMpa === undefined ? null : convertPressure(query.longTermModulusMpa * 1000, 'kPa', 'psi'),
     // The modulus asked about, else the company's, else (in the planner) the F1216 Table 1 minimum.
     shortTermModulusPsi: modulusPsi(query.shortTermModulusMpa ?? company.linerShortTermModulusMpa),
   };
@@ -230,10 +316,23 @@ export async function getRepairPlan(user: SessionUser, id: string, query: Repair
   const plan = planRepair({
     ...inputs,
     unitSystem,
-    resin: resin ? { id: resin.id, name: resin.name, resinToFabricRatio: resin.resinToFabricRatio, excessPct: resin.resinExcessPct } : null,
+    resin: resin
+      ? {
+          id: resin.id,
+          name: resin.name,
+          resinToFabricRatio: resin.resinToFabricRatio,
+          excessPct: resin.resinExcessPct,
+        }
+      : null,
     packers: packers.map((p) => ({
-      id: p.id, name: p.name, minDiameterMm: p.minDiameterMm, maxDiameterMm: p.maxDiameterMm, bladderLengthMm: p.bladderLengthMm,
-      endMarginMm: p.endMarginMm, minPressureKpa: p.minPressureKpa, maxPressureKpa: p.maxPressureKpa,
+      id: p.id,
+      name: p.name,
+      minDiameterMm: p.minDiameterMm,
+      maxDiameterMm: p.maxDiameterMm,
+      bladderLengthMm: p.bladderLengthMm,
+      endMarginMm: p.endMarginMm,
+      minPressureKpa: p.minPressureKpa,
+      maxPressureKpa: p.maxPressureKpa,
     })),
   });
   return {
@@ -263,19 +362,33 @@ function assertJobOpen(job: Job) {
 
 async function segmentOnSite(user: SessionUser, segmentId: string, siteId: string, transaction: Transaction) {
   const segment = await Segment.findOne({ where: { id: segmentId, companyId: user.companyId }, transaction });
-  if (!segment || segment.siteId !== siteId) throw unprocessable('segmentId', 'That segment is not on this job’s site.');
+  if (!segment || segment.siteId !== siteId)
+    throw unprocessable('segmentId', 'That segment is not on this job’s site.');
   if (segment.archivedAt) throw unprocessable('segmentId', 'That segment is archived.');
   return segment;
 }
 
 function assertWithinSegment(distanceMm: number, segment: Segment, system: UnitSystem) {
   if (distanceMm > segment.lengthMm) {
-    throw unprocessable('distanceMm', `The segment is only ${formatLength(segment.lengthMm, system, 'long')} long: the defect must lie within it.`);
+    throw unprocessable(
+      'distanceMm',
+      `The segment is only ${formatLength(segment.lengthMm, system, 'long')} long: the defect must lie within it.`,
+    );
   }
 }
 
-async function assertPackerFits(user: SessionUser, packerId: string, insideDiameterMm: number, patchLengthMm: number, system: UnitSystem, transaction: Transaction) {
-  const packer = await Packer.findOne({ where: { id: packerId, companyId: user.companyId, archivedAt: null }, transaction });
+async function assertPackerFits(
+  user: SessionUser,
+  packerId: string,
+  insideDiameterMm: number,
+  patchLengthMm: number,
+  system: UnitSystem,
+  transaction: Transaction,
+) {
+  const packer = await Packer.findOne({
+    where: { id: packerId, companyId: user.companyId, archivedAt: null },
+    transaction,
+  });
   if (!packer) throw unprocessable('plannedPackerId', 'Pick one of your packers.');
   const [fit] = fittingPackers([packer.get({ plain: true })], { insideDiameterMm, patchLengthMm }, system);
   if (!fit.fits) throw unprocessable('plannedPackerId', `${packer.name} does not fit: ${fit.reasons.join(' ')}`);

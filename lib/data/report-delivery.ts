@@ -28,7 +28,10 @@ export async function claimReportSend(sendId: string): Promise<ReportSend | null
         id: sendId,
         [Op.or]: [
           { status: 'queued' },
-          { status: 'sending', claimedAt: { [Op.lt]: sequelize.literal(`now() - interval '${CLAIM_LEASE_SECONDS} seconds'`) } },
+          {
+            status: 'sending',
+            claimedAt: { [Op.lt]: sequelize.literal(`now() - interval '${CLAIM_LEASE_SECONDS} seconds'`) },
+          },
         ],
       },
       returning: true,
@@ -118,7 +121,11 @@ export async function reportVersionInputs(companyId: string, jobId: string) {
       attributes: ['id', 'status', 'storageKey', 'caption', 'updatedAt'],
       order: [['id', 'ASC']],
     }),
-    ReportSend.findOne({ where: { companyId, jobId, status: 'sent' }, attributes: ['id'], order: [['sentAt', 'DESC']] }),
+    ReportSend.findOne({
+      where: { companyId, jobId, status: 'sent' },
+      attributes: ['id'],
+      order: [['sentAt', 'DESC']],
+    }),
   ]);
   return { evidence: evidence.map((row) => row.get({ plain: true })), lastSendId: lastSend?.id ?? null };
 }

@@ -19,7 +19,10 @@ export async function createReportLink(companyId: string, jobId: string, expires
 
 /** True when the signed claims name a link row of that job and company that has not been revoked. */
 export async function isLinkLive(claims: Pick<LinkClaims, 'linkId' | 'jobId' | 'companyId'>): Promise<boolean> {
-  const row = await ReportLink.findOne({ where: { id: claims.linkId, jobId: claims.jobId, companyId: claims.companyId }, attributes: ['revokedAt'] });
+  const row = await ReportLink.findOne({
+    where: { id: claims.linkId, jobId: claims.jobId, companyId: claims.companyId },
+    attributes: ['revokedAt'],
+  });
   return !!row && row.revokedAt === null;
 }
 
@@ -32,15 +35,35 @@ export type RevokeReportLinksResponse = Awaited<ReturnType<typeof revokeReportLi
 export async function revokeReportLinks(user: SessionUser, jobId: string): Promise<{ revokedAt: string }> {
   assertOfficeWriter(user);
   return sequelize.transaction(async (transaction) => {
-    const job = await Job.findOne({ where: { id: jobId, companyId: user.companyId }, attributes: ['id'], transaction, lock: transaction.LOCK.UPDATE });
+    const job = await Job.findOne({
+      where: { id: jobId, companyId: user.companyId },
+      attributes: ['id'],
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
     if (!job) throw notFound('Job');
     const revokedAt = new Date();
-    const [links] = await ReportLink.update({ revokedAt }, { where: { jobId, companyId: user.companyId, revokedAt: null }, transaction });
+    const [links] = await ReportLink.update(
+      { revokedAt },
+      { where: { jobId, companyId: user.companyId, revokedAt: null }, transaction },
+    );
     const [failed] = await ReportSend.update(
-      { status: 'failed', lastError: 'The report links were revoked before this e-mail went out; send the report again.' },
+      {
+        status: 'failed',
+        lastError: 'The report links were revoked before this e-mail went out; send the report again.',
+      },
       { where: { jobId, companyId: user.companyId, status: 'queued' }, transaction },
     );
-    await recordAudit(user, { action: 'report_links_revoked', entityType: 'job', entityId: jobId, changes: { links, queuedSendsStopped: failed } }, transaction);
+    await recordAudit(
+      user,
+      {
+        action: 'report_links_revoked',
+        entityType: 'job',
+        entityId: jobId,
+        changes: { links, queuedSendsStopped: failed },
+      },
+      transaction,
+    );
     return { revokedAt: revokedAt.toISOString() };
   });
 }
@@ -48,9 +71,16 @@ export async function revokeReportLinks(user: SessionUser, jobId: string): Promi
 /** The job's links for the office: how many still open the report, and when they were last revoked. */
 export async function reportLinkSummary(user: SessionUser, jobId: string) {
   assertOfficeWriter(user);
-  const rows = await ReportLink.findAll({ where: { jobId, companyId: user.companyId }, attributes: ['expiresAt', 'revokedAt'] });
+  const rows = await ReportLink.findAll({
+    where: { jobId, companyId: user.companyId },
+    attributes: ['expiresAt', 'revokedAt'],
+  });
   const now = Date.now();
   const live = rows.filter((row) => row.revokedAt === null && row.expiresAt.getTime() > now).length;
   const revoked = rows.map((row) => row.revokedAt?.getTime() ?? 0).filter(Boolean);
-  return { total: rows.length, live, lastRevokedAt: revoked.length ? new Date(Math.max(...revoked)).toISOString() : null };
+  return {
+    total: rows.length,
+    live,
+    lastRevokedAt: revoked.length ? new Date(Math.max(...revoked)).toISOString() : null,
+  };
 }

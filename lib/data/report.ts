@@ -1,7 +1,19 @@
 import 'server-only';
 import { Op } from 'sequelize';
 import {
-  AccessPoint, Attachment, Company, Customer, Install, InstallEvent, Job, Packer, Repair, ResinKit, ResinSystem, Segment, Site,
+  AccessPoint,
+  Attachment,
+  Company,
+  Customer,
+  Install,
+  InstallEvent,
+  Job,
+  Packer,
+  Repair,
+  ResinKit,
+  ResinSystem,
+  Segment,
+  Site,
 } from '@/models';
 import type { SessionUser } from '@/lib/auth/session';
 import { resinClockSpec } from '@/lib/cure';
@@ -33,7 +45,10 @@ export async function getReportData(user: SessionUser, jobId: string, options: {
 }
 
 /** The report behind a verified customer link: only that job, only once every install is approved. */
-export async function getReportDataForLink(claims: { jobId: string; companyId: string }, options: { images?: boolean } = {}) {
+export async function getReportDataForLink(
+  claims: { jobId: string; companyId: string },
+  options: { images?: boolean } = {},
+) {
   const data = await buildReportData(claims.companyId, claims.jobId, options);
   if (!data || !(REPORTABLE_JOB_STATUSES as readonly string[]).includes(data.job.status)) return null;
   return data;
@@ -59,7 +74,11 @@ export async function buildReportData(companyId: string, jobId: string, { images
         where: { status: { [Op.ne]: 'cancelled' } },
         required: false,
         include: [
-          { model: Segment, as: 'segment', include: [{ model: AccessPoint, as: 'fromAccessPoint', attributes: ['label', 'kind'] }] },
+          {
+            model: Segment,
+            as: 'segment',
+            include: [{ model: AccessPoint, as: 'fromAccessPoint', attributes: ['label', 'kind'] }],
+          },
           { model: AccessPoint, as: 'fromAccessPoint', attributes: ['label', 'kind'] },
         ],
       },
@@ -103,7 +122,12 @@ export async function buildReportData(companyId: string, jobId: string, { images
       if (!before) break;
       chain.push({
         started: when(before.startedAt ?? before.createdAt),
-        outcome: before.inspectionResult === 'fail' ? t('outcomeFailed') : before.status === 'sent_back' ? t('outcomeSentBack') : t('outcomeOther'),
+        outcome:
+          before.inspectionResult === 'fail'
+            ? t('outcomeFailed')
+            : before.status === 'sent_back'
+              ? t('outcomeSentBack')
+              : t('outcomeOther'),
       });
       id = before.replacesInstallId;
     }
@@ -121,7 +145,9 @@ export async function buildReportData(companyId: string, jobId: string, { images
     const install = installs.find((i) => i.repairId === repair.id) ?? null;
     const accessPoint = repair.fromAccessPoint ?? repair.segment.fromAccessPoint;
     const patchLengthMm = install?.patchLengthMm ?? repair.plannedPatchLengthMm ?? null;
-    const repairImages = loaded.filter((image) => image.repairId === repair.id || (image.installId && image.installId === install?.id));
+    const repairImages = loaded.filter(
+      (image) => image.repairId === repair.id || (image.installId && image.installId === install?.id),
+    );
     return {
       id: repair.id,
       position: repair.position,
@@ -130,10 +156,14 @@ export async function buildReportData(companyId: string, jobId: string, { images
         material: label(repair.segment.material),
         insideDiameter: formatLength(repair.segment.insideDiameterMm, system, 'short', units),
       },
-      accessPoint: accessPoint ? `${accessPoint.label} (${label(accessPoint.kind).toLowerCase()})` : t('upstreamAccessPoint'),
+      accessPoint: accessPoint
+        ? `${accessPoint.label} (${label(accessPoint.kind).toLowerCase()})`
+        : t('upstreamAccessPoint'),
       distance: formatLength(repair.distanceMm, system, 'long', units),
       clockPosition: repair.clockPosition ? t('clock', { position: repair.clockPosition }) : null,
-      defect: repair.ownerDefectCode ? t('ownerCode', { defect: label(repair.defectType), code: repair.ownerDefectCode }) : label(repair.defectType),
+      defect: repair.ownerDefectCode
+        ? t('ownerCode', { defect: label(repair.defectType), code: repair.ownerDefectCode })
+        : label(repair.defectType),
       defectLength: formatLength(repair.defectLengthMm, system, 'short', units),
       conditionGrade: repair.conditionGrade,
       patchLengthMm,
@@ -151,34 +181,57 @@ export async function buildReportData(companyId: string, jobId: string, { images
     /** The customer's language: the page, PDF and e-mail of this report speak it. */
     locale,
     company: { name: company.name, unitSystem: system, timeZone: zone },
-    job: { id: plain.id, number: plain.number, title: plain.title, status: plain.status, scheduledDate: plain.scheduledDate },
+    job: {
+      id: plain.id,
+      number: plain.number,
+      title: plain.title,
+      status: plain.status,
+      scheduledDate: plain.scheduledDate,
+    },
     customer: { name: plain.customer.name, contactName: plain.customer.contactName, email: plain.customer.email },
     site: {
       name: site.name,
-      address: [site.addressLine, site.city, [site.region, site.postalCode].filter(Boolean).join(' ')].filter(Boolean).join(', '),
+      address: [site.addressLine, site.city, [site.region, site.postalCode].filter(Boolean).join(' ')]
+        .filter(Boolean)
+        .join(', '),
     },
     repairs,
     /** Images of the job not tied to one repair. */
     jobImages: loaded.filter((image) => !placed.has(image)),
     allApproved: repairs.length > 0 && repairs.every((r) => r.install !== null),
-    cautions: SAFETY_REMINDERS.filter((r) => (REPORT_CAUTION_IDS as readonly string[]).includes(r.id)).map(({ id }) => ({
-      title: ts(`${id}.title`),
-      text: ts(`${id}.text`),
-    })),
+    cautions: SAFETY_REMINDERS.filter((r) => (REPORT_CAUTION_IDS as readonly string[]).includes(r.id)).map(
+      ({ id }) => ({
+        title: ts(`${id}.title`),
+        text: ts(`${id}.text`),
+      }),
+    ),
     deferral: `${t('deferral')} ${ts('deferral')}`,
     preparedAt: formatDateTimeIn(new Date(), zone, locale),
   };
 }
 
 /** What was installed and when, from the install row and its evidence log. */
-function installSummary(install: Install, system: UnitSystem, when: (at: Date | null) => string | null, locale: Locale, zone: string) {
+function installSummary(
+  install: Install,
+  system: UnitSystem,
+  when: (at: Date | null) => string | null,
+  locale: Locale,
+  zone: string,
+) {
   const units = { locale };
-  const row = install as Install & { resinSystem: ResinSystem | null; resinKit: ResinKit | null; packer: Packer | null; events: InstallEvent[] };
+  const row = install as Install & {
+    resinSystem: ResinSystem | null;
+    resinKit: ResinKit | null;
+    packer: Packer | null;
+    events: InstallEvent[];
+  };
   const state = deriveInstallState(row.events.map((e) => e.get({ plain: true })));
   const { plan } = installClock({
     state,
     resin: row.resinSystem ? resinClockSpec(row.resinSystem) : null,
-    packer: row.packer ? { minPressureKpa: row.packer.minPressureKpa, maxPressureKpa: row.packer.maxPressureKpa } : null,
+    packer: row.packer
+      ? { minPressureKpa: row.packer.minPressureKpa, maxPressureKpa: row.packer.maxPressureKpa }
+      : null,
     resinKitExpiresOn: row.resinKit?.expiresOn ?? null,
     safetyMargin: 0,
     unitSystem: system,
@@ -194,8 +247,14 @@ function installSummary(install: Install, system: UnitSystem, when: (at: Date | 
     mixTemperature: mixTempC == null ? null : formatTemperature(mixTempC, system, units),
     pipeTemperature: pipeTempC == null ? null : formatTemperature(pipeTempC, system, units),
     inflatePressure: state.inflatePressureKpa == null ? null : formatPressure(state.inflatePressureKpa, system, units),
-    inspection: state.inspection ?? (row.inspectionResult ? { result: row.inspectionResult, notes: row.inspectionNotes, at: null } : null),
-    steps: timeline.marks.map((mark) => ({ label: mark.label, at: when(mark.at), time: formatInZone(mark.at, zone, 'HH:mm zzz') })),
+    inspection:
+      state.inspection ??
+      (row.inspectionResult ? { result: row.inspectionResult, notes: row.inspectionNotes, at: null } : null),
+    steps: timeline.marks.map((mark) => ({
+      label: mark.label,
+      at: when(mark.at),
+      time: formatInZone(mark.at, zone, 'HH:mm zzz'),
+    })),
     returnToService: when(plan?.returnToService ?? null),
     /** Set when the pipe was outside the resin's rated range and the hold followed the resin maker's sheet. */
     makerHold,
@@ -204,9 +263,19 @@ function installSummary(install: Install, system: UnitSystem, when: (at: Date | 
   };
 }
 
-const STEP_KEYS = ['mixedAt', 'patchLoadedAt', 'inPositionAt', 'inflatedAt', 'deflatedAt'] as const satisfies readonly (keyof InstallState)[];
+const STEP_KEYS = [
+  'mixedAt',
+  'patchLoadedAt',
+  'inPositionAt',
+  'inflatedAt',
+  'deflatedAt',
+] as const satisfies readonly (keyof InstallState)[];
 
-function timelineOf(state: InstallState, plan: { inflateBy: Date; deflateAfter?: Date; returnToService?: Date } | null, locale: Locale) {
+function timelineOf(
+  state: InstallState,
+  plan: { inflateBy: Date; deflateAfter?: Date; returnToService?: Date } | null,
+  locale: Locale,
+) {
   const t = translatorFor(locale, 'report');
   const marks: TimelineMark[] = [];
   for (const key of STEP_KEYS) {
@@ -215,23 +284,46 @@ function timelineOf(state: InstallState, plan: { inflateBy: Date; deflateAfter?:
   }
   if (state.inspection) marks.push({ id: 'inspection', label: t('steps.inspection'), at: state.inspection.at });
   const bands: TimelineBand[] = [];
-  if (state.mixedAt && plan) bands.push({ id: 'window', label: t('bands.window'), from: state.mixedAt, to: plan.inflateBy });
+  if (state.mixedAt && plan)
+    bands.push({ id: 'window', label: t('bands.window'), from: state.mixedAt, to: plan.inflateBy });
   if (state.inflatedAt) {
-    bands.push({ id: 'held', label: t('bands.held'), from: state.inflatedAt, to: state.deflatedAt ?? state.inflatedAt });
-    if (plan?.returnToService) bands.push({ id: 'cure', label: t('bands.cure'), from: state.inflatedAt, to: plan.returnToService });
+    bands.push({
+      id: 'held',
+      label: t('bands.held'),
+      from: state.inflatedAt,
+      to: state.deflatedAt ?? state.inflatedAt,
+    });
+    if (plan?.returnToService)
+      bands.push({ id: 'cure', label: t('bands.cure'), from: state.inflatedAt, to: plan.returnToService });
   }
   return { marks, bands };
 }
 
 type JobRow = {
-  id: string; number: string; title: string | null; status: string; scheduledDate: string | null;
+  id: string;
+  number: string;
+  title: string | null;
+  status: string;
+  scheduledDate: string | null;
   customer: { name: string; contactName: string | null; email: string | null; language?: string };
   site: { name: string; addressLine: string; city: string; region: string | null; postalCode: string | null };
   repairs: {
-    id: string; position: number; distanceMm: number; defectType: string; conditionGrade: number; defectLengthMm: number;
-    clockPosition: string | null; plannedPatchLengthMm: number | null; ownerDefectCode?: string | null;
+    id: string;
+    position: number;
+    distanceMm: number;
+    defectType: string;
+    conditionGrade: number;
+    defectLengthMm: number;
+    clockPosition: string | null;
+    plannedPatchLengthMm: number | null;
+    ownerDefectCode?: string | null;
     fromAccessPoint: { label: string; kind: string } | null;
-    segment: { label: string; material: string; insideDiameterMm: number; fromAccessPoint: { label: string; kind: string } | null };
+    segment: {
+      label: string;
+      material: string;
+      insideDiameterMm: number;
+      fromAccessPoint: { label: string; kind: string } | null;
+    };
   }[];
 };
 

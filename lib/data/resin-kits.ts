@@ -8,7 +8,12 @@ import { dayInZone } from '@/lib/time/dates';
 import { AppError, notFound } from '@/lib/server/errors';
 import { isDeskRole } from '@/lib/auth/roles';
 import type { SessionUser } from '@/lib/auth/session';
-import { resinKitProblems, type ResinKitInput, type ResinKitListQuery, type resinKitPatchSchema } from '@/lib/validation/resin-kits';
+import {
+  resinKitProblems,
+  type ResinKitInput,
+  type ResinKitListQuery,
+  type resinKitPatchSchema,
+} from '@/lib/validation/resin-kits';
 import { throwProblems } from '@/lib/validation/rules';
 import { getCompany } from './company';
 import { allOf, archivedWhere, pageOf, searchWhere, windowOf } from './list';
@@ -34,10 +39,17 @@ export async function listResinKits(user: SessionUser, query: ResinKitListQuery,
       searchWhere(query.q, ['lot', 'notes']),
     ),
     include: [systemName],
-    order: [[query.sort, query.dir.toUpperCase()], ['id', 'ASC']],
+    order: [
+      [query.sort, query.dir.toUpperCase()],
+      ['id', 'ASC'],
+    ],
     ...windowOf(query, exportAll),
   });
-  return pageOf(rows.map((row) => withExpiry(row.get({ plain: true }) as KitWithSystem, today)), count, query);
+  return pageOf(
+    rows.map((row) => withExpiry(row.get({ plain: true }) as KitWithSystem, today)),
+    count,
+    query,
+  );
 }
 
 export type ResinKitResponse = Awaited<ReturnType<typeof getResinKit>>;
@@ -56,12 +68,17 @@ export async function getResinKit(user: SessionUser, id: string) {
     ),
     attributes: ['id', 'status', 'startedAt', 'finishedAt', 'jobId'],
     include: [{ model: Job, as: 'job', attributes: ['id', 'number', 'title'] }],
-    order: [['startedAt', 'DESC NULLS LAST'], ['createdAt', 'DESC']],
+    order: [
+      ['startedAt', 'DESC NULLS LAST'],
+      ['createdAt', 'DESC'],
+    ],
   });
   return {
     ...withExpiry(row.get({ plain: true }) as KitWithSystem, await todayOf(user)),
     installs: installs.map((install) => {
-      const plain = install.get({ plain: true }) as InferAttributes<Install> & { job: { id: string; number: string; title: string | null } };
+      const plain = install.get({ plain: true }) as InferAttributes<Install> & {
+        job: { id: string; number: string; title: string | null };
+      };
       return { ...plain, reviewHref: isDeskRole(user.role) ? `/reviews/${plain.id}` : null };
     }),
   };
@@ -89,7 +106,11 @@ export async function updateResinKit(user: SessionUser, id: string, patch: z.out
       throwProblems(resinKitProblems({ ...row.get({ plain: true }), ...patch }));
       if (patch.resinSystemId && patch.resinSystemId !== row.resinSystemId) {
         await assertUsableSystem(user, patch.resinSystemId, transaction);
-        if (await usedBy(user, id, transaction)) throw new AppError(409, 'This kit is already used by an install: its resin system cannot change. Add a new kit instead.');
+        if (await usedBy(user, id, transaction))
+          throw new AppError(
+            409,
+            'This kit is already used by an install: its resin system cannot change. Add a new kit instead.',
+          );
       }
       if (patch.lot && patch.lot !== row.lot) await assertLotFree(user, patch.lot, id, transaction);
       return updateAudited(user, row, ENTITY, patch, transaction);
@@ -102,9 +123,16 @@ export async function archiveResinKit(user: SessionUser, id: string) {
   assertAdmin(user);
   return sequelize.transaction(async (transaction) => {
     const row = await lockOwnRow(ResinKit, user, id, 'Resin kit', transaction);
-    return archiveOrDelete(user, row, {
-      entityType: ENTITY, inUse: (await usedBy(user, id, transaction)) > 0, summary: { lot: row.lot },
-    }, transaction);
+    return archiveOrDelete(
+      user,
+      row,
+      {
+        entityType: ENTITY,
+        inUse: (await usedBy(user, id, transaction)) > 0,
+        summary: { lot: row.lot },
+      },
+      transaction,
+    );
   });
 }
 
@@ -120,12 +148,21 @@ function withExpiry(kit: KitWithSystem, today: string) {
 /** The kit's resin system must be one of the company's, still in use: well-formed but wrong is a 422. */
 async function assertUsableSystem(user: SessionUser, resinSystemId: string, transaction: Transaction) {
   const system = await ResinSystem.findOne({ where: { id: resinSystemId, companyId: user.companyId }, transaction });
-  if (!system) throw new AppError(422, 'That resin system was not found; choose one from the list.', { resinSystemId: ['Unknown resin system'] });
-  if (system.archivedAt) throw new AppError(422, `${system.name} is archived: new kits need a resin system in use.`, { resinSystemId: ['Archived resin system'] });
+  if (!system)
+    throw new AppError(422, 'That resin system was not found; choose one from the list.', {
+      resinSystemId: ['Unknown resin system'],
+    });
+  if (system.archivedAt)
+    throw new AppError(422, `${system.name} is archived: new kits need a resin system in use.`, {
+      resinSystemId: ['Archived resin system'],
+    });
 }
 
 async function assertLotFree(user: SessionUser, lot: string, exceptId: string | null, transaction: Transaction) {
-  const clash = await ResinKit.findOne({ where: allOf({ companyId: user.companyId, lot }, exceptId ? { id: { [Op.ne]: exceptId } } : undefined), transaction });
+  const clash = await ResinKit.findOne({
+    where: allOf({ companyId: user.companyId, lot }, exceptId ? { id: { [Op.ne]: exceptId } } : undefined),
+    transaction,
+  });
   if (clash) throw duplicateLot(lot);
 }
 
@@ -139,4 +176,5 @@ async function uniqueLot<T>(lot: string | undefined, write: () => Promise<T>): P
   }
 }
 
-const duplicateLot = (lot: string) => new AppError(409, `Lot ${lot} is already on the list.`, { lot: ['This lot is already on the list'] });
+const duplicateLot = (lot: string) =>
+  new AppError(409, `Lot ${lot} is already on the list.`, { lot: ['This lot is already on the list'] });

@@ -4,7 +4,12 @@ import { Install, ResinKit, ResinSystem } from '@/models';
 import { sequelize } from '@/lib/data/db';
 import { notFound } from '@/lib/server/errors';
 import type { SessionUser } from '@/lib/auth/session';
-import { resinSystemProblems, type ResinSystemInput, type ResinSystemListQuery, type resinSystemPatchSchema } from '@/lib/validation/resin-systems';
+import {
+  resinSystemProblems,
+  type ResinSystemInput,
+  type ResinSystemListQuery,
+  type resinSystemPatchSchema,
+} from '@/lib/validation/resin-systems';
 import { throwProblems } from '@/lib/validation/rules';
 import { allOf, archivedWhere, pageOf, searchWhere, windowOf } from './list';
 import { assertAdmin } from './scope';
@@ -23,10 +28,17 @@ export async function listResinSystems(user: SessionUser, query: ResinSystemList
       query.chemistry ? { chemistry: query.chemistry } : undefined,
       searchWhere(query.q, ['name']),
     ),
-    order: [[query.sort, query.dir.toUpperCase()], ['id', 'ASC']],
+    order: [
+      [query.sort, query.dir.toUpperCase()],
+      ['id', 'ASC'],
+    ],
     ...windowOf(query, exportAll),
   });
-  return pageOf(rows.map((row) => row.get({ plain: true })), count, query);
+  return pageOf(
+    rows.map((row) => row.get({ plain: true })),
+    count,
+    query,
+  );
 }
 
 export type ResinSystemResponse = Awaited<ReturnType<typeof getResinSystem>>;
@@ -56,7 +68,13 @@ export async function updateResinSystem(user: SessionUser, id: string, patch: z.
     const next = { ...row.get({ plain: true }), ...patch };
     throwProblems(resinSystemProblems(next));
     const sensitivity = withOneSensitivity(next);
-    return updateAudited(user, row, ENTITY, { ...patch, doublingC: sensitivity.doublingC, activationEnergyKj: sensitivity.activationEnergyKj }, transaction);
+    return updateAudited(
+      user,
+      row,
+      ENTITY,
+      { ...patch, doublingC: sensitivity.doublingC, activationEnergyKj: sensitivity.activationEnergyKj },
+      transaction,
+    );
   });
 }
 
@@ -69,14 +87,23 @@ export async function archiveResinSystem(user: SessionUser, id: string) {
       ResinKit.count({ where: { companyId: user.companyId, resinSystemId: id }, transaction }),
       Install.count({ where: { companyId: user.companyId, resinSystemId: id }, transaction }),
     ]);
-    return archiveOrDelete(user, row, {
-      entityType: ENTITY, inUse: kits + installs > 0, summary: { name: row.name },
-    }, transaction);
+    return archiveOrDelete(
+      user,
+      row,
+      {
+        entityType: ENTITY,
+        inUse: kits + installs > 0,
+        summary: { name: row.name },
+      },
+      transaction,
+    );
   });
 }
 
 // The clock reads only the figure of the chosen kind; the other is cleared so the record says one thing.
-function withOneSensitivity<T extends { sensitivityKind: string; doublingC?: number | null; activationEnergyKj?: number | null }>(values: T) {
+function withOneSensitivity<
+  T extends { sensitivityKind: string; doublingC?: number | null; activationEnergyKj?: number | null },
+>(values: T) {
   return values.sensitivityKind === 'arrhenius'
     ? { ...values, doublingC: null, activationEnergyKj: values.activationEnergyKj ?? null }
     : { ...values, doublingC: values.doublingC ?? null, activationEnergyKj: null };

@@ -1,7 +1,21 @@
 import 'server-only';
 import { Op, literal, type InferAttributes, type Model, type Transaction, type WhereOptions } from 'sequelize';
 import {
-  AccessPoint, Crew, Customer, Install, InstallEvent, Job, Packer, Repair, ResinKit, ResinSystem, Review, Segment, Site, User, sequelize,
+  AccessPoint,
+  Crew,
+  Customer,
+  Install,
+  InstallEvent,
+  Job,
+  Packer,
+  Repair,
+  ResinKit,
+  ResinSystem,
+  Review,
+  Segment,
+  Site,
+  User,
+  sequelize,
 } from '@/models';
 import type { SessionUser } from '@/lib/auth/session';
 import { recordAudit } from '@/lib/data/audit';
@@ -45,7 +59,11 @@ export async function listInstalls(user: SessionUser, query: InstallListQuery, e
     const { rows, count } = await Install.findAndCountAll({
       where,
       include: LIST_INCLUDE,
-      order: [[rank, query.dir === 'asc' ? 'DESC' : 'ASC'], ['finishedAt', 'ASC NULLS LAST'], ['id', 'ASC']],
+      order: [
+        [rank, query.dir === 'asc' ? 'DESC' : 'ASC'],
+        ['finishedAt', 'ASC NULLS LAST'],
+        ['id', 'ASC'],
+      ],
       ...windowOf(query, exportAll),
     });
     return pageOf(await itemsOf(user, rows, company, now), count, query);
@@ -53,7 +71,10 @@ export async function listInstalls(user: SessionUser, query: InstallListQuery, e
   const { rows, count } = await Install.findAndCountAll({
     where,
     include: LIST_INCLUDE,
-    order: [[query.sort, `${query.dir.toUpperCase()} NULLS LAST`], ['id', 'ASC']],
+    order: [
+      [query.sort, `${query.dir.toUpperCase()} NULLS LAST`],
+      ['id', 'ASC'],
+    ],
     ...windowOf(query, exportAll),
   });
   return pageOf(await itemsOf(user, rows, company, now), count, query);
@@ -85,12 +106,23 @@ export async function getInstallReview(user: SessionUser, id: string, now = new 
     }),
   ]);
   if (!job) throw notFound('Install');
-  const crew = view.install.crewId ? await Crew.findOne({ where: { id: view.install.crewId, companyId: user.companyId }, attributes: ['id', 'name'] }) : null;
-  const plainJob = job.get({ plain: true }) as Plain<Job> & { customer: Pick<Plain<Customer>, 'id' | 'name'>; site: Pick<Plain<Site>, 'id' | 'name' | 'addressLine' | 'city'>; crew: Pick<Plain<Crew>, 'id' | 'name'> | null };
+  const crew = view.install.crewId
+    ? await Crew.findOne({ where: { id: view.install.crewId, companyId: user.companyId }, attributes: ['id', 'name'] })
+    : null;
+  const plainJob = job.get({ plain: true }) as Plain<Job> & {
+    customer: Pick<Plain<Customer>, 'id' | 'name'>;
+    site: Pick<Plain<Site>, 'id' | 'name' | 'addressLine' | 'city'>;
+    crew: Pick<Plain<Crew>, 'id' | 'name'> | null;
+  };
   const byId = new Map(view.events.map((event) => [event.id, event]));
   const log = view.events.map((event) => {
     const target = event.correctsEventId ? byId.get(event.correctsEventId) : undefined;
-    return { ...event, corrects: target ? { id: target.id, type: target.type, deviceTime: target.deviceTime, payload: target.payload } : null };
+    return {
+      ...event,
+      corrects: target
+        ? { id: target.id, type: target.type, deviceTime: target.deviceTime, payload: target.payload }
+        : null,
+    };
   });
   return {
     ...view,
@@ -102,7 +134,9 @@ export async function getInstallReview(user: SessionUser, id: string, now = new 
     jobStatus: plainJob.status,
     reviewComment: plainJob.reviewComment,
     reviews: reviews.map((review) => {
-      const { reviewer, ...columns } = review.get({ plain: true }) as Plain<Review> & { reviewer?: { name: string } | null };
+      const { reviewer, ...columns } = review.get({ plain: true }) as Plain<Review> & {
+        reviewer?: { name: string } | null;
+      };
       return { ...columns, reviewerName: reviewer?.name ?? null };
     }),
   };
@@ -118,23 +152,51 @@ export type ReviewInstallResponse = Awaited<ReturnType<typeof reviewInstall>>;
 export async function reviewInstall(user: SessionUser, id: string, input: ReviewDecision) {
   assertOfficeWriter(user);
   return sequelize.transaction(async (t) => {
-    const install = await Install.findOne({ where: { id, companyId: user.companyId }, lock: t.LOCK.UPDATE, transaction: t });
+    const install = await Install.findOne({
+      where: { id, companyId: user.companyId },
+      lock: t.LOCK.UPDATE,
+      transaction: t,
+    });
     if (!install) throw notFound('Install');
     if (install.status !== 'awaiting_review') {
-      throw new AppError(409, `This install is ${install.status.replace(/_/g, ' ')}: only an install awaiting review can be approved or sent back.`);
+      throw new AppError(
+        409,
+        `This install is ${install.status.replace(/_/g, ' ')}: only an install awaiting review can be approved or sent back.`,
+      );
     }
-    const review = await Review.create({ companyId: user.companyId, installId: id, reviewerId: user.id, decision: input.decision, comment: input.comment }, { transaction: t });
+    const review = await Review.create(
+      {
+        companyId: user.companyId,
+        installId: id,
+        reviewerId: user.id,
+        decision: input.decision,
+        comment: input.comment,
+      },
+      { transaction: t },
+    );
     await install.update({ status: input.decision }, { transaction: t });
-    await recordAudit(user, {
-      action: input.decision === 'approved' ? 'install.approved' : 'install.sent_back',
-      entityType: 'install',
-      entityId: id,
-      changes: { status: { from: 'awaiting_review', to: input.decision }, reviewId: review.id },
-      reason: input.comment,
-    }, t);
-    const job = await Job.findOne({ where: { id: install.jobId, companyId: user.companyId }, lock: t.LOCK.UPDATE, transaction: t });
+    await recordAudit(
+      user,
+      {
+        action: input.decision === 'approved' ? 'install.approved' : 'install.sent_back',
+        entityType: 'install',
+        entityId: id,
+        changes: { status: { from: 'awaiting_review', to: input.decision }, reviewId: review.id },
+        reason: input.comment,
+      },
+      t,
+    );
+    const job = await Job.findOne({
+      where: { id: install.jobId, companyId: user.companyId },
+      lock: t.LOCK.UPDATE,
+      transaction: t,
+    });
     if (job) await followJob(user, job, input, t);
-    return { review: review.get({ plain: true }), install: install.get({ plain: true }), job: job ? { id: job.id, status: job.status, reviewComment: job.reviewComment } : null };
+    return {
+      review: review.get({ plain: true }),
+      install: install.get({ plain: true }),
+      job: job ? { id: job.id, status: job.status, reviewComment: job.reviewComment } : null,
+    };
   });
 }
 
@@ -143,9 +205,12 @@ async function followJob(user: SessionUser, job: Job, input: ReviewDecision, t: 
   const before = { status: job.status, reviewComment: job.reviewComment };
   let next: Partial<typeof before> = {};
   if (input.decision === 'sent_back') next = { status: 'sent_back', reviewComment: input.comment };
-  else if (!['reported', 'closed', 'cancelled'].includes(job.status) && (await everyRepairApproved(user, job.id, t))) next = { status: 'approved', reviewComment: null };
+  else if (!['reported', 'closed', 'cancelled'].includes(job.status) && (await everyRepairApproved(user, job.id, t)))
+    next = { status: 'approved', reviewComment: null };
   const changes = Object.fromEntries(
-    Object.entries(next).filter(([key, to]) => before[key as keyof typeof before] !== to).map(([key, to]) => [key, { from: before[key as keyof typeof before], to }]),
+    Object.entries(next)
+      .filter(([key, to]) => before[key as keyof typeof before] !== to)
+      .map(([key, to]) => [key, { from: before[key as keyof typeof before], to }]),
   );
   if (Object.keys(changes).length === 0) return;
   await job.update(next, { transaction: t });
@@ -155,10 +220,22 @@ async function followJob(user: SessionUser, job: Job, input: ReviewDecision, t: 
 /** True when the latest install (abandoned ones aside) of every live repair of the job is approved. */
 async function everyRepairApproved(user: SessionUser, jobId: string, t: Transaction) {
   const [repairs, installs] = await Promise.all([
-    Repair.findAll({ where: { jobId, companyId: user.companyId, status: { [Op.ne]: 'cancelled' } }, attributes: ['id'], transaction: t }),
-    Install.findAll({ where: { jobId, companyId: user.companyId, status: { [Op.ne]: 'abandoned' } }, attributes: ['repairId', 'status'], order: [['createdAt', 'DESC']], transaction: t }),
+    Repair.findAll({
+      where: { jobId, companyId: user.companyId, status: { [Op.ne]: 'cancelled' } },
+      attributes: ['id'],
+      transaction: t,
+    }),
+    Install.findAll({
+      where: { jobId, companyId: user.companyId, status: { [Op.ne]: 'abandoned' } },
+      attributes: ['repairId', 'status'],
+      order: [['createdAt', 'DESC']],
+      transaction: t,
+    }),
   ]);
-  return repairs.length > 0 && repairs.every((repair) => installs.find((i) => i.repairId === repair.id)?.status === 'approved');
+  return (
+    repairs.length > 0 &&
+    repairs.every((repair) => installs.find((i) => i.repairId === repair.id)?.status === 'approved')
+  );
 }
 
 /** Field users see the installs of their crews (by the install's crew or its job's). */
@@ -186,7 +263,12 @@ const LIST_INCLUDE = [
     as: 'repair',
     attributes: ['id', 'position', 'distanceMm', 'defectType', 'clockPosition'],
     include: [
-      { model: Segment, as: 'segment', attributes: ['id', 'label'], include: [{ model: AccessPoint, as: 'fromAccessPoint', attributes: ['label'] }] },
+      {
+        model: Segment,
+        as: 'segment',
+        attributes: ['id', 'label'],
+        include: [{ model: AccessPoint, as: 'fromAccessPoint', attributes: ['label'] }],
+      },
       { model: AccessPoint, as: 'fromAccessPoint', attributes: ['label'] },
     ],
   },
@@ -214,7 +296,9 @@ type ListRow = Plain<Install> & {
 /** List rows with their flags, worked out from each install's event log by the field screen's own rule. */
 async function itemsOf(user: SessionUser, rows: Install[], company: Company, now: Date) {
   const ids = rows.map((row) => row.id);
-  const events = ids.length ? await InstallEvent.findAll({ where: { companyId: user.companyId, installId: { [Op.in]: ids } } }) : [];
+  const events = ids.length
+    ? await InstallEvent.findAll({ where: { companyId: user.companyId, installId: { [Op.in]: ids } } })
+    : [];
   const byInstall = new Map<string, Plain<InstallEvent>[]>();
   for (const event of events) {
     const list = byInstall.get(event.installId) ?? [];
@@ -226,7 +310,9 @@ async function itemsOf(user: SessionUser, rows: Install[], company: Company, now
     const { flags } = installClock({
       state: deriveInstallState(byInstall.get(row.id) ?? []),
       resin: row.resinSystem ? resinClockSpec(row.resinSystem) : null,
-      packer: row.packer ? { minPressureKpa: row.packer.minPressureKpa, maxPressureKpa: row.packer.maxPressureKpa } : null,
+      packer: row.packer
+        ? { minPressureKpa: row.packer.minPressureKpa, maxPressureKpa: row.packer.maxPressureKpa }
+        : null,
       resinKitExpiresOn: row.resinKit?.expiresOn ?? null,
       safetyMargin: company.workingWindowSafetyMargin,
       holdReserve: company.holdReserve,
@@ -262,5 +348,8 @@ async function itemsOf(user: SessionUser, rows: Install[], company: Company, now
 
 /** Flag sentences with their instants in the company's zone, as the office reads them. */
 function localisedFlags(flags: QualityFlag[], timeZone: string): QualityFlag[] {
-  return flags.map((flag) => ({ ...flag, message: localiseSentence(flag.message, (at) => formatInZone(at, timeZone)) }));
+  return flags.map((flag) => ({
+    ...flag,
+    message: localiseSentence(flag.message, (at) => formatInZone(at, timeZone)),
+  }));
 }

@@ -56,10 +56,18 @@ export async function getScheduleBoard(user: SessionUser, week?: string, now = n
   const end = days[6].date;
   const crewScope: WhereOptions | undefined = isDeskRole(user.role) ? undefined : { crewId: { [Op.in]: user.crewIds } };
 
-  const weekJobs = await findBoardJobs(allOf(
-    { companyId: user.companyId, archivedAt: null, crewId: { [Op.ne]: null }, scheduledDate: { [Op.between]: [start, end] }, status: { [Op.notIn]: OFF_BOARD } },
-    crewScope,
-  ));
+  const weekJobs = await findBoardJobs(
+    allOf(
+      {
+        companyId: user.companyId,
+        archivedAt: null,
+        crewId: { [Op.ne]: null },
+        scheduledDate: { [Op.between]: [start, end] },
+        status: { [Op.notIn]: OFF_BOARD },
+      },
+      crewScope,
+    ),
+  );
   const bookedCrewIds = [...new Set(weekJobs.map((job) => job.crewId as string))];
   const crews = await Crew.findAll({
     where: allOf(
@@ -69,18 +77,27 @@ export async function getScheduleBoard(user: SessionUser, week?: string, now = n
     order: [['name', 'ASC']],
   });
   const unscheduled = isDeskRole(user.role)
-    ? await findBoardJobs({
-        companyId: user.companyId,
-        archivedAt: null,
-        status: { [Op.notIn]: SETTLED },
-        [Op.or]: [{ status: 'draft' }, { crewId: null }, { scheduledDate: null }],
-      }, UNSCHEDULED_LIMIT)
+    ? await findBoardJobs(
+        {
+          companyId: user.companyId,
+          archivedAt: null,
+          status: { [Op.notIn]: SETTLED },
+          [Op.or]: [{ status: 'draft' }, { crewId: null }, { scheduledDate: null }],
+        },
+        UNSCHEDULED_LIMIT,
+      )
     : [];
 
   return {
     timeZone,
     today: dayInZone(now, timeZone),
-    week: { start, end, previous: shiftWeek(start, -1, timeZone), next: shiftWeek(start, 1, timeZone), current: currentWeekStart(now, timeZone) },
+    week: {
+      start,
+      end,
+      previous: shiftWeek(start, -1, timeZone),
+      next: shiftWeek(start, 1, timeZone),
+      current: currentWeekStart(now, timeZone),
+    },
     days,
     crews: crews.map((crew): BoardCrew => ({
       id: crew.id,
@@ -107,20 +124,38 @@ export async function scheduleJob(user: SessionUser, jobId: string, input: Sched
   return sequelize.transaction(async (transaction) => {
     const job = await lockMovableJob(user, jobId, 'scheduled', transaction);
     const crew = await Crew.findOne({ where: { id: input.crewId, companyId: user.companyId }, transaction });
-    if (!crew) throw new AppError(422, 'Pick one of your company’s crews.', { crewId: ['Not one of your company’s crews'] });
-    if (crew.archivedAt) throw new AppError(422, `${crew.name} is archived: pick an active crew.`, { crewId: ['This crew is archived'] });
+    if (!crew)
+      throw new AppError(422, 'Pick one of your company’s crews.', { crewId: ['Not one of your company’s crews'] });
+    if (crew.archivedAt)
+      throw new AppError(422, `${crew.name} is archived: pick an active crew.`, { crewId: ['This crew is archived'] });
 
-    const patch = { crewId: crew.id, scheduledDate: input.date, status: job.status === 'draft' ? ('scheduled' as const) : job.status };
+    const patch = {
+      crewId: crew.id,
+      scheduledDate: input.date,
+      status: job.status === 'draft' ? ('scheduled' as const) : job.status,
+    };
     const changes = changedFields(job.get({ plain: true }), patch);
     if (Object.keys(changes).length) await job.update(patch, { transaction });
     const jobsThatDay = await Job.count({
-      where: { companyId: user.companyId, crewId: crew.id, scheduledDate: input.date, archivedAt: null, status: { [Op.notIn]: OFF_BOARD } },
+      where: {
+        companyId: user.companyId,
+        crewId: crew.id,
+        scheduledDate: input.date,
+        archivedAt: null,
+        status: { [Op.notIn]: OFF_BOARD },
+      },
       transaction,
     });
     const overCapacity = jobsThatDay > crew.dailyCapacity;
     if (Object.keys(changes).length) {
-      const reason = overCapacity ? `Booked over capacity: ${jobsThatDay} jobs for ${crew.name} on ${input.date} (capacity ${crew.dailyCapacity}).` : null;
-      await recordAudit(user, { action: 'schedule', entityType: ENTITY, entityId: job.id, changes, reason }, transaction);
+      const reason = overCapacity
+        ? `Booked over capacity: ${jobsThatDay} jobs for ${crew.name} on ${input.date} (capacity ${crew.dailyCapacity}).`
+        : null;
+      await recordAudit(
+        user,
+        { action: 'schedule', entityType: ENTITY, entityId: job.id, changes, reason },
+        transaction,
+      );
     }
     return {
       job: job.get({ plain: true }),
@@ -148,15 +183,27 @@ export async function unscheduleJob(user: SessionUser, jobId: string) {
 }
 
 /** The caller's job, locked, when it may still be moved on the schedule; 404 or 409 otherwise. */
-async function lockMovableJob(user: SessionUser, jobId: string, verb: 'scheduled' | 'unscheduled', transaction: Transaction) {
-  const job = await Job.findOne({ where: { id: jobId, companyId: user.companyId }, transaction, lock: transaction.LOCK.UPDATE });
+async function lockMovableJob(
+  user: SessionUser,
+  jobId: string,
+  verb: 'scheduled' | 'unscheduled',
+  transaction: Transaction,
+) {
+  const job = await Job.findOne({
+    where: { id: jobId, companyId: user.companyId },
+    transaction,
+    lock: transaction.LOCK.UPDATE,
+  });
   if (!job) throw notFound('Job');
   if (job.archivedAt) throw new AppError(409, `Job ${job.number} is archived: restore it before it is ${verb}.`);
   // Past these the office has the crew's work in hand (or the job is settled): moving it would rewrite what happened.
   if (!SCHEDULABLE_STATUSES.includes(job.status)) {
     throw new AppError(409, `Job ${job.number} is ${label(job.status).toLowerCase()}: it can no longer be ${verb}.`);
   }
-  const started = await Install.count({ where: { jobId: job.id, companyId: user.companyId, status: { [Op.notIn]: NOT_STARTED } }, transaction });
+  const started = await Install.count({
+    where: { jobId: job.id, companyId: user.companyId, status: { [Op.notIn]: NOT_STARTED } },
+    transaction,
+  });
   if (started > 0) throw new AppError(409, `Installs have started on job ${job.number}: it can no longer be ${verb}.`);
   return job;
 }
@@ -165,14 +212,27 @@ async function findBoardJobs(where: WhereOptions, limit?: number): Promise<Board
   const rows = await Job.findAll({
     where,
     attributes: [
-      'id', 'number', 'title', 'status', 'crewId', 'scheduledDate',
-      [sequelize.literal(`(SELECT COUNT(*)::int FROM repairs r WHERE r.job_id = "Job"."id" AND r.status <> 'cancelled')`), 'repairCount'],
+      'id',
+      'number',
+      'title',
+      'status',
+      'crewId',
+      'scheduledDate',
+      [
+        sequelize.literal(
+          `(SELECT COUNT(*)::int FROM repairs r WHERE r.job_id = "Job"."id" AND r.status <> 'cancelled')`,
+        ),
+        'repairCount',
+      ],
     ],
     include: [
       { model: Customer, as: 'customer', attributes: ['name'] },
       { model: Site, as: 'site', attributes: ['addressLine', 'city'] },
     ],
-    order: [['scheduledDate', 'ASC NULLS FIRST'], ['number', 'ASC']],
+    order: [
+      ['scheduledDate', 'ASC NULLS FIRST'],
+      ['number', 'ASC'],
+    ],
     limit,
   });
   return rows.map((row) => {

@@ -19,7 +19,11 @@ export function assertAdmin(user: SessionUser) {
  * For field users, limits a query to rows their crews' jobs use: `column` must be IN the given column of
  * those jobs (e.g. `id` of customers IN jobs.customer_id). Desk users see the whole company; undefined then.
  */
-export function crewJobsWhere(user: SessionUser, column: string, jobColumn: 'id' | 'customer_id' | 'site_id'): WhereOptions | undefined {
+export function crewJobsWhere(
+  user: SessionUser,
+  column: string,
+  jobColumn: 'id' | 'customer_id' | 'site_id',
+): WhereOptions | undefined {
   if (isDeskRole(user.role)) return undefined;
   if (user.crewIds.length === 0) return { id: null }; // no crew, nothing to read
   const crewList = user.crewIds.map((id) => sequelize.escape(id)).join(', ');

@@ -6,7 +6,12 @@ import { sequelize } from '@/lib/data/db';
 import { changedFields, recordAudit } from '@/lib/data/audit';
 import { AppError, notFound } from '@/lib/server/errors';
 import type { SessionUser } from '@/lib/auth/session';
-import { segmentShapeIssues, type SegmentListQuery, type segmentInputSchema, type segmentPatchSchema } from '@/lib/validation/segments';
+import {
+  segmentShapeIssues,
+  type SegmentListQuery,
+  type segmentInputSchema,
+  type segmentPatchSchema,
+} from '@/lib/validation/segments';
 import { allOf, archivedWhere, pageOf, searchWhere, windowOf } from './list';
 import { assertOfficeWriter, crewJobsWhere } from './scope';
 import { archiveOrDelete } from './records';
@@ -36,10 +41,17 @@ export async function listSegments(user: SessionUser, query: SegmentListQuery, e
   const { rows, count } = await Segment.findAndCountAll({
     where,
     include: [{ model: Site, as: 'site', attributes: ['id', 'name'] }],
-    order: [[query.sort, query.dir.toUpperCase()], ['id', 'ASC']],
+    order: [
+      [query.sort, query.dir.toUpperCase()],
+      ['id', 'ASC'],
+    ],
     ...windowOf(query, exportAll),
   });
-  return pageOf(rows.map((row) => row.get({ plain: true }) as SegmentListItem), count, query);
+  return pageOf(
+    rows.map((row) => row.get({ plain: true }) as SegmentListItem),
+    count,
+    query,
+  );
 }
 
 export type SegmentResponse = Awaited<ReturnType<typeof getSegment>>;
@@ -59,9 +71,15 @@ export async function getSegment(user: SessionUser, id: string): Promise<Segment
   const repairs = await Repair.findAll({
     where: allOf({ segmentId: id, companyId: user.companyId }, crewJobsWhere(user, 'job_id', 'id')),
     include: [{ model: Job, as: 'job', attributes: ['id', 'number', 'status'] }],
-    order: [['distanceMm', 'ASC'], ['position', 'ASC']],
+    order: [
+      ['distanceMm', 'ASC'],
+      ['position', 'ASC'],
+    ],
   });
-  return { ...(segment.get({ plain: true }) as Omit<SegmentDetail, 'repairs'>), repairs: repairs.map((r) => r.get({ plain: true }) as SegmentDetail['repairs'][number]) };
+  return {
+    ...(segment.get({ plain: true }) as Omit<SegmentDetail, 'repairs'>),
+    repairs: repairs.map((r) => r.get({ plain: true }) as SegmentDetail['repairs'][number]),
+  };
 }
 
 export async function createSegment(user: SessionUser, input: z.output<typeof segmentInputSchema>) {
@@ -72,7 +90,11 @@ export async function createSegment(user: SessionUser, input: z.output<typeof se
     if (site.archivedAt) throw new AppError(422, 'That site is archived.', { siteId: ['This site is archived'] });
     await assertEndsOnSite(user, input, transaction);
     const segment = await Segment.create({ ...input, companyId: user.companyId }, { transaction });
-    await recordAudit(user, { action: 'create', entityType: ENTITY, entityId: segment.id, changes: input }, transaction);
+    await recordAudit(
+      user,
+      { action: 'create', entityType: ENTITY, entityId: segment.id, changes: input },
+      transaction,
+    );
     return segment.get({ plain: true });
   });
 }
@@ -80,7 +102,11 @@ export async function createSegment(user: SessionUser, input: z.output<typeof se
 export async function updateSegment(user: SessionUser, id: string, patch: z.output<typeof segmentPatchSchema>) {
   assertOfficeWriter(user);
   return sequelize.transaction(async (transaction) => {
-    const segment = await Segment.findOne({ where: { id, companyId: user.companyId }, transaction, lock: transaction.LOCK.UPDATE });
+    const segment = await Segment.findOne({
+      where: { id, companyId: user.companyId },
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
     if (!segment) throw notFound('Segment');
     const merged = { ...segment.get({ plain: true }), ...definedOf(patch) };
     // The patch alone may be sound while the segment it makes is not (a new nominal size against the old diameter).
@@ -100,25 +126,45 @@ export async function updateSegment(user: SessionUser, id: string, patch: z.outp
 export async function archiveSegment(user: SessionUser, id: string, reason?: string | null) {
   assertOfficeWriter(user);
   return sequelize.transaction(async (transaction) => {
-    const segment = await Segment.findOne({ where: { id, companyId: user.companyId }, transaction, lock: transaction.LOCK.UPDATE });
+    const segment = await Segment.findOne({
+      where: { id, companyId: user.companyId },
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
     if (!segment) throw notFound('Segment');
     const repairs = await Repair.count({ where: { segmentId: id, companyId: user.companyId }, transaction });
-    return archiveOrDelete(user, segment, { entityType: ENTITY, inUse: repairs > 0, summary: { siteId: segment.siteId, label: segment.label }, reason }, transaction);
+    return archiveOrDelete(
+      user,
+      segment,
+      { entityType: ENTITY, inUse: repairs > 0, summary: { siteId: segment.siteId, label: segment.label }, reason },
+      transaction,
+    );
   });
 }
 
 /** Both ends must be access points of the segment's own site (of the caller's company): 422 otherwise. */
-async function assertEndsOnSite(user: SessionUser, segment: { siteId: string; fromAccessPointId: string; toAccessPointId?: string | null }, transaction: Transaction) {
+async function assertEndsOnSite(
+  user: SessionUser,
+  segment: { siteId: string; fromAccessPointId: string; toAccessPointId?: string | null },
+  transaction: Transaction,
+) {
   const ids = [segment.fromAccessPointId, segment.toAccessPointId].filter((id): id is string => Boolean(id));
-  const found = await AccessPoint.findAll({ where: { id: { [Op.in]: ids }, siteId: segment.siteId, companyId: user.companyId }, attributes: ['id'], transaction });
+  const found = await AccessPoint.findAll({
+    where: { id: { [Op.in]: ids }, siteId: segment.siteId, companyId: user.companyId },
+    attributes: ['id'],
+    transaction,
+  });
   const onSite = new Set(found.map((point) => point.id));
   const fields: Record<string, string[]> = {};
   if (!onSite.has(segment.fromAccessPointId)) fields.fromAccessPointId = ['Pick an access point of this site'];
-  if (segment.toAccessPointId && !onSite.has(segment.toAccessPointId)) fields.toAccessPointId = ['Pick an access point of this site'];
-  if (Object.keys(fields).length) throw new AppError(422, 'Both ends of a segment must be access points of its site.', fields);
+  if (segment.toAccessPointId && !onSite.has(segment.toAccessPointId))
+    fields.toAccessPointId = ['Pick an access point of this site'];
+  if (Object.keys(fields).length)
+    throw new AppError(422, 'Both ends of a segment must be access points of its site.', fields);
 }
 
-const definedOf = <T extends object>(patch: T) => Object.fromEntries(Object.entries(patch).filter(([, value]) => value !== undefined)) as Partial<T>;
+const definedOf = <T extends object>(patch: T) =>
+  Object.fromEntries(Object.entries(patch).filter(([, value]) => value !== undefined)) as Partial<T>;
 
 /** Field users read only the segments on the sites of their crews' jobs. */
 const segmentScope = (user: SessionUser) => crewJobsWhere(user, 'site_id', 'site_id');

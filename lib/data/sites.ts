@@ -15,7 +15,11 @@ const ENTITY = 'site';
 
 type Plain<T extends Site | Customer | AccessPoint | Segment> = InferAttributes<T>;
 export type SiteListItem = Plain<Site> & { customer: Pick<Plain<Customer>, 'id' | 'name'> | null };
-export type SiteDetail = Plain<Site> & { customer: Plain<Customer>; accessPoints: Plain<AccessPoint>[]; segments: Plain<Segment>[] };
+export type SiteDetail = Plain<Site> & {
+  customer: Plain<Customer>;
+  accessPoints: Plain<AccessPoint>[];
+  segments: Plain<Segment>[];
+};
 
 export type SiteListResponse = Awaited<ReturnType<typeof listSites>>;
 
@@ -31,10 +35,17 @@ export async function listSites(user: SessionUser, query: SiteListQuery, exportA
   const { rows, count } = await Site.findAndCountAll({
     where,
     include: [{ model: Customer, as: 'customer', attributes: ['id', 'name'] }],
-    order: [[query.sort, query.dir.toUpperCase()], ['id', 'ASC']],
+    order: [
+      [query.sort, query.dir.toUpperCase()],
+      ['id', 'ASC'],
+    ],
     ...windowOf(query, exportAll),
   });
-  return pageOf(rows.map((row) => row.get({ plain: true }) as SiteListItem), count, query);
+  return pageOf(
+    rows.map((row) => row.get({ plain: true }) as SiteListItem),
+    count,
+    query,
+  );
 }
 
 export type SiteResponse = Awaited<ReturnType<typeof getSite>>;
@@ -67,7 +78,11 @@ export async function findVisibleSite(user: SessionUser, id: string) {
 /** Customers a new site can belong to, for the form's select. */
 export async function listCustomerChoices(user: SessionUser) {
   assertOfficeWriter(user);
-  const rows = await Customer.findAll({ where: { companyId: user.companyId, archivedAt: null }, attributes: ['id', 'name'], order: [['name', 'ASC']] });
+  const rows = await Customer.findAll({
+    where: { companyId: user.companyId, archivedAt: null },
+    attributes: ['id', 'name'],
+    order: [['name', 'ASC']],
+  });
   return rows.map((row) => ({ id: row.id, name: row.name }));
 }
 
@@ -75,9 +90,16 @@ export async function createSite(user: SessionUser, input: z.output<typeof siteI
   assertOfficeWriter(user);
   return sequelize.transaction(async (transaction) => {
     // Another company's customer gets the same answer as one that does not exist.
-    const customer = await Customer.findOne({ where: { id: input.customerId, companyId: user.companyId }, transaction });
-    if (!customer) throw new AppError(422, 'That customer was not found.', { customerId: ['Pick one of your customers'] });
-    if (customer.archivedAt) throw new AppError(422, 'That customer is archived.', { customerId: ['This customer is archived: restore it or pick another'] });
+    const customer = await Customer.findOne({
+      where: { id: input.customerId, companyId: user.companyId },
+      transaction,
+    });
+    if (!customer)
+      throw new AppError(422, 'That customer was not found.', { customerId: ['Pick one of your customers'] });
+    if (customer.archivedAt)
+      throw new AppError(422, 'That customer is archived.', {
+        customerId: ['This customer is archived: restore it or pick another'],
+      });
     const site = await Site.create({ ...input, companyId: user.companyId }, { transaction });
     await recordAudit(user, { action: 'create', entityType: ENTITY, entityId: site.id, changes: input }, transaction);
     return site.get({ plain: true });
@@ -87,7 +109,11 @@ export async function createSite(user: SessionUser, input: z.output<typeof siteI
 export async function updateSite(user: SessionUser, id: string, patch: z.output<typeof sitePatchSchema>) {
   assertOfficeWriter(user);
   return sequelize.transaction(async (transaction) => {
-    const site = await Site.findOne({ where: { id, companyId: user.companyId }, transaction, lock: transaction.LOCK.UPDATE });
+    const site = await Site.findOne({
+      where: { id, companyId: user.companyId },
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
     if (!site) throw notFound('Site');
     const changes = changedFields(site.get({ plain: true }), patch);
     if (Object.keys(changes).length) {
@@ -105,13 +131,22 @@ export async function updateSite(user: SessionUser, id: string, patch: z.output<
 export async function archiveSite(user: SessionUser, id: string, reason?: string | null) {
   assertOfficeWriter(user);
   return sequelize.transaction(async (transaction) => {
-    const site = await Site.findOne({ where: { id, companyId: user.companyId }, transaction, lock: transaction.LOCK.UPDATE });
+    const site = await Site.findOne({
+      where: { id, companyId: user.companyId },
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
     if (!site) throw notFound('Site');
     const [segments, jobs] = await Promise.all([
       Segment.count({ where: { siteId: id, companyId: user.companyId }, transaction }),
       Job.count({ where: { siteId: id, companyId: user.companyId }, transaction }),
     ]);
-    return archiveOrDelete(user, site, { entityType: ENTITY, inUse: segments + jobs > 0, summary: { name: site.name }, reason }, transaction);
+    return archiveOrDelete(
+      user,
+      site,
+      { entityType: ENTITY, inUse: segments + jobs > 0, summary: { name: site.name }, reason },
+      transaction,
+    );
   });
 }
 

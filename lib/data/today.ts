@@ -16,7 +16,9 @@ export type InstallSummary = {
   deadline: { label: string; start: string; at: string } | null;
 };
 
-export type TodayJob = Omit<JobDetail, 'crew' | 'repairs'> & { repairs: (JobDetail['repairs'][number] & { install: InstallSummary | null })[] };
+export type TodayJob = Omit<JobDetail, 'crew' | 'repairs'> & {
+  repairs: (JobDetail['repairs'][number] & { install: InstallSummary | null })[];
+};
 
 /** Jobs of the caller's crews scheduled for today and tomorrow in the company's time zone (and any sent back), with any running install. */
 export async function listTodayJobs(user: SessionUser, now = new Date()) {
@@ -38,7 +40,11 @@ export async function listTodayJobs(user: SessionUser, now = new Date()) {
       { model: Site, as: 'site', include: [{ model: AccessPoint, as: 'accessPoints' }] },
       { model: Repair, as: 'repairs', include: [{ model: Segment, as: 'segment' }] },
     ],
-    order: [['scheduledDate', 'ASC'], ['number', 'ASC'], [{ model: Repair, as: 'repairs' }, 'position', 'ASC']],
+    order: [
+      ['scheduledDate', 'ASC'],
+      ['number', 'ASC'],
+      [{ model: Repair, as: 'repairs' }, 'position', 'ASC'],
+    ],
   });
   const repairIds = jobs.flatMap((job) => (job.get('repairs') as Repair[]).map((r) => r.id));
   const installs = await latestInstalls(user, repairIds, company);
@@ -47,7 +53,10 @@ export async function listTodayJobs(user: SessionUser, now = new Date()) {
     tomorrow,
     jobs: jobs.map((job) => {
       const plain = job.get({ plain: true }) as Omit<JobDetail, 'crew'>;
-      return { ...plain, repairs: plain.repairs.map((repair) => ({ ...repair, install: installs.get(repair.id) ?? null })) };
+      return {
+        ...plain,
+        repairs: plain.repairs.map((repair) => ({ ...repair, install: installs.get(repair.id) ?? null })),
+      };
     }),
   };
 }
@@ -58,7 +67,17 @@ async function latestInstalls(user: SessionUser, repairIds: string[], company: C
   const rows = repairIds.length
     ? await Install.findAll({
         where: { companyId: user.companyId, repairId: { [Op.in]: repairIds }, status: { [Op.ne]: 'abandoned' } },
-        attributes: ['id', 'repairId', 'status', 'step', 'mixedAt', 'inflatedAt', 'deflatedAt', 'inflateBy', 'deflateAfter'],
+        attributes: [
+          'id',
+          'repairId',
+          'status',
+          'step',
+          'mixedAt',
+          'inflatedAt',
+          'deflatedAt',
+          'inflateBy',
+          'deflateAfter',
+        ],
         order: [['createdAt', 'ASC']],
       })
     : [];
@@ -68,9 +87,18 @@ async function latestInstalls(user: SessionUser, repairIds: string[], company: C
     if (install.mixedAt && !install.inflatedAt && install.inflateBy) {
       deadline = { label: 'Inflate by', start: install.mixedAt.toISOString(), at: install.inflateBy.toISOString() };
     } else if (install.deflateAfter && install.inflatedAt && !install.deflatedAt) {
-      deadline = { label: 'Deflate after', start: install.inflatedAt.toISOString(), at: install.deflateAfter.toISOString() };
+      deadline = {
+        label: 'Deflate after',
+        start: install.inflatedAt.toISOString(),
+        at: install.deflateAfter.toISOString(),
+      };
     }
-    byRepair.set(install.repairId, { id: install.id, status: install.status, step: install.step as InstallStep, deadline });
+    byRepair.set(install.repairId, {
+      id: install.id,
+      status: install.status,
+      step: install.step as InstallStep,
+      deadline,
+    });
   }
   return byRepair;
 }

@@ -38,7 +38,10 @@ export async function listUsers(user: SessionUser, query: UserListQuery, exportA
   const { rows, count } = await User.findAndCountAll({
     where,
     attributes: [...PUBLIC_ATTRIBUTES],
-    order: [[query.sort, query.dir.toUpperCase()], ['id', 'ASC']],
+    order: [
+      [query.sort, query.dir.toUpperCase()],
+      ['id', 'ASC'],
+    ],
     ...windowOf(query, exportAll),
   });
   return pageOf(rows.map(publicUser), count, query);
@@ -57,7 +60,10 @@ export async function getUser(user: SessionUser, id: string) {
     where: { companyId: user.companyId },
     order: [['name', 'ASC']],
   });
-  return { ...publicUser(row), crews: crews.map((crew) => ({ id: crew.id, name: crew.name, archivedAt: crew.archivedAt ?? null })) };
+  return {
+    ...publicUser(row),
+    crews: crews.map((crew) => ({ id: crew.id, name: crew.name, archivedAt: crew.archivedAt ?? null })),
+  };
 }
 
 export async function createUser(user: SessionUser, input: z.output<typeof userInputSchema>) {
@@ -87,11 +93,13 @@ export async function updateUser(user: SessionUser, id: string, patch: UserPatch
   assertAdmin(user);
   return sequelize.transaction(async (transaction) => {
     // Admins are locked first, always in the same order, so two admins demoting each other cannot deadlock.
-    const admins = patch.role !== undefined || patch.active !== undefined ? await lockActiveAdmins(user, transaction) : [];
+    const admins =
+      patch.role !== undefined || patch.active !== undefined ? await lockActiveAdmins(user, transaction) : [];
     const row = await lockUser(user, id, transaction);
     const changes = changedFields(row.get({ plain: true }), patch);
     const losesAdmin = row.role === 'admin' && row.active && ('role' in changes || changes.active?.to === false);
-    if (losesAdmin && id === user.id) throw new AppError(409, 'You cannot deactivate yourself or take away your own admin role.');
+    if (losesAdmin && id === user.id)
+      throw new AppError(409, 'You cannot deactivate yourself or take away your own admin role.');
     if (losesAdmin && admins.filter((adminId) => adminId !== id).length === 0) {
       throw new AppError(409, 'This is the last active admin: make someone else an admin first.');
     }
@@ -116,13 +124,21 @@ export async function resetPassword(user: SessionUser, id: string, password: str
   return sequelize.transaction(async (transaction) => {
     const row = await lockUser(user, id, transaction);
     await row.update({ passwordHash, tokenVersion: row.tokenVersion + 1 }, { transaction });
-    await recordAudit(user, { action: 'password_reset', entityType: ENTITY, entityId: id, changes: { sessionsEnded: true } }, transaction);
+    await recordAudit(
+      user,
+      { action: 'password_reset', entityType: ENTITY, entityId: id, changes: { sessionsEnded: true } },
+      transaction,
+    );
     return publicUser(row);
   });
 }
 
 async function lockUser(user: SessionUser, id: string, transaction: Transaction) {
-  const row = await User.findOne({ where: { id, companyId: user.companyId }, transaction, lock: transaction.LOCK.UPDATE });
+  const row = await User.findOne({
+    where: { id, companyId: user.companyId },
+    transaction,
+    lock: transaction.LOCK.UPDATE,
+  });
   if (!row) throw notFound('User');
   return row;
 }
@@ -139,4 +155,7 @@ async function lockActiveAdmins(user: SessionUser, transaction: Transaction) {
   return rows.map((row) => row.id);
 }
 
-const emailTaken = () => new AppError(409, 'That e-mail already belongs to an account.', { email: ['That e-mail already belongs to an account'] });
+const emailTaken = () =>
+  new AppError(409, 'That e-mail already belongs to an account.', {
+    email: ['That e-mail already belongs to an account'],
+  });

@@ -11,7 +11,9 @@ export function bucklingThicknessIn(p: {
   poisson: number;
   safetyFactor: number;
 }): number {
-  const cube = (2 * p.enhancementK * p.longTermModulusPsi * p.ovalityC) / ((1 - p.poisson * p.poisson) * p.waterPsi * p.safetyFactor);
+  const cube =
+    (2 * p.enhancementK * p.longTermModulusPsi * p.ovalityC) /
+    ((1 - p.poisson * p.poisson) * p.waterPsi * p.safetyFactor);
   const sdr = 1 + Math.cbrt(cube);
   return p.diameterIn / sdr;
 }

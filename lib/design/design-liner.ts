@@ -18,11 +18,17 @@ import type { DesignCheck, DesignChecks, LinerDesign, LinerDesignInput } from '.
 const optional = (value: unknown): value is undefined | null => value === undefined || value === null;
 
 function waterHeights(input: LinerDesignInput, diameterIn: number): { aboveInvertFt: number; aboveTopFt: number } {
-  const invert = optional(input.groundwaterFtAboveInvert) ? undefined : requireNonNegative(input.groundwaterFtAboveInvert, 'Groundwater above invert');
-  const top = optional(input.waterAboveTopFt) ? undefined : requireNonNegative(input.waterAboveTopFt, 'Water above top of pipe');
+  const invert = optional(input.groundwaterFtAboveInvert)
+    ? undefined
+    : requireNonNegative(input.groundwaterFtAboveInvert, 'Groundwater above invert');
+  const top = optional(input.waterAboveTopFt)
+    ? undefined
+    : requireNonNegative(input.waterAboveTopFt, 'Water above top of pipe');
   const diameterFt = diameterIn / IN_PER_FT;
   if (invert !== undefined && top !== undefined && top > invert) {
-    throw new DesignInputError(`Water ${top} ft above the top of the pipe cannot exceed the ${invert} ft above its invert.`);
+    throw new DesignInputError(
+      `Water ${top} ft above the top of the pipe cannot exceed the ${invert} ft above its invert.`,
+    );
   }
   // One height given is enough: the other differs by the pipe's height (its mean diameter).
   return {
@@ -51,20 +57,37 @@ export function designLiner(input: LinerDesignInput): LinerDesign {
   const ovalityC = ovalityReduction(input.ovalityPct);
   const ovalityPct = input.ovalityPct;
   const longTermModulusPsi = requirePositive(input.longTermModulusPsi, 'Long-term modulus');
-  const shortTermModulusPsi = optional(input.shortTermModulusPsi) ? undefined : requirePositive(input.shortTermModulusPsi, 'Short-term modulus');
-  const flexuralStrengthPsi = optional(input.flexuralStrengthPsi) ? undefined : requirePositive(input.flexuralStrengthPsi, 'Flexural strength');
-  const safetyFactor = optional(input.safetyFactor) ? DEFAULT_SAFETY_FACTOR : requireNumber(input.safetyFactor, 'Safety factor');
+  const shortTermModulusPsi = optional(input.shortTermModulusPsi)
+    ? undefined
+    : requirePositive(input.shortTermModulusPsi, 'Short-term modulus');
+  const flexuralStrengthPsi = optional(input.flexuralStrengthPsi)
+    ? undefined
+    : requirePositive(input.flexuralStrengthPsi, 'Flexural strength');
+  const safetyFactor = optional(input.safetyFactor)
+    ? DEFAULT_SAFETY_FACTOR
+    : requireNumber(input.safetyFactor, 'Safety factor');
   if (safetyFactor < 1) throw new DesignInputError(`Safety factor must be at least 1 (got ${safetyFactor}).`);
-  const enhancementK = optional(input.enhancementK) ? DEFAULT_ENHANCEMENT_K : requireNumber(input.enhancementK, 'Enhancement factor K');
+  const enhancementK = optional(input.enhancementK)
+    ? DEFAULT_ENHANCEMENT_K
+    : requireNumber(input.enhancementK, 'Enhancement factor K');
   if (enhancementK < 1) throw new DesignInputError(`Enhancement factor K must be at least 1 (got ${enhancementK}).`);
   const poisson = optional(input.poisson) ? DEFAULT_POISSON : requireNumber(input.poisson, "Poisson's ratio");
-  if (poisson < 0 || poisson >= 0.5) throw new DesignInputError(`Poisson's ratio must be from 0 to below 0.5 (got ${poisson}).`);
+  if (poisson < 0 || poisson >= 0.5)
+    throw new DesignInputError(`Poisson's ratio must be from 0 to below 0.5 (got ${poisson}).`);
   const water = waterHeights(input, diameterIn);
 
   const checks: DesignChecks = {};
   const waterPsi = PSI_PER_FT_WATER * water.aboveInvertFt;
   if (waterPsi > 0) {
-    checks.buckling = bucklingThicknessIn({ diameterIn, waterPsi, enhancementK, longTermModulusPsi, ovalityC, poisson, safetyFactor });
+    checks.buckling = bucklingThicknessIn({
+      diameterIn,
+      waterPsi,
+      enhancementK,
+      longTermModulusPsi,
+      ovalityC,
+      poisson,
+      safetyFactor,
+    });
     if (flexuralStrengthPsi !== undefined && ovalityPct > 0) {
       checks.ovality = ovalityThicknessIn({ diameterIn, ovalityPct, flexuralStrengthPsi, waterPsi, safetyFactor });
     }

@@ -18,7 +18,12 @@ export function elasticSupport(soilCoverFt: number): number {
 }
 
 /** Total external load q_t = 0.433·H_w + w·H·R_w/144 + W_s, psi. */
-export function totalLoadPsi(p: { waterAboveTopFt: number; soilCoverFt: number; soilDensityPcf: number; liveLoadPsi: number }): number {
+export function totalLoadPsi(p: {
+  waterAboveTopFt: number;
+  soilCoverFt: number;
+  soilDensityPcf: number;
+  liveLoadPsi: number;
+}): number {
   const rw = buoyancyFactor(p.waterAboveTopFt, p.soilCoverFt);
   return PSI_PER_FT_WATER * p.waterAboveTopFt + (p.soilDensityPcf * p.soilCoverFt * rw) / IN2_PER_FT2 + p.liveLoadPsi;
 }

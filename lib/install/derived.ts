@@ -68,7 +68,13 @@ export function foldOfState(state: InstallState, materials: DeriveMaterials = NO
 
 /** An install with no event yet. */
 export const emptyStoredFold = (): StoredFold => ({
-  v: 1, core: toJson(emptyFold()), pressure: null, lastAt: null, lastReceivedAt: null, materials: NO_MATERIALS, clockOk: true,
+  v: 1,
+  core: toJson(emptyFold()),
+  pressure: null,
+  lastAt: null,
+  lastReceivedAt: null,
+  materials: NO_MATERIALS,
+  clockOk: true,
 });
 
 /** True when `event` comes last in log order (device time, then receive time), so it can be folded in alone. */
@@ -82,11 +88,18 @@ export function foldsInOrder(fold: StoredFold, event: Pick<EffectiveEvent, 'devi
 }
 
 /** The fold with one more original event (not a correction), which must come last in log order. */
-export function foldEvent(fold: StoredFold, event: Pick<EffectiveEvent, 'type' | 'deviceTime' | 'receivedAt' | 'payload'>): StoredFold {
+export function foldEvent(
+  fold: StoredFold,
+  event: Pick<EffectiveEvent, 'type' | 'deviceTime' | 'receivedAt' | 'payload'>,
+): StoredFold {
   const core = fromJson(fold.core);
   let pressure = fold.pressure;
   const deviceTime = toDate(event.deviceTime);
-  applyEvent(core, { type: event.type, deviceTime, payload: event.payload ?? {} }, (kpa) => (pressure = addPressure(pressure, kpa)));
+  applyEvent(
+    core,
+    { type: event.type, deviceTime, payload: event.payload ?? {} },
+    (kpa) => (pressure = addPressure(pressure, kpa)),
+  );
   return {
     ...fold,
     core: toJson(core),
@@ -155,9 +168,26 @@ function addPressure(sum: PressureSummary | null, kpa: number): PressureSummary 
 }
 
 // Dates travel as ISO strings in the JSON column.
-type Json<T> = { [K in keyof T]: T[K] extends Date ? string : T[K] extends Date | null ? string | null : T[K] extends object | null ? Json<T[K]> : T[K] };
+type Json<T> = {
+  [K in keyof T]: T[K] extends Date
+    ? string
+    : T[K] extends Date | null
+      ? string | null
+      : T[K] extends object | null
+        ? Json<T[K]>
+        : T[K];
+};
 
-const DATE_KEYS = ['dryRunStartedAt', 'mixedAt', 'patchLoadedAt', 'inPositionAt', 'inflatedAt', 'deflatedAt', 'signedOffAt', 'startedAt'] as const;
+const DATE_KEYS = [
+  'dryRunStartedAt',
+  'mixedAt',
+  'patchLoadedAt',
+  'inPositionAt',
+  'inflatedAt',
+  'deflatedAt',
+  'signedOffAt',
+  'startedAt',
+] as const;
 
 function toJson(core: FoldCore): Json<FoldCore> {
   return JSON.parse(JSON.stringify(core)) as Json<FoldCore>;

@@ -27,10 +27,13 @@ export type EffectiveEvent = {
 
 export const toDate = (value: Date | string) => (value instanceof Date ? value : new Date(value));
 
-const ms = (value: Date | string | null | undefined) => (value == null ? Number.POSITIVE_INFINITY : toDate(value).getTime());
+const ms = (value: Date | string | null | undefined) =>
+  value == null ? Number.POSITIVE_INFINITY : toDate(value).getTime();
 
 /** By device time, then by when the server heard of it (not yet received sorts last). */
-export function sortEvents<E extends { deviceTime: Date | string; receivedAt?: Date | string | null }>(events: readonly E[]): E[] {
+export function sortEvents<E extends { deviceTime: Date | string; receivedAt?: Date | string | null }>(
+  events: readonly E[],
+): E[] {
   return [...events].sort((a, b) => ms(a.deviceTime) - ms(b.deviceTime) || ms(a.receivedAt) - ms(b.receivedAt));
 }
 
@@ -41,4 +44,5 @@ export function applyCorrection(target: EffectiveEvent, correction: Record<strin
   return { ...target, deviceTime, payload: { ...target.payload, ...changes }, corrected: true };
 }
 
-const isRecord = (value: unknown): value is Record<string, unknown> => typeof value === 'object' && value !== null && !Array.isArray(value);
+const isRecord = (value: unknown): value is Record<string, unknown> =>
+  typeof value === 'object' && value !== null && !Array.isArray(value);

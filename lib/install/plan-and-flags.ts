@@ -1,4 +1,12 @@
-import { CureInputError, flagsFor, planCure, type CurePlan, type PackerPressureRating, type QualityFlag, type ResinClockSpec } from '@/lib/cure';
+import {
+  CureInputError,
+  flagsFor,
+  planCure,
+  type CurePlan,
+  type PackerPressureRating,
+  type QualityFlag,
+  type ResinClockSpec,
+} from '@/lib/cure';
 import { formatInZone } from '@/lib/time/dates';
 import { localiseSentence } from '@/lib/review/flags';
 import type { UnitSystem } from '@/lib/units';
@@ -45,25 +53,26 @@ export function installClock(input: InstallClockInput): InstallClock {
   try {
     const conditions = state.conditions;
     const startsAt = state.mixedAt ?? now;
-    const plan: InstallPlan | null = conditions && startsAt
-      ? {
-          ...planCure(resin, {
-            mixedAt: startsAt,
-            mixTempC: conditions.mixTempC,
-            airTempC: conditions.airTempC,
-            pipeTempC: conditions.pipeTempC,
-            inflatedAt: state.mixedAt ? state.inflatedAt : null,
-            deflatedAt: state.mixedAt && state.inflatedAt ? state.deflatedAt : null,
-            dryRunSeconds: state.dryRunSeconds,
-            prepMinutes: conditions.prepMinutes,
-            safetyMargin: input.safetyMargin,
-            holdReserve: input.holdReserve ?? 0,
-            makerHoldMin: state.goDecision?.makerHoldMin,
-            unitSystem: input.unitSystem,
-          }),
-          preview: state.mixedAt === null,
-        }
-      : null;
+    const plan: InstallPlan | null =
+      conditions && startsAt
+        ? {
+            ...planCure(resin, {
+              mixedAt: startsAt,
+              mixTempC: conditions.mixTempC,
+              airTempC: conditions.airTempC,
+              pipeTempC: conditions.pipeTempC,
+              inflatedAt: state.mixedAt ? state.inflatedAt : null,
+              deflatedAt: state.mixedAt && state.inflatedAt ? state.deflatedAt : null,
+              dryRunSeconds: state.dryRunSeconds,
+              prepMinutes: conditions.prepMinutes,
+              safetyMargin: input.safetyMargin,
+              holdReserve: input.holdReserve ?? 0,
+              makerHoldMin: state.goDecision?.makerHoldMin,
+              unitSystem: input.unitSystem,
+            }),
+            preview: state.mixedAt === null,
+          }
+        : null;
     const flags = flagsFor({
       resin,
       mixedAt: state.mixedAt,

@@ -33,5 +33,7 @@ const DECISION_KEYS = ['go', 'overrideReason', 'name'];
 
 /** True when a correction of `targetType` changing `changes` would alter a decision. */
 export function correctsDecision(targetType: string | undefined, changes: Record<string, unknown>): boolean {
-  return (targetType !== undefined && DECISION_TYPES.includes(targetType)) || DECISION_KEYS.some((key) => key in changes);
+  return (
+    (targetType !== undefined && DECISION_TYPES.includes(targetType)) || DECISION_KEYS.some((key) => key in changes)
+  );
 }

@@ -5,7 +5,18 @@ import { applyCorrection, sortEvents, toDate, type EffectiveEvent, type InstallE
 // and what the crew should do next. Pure, so the tablet can run it on queued taps too.
 
 export const INSTALL_STEPS = [
-  'safety', 'checks', 'dry_run', 'conditions', 'mix', 'load', 'position', 'inflate', 'hold', 'inspect', 'sign_off', 'done',
+  'safety',
+  'checks',
+  'dry_run',
+  'conditions',
+  'mix',
+  'load',
+  'position',
+  'inflate',
+  'hold',
+  'inspect',
+  'sign_off',
+  'done',
 ] as const;
 export type InstallStep = (typeof INSTALL_STEPS)[number];
 
@@ -95,7 +106,11 @@ export function deriveInstallState(events: readonly InstallEventInput[]): Instal
  * Why this event cannot be recorded now, as a sentence for the crew; null when it can.
  * Only what cannot have happened is refused: the pre-mix steps may come in any order or not at all.
  */
-export function orderProblem(state: InstallState, event: NewEvent, { reopened = false }: { reopened?: boolean } = {}): string | null {
+export function orderProblem(
+  state: InstallState,
+  event: NewEvent,
+  { reopened = false }: { reopened?: boolean } = {},
+): string | null {
   const at = toDate(event.deviceTime);
   // Sent back by the office (`reopened`): the crew may inspect again, add notes and corrections, and sign off
   // once more to resubmit; the clock events themselves stay as they happened.
@@ -120,7 +135,8 @@ export function orderProblem(state: InstallState, event: NewEvent, { reopened = 
     case 'bladder_inflated':
       if (!state.mixedAt) return 'Record "resin mixed" before "bladder inflated".';
       if (state.inflatedAt) return 'The bladder was already inflated on this install.';
-      if (at < state.mixedAt) return 'The bladder cannot be inflated before the resin was mixed: check the time on the device.';
+      if (at < state.mixedAt)
+        return 'The bladder cannot be inflated before the resin was mixed: check the time on the device.';
       return null;
     case 'pressure_reading':
       if (!state.inflatedAt) return 'Record "bladder inflated" before a pressure reading.';
@@ -129,7 +145,8 @@ export function orderProblem(state: InstallState, event: NewEvent, { reopened = 
     case 'bladder_deflated':
       if (!state.inflatedAt) return 'Record "bladder inflated" before "bladder deflated".';
       if (state.deflatedAt) return 'The bladder was already deflated on this install.';
-      if (at < state.inflatedAt) return 'The bladder cannot be deflated before it was inflated: check the time on the device.';
+      if (at < state.inflatedAt)
+        return 'The bladder cannot be deflated before it was inflated: check the time on the device.';
       return null;
     case 'inspection_recorded':
       return state.deflatedAt ? null : 'Record "bladder deflated" before the inspection.';
@@ -157,7 +174,10 @@ function correctionProblem(state: InstallState, event: NewEvent): string | null 
   }
   // A correction may not leave the clock in an order that cannot have happened.
   const fixed = applyCorrection(target, event.payload ?? {});
-  const next = foldLog(state.log.map((e) => (e.id === target.id ? fixed : e)), state.correctionIds);
+  const next = foldLog(
+    state.log.map((e) => (e.id === target.id ? fixed : e)),
+    state.correctionIds,
+  );
   if (next.mixedAt && next.inflatedAt && next.inflatedAt < next.mixedAt) {
     return 'With that correction the bladder would be inflated before the resin was mixed.';
   }
@@ -202,7 +222,11 @@ export function emptyFold(): FoldCore {
  * Folds one original event (corrections applied) into the state. Events must come in log order (device time,
  * then receive time): the whole-log fold and the stored, one-tap-at-a-time fold both go through here.
  */
-export function applyEvent(s: FoldCore, event: Pick<EffectiveEvent, 'type' | 'deviceTime' | 'payload'>, onPressure: (kpa: number) => void) {
+export function applyEvent(
+  s: FoldCore,
+  event: Pick<EffectiveEvent, 'type' | 'deviceTime' | 'payload'>,
+  onPressure: (kpa: number) => void,
+) {
   const { type, deviceTime: at, payload: p } = event;
   s.startedAt ??= at;
   switch (type) {
@@ -230,7 +254,12 @@ export function applyEvent(s: FoldCore, event: Pick<EffectiveEvent, 'type' | 'de
       };
       break;
     case 'go_decision':
-      s.goDecision = { go: p.go === true, overrideReason: str(p.overrideReason), makerHoldMin: num(p.makerHoldMin), at };
+      s.goDecision = {
+        go: p.go === true,
+        overrideReason: str(p.overrideReason),
+        makerHoldMin: num(p.makerHoldMin),
+        at,
+      };
       break;
     case 'resin_mixed':
       s.mixedAt ??= at;

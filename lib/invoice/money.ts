@@ -8,7 +8,8 @@ export const MAX_UNIT_PRICE_CENTS = 10_000_000;
 /** quantity × unit price, in cents (quantity to 3 decimals, e.g. 2.5 m or 1 repair). */
 export function lineAmountCents(quantity: number, unitPriceCents: number): number {
   if (!(quantity > 0) || quantity > MAX_QUANTITY) throw new RangeError('quantity out of range');
-  if (!Number.isInteger(unitPriceCents) || unitPriceCents < 0 || unitPriceCents > MAX_UNIT_PRICE_CENTS) throw new RangeError('unit price out of range');
+  if (!Number.isInteger(unitPriceCents) || unitPriceCents < 0 || unitPriceCents > MAX_UNIT_PRICE_CENTS)
+    throw new RangeError('unit price out of range');
   const thousandths = Math.round(quantity * 1000);
   return Math.floor((thousandths * unitPriceCents + 500) / 1000);
 }

@@ -37,7 +37,11 @@ export function nextJobStatus(
   const ready = Boolean(planned.crewId && planned.scheduledDate);
   if (requested && requested !== current) {
     if (!OFFICE_TRANSITIONS[current].includes(requested)) {
-      return { ok: false, code: 409, message: `A job that is ${label(current)} cannot be made ${label(requested)} from here.` };
+      return {
+        ok: false,
+        code: 409,
+        message: `A job that is ${label(current)} cannot be made ${label(requested)} from here.`,
+      };
     }
     if (requested === 'scheduled' && !ready) {
       return { ok: false, code: 422, message: 'Pick a crew and a day before scheduling the job.' };

@@ -16,8 +16,13 @@ type PaymentsEnv = z.infer<typeof paymentsEnvSchema>;
 
 function paymentsEnv(): PaymentsEnv {
   const e = env();
-  const parsed = paymentsEnvSchema.safeParse({ STRIPE_SECRET_KEY: e.STRIPE_SECRET_KEY, STRIPE_WEBHOOK_SECRET: e.STRIPE_WEBHOOK_SECRET, STRIPE_API_URL: e.STRIPE_API_URL });
-  if (!parsed.success) throw new AppError(503, 'Online payment is not set up on this server (STRIPE_SECRET_KEY, STRIPE_WEBHOOK_SECRET).');
+  const parsed = paymentsEnvSchema.safeParse({
+    STRIPE_SECRET_KEY: e.STRIPE_SECRET_KEY,
+    STRIPE_WEBHOOK_SECRET: e.STRIPE_WEBHOOK_SECRET,
+    STRIPE_API_URL: e.STRIPE_API_URL,
+  });
+  if (!parsed.success)
+    throw new AppError(503, 'Online payment is not set up on this server (STRIPE_SECRET_KEY, STRIPE_WEBHOOK_SECRET).');
   return parsed.data;
 }
 
@@ -28,7 +33,9 @@ export function stripeClient(): Stripe {
   if (client?.key === `${config.STRIPE_SECRET_KEY}|${config.STRIPE_API_URL}`) return client.stripe;
   const api = config.STRIPE_API_URL ? new URL(config.STRIPE_API_URL) : undefined;
   const stripe = new Stripe(config.STRIPE_SECRET_KEY, {
-    ...(api ? { host: api.hostname, port: Number(api.port), protocol: api.protocol.replace(':', '') as 'http' | 'https' } : {}),
+    ...(api
+      ? { host: api.hostname, port: Number(api.port), protocol: api.protocol.replace(':', '') as 'http' | 'https' }
+      : {}),
     maxNetworkRetries: 2,
     timeout: 10_000,
   });

@@ -39,7 +39,8 @@ export const DEFAULT_OVALITY_PCT = 2;
 
 /** Shown beside every plan: the check is a screening aid, not a design. */
 export const PLAN_CAUTION =
-  'These figures screen a repair for planning. They do not replace a design by a qualified engineer, the liner and resin makers’ instructions, or the local codes and specifications that apply to the work.';
+  'These figures screen a repair for planning. They do not replace a design by a qualified engineer, the liner and resin makers’ instructions, or the ' +
+  'local codes and specifications that apply to the work.';
 
 /** The resin system the quantity is worked out for: its resin-to-fabric ratio (by volume) and excess (%). */
 export type PlanResin = { id?: string; name: string; resinToFabricRatio: number | null; excessPct: number | null };
@@ -106,7 +107,14 @@ export type RepairPlan = {
   design: ThicknessCheck | null;
   /** The pressure of the known groundwater head, kPa; inflation must stay above it. */
   groundwaterKpa: number | null;
-  assumptions: { ovalityPct: number; longTermModulusPsi: number; shortTermModulusPsi: number; safetyFactor: number; enhancementK: number; poisson: number };
+  assumptions: {
+    ovalityPct: number;
+    longTermModulusPsi: number;
+    shortTermModulusPsi: number;
+    safetyFactor: number;
+    enhancementK: number;
+    poisson: number;
+  };
   warnings: string[];
   notes: string[];
 };
@@ -119,21 +127,34 @@ export type RepairPlan = {
  */
 export function planRepair(input: PlanInput): RepairPlan {
   const system = input.unitSystem;
-  const short = (mm: number, decimals?: number) => formatLength(mm, system, 'short', { decimals: decimals ?? (system === 'imperial' ? 1 : 0) });
+  const short = (mm: number, decimals?: number) =>
+    formatLength(mm, system, 'short', { decimals: decimals ?? (system === 'imperial' ? 1 : 0) });
   const warnings: string[] = [];
   const notes: string[] = [];
-  const proposedPatchLengthMm = patchLength({ defectLengthMm: input.defectLengthMm, overlapPerEndMm: input.overlapPerEndMm });
+  const proposedPatchLengthMm = patchLength({
+    defectLengthMm: input.defectLengthMm,
+    overlapPerEndMm: input.overlapPerEndMm,
+  });
   const patch = input.patchLengthMm ?? proposedPatchLengthMm;
   if (patch < proposedPatchLengthMm) {
-    warnings.push(`The chosen patch is shorter than the defect plus the company’s overlap at each end (${short(proposedPatchLengthMm)}).`);
+    warnings.push(
+      `The chosen patch is shorter than the defect plus the company’s overlap at each end (${short(proposedPatchLengthMm)}).`,
+    );
   }
 
   const known = input.groundwaterHeadMm != null;
   const groundwaterKpa = known ? groundwaterPressureKpa(input.groundwaterHeadMm!) : null;
-  const packers: PackerPlan[] = fittingPackers(input.packers, { insideDiameterMm: input.insideDiameterMm, patchLengthMm: patch }, system).map((fit) => {
+  const packers: PackerPlan[] = fittingPackers(
+    input.packers,
+    { insideDiameterMm: input.insideDiameterMm, patchLengthMm: patch },
+    system,
+  ).map((fit) => {
     const reasons = [...fit.reasons];
     if (groundwaterKpa !== null && groundwaterKpa > 0 && fit.maxPressureKpa <= groundwaterKpa) {
-      reasons.push(`Rated only to ${formatPressure(fit.maxPressureKpa, system)}: it cannot press the patch against ${formatPressure(groundwaterKpa, system)} of groundwater.`);
+      reasons.push(
+        `Rated only to ${formatPressure(fit.maxPressureKpa, system)}: it cannot press the patch against ${formatPressure(groundwaterKpa, system)} of ` +
+          `groundwater.`,
+      );
     }
     return {
       id: fit.id,
@@ -147,14 +168,20 @@ export function planRepair(input: PlanInput): RepairPlan {
     };
   });
   if (!packers.some((p) => p.fits)) {
-    warnings.push('No packer of the fleet fits this pipe and patch: a longer or other-size packer (or a shorter patch) is needed.');
+    warnings.push(
+      'No packer of the fleet fits this pipe and patch: a longer or other-size packer (or a shorter patch) is needed.',
+    );
   }
   if (groundwaterKpa !== null && groundwaterKpa > 0) {
-    notes.push(`Groundwater stands ${formatLength(input.groundwaterHeadMm!, system, 'long')} above the invert (${formatPressure(groundwaterKpa, system)}): inflate above that, within the packer’s rating.`);
+    notes.push(
+      `Groundwater stands ${formatLength(input.groundwaterHeadMm!, system, 'long')} above the invert (${formatPressure(groundwaterKpa, system)}): ` +
+        `inflate above that, within the packer’s rating.`,
+    );
   }
 
   const resin = input.thicknessMm ? planResin(input, patch, warnings, short) : null;
-  if (!input.thicknessMm) notes.push('Enter the laminate thickness to estimate the resin and check it against groundwater.');
+  if (!input.thicknessMm)
+    notes.push('Enter the laminate thickness to estimate the resin and check it against groundwater.');
 
   const ovalityPct = input.ovalityPct ?? DEFAULT_OVALITY_PCT;
   const longTermModulusPsi = input.longTermModulusPsi ?? DEFAULT_LONG_TERM_MODULUS_PSI;
@@ -164,7 +191,14 @@ export function planRepair(input: PlanInput): RepairPlan {
     const diameterIn = convertLength(input.insideDiameterMm, 'mm', 'in');
     const groundwaterFt = convertLength(input.groundwaterHeadMm!, 'mm', 'ft');
     try {
-      const result = designLiner({ condition: 'partial', meanDiameterIn: diameterIn, ovalityPct, longTermModulusPsi, shortTermModulusPsi, groundwaterFtAboveInvert: groundwaterFt });
+      const result = designLiner({
+        condition: 'partial',
+        meanDiameterIn: diameterIn,
+        ovalityPct,
+        longTermModulusPsi,
+        shortTermModulusPsi,
+        groundwaterFtAboveInvert: groundwaterFt,
+      });
       const thick = input.thicknessMm ? input.thicknessMm >= result.thicknessMm : null;
       design = {
         diameterIn,
@@ -178,11 +212,16 @@ export function planRepair(input: PlanInput): RepairPlan {
         thick,
       };
       if (thick === false) {
-        warnings.push(`The patch is too thin: ${short(input.thicknessMm!, system === 'imperial' ? 3 : 1)} of laminate, at least ${short(result.thicknessMm, system === 'imperial' ? 3 : 1)} needed (${CHECK_NAMES[result.governing]} governs).`);
+        warnings.push(
+          `The patch is too thin: ${short(input.thicknessMm!, system === 'imperial' ? 3 : 1)} of laminate, at least ` +
+            `${short(result.thicknessMm, system === 'imperial' ? 3 : 1)} needed (${CHECK_NAMES[result.governing]} governs).`,
+        );
       }
     } catch (error) {
       if (!(error instanceof DesignInputError)) throw error;
-      warnings.push('The thickness check cannot run on these figures: check the diameter, groundwater head and ovality.');
+      warnings.push(
+        'The thickness check cannot run on these figures: check the diameter, groundwater head and ovality.',
+      );
     }
   } else {
     notes.push('Enter the groundwater head above the invert (0 when there is none) to run the thickness check.');
@@ -195,7 +234,14 @@ export function planRepair(input: PlanInput): RepairPlan {
     resin,
     design,
     groundwaterKpa,
-    assumptions: { ovalityPct, longTermModulusPsi, shortTermModulusPsi, safetyFactor: DEFAULT_SAFETY_FACTOR, enhancementK: DEFAULT_ENHANCEMENT_K, poisson: DEFAULT_POISSON },
+    assumptions: {
+      ovalityPct,
+      longTermModulusPsi,
+      shortTermModulusPsi,
+      safetyFactor: DEFAULT_SAFETY_FACTOR,
+      enhancementK: DEFAULT_ENHANCEMENT_K,
+      poisson: DEFAULT_POISSON,
+    },
     warnings,
     notes,
   };
@@ -214,11 +260,20 @@ const CHECK_ORDER: DesignCheck[] = ['buckling', 'ovality', 'fullyDeteriorated', 
 /** The checks that ran, in order, e.g. "X1.1 buckling at 3.0 ft of water, X1.4 stiffness" (head in the company's units). */
 export function describeChecks(checks: DesignChecks, groundwaterHeadMm: number, system: UnitSystem): string {
   return CHECK_ORDER.filter((check) => checks[check] !== undefined)
-    .map((check) => (check === 'buckling' ? `${CHECK_NAMES.buckling} at ${formatLength(groundwaterHeadMm, system, 'long')} of water` : CHECK_NAMES[check]))
+    .map((check) =>
+      check === 'buckling'
+        ? `${CHECK_NAMES.buckling} at ${formatLength(groundwaterHeadMm, system, 'long')} of water`
+        : CHECK_NAMES[check],
+    )
     .join(', ');
 }
 
-function planResin(input: PlanInput, patch: number, warnings: string[], short: (mm: number) => string): ResinPlan | null {
+function planResin(
+  input: PlanInput,
+  patch: number,
+  warnings: string[],
+  short: (mm: number) => string,
+): ResinPlan | null {
   const thickness = input.thicknessMm!;
   if (thickness * 2 >= input.insideDiameterMm) {
     warnings.push(`A ${short(thickness)} laminate would close a ${short(input.insideDiameterMm)} pipe.`);

@@ -32,7 +32,10 @@ export function getBoss(options: { connectionString?: string } = {}): Promise<Pg
  */
 export async function enqueueReportSend(sendId: string, transaction?: Transaction): Promise<string> {
   const boss = await getBoss();
-  const id = await boss.send(REPORT_QUEUE, { sendId } satisfies ReportJob, { ...retryPolicy(), ...(transaction ? { db: transactionDb(transaction) } : {}) });
+  const id = await boss.send(REPORT_QUEUE, { sendId } satisfies ReportJob, {
+    ...retryPolicy(),
+    ...(transaction ? { db: transactionDb(transaction) } : {}),
+  });
   if (!id) throw new Error('The report queue did not accept the job.');
   return id;
 }
@@ -57,7 +60,9 @@ export async function stopBoss() {
 
 /** pg-boss's SQL runs on the Sequelize transaction's own connection (inside its BEGIN … COMMIT). */
 function transactionDb(transaction: Transaction): PgBoss.Db {
-  const client = (transaction as unknown as { connection?: { query(text: string, values: unknown[]): Promise<{ rows: unknown[] }> } }).connection;
+  const client = (
+    transaction as unknown as { connection?: { query(text: string, values: unknown[]): Promise<{ rows: unknown[] }> } }
+  ).connection;
   if (!client) throw new Error('The transaction has no connection to queue on.');
   return { executeSql: (text, values) => client.query(text, values) as Promise<{ rows: never[] }> };
 }

@@ -34,7 +34,11 @@ export async function startReportWorker(options: WorkerOptions = {}): Promise<Ru
     }),
   ];
   for (const [name, cron] of Object.entries(SCHEDULES)) await boss.schedule(name, cron, {}, { tz: 'UTC' });
-  return { stop: async () => { for (const id of ids) await boss.offWork({ id }); } };
+  return {
+    stop: async () => {
+      for (const id of ids) await boss.offWork({ id });
+    },
+  };
 }
 
 /**
@@ -59,7 +63,10 @@ export function startReportWorkerWhenReady(options: WorkerOptions & { minDelayMs
         resolve(running);
       } catch (error) {
         const delay = Math.min(maxDelayMs, minDelayMs * 2 ** (tries - 1));
-        console.error(`[jobs] the report worker could not start (try ${tries}); trying again in ${Math.round(delay / 100) / 10} s:`, error instanceof Error ? error.message : error);
+        console.error(
+          `[jobs] the report worker could not start (try ${tries}); trying again in ${Math.round(delay / 100) / 10} s:`,
+          error instanceof Error ? error.message : error,
+        );
         timer = setTimeout(attempt, delay);
       }
     };

@@ -3,7 +3,13 @@ import nodemailer from 'nodemailer';
 import { env } from '@/lib/env';
 import { formatInZone } from '@/lib/time/dates';
 import {
-  CLAIM_LEASE_SECONDS, claimReportSend, markReportSent, releaseReportSend, reportLinkOfSend, requeueReportSend, staleReportSends,
+  CLAIM_LEASE_SECONDS,
+  claimReportSend,
+  markReportSent,
+  releaseReportSend,
+  reportLinkOfSend,
+  requeueReportSend,
+  staleReportSends,
 } from '@/lib/data/report-delivery';
 import { REPORT_QUEUE, getBoss } from '@/lib/queue/boss';
 import { buildReportData } from '@/lib/data/report';
@@ -30,11 +36,25 @@ export async function deliverReportSend(sendId: string, attempt: Attempt): Promi
     if (!data) throw new Error('The job of this report no longer exists.');
     const link = await reportLinkOfSend(send);
     if (link.revokedAt) {
-      await releaseReportSend(send, { status: 'failed', lastError: 'The report links were revoked before this e-mail went out; send the report again.' });
+      await releaseReportSend(send, {
+        status: 'failed',
+        lastError: 'The report links were revoked before this e-mail went out; send the report again.',
+      });
       return 'skipped';
     }
-    const url = reportLinkUrl(signReportLink({ linkId: link.id, jobId: send.jobId, companyId: send.companyId, expiresAt: link.expiresAt }));
-    const mail = reportEmail(data, { link: url, expiresOn: formatInZone(link.expiresAt, data.company.timeZone, data.locale === 'es' ? "d 'de' MMMM 'de' yyyy" : 'd MMMM yyyy', data.locale), message: send.message });
+    const url = reportLinkUrl(
+      signReportLink({ linkId: link.id, jobId: send.jobId, companyId: send.companyId, expiresAt: link.expiresAt }),
+    );
+    const mail = reportEmail(data, {
+      link: url,
+      expiresOn: formatInZone(
+        link.expiresAt,
+        data.company.timeZone,
+        data.locale === 'es' ? "d 'de' MMMM 'de' yyyy" : 'd MMMM yyyy',
+        data.locale,
+      ),
+      message: send.message,
+    });
     const pdf = await cachedReportPdf(send.companyId, send.jobId, { data });
     const info = await transport().sendMail({
       from: env().MAIL_FROM || `"${data.company.name.replace(/["\\]/g, '')}" <reports@setline.localhost>`,

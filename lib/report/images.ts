@@ -16,8 +16,14 @@ export type ReportImage = {
 };
 
 type AttachmentRow = {
-  id: string; kind: string; caption: string | null; repairId: string | null; installId: string | null;
-  contentType: string; storageKey: string; thumbnailKey: string | null;
+  id: string;
+  kind: string;
+  caption: string | null;
+  repairId: string | null;
+  installId: string | null;
+  contentType: string;
+  storageKey: string;
+  thumbnailKey: string | null;
 };
 
 const FORMATS: Record<string, 'png' | 'jpg'> = { 'image/png': 'png', 'image/jpeg': 'jpg' };
@@ -31,7 +37,17 @@ export async function loadReportImages(attachments: readonly AttachmentRow[]): P
   const images = await Promise.all(
     usable.map(async (a) => {
       const data = await fetchImageBytes(a.storageKey);
-      return data ? { id: a.id, kind: a.kind, caption: a.caption, repairId: a.repairId, installId: a.installId, format: FORMATS[a.contentType], data } : null;
+      return data
+        ? {
+            id: a.id,
+            kind: a.kind,
+            caption: a.caption,
+            repairId: a.repairId,
+            installId: a.installId,
+            format: FORMATS[a.contentType],
+            data,
+          }
+        : null;
     }),
   );
   return images.filter((image): image is ReportImage => image !== null);

@@ -8,7 +8,11 @@ import { verifyReportLink, type LinkCheck } from './link';
 // expired link may name its company.
 
 export type LinkAccess =
-  | { ok: true; data: NonNullable<Awaited<ReturnType<typeof getReportDataForLink>>>; claims: { linkId: string; jobId: string; companyId: string } }
+  | {
+      ok: true;
+      data: NonNullable<Awaited<ReturnType<typeof getReportDataForLink>>>;
+      claims: { linkId: string; jobId: string; companyId: string };
+    }
   | { ok: false; status: 404 | 410; companyName: string | null };
 
 const REFUSED = { ok: false, status: 404, companyName: null } as const;
@@ -16,7 +20,8 @@ const REFUSED = { ok: false, status: 404, companyName: null } as const;
 export async function openReportLink(token: string, options: { images?: boolean } = {}): Promise<LinkAccess> {
   const check = await checkLiveLink(token);
   if (!check.ok) {
-    if (check.reason === 'expired') return { ok: false, status: 410, companyName: await companyNameOf(check.companyId) };
+    if (check.reason === 'expired')
+      return { ok: false, status: 410, companyName: await companyNameOf(check.companyId) };
     return REFUSED;
   }
   const data = await getReportDataForLink(check, options);

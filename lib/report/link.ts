@@ -20,18 +20,26 @@ export type LinkCheck =
 
 /** The token for a job's report, valid until `expiresAt`. */
 export function signReportLink(claims: LinkClaims, secret: Buffer | string = reportLinkSecret()): string {
-  if (!UUID.test(claims.linkId) || !UUID.test(claims.jobId) || !UUID.test(claims.companyId)) throw new Error('A report link names its link row, a job and a company by id.');
+  if (!UUID.test(claims.linkId) || !UUID.test(claims.jobId) || !UUID.test(claims.companyId))
+    throw new Error('A report link names its link row, a job and a company by id.');
   const seconds = Math.floor(claims.expiresAt.getTime() / 1000);
   if (!Number.isFinite(seconds)) throw new Error('A report link needs an expiry date.');
-  const payload = Buffer.from(`${VERSION}:${claims.linkId}:${claims.jobId}:${claims.companyId}:${seconds}`).toString('base64url');
+  const payload = Buffer.from(`${VERSION}:${claims.linkId}:${claims.jobId}:${claims.companyId}:${seconds}`).toString(
+    'base64url',
+  );
   return `${payload}.${mac(payload, secret)}`;
 }
 
 /** Checks a token's shape, signature (timing-safe) and expiry. */
-export function verifyReportLink(token: string, now = new Date(), secret: Buffer | string = reportLinkSecret()): LinkCheck {
+export function verifyReportLink(
+  token: string,
+  now = new Date(),
+  secret: Buffer | string = reportLinkSecret(),
+): LinkCheck {
   if (typeof token !== 'string' || token.length > 300) return { ok: false, reason: 'malformed' };
   const parts = token.split('.');
-  if (parts.length !== 2 || !BASE64URL.test(parts[0]) || !BASE64URL.test(parts[1])) return { ok: false, reason: 'malformed' };
+  if (parts.length !== 2 || !BASE64URL.test(parts[0]) || !BASE64URL.test(parts[1]))
+    return { ok: false, reason: 'malformed' };
   const [payload, signature] = parts;
   // Compared as text, not decoded bytes: base64url's last character carries spare bits, so two spellings
   // decode to the same bytes and a changed character must still be refused.
@@ -39,10 +47,20 @@ export function verifyReportLink(token: string, now = new Date(), secret: Buffer
   const expected = Buffer.from(mac(payload, secret), 'utf8');
   if (given.length !== expected.length || !timingSafeEqual(given, expected)) return { ok: false, reason: 'signature' };
   const fields = Buffer.from(payload, 'base64url').toString('utf8').split(':');
-  if (fields.length !== 5 || fields[0] !== VERSION || !fields.slice(1, 4).every((f) => UUID.test(f)) || !/^\d{1,12}$/.test(fields[4])) {
+  if (
+    fields.length !== 5 ||
+    fields[0] !== VERSION ||
+    !fields.slice(1, 4).every((f) => UUID.test(f)) ||
+    !/^\d{1,12}$/.test(fields[4])
+  ) {
     return { ok: false, reason: 'malformed' };
   }
-  const claims = { linkId: fields[1], jobId: fields[2], companyId: fields[3], expiresAt: new Date(Number(fields[4]) * 1000) };
+  const claims = {
+    linkId: fields[1],
+    jobId: fields[2],
+    companyId: fields[3],
+    expiresAt: new Date(Number(fields[4]) * 1000),
+  };
   if (claims.expiresAt.getTime() <= now.getTime()) return { ok: false, reason: 'expired', ...claims };
   return { ok: true, ...claims };
 }
@@ -74,4 +92,5 @@ function reportLinkSecret(): Buffer {
 }
 
 const BASE64URL = /^[A-Za-z0-9_-]+$/;
-const mac = (payload: string, secret: Buffer | string) => createHmac('sha256', secret).update(payload).digest('base64url');
+const mac = (payload: string, secret: Buffer | string) =>
+  createHmac('sha256', secret).update(payload).digest('base64url');

@@ -15,7 +15,11 @@ export { reportFileName };
 const PREFIX = 'report-pdf';
 
 /** The PDF of the job's current report version: from storage when rendered before, else rendered and stored. */
-export async function cachedReportPdf(companyId: string, jobId: string, given: { data?: ReportData } = {}): Promise<Buffer> {
+export async function cachedReportPdf(
+  companyId: string,
+  jobId: string,
+  given: { data?: ReportData } = {},
+): Promise<Buffer> {
   const version = await reportVersion(companyId, jobId);
   const key = version ? `${PREFIX}/${companyId}/${jobId}/${version}.pdf` : null;
   if (key) {
@@ -27,7 +31,9 @@ export async function cachedReportPdf(companyId: string, jobId: string, given: {
   const pdf = await renderReportPdf(data);
   if (key) {
     // A storage hiccup costs a render next time, never the answer.
-    await putObject(key, pdf, 'application/pdf').catch((error) => console.error('[report] PDF not cached', key, messageOf(error)));
+    await putObject(key, pdf, 'application/pdf').catch((error) =>
+      console.error('[report] PDF not cached', key, messageOf(error)),
+    );
   }
   return pdf;
 }

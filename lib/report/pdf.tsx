@@ -1,5 +1,17 @@
 import 'server-only';
-import { Document, Font, Image, Line, Page, Rect, StyleSheet, Svg, Text, View, renderToBuffer } from '@react-pdf/renderer';
+import {
+  Document,
+  Font,
+  Image,
+  Line,
+  Page,
+  Rect,
+  StyleSheet,
+  Svg,
+  Text,
+  View,
+  renderToBuffer,
+} from '@react-pdf/renderer';
 import { translatorFor } from '@/i18n/translator';
 import { formatDay, formatInZone } from '@/lib/time/dates';
 import type { ReportData, ReportRepair } from '@/lib/data/report';
@@ -35,7 +47,16 @@ const s = StyleSheet.create({
   images: { flexDirection: 'row', flexWrap: 'wrap', marginTop: 6 },
   image: { width: 160, marginRight: 8, marginBottom: 6 },
   caution: { marginBottom: 4 },
-  footer: { position: 'absolute', bottom: 18, left: 36, right: 36, fontSize: 7.5, color: MUTED, flexDirection: 'row', justifyContent: 'space-between' },
+  footer: {
+    position: 'absolute',
+    bottom: 18,
+    left: 36,
+    right: 36,
+    fontSize: 7.5,
+    color: MUTED,
+    flexDirection: 'row',
+    justifyContent: 'space-between',
+  },
 });
 
 type ReportWords = ReturnType<typeof translatorFor<'report'>>;
@@ -44,7 +65,13 @@ function ReportDocument({ data }: { data: ReportData }) {
   const t = pdfText;
   const w = translatorFor(data.locale, 'report');
   return (
-    <Document title={t(w('docTitle', { number: data.job.number }))} author={t(data.company.name)} creator="Setline" producer="Setline" language={data.locale}>
+    <Document
+      title={t(w('docTitle', { number: data.job.number }))}
+      author={t(data.company.name)}
+      creator="Setline"
+      producer="Setline"
+      language={data.locale}
+    >
       <Page size="A4" style={s.page}>
         <View style={s.header}>
           <Text style={s.company}>{t(data.company.name)}</Text>
@@ -54,12 +81,17 @@ function ReportDocument({ data }: { data: ReportData }) {
         <View style={s.grid}>
           <Field name={w('customer')} value={data.customer.name} />
           <Field name={w('site')} value={`${data.site.name} — ${data.site.address}`} />
-          <Field name={w('workDate')} value={data.job.scheduledDate ? formatDay(data.job.scheduledDate, data.locale) : '—'} />
+          <Field
+            name={w('workDate')}
+            value={data.job.scheduledDate ? formatDay(data.job.scheduledDate, data.locale) : '—'}
+          />
           <Field name={w('prepared')} value={data.preparedAt} />
         </View>
 
         <Text style={s.h2}>{t(w('repairsHeading', { count: data.repairs.length }))}</Text>
-        {data.repairs.map((repair) => <RepairBlock key={repair.id} repair={repair} data={data} w={w} />)}
+        {data.repairs.map((repair) => (
+          <RepairBlock key={repair.id} repair={repair} data={data} w={w} />
+        ))}
         {data.jobImages.length > 0 ? (
           <View wrap={false}>
             <Text style={s.h2}>{t(w('images'))}</Text>
@@ -70,7 +102,10 @@ function ReportDocument({ data }: { data: ReportData }) {
         <View wrap={false}>
           <Text style={s.h2}>{t(w('cautions'))}</Text>
           {data.cautions.map((c) => (
-            <Text key={c.title} style={s.caution}><Text style={{ fontFamily: 'Helvetica-Bold' }}>{t(c.title)}. </Text>{t(c.text)}</Text>
+            <Text key={c.title} style={s.caution}>
+              <Text style={{ fontFamily: 'Helvetica-Bold' }}>{t(c.title)}. </Text>
+              {t(c.text)}
+            </Text>
           ))}
           <Text style={[s.caution, s.muted]}>{t(data.deferral)}</Text>
         </View>
@@ -89,36 +124,73 @@ function RepairBlock({ repair, data, w }: { repair: ReportRepair; data: ReportDa
   return (
     <View style={s.repair} wrap={false}>
       <Text style={s.h3}>
-        {t(w('repairHeading', { position: repair.position, defect: repair.defect, length: repair.defectLength, grade: repair.conditionGrade }))}
+        {t(
+          w('repairHeading', {
+            position: repair.position,
+            defect: repair.defect,
+            length: repair.defectLength,
+            grade: repair.conditionGrade,
+          }),
+        )}
       </Text>
       <View style={s.grid}>
         <Field
           name={w('where')}
-          value={`${w('whereText', { segment: repair.segment.label, distance: repair.distance, accessPoint: repair.accessPoint })}${repair.clockPosition ? w('atClock', { clock: repair.clockPosition }) : ''}`}
+          value={
+            w('whereText', {
+              segment: repair.segment.label,
+              distance: repair.distance,
+              accessPoint: repair.accessPoint,
+            }) + (repair.clockPosition ? w('atClock', { clock: repair.clockPosition }) : '')
+          }
         />
-        <Field name={w('pipe')} value={w('pipeText', { material: repair.segment.material, diameter: repair.segment.insideDiameter })} />
+        <Field
+          name={w('pipe')}
+          value={w('pipeText', { material: repair.segment.material, diameter: repair.segment.insideDiameter })}
+        />
         <Field name={w('patchLength')} value={repair.patchLength ?? '—'} />
-        <Field name={w('resin')} value={install ? w('resinText', { resin: install.resinSystem ?? '—', lot: install.kitLot ?? '—' }) : '—'} />
+        <Field
+          name={w('resin')}
+          value={install ? w('resinText', { resin: install.resinSystem ?? '—', lot: install.kitLot ?? '—' }) : '—'}
+        />
         {install ? (
           <Field
             name={w('conditions')}
-            value={`${w('conditionsText', { mix: install.mixTemperature ?? '—', pipe: install.pipeTemperature ?? '—' })}${install.inflatePressure ? w('inflatedTo', { pressure: install.inflatePressure }) : ''}`}
+            value={
+              w('conditionsText', { mix: install.mixTemperature ?? '—', pipe: install.pipeTemperature ?? '—' }) +
+              (install.inflatePressure ? w('inflatedTo', { pressure: install.inflatePressure }) : '')
+            }
           />
         ) : null}
         {install ? (
           <Field
             name={w('inspection')}
-            value={install.inspection ? `${install.inspection.result === 'pass' ? w('passed') : w('notPassed')}${install.inspection.notes ? ` — ${install.inspection.notes}` : ''}` : w('notRecorded')}
+            value={
+              install.inspection
+                ? `${install.inspection.result === 'pass' ? w('passed') : w('notPassed')}${install.inspection.notes ? ` — ${install.inspection.notes}` : ''}`
+                : w('notRecorded')
+            }
           />
         ) : null}
         {install?.returnToService ? <Field name={w('backInService')} value={install.returnToService} /> : null}
         {install?.makerHold ? <Field name={w('holdTime')} value={w('makerHold', { hold: install.makerHold })} /> : null}
         {repair.earlierAttempts.length > 0 ? (
-          <Field name={w('earlier')} value={repair.earlierAttempts.map((a) => w('earlierText', { started: a.started ?? '—', outcome: a.outcome })).join('; ')} />
+          <Field
+            name={w('earlier')}
+            value={repair.earlierAttempts
+              .map((a) => w('earlierText', { started: a.started ?? '—', outcome: a.outcome }))
+              .join('; ')}
+          />
         ) : null}
       </View>
-      {install && install.timeline.marks.length > 0 ? <TimelineChart timeline={install.timeline} zone={data.company.timeZone} w={w} /> : null}
-      {install ? <Text style={[s.muted, { marginTop: 4 }]}>{t(install.steps.map((step) => `${step.label} ${step.time}`).join(' · '))}</Text> : null}
+      {install && install.timeline.marks.length > 0 ? (
+        <TimelineChart timeline={install.timeline} zone={data.company.timeZone} w={w} />
+      ) : null}
+      {install ? (
+        <Text style={[s.muted, { marginTop: 4 }]}>
+          {t(install.steps.map((step) => `${step.label} ${step.time}`).join(' · '))}
+        </Text>
+      ) : null}
       {repair.images.length > 0 ? <Images images={repair.images} w={w} /> : null}
     </View>
   );
@@ -127,7 +199,15 @@ function RepairBlock({ repair, data, w }: { repair: ReportRepair; data: ReportDa
 const CHART_WIDTH = 515;
 const BAND_COLOURS: Record<string, string> = { window: '#f59e0b', held: BRAND, cure: '#16a34a' };
 
-function TimelineChart({ timeline, zone, w }: { timeline: NonNullable<ReportRepair['install']>['timeline']; zone: string; w: ReportWords }) {
+function TimelineChart({
+  timeline,
+  zone,
+  w,
+}: {
+  timeline: NonNullable<ReportRepair['install']>['timeline'];
+  zone: string;
+  w: ReportWords;
+}) {
   const g = timelineLayout(timeline.marks, timeline.bands, { width: CHART_WIDTH, charWidth: 3.6 });
   const height = g.height + 4;
   return (
@@ -136,22 +216,58 @@ function TimelineChart({ timeline, zone, w }: { timeline: NonNullable<ReportRepa
       <Svg width={CHART_WIDTH} height={height} viewBox={`0 0 ${CHART_WIDTH} ${height}`}>
         <Line x1={g.left} y1={g.axisY} x2={g.right} y2={g.axisY} stroke="#94a3b8" strokeWidth={1} />
         {g.ticks.map((tick) => (
-          <Line key={`t${tick.x}`} x1={tick.x} y1={g.axisY} x2={tick.x} y2={g.axisY + 3} stroke="#94a3b8" strokeWidth={0.75} />
+          <Line
+            key={`t${tick.x}`}
+            x1={tick.x}
+            y1={g.axisY}
+            x2={tick.x}
+            y2={g.axisY + 3}
+            stroke="#94a3b8"
+            strokeWidth={0.75}
+          />
         ))}
         {g.ticks.map((tick) => (
-          <Text key={`l${tick.x}`} x={tick.x - 9} y={g.axisY + 11} style={{ fontSize: 6 }} fill={MUTED}>{formatInZone(tick.at, zone, 'HH:mm')}</Text>
+          <Text key={`l${tick.x}`} x={tick.x - 9} y={g.axisY + 11} style={{ fontSize: 6 }} fill={MUTED}>
+            {formatInZone(tick.at, zone, 'HH:mm')}
+          </Text>
         ))}
         {g.marks.map((mark) => (
-          <Line key={`m${mark.id}`} x1={mark.x} y1={mark.labelY + 2} x2={mark.x} y2={g.axisY} stroke={BRAND} strokeWidth={0.75} />
+          <Line
+            key={`m${mark.id}`}
+            x1={mark.x}
+            y1={mark.labelY + 2}
+            x2={mark.x}
+            y2={g.axisY}
+            stroke={BRAND}
+            strokeWidth={0.75}
+          />
         ))}
         {g.marks.map((mark) => (
-          <Text key={`n${mark.id}`} x={mark.x - (mark.label.length * 3.6) / 2} y={mark.labelY} style={{ fontSize: 6.5 }} fill="#0f172a">{mark.label}</Text>
+          <Text
+            key={`n${mark.id}`}
+            x={mark.x - (mark.label.length * 3.6) / 2}
+            y={mark.labelY}
+            style={{ fontSize: 6.5 }}
+            fill="#0f172a"
+          >
+            {mark.label}
+          </Text>
         ))}
         {g.bands.map((band) => (
-          <Rect key={`b${band.id}`} x={band.x} y={band.y} width={band.width} height={band.height} fill={BAND_COLOURS[band.id] ?? MUTED} opacity={0.55} />
+          <Rect
+            key={`b${band.id}`}
+            x={band.x}
+            y={band.y}
+            width={band.width}
+            height={band.height}
+            fill={BAND_COLOURS[band.id] ?? MUTED}
+            opacity={0.55}
+          />
         ))}
         {g.bands.map((band) => (
-          <Text key={`bl${band.id}`} x={band.x + 2} y={band.y + band.height - 2} style={{ fontSize: 6 }} fill="#0f172a">{band.label}</Text>
+          <Text key={`bl${band.id}`} x={band.x + 2} y={band.y + band.height - 2} style={{ fontSize: 6 }} fill="#0f172a">
+            {band.label}
+          </Text>
         ))}
       </Svg>
     </View>
@@ -164,8 +280,17 @@ function Images({ images, w }: { images: ReportImage[]; w: ReportWords }) {
       {images.map((image) => (
         <View key={image.id} style={s.image}>
           {/* eslint-disable-next-line jsx-a11y/alt-text -- a PDF image, not an HTML one: react-pdf has no alt */}
-          <Image src={{ data: image.data, format: image.format }} style={{ width: 160, maxHeight: 120, objectFit: 'contain' }} />
-          <Text style={[s.muted, { fontSize: 7.5 }]}>{pdfText(`${image.kind === 'before' ? w('before') : image.kind === 'after' ? w('after') : w('inspectionImage')}${image.caption ? `: ${image.caption}` : ''}`)}</Text>
+          <Image
+            src={{ data: image.data, format: image.format }}
+            style={{ width: 160, maxHeight: 120, objectFit: 'contain' }}
+          />
+          <Text style={[s.muted, { fontSize: 7.5 }]}>
+            {pdfText(
+              `${image.kind === 'before' ? w('before') : image.kind === 'after' ? w('after') : w('inspectionImage')}${
+                image.caption ? `: ` + `${image.caption}` : ''
+              }`,
+            )}
+          </Text>
         </View>
       ))}
     </View>
@@ -182,11 +307,18 @@ function Field({ name, value }: { name: string; value: string }) {
 }
 
 /** Text the standard PDF fonts can show: arrows spelled out, anything outside WinAnsi replaced. */
+// Characters the PDF's standard fonts (WinAnsi: Latin-1 plus the Windows-1252 extras) cannot draw.
+const WIN1252_MISSING = new RegExp(
+  '[^\\u0000-\\u00ff\\u20ac\\u201a\\u0192\\u201e\\u2026\\u2020\\u2021\\u02c6\\u2030\\u0160\\u2039\\u0152\\u017d' +
+    '\\u2018\\u2019\\u201c\\u201d\\u2022\\u2013\\u2014\\u02dc\\u2122\\u0161\\u203a\\u0153\\u017e\\u0178]',
+  'g',
+);
+
 export function pdfText(value: string): string {
   return value
     .replace(/\u2192/g, '->')
     .replace(/\u2190/g, '<-')
     .replace(/\u2264/g, '<=')
     .replace(/\u2265/g, '>=')
-    .replace(/[^\u0000-\u00ff\u20ac\u201a\u0192\u201e\u2026\u2020\u2021\u02c6\u2030\u0160\u2039\u0152\u017d\u2018\u2019\u201c\u201d\u2022\u2013\u2014\u02dc\u2122\u0161\u203a\u0153\u017e\u0178]/g, '?');
+    .replace(WIN1252_MISSING, '?');
 }

@@ -28,10 +28,17 @@ export type TimelineOptions = {
 /** Tick steps in minutes, smallest first: the axis uses the first giving at most `maxTicks` ticks. */
 export const TICK_STEPS_MIN = [5, 10, 15, 30, 60, 120, 240, 480, 720, 1440] as const;
 
-export function timelineLayout(marks: readonly TimelineMark[], bands: readonly TimelineBand[], options: TimelineOptions): TimelineLayout {
+export function timelineLayout(
+  marks: readonly TimelineMark[],
+  bands: readonly TimelineBand[],
+  options: TimelineOptions,
+): TimelineLayout {
   const { width, padding = 40, charWidth = 4.2, bandHeight = 9, rowHeight = 11 } = options;
   if (!(width > 2 * padding)) throw new RangeError('The timeline is narrower than its padding.');
-  const times = [...marks.map((m) => m.at.getTime()), ...bands.flatMap((b) => [b.from.getTime(), b.to.getTime()])].filter(Number.isFinite);
+  const times = [
+    ...marks.map((m) => m.at.getTime()),
+    ...bands.flatMap((b) => [b.from.getTime(), b.to.getTime()]),
+  ].filter(Number.isFinite);
   const left = padding;
   const right = width - padding;
   if (times.length === 0) return { width, height: 0, axisY: 0, left, right, ticks: [], marks: [], bands: [] };
@@ -67,7 +74,13 @@ export function timelineLayout(marks: readonly TimelineMark[], bands: readonly T
     marks: placed.map(({ row, ...mark }) => ({ ...mark, labelY: axisY - 6 - row * rowHeight })),
     bands: bands.map((band, i) => {
       const x = xOf(band.from.getTime());
-      return { ...band, x, y: bandTop + i * (bandHeight + 4), width: Math.max(1, xOf(band.to.getTime()) - x), height: bandHeight };
+      return {
+        ...band,
+        x,
+        y: bandTop + i * (bandHeight + 4),
+        width: Math.max(1, xOf(band.to.getTime()) - x),
+        height: bandHeight,
+      };
     }),
   };
 }
@@ -75,7 +88,8 @@ export function timelineLayout(marks: readonly TimelineMark[], bands: readonly T
 /** Round-numbered instants (whole 5, 10, 15… minutes) inside [start, end], at most `maxTicks`. */
 export function ticksBetween(start: number, end: number, maxTicks = 8): number[] {
   const spanMin = (end - start) / 60_000;
-  const step = (TICK_STEPS_MIN.find((s) => spanMin / s <= maxTicks) ?? Math.ceil(spanMin / maxTicks / 1440) * 1440) * 60_000;
+  const step =
+    (TICK_STEPS_MIN.find((s) => spanMin / s <= maxTicks) ?? Math.ceil(spanMin / maxTicks / 1440) * 1440) * 60_000;
   const ticks: number[] = [];
   for (let t = Math.ceil(start / step) * step; t <= end; t += step) ticks.push(t);
   return ticks;

@@ -14,12 +14,17 @@ export type EventTextContext = {
 };
 
 /** The values of one event's payload as short phrases; empty when the event carries none. */
-export function eventDetails(type: InstallEventType, payload: Record<string, unknown> | null | undefined, ctx: EventTextContext): string[] {
+export function eventDetails(
+  type: InstallEventType,
+  payload: Record<string, unknown> | null | undefined,
+  ctx: EventTextContext,
+): string[] {
   const p = payload ?? {};
   const u = ctx.unitSystem;
   const out: string[] = [];
   const num = (key: string) => (typeof p[key] === 'number' && Number.isFinite(p[key]) ? (p[key] as number) : undefined);
-  const text = (key: string) => (typeof p[key] === 'string' && (p[key] as string).trim() ? (p[key] as string).trim() : undefined);
+  const text = (key: string) =>
+    typeof p[key] === 'string' && (p[key] as string).trim() ? (p[key] as string).trim() : undefined;
   if (num('mixTempC') !== undefined) out.push(`mix ${formatTemperature(num('mixTempC')!, u)}`);
   if (num('pipeTempC') !== undefined) out.push(`pipe ${formatTemperature(num('pipeTempC')!, u)}`);
   if (text('resinKitId')) out.push(`kit ${ctx.kitName?.(text('resinKitId')!) ?? 'unknown'}`);
@@ -50,7 +55,8 @@ export function correctionDetails(
   const p = payload ?? {};
   const time = ctx.time ?? ((at: Date) => at.toISOString());
   const out: string[] = [];
-  if (typeof p.deviceTime === 'string' && target) out.push(`time ${time(new Date(target.deviceTime))} → ${time(new Date(p.deviceTime))}`);
+  if (typeof p.deviceTime === 'string' && target)
+    out.push(`time ${time(new Date(target.deviceTime))} → ${time(new Date(p.deviceTime))}`);
   if (typeof p.payload === 'object' && p.payload !== null && target) {
     const changes = p.payload as Record<string, unknown>;
     const before = eventDetails(target.type, pick(target.payload ?? {}, Object.keys(changes)), ctx).join(', ');
@@ -61,4 +67,5 @@ export function correctionDetails(
   return out;
 }
 
-const pick = (from: Record<string, unknown>, keys: string[]) => Object.fromEntries(keys.filter((k) => k in from).map((k) => [k, from[k]]));
+const pick = (from: Record<string, unknown>, keys: string[]) =>
+  Object.fromEntries(keys.filter((k) => k in from).map((k) => [k, from[k]]));

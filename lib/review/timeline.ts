@@ -61,7 +61,14 @@ export type TimelineLayout = {
 };
 
 export const DEFAULT_TIMELINE_LAYOUT: TimelineLayout = {
-  width: 720, labelWidth: 120, rightPad: 16, topPad: 8, laneHeight: 28, laneGap: 12, axisHeight: 28, maxTicks: 8,
+  width: 720,
+  labelWidth: 120,
+  rightPad: 16,
+  topPad: 8,
+  laneHeight: 28,
+  laneGap: 12,
+  axisHeight: 28,
+  maxTicks: 8,
 };
 
 const MIN = 60_000;
@@ -91,24 +98,40 @@ export function timelineGeometry(input: TimelineInput, layout: Partial<TimelineL
   const plotLeft = L.labelWidth;
   const plotRight = L.width - L.rightPad;
   const x = (at: Date) => round(plotLeft + ((at.getTime() - start) / (end - start)) * (plotRight - plotLeft));
-  const bar = (from: Date, to: Date, tone: TimelineTone, label: string): TimelineBar => ({ x: x(from), width: Math.max(0, round(x(to) - x(from))), from, to, tone, label });
+  const bar = (from: Date, to: Date, tone: TimelineTone, label: string): TimelineBar => ({
+    x: x(from),
+    width: Math.max(0, round(x(to) - x(from))),
+    from,
+    to,
+    tone,
+    label,
+  });
   const mark = (at: Date, tone: TimelineTone, label: string): TimelineMark => ({ x: x(at), at, tone, label });
 
   const lanes: Omit<TimelineLane, 'y' | 'height'>[] = [];
   const inflateTone: TimelineTone | null = !inflatedAt
     ? null
-    : inflatedAt > inflateBy ? 'missed'
-    : input.safeInflateBy && inflatedAt > input.safeInflateBy ? 'near'
-    : 'done';
+    : inflatedAt > inflateBy
+      ? 'missed'
+      : input.safeInflateBy && inflatedAt > input.safeInflateBy
+        ? 'near'
+        : 'done';
   lanes.push({
     key: 'working',
     label: 'Working window',
     plan: bar(mixedAt, inflateBy, 'plan', 'Mix → inflate by'),
     actual: inflatedAt && inflateTone ? bar(mixedAt, inflatedAt, inflateTone, 'Mix → inflated') : null,
     miss:
-      inflatedAt && inflateTone === 'missed' ? bar(inflateBy, inflatedAt, 'missed', `Inflated ${minutesText(inflatedAt.getTime() - inflateBy.getTime())} late`)
-      : inflatedAt && inflateTone === 'near' && input.safeInflateBy ? bar(input.safeInflateBy, inflatedAt, 'near', 'Inflated inside the safety margin')
-      : null,
+      inflatedAt && inflateTone === 'missed'
+        ? bar(
+            inflateBy,
+            inflatedAt,
+            'missed',
+            `Inflated ${minutesText(inflatedAt.getTime() - inflateBy.getTime())} late`,
+          )
+        : inflatedAt && inflateTone === 'near' && input.safeInflateBy
+          ? bar(input.safeInflateBy, inflatedAt, 'near', 'Inflated inside the safety margin')
+          : null,
     mark: inflatedAt && inflateTone ? mark(inflatedAt, inflateTone, 'Inflated') : null,
   });
   if (inflatedAt && deflateAfter) {
@@ -118,7 +141,15 @@ export function timelineGeometry(input: TimelineInput, layout: Partial<TimelineL
       label: 'Hold',
       plan: bar(inflatedAt, deflateAfter, 'plan', 'Inflated → deflate after'),
       actual: deflatedAt ? bar(inflatedAt, deflatedAt, early ? 'missed' : 'done', 'Inflated → deflated') : null,
-      miss: deflatedAt && early ? bar(deflatedAt, deflateAfter, 'missed', `Deflated ${minutesText(deflateAfter.getTime() - deflatedAt.getTime())} early`) : null,
+      miss:
+        deflatedAt && early
+          ? bar(
+              deflatedAt,
+              deflateAfter,
+              'missed',
+              `Deflated ${minutesText(deflateAfter.getTime() - deflatedAt.getTime())} early`,
+            )
+          : null,
       mark: deflatedAt ? mark(deflatedAt, early ? 'missed' : 'done', 'Deflated') : null,
     });
   }
@@ -133,7 +164,11 @@ export function timelineGeometry(input: TimelineInput, layout: Partial<TimelineL
     });
   }
 
-  const placed = lanes.map((lane, i) => ({ ...lane, y: L.topPad + i * (L.laneHeight + L.laneGap), height: L.laneHeight }));
+  const placed = lanes.map((lane, i) => ({
+    ...lane,
+    y: L.topPad + i * (L.laneHeight + L.laneGap),
+    height: L.laneHeight,
+  }));
   const axisY = L.topPad + lanes.length * (L.laneHeight + L.laneGap);
   const tickMinutes = tickStep(end - start, L.maxTicks);
   const ticks: TimelineTick[] = [];

@@ -62,7 +62,11 @@ type ItemHandler = Handler<[Request, Context]>;
  * GET, PATCH (partial, strict) and — with `archive` — DELETE (archive when something depends on the record, delete
  * it otherwise) of one record.
  */
-export function recordItem<P>(options: ItemOptions<P> & { archive: Archive }): { GET: ItemHandler; PATCH: ItemHandler; DELETE: ItemHandler };
+export function recordItem<P>(options: ItemOptions<P> & { archive: Archive }): {
+  GET: ItemHandler;
+  PATCH: ItemHandler;
+  DELETE: ItemHandler;
+};
 export function recordItem<P>(options: ItemOptions<P>): { GET: ItemHandler; PATCH: ItemHandler };
 export function recordItem<P>(options: ItemOptions<P> & { archive?: Archive }) {
   const routes = {

@@ -14,7 +14,9 @@ export function storageOrigins(e: Env = env()): string[] {
   if (storage.endpoint) {
     const origin = new URL(storage.endpoint).origin;
     // Virtual-host addressing puts the bucket in the host name.
-    return storage.forcePathStyle ? [origin] : [origin, new URL(storage.endpoint).origin.replace('://', `://${storage.bucket}.`)];
+    return storage.forcePathStyle
+      ? [origin]
+      : [origin, new URL(storage.endpoint).origin.replace('://', `://${storage.bucket}.`)];
   }
   return [`https://${storage.bucket}.s3.${storage.region}.amazonaws.com`, `https://s3.${storage.region}.amazonaws.com`];
 }
@@ -31,7 +33,10 @@ function checkoutOrigin(e: Env = env()): string {
  * 'strict-dynamic'); no plugins, no framing, no foreign base or form targets; images, media and
  * fetches only from the app and the storage origin. Styles allow inline attributes (React style props).
  */
-export function contentSecurityPolicy(nonce: string, options: { dev?: boolean; https?: boolean; e?: Env } = {}): string {
+export function contentSecurityPolicy(
+  nonce: string,
+  options: { dev?: boolean; https?: boolean; e?: Env } = {},
+): string {
   const e = options.e ?? env();
   const storage = storageOrigins(e).join(' ');
   const directives = [
@@ -54,10 +59,13 @@ export function contentSecurityPolicy(nonce: string, options: { dev?: boolean; h
 }
 
 /** The policy of a document that runs nothing (the report PDF): no scripts, no plugins beyond the viewer, no framing. */
-export const DOCUMENT_POLICY = "default-src 'none'; img-src 'self' data:; style-src 'unsafe-inline'; base-uri 'none'; form-action 'none'; frame-ancestors 'none'";
+export const DOCUMENT_POLICY =
+  "default-src 'none'; img-src 'self' data:; style-src 'unsafe-inline'; base-uri 'none'; form-action 'none'; frame-ancestors 'none'";
 
 /** Camera for the app itself (inspection photos and videos); the rest of the powerful features off. */
-export const PERMISSIONS_POLICY = 'camera=(self), microphone=(), geolocation=(), payment=(), usb=(), serial=(), bluetooth=(), midi=(), magnetometer=(), gyroscope=(), accelerometer=(), display-capture=(), interest-cohort=()';
+export const PERMISSIONS_POLICY =
+  'camera=(self), microphone=(), geolocation=(), payment=(), usb=(), serial=(), bluetooth=(), midi=(), magnetometer=(), gyroscope=(), ' +
+  'accelerometer=(), display-capture=(), interest-cohort=()';
 
 /** True when the request reached us over https (directly, or per the proxy's X-Forwarded-Proto), or the public address is https. */
 export function servedOverHttps(request: { url: string; headers: Headers }, e: Env = env()): boolean {
@@ -71,7 +79,8 @@ export function securityHeaders(pathname: string, https: boolean): Record<string
   return {
     'X-Content-Type-Options': 'nosniff',
     // The customer's report link is a bearer token in the path: never sent on as a referrer.
-    'Referrer-Policy': pathname === '/r' || pathname.startsWith('/r/') ? 'no-referrer' : 'strict-origin-when-cross-origin',
+    'Referrer-Policy':
+      pathname === '/r' || pathname.startsWith('/r/') ? 'no-referrer' : 'strict-origin-when-cross-origin',
     'Permissions-Policy': PERMISSIONS_POLICY,
     'X-Frame-Options': 'DENY',
     ...(https ? { 'Strict-Transport-Security': 'max-age=31536000; includeSubDomains' } : {}),
@@ -86,10 +95,14 @@ const MUTATING = new Set(['POST', 'PUT', 'PATCH', 'DELETE']);
  * says it is cross-site, or when its Origin — or, without one, its Referer — is not one of ours.
  * Requests with none of these (non-browser clients) pass. Returns the refusal message or null.
  */
-export function crossSiteRefusal(request: { method: string; url: string; headers: Headers }, ownOrigins: string[]): string | null {
+export function crossSiteRefusal(
+  request: { method: string; url: string; headers: Headers },
+  ownOrigins: string[],
+): string | null {
   if (!MUTATING.has(request.method.toUpperCase())) return null;
   const { pathname } = new URL(request.url);
-  if (!pathname.startsWith('/api/') || pathname.startsWith('/api/auth/') || pathname === '/api/payments/webhook') return null;
+  if (!pathname.startsWith('/api/') || pathname.startsWith('/api/auth/') || pathname === '/api/payments/webhook')
+    return null;
   const refusal = 'This request came from another site and was refused.';
   if (request.headers.get('sec-fetch-site')?.toLowerCase() === 'cross-site') return refusal;
   const origin = request.headers.get('origin');

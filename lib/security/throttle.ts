@@ -18,7 +18,9 @@ export const LIMITS = {
 } as const;
 
 type Limiters = { signInEmail: RateLimiterPostgres; signInIp: RateLimiterPostgres; reportLink: RateLimiterPostgres };
-const globalForThrottle = globalThis as unknown as { setlineThrottle?: { url: string; pool: pg.Pool; limiters: Limiters } };
+const globalForThrottle = globalThis as unknown as {
+  setlineThrottle?: { url: string; pool: pg.Pool; limiters: Limiters };
+};
 
 function limiters(): Limiters {
   const url = env().DATABASE_URL;
@@ -28,7 +30,14 @@ function limiters(): Limiters {
   const pool = new pg.Pool({ connectionString: url, max: 3, idleTimeoutMillis: 10_000 });
   pool.on('error', (error) => console.error('[throttle] idle connection error', error.message));
   const make = (keyPrefix: string, options: { points: number; duration: number; blockDuration?: number }) =>
-    new RateLimiterPostgres({ storeClient: pool, storeType: 'pool', tableName: 'rate_limits', tableCreated: true, keyPrefix, ...options });
+    new RateLimiterPostgres({
+      storeClient: pool,
+      storeType: 'pool',
+      tableName: 'rate_limits',
+      tableCreated: true,
+      keyPrefix,
+      ...options,
+    });
   const made: Limiters = {
     signInEmail: make('signin-email', LIMITS.signInEmail),
     signInIp: make('signin-ip', LIMITS.signInIp),
@@ -40,7 +49,10 @@ function limiters(): Limiters {
 }
 
 const isLimiterResult = (value: unknown): value is RateLimiterRes =>
-  typeof value === 'object' && value !== null && !(value instanceof Error) && typeof (value as RateLimiterRes).msBeforeNext === 'number';
+  typeof value === 'object' &&
+  value !== null &&
+  !(value instanceof Error) &&
+  typeof (value as RateLimiterRes).msBeforeNext === 'number';
 
 /** Whole seconds until a limit lets the next attempt through (at least 1). */
 const secondsOf = (ms: number) => Math.max(1, Math.ceil(ms / 1000));
@@ -52,7 +64,10 @@ const secondsOf = (ms: number) => Math.max(1, Math.ceil(ms / 1000));
  * are then a best effort; the per-e-mail lock does not depend on the address.
  */
 export function clientIp(headers: Headers, hops = env().TRUSTED_PROXY): string {
-  const chain = (headers.get('x-forwarded-for') ?? '').split(',').map((part) => part.trim()).filter(Boolean);
+  const chain = (headers.get('x-forwarded-for') ?? '')
+    .split(',')
+    .map((part) => part.trim())
+    .filter(Boolean);
   const picked = chain[chain.length - Math.max(1, hops)] ?? chain[0] ?? headers.get('x-real-ip')?.trim();
   return (picked || 'unknown').slice(0, 64);
 }

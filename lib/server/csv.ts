@@ -21,6 +21,9 @@ function guard(value: string | number | boolean | null | undefined) {
 export function csvResponse(name: string, csv: string) {
   const stamp = new Date().toISOString().slice(0, 10);
   return new Response(`\uFEFF${csv}`, {
-    headers: { 'content-type': 'text/csv; charset=utf-8', 'content-disposition': `attachment; filename="${name}-${stamp}.csv"` },
+    headers: {
+      'content-type': 'text/csv; charset=utf-8',
+      'content-disposition': `attachment; filename="${name}-${stamp}.csv"`,
+    },
   });
 }

@@ -16,7 +16,10 @@ export function handle<Args extends unknown[]>(fn: (...args: Args) => Promise<Re
       return await fn(...args);
     } catch (error) {
       if (error instanceof AppError) {
-        return NextResponse.json({ error: { message: error.message, ...(error.fields ? { fields: error.fields } : {}) } }, { status: error.status });
+        return NextResponse.json(
+          { error: { message: error.message, ...(error.fields ? { fields: error.fields } : {}) } },
+          { status: error.status },
+        );
       }
       const refused = databaseRefusal(error);
       if (refused) {
@@ -66,7 +69,8 @@ export function parseOrThrow<S extends z.ZodType>(schema: S, input: unknown, sta
 }
 
 /** Query-string parameters as a plain object for zod. */
-export const searchParamsOf = (request: Request) => withoutNul(filledParams(Object.fromEntries(new URL(request.url).searchParams)));
+export const searchParamsOf = (request: Request) =>
+  withoutNul(filledParams(Object.fromEntries(new URL(request.url).searchParams)));
 
 /**
  * The body as text, counting bytes as they arrive: over `limit` is a 413 and reading stops, so a body
@@ -92,10 +96,12 @@ export async function readBodyText(request: Request, limit = MAX_BODY_BYTES): Pr
   return Buffer.concat(chunks).toString('utf8');
 }
 
-const tooLarge = (limit: number) => new AppError(413, `The request body is larger than ${Math.round(limit / 1024)} KB.`);
+const tooLarge = (limit: number) =>
+  new AppError(413, `The request body is larger than ${Math.round(limit / 1024)} KB.`);
 
 /** True when the request says its body is JSON (`application/json`, any parameters). */
-const isJsonRequest = (request: Request) => /^application\/json\s*(;|$)/i.test(request.headers.get('content-type')?.trim() ?? '');
+const isJsonRequest = (request: Request) =>
+  /^application\/json\s*(;|$)/i.test(request.headers.get('content-type')?.trim() ?? '');
 
 /**
  * The JSON body of a request. Empty is a 400, a body that is not declared `application/json` is a 415
@@ -136,7 +142,8 @@ function withoutNul<T>(value: T): T {
   const hasNul = (v: unknown): boolean => {
     if (typeof v === 'string') return v.includes('\u0000');
     if (Array.isArray(v)) return v.some(hasNul);
-    if (v && typeof v === 'object') return Object.entries(v).some(([key, item]) => key.includes('\u0000') || hasNul(item));
+    if (v && typeof v === 'object')
+      return Object.entries(v).some(([key, item]) => key.includes('\u0000') || hasNul(item));
     return false;
   };
   if (hasNul(value)) throw new AppError(400, 'Text may not contain the NUL character (U+0000).');

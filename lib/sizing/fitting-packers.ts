@@ -21,7 +21,11 @@ function validatePacker(p: Packer): void {
  * end margin bare beyond each end of the patch (so the patch ends are pressed as firmly as
  * its middle). The reasons are written in the company's units (metric when none is given).
  */
-export function fittingPackers(fleet: Packer[], repair: { insideDiameterMm: number; patchLengthMm: number }, system: UnitSystem = 'metric'): PackerFit[] {
+export function fittingPackers(
+  fleet: Packer[],
+  repair: { insideDiameterMm: number; patchLengthMm: number },
+  system: UnitSystem = 'metric',
+): PackerFit[] {
   if (!Array.isArray(fleet)) throw new SizingInputError('The fleet must be a list of packers.');
   requireObject(repair, 'Repair');
   const d = requirePositive(repair.insideDiameterMm, 'Inside diameter');
@@ -32,8 +36,10 @@ export function fittingPackers(fleet: Packer[], repair: { insideDiameterMm: numb
     const endMarginEachMm = (packer.bladderLengthMm - patch) / 2;
     const reasons: string[] = [];
     const len = (mm: number) => formatLength(mm, system, 'short', { decimals: system === 'imperial' ? 1 : 0 });
-    if (d < packer.minDiameterMm) reasons.push(`Pipe ${len(d)} is smaller than the packer's minimum of ${len(packer.minDiameterMm)}.`);
-    if (d > packer.maxDiameterMm) reasons.push(`Pipe ${len(d)} is larger than the packer's maximum of ${len(packer.maxDiameterMm)}.`);
+    if (d < packer.minDiameterMm)
+      reasons.push(`Pipe ${len(d)} is smaller than the packer's minimum of ${len(packer.minDiameterMm)}.`);
+    if (d > packer.maxDiameterMm)
+      reasons.push(`Pipe ${len(d)} is larger than the packer's maximum of ${len(packer.maxDiameterMm)}.`);
     if (endMarginEachMm < packer.endMarginMm) {
       reasons.push(
         `The ${len(patch)} patch leaves ${len(endMarginEachMm)} of bladder at each end; this packer needs at least ${len(packer.endMarginMm)}.`,

@@ -7,6 +7,9 @@ export const DEFAULT_OVERLAP_PER_END_MM = 304.8;
 /** Patch length, mm: the defect plus the company's minimum overlap at each end. */
 export function patchLength(input: { defectLengthMm: number; overlapPerEndMm?: number }): number {
   const defect = requireNonNegative(input?.defectLengthMm, 'Defect length');
-  const overlap = input.overlapPerEndMm == null ? DEFAULT_OVERLAP_PER_END_MM : requireNonNegative(input.overlapPerEndMm, 'Overlap per end');
+  const overlap =
+    input.overlapPerEndMm == null
+      ? DEFAULT_OVERLAP_PER_END_MM
+      : requireNonNegative(input.overlapPerEndMm, 'Overlap per end');
   return defect + 2 * overlap;
 }

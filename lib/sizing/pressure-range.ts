@@ -8,13 +8,18 @@ export function pressureRange(packer: { minPressureKpa: number; maxPressureKpa: 
   const minPressureKpa = requireNonNegative(packer.minPressureKpa, 'Packer minimum pressure');
   const maxPressureKpa = requireNonNegative(packer.maxPressureKpa, 'Packer maximum pressure');
   if (minPressureKpa > maxPressureKpa) {
-    throw new SizingInputError(`Packer minimum pressure ${minPressureKpa} kPa is above its maximum ${maxPressureKpa} kPa.`);
+    throw new SizingInputError(
+      `Packer minimum pressure ${minPressureKpa} kPa is above its maximum ${maxPressureKpa} kPa.`,
+    );
   }
   return { minPressureKpa, maxPressureKpa };
 }
 
 /** Whether a pressure lies within the packer's rating, ends included. */
-export function isPressureInRange(packer: { minPressureKpa: number; maxPressureKpa: number }, pressureKpa: number): boolean {
+export function isPressureInRange(
+  packer: { minPressureKpa: number; maxPressureKpa: number },
+  pressureKpa: number,
+): boolean {
   const range = pressureRange(packer);
   const p = requireNonNegative(pressureKpa, 'Pressure');
   return p >= range.minPressureKpa && p <= range.maxPressureKpa;

@@ -39,10 +39,15 @@ export function resinQuantity(input: {
   const length = requirePositive(input.patchLengthMm, 'Patch length');
   const t = requirePositive(input.thicknessMm, 'Laminate thickness');
   if (t * 2 >= d) throw new SizingInputError(`A ${t} mm laminate would close a ${d} mm pipe.`);
-  const fraction = input.resinFraction == null ? DEFAULT_RESIN_FRACTION : requireNumber(input.resinFraction, 'Resin fraction');
-  if (fraction <= 0 || fraction > 1) throw new SizingInputError(`Resin fraction must be above 0 and at most 1 (got ${fraction}).`);
+  const fraction =
+    input.resinFraction == null ? DEFAULT_RESIN_FRACTION : requireNumber(input.resinFraction, 'Resin fraction');
+  if (fraction <= 0 || fraction > 1)
+    throw new SizingInputError(`Resin fraction must be above 0 and at most 1 (got ${fraction}).`);
   const excess = input.excess == null ? DEFAULT_EXCESS : requireNumber(input.excess, 'Excess allowance');
-  if (excess < 1) throw new SizingInputError(`Excess allowance is a multiplier of at least 1, e.g. 1.1 for 10 % extra (got ${excess}).`);
+  if (excess < 1)
+    throw new SizingInputError(
+      `Excess allowance is a multiplier of at least 1, e.g. 1.1 for 10 % extra (got ${excess}).`,
+    );
 
   const laminateL = (Math.PI * (d - t) * t * length) / MM3_PER_L;
   const resinL = laminateL * fraction * excess;

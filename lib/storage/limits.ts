@@ -29,7 +29,8 @@ export const THUMBNAIL_WIDTH = 320;
 /** The sentence shown wherever a type is refused. */
 export const ALLOWED_SUMMARY = `JPEG, PNG or WebP images up to ${MAX_BYTES.image / MB} MB, MP4, WebM or QuickTime videos up to ${MAX_BYTES.video / MB} MB`;
 
-export const allowedType = (mime: string): AllowedType | undefined => ALLOWED_TYPES.find((t) => t.mime === mime.toLowerCase());
+export const allowedType = (mime: string): AllowedType | undefined =>
+  ALLOWED_TYPES.find((t) => t.mime === mime.toLowerCase());
 
 /** The type to declare for a file the browser could not type: by its extension (the server checks the bytes anyway). */
 export function typeOfFile(file: { name: string; type: string }): string {
@@ -39,7 +40,11 @@ export function typeOfFile(file: { name: string; type: string }): string {
 }
 
 export const formatBytes = (bytes: number) =>
-  bytes >= MB ? `${(bytes / MB).toFixed(1).replace(/\.0$/, '')} MB` : bytes >= 1024 ? `${Math.round(bytes / 1024)} KB` : `${bytes} bytes`;
+  bytes >= MB
+    ? `${(bytes / MB).toFixed(1).replace(/\.0$/, '')} MB`
+    : bytes >= 1024
+      ? `${Math.round(bytes / 1024)} KB`
+      : `${bytes} bytes`;
 
 /** Why a declared file may not be uploaded (type or size), or null when it may. */
 export function uploadRefusal(contentType: string, byteSize: number): string | null {

@@ -1,6 +1,11 @@
 import 'server-only';
 import {
-  DeleteObjectCommand, GetObjectCommand, HeadObjectCommand, PutObjectCommand, S3Client, S3ServiceException,
+  DeleteObjectCommand,
+  GetObjectCommand,
+  HeadObjectCommand,
+  PutObjectCommand,
+  S3Client,
+  S3ServiceException,
 } from '@aws-sdk/client-s3';
 import { getSignedUrl } from '@aws-sdk/s3-request-presigner';
 import { storageEnv, type StorageEnv } from '@/lib/env';
@@ -44,7 +49,11 @@ export async function presignUpload(key: string, contentType: string, byteSize: 
 /** A short-lived link to read one object, served with the given type. */
 export async function signedDownloadUrl(key: string, contentType?: string) {
   const { client, config } = storage();
-  return getSignedUrl(client, new GetObjectCommand({ Bucket: config.bucket, Key: key, ResponseContentType: contentType }), { expiresIn: DOWNLOAD_URL_SECONDS });
+  return getSignedUrl(
+    client,
+    new GetObjectCommand({ Bucket: config.bucket, Key: key, ResponseContentType: contentType }),
+    { expiresIn: DOWNLOAD_URL_SECONDS },
+  );
 }
 
 /** Size and type of a stored object, or null when there is none. */
@@ -62,7 +71,13 @@ export async function headObject(key: string): Promise<{ byteSize: number; conte
 /** The object's bytes; with `firstBytes`, only that many from the start (enough to tell the type). */
 export async function readObject(key: string, firstBytes?: number): Promise<Buffer> {
   const { client, config } = storage();
-  const answer = await client.send(new GetObjectCommand({ Bucket: config.bucket, Key: key, Range: firstBytes ? `bytes=0-${firstBytes - 1}` : undefined }));
+  const answer = await client.send(
+    new GetObjectCommand({
+      Bucket: config.bucket,
+      Key: key,
+      Range: firstBytes ? `bytes=0-${firstBytes - 1}` : undefined,
+    }),
+  );
   if (!answer.Body) return Buffer.alloc(0);
   return Buffer.from(await answer.Body.transformToByteArray());
 }
@@ -82,4 +97,5 @@ export async function deleteObjects(keys: (string | null | undefined)[]) {
 }
 
 const isMissing = (error: unknown) =>
-  error instanceof S3ServiceException && (error.name === 'NotFound' || error.name === 'NoSuchKey' || error.$metadata.httpStatusCode === 404);
+  error instanceof S3ServiceException &&
+  (error.name === 'NotFound' || error.name === 'NoSuchKey' || error.$metadata.httpStatusCode === 404);

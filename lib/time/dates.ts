@@ -5,14 +5,16 @@ import { TZDate } from '@date-fns/tz';
 // Month names and word order per language (date-fns locales); the English forms stay the ISO-like ones the
 // office and the tests have always read.
 const DATE_LOCALES = { es } as const;
-const DATE_TIME_PATTERNS: Record<string, string> = { es: "d MMM yyyy, HH:mm zzz" };
+const DATE_TIME_PATTERNS: Record<string, string> = { es: 'd MMM yyyy, HH:mm zzz' };
 const DAY_PATTERNS: Record<string, string> = { es: 'd MMM yyyy' };
 
 /** A calendar day (YYYY-MM-DD) in a time zone, `offsetDays` from the given instant. */
 export function dayInZone(instant: Date, timeZone: string, offsetDays = 0): string {
   const shifted = new Date(instant.getTime() + offsetDays * 86_400_000);
   // en-CA formats as YYYY-MM-DD.
-  return new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).format(shifted);
+  return new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).format(
+    shifted,
+  );
 }
 
 /**
@@ -22,7 +24,12 @@ export function dayInZone(instant: Date, timeZone: string, offsetDays = 0): stri
  * date-fns `format` over an @date-fns/tz TZDate gives (a unit test compares the two); any other
  * letter is refused rather than printed wrong.
  */
-export function formatInZone(instant: Date | string, timeZone: string, pattern = 'yyyy-MM-dd HH:mm zzz', locale?: string): string {
+export function formatInZone(
+  instant: Date | string,
+  timeZone: string,
+  pattern = 'yyyy-MM-dd HH:mm zzz',
+  locale?: string,
+): string {
   // Another language's month names and word order come from date-fns's locale (server and Spanish screens only).
   const dateLocale = locale ? DATE_LOCALES[locale as keyof typeof DATE_LOCALES] : undefined;
   if (dateLocale) return format(new TZDate(new Date(instant).getTime(), timeZone), pattern, { locale: dateLocale });
@@ -36,9 +43,30 @@ export function formatInZone(instant: Date | string, timeZone: string, pattern =
   });
 }
 
-type ZoneParts = { year: number; month: number; day: number; hour: number; minute: number; second: number; offsetMin: number };
+type ZoneParts = {
+  year: number;
+  month: number;
+  day: number;
+  hour: number;
+  minute: number;
+  second: number;
+  offsetMin: number;
+};
 
-const MONTHS = ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December'];
+const MONTHS = [
+  'January',
+  'February',
+  'March',
+  'April',
+  'May',
+  'June',
+  'July',
+  'August',
+  'September',
+  'October',
+  'November',
+  'December',
+];
 const pad = (value: number, length = 2) => String(value).padStart(length, '0');
 
 const TOKENS: Record<string, (p: ZoneParts) => string> = {
@@ -100,5 +128,7 @@ export function formatDay(day: string, locale?: string): string {
   const pattern = DAY_PATTERNS[locale ?? ''];
   const match = /^(\d{4})-(\d{2})-(\d{2})$/.exec(day);
   if (!pattern || !match) return day;
-  return format(new Date(Number(match[1]), Number(match[2]) - 1, Number(match[3])), pattern, { locale: DATE_LOCALES[locale as keyof typeof DATE_LOCALES] });
+  return format(new Date(Number(match[1]), Number(match[2]) - 1, Number(match[3])), pattern, {
+    locale: DATE_LOCALES[locale as keyof typeof DATE_LOCALES],
+  });
 }

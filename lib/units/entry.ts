@@ -4,7 +4,12 @@ import { lengthFromSi, lengthToSi, type LengthKind, type UnitSystem } from './sy
 // one place a form converts, so an edit that changes nothing sends back exactly what is stored.
 
 /** A length typed in a form (in/ft or mm/m per system and kind) → millimetres rounded to `decimals`; blank stays blank. */
-export function enteredToMm<T extends number | null | undefined>(value: T, system: UnitSystem, kind: LengthKind, decimals = 0): T | number {
+export function enteredToMm<T extends number | null | undefined>(
+  value: T,
+  system: UnitSystem,
+  kind: LengthKind,
+  decimals = 0,
+): T | number {
   if (value === null || value === undefined || Number.isNaN(value)) return value;
   const factor = 10 ** decimals;
   return Math.round(lengthToSi(value, system, kind) * factor) / factor;
@@ -18,7 +23,9 @@ const ENTRY_DECIMALS = { mm: 1, m: 3, in: 3, ft: 3 } as const;
 export function mmToEntered(mm: number | null | undefined, system: UnitSystem, kind: LengthKind): number | null {
   if (mm === null || mm === undefined) return null;
   const value = lengthFromSi(mm, system, kind);
-  const unit = (system === 'metric' ? (kind === 'short' ? 'mm' : 'm') : kind === 'short' ? 'in' : 'ft') as keyof typeof ENTRY_DECIMALS;
+  const unit = (
+    system === 'metric' ? (kind === 'short' ? 'mm' : 'm') : kind === 'short' ? 'in' : 'ft'
+  ) as keyof typeof ENTRY_DECIMALS;
   return Number(value.toFixed(ENTRY_DECIMALS[unit]));
 }
 

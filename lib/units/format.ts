@@ -27,7 +27,9 @@ export function formatNumber(value: number, decimals: number, locale?: string): 
   const text = value.toFixed(digits);
   const rounded = Number(text) === 0 ? 0 : Number(text);
   if (locale && locale !== 'en') {
-    return new Intl.NumberFormat(locale, { minimumFractionDigits: digits, maximumFractionDigits: digits }).format(rounded);
+    return new Intl.NumberFormat(locale, { minimumFractionDigits: digits, maximumFractionDigits: digits }).format(
+      rounded,
+    );
   }
   return Number(text) === 0 ? (0).toFixed(digits) : text;
 }
@@ -37,7 +39,12 @@ export function formatNumber(value: number, decimals: number, locale?: string): 
 // a psi; whole degrees; hundredths of a litre or gallon; tenths of a kN, whole lbf.
 const LENGTH_DECIMALS = { mm: 0, in: 1, m: 2, ft: 1 } as const;
 
-export function formatLength(mm: number, system: UnitSystem, kind: LengthKind = 'short', options: FormatOptions = {}): string {
+export function formatLength(
+  mm: number,
+  system: UnitSystem,
+  kind: LengthKind = 'short',
+  options: FormatOptions = {},
+): string {
   const value = lengthFromSi(mm, system, kind);
   const labels = unitLabels(system);
   const unit = kind === 'short' ? labels.shortLength : labels.longLength;

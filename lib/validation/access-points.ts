@@ -20,14 +20,20 @@ const accessPointFields = {
 };
 
 /** An access point (manhole, cleanout) on a site; POST /api/sites/:id/access-points. */
-export const accessPointInputSchema = z.object({ ...accessPointFields, kind: accessPointFields.kind.default('manhole') });
+export const accessPointInputSchema = z.object({
+  ...accessPointFields,
+  kind: accessPointFields.kind.default('manhole'),
+});
 export type AccessPointInput = z.input<typeof accessPointInputSchema>;
 
 export const accessPointPatchSchema = z.object(accessPointFields).partial().strict();
 
 /** A number input of a desk form: blank (or NaN) is "not entered", anything else must read as a number. */
 export const enteredNumber = z.preprocess(
-  (value) => (value === '' || value === null || value === undefined || (typeof value === 'number' && Number.isNaN(value)) ? undefined : Number(value)),
+  (value) =>
+    value === '' || value === null || value === undefined || (typeof value === 'number' && Number.isNaN(value))
+      ? undefined
+      : Number(value),
   z.number({ error: 'Enter a number' }).optional(),
 );
 

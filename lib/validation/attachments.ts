@@ -10,7 +10,11 @@ export const uploadRequestSchema = z
     installId: uuidSchema.optional(),
     kind: z.enum(ATTACHMENT_KINDS, { error: `kind is one of ${ATTACHMENT_KINDS.join(', ')}` }),
     fileName: z.string().trim().min(1, 'Name the file').max(255, 'At most 255 characters'),
-    contentType: z.string().trim().toLowerCase().refine((type) => !!allowedType(type), { error: `Send ${ALLOWED_SUMMARY}.` }),
+    contentType: z
+      .string()
+      .trim()
+      .toLowerCase()
+      .refine((type) => !!allowedType(type), { error: `Send ${ALLOWED_SUMMARY}.` }),
     byteSize: z.number({ error: 'byteSize is the file size in bytes' }).int().positive('The file is empty'),
     caption: optionalText(300),
   })

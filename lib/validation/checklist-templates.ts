@@ -21,9 +21,11 @@ const itemsSchema = z
     const ids = new Set<string>();
     items.forEach((item, index) => {
       const key = item.label.trim().toLowerCase();
-      if (labels.has(key)) ctx.addIssue({ code: 'custom', message: `Same as item ${labels.get(key)! + 1}`, path: [index, 'label'] });
+      if (labels.has(key))
+        ctx.addIssue({ code: 'custom', message: `Same as item ${labels.get(key)! + 1}`, path: [index, 'label'] });
       else labels.set(key, index);
-      if (item.id && ids.has(item.id)) ctx.addIssue({ code: 'custom', message: 'Two items have the same id', path: [index, 'id'] });
+      if (item.id && ids.has(item.id))
+        ctx.addIssue({ code: 'custom', message: 'Two items have the same id', path: [index, 'id'] });
       if (item.id) ids.add(item.id);
     });
   });
@@ -36,7 +38,10 @@ const checklistFields = {
 };
 
 /** A check-list template; POST /api/checklist-templates and the page's form use it. Items are in the crew's order. */
-export const checklistTemplateInputSchema = z.object({ ...checklistFields, active: checklistFields.active.default(true) });
+export const checklistTemplateInputSchema = z.object({
+  ...checklistFields,
+  active: checklistFields.active.default(true),
+});
 export type ChecklistTemplateInput = z.output<typeof checklistTemplateInputSchema>;
 export type ChecklistTemplateFormValues = z.input<typeof checklistTemplateInputSchema>;
 

@@ -12,7 +12,13 @@ export const isoDateSchema = z.iso.date('Use a date like 2026-12-01');
 
 /** Free text that may be left empty: '' and null both store NULL; undefined leaves a PATCH field alone. */
 export const optionalText = (max: number) =>
-  z.string().trim().max(max, `At most ${max} characters`).transform((value) => value || null).nullish();
+  z
+    .string()
+    .trim()
+    .max(max, `At most ${max} characters`)
+    .transform((value) => value || null)
+    .nullish();
 
 /** A filter left on "Any" arrives as ''; it means no filter. */
-export const blankAsUndefined = <S extends z.ZodType>(schema: S) => z.preprocess((value) => (value === '' ? undefined : value), schema);
+export const blankAsUndefined = <S extends z.ZodType>(schema: S) =>
+  z.preprocess((value) => (value === '' ? undefined : value), schema);

@@ -54,30 +54,38 @@ export type CompanyPatch = z.output<typeof companyPatchSchema>;
  */
 export const companyFormSchema = z
   .object({
-  name: companyFields.name,
-  timeZone: z.string().min(1, 'Pick a time zone'),
-  unitSystem: companyFields.unitSystem,
-  minOverlapPerEnd: z.number({ error: 'Enter the overlap as a number' }).min(0, 'The overlap cannot be negative'),
-  safetyMarginPercent: z
-    .number({ error: 'Enter the reserve as a number' })
-    .min(0, 'The reserve cannot be negative')
-    .max(MAX_SAFETY_MARGIN * 100, `At most ${MAX_SAFETY_MARGIN * 100} %`),
-  holdReservePercent: z
-    .number({ error: 'Enter the hold reserve as a number' })
-    .min(0, 'The hold reserve cannot be negative')
-    .max(MAX_HOLD_RESERVE * 100, `At most ${MAX_HOLD_RESERVE * 100} %`),
+    name: companyFields.name,
+    timeZone: z.string().min(1, 'Pick a time zone'),
+    unitSystem: companyFields.unitSystem,
+    minOverlapPerEnd: z.number({ error: 'Enter the overlap as a number' }).min(0, 'The overlap cannot be negative'),
+    safetyMarginPercent: z
+      .number({ error: 'Enter the reserve as a number' })
+      .min(0, 'The reserve cannot be negative')
+      .max(MAX_SAFETY_MARGIN * 100, `At most ${MAX_SAFETY_MARGIN * 100} %`),
+    holdReservePercent: z
+      .number({ error: 'Enter the hold reserve as a number' })
+      .min(0, 'The hold reserve cannot be negative')
+      .max(MAX_HOLD_RESERVE * 100, `At most ${MAX_HOLD_RESERVE * 100} %`),
     /** In psi (imperial) or MPa (metric); an empty box (NaN) means the F1216 minimum. */
     linerModulus: z.union([z.number(), z.nan()], { error: 'Enter the modulus as a number' }),
   })
   // The overlap's upper bound, said in the unit system chosen in the same form (never mm to an imperial company).
   .superRefine((values, ctx) => {
     if (lengthToSi(values.minOverlapPerEnd, values.unitSystem) > MAX_OVERLAP_MM) {
-      ctx.addIssue({ code: 'custom', path: ['minOverlapPerEnd'], message: `At most ${formatLength(MAX_OVERLAP_MM, values.unitSystem, 'short', { decimals: 0 })}` });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['minOverlapPerEnd'],
+        message: `At most ${formatLength(MAX_OVERLAP_MM, values.unitSystem, 'short', { decimals: 0 })}`,
+      });
     }
     const mpa = modulusToMpa(values.linerModulus, values.unitSystem);
     if (mpa !== null && (mpa < LINER_MODULUS_MPA.min || mpa > LINER_MODULUS_MPA.max)) {
       const bound = (value: number) => modulusText(value, values.unitSystem);
-      ctx.addIssue({ code: 'custom', path: ['linerModulus'], message: `Between ${bound(LINER_MODULUS_MPA.min)} and ${bound(LINER_MODULUS_MPA.max)}` });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['linerModulus'],
+        message: `Between ${bound(LINER_MODULUS_MPA.min)} and ${bound(LINER_MODULUS_MPA.max)}`,
+      });
     }
   });
 
@@ -85,18 +93,26 @@ export const companyFormSchema = z
 const modulusToMpa = (value: number, system: UnitSystem) =>
   Number.isFinite(value) ? round(system === 'imperial' ? convertPressure(value, 'psi', 'kPa') / 1000 : value, 1) : null;
 // psi shown to the nearest 100 (a data sheet's precision), so a stored MPa value round-trips unchanged.
-const modulusFromMpa = (mpa: number, system: UnitSystem) => (system === 'imperial' ? Math.round(convertPressure(mpa * 1000, 'kPa', 'psi') / 100) * 100 : mpa);
+const modulusFromMpa = (mpa: number, system: UnitSystem) =>
+  system === 'imperial' ? Math.round(convertPressure(mpa * 1000, 'kPa', 'psi') / 100) * 100 : mpa;
 /** A typed modulus moved to another unit system (the form keeps the same stiffness when the units change). */
 export function modulusInSystem(value: number, from: UnitSystem, to: UnitSystem): number {
   const mpa = modulusToMpa(value, from);
   return mpa === null ? value : modulusFromMpa(mpa, to);
 }
 const modulusText = (mpa: number, system: UnitSystem) =>
-  system === 'imperial' ? `${modulusFromMpa(mpa, system).toLocaleString('en-US')} psi` : `${mpa.toLocaleString('en-US')} MPa`;
+  system === 'imperial'
+    ? `${modulusFromMpa(mpa, system).toLocaleString('en-US')} psi`
+    : `${mpa.toLocaleString('en-US')} MPa`;
 export type CompanyFormValues = z.infer<typeof companyFormSchema>;
 
 type StoredSettings = {
-  name: string; timeZone: string; unitSystem: UnitSystem; minOverlapPerEndMm: number; workingWindowSafetyMargin: number; holdReserve: number;
+  name: string;
+  timeZone: string;
+  unitSystem: UnitSystem;
+  minOverlapPerEndMm: number;
+  workingWindowSafetyMargin: number;
+  holdReserve: number;
   linerShortTermModulusMpa?: number | null;
 };
 
@@ -109,7 +125,10 @@ export function companyToForm(company: StoredSettings): CompanyFormValues {
     minOverlapPerEnd: round(lengthFromSi(company.minOverlapPerEndMm, company.unitSystem), 2),
     safetyMarginPercent: round(company.workingWindowSafetyMargin * 100, 1),
     holdReservePercent: round(company.holdReserve * 100, 1),
-    linerModulus: company.linerShortTermModulusMpa == null ? Number.NaN : modulusFromMpa(company.linerShortTermModulusMpa, company.unitSystem),
+    linerModulus:
+      company.linerShortTermModulusMpa == null
+        ? Number.NaN
+        : modulusFromMpa(company.linerShortTermModulusMpa, company.unitSystem),
   };
 }
 

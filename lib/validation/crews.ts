@@ -6,7 +6,11 @@ import { listQuerySchema } from './list';
 export const MAX_DAILY_CAPACITY = 50;
 
 const crewFields = {
-  name: z.string({ error: 'Enter the crew’s name' }).trim().min(1, 'Enter the crew’s name').max(100, 'At most 100 characters'),
+  name: z
+    .string({ error: 'Enter the crew’s name' })
+    .trim()
+    .min(1, 'Enter the crew’s name')
+    .max(100, 'At most 100 characters'),
   dailyCapacity: z
     .number({ error: 'Enter the jobs a day as a whole number' })
     .int('Enter a whole number of jobs')

@@ -6,16 +6,28 @@ import { uuidSchema } from './common';
 // server (before it stores one). Quantities are SI: °C, kPa, mm, seconds.
 
 const temperatureC = z.number().finite().min(-20, 'below −20 °C').max(60, 'above 60 °C');
-const pressureKpa = z.number().finite().positive('a pressure above zero').max(1000, 'over 1000 kPa: check the gauge units');
+const pressureKpa = z
+  .number()
+  .finite()
+  .positive('a pressure above zero')
+  .max(1000, 'over 1000 kPa: check the gauge units');
 const reason = z.string().trim().min(3, 'Say why in a few words').max(1000);
 
 export const eventPayloadSchemas = {
   safety_acknowledged: z.object({}).strict(),
   checks_done: z.object({
-    items: z.array(z.object({ id: z.string().min(1), ok: z.boolean(), note: z.string().trim().max(500).optional() })).min(1),
+    items: z
+      .array(z.object({ id: z.string().min(1), ok: z.boolean(), note: z.string().trim().max(500).optional() }))
+      .min(1),
   }),
   dry_run_started: z.object({}).strict(),
-  dry_run_finished: z.object({ seconds: z.number().int().min(1).max(4 * 3600) }),
+  dry_run_finished: z.object({
+    seconds: z
+      .number()
+      .int()
+      .min(1)
+      .max(4 * 3600),
+  }),
   conditions_recorded: z.object({
     // The resin at the bucket and the air at the mixing place: the warmer sets the working window.
     mixTempC: temperatureC,
@@ -31,7 +43,12 @@ export const eventPayloadSchemas = {
   go_decision: z.object({
     go: z.boolean(),
     overrideReason: reason.optional(),
-    makerHoldMin: z.number().finite().positive('a hold above zero').max(7 * 24 * 60, 'over 7 days: check the minutes').optional(),
+    makerHoldMin: z
+      .number()
+      .finite()
+      .positive('a hold above zero')
+      .max(7 * 24 * 60, 'over 7 days: check the minutes')
+      .optional(),
   }),
   resin_mixed: z.object({}).strict(),
   patch_loaded: z.object({}).strict(),
@@ -44,7 +61,11 @@ export const eventPayloadSchemas = {
   note: z.object({ text: z.string().trim().min(1).max(2000) }),
   // A correction names the event it corrects (correctsEventId on the body) and says why;
   // `deviceTime` and/or `payload` carry the corrected values.
-  correction: z.object({ reason, deviceTime: z.iso.datetime({ offset: true }).optional(), payload: z.record(z.string(), z.unknown()).optional() }),
+  correction: z.object({
+    reason,
+    deviceTime: z.iso.datetime({ offset: true }).optional(),
+    payload: z.record(z.string(), z.unknown()).optional(),
+  }),
 } satisfies Record<(typeof INSTALL_EVENT_TYPES)[number], z.ZodType>;
 
 export type EventPayloads = { [K in keyof typeof eventPayloadSchemas]: z.infer<(typeof eventPayloadSchemas)[K]> };

@@ -17,7 +17,10 @@ export type InvoiceFormValues = {
  */
 export const invoiceFormSchema = z.preprocess((values) => {
   const form = values as InvoiceFormValues;
-  return { ...form, lines: form.lines.map(({ unitPrice, ...line }) => ({ ...line, unitPriceCents: toCents(unitPrice) })) };
+  return {
+    ...form,
+    lines: form.lines.map(({ unitPrice, ...line }) => ({ ...line, unitPriceCents: toCents(unitPrice) })),
+  };
 }, invoiceInputSchema) as unknown as z.ZodType<InvoiceInput, InvoiceFormValues>; // preprocess types its input as unknown
 
 /** "1850.5" → 185050, digit by digit (no floating-point rounding of money); anything else → NaN. */

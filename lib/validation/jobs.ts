@@ -25,7 +25,12 @@ export type JobListQuery = z.infer<typeof jobListQuerySchema>;
 
 /** An id a form may leave empty ('' from a "None" option): '' and null both store NULL. */
 export const optionalId = (message: string) =>
-  z.string().trim().transform((value) => value || null).pipe(z.uuid(message).nullable()).nullish();
+  z
+    .string()
+    .trim()
+    .transform((value) => value || null)
+    .pipe(z.uuid(message).nullable())
+    .nullish();
 
 // No defaults here: a PATCH must leave out what it does not change.
 const jobFields = {
@@ -34,7 +39,12 @@ const jobFields = {
   title: z.string().trim().min(1, 'Enter a short title for the job').max(200, 'At most 200 characters'),
   notes: optionalText(4000),
   crewId: optionalId('Pick a crew or none'),
-  scheduledDate: z.string().trim().transform((value) => value || null).pipe(isoDateSchema.nullable()).nullish(),
+  scheduledDate: z
+    .string()
+    .trim()
+    .transform((value) => value || null)
+    .pipe(isoDateSchema.nullable())
+    .nullish(),
 };
 
 /** A job as the office enters it; the form and POST /api/jobs use this same schema. */

@@ -39,5 +39,9 @@ export type ListQuery<K extends string = string> = {
 
 /** Query parameters without the blank ones: a filter left on "Any" submits `kind=`, which means no filter. */
 export function filledParams(raw: Record<string, string | string[] | undefined>): Record<string, string> {
-  return Object.fromEntries(Object.entries(raw).filter((entry): entry is [string, string] => typeof entry[1] === 'string' && entry[1].trim() !== ''));
+  return Object.fromEntries(
+    Object.entries(raw).filter(
+      (entry): entry is [string, string] => typeof entry[1] === 'string' && entry[1].trim() !== '',
+    ),
+  );
 }

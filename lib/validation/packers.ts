@@ -1,5 +1,13 @@
 import { z } from 'zod';
-import { formatLength, formatPressure, lengthFromSi, lengthToSi, pressureFromSi, pressureToSi, type UnitSystem } from '@/lib/units';
+import {
+  formatLength,
+  formatPressure,
+  lengthFromSi,
+  lengthToSi,
+  pressureFromSi,
+  pressureToSi,
+  type UnitSystem,
+} from '@/lib/units';
 import { optionalText } from './common';
 import { listQuerySchema } from './list';
 import { addProblems, ifFinite, inCompanyUnits, quantity, roundTo, type Problems } from './rules';
@@ -9,8 +17,15 @@ import { addProblems, ifFinite, inCompanyUnits, quantity, roundTo, type Problems
 // The limits are SI; their messages are worded in the units of whoever reads them (the API: SI; a form: the company's).
 const packerFieldsIn = (system: UnitSystem) => {
   const length = (mm: number) => formatLength(mm, system, 'short', { decimals: system === 'imperial' ? 2 : 0 });
-  const mm = (min: number, max: number) => quantity({ min, max, scale: 0, bounds: `From ${length(min)} to ${length(max)}` });
-  const kpa = () => quantity({ min: 0, max: 2000, scale: 1, bounds: `From ${formatPressure(0, system, { decimals: 0 })} to ${formatPressure(2000, system, { decimals: 0 })}` });
+  const mm = (min: number, max: number) =>
+    quantity({ min, max, scale: 0, bounds: `From ${length(min)} to ${length(max)}` });
+  const kpa = () =>
+    quantity({
+      min: 0,
+      max: 2000,
+      scale: 1,
+      bounds: `From ${formatPressure(0, system, { decimals: 0 })} to ${formatPressure(2000, system, { decimals: 0 })}`,
+    });
   return {
     name: z.string().trim().min(1, 'Enter the packer’s name').max(120, 'At most 120 characters'),
     serial: optionalText(60),
@@ -26,19 +41,28 @@ const packerFieldsIn = (system: UnitSystem) => {
 // No defaults here: a PATCH must leave out what it does not change.
 const packerFields = packerFieldsIn('metric');
 
-export type PackerValues = { minDiameterMm: number; maxDiameterMm: number; bladderLengthMm: number; endMarginMm: number; minPressureKpa: number; maxPressureKpa: number };
+export type PackerValues = {
+  minDiameterMm: number;
+  maxDiameterMm: number;
+  bladderLengthMm: number;
+  endMarginMm: number;
+  minPressureKpa: number;
+  maxPressureKpa: number;
+};
 
 export function packerProblems(v: PackerValues): Problems {
   const problems: Problems = {};
   if (v.minDiameterMm >= v.maxDiameterMm) problems.maxDiameterMm = 'The largest pipe must be larger than the smallest';
   // With a margin of half the bladder at each end no patch is left to press (lib/sizing fittingPackers).
-  if (2 * v.endMarginMm >= v.bladderLengthMm) problems.endMarginMm = 'Twice the end margin must be shorter than the bladder, or no patch fits';
+  if (2 * v.endMarginMm >= v.bladderLengthMm)
+    problems.endMarginMm = 'Twice the end margin must be shorter than the bladder, or no patch fits';
   if (v.minPressureKpa >= v.maxPressureKpa) problems.maxPressureKpa = 'The maximum pressure must be above the minimum';
   return problems;
 }
 
 /** A packer in SI; POST /api/packers and the form (after conversion) use it. */
-const packerSchemaIn = (system: UnitSystem) => z.object(packerFieldsIn(system)).superRefine((values, ctx) => addProblems(ctx, packerProblems(values)));
+const packerSchemaIn = (system: UnitSystem) =>
+  z.object(packerFieldsIn(system)).superRefine((values, ctx) => addProblems(ctx, packerProblems(values)));
 export const packerInputSchema = packerSchemaIn('metric');
 export type PackerInput = z.output<typeof packerInputSchema>;
 
@@ -52,7 +76,8 @@ export type PackerListQuery = z.infer<typeof packerListQuerySchema>;
 
 export type PackerFormValues = PackerValues & { name: string; serial?: string | null };
 
-export const packerFormSchema = (system: UnitSystem) => inCompanyUnits<PackerInput, PackerFormValues>((v) => packerToSi(v, system), packerSchemaIn(system));
+export const packerFormSchema = (system: UnitSystem) =>
+  inCompanyUnits<PackerInput, PackerFormValues>((v) => packerToSi(v, system), packerSchemaIn(system));
 
 /** Entered values → SI body: whole millimetres and tenths of a kPa, as the columns keep them. */
 function packerToSi(v: PackerFormValues, system: UnitSystem) {

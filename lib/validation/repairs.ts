@@ -16,7 +16,11 @@ const MAX_DEFECT_MM = 20_000;
 
 /** A length the desk typed in its units and converted: stored as whole millimetres. */
 const wholeMm = (what: string, min: number, max: number) =>
-  z.number({ error: `Enter the ${what}` }).min(min, `The ${what} must be at least ${min} mm`).max(max, `The ${what} is at most ${max} mm`).transform(Math.round);
+  z
+    .number({ error: `Enter the ${what}` })
+    .min(min, `The ${what} must be at least ${min} mm`)
+    .max(max, `The ${what} is at most ${max} mm`)
+    .transform(Math.round);
 
 /**
  * The owner's own defect code, for owners who require a coding standard: free text kept exactly as typed (no
@@ -36,9 +40,18 @@ const repairFields = {
   segmentId: z.uuid('Pick a segment'),
   distanceMm: wholeMm('distance from the access point', 0, MAX_DISTANCE_MM),
   defectType: z.enum(DEFECT_TYPES, { error: 'Pick a defect type' }),
-  conditionGrade: z.number({ error: 'Pick a grade from 1 to 5' }).int('Pick a grade from 1 to 5').min(1, 'Pick a grade from 1 to 5').max(5, 'Pick a grade from 1 to 5'),
+  conditionGrade: z
+    .number({ error: 'Pick a grade from 1 to 5' })
+    .int('Pick a grade from 1 to 5')
+    .min(1, 'Pick a grade from 1 to 5')
+    .max(5, 'Pick a grade from 1 to 5'),
   defectLengthMm: wholeMm('defect length', 1, MAX_DEFECT_MM),
-  clockPosition: z.string().trim().transform((value) => value || null).pipe(z.string().regex(CLOCK_POSITION, CLOCK_MESSAGE).nullable()).nullish(),
+  clockPosition: z
+    .string()
+    .trim()
+    .transform((value) => value || null)
+    .pipe(z.string().regex(CLOCK_POSITION, CLOCK_MESSAGE).nullable())
+    .nullish(),
   notes: optionalText(2000),
   ownerDefectCode: ownerDefectCode(),
 };
@@ -47,9 +60,17 @@ const repairFields = {
 const planFields = {
   plannedPatchLengthMm: wholeMm('patch length', 1, MAX_DEFECT_MM + 10_000).nullable(),
   plannedPackerId: optionalId('Pick one of the packers'),
-  plannedThicknessMm: z.number({ error: 'Enter the laminate thickness' }).positive('The laminate thickness must be above zero').max(100, 'The laminate thickness is at most 100 mm').nullable(),
+  plannedThicknessMm: z
+    .number({ error: 'Enter the laminate thickness' })
+    .positive('The laminate thickness must be above zero')
+    .max(100, 'The laminate thickness is at most 100 mm')
+    .nullable(),
   plannedGroundwaterHeadMm: wholeMm('groundwater head', 0, 100_000).nullable(),
-  plannedOvalityPct: z.number({ error: 'Enter the ovality in %' }).min(0, 'Ovality is 0 % or more').max(50, 'Ovality is at most 50 %').nullable(),
+  plannedOvalityPct: z
+    .number({ error: 'Enter the ovality in %' })
+    .min(0, 'Ovality is 0 % or more')
+    .max(50, 'Ovality is at most 50 %')
+    .nullable(),
 };
 
 /** POST /api/repairs. */
@@ -87,13 +108,43 @@ const queryNumber = (schema: z.ZodNumber) =>
  * Messages name no unit: the panel shows them to imperial and metric companies alike.
  */
 export const repairPlanQuerySchema = z.object({
-  groundwaterHeadMm: queryNumber(z.number({ error: 'Groundwater head must be a number' }).min(0, 'Groundwater head is 0 or more').max(100_000, 'Groundwater head is too high for this check')),
-  thicknessMm: queryNumber(z.number({ error: 'Laminate thickness must be a number' }).positive('Laminate thickness must be above zero').max(100, 'Laminate thickness is too thick for a point repair')),
-  ovalityPct: queryNumber(z.number({ error: 'Ovality must be a number' }).min(0, 'Ovality is 0 % or more').max(50, 'Ovality is at most 50 %')),
-  patchLengthMm: queryNumber(z.number({ error: 'Patch length must be a number' }).positive('Patch length must be above zero').max(30_000, 'Patch length is too long for a point repair')),
-  longTermModulusMpa: queryNumber(z.number({ error: 'Long-term modulus must be a number' }).positive('Long-term modulus must be above zero').max(50_000, 'Long-term modulus is at most 50 000 MPa')),
-  shortTermModulusMpa: queryNumber(z.number({ error: 'Short-term modulus must be a number' }).positive('Short-term modulus must be above zero').max(50_000, 'Short-term modulus is at most 50 000 MPa')),
-  resinSystemId: z.preprocess((value) => (value === '' ? undefined : value), z.uuid('Not a valid resin system id').optional()),
+  groundwaterHeadMm: queryNumber(
+    z
+      .number({ error: 'Groundwater head must be a number' })
+      .min(0, 'Groundwater head is 0 or more')
+      .max(100_000, 'Groundwater head is too high for this check'),
+  ),
+  thicknessMm: queryNumber(
+    z
+      .number({ error: 'Laminate thickness must be a number' })
+      .positive('Laminate thickness must be above zero')
+      .max(100, 'Laminate thickness is too thick for a point repair'),
+  ),
+  ovalityPct: queryNumber(
+    z.number({ error: 'Ovality must be a number' }).min(0, 'Ovality is 0 % or more').max(50, 'Ovality is at most 50 %'),
+  ),
+  patchLengthMm: queryNumber(
+    z
+      .number({ error: 'Patch length must be a number' })
+      .positive('Patch length must be above zero')
+      .max(30_000, 'Patch length is too long for a point repair'),
+  ),
+  longTermModulusMpa: queryNumber(
+    z
+      .number({ error: 'Long-term modulus must be a number' })
+      .positive('Long-term modulus must be above zero')
+      .max(50_000, 'Long-term modulus is at most 50 000 MPa'),
+  ),
+  shortTermModulusMpa: queryNumber(
+    z
+      .number({ error: 'Short-term modulus must be a number' })
+      .positive('Short-term modulus must be above zero')
+      .max(50_000, 'Short-term modulus is at most 50 000 MPa'),
+  ),
+  resinSystemId: z.preprocess(
+    (value) => (value === '' ? undefined : value),
+    z.uuid('Not a valid resin system id').optional(),
+  ),
 });
 export type RepairPlanQuery = z.output<typeof repairPlanQuerySchema>;
 

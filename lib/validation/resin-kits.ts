@@ -19,11 +19,15 @@ const resinKitFields = {
 
 export function resinKitProblems(v: { expiresOn: string; receivedOn?: string | null }): Problems {
   // ISO dates compare as text.
-  return v.receivedOn && v.receivedOn > v.expiresOn ? { receivedOn: 'Received after it expired? Check both dates' } : {};
+  return v.receivedOn && v.receivedOn > v.expiresOn
+    ? { receivedOn: 'Received after it expired? Check both dates' }
+    : {};
 }
 
 /** A resin kit (lot) in SI; POST /api/resin-kits and the form (after conversion) use it. */
-export const resinKitInputSchema = z.object(resinKitFields).superRefine((values, ctx) => addProblems(ctx, resinKitProblems(values)));
+export const resinKitInputSchema = z
+  .object(resinKitFields)
+  .superRefine((values, ctx) => addProblems(ctx, resinKitProblems(values)));
 export type ResinKitInput = z.output<typeof resinKitInputSchema>;
 
 export const resinKitPatchSchema = z.object(resinKitFields).partial().strict();
@@ -40,12 +44,25 @@ export type ResinKitListQuery = z.infer<typeof resinKitListQuerySchema>;
 // ——— The desk form: quantity in US gallons (imperial) or litres ———
 
 export type ResinKitFormValues = {
-  resinSystemId: string; lot: string; expiresOn: string; quantityL: number; receivedOn?: string | null; notes?: string | null;
+  resinSystemId: string;
+  lot: string;
+  expiresOn: string;
+  quantityL: number;
+  receivedOn?: string | null;
+  notes?: string | null;
 };
 
 export const resinKitFormSchema = (system: UnitSystem) =>
-  inCompanyUnits<ResinKitInput, ResinKitFormValues>((v) => ({ ...v, quantityL: ifFinite((value) => roundTo(volumeToSi(value, system), 2))(v.quantityL) }), resinKitInputSchema);
+  inCompanyUnits<ResinKitInput, ResinKitFormValues>(
+    (v) => ({ ...v, quantityL: ifFinite((value) => roundTo(volumeToSi(value, system), 2))(v.quantityL) }),
+    resinKitInputSchema,
+  );
 
 export function resinKitToForm(row: ResinKitFormValues, system: UnitSystem): ResinKitFormValues {
-  return { ...row, quantityL: roundTo(volumeFromSi(row.quantityL, system), 2), receivedOn: row.receivedOn ?? '', notes: row.notes ?? '' };
+  return {
+    ...row,
+    quantityL: roundTo(volumeFromSi(row.quantityL, system), 2),
+    receivedOn: row.receivedOn ?? '',
+    notes: row.notes ?? '',
+  };
 }

@@ -25,10 +25,12 @@ const temperature = (system: UnitSystem) =>
     bounds: `Between ${formatTemperature(MIN_TEMP_C, system, { decimals: 0 })} and ${formatTemperature(MAX_TEMP_C, system, { decimals: 0 })}`,
   });
 const doublingStep = (system: UnitSystem) => {
-  const step = (celsius: number) => `${roundTo(temperatureDifferenceFromSi(celsius, system), 1)} ${system === 'imperial' ? '°F' : '°C'}`;
+  const step = (celsius: number) =>
+    `${roundTo(temperatureDifferenceFromSi(celsius, system), 1)} ${system === 'imperial' ? '°F' : '°C'}`;
   return quantity({ min: 1, max: 50, scale: 2, bounds: `A step of ${step(1)} to ${step(50)}` });
 };
-const minutes = (max: number) => quantity({ min: 0, max, scale: 2, above: true, bounds: `More than 0 and at most ${max} minutes` });
+const minutes = (max: number) =>
+  quantity({ min: 0, max, scale: 2, above: true, bounds: `More than 0 and at most ${max} minutes` });
 
 // No defaults here: a PATCH must leave out what it does not change.
 const fieldsIn = (system: UnitSystem) => ({
@@ -44,7 +46,13 @@ const fieldsIn = (system: UnitSystem) => ({
   doublingC: doublingStep(system).nullish(),
   activationEnergyKj: quantity({ min: 1, max: 300, scale: 2, bounds: 'Between 1 and 300 kJ/mol' }).nullish(),
   // Resin quantity (lib/sizing): unit-free, so the same words serve every company.
-  resinToFabricRatio: quantity({ min: 0, max: 5, scale: 2, above: true, bounds: 'More than 0 and at most 5 (1 = as much resin as fabric)' }),
+  resinToFabricRatio: quantity({
+    min: 0,
+    max: 5,
+    scale: 2,
+    above: true,
+    bounds: 'More than 0 and at most 5 (1 = as much resin as fabric)',
+  }),
   resinExcessPct: quantity({ min: 0, max: 100, scale: 1, bounds: 'From 0 to 100 %' }),
   // Minutes from mixing until the patch is on the packer (wet-out and loading); the tablet's default for the GO / NO-GO.
   prepMinutes: quantity({ min: 0, max: 240, scale: 2, bounds: 'From 0 to 240 minutes' }),
@@ -52,19 +60,28 @@ const fieldsIn = (system: UnitSystem) => ({
 const resinSystemFields = fieldsIn('metric');
 
 export type ResinSystemValues = {
-  refTempC: number; potLifeMin: number; holdMin: number; fullCureMin: number; minTempC: number; maxTempC: number;
-  sensitivityKind: (typeof SENSITIVITY_KINDS)[number]; doublingC?: number | null; activationEnergyKj?: number | null;
+  refTempC: number;
+  potLifeMin: number;
+  holdMin: number;
+  fullCureMin: number;
+  minTempC: number;
+  maxTempC: number;
+  sensitivityKind: (typeof SENSITIVITY_KINDS)[number];
+  doublingC?: number | null;
+  activationEnergyKj?: number | null;
 };
 
 /** What a careful hand checks on a data sheet before trusting the clock with it. */
 export function resinSystemProblems(v: ResinSystemValues): Problems {
   const problems: Problems = {};
   if (v.minTempC >= v.maxTempC) problems.maxTempC = 'The maximum temperature must be above the minimum';
-  else if (v.refTempC < v.minTempC || v.refTempC > v.maxTempC) problems.refTempC = 'The reference temperature must lie between the minimum and the maximum';
+  else if (v.refTempC < v.minTempC || v.refTempC > v.maxTempC)
+    problems.refTempC = 'The reference temperature must lie between the minimum and the maximum';
   if (v.potLifeMin >= v.holdMin) problems.holdMin = 'The hold must be longer than the pot life';
   if (v.holdMin > v.fullCureMin) problems.fullCureMin = 'Full cure cannot be shorter than the hold';
   if (v.sensitivityKind === 'doubling' && !v.doublingC) problems.doublingC = 'Enter the step that halves the times';
-  if (v.sensitivityKind === 'arrhenius' && !v.activationEnergyKj) problems.activationEnergyKj = 'Enter the activation energy';
+  if (v.sensitivityKind === 'arrhenius' && !v.activationEnergyKj)
+    problems.activationEnergyKj = 'Enter the activation energy';
   return problems;
 }
 
@@ -99,9 +116,19 @@ export type ResinSystemListQuery = z.infer<typeof resinSystemListQuerySchema>;
 
 /** What the form holds: numbers in the company's units (NaN while a box is empty). */
 export type ResinSystemFormValues = {
-  name: string; chemistry: string; refTempC: number; potLifeMin: number; holdMin: number; fullCureMin: number;
-  minTempC: number; maxTempC: number; sensitivityKind: string; doublingC: number | null; activationEnergyKj: number | null;
-  resinToFabricRatio?: number; resinExcessPct?: number;
+  name: string;
+  chemistry: string;
+  refTempC: number;
+  potLifeMin: number;
+  holdMin: number;
+  fullCureMin: number;
+  minTempC: number;
+  maxTempC: number;
+  sensitivityKind: string;
+  doublingC: number | null;
+  activationEnergyKj: number | null;
+  resinToFabricRatio?: number;
+  resinExcessPct?: number;
   prepMinutes?: number;
 };
 
@@ -126,7 +153,13 @@ function resinSystemToSi(v: ResinSystemFormValues, system: UnitSystem) {
 
 /** A stored resin system → the form's values in the company's units (one decimal of a degree). */
 export function resinSystemToForm(
-  row: ResinSystemValues & { name: string; chemistry: string; resinToFabricRatio?: number; resinExcessPct?: number; prepMinutes?: number },
+  row: ResinSystemValues & {
+    name: string;
+    chemistry: string;
+    resinToFabricRatio?: number;
+    resinExcessPct?: number;
+    prepMinutes?: number;
+  },
   system: UnitSystem,
 ): ResinSystemFormValues {
   const abs = (celsius: number) => roundTo(temperatureFromSi(celsius, system), 1);
@@ -149,6 +182,8 @@ export function resinSystemToForm(
 }
 
 // An optional box left empty is "none", not a wrong number.
-const noneIfEmpty = (value: unknown) => (typeof value === 'number' && Number.isNaN(value)) || value === undefined ? null : value;
+const noneIfEmpty = (value: unknown) =>
+  (typeof value === 'number' && Number.isNaN(value)) || value === undefined ? null : value;
 // An empty resin-quantity box takes the schema's default (a PATCH leaves the stored value alone).
-const defaultIfEmpty = (value: unknown) => ((typeof value === 'number' && Number.isNaN(value)) || value === null ? undefined : value);
+const defaultIfEmpty = (value: unknown) =>
+  (typeof value === 'number' && Number.isNaN(value)) || value === null ? undefined : value;

@@ -10,7 +10,9 @@ export const INSTALL_SORT_KEYS = ['severity', 'finishedAt', 'createdAt'] as cons
 export type InstallSortKey = (typeof INSTALL_SORT_KEYS)[number];
 
 export const installListQuerySchema = listQuerySchema(INSTALL_SORT_KEYS, { sort: 'severity' }).and(
-  z.object({ status: z.enum(INSTALL_STATUSES, { error: `Status is one of: ${INSTALL_STATUSES.join(', ')}` }).optional() }),
+  z.object({
+    status: z.enum(INSTALL_STATUSES, { error: `Status is one of: ${INSTALL_STATUSES.join(', ')}` }).optional(),
+  }),
 );
 export type InstallListQuery = z.infer<typeof installListQuerySchema>;
 
@@ -18,7 +20,12 @@ export type InstallListQuery = z.infer<typeof installListQuerySchema>;
 export const reviewDecisionSchema = z
   .object({
     decision: z.enum(REVIEW_DECISIONS, { error: 'Choose approve or send back' }),
-    comment: z.string().trim().max(2000, 'At most 2000 characters').nullish().transform((value) => value || null),
+    comment: z
+      .string()
+      .trim()
+      .max(2000, 'At most 2000 characters')
+      .nullish()
+      .transform((value) => value || null),
   })
   .strict()
   .superRefine((input, ctx) => {

@@ -9,7 +9,8 @@ export type Problems = Record<string, string>;
 
 /** Puts each problem on its field of a zod refinement. */
 export function addProblems(ctx: z.RefinementCtx, problems: Problems) {
-  for (const [field, message] of Object.entries(problems)) ctx.addIssue({ code: 'custom', message, path: field.split('.') });
+  for (const [field, message] of Object.entries(problems))
+    ctx.addIssue({ code: 'custom', message, path: field.split('.') });
 }
 
 /** A 400 with the same `{ message, fields }` shape as a failed zod parse, when there is any problem. */
@@ -17,16 +18,34 @@ export function throwProblems(problems: Problems) {
   const entries = Object.entries(problems);
   if (entries.length === 0) return;
   const [field, message] = entries[0];
-  throw new AppError(400, `Invalid input — ${field}: ${message}`, Object.fromEntries(entries.map(([key, text]) => [key, [text]])));
+  throw new AppError(
+    400,
+    `Invalid input — ${field}: ${message}`,
+    Object.fromEntries(entries.map(([key, text]) => [key, [text]])),
+  );
 }
 
 /**
  * A measured quantity as the API takes it: a finite JSON number within bounds, rounded to its column's scale.
  * `bounds` is the sentence shown when it is out of range (say the unit there).
  */
-export function quantity({ min, max, scale, above = false, bounds }: { min: number; max: number; scale: number; above?: boolean; bounds: string }) {
+export function quantity({
+  min,
+  max,
+  scale,
+  above = false,
+  bounds,
+}: {
+  min: number;
+  max: number;
+  scale: number;
+  above?: boolean;
+  bounds: string;
+}) {
   const base = z.number({ error: 'Enter a number' });
-  const rounded = (above ? base.gt(min, bounds) : base.min(min, bounds)).max(max, bounds).transform((value) => roundTo(value, scale));
+  const rounded = (above ? base.gt(min, bounds) : base.min(min, bounds))
+    .max(max, bounds)
+    .transform((value) => roundTo(value, scale));
   // "More than min" holds for what is stored: 0.000001 passes `gt(0)` but rounds to 0 in the column.
   return above ? rounded.refine((value) => value > min, bounds) : rounded;
 }

@@ -24,17 +24,35 @@ const segmentFields = {
   // Null when the far end has no access point of its own (e.g. a lateral running into the main).
   toAccessPointId: z.uuid('Pick the access point at the far end').nullish(),
   material: z.enum(PIPE_MATERIALS, { error: 'Pick the pipe material' }),
-  nominalSizeMm: z.number({ error: 'Enter the nominal size' }).int('Nominal size is stored in whole millimetres')
-    .min(25, 'Nominal size is too small for a sewer or drain — check the unit').max(3000, 'Nominal size is too large — check the unit'),
-  insideDiameterMm: z.number({ error: 'Enter the measured inside diameter' }).positive('Inside diameter must be more than zero')
-    .max(3500, 'Inside diameter is too large — check the unit').transform((mm) => Math.round(mm * 10) / 10),
-  lengthMm: z.number({ error: 'Enter the length between the access points' }).int('Length is stored in whole millimetres')
-    .positive('Length must be more than zero').max(1_000_000, 'Longer than 1 km between access points — check the unit'),
-  depthMm: z.number({ error: 'Enter the depth as a number' }).int('Depth is stored in whole millimetres')
-    .min(0, 'Depth cannot be negative').max(MAX_ACCESS_DEPTH_MM, 'Deeper than we expect — check the unit').nullish(),
+  nominalSizeMm: z
+    .number({ error: 'Enter the nominal size' })
+    .int('Nominal size is stored in whole millimetres')
+    .min(25, 'Nominal size is too small for a sewer or drain — check the unit')
+    .max(3000, 'Nominal size is too large — check the unit'),
+  insideDiameterMm: z
+    .number({ error: 'Enter the measured inside diameter' })
+    .positive('Inside diameter must be more than zero')
+    .max(3500, 'Inside diameter is too large — check the unit')
+    .transform((mm) => Math.round(mm * 10) / 10),
+  lengthMm: z
+    .number({ error: 'Enter the length between the access points' })
+    .int('Length is stored in whole millimetres')
+    .positive('Length must be more than zero')
+    .max(1_000_000, 'Longer than 1 km between access points — check the unit'),
+  depthMm: z
+    .number({ error: 'Enter the depth as a number' })
+    .int('Depth is stored in whole millimetres')
+    .min(0, 'Depth cannot be negative')
+    .max(MAX_ACCESS_DEPTH_MM, 'Deeper than we expect — check the unit')
+    .nullish(),
 };
 
-type Shape = { fromAccessPointId: string; toAccessPointId?: string | null; nominalSizeMm: number; insideDiameterMm: number };
+type Shape = {
+  fromAccessPointId: string;
+  toAccessPointId?: string | null;
+  nominalSizeMm: number;
+  insideDiameterMm: number;
+};
 
 /** Rules that need several fields of a whole segment, as field messages (empty when it is sound). */
 export function segmentShapeIssues(segment: Shape): Record<string, string[]> {
@@ -43,17 +61,21 @@ export function segmentShapeIssues(segment: Shape): Record<string, string[]> {
     issues.toAccessPointId = ['The two ends must be different access points'];
   }
   const ratio = segment.insideDiameterMm / segment.nominalSizeMm;
-  if (ratio > ID_OVER_NOMINAL_MAX) issues.insideDiameterMm = ['Inside diameter is well over the nominal size — check both and their units'];
-  if (ratio < ID_UNDER_NOMINAL_MIN) issues.insideDiameterMm = ['Inside diameter is under half the nominal size — check both and their units'];
+  if (ratio > ID_OVER_NOMINAL_MAX)
+    issues.insideDiameterMm = ['Inside diameter is well over the nominal size — check both and their units'];
+  if (ratio < ID_UNDER_NOMINAL_MIN)
+    issues.insideDiameterMm = ['Inside diameter is under half the nominal size — check both and their units'];
   return issues;
 }
 
 /** A segment as POST /api/segments takes it (SI); the desk form reaches it through segmentFormSchema. */
-export const segmentInputSchema = z.object({ siteId: z.uuid('Pick the site'), ...segmentFields }).superRefine((segment, ctx) => {
-  for (const [field, messages] of Object.entries(segmentShapeIssues(segment))) {
-    for (const message of messages) ctx.addIssue({ code: 'custom', path: [field], message });
-  }
-});
+export const segmentInputSchema = z
+  .object({ siteId: z.uuid('Pick the site'), ...segmentFields })
+  .superRefine((segment, ctx) => {
+    for (const [field, messages] of Object.entries(segmentShapeIssues(segment))) {
+      for (const message of messages) ctx.addIssue({ code: 'custom', path: [field], message });
+    }
+  });
 export type SegmentInput = z.input<typeof segmentInputSchema>;
 
 /** PATCH: the site is fixed; the merged segment is checked against segmentShapeIssues in the data layer. */

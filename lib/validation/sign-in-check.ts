@@ -11,12 +11,12 @@ export const SIGN_IN_MESSAGES = {
 export const PASSWORD_MAX = 200;
 
 // zod 4's default e-mail pattern (zod/v4/core regexes.ts `email`), so both sides accept the same addresses.
-export const EMAIL_PATTERN = /^(?:[A-Za-z0-9_'+\-]+\.)*[A-Za-z0-9_'+\-]*[A-Za-z0-9_+-]@(?:[A-Za-z0-9][A-Za-z0-9\-]*\.)+[A-Za-z]{2,}$/;
+export const EMAIL_PATTERN =
+  /^(?:[A-Za-z0-9_'+\-]+\.)*[A-Za-z0-9_'+\-]*[A-Za-z0-9_+-]@(?:[A-Za-z0-9][A-Za-z0-9\-]*\.)+[A-Za-z]{2,}$/;
 
 export type SignInFields = { email: string; password: string };
 export type SignInCheck =
-  | { ok: true; values: SignInFields }
-  | { ok: false; errors: Partial<Record<keyof SignInFields, string>> };
+  { ok: true; values: SignInFields } | { ok: false; errors: Partial<Record<keyof SignInFields, string>> };
 
 /** The e-mail trimmed and lower-cased, as the server reads it; a message per field that fails. */
 export function checkSignIn(input: SignInFields): SignInCheck {

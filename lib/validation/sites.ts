@@ -2,7 +2,8 @@ import { z } from 'zod';
 import { optionalText, uuidSchema } from './common';
 import { listQuerySchema } from './list';
 
-const required = (max: number, message: string) => z.string().trim().min(1, message).max(max, `At most ${max} characters`);
+const required = (max: number, message: string) =>
+  z.string().trim().min(1, message).max(max, `At most ${max} characters`);
 
 // No defaults here: a PATCH must leave out what it does not change.
 const siteFields = {
@@ -15,7 +16,10 @@ const siteFields = {
 };
 
 /** A site as the office enters it; the form and POST /api/sites use this same schema. */
-export const siteInputSchema = z.object({ customerId: z.uuid('Pick the customer this site belongs to'), ...siteFields });
+export const siteInputSchema = z.object({
+  customerId: z.uuid('Pick the customer this site belongs to'),
+  ...siteFields,
+});
 export type SiteInput = z.input<typeof siteInputSchema>;
 
 /**

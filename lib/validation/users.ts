@@ -13,7 +13,11 @@ export const passwordSchema = z
   .refine((value) => new TextEncoder().encode(value).length <= BCRYPT_MAX_BYTES, `At most ${BCRYPT_MAX_BYTES} bytes`);
 
 const userFields = {
-  name: z.string({ error: 'Enter the person’s name' }).trim().min(1, 'Enter the person’s name').max(200, 'At most 200 characters'),
+  name: z
+    .string({ error: 'Enter the person’s name' })
+    .trim()
+    .min(1, 'Enter the person’s name')
+    .max(200, 'At most 200 characters'),
   email: z
     .string({ error: 'Enter an e-mail address' })
     .trim()

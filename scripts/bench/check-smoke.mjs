@@ -18,5 +18,12 @@ for (const figure of FIGURES) {
 if (data.rows.filter((r) => r.figure === 'g').length !== 4) problems.push('figure g must measure four pages');
 for (const p of problems) console.error(`[bench smoke] ${p}`);
 console.error(`[bench smoke] ${problems.length ? 'FAILED' : `all ${FIGURES.length} figures present`}`);
-fs.writeFileSync(report, JSON.stringify({ numPassedTests: problems.length ? 0 : 1, numFailedTests: problems.length ? 1 : 0, numPendingTests: 0 }));
+fs.writeFileSync(
+  report,
+  JSON.stringify({
+    numPassedTests: problems.length ? 0 : 1,
+    numFailedTests: problems.length ? 1 : 0,
+    numPendingTests: 0,
+  }),
+);
 process.exit(problems.length ? 1 : 0);

@@ -15,7 +15,8 @@ export async function signIn(base, email) {
     body: new URLSearchParams({ csrfToken, email, password: DEMO_PASSWORD, json: 'true' }),
   });
   const all = [...cookies, ...res.headers.getSetCookie().map((c) => c.split(';')[0])];
-  if (!all.some((c) => c.startsWith('next-auth.session-token='))) throw new Error(`sign-in of ${email} failed (${res.status})`);
+  if (!all.some((c) => c.startsWith('next-auth.session-token=')))
+    throw new Error(`sign-in of ${email} failed (${res.status})`);
   return all.join('; ');
 }
 
@@ -73,7 +74,14 @@ export async function loadSame(base, { connections, duration, amount, path, head
   const latencies = [];
   let non2xx = 0;
   const started = performance.now();
-  const instance = autocannon({ url: base + path, connections, ...(amount ? { amount } : { duration }), headers, method, body });
+  const instance = autocannon({
+    url: base + path,
+    connections,
+    ...(amount ? { amount } : { duration }),
+    headers,
+    method,
+    body,
+  });
   instance.on('response', (_client, status, _bytes, ms) => {
     latencies.push(ms);
     if (status < 200 || status > 299) non2xx += 1;

@@ -27,7 +27,14 @@ export async function measurePageWeights(baseUrl, cookie, paths) {
       rawBytes += size.raw;
       gzipBytes += size.gzip;
     }
-    results.push({ path, status: page.status, scripts: scripts.length, rawBytes, gzipBytes, gzipKb: round1(gzipBytes / 1000) });
+    results.push({
+      path,
+      status: page.status,
+      scripts: scripts.length,
+      rawBytes,
+      gzipBytes,
+      gzipKb: round1(gzipBytes / 1000),
+    });
   }
   return results;
 }
@@ -40,7 +47,8 @@ export function scriptsOf(html) {
   }
   for (const match of html.matchAll(/<link\b[^>]*>/g)) {
     const tag = match[0];
-    if (!/\brel="(?:preload|modulepreload)"/.test(tag) || (/\brel="preload"/.test(tag) && !/\bas="script"/.test(tag))) continue;
+    if (!/\brel="(?:preload|modulepreload)"/.test(tag) || (/\brel="preload"/.test(tag) && !/\bas="script"/.test(tag)))
+      continue;
     const href = /\bhref="([^"]+)"/.exec(tag);
     if (href) found.add(decode(href[1]));
   }
@@ -63,6 +71,8 @@ if (import.meta.url === pathToFileURL(process.argv[1]).href) {
   const cookie = await signIn(base, email);
   const paths = rest.length ? rest : ['/sign-in', '/today'];
   for (const row of await measurePageWeights(base, cookie, paths)) {
-    console.log(`${row.path}\t${row.scripts} scripts\t${row.gzipKb} kB gzipped\t(${Math.round(row.rawBytes / 1000)} kB raw)`);
+    console.log(
+      `${row.path}\t${row.scripts} scripts\t${row.gzipKb} kB gzipped\t(${Math.round(row.rawBytes / 1000)} kB raw)`,
+    );
   }
 }

@@ -18,8 +18,12 @@ const db = new pg.Client({ connectionString: process.env.DATABASE_URL });
 await db.connect();
 const one = async (sql, params = []) => (await db.query(sql, params)).rows[0];
 
-const company = await one(`SELECT c.id, u.id AS foreman_id FROM users u JOIN companies c ON c.id = u.company_id WHERE u.email = 'foreman@demo.test'`);
-const crew = await one(`SELECT cm.crew_id AS id FROM crew_members cm WHERE cm.user_id = $1 LIMIT 1`, [company.foreman_id]);
+const company = await one(
+  `SELECT c.id, u.id AS foreman_id FROM users u JOIN companies c ON c.id = u.company_id WHERE u.email = 'foreman@demo.test'`,
+);
+const crew = await one(`SELECT cm.crew_id AS id FROM crew_members cm WHERE cm.user_id = $1 LIMIT 1`, [
+  company.foreman_id,
+]);
 const place = await one(
   `SELECT s.id AS segment_id, s.site_id, si.customer_id, (SELECT defect_type FROM repairs WHERE company_id = $1 LIMIT 1) AS defect_type
    FROM segments s JOIN sites si ON si.id = s.site_id WHERE s.company_id = $1 ORDER BY s.created_at LIMIT 1`,
@@ -31,7 +35,10 @@ const kit = await one(
    ORDER BY r.pot_life_min DESC LIMIT 1`,
   [company.id],
 );
-const packer = await one(`SELECT id FROM packers WHERE company_id = $1 AND archived_at IS NULL ORDER BY max_pressure_kpa LIMIT 1`, [company.id]);
+const packer = await one(
+  `SELECT id FROM packers WHERE company_id = $1 AND archived_at IS NULL ORDER BY max_pressure_kpa LIMIT 1`,
+  [company.id],
+);
 
 // One job per 20 repairs, done over the last 60 days by the foreman's crew; a slot number per repair.
 const jobs = Math.ceil(TOTAL / 20);
@@ -62,7 +69,15 @@ const cookie = await signIn(base, 'foreman@demo.test');
 const t0 = Date.now() - 2 * 24 * 3600_000;
 const at = (min) => new Date(t0 + min * 60_000).toISOString();
 const tap = (type, min, payload = {}) => ({ clientEventId: randomUUID(), type, deviceTime: at(min), payload });
-const conditions = { mixTempC: 20, airTempC: 20, prepMinutes: 5, pipeTempC: 20, resinKitId: kit.id, packerId: packer.id, patchLengthMm: 910 };
+const conditions = {
+  mixTempC: 20,
+  airTempC: 20,
+  prepMinutes: 5,
+  pipeTempC: 20,
+  resinKitId: kit.id,
+  packerId: packer.id,
+  patchLengthMm: 910,
+};
 
 function scenario({ inflate = 30, deflate = 130, pressure = 100, dryRun = true, finish = true }) {
   return [
@@ -96,7 +111,11 @@ const TEMPLATES = [
 ];
 
 async function post(path, body) {
-  const res = await fetch(base + path, { method: 'POST', headers: { cookie, 'content-type': 'application/json' }, body: JSON.stringify(body) });
+  const res = await fetch(base + path, {
+    method: 'POST',
+    headers: { cookie, 'content-type': 'application/json' },
+    body: JSON.stringify(body),
+  });
   if (res.status !== 201) throw new Error(`${path} answered ${res.status}: ${await res.text()}`);
   return res.json();
 }
@@ -151,7 +170,10 @@ await db.query(
    FROM unnest($2::uuid[]) i, generate_series(1, $5::int) g`,
   [company.id, longInstalls, at(5), company.foreman_id, LONG_EVENTS - TEMPLATES.at(-1).taps.length],
 );
-await db.query(`UPDATE installs SET event_count = (SELECT count(*) FROM install_events e WHERE e.install_id = installs.id) WHERE id = ANY($1)`, [longInstalls]);
+await db.query(
+  `UPDATE installs SET event_count = (SELECT count(*) FROM install_events e WHERE e.install_id = installs.id) WHERE id = ANY($1)`,
+  [longInstalls],
+);
 
 const remaining = TOTAL - slot + 1;
 for (const [index, template] of TEMPLATES.entries()) {

@@ -11,7 +11,8 @@ export async function signIn(baseUrl, email, password = 'setline-demo') {
     body: new URLSearchParams({ csrfToken, email, password, json: 'true' }),
   });
   const session = response.headers.getSetCookie().map((c) => c.split(';')[0]);
-  if (!session.some((c) => c.includes('session-token'))) throw new Error(`sign-in as ${email} failed (${response.status})`);
+  if (!session.some((c) => c.includes('session-token')))
+    throw new Error(`sign-in as ${email} failed (${response.status})`);
   return [...cookies, ...session].join('; ');
 }
 

@@ -11,7 +11,9 @@ const envFile = process.argv[2] ?? path.join(root, '.data/fakes.env');
 const base = Number(process.env.FAKES_PORT_BASE ?? 54390);
 const dataDir = process.env.FAKES_DATA_DIR ?? path.join(root, '.data/fakes');
 
-const modules = readdirSync(here).filter((file) => file.endsWith('.fake.mjs')).sort();
+const modules = readdirSync(here)
+  .filter((file) => file.endsWith('.fake.mjs'))
+  .sort();
 // Fixed offsets, so adding a fake never moves another one's port (each gets two: the second for a web view).
 const OFFSETS = { mail: 1, s3: 3, payments: 5 };
 const running = [];
@@ -26,7 +28,12 @@ for (const file of modules) {
   console.error(`[fakes] ${fake.name} ready`);
 }
 // Written atomically: whoever waits for the file reads it whole.
-writeFileSync(`${envFile}.tmp`, `${Object.entries(env).map(([key, value]) => `${key}=${value}`).join('\n')}\n`);
+writeFileSync(
+  `${envFile}.tmp`,
+  `${Object.entries(env)
+    .map(([key, value]) => `${key}=${value}`)
+    .join('\n')}\n`,
+);
 renameSync(`${envFile}.tmp`, envFile);
 
 const stop = async () => {

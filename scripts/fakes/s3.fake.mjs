@@ -11,12 +11,24 @@ export async function start({ dataDir, port }) {
   const directory = path.join(dataDir, 's3');
   mkdirSync(directory, { recursive: true });
   const bucket = process.env.S3_BUCKET || 'setline-evidence';
-  const server = new S3rver({ address: '127.0.0.1', port, directory, silent: true, configureBuckets: [{ name: bucket, configs: [CORS] }] });
+  const server = new S3rver({
+    address: '127.0.0.1',
+    port,
+    directory,
+    silent: true,
+    configureBuckets: [{ name: bucket, configs: [CORS] }],
+  });
   await server.run();
   return {
     name: 's3',
     // The fake's one built-in key pair.
-    env: { S3_ENDPOINT: `http://127.0.0.1:${port}`, S3_REGION: 'us-east-1', S3_BUCKET: bucket, S3_ACCESS_KEY_ID: 'S3RVER', S3_SECRET_ACCESS_KEY: 'S3RVER' },
+    env: {
+      S3_ENDPOINT: `http://127.0.0.1:${port}`,
+      S3_REGION: 'us-east-1',
+      S3_BUCKET: bucket,
+      S3_ACCESS_KEY_ID: 'S3RVER',
+      S3_SECRET_ACCESS_KEY: 'S3RVER',
+    },
     stop: () => server.close(),
   };
 }

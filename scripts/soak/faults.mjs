@@ -65,7 +65,11 @@ export class ClusterServers {
   }
 
   cluster(...args) {
-    return run('bash', [`${this.root}/scripts/cluster.sh`, ...args.map(String)], { cwd: this.root, env: { ...process.env, PORT: String(this.port) }, timeout: 30_000 });
+    return run('bash', [`${this.root}/scripts/cluster.sh`, ...args.map(String)], {
+      cwd: this.root,
+      env: { ...process.env, PORT: String(this.port) },
+      timeout: 30_000,
+    });
   }
 
   stop() {}

@@ -35,19 +35,33 @@ const say = (message) => console.log(`[soak] ${message}`);
 
 const started = Date.now();
 const server =
-  TARGET === 'cluster' ? new ClusterServers({ root, port: PORT }) : new SingleServer({ root, port: PORT, stateDir: path.join(root, '.data/soak') });
+  TARGET === 'cluster'
+    ? new ClusterServers({ root, port: PORT })
+    : new SingleServer({ root, port: PORT, stateDir: path.join(root, '.data/soak') });
 let stopping = false;
-for (const signal of ['SIGINT', 'SIGTERM']) process.on(signal, () => { stopping = true; server.stop(); process.exit(130); });
+for (const signal of ['SIGINT', 'SIGTERM'])
+  process.on(signal, () => {
+    stopping = true;
+    server.stop();
+    process.exit(130);
+  });
 process.on('exit', () => server.stop());
 
 // Each tablet's share of the taps, spread over installs of about PER_INSTALL taps.
-const plans = Array.from({ length: TABLETS }, (_, i) => splitTaps(Math.floor(TAPS / TABLETS) + (i < TAPS % TABLETS ? 1 : 0), PER_INSTALL));
+const plans = Array.from({ length: TABLETS }, (_, i) =>
+  splitTaps(Math.floor(TAPS / TABLETS) + (i < TAPS % TABLETS ? 1 : 0), PER_INSTALL),
+);
 const durability = await durabilitySettings(process.env.DATABASE_URL);
 if (durability.fsync !== 'on' || durability.synchronous_commit !== 'on') {
   throw new Error(`the soak needs fsync and synchronous_commit on; the database has ${JSON.stringify(durability)}`);
 }
-const { companyId, tablets } = await seedSoakCompany(process.env.DATABASE_URL, plans.map((p) => p.length));
-say(`${TARGET} target on ${server.base}: ${TABLETS} tablets, ${TAPS} taps over ${plans.flat().length} installs (fsync ${durability.fsync}, synchronous_commit ${durability.synchronous_commit})`);
+const { companyId, tablets } = await seedSoakCompany(
+  process.env.DATABASE_URL,
+  plans.map((p) => p.length),
+);
+say(
+  `${TARGET} target on ${server.base}: ${TABLETS} tablets, ${TAPS} taps over ${plans.flat().length} installs (fsync ${durability.fsync}, synchronous_commit ${durability.synchronous_commit})`,
+);
 await server.start();
 
 // The faults, spread over the run by acknowledged taps; a tablet waits at a fault's mark until it has begun.
@@ -79,7 +93,10 @@ const workers = tablets.map(
 );
 
 let finished = 0;
-const progress = setInterval(() => say(`${acknowledged} acknowledged after ${((Date.now() - started) / 1000).toFixed(0)} s`), 60_000);
+const progress = setInterval(
+  () => say(`${acknowledged} acknowledged after ${((Date.now() - started) / 1000).toFixed(0)} s`),
+  60_000,
+);
 progress.unref();
 const allDone = () => finished === workers.length;
 const faults = (async () => {
@@ -93,7 +110,9 @@ const faults = (async () => {
     const what = kind === 'kill' ? await server.crash(downMs) : await crashDatabase(root, server.base, downMs);
     if (kind === 'kill') done.kills++;
     else done.stops++;
-    say(`${kind === 'kill' ? `SIGKILL ${what}` : 'pg_ctl stop -m immediate'} at ${at}; back after ${((Date.now() - started) / 1000).toFixed(0)} s into the run`);
+    say(
+      `${kind === 'kill' ? `SIGKILL ${what}` : 'pg_ctl stop -m immediate'} at ${at}; back after ${((Date.now() - started) / 1000).toFixed(0)} s into the run`,
+    );
   }
 })();
 await Promise.all(workers.map((w) => w.run().finally(() => finished++)));
@@ -113,14 +132,24 @@ const stats = workers.reduce(
   },
   { requests: 0, retries: 0, replays: 0, failures: {} },
 );
-say(`${seconds.toFixed(0)} s; ${stats.requests} requests, ${stats.retries} retries, ${stats.replays} answered as replays; failed tries: ${JSON.stringify(stats.failures)}`);
+say(
+  `${seconds.toFixed(0)} s; ${stats.requests} requests, ${stats.retries} retries, ${stats.replays} answered as replays; failed tries: ${JSON.stringify(stats.failures)}`,
+);
 for (const problem of [...workers.map((w) => w.problem).filter(Boolean), ...result.problems]) say(`PROBLEM ${problem}`);
-if (Date.now() > deadline) say(`PROBLEM the deadline of ${DEADLINE_MS / 1000} s passed before every tap was acknowledged`);
+if (Date.now() > deadline)
+  say(`PROBLEM the deadline of ${DEADLINE_MS / 1000} s passed before every tap was acknowledged`);
 
 const ok =
-  result.lost === 0 && result.duplicated === 0 && result.problems.length === 0 && acknowledged === TAPS &&
-  workers.every((w) => !w.problem) && done.kills === KILLS && done.stops === DB_STOPS;
-console.log(`soak: ${TAPS} taps, ${acknowledged} acknowledged, ${result.stored} stored, ${result.lost} lost, ${result.duplicated} duplicated, ${done.kills} kills, ${done.stops} database stops`);
+  result.lost === 0 &&
+  result.duplicated === 0 &&
+  result.problems.length === 0 &&
+  acknowledged === TAPS &&
+  workers.every((w) => !w.problem) &&
+  done.kills === KILLS &&
+  done.stops === DB_STOPS;
+console.log(
+  `soak: ${TAPS} taps, ${acknowledged} acknowledged, ${result.stored} stored, ${result.lost} lost, ${result.duplicated} duplicated, ${done.kills} kills, ${done.stops} database stops`,
+);
 process.exit(ok ? 0 : 1);
 
 /** Kills and database stops interleaved, the database stops in the middle of the run. */
@@ -134,7 +163,9 @@ async function durabilitySettings(databaseUrl) {
   const client = new pg.Client({ connectionString: databaseUrl });
   await client.connect();
   try {
-    const { rows } = await client.query(`SELECT name, setting FROM pg_settings WHERE name IN ('fsync', 'synchronous_commit')`);
+    const { rows } = await client.query(
+      `SELECT name, setting FROM pg_settings WHERE name IN ('fsync', 'synchronous_commit')`,
+    );
     return Object.fromEntries(rows.map((r) => [r.name, r.setting]));
   } finally {
     await client.end();

@@ -30,7 +30,8 @@ export class Tablet {
         this.sent.push(entry);
         const answer = await this.until(`/api/installs/${installId}/events`, tap);
         if (answer === null) return;
-        if (answer.event?.clientEventId !== tap.clientEventId) return this.fail(`acknowledged with another event: ${JSON.stringify(answer).slice(0, 200)}`);
+        if (answer.event?.clientEventId !== tap.clientEventId)
+          return this.fail(`acknowledged with another event: ${JSON.stringify(answer).slice(0, 200)}`);
         entry.acknowledged = true;
         this.onAck(entry);
       }
@@ -96,7 +97,10 @@ export class Tablet {
           headers: { 'content-type': 'application/x-www-form-urlencoded', cookie: cookies.join('; ') },
           body: new URLSearchParams({ csrfToken, email: this.tablet.email, password: this.password, json: 'true' }),
         });
-        const session = res.headers.getSetCookie().map((c) => c.split(';')[0]).filter((c) => c.includes('session-token='));
+        const session = res.headers
+          .getSetCookie()
+          .map((c) => c.split(';')[0])
+          .filter((c) => c.includes('session-token='));
         if (!session.length) continue;
         this.cookie = session.join('; ');
         const me = await exchange(`${this.base}/api/auth/session`, { headers: { cookie: this.cookie } });

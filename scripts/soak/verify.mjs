@@ -40,7 +40,10 @@ function compare(rows, installs, tablets) {
   const sentByInstall = groupBy(sent, (entry) => entry.installId);
   let outOfOrder = 0;
   for (const [installId, entries] of sentByInstall) {
-    const expected = entries.filter((e) => countById.has(e.clientEventId)).sort((a, b) => a.seq - b.seq).map((e) => e.clientEventId);
+    const expected = entries
+      .filter((e) => countById.has(e.clientEventId))
+      .sort((a, b) => a.seq - b.seq)
+      .map((e) => e.clientEventId);
     const stored = rowsByInstall.get(installId) ?? [];
     const byReceipt = [...stored].sort((a, b) => a.receivedAt - b.receivedAt).map((r) => r.id);
     const byDevice = [...stored].sort((a, b) => a.deviceTime - b.deviceTime).map((r) => r.id);
@@ -49,7 +52,9 @@ function compare(rows, installs, tablets) {
   if (outOfOrder) problems.push(`${outOfOrder} installs hold their taps in another order than their tablet sent them`);
 
   // A finished install (its tablet got every tap acknowledged, sign-off last) is awaiting review.
-  const finished = tablets.flatMap((t) => [...groupBy(t.sent, (e) => e.installId)].filter(([, list]) => list.every((e) => e.acknowledged)));
+  const finished = tablets.flatMap((t) =>
+    [...groupBy(t.sent, (e) => e.installId)].filter(([, list]) => list.every((e) => e.acknowledged)),
+  );
   const rowOf = new Map(installs.map((row) => [row.id, row]));
   let notSignedOff = 0;
   let derivedWrong = 0;
@@ -61,7 +66,8 @@ function compare(rows, installs, tablets) {
     if (install?.derived_at && list.length >= 13 && install.step !== 'done') derivedWrong++;
   }
   if (notSignedOff) problems.push(`${notSignedOff} finished installs are not awaiting review`);
-  if (derivedWrong) problems.push(`${derivedWrong} installs whose derived summary (step, event count) disagrees with their log`);
+  if (derivedWrong)
+    problems.push(`${derivedWrong} installs whose derived summary (step, event count) disagrees with their log`);
 
   return { stored, lost: acknowledged.length - stored, duplicated, problems };
 }

@@ -11,7 +11,9 @@ async function expectAccessible(page: Page, what: string) {
   await page.waitForLoadState('networkidle', { timeout: 5_000 }).catch(() => undefined);
   const { violations } = await new AxeBuilder({ page }).withTags(TAGS).analyze();
   const bad = violations.filter((v) => v.impact === 'serious' || v.impact === 'critical');
-  const summary = bad.map((v) => `${v.id} (${v.impact}): ${v.help} — ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`);
+  const summary = bad.map(
+    (v) => `${v.id} (${v.impact}): ${v.help} — ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`,
+  );
   expect(summary, `${what}: serious or critical accessibility violations`).toEqual([]);
 }
 
@@ -36,8 +38,18 @@ test('desk pages: lists, a detail with its inline form open, forms, schedule, re
   expect(installs.items.length, 'a demo install to review').toBeGreaterThan(0);
   const packers = await (await page.request.get('/api/packers?pageSize=1')).json();
   const pages = [
-    '/jobs', '/customers', '/reviews', '/schedule', `/jobs/${jobId}`, '/customers/new', '/jobs/new',
-    `/reviews/${installs.items[0].id}`, '/admin', '/admin/company', '/admin/packers', `/admin/packers/${packers.items[0].id}`,
+    '/jobs',
+    '/customers',
+    '/reviews',
+    '/schedule',
+    `/jobs/${jobId}`,
+    '/customers/new',
+    '/jobs/new',
+    `/reviews/${installs.items[0].id}`,
+    '/admin',
+    '/admin/company',
+    '/admin/packers',
+    `/admin/packers/${packers.items[0].id}`,
   ];
   for (const path of pages) {
     await page.goto(path);
@@ -86,7 +98,6 @@ test.describe('field screens', () => {
   });
 });
 
-
 // The demo job whose install is already approved: its report can be sent (as report.spec does).
 const REPORTED_JOB_TITLE = 'Joint separation at the crossing';
 const MAIL = process.env.MAIL_WEB_URL;
@@ -102,11 +113,16 @@ test("the customer's report page", async ({ page, browser }) => {
   const sent = await page.request.post(`/api/jobs/${job.id}/report`, { data: { to } });
   expect(sent.status(), await sent.text()).toBeLessThan(300);
   let text = '';
-  await expect.poll(async () => {
-    const all = await (await page.request.get(`${MAIL}/messages`)).json();
-    text = all.find((m: { to: string }) => m.to.includes(to))?.text ?? '';
-    return text.length > 0;
-  }, { timeout: 60_000 }).toBe(true);
+  await expect
+    .poll(
+      async () => {
+        const all = await (await page.request.get(`${MAIL}/messages`)).json();
+        text = all.find((m: { to: string }) => m.to.includes(to))?.text ?? '';
+        return text.length > 0;
+      },
+      { timeout: 60_000 },
+    )
+    .toBe(true);
   const link = /https?:\/\/\S+\/r\/[\w-]+\.[\w-]+/.exec(text)?.[0];
   expect(link, 'the report link in the e-mail').toBeTruthy();
 

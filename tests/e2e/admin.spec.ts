@@ -42,7 +42,9 @@ test('an admin creates a user, deactivates them, and their open session is refus
   await person.goto('/today');
   await expect(person).toHaveURL(/\/sign-in/);
   await signIn(person, email, password);
-  await expect(person.getByRole('main').getByRole('alert')).toHaveText('That e-mail and password do not match an active account.');
+  await expect(person.getByRole('main').getByRole('alert')).toHaveText(
+    'That e-mail and password do not match an active account.',
+  );
 
   await adminContext.close();
   await userContext.close();
@@ -59,7 +61,9 @@ test('an admin resets a password: the old session ends and only the new password
 
   await signIn(admin, 'admin@demo.test');
   await expect(admin).toHaveURL('/admin');
-  const made = await admin.request.post('/api/users', { data: { name, email, role: 'foreman', password: 'first-password-123' } });
+  const made = await admin.request.post('/api/users', {
+    data: { name, email, role: 'foreman', password: 'first-password-123' },
+  });
   expect(made.status()).toBe(201);
   await signIn(person, email, 'first-password-123');
   await expect(person).toHaveURL('/today');
@@ -85,8 +89,13 @@ test('the settings index links every section; the office gets the 403 page and 4
   await expect(page).toHaveURL('/admin');
   const settings = page.getByRole('navigation', { name: 'Settings' });
   for (const [title, href] of [
-    ['Company', '/admin/company'], ['Users', '/admin/users'], ['Crews', '/admin/crews'], ['Resin systems', '/admin/resin-systems'],
-    ['Resin kits', '/admin/resin-kits'], ['Packers', '/admin/packers'], ['Check-list templates', '/admin/checklists'],
+    ['Company', '/admin/company'],
+    ['Users', '/admin/users'],
+    ['Crews', '/admin/crews'],
+    ['Resin systems', '/admin/resin-systems'],
+    ['Resin kits', '/admin/resin-kits'],
+    ['Packers', '/admin/packers'],
+    ['Check-list templates', '/admin/checklists'],
   ]) {
     await expect(settings.getByRole('link', { name: new RegExp(`^${title}`) })).toHaveAttribute('href', href);
   }

@@ -4,7 +4,16 @@ import { Pool } from 'pg';
 import { BASE_URL } from '../../playwright.config';
 import { listPageFiles, listRouteFiles } from '../fixtures/route-tree';
 import { DEMO_PASSWORD } from './helpers';
-import { API, CALLERS, PAGES, PROBE, type Caller, type CloneTable, type Expectation, type Row } from './authorization-table';
+import {
+  API,
+  CALLERS,
+  PAGES,
+  PROBE,
+  type Caller,
+  type CloneTable,
+  type Expectation,
+  type Row,
+} from './authorization-table';
 
 // Every route × method × caller and every page × caller against the production server and the seeded demo,
 // checked against the table in authorization-table.ts. No browser pages: one request context per caller.
@@ -30,7 +39,9 @@ async function demoIds(db: Pool): Promise<Ids> {
   const company = await one("SELECT company_id AS id FROM users WHERE email = 'admin@demo.test'");
   const crew = await one("SELECT id FROM crews WHERE company_id = $1 AND name = 'North crew'", [company]);
   const job = await one(
-    'SELECT j.id FROM jobs j JOIN invoices v ON v.job_id = j.id JOIN installs i ON i.job_id = j.id WHERE j.crew_id = $1 ORDER BY j.created_at LIMIT 1', [crew]);
+    'SELECT j.id FROM jobs j JOIN invoices v ON v.job_id = j.id JOIN installs i ON i.job_id = j.id WHERE j.crew_id = $1 ORDER BY j.created_at LIMIT 1',
+    [crew],
+  );
   const install = await one('SELECT id FROM installs WHERE job_id = $1 LIMIT 1', [job]);
   const repair = await one('SELECT repair_id AS id FROM installs WHERE id = $1', [install]);
   const segment = await one('SELECT segment_id AS id FROM repairs WHERE id = $1', [repair]);
@@ -44,7 +55,15 @@ async function demoIds(db: Pool): Promise<Ids> {
     [attachment, company, job, repair, install, `matrix/${attachment}.png`, tech],
   );
   return {
-    company, crew, job, install, repair, segment, site, user: tech, attachment,
+    company,
+    crew,
+    job,
+    install,
+    repair,
+    segment,
+    site,
+    user: tech,
+    attachment,
     customer: await one('SELECT customer_id AS id FROM jobs WHERE id = $1', [job]),
     invoice: await one('SELECT id FROM invoices WHERE job_id = $1 LIMIT 1', [job]),
     accessPoint: await one('SELECT from_access_point_id AS id FROM segments WHERE id = $1', [segment]),
@@ -57,10 +76,23 @@ async function demoIds(db: Pool): Promise<Ids> {
 
 /** The demo row each `[id]` names, by the resource before it in the URL. */
 const RESOURCE: Record<string, string> = {
-  'access-points': 'accessPoint', attachments: 'attachment', 'checklist-templates': 'checklist', checklists: 'checklist',
-  crews: 'crew', customers: 'customer', installs: 'install', invoices: 'invoice', jobs: 'job', packers: 'packer',
-  repairs: 'repair', 'resin-kits': 'resinKit', 'resin-systems': 'resinSystem', reviews: 'install', segments: 'segment',
-  sites: 'site', users: 'user',
+  'access-points': 'accessPoint',
+  attachments: 'attachment',
+  'checklist-templates': 'checklist',
+  checklists: 'checklist',
+  crews: 'crew',
+  customers: 'customer',
+  installs: 'install',
+  invoices: 'invoice',
+  jobs: 'job',
+  packers: 'packer',
+  repairs: 'repair',
+  'resin-kits': 'resinKit',
+  'resin-systems': 'resinSystem',
+  reviews: 'install',
+  segments: 'segment',
+  sites: 'site',
+  users: 'user',
 };
 
 /** The resource of a pattern's first `[id]`: `/api/jobs/[id]/report-links` → job. */
@@ -77,7 +109,8 @@ function fill(pattern: string, ids: Ids, idOverride?: string): string {
       if (part === '[token]') return 'not-a-genuine-report-link';
       if (!/^\[.+\]$/.test(part)) return part;
       const id = ids[RESOURCE[parts[i - 1]] ?? ''];
-      if (!id) throw new Error(`no demo id for ${part} in ${pattern}: add it to RESOURCE in authorization-matrix.spec.ts`);
+      if (!id)
+        throw new Error(`no demo id for ${part} in ${pattern}: add it to RESOURCE in authorization-matrix.spec.ts`);
       return idOverride ?? id;
     })
     .join('/');
@@ -116,7 +149,8 @@ async function signedInContext(email: string): Promise<APIRequestContext> {
     maxRedirects: 0,
   });
   const cookies = (await context.storageState()).cookies.map((c) => c.name);
-  if (!cookies.some((name) => name.endsWith('session-token'))) throw new Error(`sign-in of ${email} failed: ${answer.status()}`);
+  if (!cookies.some((name) => name.endsWith('session-token')))
+    throw new Error(`sign-in of ${email} failed: ${answer.status()}`);
   return context;
 }
 
@@ -177,7 +211,9 @@ test('authorization matrix: every route, method and page answers each caller as 
   const contexts = {} as Record<Caller, APIRequestContext>;
   try {
     const ids = await demoIds(db);
-    for (const caller of CALLERS) contexts[caller] = caller === 'none' ? await request.newContext({ baseURL: BASE_URL }) : await signedInContext(EMAILS[caller]);
+    for (const caller of CALLERS)
+      contexts[caller] =
+        caller === 'none' ? await request.newContext({ baseURL: BASE_URL }) : await signedInContext(EMAILS[caller]);
 
     const failures: string[] = [];
     const run = async (key: string, row: Row, caller: Caller, page: boolean) => {
@@ -186,7 +222,11 @@ test('authorization matrix: every route, method and page answers each caller as 
       const url = urlOf(pattern, row, ids, idOverride);
       const mutating = !['GET', 'HEAD'].includes(method);
       const send = () =>
-        contexts[caller].fetch(url, { method, maxRedirects: 0, ...(mutating && !url.startsWith('/api/auth/') ? { data: row.body ?? PROBE } : {}) });
+        contexts[caller].fetch(url, {
+          method,
+          maxRedirects: 0,
+          ...(mutating && !url.startsWith('/api/auth/') ? { data: row.body ?? PROBE } : {}),
+        });
       // A kept-alive socket the server closed just as it was reused is a transport hiccup, not an answer: once more.
       const response = await send().catch((error: Error) => {
         if (!/ECONNRESET|socket hang up/.test(error.message)) throw error;
@@ -194,8 +234,12 @@ test('authorization matrix: every route, method and page answers each caller as 
       });
       const actual = await outcome(response, page);
       const expected = row.expect[caller];
-      if (!matches(expected, actual)) failures.push(`${page ? 'page ' : ''}${key} as ${caller} (${url}): expected ${JSON.stringify(expected)}, got ${JSON.stringify(actual)}`);
-      if (typeof actual === 'number' && actual >= 500) failures.push(`${key} as ${caller}: ${actual} ${(await response.text()).slice(0, 300)}`);
+      if (!matches(expected, actual))
+        failures.push(
+          `${page ? 'page ' : ''}${key} as ${caller} (${url}): expected ${JSON.stringify(expected)}, got ${JSON.stringify(actual)}`,
+        );
+      if (typeof actual === 'number' && actual >= 500)
+        failures.push(`${key} as ${caller}: ${actual} ${(await response.text()).slice(0, 300)}`);
     };
 
     // A few requests at a time: the server is real and the machine small.
@@ -209,10 +253,14 @@ test('authorization matrix: every route, method and page answers each caller as 
         if (result.status === 'rejected') failures.push(String(result.reason).slice(0, 400));
       }
     }
-    expect(failures, `${failures.length} of ${jobs.length} cases differ from the table:\n${failures.join('\n')}`).toEqual([]);
+    expect(
+      failures,
+      `${failures.length} of ${jobs.length} cases differ from the table:\n${failures.join('\n')}`,
+    ).toEqual([]);
   } finally {
     // The demo is shared with the other specs: the copies (deleted or only archived) and the test image go.
-    for (const { table, id } of clones.reverse()) await db.query(`DELETE FROM ${table} WHERE id = $1`, [id]).catch((e) => console.error(e));
+    for (const { table, id } of clones.reverse())
+      await db.query(`DELETE FROM ${table} WHERE id = $1`, [id]).catch((e) => console.error(e));
     await db.query("DELETE FROM attachments WHERE storage_key LIKE 'matrix/%'");
     await db.end();
     await Promise.allSettled(Object.values(contexts).map((c) => c.dispose()));

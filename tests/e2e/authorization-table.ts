@@ -21,8 +21,18 @@ export type Expectations = Record<Caller, Expectation>;
 
 /** Tables of the demo rows that a DELETE may copy and delete instead of the original. */
 export type CloneTable =
-  | 'access_points' | 'attachments' | 'checklist_templates' | 'crews' | 'customers' | 'jobs' | 'packers'
-  | 'repairs' | 'resin_kits' | 'resin_systems' | 'segments' | 'sites';
+  | 'access_points'
+  | 'attachments'
+  | 'checklist_templates'
+  | 'crews'
+  | 'customers'
+  | 'jobs'
+  | 'packers'
+  | 'repairs'
+  | 'resin_kits'
+  | 'resin_systems'
+  | 'segments'
+  | 'sites';
 
 export type Row = {
   expect: Expectations;
@@ -39,17 +49,49 @@ export type Row = {
 /** Well-formed JSON that no schema accepts (the schemas are strict, or lack their required keys). */
 export const PROBE = { matrixProbe: 1 };
 
-const all = (e: Expectation): Expectations => ({ admin: e, office: e, foreman: e, tech: e, tech2: e, foreign: e, none: e });
+const all = (e: Expectation): Expectations => ({
+  admin: e,
+  office: e,
+  foreman: e,
+  tech: e,
+  tech2: e,
+  foreign: e,
+  none: e,
+});
 /** Anyone signed in (each company sees its own); 401 signed out. */
 const signedIn = (e: Expectation): Expectations => ({ ...all(e), none: 401 });
 /** Admin and office; field roles refused by role, another company's office finds no such row. */
-const desk = (e: Expectation): Expectations => ({ admin: e, office: e, foreman: 403, tech: 403, tech2: 403, foreign: 404, none: 401 });
+const desk = (e: Expectation): Expectations => ({
+  admin: e,
+  office: e,
+  foreman: 403,
+  tech: 403,
+  tech2: 403,
+  foreign: 404,
+  none: 401,
+});
 /** A desk collection: another company's office acts on its own company. */
 const deskCollection = (e: Expectation): Expectations => ({ ...desk(e), foreign: e });
 /** Admin only: every other role refused by role (another company's office too). */
-const admin = (e: Expectation): Expectations => ({ admin: e, office: 403, foreman: 403, tech: 403, tech2: 403, foreign: 403, none: 401 });
+const admin = (e: Expectation): Expectations => ({
+  admin: e,
+  office: 403,
+  foreman: 403,
+  tech: 403,
+  tech2: 403,
+  foreign: 403,
+  none: 401,
+});
 /** A row of the North crew's job: desk and the crew read it; another crew and another company find nothing. */
-const crewRow = (e: Expectation): Expectations => ({ admin: e, office: e, foreman: e, tech: e, tech2: 404, foreign: 404, none: 401 });
+const crewRow = (e: Expectation): Expectations => ({
+  admin: e,
+  office: e,
+  foreman: e,
+  tech: e,
+  tech2: 404,
+  foreign: 404,
+  none: 401,
+});
 /**
  * An install or its evidence: another crew of the same company is refused by role of crew (403 "belongs to
  * another crew", which the tablet shows), another company finds nothing.
@@ -194,12 +236,46 @@ export const API: Record<string, Row> = {
 
 const SIGN_IN = '→/sign-in';
 const FORBIDDEN = '→/forbidden';
-const deskPage = (own: Expectation = 200): Expectations => ({ admin: 200, office: 200, foreman: FORBIDDEN, tech: FORBIDDEN, tech2: FORBIDDEN, foreign: own, none: SIGN_IN });
-const adminPage: Expectations = { admin: 200, office: FORBIDDEN, foreman: FORBIDDEN, tech: FORBIDDEN, tech2: FORBIDDEN, foreign: FORBIDDEN, none: SIGN_IN };
-const fieldPage = (other: Expectation): Expectations => ({ admin: FORBIDDEN, office: FORBIDDEN, foreman: 200, tech: 200, tech2: other, foreign: FORBIDDEN, none: SIGN_IN });
+const deskPage = (own: Expectation = 200): Expectations => ({
+  admin: 200,
+  office: 200,
+  foreman: FORBIDDEN,
+  tech: FORBIDDEN,
+  tech2: FORBIDDEN,
+  foreign: own,
+  none: SIGN_IN,
+});
+const adminPage: Expectations = {
+  admin: 200,
+  office: FORBIDDEN,
+  foreman: FORBIDDEN,
+  tech: FORBIDDEN,
+  tech2: FORBIDDEN,
+  foreign: FORBIDDEN,
+  none: SIGN_IN,
+};
+const fieldPage = (other: Expectation): Expectations => ({
+  admin: FORBIDDEN,
+  office: FORBIDDEN,
+  foreman: 200,
+  tech: 200,
+  tech2: other,
+  foreign: FORBIDDEN,
+  none: SIGN_IN,
+});
 
 export const PAGES: Record<string, Row> = {
-  '/': { expect: { admin: '→/admin', office: '→/jobs', foreman: '→/today', tech: '→/today', tech2: '→/today', foreign: '→/jobs', none: SIGN_IN } },
+  '/': {
+    expect: {
+      admin: '→/admin',
+      office: '→/jobs',
+      foreman: '→/today',
+      tech: '→/today',
+      tech2: '→/today',
+      foreign: '→/jobs',
+      none: SIGN_IN,
+    },
+  },
   '/sign-in': { expect: all(200) },
   '/forbidden': { expect: all(200) },
   '/profile': { expect: { ...all(200), none: SIGN_IN } },
@@ -255,4 +331,3 @@ export const PAGES: Record<string, Row> = {
   // Another crew's install: the same refusal as the API's 403, the forbidden page.
   '/installs/[id]': { expect: fieldPage(FORBIDDEN) },
 };
-

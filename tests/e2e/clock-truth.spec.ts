@@ -1,6 +1,15 @@
 import { expect, test, type Page } from '@playwright/test';
 import { signIn } from './helpers';
-import { acknowledgeAndCheck, controlTime, mixAndInflate, newInstall, prepareToMix, recordConditions, serverView, tap } from './install-helpers';
+import {
+  acknowledgeAndCheck,
+  controlTime,
+  mixAndInflate,
+  newInstall,
+  prepareToMix,
+  recordConditions,
+  serverView,
+  tap,
+} from './install-helpers';
 
 // Fake time needs every API answer to pass page.route, which a service worker would bypass.
 test.use({ serviceWorkers: 'block' });
@@ -8,11 +17,15 @@ test.use({ serviceWorkers: 'block' });
 test.setTimeout(240_000);
 
 /** Every queued tap has reached the server (a longer wait than waitForSync: a whole install queued). */
-const allSynced = (page: Page) => expect(page.getByTestId('sync-status')).toHaveText('All taps synced', { timeout: 90_000 });
+const allSynced = (page: Page) =>
+  expect(page.getByTestId('sync-status')).toHaveText('All taps synced', { timeout: 90_000 });
 
 const RAW_INSTANT = /\d{4}-\d{2}-\d{2}T\d{2}:\d{2}/;
 
-test('a failed patch: the signed-off install reads as a record, then the foreman redoes it and the desk shows the chain', async ({ page, browser }) => {
+test('a failed patch: the signed-off install reads as a record, then the foreman redoes it and the desk shows the chain', async ({
+  page,
+  browser,
+}) => {
   const time = await controlTime(page);
   await signIn(page, 'foreman@demo.test');
   await expect(page).toHaveURL('/today');
@@ -66,7 +79,9 @@ test('a failed patch: the signed-off install reads as a record, then the foreman
   await desk.close();
 });
 
-test("a pipe below the resin's range: NO-GO with no clock; the foreman goes on with the maker's hold and the countdown says so", async ({ page }) => {
+test("a pipe below the resin's range: NO-GO with no clock; the foreman goes on with the maker's hold and the countdown says so", async ({
+  page,
+}) => {
   const time = await controlTime(page);
   await signIn(page, 'foreman@demo.test');
   await expect(page).toHaveURL('/today');
@@ -92,7 +107,9 @@ test("a pipe below the resin's range: NO-GO with no clock; the foreman goes on w
   await go.click();
   await mixAndInflate(page, time.advance);
   await expect(page.getByTestId('countdown').first()).toHaveAttribute('aria-label', "Deflate after (maker's hold)");
-  await expect(page.getByTestId('hold-note')).toContainText("resin maker's hold of 3:00:00 + the company's 10 % reserve = 3:18:00");
+  await expect(page.getByTestId('hold-note')).toContainText(
+    "resin maker's hold of 3:00:00 + the company's 10 % reserve = 3:18:00",
+  );
   await expect(page.getByTestId('flags').locator('[data-kind="cold-cure"]')).toBeVisible();
   await allSynced(page);
   const view = await serverView(page, id);

@@ -7,7 +7,9 @@ import { signIn } from './helpers';
 // office then sees the invoice paid. Needs the service fakes started by scripts/test.sh.
 const MAIL = process.env.MAIL_WEB_URL;
 
-test('approve, invoice, report by e-mail, the customer pays from the link, the office sees it paid', async ({ browser }) => {
+test('approve, invoice, report by e-mail, the customer pays from the link, the office sees it paid', async ({
+  browser,
+}) => {
   test.skip(!MAIL || !process.env.STRIPE_API_URL, 'needs the service fakes: run through scripts/test.sh');
   test.setTimeout(240_000);
   const office = await (await browser.newContext()).newPage();
@@ -20,7 +22,9 @@ test('approve, invoice, report by e-mail, the customer pays from the link, the o
   const jobNumber = (await row.getByRole('link').innerText()).trim();
   await row.getByRole('link').click();
   await expect(office.getByRole('heading', { level: 1 })).toContainText(`Job ${jobNumber}`);
-  await office.getByLabel('Comment for the crew').fill('Deflate reason accepted: flow came back early, patch inspected sound.');
+  await office
+    .getByLabel('Comment for the crew')
+    .fill('Deflate reason accepted: flow came back early, patch inspected sound.');
   await office.getByRole('button', { name: 'Approve' }).click();
   await expect(office.getByRole('region', { name: 'Decision' })).toContainText('Approved');
 
@@ -48,15 +52,22 @@ test('approve, invoice, report by e-mail, the customer pays from the link, the o
   await report.getByRole('button', { name: 'Send repair report' }).click();
   await report.getByLabel('Send to').fill(to);
   await report.getByRole('button', { name: 'Send now' }).click();
-  await expect(report.getByRole('table', { name: 'Report send log' }).getByRole('row').filter({ hasText: to })).toContainText('Sent', { timeout: 60_000 });
+  await expect(
+    report.getByRole('table', { name: 'Report send log' }).getByRole('row').filter({ hasText: to }),
+  ).toContainText('Sent', { timeout: 60_000 });
 
   // The customer: the link from the e-mail the local mailbox received.
   let text = '';
-  await expect.poll(async () => {
-    const all = await (await office.request.get(`${MAIL}/messages`)).json();
-    text = all.find((m: { to: string }) => m.to.includes(to))?.text ?? '';
-    return text.length > 0;
-  }, { timeout: 20_000 }).toBe(true);
+  await expect
+    .poll(
+      async () => {
+        const all = await (await office.request.get(`${MAIL}/messages`)).json();
+        text = all.find((m: { to: string }) => m.to.includes(to))?.text ?? '';
+        return text.length > 0;
+      },
+      { timeout: 20_000 },
+    )
+    .toBe(true);
   const link = /https?:\/\/\S+\/r\/[\w-]+\.[\w-]+/.exec(text)?.[0];
   expect(link, 'the report link in the e-mail').toBeTruthy();
   const customer = await (await browser.newContext()).newPage();
@@ -79,19 +90,29 @@ test('approve, invoice, report by e-mail, the customer pays from the link, the o
 
   // A second payment arrives for the paid invoice (a checkout made outside the app, paid late): the office
   // sees a payment problem on the invoice, in the list and in the job's history.
-  const paidInvoice = (await (await office.request.get(`/api/invoices?q=${encodeURIComponent(jobNumber)}&status=paid`)).json()).items[0];
-  const stray = await (await office.request.post(`${process.env.STRIPE_API_URL}/v1/checkout/sessions`, {
-    headers: { authorization: `Bearer ${process.env.STRIPE_SECRET_KEY}` },
-    form: {
-      mode: 'payment', 'metadata[invoiceId]': paidInvoice.id, 'metadata[companyId]': paidInvoice.companyId,
-      success_url: new URL('/r/back/x?paid=1', office.url()).href,
-      'line_items[0][quantity]': '1', 'line_items[0][price_data][currency]': 'usd', 'line_items[0][price_data][unit_amount]': '227325',
-      'line_items[0][price_data][product_data][name]': 'Invoice',
-    },
-  })).json();
+  const paidInvoice = (
+    await (await office.request.get(`/api/invoices?q=${encodeURIComponent(jobNumber)}&status=paid`)).json()
+  ).items[0];
+  const stray = await (
+    await office.request.post(`${process.env.STRIPE_API_URL}/v1/checkout/sessions`, {
+      headers: { authorization: `Bearer ${process.env.STRIPE_SECRET_KEY}` },
+      form: {
+        mode: 'payment',
+        'metadata[invoiceId]': paidInvoice.id,
+        'metadata[companyId]': paidInvoice.companyId,
+        success_url: new URL('/r/back/x?paid=1', office.url()).href,
+        'line_items[0][quantity]': '1',
+        'line_items[0][price_data][currency]': 'usd',
+        'line_items[0][price_data][unit_amount]': '227325',
+        'line_items[0][price_data][product_data][name]': 'Invoice',
+      },
+    })
+  ).json();
   await office.request.post(stray.url, { maxRedirects: 0 });
   await office.goto(`/jobs/${job.id}`);
-  await expect(office.getByRole('region', { name: 'Invoice' }).getByTestId('payment-alert')).toContainText('A second payment of $2,273.25');
+  await expect(office.getByRole('region', { name: 'Invoice' }).getByTestId('payment-alert')).toContainText(
+    'A second payment of $2,273.25',
+  );
   await expect(office.getByRole('region', { name: 'History' })).toContainText('payment_mismatch');
   await office.goto('/invoices?status=paid');
   await expect(office.getByRole('row').filter({ hasText: `INV-${jobNumber}` })).toContainText('Payment problem');
@@ -102,6 +123,8 @@ test('approve, invoice, report by e-mail, the customer pays from the link, the o
   await report.getByRole('button', { name: 'Revoke customer links' }).click();
   await expect(report.getByRole('status').filter({ hasText: 'Customer links revoked.' })).toBeVisible();
   await customer.goto(link!);
-  await expect(customer.getByText('This link is not valid or has expired — ask the company that sent it for a new one.')).toBeVisible();
+  await expect(
+    customer.getByText('This link is not valid or has expired — ask the company that sent it for a new one.'),
+  ).toBeVisible();
   expect((await customer.request.get(`${link}/pdf`)).status()).toBe(404);
 });

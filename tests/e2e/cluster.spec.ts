@@ -34,7 +34,9 @@ test.describe.configure({ mode: 'serial' });
 
 test.beforeAll(async () => {
   test.setTimeout(300_000);
-  cluster(`source scripts/common.sh && fresh_database "$DB_NAME" && sequelize-cli db:seed:all >/dev/null && bash scripts/cluster.sh start`);
+  cluster(
+    `source scripts/common.sh && fresh_database "$DB_NAME" && sequelize-cli db:seed:all >/dev/null && bash scripts/cluster.sh start`,
+  );
 });
 
 test.afterAll(() => {
@@ -80,7 +82,11 @@ test('a repair report is mailed once while both servers run the report worker', 
   const stamp = Date.now();
   const addresses = [1, 2, 3].map((n) => `cluster-${stamp}-${n}@example.test`);
   for (const to of addresses) {
-    const sent = await fetch(`${BALANCER}/api/jobs/${job.id}/report`, { method: 'POST', headers, body: JSON.stringify({ to }) });
+    const sent = await fetch(`${BALANCER}/api/jobs/${job.id}/report`, {
+      method: 'POST',
+      headers,
+      body: JSON.stringify({ to }),
+    });
     expect(sent.status, await sent.clone().text()).toBeLessThan(300);
   }
   const countFor = async () => {
@@ -109,5 +115,9 @@ async function attempt(base: string, email: string, password: string) {
 async function signIn(base: string, email: string) {
   const response = await attempt(base, email, DEMO_PASSWORD);
   expect(response.status).toBeLessThan(400);
-  return response.headers.getSetCookie().map((c) => c.split(';')[0]).filter((c) => c.includes('session-token=')).join('; ');
+  return response.headers
+    .getSetCookie()
+    .map((c) => c.split(';')[0])
+    .filter((c) => c.includes('session-token='))
+    .join('; ');
 }

@@ -4,7 +4,9 @@ import { dayIn, hydrated, signIn } from './helpers';
 // The office's whole intake in the browser, in the demo company's imperial units and Denver time:
 // customer → site (two manholes) → segment → job → repair → plan → schedule for tomorrow; then the
 // North crew's foreman sees the job on Today.
-test('office takes a job from the first call to tomorrow’s schedule; the foreman sees it on Today', async ({ browser }) => {
+test('office takes a job from the first call to tomorrow’s schedule; the foreman sees it on Today', async ({
+  browser,
+}) => {
   test.setTimeout(240_000);
   const tag = Date.now().toString(36).slice(-5);
   const customerName = `Juniper Court Owners ${tag}`;

@@ -7,7 +7,9 @@ import { controlTime, mixAndInflate, newInstall, prepareToMix, tap } from './ins
 test.describe('inspection images', () => {
   test.use({ serviceWorkers: 'block' });
 
-  test('a foreman adds a photo after the bladder is down; a text file posing as a photo is refused', async ({ page }) => {
+  test('a foreman adds a photo after the bladder is down; a text file posing as a photo is refused', async ({
+    page,
+  }) => {
     const time = await controlTime(page);
     await signIn(page, 'foreman@demo.test');
     const id = await newInstall(page, '-0002', 0);
@@ -24,7 +26,9 @@ test.describe('inspection images', () => {
     await expect(panel.getByRole('heading', { name: 'Inspection images' })).toBeVisible();
     await expect(panel.getByLabel('Take a photo or video')).toHaveAttribute('capture', 'environment');
     await panel.getByLabel('Caption (optional)').fill('Downstream end, tight to the wall');
-    const png = await sharp({ create: { width: 640, height: 480, channels: 3, background: '#1f6f6a' } }).png().toBuffer();
+    const png = await sharp({ create: { width: 640, height: 480, channels: 3, background: '#1f6f6a' } })
+      .png()
+      .toBuffer();
     await panel.getByLabel('Choose files').setInputFiles({ name: 'patch-end.png', mimeType: 'image/png', buffer: png });
     const item = panel.getByTestId('evidence-item');
     await expect(item).toHaveCount(1, { timeout: 20_000 });
@@ -34,7 +38,9 @@ test.describe('inspection images', () => {
     const thumb = item.getByRole('img');
     await expect.poll(() => thumb.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth)).toBe(320);
 
-    await panel.getByLabel('Choose files').setInputFiles({ name: 'notes.jpg', mimeType: 'image/jpeg', buffer: Buffer.from('not a picture\n'.repeat(50)) });
+    await panel
+      .getByLabel('Choose files')
+      .setInputFiles({ name: 'notes.jpg', mimeType: 'image/jpeg', buffer: Buffer.from('not a picture\n'.repeat(50)) });
     await expect(panel.getByRole('alert')).toContainText('not an image or video we can read', { timeout: 20_000 });
     await expect(item).toHaveCount(1);
   });

@@ -27,5 +27,7 @@ export async function hydrated(page: Page, selector = 'form') {
 
 /** A calendar day (YYYY-MM-DD) in a time zone, days from now. */
 export function dayIn(timeZone: string, offsetDays = 0) {
-  return new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).format(new Date(Date.now() + offsetDays * 86_400_000));
+  return new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).format(
+    new Date(Date.now() + offsetDays * 86_400_000),
+  );
 }

@@ -17,11 +17,15 @@ test.describe('signed out, the browser’s language decides', () => {
     await page.getByLabel('Correo electrónico').fill('nadie@demo.test');
     await page.getByLabel('Contraseña').fill('no-es-la-clave');
     await page.getByRole('button', { name: 'Iniciar sesión' }).click();
-    await expect(page.getByRole('main').getByRole('alert')).toHaveText('Ese correo y esa contraseña no corresponden a una cuenta activa.');
+    await expect(page.getByRole('main').getByRole('alert')).toHaveText(
+      'Ese correo y esa contraseña no corresponden a una cuenta activa.',
+    );
   });
 });
 
-test('/sign-in answers in English to an English browser and to one that names no language we speak', async ({ request }) => {
+test('/sign-in answers in English to an English browser and to one that names no language we speak', async ({
+  request,
+}) => {
   for (const language of ['en-US,en;q=0.9', 'de-DE', '']) {
     const html = await (await request.get('/sign-in', { headers: { 'Accept-Language': language } })).text();
     expect(html, language).toContain('<html lang="en"');
@@ -74,7 +78,10 @@ test.describe('a Spanish-speaking technician', () => {
     await expect(page.getByTestId('go-verdict')).toHaveText('SEGUIR');
     await tap(page, 'Listo para mezclar');
     await tap(page, 'Resina mezclada');
-    await expect(page.getByTestId('countdown').first()).toHaveAttribute('aria-label', 'Inflar antes de (con la reserva)');
+    await expect(page.getByTestId('countdown').first()).toHaveAttribute(
+      'aria-label',
+      'Inflar antes de (con la reserva)',
+    );
     await time.advance(5);
     await tap(page, 'Parche cargado');
     await time.advance(5);
@@ -90,7 +97,10 @@ test.describe('a Spanish-speaking technician', () => {
 
     await expect(page.getByTestId('step-hold')).toContainText('Manteniendo');
     await expect(page.getByTestId('hold-note')).toContainText('mantener inflado');
-    await expect(page.getByTestId('countdown').first()).toHaveAttribute('aria-label', 'Desinflar después de (fraguado + 10 %)');
+    await expect(page.getByTestId('countdown').first()).toHaveAttribute(
+      'aria-label',
+      'Desinflar después de (fraguado + 10 %)',
+    );
     await time.advance(160);
     await tap(page, 'Vejiga desinflada');
 
@@ -107,8 +117,18 @@ test.describe('a Spanish-speaking technician', () => {
     expect(view.flags).toEqual([]);
     expect(view.state.step).toBe('sign_off');
     expect(view.events.map((e: { type: string }) => e.type)).toEqual([
-      'safety_acknowledged', 'checks_done', 'dry_run_started', 'dry_run_finished', 'conditions_recorded', 'go_decision',
-      'resin_mixed', 'patch_loaded', 'packer_in_position', 'bladder_inflated', 'bladder_deflated', 'inspection_recorded',
+      'safety_acknowledged',
+      'checks_done',
+      'dry_run_started',
+      'dry_run_finished',
+      'conditions_recorded',
+      'go_decision',
+      'resin_mixed',
+      'patch_loaded',
+      'packer_in_position',
+      'bladder_inflated',
+      'bladder_deflated',
+      'inspection_recorded',
     ]);
   });
 

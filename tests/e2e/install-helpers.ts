@@ -28,7 +28,10 @@ export async function controlTime(page: Page) {
   await page.route('**/api/**', async (route) => {
     try {
       const response = await route.fetch();
-      await route.fulfill({ response, headers: { ...response.headers(), date: new Date(Date.now() + advancedMs).toUTCString() } });
+      await route.fulfill({
+        response,
+        headers: { ...response.headers(), date: new Date(Date.now() + advancedMs).toUTCString() },
+      });
     } catch {
       // The test ended (or the page closed) while a poll was in flight: nothing is waiting for this answer.
       await route.abort().catch(() => undefined);

@@ -1,6 +1,16 @@
 import { expect, test } from '@playwright/test';
 import { signIn } from './helpers';
-import { acknowledgeAndCheck, controlTime, mixAndInflate, newInstall, prepareToMix, recordConditions, serverView, tap, waitForSync } from './install-helpers';
+import {
+  acknowledgeAndCheck,
+  controlTime,
+  mixAndInflate,
+  newInstall,
+  prepareToMix,
+  recordConditions,
+  serverView,
+  tap,
+  waitForSync,
+} from './install-helpers';
 
 // Fake time needs every API answer to pass page.route, which a service worker would bypass.
 test.describe('the timed install', () => {
@@ -28,8 +38,18 @@ test.describe('the timed install', () => {
     expect(view.flags).toEqual([]);
     expect(view.state.step).toBe('sign_off');
     expect(view.events.map((e: { type: string }) => e.type)).toEqual([
-      'safety_acknowledged', 'checks_done', 'dry_run_started', 'dry_run_finished', 'conditions_recorded', 'go_decision',
-      'resin_mixed', 'patch_loaded', 'packer_in_position', 'bladder_inflated', 'bladder_deflated', 'inspection_recorded',
+      'safety_acknowledged',
+      'checks_done',
+      'dry_run_started',
+      'dry_run_finished',
+      'conditions_recorded',
+      'go_decision',
+      'resin_mixed',
+      'patch_loaded',
+      'packer_in_position',
+      'bladder_inflated',
+      'bladder_deflated',
+      'inspection_recorded',
     ]);
     await expect(page.getByTestId('flags')).toHaveCount(0);
   });
@@ -68,14 +88,18 @@ test('two tablets on one install show the same countdown', async ({ browser }) =
   await tap(a, 'Resin mixed');
   // The second tablet learns of the mix on its next revalidation (every 5 s).
   await expect(b.getByTestId('countdown').first()).toBeVisible({ timeout: 15_000 });
-  const read = async (page: typeof a) => toSeconds(await page.getByTestId('countdown').first().getByRole('timer').innerText());
+  const read = async (page: typeof a) =>
+    toSeconds(await page.getByTestId('countdown').first().getByRole('timer').innerText());
   const [onA, onB] = await Promise.all([read(a), read(b)]);
   expect(Math.abs(onA - onB)).toBeLessThanOrEqual(3);
   await first.close();
   await second.close();
 });
 
-test('with no signal, five taps are kept through a reload and reach the server when it returns', async ({ page, context }) => {
+test('with no signal, five taps are kept through a reload and reach the server when it returns', async ({
+  page,
+  context,
+}) => {
   await signIn(page, 'foreman@demo.test');
   const id = await newInstall(page, '-0003', 0);
   await page.goto(`/installs/${id}`);
@@ -102,7 +126,11 @@ test('with no signal, five taps are kept through a reload and reach the server w
   await context.setOffline(false);
   await expect(page.getByTestId('sync-status')).toHaveText('All taps synced', { timeout: 30_000 });
   const view = await serverView(page, id);
-  const stored = view.events.map((e: { clientEventId: string; type: string; deviceTime: string }) => [e.clientEventId, e.type, new Date(e.deviceTime).toISOString()]);
+  const stored = view.events.map((e: { clientEventId: string; type: string; deviceTime: string }) => [
+    e.clientEventId,
+    e.type,
+    new Date(e.deviceTime).toISOString(),
+  ]);
   expect(stored).toEqual(queued.map((e) => [e.clientEventId, e.type, new Date(e.deviceTime).toISOString()]));
 });
 
@@ -114,7 +142,8 @@ async function outboxEntries(page: import('@playwright/test').Page, installId: s
         open.onerror = () => reject(open.error);
         open.onsuccess = () => {
           const request = open.result.transaction('entries').objectStore('entries').getAll();
-          request.onsuccess = () => resolve(request.result.filter((e) => e.installId === id).sort((x, y) => x.seq - y.seq));
+          request.onsuccess = () =>
+            resolve(request.result.filter((e) => e.installId === id).sort((x, y) => x.seq - y.seq));
           request.onerror = () => reject(request.error);
         };
       }),

@@ -20,7 +20,9 @@ type ServerEvent = { clientEventId: string; type: string; deviceTime: string };
 const TAPS = 50;
 test.describe.configure({ timeout: 300_000 });
 
-test('an install opened once after sign-in works offline across a reload; 50 queued taps arrive once, in order', async ({ browser }) => {
+test('an install opened once after sign-in works offline across a reload; 50 queued taps arrive once, in order', async ({
+  browser,
+}) => {
   const proxy = await startSignalProxy(new URL(BASE_URL));
   // The install is made beforehand by the same foreman, on a browser without the proxy.
   const setup = await browser.newContext();
@@ -44,7 +46,18 @@ test('an install opened once after sign-in works offline across a reload; 50 que
     expect(proxy.requests()).toBeGreaterThan(0);
     // Kept for offline use: the page itself and its data, without the tablet opening it again.
     await expect
-      .poll(() => page.evaluate(async (installId) => Boolean((await caches.match(`/installs/${installId}`, { ignoreVary: true })) && (await caches.match(`/api/installs/${installId}`, { ignoreVary: true }))), id), { timeout: 60_000 })
+      .poll(
+        () =>
+          page.evaluate(
+            async (installId) =>
+              Boolean(
+                (await caches.match(`/installs/${installId}`, { ignoreVary: true })) &&
+                (await caches.match(`/api/installs/${installId}`, { ignoreVary: true })),
+              ),
+            id,
+          ),
+        { timeout: 60_000 },
+      )
       .toBe(true);
 
     await setSignal(tablet, proxy, false);
@@ -93,7 +106,9 @@ test('an install opened once after sign-in works offline across a reload; 50 que
     // Once each, in the order tapped, with the device time the tablet stamped.
     expect(new Set(stored.map((e) => e.clientEventId)).size).toBe(TAPS);
     const byTime = [...stored].sort((a, b) => Date.parse(a.deviceTime) - Date.parse(b.deviceTime));
-    expect(byTime.map((e) => ({ clientEventId: e.clientEventId, type: e.type, deviceTime: Date.parse(e.deviceTime) }))).toEqual(
+    expect(
+      byTime.map((e) => ({ clientEventId: e.clientEventId, type: e.type, deviceTime: Date.parse(e.deviceTime) })),
+    ).toEqual(
       queued.map((e) => ({ clientEventId: e.clientEventId, type: e.type, deviceTime: Date.parse(e.deviceTime) })),
     );
     expect(queued.filter((e) => e.type === 'pressure_reading')).toHaveLength(40);
@@ -109,7 +124,10 @@ async function setSignal(context: BrowserContext, proxy: SignalProxy, online: bo
   await context.setOffline(!online);
 }
 
-async function serverEvents(api: Awaited<ReturnType<typeof playwrightRequest.newContext>>, id: string): Promise<ServerEvent[]> {
+async function serverEvents(
+  api: Awaited<ReturnType<typeof playwrightRequest.newContext>>,
+  id: string,
+): Promise<ServerEvent[]> {
   const response = await api.get(`/api/installs/${id}`);
   expect(response.status()).toBe(200);
   return (await response.json()).events;
@@ -127,7 +145,12 @@ function outboxEntries(page: Page, installId: string): Promise<Entry[]> {
           read.onerror = () => reject(read.error);
           read.onsuccess = () => {
             const all = read.result as (Entry & { installId: string })[];
-            resolve(all.filter((e) => e.installId === wanted).sort((a, b) => a.seq - b.seq).map(({ seq, clientEventId, type, deviceTime }) => ({ seq, clientEventId, type, deviceTime })));
+            resolve(
+              all
+                .filter((e) => e.installId === wanted)
+                .sort((a, b) => a.seq - b.seq)
+                .map(({ seq, clientEventId, type, deviceTime }) => ({ seq, clientEventId, type, deviceTime })),
+            );
           };
         };
       }),
@@ -135,7 +158,12 @@ function outboxEntries(page: Page, installId: string): Promise<Entry[]> {
   );
 }
 
-type SignalProxy = { url: string; setOnline: (online: boolean) => void; requests: () => number; close: () => Promise<void> };
+type SignalProxy = {
+  url: string;
+  setOnline: (online: boolean) => void;
+  requests: () => number;
+  close: () => Promise<void>;
+};
 
 /**
  * A forwarding HTTP proxy on loopback that only reaches the app under test. Offline, it drops every
@@ -153,10 +181,19 @@ async function startSignalProxy(target: URL): Promise<SignalProxy> {
       return;
     }
     count += 1;
-    const upstream = http.request({ host: target.hostname, port: target.port, method: req.method, path: url.pathname + url.search, headers: req.headers }, (answer) => {
-      res.writeHead(answer.statusCode ?? 502, answer.headers);
-      answer.pipe(res);
-    });
+    const upstream = http.request(
+      {
+        host: target.hostname,
+        port: target.port,
+        method: req.method,
+        path: url.pathname + url.search,
+        headers: req.headers,
+      },
+      (answer) => {
+        res.writeHead(answer.statusCode ?? 502, answer.headers);
+        answer.pipe(res);
+      },
+    );
     upstream.on('error', () => req.socket.destroy());
     req.pipe(upstream);
   });

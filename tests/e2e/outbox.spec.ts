@@ -81,7 +81,9 @@ test('a tap waits on the tablet for the user who made it, not whoever signs in n
   await signIn(second, 'tech@demo.test');
   await expect(second).toHaveURL('/today', { timeout: 30_000 });
   await second.goto(`/installs/${id}`);
-  await expect(second.getByTestId('outbox-waiting')).toHaveText('1 tap waiting for Mateo Varga to sign in', { timeout: 30_000 });
+  await expect(second.getByTestId('outbox-waiting')).toHaveText('1 tap waiting for Mateo Varga to sign in', {
+    timeout: 30_000,
+  });
   await expect(second.getByTestId('sync-status')).toHaveText('All taps synced');
   await second.waitForTimeout(6000);
   expect((await serverView(second, id)).events).toEqual([]);
@@ -92,7 +94,9 @@ test('a tap waits on the tablet for the user who made it, not whoever signs in n
   await expect(second).toHaveURL('/today', { timeout: 30_000 });
   await second.goto(`/installs/${id}`);
   await expect(second.getByTestId('outbox-waiting')).toHaveCount(0, { timeout: 20_000 });
-  await expect.poll(async () => (await serverView(second, id)).events.map((e: Event) => e.type), { timeout: 20_000 }).toEqual(['safety_acknowledged']);
+  await expect
+    .poll(async () => (await serverView(second, id)).events.map((e: Event) => e.type), { timeout: 20_000 })
+    .toEqual(['safety_acknowledged']);
 });
 
 async function signOutAccepting(page: Page) {

@@ -21,8 +21,15 @@ async function apiSignIn(context: APIRequestContext, email: string, password: st
     form: { email, password, csrfToken, callbackUrl: '/', json: 'true' },
     headers: { 'x-forwarded-for': ip },
   });
-  const session = response.headersArray().some((h) => h.name.toLowerCase() === 'set-cookie' && /next-auth\.session-token=[^;]+/.test(h.value));
-  return { status: response.status(), retryAfter: response.headers()['retry-after'], session, body: await response.json().catch(() => null) };
+  const session = response
+    .headersArray()
+    .some((h) => h.name.toLowerCase() === 'set-cookie' && /next-auth\.session-token=[^;]+/.test(h.value));
+  return {
+    status: response.status(),
+    retryAfter: response.headers()['retry-after'],
+    session,
+    body: await response.json().catch(() => null),
+  };
 }
 
 async function newUser(role: 'office' | 'foreman' = 'office') {
@@ -45,14 +52,20 @@ test.describe('sign-in limits', () => {
     const ip = randomIp();
     for (let i = 1; i <= 9; i += 1) expect((await apiSignIn(context, user.email, `wrong-${i}`, ip)).status).toBe(401);
     const tenth = await apiSignIn(context, user.email, 'wrong-10', ip);
-    expect(tenth).toMatchObject({ status: 429, session: false, body: { error: { message: 'Too many attempts — try again in 15 minutes.' } } });
+    expect(tenth).toMatchObject({
+      status: 429,
+      session: false,
+      body: { error: { message: 'Too many attempts — try again in 15 minutes.' } },
+    });
     expect(Number(tenth.retryAfter)).toBe(900);
 
     const right = await apiSignIn(context, user.email, user.password, ip);
     expect(right.status).toBe(429);
     expect(right.session).toBe(false);
     expect(Number(right.retryAfter)).toBeGreaterThan(800);
-    expect(right.body).toEqual({ error: { message: expect.stringMatching(/^Too many attempts — try again in 1[45] minutes\.$/) } });
+    expect(right.body).toEqual({
+      error: { message: expect.stringMatching(/^Too many attempts — try again in 1[45] minutes\.$/) },
+    });
     // From another address too: the lock is the e-mail's.
     expect((await apiSignIn(context, user.email, user.password, randomIp())).status).toBe(429);
     expect((await context.get('/api/jobs')).status()).toBe(401);
@@ -65,7 +78,8 @@ test.describe('sign-in limits', () => {
     const ip = randomIp();
     for (let i = 1; i <= 9; i += 1) expect((await apiSignIn(context, user.email, `wrong-${i}`, ip)).status).toBe(401);
     expect(await apiSignIn(context, user.email, user.password, ip)).toMatchObject({ status: 200, session: true });
-    for (let i = 1; i <= 9; i += 1) expect((await apiSignIn(context, user.email, `wrong-again-${i}`, ip)).status).toBe(401);
+    for (let i = 1; i <= 9; i += 1)
+      expect((await apiSignIn(context, user.email, `wrong-again-${i}`, ip)).status).toBe(401);
     expect(await apiSignIn(context, user.email, user.password, ip)).toMatchObject({ status: 200, session: true });
     await context.dispose();
   });
@@ -83,14 +97,18 @@ test.describe('sign-in limits', () => {
     expect(Number(hundredth.retryAfter)).toBeGreaterThan(3000);
     // …so the right password from it is refused too, while another address signs in.
     expect(await apiSignIn(context, user.email, user.password, ip)).toMatchObject({ status: 429, session: false });
-    expect(await apiSignIn(context, user.email, user.password, randomIp())).toMatchObject({ status: 200, session: true });
+    expect(await apiSignIn(context, user.email, user.password, randomIp())).toMatchObject({
+      status: 200,
+      session: true,
+    });
     await context.dispose();
   });
 
   test('the sign-in page shows "Too many attempts — try again in N minutes"', async ({ page }) => {
     const email = `locked-${unique()}@demo.test`;
     const context = await playwrightRequest.newContext({ baseURL: BASE_URL });
-    for (let i = 1; i <= 9; i += 1) expect((await apiSignIn(context, email, `wrong-${i}`, randomIp())).status).toBe(401);
+    for (let i = 1; i <= 9; i += 1)
+      expect((await apiSignIn(context, email, `wrong-${i}`, randomIp())).status).toBe(401);
     await context.dispose();
     await page.goto('/sign-in');
     await hydrated(page);
@@ -106,7 +124,9 @@ test.describe('report links', () => {
   test('the 61st request a minute from one address answers 429 (page and PDF)', async ({ request }) => {
     const ip = randomIp();
     for (let i = 0; i < 60; i += 1) {
-      const response = await request.get(i % 2 ? '/r/not-a-link.x/pdf' : '/r/not-a-link.x', { headers: { 'x-forwarded-for': ip } });
+      const response = await request.get(i % 2 ? '/r/not-a-link.x/pdf' : '/r/not-a-link.x', {
+        headers: { 'x-forwarded-for': ip },
+      });
       expect(response.status()).toBe(404);
     }
     for (const path of ['/r/not-a-link.x', '/r/not-a-link.x/pdf']) {
@@ -129,13 +149,22 @@ test.describe('security headers', () => {
     const policy = headers['content-security-policy'];
     const nonce = policy.match(/'nonce-([^']+)'/)?.[1];
     expect(nonce).toBeTruthy();
-    for (const part of ["frame-ancestors 'none'", "object-src 'none'", "base-uri 'self'", "form-action 'self'", "default-src 'self'"]) expect(policy).toContain(part);
+    for (const part of [
+      "frame-ancestors 'none'",
+      "object-src 'none'",
+      "base-uri 'self'",
+      "form-action 'self'",
+      "default-src 'self'",
+    ])
+      expect(policy).toContain(part);
     expect(headers['x-content-type-options']).toBe('nosniff');
     expect(headers['referrer-policy']).toBe('strict-origin-when-cross-origin');
     expect(headers['permissions-policy']).toMatch(/^camera=\(self\)/);
     expect(headers['strict-transport-security']).toBeUndefined();
     // Next put the nonce on its scripts; the page hydrated (React ran under the policy).
-    const scriptNonces = await page.locator('script').evaluateAll((scripts) => scripts.map((s) => (s as HTMLScriptElement).nonce));
+    const scriptNonces = await page
+      .locator('script')
+      .evaluateAll((scripts) => scripts.map((s) => (s as HTMLScriptElement).nonce));
     expect(scriptNonces.length).toBeGreaterThan(0);
     expect(scriptNonces.every((n) => n === nonce)).toBe(true);
     await hydrated(page);
@@ -165,25 +194,49 @@ test.describe('writes to the API from elsewhere', () => {
     const before = await total();
     const customer = { name: `Perimeter ${unique()}`, kind: 'property_manager' };
 
-    const foreign = await office.post('/api/customers', { data: customer, headers: { origin: 'https://evil.example' } });
+    const foreign = await office.post('/api/customers', {
+      data: customer,
+      headers: { origin: 'https://evil.example' },
+    });
     expect(foreign.status()).toBe(403);
-    expect(await foreign.json()).toEqual({ error: { message: 'This request came from another site and was refused.' } });
-    expect((await office.post('/api/customers', { data: customer, headers: { referer: 'https://evil.example/form' } })).status()).toBe(403);
-    expect((await office.post('/api/customers', { data: customer, headers: { 'sec-fetch-site': 'cross-site' } })).status()).toBe(403);
+    expect(await foreign.json()).toEqual({
+      error: { message: 'This request came from another site and was refused.' },
+    });
+    expect(
+      (
+        await office.post('/api/customers', { data: customer, headers: { referer: 'https://evil.example/form' } })
+      ).status(),
+    ).toBe(403);
+    expect(
+      (await office.post('/api/customers', { data: customer, headers: { 'sec-fetch-site': 'cross-site' } })).status(),
+    ).toBe(403);
 
-    const plain = await office.post('/api/customers', { data: JSON.stringify(customer), headers: { 'content-type': 'text/plain' } });
+    const plain = await office.post('/api/customers', {
+      data: JSON.stringify(customer),
+      headers: { 'content-type': 'text/plain' },
+    });
     expect(plain.status()).toBe(415);
 
     const big = JSON.stringify({ ...customer, notes: 'x'.repeat(2 * 1024 * 1024) });
-    expect((await office.post('/api/customers', { data: big, headers: { 'content-type': 'application/json' } })).status()).toBe(413);
+    expect(
+      (await office.post('/api/customers', { data: big, headers: { 'content-type': 'application/json' } })).status(),
+    ).toBe(413);
     // The same body chunked (no Content-Length): the route's reader stops it.
     const cookie = (await office.storageState()).cookies.map((c) => `${c.name}=${c.value}`).join('; ');
     const chunked = await new Promise<number>((resolve, reject) => {
-      const req = http.request(`${BASE_URL}/api/customers`, { method: 'POST', headers: { 'content-type': 'application/json', cookie, 'transfer-encoding': 'chunked' } }, (res) => {
-        res.resume();
-        resolve(res.statusCode ?? 0);
-      });
-      req.on('error', (error) => ((error as NodeJS.ErrnoException).code === 'ECONNRESET' || (error as NodeJS.ErrnoException).code === 'EPIPE' ? resolve(-1) : reject(error)));
+      const req = http.request(
+        `${BASE_URL}/api/customers`,
+        { method: 'POST', headers: { 'content-type': 'application/json', cookie, 'transfer-encoding': 'chunked' } },
+        (res) => {
+          res.resume();
+          resolve(res.statusCode ?? 0);
+        },
+      );
+      req.on('error', (error) =>
+        (error as NodeJS.ErrnoException).code === 'ECONNRESET' || (error as NodeJS.ErrnoException).code === 'EPIPE'
+          ? resolve(-1)
+          : reject(error),
+      );
       for (let i = 0; i < 4; i += 1) req.write(big.slice(i * 600_000, (i + 1) * 600_000));
       req.end();
     });
@@ -215,7 +268,13 @@ test.describe('secrets', () => {
   const start = (env: Record<string, string | undefined>) =>
     new Promise<{ code: number | null; output: string }>((resolve) => {
       const child = spawn('node_modules/.bin/next', ['start', '-p', '0', '-H', '127.0.0.1'], {
-        env: { PATH: process.env.PATH, DATABASE_URL: process.env.DATABASE_URL, NODE_ENV: 'production', REPORT_WORKER: 'off', ...env } as NodeJS.ProcessEnv,
+        env: {
+          PATH: process.env.PATH,
+          DATABASE_URL: process.env.DATABASE_URL,
+          NODE_ENV: 'production',
+          REPORT_WORKER: 'off',
+          ...env,
+        } as NodeJS.ProcessEnv,
       });
       let output = '';
       child.stdout.on('data', (chunk) => (output += chunk));
@@ -240,7 +299,11 @@ test.describe('secrets', () => {
     expect(noSession.code).not.toBe(0);
     expect(noSession.output).toContain('NEXTAUTH_SECRET: required outside development and test');
 
-    const plainHttp = await start({ NEXTAUTH_SECRET: SESSION, REPORT_LINK_SECRET: LINKS, NEXTAUTH_URL: 'http://setline.example.test' });
+    const plainHttp = await start({
+      NEXTAUTH_SECRET: SESSION,
+      REPORT_LINK_SECRET: LINKS,
+      NEXTAUTH_URL: 'http://setline.example.test',
+    });
     expect(plainHttp.code).not.toBe(0);
     expect(plainHttp.output).toContain('NEXTAUTH_URL: must be an https:// address');
   });

@@ -8,7 +8,10 @@ const IMPERIAL = /\d\s?(in|ft|psi|°F|US gal|lbf)\b/;
 /** Opens the first planned repair of the signed-in company and returns its Plan region. */
 async function openPlannedRepair(page: Page) {
   await page.goto('/repairs?status=planned&sort=position');
-  await page.getByRole('link', { name: /^Repair \d+$/ }).first().click();
+  await page
+    .getByRole('link', { name: /^Repair \d+$/ })
+    .first()
+    .click();
   await expect(page).toHaveURL(/\/repairs\/[0-9a-f-]{36}$/);
   await hydrated(page, 'section[aria-labelledby="plan-heading"] input');
   return page.getByRole('region', { name: 'Plan' });
@@ -18,7 +21,9 @@ async function fill(plan: ReturnType<Page['getByRole']>, values: Record<string, 
   for (const [label, value] of Object.entries(values)) await plan.getByLabel(label, { exact: true }).fill(value);
 }
 
-test('an imperial company’s plan page reads inches, feet and psi only, and names the checks it ran', async ({ page }) => {
+test('an imperial company’s plan page reads inches, feet and psi only, and names the checks it ran', async ({
+  page,
+}) => {
   await signIn(page, 'office@demo.test');
   await expect(page).not.toHaveURL(/sign-in/);
   const plan = await openPlannedRepair(page);

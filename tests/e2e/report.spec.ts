@@ -6,7 +6,10 @@ import { signIn } from './helpers';
 const JOB_TITLE = 'Joint separation at the crossing';
 const MAIL = process.env.MAIL_WEB_URL;
 
-test('the office sends the repair report; the customer opens the link from the e-mail without an account', async ({ page, browser }) => {
+test('the office sends the repair report; the customer opens the link from the e-mail without an account', async ({
+  page,
+  browser,
+}) => {
   test.skip(!MAIL, 'needs the service fakes (MAIL_WEB_URL): run through scripts/test.sh');
   // Sign-in, a queued send, a PDF render and two page loads: more than the default minute on a busy machine.
   test.setTimeout(180_000);
@@ -30,11 +33,16 @@ test('the office sends the repair report; the customer opens the link from the e
 
   // The e-mail as the local mailbox received it.
   let message: { id: string; to: string; text: string; attachments: { filename: string }[] } | undefined;
-  await expect.poll(async () => {
-    const all = await (await page.request.get(`${MAIL}/messages`)).json();
-    message = all.find((m: { to: string }) => m.to.includes(to));
-    return Boolean(message);
-  }, { timeout: 15_000 }).toBe(true);
+  await expect
+    .poll(
+      async () => {
+        const all = await (await page.request.get(`${MAIL}/messages`)).json();
+        message = all.find((m: { to: string }) => m.to.includes(to));
+        return Boolean(message);
+      },
+      { timeout: 15_000 },
+    )
+    .toBe(true);
   expect(message!.attachments.map((a) => a.filename)).toEqual([`repair-report-${job.number}.pdf`]);
   const link = /https?:\/\/\S+\/r\/[\w-]+\.[\w-]+/.exec(message!.text)?.[0];
   expect(link, 'the report link in the e-mail').toBeTruthy();
@@ -57,7 +65,9 @@ test('the office sends the repair report; the customer opens the link from the e
   const tampered = link!.replace(/.$/, (c) => (c === 'A' ? 'B' : 'A'));
   const refused = await visitor.goto(tampered, { waitUntil: 'domcontentloaded' });
   expect(refused?.status()).toBe(404);
-  await expect(visitor.getByText('This link is not valid or has expired — ask the company that sent it for a new one.')).toBeVisible();
+  await expect(
+    visitor.getByText('This link is not valid or has expired — ask the company that sent it for a new one.'),
+  ).toBeVisible();
   await expect(visitor.getByText(job.number)).toHaveCount(0);
   await customer.close();
 });

@@ -30,7 +30,9 @@ test('the office sends a late-inflate install back and the crew reads the commen
   await late.getByRole('link').click();
   await expect(office).toHaveURL(/\/reviews\/[0-9a-f-]{36}$/);
   await expect(office.getByRole('heading', { level: 1 })).toContainText(`Job ${jobNumber}`);
-  await expect(office.getByTestId('flag-list').locator('[data-kind="late-inflate"]')).toContainText('after the inflate-by time');
+  await expect(office.getByTestId('flag-list').locator('[data-kind="late-inflate"]')).toContainText(
+    'after the inflate-by time',
+  );
   const chart = office.getByTestId('timeline-chart');
   await expect(chart.getByRole('img', { name: /Install timeline/ })).toBeVisible();
   await expect(chart.locator('[data-lane="working"] [data-tone="missed"]').first()).toBeAttached();
@@ -59,7 +61,9 @@ test('the office sends a late-inflate install back and the crew reads the commen
 
   // The foreman answers and resubmits: the install goes back to the office's queue.
   await crew.getByRole('button', { name: 'Sign off again — resubmit for review' }).click();
-  await expect(crew.getByTestId('step-done')).toContainText('Signed off. The office will review it.', { timeout: 20_000 });
+  await expect(crew.getByTestId('step-done')).toContainText('Signed off. The office will review it.', {
+    timeout: 20_000,
+  });
   await office.reload();
   await expect.poll(() => queueCount(office)).toBe(waiting);
 });

@@ -2,7 +2,9 @@ import { expect, test } from '@playwright/test';
 import { signIn } from './helpers';
 
 // Demo data: North crew (4 jobs a day) and South crew (3 a day), jobs booked relative to today, one draft.
-test('the office books the draft job on a crew day from the board, unassigns it, then moves a week', async ({ page }) => {
+test('the office books the draft job on a crew day from the board, unassigns it, then moves a week', async ({
+  page,
+}) => {
   await signIn(page, 'office@demo.test');
   await expect(page).toHaveURL('/jobs');
   await page.goto('/schedule');

@@ -22,13 +22,17 @@ for (const account of ACCOUNTS) {
 
 test('a wrong password shows the message and stays on the sign-in page', async ({ page }) => {
   await signIn(page, 'office@demo.test', 'not-the-password');
-  await expect(page.getByRole('main').getByRole('alert')).toHaveText('That e-mail and password do not match an active account.');
+  await expect(page.getByRole('main').getByRole('alert')).toHaveText(
+    'That e-mail and password do not match an active account.',
+  );
   await expect(page).toHaveURL(/\/sign-in/);
 });
 
 test('an unknown e-mail gets exactly the same message', async ({ page }) => {
   await signIn(page, 'nobody@demo.test', 'whatever');
-  await expect(page.getByRole('main').getByRole('alert')).toHaveText('That e-mail and password do not match an active account.');
+  await expect(page.getByRole('main').getByRole('alert')).toHaveText(
+    'That e-mail and password do not match an active account.',
+  );
 });
 
 test('a signed-out visit to a desk page goes to /sign-in', async ({ page }) => {

@@ -13,7 +13,13 @@ describe('access points API', () => {
   beforeAll(async () => {
     a = await makeWorld('Alpha');
     b = await makeWorld('Beta');
-    quietSite = await Site.create({ companyId: a.company.id, customerId: a.customer.id, name: 'Quiet', addressLine: '5 Still Lane', city: 'Oakridge' });
+    quietSite = await Site.create({
+      companyId: a.company.id,
+      customerId: a.customer.id,
+      name: 'Quiet',
+      addressLine: '5 Still Lane',
+      city: 'Oakridge',
+    });
   });
   beforeEach(() => signOut());
 
@@ -51,10 +57,20 @@ describe('access points API', () => {
 
     const made = await post(quietSite.id, { label: ' MH-1 ', depthMm: 2400 });
     expect(made.status).toBe(201);
-    expect(made.body).toMatchObject({ label: 'MH-1', kind: 'manhole', depthMm: 2400, siteId: quietSite.id, companyId: a.company.id });
+    expect(made.body).toMatchObject({
+      label: 'MH-1',
+      kind: 'manhole',
+      depthMm: 2400,
+      siteId: quietSite.id,
+      companyId: a.company.id,
+    });
     const cleanout = await post(quietSite.id, { label: 'CO-1', kind: 'cleanout' });
     expect(cleanout.body).toMatchObject({ kind: 'cleanout', depthMm: null });
-    expect(await AuditEntry.findOne({ where: { entityId: made.body.id } })).toMatchObject({ action: 'create', entityType: 'access_point', userId: a.office.id });
+    expect(await AuditEntry.findOne({ where: { entityId: made.body.id } })).toMatchObject({
+      action: 'create',
+      entityType: 'access_point',
+      userId: a.office.id,
+    });
   });
 
   it('refuses a label already used on the same site with 409 (another site may reuse it)', async () => {
@@ -67,18 +83,31 @@ describe('access points API', () => {
     const renamed = await call(patchRoute, '/x', { id: a.accessPoints[0].id }, jsonBody('PATCH', { label: 'MH-2' }));
     expect(renamed.status).toBe(409);
     expect((await AccessPoint.findByPk(a.accessPoints[0].id))?.label).toBe('MH-1');
-    const elsewhere = await Site.create({ companyId: a.company.id, customerId: a.customer.id, name: 'Elsewhere', addressLine: '9 Far Road', city: 'Oakridge' });
+    const elsewhere = await Site.create({
+      companyId: a.company.id,
+      customerId: a.customer.id,
+      name: 'Elsewhere',
+      addressLine: '9 Far Road',
+      city: 'Oakridge',
+    });
     expect((await post(elsewhere.id, { label: 'MH-2' })).status).toBe(201);
   });
 
   it('edits with PATCH, audited with from and to; an unknown field or a bad depth is 400', async () => {
     await signInAs(a.office);
-    const point = await AccessPoint.create({ companyId: a.company.id, siteId: quietSite.id, label: 'MH-7', kind: 'manhole', depthMm: 1800 });
+    const point = await AccessPoint.create({
+      companyId: a.company.id,
+      siteId: quietSite.id,
+      label: 'MH-7',
+      kind: 'manhole',
+      depthMm: 1800,
+    });
     const res = await call(patchRoute, '/x', { id: point.id }, jsonBody('PATCH', { depthMm: 2100, kind: 'other' }));
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ label: 'MH-7', depthMm: 2100, kind: 'other' });
     expect((await AuditEntry.findOne({ where: { entityId: point.id, action: 'update' } }))?.changes).toEqual({
-      depthMm: { from: 1800, to: 2100 }, kind: { from: 'manhole', to: 'other' },
+      depthMm: { from: 1800, to: 2100 },
+      kind: { from: 'manhole', to: 'other' },
     });
     expect((await call(patchRoute, '/x', { id: point.id }, jsonBody('PATCH', { siteId: a.site.id }))).status).toBe(400);
     const deep = await call(patchRoute, '/x', { id: point.id }, jsonBody('PATCH', { depthMm: 90_000 }));
@@ -94,7 +123,12 @@ describe('access points API', () => {
     expect(used.body.error.message).toContain(a.segment.label);
     expect(await AccessPoint.findByPk(a.accessPoints[1].id)).not.toBeNull();
 
-    const measured = await AccessPoint.create({ companyId: a.company.id, siteId: a.site.id, label: 'CO-3', kind: 'cleanout' });
+    const measured = await AccessPoint.create({
+      companyId: a.company.id,
+      siteId: a.site.id,
+      label: 'CO-3',
+      kind: 'cleanout',
+    });
     await Repair.update({ fromAccessPointId: measured.id }, { where: { id: a.repair.id } });
     expect((await call(deleteRoute, '/x', { id: measured.id }, { method: 'DELETE' })).status).toBe(409);
     await Repair.update({ fromAccessPointId: null }, { where: { id: a.repair.id } });
@@ -103,7 +137,10 @@ describe('access points API', () => {
     expect(res.status).toBe(200);
     expect(res.body).toEqual({ id: measured.id, archived: false, deleted: true });
     expect(await AccessPoint.findByPk(measured.id)).toBeNull();
-    expect(await AuditEntry.findOne({ where: { entityId: measured.id, action: 'delete' } })).toMatchObject({ entityType: 'access_point', changes: { label: 'CO-3' } });
+    expect(await AuditEntry.findOne({ where: { entityId: measured.id, action: 'delete' } })).toMatchObject({
+      entityType: 'access_point',
+      changes: { label: 'CO-3' },
+    });
   });
 
   it('refuses writes by field roles with 403 and changes nothing', async () => {
@@ -111,7 +148,9 @@ describe('access points API', () => {
     for (const user of [a.foreman, a.technician]) {
       await signInAs(user);
       expect((await post(a.site.id, { label: 'MH-8' })).status).toBe(403);
-      expect((await call(patchRoute, '/x', { id: a.accessPoints[0].id }, jsonBody('PATCH', { label: 'X' }))).status).toBe(403);
+      expect(
+        (await call(patchRoute, '/x', { id: a.accessPoints[0].id }, jsonBody('PATCH', { label: 'X' }))).status,
+      ).toBe(403);
       expect((await call(deleteRoute, '/x', { id: a.accessPoints[0].id }, { method: 'DELETE' })).status).toBe(403);
     }
     expect(await pointsOf(a.site.id)).toBe(before);
@@ -122,7 +161,9 @@ describe('access points API', () => {
     await signInAs(b.office);
     expect((await call(listRoute, '/x', { id: a.site.id })).status).toBe(404);
     expect((await post(a.site.id, { label: 'MH-9' })).status).toBe(404);
-    expect((await call(patchRoute, '/x', { id: a.accessPoints[0].id }, jsonBody('PATCH', { label: 'Mine' }))).status).toBe(404);
+    expect(
+      (await call(patchRoute, '/x', { id: a.accessPoints[0].id }, jsonBody('PATCH', { label: 'Mine' }))).status,
+    ).toBe(404);
     expect((await call(deleteRoute, '/x', { id: a.accessPoints[0].id }, { method: 'DELETE' })).status).toBe(404);
     expect((await call(patchRoute, '/x', { id: '123' }, jsonBody('PATCH', { label: 'Mine' }))).status).toBe(404);
     expect(await AccessPoint.count({ where: { siteId: a.site.id, label: 'MH-9' } })).toBe(0);

@@ -18,7 +18,8 @@ const list = (query: string) => call(listRoute, `/api/attachments?${query}`);
 const remove = (id: string) => call(deleteRoute, `/api/attachments/${id}`, { id }, { method: 'DELETE' });
 
 type Upload = { url: string; method: 'PUT'; headers: Record<string, string> };
-const put = (upload: Upload, bytes: Buffer, headers = upload.headers) => fetch(upload.url, { method: 'PUT', headers, body: new Uint8Array(bytes) });
+const put = (upload: Upload, bytes: Buffer, headers = upload.headers) =>
+  fetch(upload.url, { method: 'PUT', headers, body: new Uint8Array(bytes) });
 
 /** Request, PUT the bytes to the presigned URL, and hand back the id, key and the storage's answer. */
 async function send(body: Record<string, unknown>, bytes: Buffer) {
@@ -48,7 +49,9 @@ describe('attachments: presigned upload, server-side check, signed links', () =>
     [a, b] = await Promise.all([makeInstallWorld('Alpha'), makeInstallWorld('Beta')]);
     await signInAs(a.foreman);
     installId = await startInstall(a);
-    png = await sharp({ create: { width: 800, height: 600, channels: 3, background: '#2a7f7a' } }).png().toBuffer();
+    png = await sharp({ create: { width: 800, height: 600, channels: 3, background: '#2a7f7a' } })
+      .png()
+      .toBuffer();
     // Stored landscape with EXIF "rotate 90° clockwise to view", as a tablet held upright writes it.
     jpeg = await sharp({ create: { width: 1200, height: 900, channels: 3, background: '#c05020' } })
       .jpeg({ quality: 80 })
@@ -64,16 +67,34 @@ describe('attachments: presigned upload, server-side check, signed links', () =>
 
   it('uploads a PNG to an install: pending, then ready with a 320 px WebP thumbnail in the bucket', async () => {
     await signInAs(a.technician);
-    const { id, key, stored } = await send({ installId, kind: 'inspection', fileName: 'Patch end.png', contentType: 'image/png', caption: 'Downstream end' }, png);
+    const { id, key, stored } = await send(
+      { installId, kind: 'inspection', fileName: 'Patch end.png', contentType: 'image/png', caption: 'Downstream end' },
+      png,
+    );
     expect(stored.status).toBe(200);
     expect(key).toMatch(new RegExp(`^${a.company.id}/${a.job.id}/${id}\\.png$`));
     expect((await Attachment.findByPk(id))!.status).toBe('pending');
 
     const done = await complete(id);
     expect(done.status, JSON.stringify(done.body)).toBe(200);
-    expect(done.body).toMatchObject({ id, status: 'ready', contentType: 'image/png', byteSize: png.length, width: 800, height: 600, kind: 'inspection', caption: 'Downstream end' });
+    expect(done.body).toMatchObject({
+      id,
+      status: 'ready',
+      contentType: 'image/png',
+      byteSize: png.length,
+      width: 800,
+      height: 600,
+      kind: 'inspection',
+      caption: 'Downstream end',
+    });
     const row = (await Attachment.findByPk(id))!;
-    expect(row).toMatchObject({ status: 'ready', installId, repairId: a.repair.id, jobId: a.job.id, uploadedById: a.technician.id });
+    expect(row).toMatchObject({
+      status: 'ready',
+      installId,
+      repairId: a.repair.id,
+      jobId: a.job.id,
+      uploadedById: a.technician.id,
+    });
     expect(row.thumbnailKey).toBe(`${a.company.id}/${a.job.id}/thumbs/${id}.webp`);
     const thumb = await readObject(row.thumbnailKey!);
     const meta = await sharp(thumb).metadata();
@@ -87,10 +108,19 @@ describe('attachments: presigned upload, server-side check, signed links', () =>
 
   it('uploads a JPEG to a repair: the thumbnail is turned upright and carries no metadata', async () => {
     await signInAs(a.office);
-    const { id } = await send({ repairId: a.repair.id, kind: 'before', fileName: 'crack.jpeg', contentType: 'image/jpeg' }, jpeg);
+    const { id } = await send(
+      { repairId: a.repair.id, kind: 'before', fileName: 'crack.jpeg', contentType: 'image/jpeg' },
+      jpeg,
+    );
     const done = await complete(id);
     expect(done.status, JSON.stringify(done.body)).toBe(200);
-    expect(done.body).toMatchObject({ contentType: 'image/jpeg', width: 900, height: 1200, installId: null, repairId: a.repair.id });
+    expect(done.body).toMatchObject({
+      contentType: 'image/jpeg',
+      width: 900,
+      height: 1200,
+      installId: null,
+      repairId: a.repair.id,
+    });
     const meta = await sharp(await readObject((await Attachment.findByPk(id))!.thumbnailKey!)).metadata();
     expect(meta).toMatchObject({ width: 320, height: Math.round((320 * 1200) / 900) });
     expect(meta.exif).toBeUndefined();
@@ -108,7 +138,10 @@ describe('attachments: presigned upload, server-side check, signed links', () =>
   it('refuses text claiming to be image/jpeg with 422 and keeps nothing', async () => {
     await signInAs(a.foreman);
     const text = Buffer.from('These are not the pixels you are looking for.\n'.repeat(20));
-    const { id, key, stored } = await send({ installId, kind: 'inspection', fileName: 'notes.jpg', contentType: 'image/jpeg' }, text);
+    const { id, key, stored } = await send(
+      { installId, kind: 'inspection', fileName: 'notes.jpg', contentType: 'image/jpeg' },
+      text,
+    );
     expect(stored.status).toBe(200); // the storage takes any bytes of the signed size and type…
     const done = await complete(id); // …the server's look at them is what refuses
     expect(done.status).toBe(422);
@@ -122,7 +155,10 @@ describe('attachments: presigned upload, server-side check, signed links', () =>
     exe.write('MZ', 0, 'latin1'); // DOS header magic, then the PE header where e_lfanew (0x3c) points
     exe.writeUInt32LE(0x80, 0x3c);
     exe.write('PE\0\0', 0x80, 'latin1');
-    const { id, key } = await send({ installId, kind: 'inspection', fileName: 'photo.jpg', contentType: 'image/jpeg' }, exe);
+    const { id, key } = await send(
+      { installId, kind: 'inspection', fileName: 'photo.jpg', contentType: 'image/jpeg' },
+      exe,
+    );
     const done = await complete(id);
     expect(done.status).toBe(422);
     expect(done.body.error.message).toMatch(/is a EXE file/);
@@ -132,23 +168,54 @@ describe('attachments: presigned upload, server-side check, signed links', () =>
   it('refuses a declared size over the limit, or a type we do not take, at request time with 400 and no row', async () => {
     await signInAs(a.foreman);
     const before = await Attachment.count({ where: { companyId: a.company.id } });
-    const big = await requestUpload({ installId, kind: 'inspection', fileName: 'huge.jpg', contentType: 'image/jpeg', byteSize: 15 * 1024 * 1024 + 1 });
+    const big = await requestUpload({
+      installId,
+      kind: 'inspection',
+      fileName: 'huge.jpg',
+      contentType: 'image/jpeg',
+      byteSize: 15 * 1024 * 1024 + 1,
+    });
     expect(big.status).toBe(400);
     expect(big.body.error.fields.byteSize[0]).toMatch(/at most 15 MB/);
-    const longVideo = await requestUpload({ installId, kind: 'inspection', fileName: 'run.mp4', contentType: 'video/mp4', byteSize: 200 * 1024 * 1024 + 1 });
+    const longVideo = await requestUpload({
+      installId,
+      kind: 'inspection',
+      fileName: 'run.mp4',
+      contentType: 'video/mp4',
+      byteSize: 200 * 1024 * 1024 + 1,
+    });
     expect(longVideo.status).toBe(400);
     expect(longVideo.body.error.fields.byteSize[0]).toMatch(/at most 200 MB/);
-    const pdf = await requestUpload({ installId, kind: 'document', fileName: 'x.pdf', contentType: 'application/pdf', byteSize: 10 });
+    const pdf = await requestUpload({
+      installId,
+      kind: 'document',
+      fileName: 'x.pdf',
+      contentType: 'application/pdf',
+      byteSize: 10,
+    });
     expect(pdf.status).toBe(400);
     expect(pdf.body.error.fields.contentType).toBeDefined();
-    const both = await requestUpload({ installId, repairId: a.repair.id, kind: 'after', fileName: 'a.png', contentType: 'image/png', byteSize: 10 });
+    const both = await requestUpload({
+      installId,
+      repairId: a.repair.id,
+      kind: 'after',
+      fileName: 'a.png',
+      contentType: 'image/png',
+      byteSize: 10,
+    });
     expect(both.status).toBe(400);
     expect(await Attachment.count({ where: { companyId: a.company.id } })).toBe(before);
   });
 
   it('lets the storage refuse a PUT of another size or type than was signed', async () => {
     await signInAs(a.foreman);
-    const requested = await requestUpload({ installId, kind: 'after', fileName: 'a.png', contentType: 'image/png', byteSize: png.length });
+    const requested = await requestUpload({
+      installId,
+      kind: 'after',
+      fileName: 'a.png',
+      contentType: 'image/png',
+      byteSize: png.length,
+    });
     const upload: Upload = requested.body.upload;
     expect((await put(upload, Buffer.concat([png, Buffer.alloc(10)]))).status).toBe(403);
     expect((await put(upload, png, { 'Content-Type': 'image/jpeg' })).status).toBe(403);
@@ -157,7 +224,13 @@ describe('attachments: presigned upload, server-side check, signed links', () =>
 
   it('refuses at completion when the stored bytes differ from the declared size, and keeps nothing', async () => {
     await signInAs(a.foreman);
-    const requested = await requestUpload({ installId, kind: 'after', fileName: 'a.png', contentType: 'image/png', byteSize: png.length });
+    const requested = await requestUpload({
+      installId,
+      kind: 'after',
+      fileName: 'a.png',
+      contentType: 'image/png',
+      byteSize: png.length,
+    });
     const id = requested.body.attachment.id;
     const key = (await Attachment.findByPk(id))!.storageKey;
     // Bytes of another size reach the key some other way than the signed PUT.
@@ -170,7 +243,13 @@ describe('attachments: presigned upload, server-side check, signed links', () =>
 
   it('answers 409 "upload not found" when nothing was PUT, and keeps the row for a retry', async () => {
     await signInAs(a.foreman);
-    const requested = await requestUpload({ installId, kind: 'after', fileName: 'a.png', contentType: 'image/png', byteSize: png.length });
+    const requested = await requestUpload({
+      installId,
+      kind: 'after',
+      fileName: 'a.png',
+      contentType: 'image/png',
+      byteSize: png.length,
+    });
     const id = requested.body.attachment.id;
     const early = await complete(id);
     expect(early.status).toBe(409);
@@ -182,17 +261,50 @@ describe('attachments: presigned upload, server-side check, signed links', () =>
   it("answers 404 for another company's repair or install and stores nothing", async () => {
     await signInAs(b.office);
     const before = await Attachment.count();
-    expect((await requestUpload({ repairId: a.repair.id, kind: 'before', fileName: 'a.png', contentType: 'image/png', byteSize: 100 })).status).toBe(404);
-    expect((await requestUpload({ installId, kind: 'before', fileName: 'a.png', contentType: 'image/png', byteSize: 100 })).status).toBe(404);
+    expect(
+      (
+        await requestUpload({
+          repairId: a.repair.id,
+          kind: 'before',
+          fileName: 'a.png',
+          contentType: 'image/png',
+          byteSize: 100,
+        })
+      ).status,
+    ).toBe(404);
+    expect(
+      (await requestUpload({ installId, kind: 'before', fileName: 'a.png', contentType: 'image/png', byteSize: 100 }))
+        .status,
+    ).toBe(404);
     expect((await list(`repairId=${a.repair.id}`)).status).toBe(404);
     expect(await Attachment.count()).toBe(before);
   });
 
-  it("answers 403 to a field user of another crew, for uploading, listing and deleting, and stores nothing", async () => {
+  it('answers 403 to a field user of another crew, for uploading, listing and deleting, and stores nothing', async () => {
     await signInAs(a.otherTechnician);
     const before = await Attachment.count({ where: { companyId: a.company.id } });
-    expect((await requestUpload({ installId, kind: 'inspection', fileName: 'a.png', contentType: 'image/png', byteSize: 100 })).status).toBe(403);
-    expect((await requestUpload({ repairId: a.repair.id, kind: 'inspection', fileName: 'a.png', contentType: 'image/png', byteSize: 100 })).status).toBe(403);
+    expect(
+      (
+        await requestUpload({
+          installId,
+          kind: 'inspection',
+          fileName: 'a.png',
+          contentType: 'image/png',
+          byteSize: 100,
+        })
+      ).status,
+    ).toBe(403);
+    expect(
+      (
+        await requestUpload({
+          repairId: a.repair.id,
+          kind: 'inspection',
+          fileName: 'a.png',
+          contentType: 'image/png',
+          byteSize: 100,
+        })
+      ).status,
+    ).toBe(403);
     expect((await list(`installId=${installId}`)).status).toBe(403);
     expect((await list(`jobId=${a.job.id}`)).status).toBe(403);
     const some = await Attachment.findOne({ where: { companyId: a.company.id, status: 'ready' } });
@@ -204,7 +316,10 @@ describe('attachments: presigned upload, server-side check, signed links', () =>
     await signInAs(a.technician);
     const { id } = await send({ installId, kind: 'inspection', fileName: 'listed.png', contentType: 'image/png' }, png);
     await complete(id);
-    const pending = await send({ installId, kind: 'inspection', fileName: 'pending.png', contentType: 'image/png' }, png);
+    const pending = await send(
+      { installId, kind: 'inspection', fileName: 'pending.png', contentType: 'image/png' },
+      png,
+    );
 
     const { status, body } = await list(`installId=${installId}`);
     expect(status).toBe(200);
@@ -213,7 +328,12 @@ describe('attachments: presigned upload, server-side check, signed links', () =>
     expect(ids).not.toContain(pending.id);
     expect(body.total).toBe(body.items.length);
     const item = body.items.find((i: { id: string }) => i.id === id);
-    expect(item).toMatchObject({ media: 'image', originalName: 'listed.png', uploadedByName: a.technician.name, canDelete: true });
+    expect(item).toMatchObject({
+      media: 'image',
+      originalName: 'listed.png',
+      uploadedByName: a.technician.name,
+      canDelete: true,
+    });
 
     const file = await fetch(item.url);
     expect(file.status).toBe(200);
@@ -255,18 +375,29 @@ describe('attachments: presigned upload, server-side check, signed links', () =>
     expect(await Attachment.count({ where: { id: first.id } })).toBe(0);
     expect(await headObject(first.key)).toBeNull();
     expect(await headObject(thumbKey)).toBeNull();
-    expect(await AuditEntry.count({ where: { entityId: first.id, action: 'delete', userId: a.technician.id } })).toBe(1);
+    expect(await AuditEntry.count({ where: { entityId: first.id, action: 'delete', userId: a.technician.id } })).toBe(
+      1,
+    );
 
     await Install.update({ status: 'awaiting_review', signedOffAt: new Date() }, { where: { id: installId } });
     const locked = await remove(second.id);
     expect(locked.status).toBe(409);
-    expect((await list(`installId=${installId}`)).body.items.find((i: { id: string }) => i.id === second.id).canDelete).toBe(false);
+    expect(
+      (await list(`installId=${installId}`)).body.items.find((i: { id: string }) => i.id === second.id).canDelete,
+    ).toBe(false);
 
     await signInAs(a.office);
-    const byOffice = await call(deleteRoute, `/api/attachments/${second.id}?reason=Duplicate%20photo`, { id: second.id }, { method: 'DELETE' });
+    const byOffice = await call(
+      deleteRoute,
+      `/api/attachments/${second.id}?reason=Duplicate%20photo`,
+      { id: second.id },
+      { method: 'DELETE' },
+    );
     expect(byOffice.status).toBe(200);
     expect(await headObject(second.key)).toBeNull();
-    expect((await AuditEntry.findOne({ where: { entityId: second.id, action: 'delete' } }))!.reason).toBe('Duplicate photo');
+    expect((await AuditEntry.findOne({ where: { entityId: second.id, action: 'delete' } }))!.reason).toBe(
+      'Duplicate photo',
+    );
     expect((await remove(second.id)).status).toBe(404);
     expect((await remove('not-a-uuid')).status).toBe(404);
     await Install.update({ status: 'in_progress', signedOffAt: null }, { where: { id: installId } });
@@ -280,7 +411,9 @@ describe('attachments: presigned upload, server-side check, signed links', () =>
     expect((await complete(done.id)).status).toBe(200);
     const now = new Date();
     const age = async (id: string, minutes: number) =>
-      Attachment.sequelize!.query('UPDATE attachments SET created_at = :at WHERE id = :id', { replacements: { at: new Date(now.getTime() - minutes * 60_000), id } });
+      Attachment.sequelize!.query('UPDATE attachments SET created_at = :at WHERE id = :id', {
+        replacements: { at: new Date(now.getTime() - minutes * 60_000), id },
+      });
     await age(stale.id, 61);
     await age(recent.id, 59);
     await age(done.id, 24 * 60);

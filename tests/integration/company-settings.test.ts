@@ -27,7 +27,13 @@ describe('company settings API', () => {
       await signInAs(user);
       const { status, body } = await call(getRoute, '/api/company');
       expect(status).toBe(200);
-      expect(body).toMatchObject({ id: a.company.id, timeZone: 'America/Denver', unitSystem: 'imperial', minOverlapPerEndMm: 305, workingWindowSafetyMargin: 0.2 });
+      expect(body).toMatchObject({
+        id: a.company.id,
+        timeZone: 'America/Denver',
+        unitSystem: 'imperial',
+        minOverlapPerEndMm: 305,
+        workingWindowSafetyMargin: 0.2,
+      });
     }
     await signInAs(b.office);
     expect((await call(getRoute, '/api/company')).body.id).toBe(b.company.id);
@@ -44,9 +50,21 @@ describe('company settings API', () => {
   it('refuses bad input with 400, a message per field, and nothing written', async () => {
     await signInAs(a.admin);
     const before = await reload(a);
-    const bad = await patch({ name: '', timeZone: 'Mars/Olympus_Mons', unitSystem: 'cubits', minOverlapPerEndMm: -5, workingWindowSafetyMargin: 0.95 });
+    const bad = await patch({
+      name: '',
+      timeZone: 'Mars/Olympus_Mons',
+      unitSystem: 'cubits',
+      minOverlapPerEndMm: -5,
+      workingWindowSafetyMargin: 0.95,
+    });
     expect(bad.status).toBe(400);
-    expect(Object.keys(bad.body.error.fields).sort()).toEqual(['minOverlapPerEndMm', 'name', 'timeZone', 'unitSystem', 'workingWindowSafetyMargin']);
+    expect(Object.keys(bad.body.error.fields).sort()).toEqual([
+      'minOverlapPerEndMm',
+      'name',
+      'timeZone',
+      'unitSystem',
+      'workingWindowSafetyMargin',
+    ]);
     expect(bad.body.error.fields.timeZone[0]).toMatch(/time zone/i);
     expect((await patch({ companyId: b.company.id })).status).toBe(400); // strict: unknown keys refused
     expect((await patch({ minOverlapPerEndMm: '300' })).status).toBe(400); // a number, not a string
@@ -57,13 +75,28 @@ describe('company settings API', () => {
 
   it('saves valid settings (overlap rounded to whole mm) and audits from → to for what changed', async () => {
     await signInAs(a.admin);
-    const res = await patch({ name: 'Alpha Pipe Care', timeZone: 'Europe/Berlin', unitSystem: 'metric', minOverlapPerEndMm: 152.4, workingWindowSafetyMargin: 0.25 });
+    const res = await patch({
+      name: 'Alpha Pipe Care',
+      timeZone: 'Europe/Berlin',
+      unitSystem: 'metric',
+      minOverlapPerEndMm: 152.4,
+      workingWindowSafetyMargin: 0.25,
+    });
     expect(res.status).toBe(200);
-    expect(res.body).toMatchObject({ name: 'Alpha Pipe Care', timeZone: 'Europe/Berlin', unitSystem: 'metric', minOverlapPerEndMm: 152, workingWindowSafetyMargin: 0.25 });
+    expect(res.body).toMatchObject({
+      name: 'Alpha Pipe Care',
+      timeZone: 'Europe/Berlin',
+      unitSystem: 'metric',
+      minOverlapPerEndMm: 152,
+      workingWindowSafetyMargin: 0.25,
+    });
     expect(await reload(a)).toMatchObject({ timeZone: 'Europe/Berlin', minOverlapPerEndMm: 152 });
     const audit = await AuditEntry.findOne({ where: { companyId: a.company.id, entityType: 'company' } });
     expect(audit).toMatchObject({ action: 'update', userId: a.admin.id, entityId: a.company.id });
-    expect(audit!.changes).toMatchObject({ timeZone: { from: 'America/Denver', to: 'Europe/Berlin' }, minOverlapPerEndMm: { from: 305, to: 152 } });
+    expect(audit!.changes).toMatchObject({
+      timeZone: { from: 'America/Denver', to: 'Europe/Berlin' },
+      minOverlapPerEndMm: { from: 305, to: 152 },
+    });
     // UTC, the column default, is accepted although Intl lists it under no name of its own.
     expect((await patch({ timeZone: 'UTC' })).status).toBe(200);
     // Sending what is already stored writes no audit line.

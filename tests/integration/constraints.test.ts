@@ -12,7 +12,10 @@ describe('database constraints', () => {
   });
 
   const jobFor = (w: World, number: string, status = 'draft') =>
-    Job.create({ companyId: w.company.id, number, customerId: w.customer.id, siteId: w.site.id, status: status as never }, { validate: false });
+    Job.create(
+      { companyId: w.company.id, number, customerId: w.customer.id, siteId: w.site.id, status: status as never },
+      { validate: false },
+    );
 
   it('keeps job numbers unique per company, not across companies', async () => {
     const number = `U-${randomUUID().slice(0, 8)}`;
@@ -29,17 +32,44 @@ describe('database constraints', () => {
   });
 
   it('refuses a condition grade outside 1–5 and a repair on a missing segment', async () => {
-    const base = { companyId: a.company.id, jobId: a.job.id, distanceMm: 100, defectType: 'hole' as const, defectLengthMm: 50 };
-    await expect(Repair.create({ ...base, segmentId: a.segment.id, conditionGrade: 6 }, { validate: false })).rejects.toThrow(/repairs_grade_check/);
-    await expect(Repair.create({ ...base, segmentId: randomUUID(), conditionGrade: 3 })).rejects.toThrow(/foreign key/i);
+    const base = {
+      companyId: a.company.id,
+      jobId: a.job.id,
+      distanceMm: 100,
+      defectType: 'hole' as const,
+      defectLengthMm: 50,
+    };
+    await expect(
+      Repair.create({ ...base, segmentId: a.segment.id, conditionGrade: 6 }, { validate: false }),
+    ).rejects.toThrow(/repairs_grade_check/);
+    await expect(Repair.create({ ...base, segmentId: randomUUID(), conditionGrade: 3 })).rejects.toThrow(
+      /foreign key/i,
+    );
   });
 
   it('keeps client event ids unique per company and the event log append-only', async () => {
-    const installA = await Install.create({ companyId: a.company.id, repairId: a.repair.id, jobId: a.job.id, crewId: a.crew.id });
-    const installB = await Install.create({ companyId: b.company.id, repairId: b.repair.id, jobId: b.job.id, crewId: b.crew.id });
+    const installA = await Install.create({
+      companyId: a.company.id,
+      repairId: a.repair.id,
+      jobId: a.job.id,
+      crewId: a.crew.id,
+    });
+    const installB = await Install.create({
+      companyId: b.company.id,
+      repairId: b.repair.id,
+      jobId: b.job.id,
+      crewId: b.crew.id,
+    });
     const clientEventId = randomUUID();
     const event = (w: World, installId: string) =>
-      InstallEvent.create({ companyId: w.company.id, installId, clientEventId, type: 'resin_mixed', deviceTime: new Date(), userId: w.foreman.id });
+      InstallEvent.create({
+        companyId: w.company.id,
+        installId,
+        clientEventId,
+        type: 'resin_mixed',
+        deviceTime: new Date(),
+        userId: w.foreman.id,
+      });
     const first = await event(a, installA.id);
     await expect(event(b, installB.id)).resolves.toBeTruthy();
     await expect(event(a, installA.id)).rejects.toMatchObject({ name: 'SequelizeUniqueConstraintError' });
@@ -49,7 +79,14 @@ describe('database constraints', () => {
   it('refuses a correction that names no event', async () => {
     const install = await Install.create({ companyId: a.company.id, repairId: a.repair.id, jobId: a.job.id });
     await expect(
-      InstallEvent.create({ companyId: a.company.id, installId: install.id, clientEventId: randomUUID(), type: 'correction', deviceTime: new Date(), userId: a.foreman.id }),
+      InstallEvent.create({
+        companyId: a.company.id,
+        installId: install.id,
+        clientEventId: randomUUID(),
+        type: 'correction',
+        deviceTime: new Date(),
+        userId: a.foreman.id,
+      }),
     ).rejects.toThrow(/install_events_correction_check/);
   });
 });

@@ -25,8 +25,10 @@ describe('crews API', () => {
   const create = (body: unknown) => call(createRoute, '/api/crews', {}, jsonBody('POST', body));
   const patch = (id: string, body: unknown) => call(patchRoute, `/api/crews/${id}`, { id }, jsonBody('PATCH', body));
   const remove = (id: string) => call(deleteRoute, `/api/crews/${id}`, { id }, { method: 'DELETE' });
-  const members = (id: string, body: unknown) => call(membersRoute, `/api/crews/${id}/members`, { id }, jsonBody('PUT', body));
-  const memberIds = async (crewId: string) => (await CrewMember.findAll({ where: { crewId } })).map((m) => m.userId).sort();
+  const members = (id: string, body: unknown) =>
+    call(membersRoute, `/api/crews/${id}/members`, { id }, jsonBody('PUT', body));
+  const memberIds = async (crewId: string) =>
+    (await CrewMember.findAll({ where: { crewId } })).map((m) => m.userId).sort();
 
   it('answers 401 without a session', async () => {
     expect((await call(listRoute, '/api/crews')).status).toBe(401);
@@ -43,7 +45,9 @@ describe('crews API', () => {
     expect(byCapacity.body.items[0].name).toBe('Birch crew');
     const searched = await call(listRoute, '/api/crews?q=ceda');
     expect(searched.body.items.map((c: { name: string }) => c.name)).toEqual(['Cedar crew']);
-    const own = (await call(listRoute, `/api/crews?q=${encodeURIComponent(a.crew.name)}`)).body.items.find((c: { id: string }) => c.id === a.crew.id);
+    const own = (await call(listRoute, `/api/crews?q=${encodeURIComponent(a.crew.name)}`)).body.items.find(
+      (c: { id: string }) => c.id === a.crew.id,
+    );
     expect(own.members.map((m: { id: string }) => m.id).sort()).toEqual([a.foreman.id, a.technician.id].sort());
     const bad = await call(listRoute, '/api/crews?sort=secret&pageSize=500');
     expect(bad.status).toBe(400);
@@ -96,7 +100,11 @@ describe('crews API', () => {
     const made = await create({ name: ' Delta crew ', dailyCapacity: 5 });
     expect(made.status).toBe(201);
     expect(made.body).toMatchObject({ name: 'Delta crew', dailyCapacity: 5, companyId: a.company.id, members: [] });
-    expect(await AuditEntry.findOne({ where: { entityId: made.body.id } })).toMatchObject({ action: 'create', entityType: 'crew', userId: a.admin.id });
+    expect(await AuditEntry.findOne({ where: { entityId: made.body.id } })).toMatchObject({
+      action: 'create',
+      entityType: 'crew',
+      userId: a.admin.id,
+    });
 
     const dup = await create({ name: 'Delta crew', dailyCapacity: 1 });
     expect(dup.status).toBe(409);
@@ -119,7 +127,9 @@ describe('crews API', () => {
     const crew = await Crew.create({ companyId: a.company.id, name: 'Elm crew' });
     const set = await members(crew.id, { userIds: [a.foreman.id, a.otherTechnician.id, a.foreman.id] });
     expect(set.status).toBe(200);
-    expect(set.body.members.map((m: { id: string }) => m.id).sort()).toEqual([a.foreman.id, a.otherTechnician.id].sort());
+    expect(set.body.members.map((m: { id: string }) => m.id).sort()).toEqual(
+      [a.foreman.id, a.otherTechnician.id].sort(),
+    );
     expect(await memberIds(crew.id)).toEqual([a.foreman.id, a.otherTechnician.id].sort());
 
     for (const wrong of [a.office.id, a.admin.id, b.foreman.id, '00000000-0000-4000-8000-000000000000']) {
@@ -134,13 +144,23 @@ describe('crews API', () => {
 
     const swapped = await members(crew.id, { userIds: [a.otherTechnician.id] });
     expect(swapped.status).toBe(200);
-    const audits = await AuditEntry.findAll({ where: { entityId: crew.id, action: 'members' }, order: [['createdAt', 'ASC']] });
+    const audits = await AuditEntry.findAll({
+      where: { entityId: crew.id, action: 'members' },
+      order: [['createdAt', 'ASC']],
+    });
     expect(audits.map((e) => e.changes)).toEqual([
       { added: [a.foreman.id, a.otherTechnician.id], removed: [] },
       { added: [], removed: [a.foreman.id] },
     ]);
     // A deactivated field user may stay on a crew but cannot be added to one.
-    const gone = await User.create({ companyId: a.company.id, email: `gone-${crew.id.slice(0, 8)}@alpha.test`, name: 'Gone Person', passwordHash: 'x', role: 'technician', active: false });
+    const gone = await User.create({
+      companyId: a.company.id,
+      email: `gone-${crew.id.slice(0, 8)}@alpha.test`,
+      name: 'Gone Person',
+      passwordHash: 'x',
+      role: 'technician',
+      active: false,
+    });
     expect((await members(crew.id, { userIds: [a.otherTechnician.id, gone.id] })).status).toBe(422);
   });
 
@@ -151,7 +171,9 @@ describe('crews API', () => {
     expect((await Crew.findByPk(a.crew.id))?.archivedAt).toBeInstanceOf(Date);
     const list = await call(listRoute, '/api/crews?pageSize=100');
     expect(list.body.items.some((c: { id: string }) => c.id === a.crew.id)).toBe(false);
-    expect((await call(listRoute, '/api/crews?archived=only')).body.items.map((c: { id: string }) => c.id)).toEqual([a.crew.id]);
+    expect((await call(listRoute, '/api/crews?archived=only')).body.items.map((c: { id: string }) => c.id)).toEqual([
+      a.crew.id,
+    ]);
     expect((await members(a.crew.id, { userIds: [] })).status).toBe(409);
     expect(await memberIds(a.crew.id)).toHaveLength(2);
     const restored = await patch(a.crew.id, { archived: false });

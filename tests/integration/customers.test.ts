@@ -13,7 +13,13 @@ describe('customers API', () => {
     a = await makeWorld('Alpha');
     b = await makeWorld('Beta');
     // Five more customers so paging and sorting have something to do.
-    await Customer.bulkCreate(['Echo', 'Delta', 'Charlie', 'Bravo', 'Able'].map((name) => ({ companyId: a.company.id, name: `${name} Homes`, kind: 'business' as const })));
+    await Customer.bulkCreate(
+      ['Echo', 'Delta', 'Charlie', 'Bravo', 'Able'].map((name) => ({
+        companyId: a.company.id,
+        name: `${name} Homes`,
+        kind: 'business' as const,
+      })),
+    );
   });
   beforeEach(() => signOut());
 
@@ -51,7 +57,10 @@ describe('customers API', () => {
     await signInAs(a.office);
     const { status, body } = await call(listRoute, '/api/customers?format=csv&kind=business&pageSize=1');
     expect(status).toBe(200);
-    const lines = String(body).replace(/^\uFEFF/, '').trim().split('\r\n');
+    const lines = String(body)
+      .replace(/^\uFEFF/, '')
+      .trim()
+      .split('\r\n');
     expect(lines[0]).toBe('Name,Kind,Contact,E-mail,Phone,Billing address,Archived');
     expect(lines).toHaveLength(6);
   });
@@ -59,13 +68,23 @@ describe('customers API', () => {
   it('creates a customer, writes the audit trail, and refuses bad input with field messages and nothing written', async () => {
     await signInAs(a.office);
     const before = await count();
-    const bad = await call(createRoute, '/api/customers', {}, jsonBody('POST', { name: '', email: 'not-mail', kind: 'alien' }));
+    const bad = await call(
+      createRoute,
+      '/api/customers',
+      {},
+      jsonBody('POST', { name: '', email: 'not-mail', kind: 'alien' }),
+    );
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.body.error.fields).sort()).toEqual(['email', 'kind', 'name']);
     expect((await call(createRoute, '/api/customers', {}, jsonBody('POST', '{nope'))).status).toBe(400);
     expect(await count()).toBe(before);
 
-    const made = await call(createRoute, '/api/customers', {}, jsonBody('POST', { name: ' Foxglove Flats ', email: 'Desk@Foxglove.test', kind: 'property_manager' }));
+    const made = await call(
+      createRoute,
+      '/api/customers',
+      {},
+      jsonBody('POST', { name: ' Foxglove Flats ', email: 'Desk@Foxglove.test', kind: 'property_manager' }),
+    );
     expect(made.status).toBe(201);
     expect(made.body).toMatchObject({ name: 'Foxglove Flats', email: 'desk@foxglove.test', companyId: a.company.id });
     const audit = await AuditEntry.findOne({ where: { entityId: made.body.id } });
@@ -76,7 +95,9 @@ describe('customers API', () => {
     for (const user of [a.foreman, a.technician]) {
       await signInAs(user);
       expect((await call(createRoute, '/api/customers', {}, jsonBody('POST', { name: 'Nope' }))).status).toBe(403);
-      expect((await call(patchRoute, '/x', { id: a.customer.id }, jsonBody('PATCH', { name: 'Nope' }))).status).toBe(403);
+      expect((await call(patchRoute, '/x', { id: a.customer.id }, jsonBody('PATCH', { name: 'Nope' }))).status).toBe(
+        403,
+      );
       expect((await call(archiveRoute, '/x', { id: a.customer.id }, { method: 'DELETE' })).status).toBe(403);
     }
     expect((await Customer.findByPk(a.customer.id))?.name).toBe(a.customer.name);
@@ -95,13 +116,18 @@ describe('customers API', () => {
 
   it('edits with PATCH: only the fields sent change, each change is audited with from and to', async () => {
     await signInAs(a.office);
-    const c = await Customer.create({ companyId: a.company.id, name: 'Gorse Lane', kind: 'municipality', phone: '555-0101' });
+    const c = await Customer.create({
+      companyId: a.company.id,
+      name: 'Gorse Lane',
+      kind: 'municipality',
+      phone: '555-0101',
+    });
     const res = await call(patchRoute, '/x', { id: c.id }, jsonBody('PATCH', { phone: '555-0199' }));
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ name: 'Gorse Lane', kind: 'municipality', phone: '555-0199' });
     const audit = await AuditEntry.findOne({ where: { entityId: c.id, action: 'update' } });
     expect(audit?.changes).toEqual({ phone: { from: '555-0101', to: '555-0199' } });
-    const bad = await call(patchRoute, '/x', { id: c.id }, jsonBody('PATCH', { name: '' , companyId: b.company.id }));
+    const bad = await call(patchRoute, '/x', { id: c.id }, jsonBody('PATCH', { name: '', companyId: b.company.id }));
     expect(bad.status).toBe(400);
     expect((await Customer.findByPk(c.id))?.companyId).toBe(a.company.id);
   });
@@ -109,7 +135,9 @@ describe('customers API', () => {
   it("answers 404 for another company's customer on read, edit and archive", async () => {
     await signInAs(b.office);
     expect((await call(getRoute, '/x', { id: a.customer.id })).status).toBe(404);
-    expect((await call(patchRoute, '/x', { id: a.customer.id }, jsonBody('PATCH', { name: 'Mine now' }))).status).toBe(404);
+    expect((await call(patchRoute, '/x', { id: a.customer.id }, jsonBody('PATCH', { name: 'Mine now' }))).status).toBe(
+      404,
+    );
     expect((await call(archiveRoute, '/x', { id: a.customer.id }, { method: 'DELETE' })).status).toBe(404);
     expect((await call(getRoute, '/x', { id: 'not-a-uuid' })).status).toBe(404);
     expect((await Customer.findByPk(a.customer.id))?.archivedAt).toBeNull();

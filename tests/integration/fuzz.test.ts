@@ -18,13 +18,15 @@ const RUNS = Number(process.env.FUZZ_RUNS ?? 1000);
 // Endpoints at once: the work is mostly waiting on PostgreSQL, so more streams use the machine better.
 vi.setConfig({ maxConcurrency: Number(process.env.FUZZ_CONCURRENCY ?? 8) });
 
-
 /** Text that must never reach a client: stack frames, SQL, driver and ORM error names, file paths. */
-const LEAK = /\n\s+at |\bat [\w.<>]+ \(|node_modules|\/work\/|Sequelize\w*Error|\b(SELECT|INSERT INTO|DELETE FROM|UPDATE "?\w+"? SET)\b|violates \w+ constraint|relation "|syntax error|invalid input syntax|out of range for type/;
+const LEAK =
+  /\n\s+at |\bat [\w.<>]+ \(|node_modules|\/work\/|Sequelize\w*Error|\b(SELECT|INSERT INTO|DELETE FROM|UPDATE "?\w+"? SET)\b|violates \w+ constraint|relation "|syntax error|invalid input syntax|out of range for type/;
 
 const endpoints = listRouteFiles()
   .filter((r) => !r.route.startsWith('/api/auth/') && r.route.startsWith('/api/'))
-  .flatMap((r) => r.methods.filter((m) => MUTATING.includes(m)).map((method) => ({ key: `${method} ${r.route}`, method, ...r })));
+  .flatMap((r) =>
+    r.methods.filter((m) => MUTATING.includes(m)).map((method) => ({ key: `${method} ${r.route}`, method, ...r })),
+  );
 
 const COUNTER_SQL = `
   DROP TABLE IF EXISTS fuzz_writes;
@@ -75,7 +77,9 @@ describe('fuzzing every mutating endpoint', () => {
   });
 
   it('has a fuzz target for every mutating route of the tree', () => {
-    const missing = endpoints.filter((e) => !FUZZ_TARGETS[e.key]).map((e) => `${e.key} (${e.file}) has no entry in tests/integration/helpers/fuzz-targets.ts`);
+    const missing = endpoints
+      .filter((e) => !FUZZ_TARGETS[e.key])
+      .map((e) => `${e.key} (${e.file}) has no entry in tests/integration/helpers/fuzz-targets.ts`);
     const stale = Object.keys(FUZZ_TARGETS).filter((key) => !endpoints.some((e) => e.key === key));
     expect(missing, missing.join('\n')).toEqual([]);
     expect(stale, `entries for routes that do not exist: ${stale.join(', ')}`).toEqual([]);
@@ -91,7 +95,11 @@ describe('fuzzing every mutating endpoint', () => {
       const bodies = target.schema ? arbitraryOf(target.schema, pools, target.overrides?.(w, made)) : hostile;
       const ownId = target.id?.(w, made);
       const ids = ownId
-        ? fc.oneof({ weight: 12, arbitrary: fc.constant(ownId) }, { weight: 2, arbitrary: fc.constantFrom(...pools.foreign) }, { weight: 1, arbitrary: fc.constantFrom('not-an-id', '..', '%00', '1e308') })
+        ? fc.oneof(
+            { weight: 12, arbitrary: fc.constant(ownId) },
+            { weight: 2, arbitrary: fc.constantFrom(...pools.foreign) },
+            { weight: 1, arbitrary: fc.constantFrom('not-an-id', '..', '%00', '1e308') },
+          )
         : fc.constant('');
       const queries = target.query ?? fc.constant({});
       const seen = { total: 0, server: 0, byStatus: new Map<number, number>() };
@@ -103,25 +111,38 @@ describe('fuzzing every mutating endpoint', () => {
             // Most bodies go as JSON; some as whatever text the generator made (a bare string, half a document).
             const text = raw && typeof body === 'string' ? body : JSON.stringify(body ?? null);
             const url = `${endpoint.route.replace('[id]', encodeURIComponent(id))}${Object.keys(query).length ? `?${new URLSearchParams(query)}` : ''}`;
-            const answer = await call(handler, url, { id }, {
-              method: endpoint.method,
-              headers: { 'content-type': 'application/json', ...target.headers?.(text) },
-              body: text,
-            });
+            const answer = await call(
+              handler,
+              url,
+              { id },
+              {
+                method: endpoint.method,
+                headers: { 'content-type': 'application/json', ...target.headers?.(text) },
+                body: text,
+              },
+            );
             seen.total += 1;
             seen.byStatus.set(answer.status, (seen.byStatus.get(answer.status) ?? 0) + 1);
             if (answer.status >= 500) seen.server += 1;
             const shown = typeof answer.body === 'string' ? answer.body : JSON.stringify(answer.body);
-            expect(answer.status, `${endpoint.key} ${url} ${text.slice(0, 300)} → ${shown.slice(0, 300)}`).toBeLessThan(500);
+            expect(answer.status, `${endpoint.key} ${url} ${text.slice(0, 300)} → ${shown.slice(0, 300)}`).toBeLessThan(
+              500,
+            );
             expect(shown, `${endpoint.key} leaked internals for ${text.slice(0, 200)}`).not.toMatch(LEAK);
             const before = written;
             written = await writesOf(w.company.id);
-            if (answer.status >= 400) expect(written, `${endpoint.key} answered ${answer.status} but wrote: ${text.slice(0, 300)}`).toBe(before);
+            if (answer.status >= 400)
+              expect(written, `${endpoint.key} answered ${answer.status} but wrote: ${text.slice(0, 300)}`).toBe(
+                before,
+              );
           }),
           { numRuns: RUNS, endOnFailure: true },
         ),
       );
-      const statuses = [...seen.byStatus].sort(([a], [b]) => a - b).map(([s, n]) => `${s}×${n}`).join(' ');
+      const statuses = [...seen.byStatus]
+        .sort(([a], [b]) => a - b)
+        .map(([s, n]) => `${s}×${n}`)
+        .join(' ');
       tally.push(`fuzz ${endpoint.key}: ${seen.total} bodies, ${seen.server} 5xx (${statuses})`);
       expect(seen.server).toBe(0);
       // Bodies name the other company's rows; none of them may change.

@@ -180,15 +180,26 @@ describe('GET /api/insights', () => {
   it('counts a running install as a late inflate only once its inflate-by time has passed', async () => {
     const now = Date.now();
     const running = (mixedAgoMin: number) => ({
-      companyId: w.company.id, repairId: w.repair.id, jobId: w.job.id, crewId: w.otherCrew.id, status: 'in_progress' as const,
-      mixedAt: new Date(now - mixedAgoMin * MIN), inflateBy: new Date(now + (30 - mixedAgoMin) * MIN), derivedAt: new Date(),
+      companyId: w.company.id,
+      repairId: w.repair.id,
+      jobId: w.job.id,
+      crewId: w.otherCrew.id,
+      status: 'in_progress' as const,
+      mixedAt: new Date(now - mixedAgoMin * MIN),
+      inflateBy: new Date(now + (30 - mixedAgoMin) * MIN),
+      derivedAt: new Date(),
     });
     await Install.bulkCreate([running(5), running(40)]); // inflate-by in 25 min; inflate-by 10 min ago
     await signInAs(w.office);
     const today = dayInZone(new Date(now), w.company.timeZone);
     const from = dayInZone(new Date(now), w.company.timeZone, -1);
     const { body } = await call(insightsRoute, url(`from=${from}&to=${today}&crewId=${w.otherCrew.id}`));
-    expect(body).toMatchObject({ installs: 2, flagged: 1, byFlag: { 'late-inflate': 1 }, medianInflateMarginMin: null });
+    expect(body).toMatchObject({
+      installs: 2,
+      flagged: 1,
+      byFlag: { 'late-inflate': 1 },
+      medianInflateMarginMin: null,
+    });
   });
 
   it('answers an empty period with zeros and nulls', async () => {

@@ -24,7 +24,15 @@ beforeAll(async () => {
 afterEach(() => vi.restoreAllMocks());
 
 const freshRepair = () =>
-  Repair.create({ companyId: w.company.id, jobId: w.job.id, segmentId: w.segment.id, distanceMm: 9000, defectType: 'hole', conditionGrade: 3, defectLengthMm: 300 });
+  Repair.create({
+    companyId: w.company.id,
+    jobId: w.job.id,
+    segmentId: w.segment.id,
+    distanceMm: 9000,
+    defectType: 'hole',
+    conditionGrade: 3,
+    defectLengthMm: 300,
+  });
 
 /** The stored row next to what the log says now (both read at one database instant). */
 async function compare(installId: string) {
@@ -95,7 +103,7 @@ async function expectStoredMatchesLog(installId: string, context: string) {
 /** A small seeded random source, so a failing sequence can be replayed from its seed. */
 function random(seed: number) {
   let s = seed >>> 0;
-  return () => ((s = (Math.imul(s ^ (s >>> 15), 2246822507) + 0x9e3779b9) >>> 0) / 2 ** 32);
+  return () => (s = (Math.imul(s ^ (s >>> 15), 2246822507) + 0x9e3779b9) >>> 0) / 2 ** 32;
 }
 
 describe('the derived state on the install row', () => {
@@ -104,7 +112,7 @@ describe('the derived state on the install row', () => {
     const seen = { swapped: 0, replays: 0, corrections: 0 };
     for (const seed of [1, 2, 3, 4, 5, 6]) {
       const rnd = random(seed);
-      const pick = <T,>(list: T[]) => list[Math.floor(rnd() * list.length)];
+      const pick = <T>(list: T[]) => list[Math.floor(rnd() * list.length)];
       const repair = await freshRepair();
       const id = await startInstall({ ...w, repair });
       const bend = {
@@ -115,7 +123,9 @@ describe('the derived state on the install row', () => {
       const taps = cleanInstall(w, bend).filter((tap) => !(tap.type === 'dry_run_finished' && rnd() < 0.3));
       // Pressure readings and notes while the bladder is up, some outside the packer's 70–150 kPa.
       const extra = Array.from({ length: 3 + Math.floor(rnd() * 5) }, (_, i) =>
-        rnd() < 0.5 ? body('pressure_reading', 100 + i, { pressureKpa: Math.round(60 + rnd() * 110) }) : body('note', 100 + i, { text: `note ${i}` }),
+        rnd() < 0.5
+          ? body('pressure_reading', 100 + i, { pressureKpa: Math.round(60 + rnd() * 110) })
+          : body('note', 100 + i, { text: `note ${i}` }),
       );
       const inOrder = [...taps, ...extra].sort((a, b) => a.deviceTime.localeCompare(b.deviceTime));
       // Two tablets: now and then a tap arrives after the one that followed it.
@@ -139,12 +149,24 @@ describe('the derived state on the install row', () => {
         if (rnd() < 0.2 && accepted.length) {
           const target = pick(accepted);
           const correction =
-            target.type === 'conditions_recorded' ? { payload: { pipeTempC: Math.round(rnd() * 45) } }
-            : target.type === 'pressure_reading' || target.type === 'bladder_inflated' ? { payload: { pressureKpa: Math.round(60 + rnd() * 110) } }
-            : { deviceTime: new Date(new Date(target.deviceTime).getTime() + Math.round((rnd() - 0.5) * 20) * 60_000).toISOString() };
+            target.type === 'conditions_recorded'
+              ? { payload: { pipeTempC: Math.round(rnd() * 45) } }
+              : target.type === 'pressure_reading' || target.type === 'bladder_inflated'
+                ? { payload: { pressureKpa: Math.round(60 + rnd() * 110) } }
+                : {
+                    deviceTime: new Date(
+                      new Date(target.deviceTime).getTime() + Math.round((rnd() - 0.5) * 20) * 60_000,
+                    ).toISOString(),
+                  };
           // Named by the device's id or by the server's.
-          const byServerId = rnd() < 0.5 ? (await InstallEvent.findOne({ where: { clientEventId: target.clientEventId } }))!.id : null;
-          const fix = body('correction', 200, { reason: 'Read the wrong figure', ...correction }, { correctsEventId: byServerId ?? target.clientEventId });
+          const byServerId =
+            rnd() < 0.5 ? (await InstallEvent.findOne({ where: { clientEventId: target.clientEventId } }))!.id : null;
+          const fix = body(
+            'correction',
+            200,
+            { reason: 'Read the wrong figure', ...correction },
+            { correctsEventId: byServerId ?? target.clientEventId },
+          );
           const answer = await postEvent(id, fix);
           expect([201, 422], `seed ${seed} correction: ${JSON.stringify(answer.body)}`).toContain(answer.status);
           if (answer.status === 201) seen.corrections += 1;
@@ -161,16 +183,35 @@ describe('the derived state on the install row', () => {
     const late = await startInstall({ ...w, repair: await freshRepair() });
     // Mixed an hour ago (30 min working window): not inflated, so late now — the stored kinds cannot know it.
     const minutesAgo = (min: number) => (Date.now() - T0) / 60_000 - min;
-    await postAll(late, cleanInstall(w, { resin_mixed: minutesAgo(60) }).filter((t) => ['safety_acknowledged', 'conditions_recorded', 'resin_mixed'].includes(t.type)));
+    await postAll(
+      late,
+      cleanInstall(w, { resin_mixed: minutesAgo(60) }).filter((t) =>
+        ['safety_acknowledged', 'conditions_recorded', 'resin_mixed'].includes(t.type),
+      ),
+    );
     const lateRow = await compare(late);
     expect(lateRow.stored).toEqual(lateRow.fromLog);
     expect(lateRow.stored.kindsNow).toContain('late-inflate');
     expect((await Install.findByPk(late))!.flagKinds).not.toContain('late-inflate');
 
     // Conditions recorded with a good kit that then expires before the resin is mixed.
-    const kit = await ResinKit.create({ companyId: w.company.id, resinSystemId: w.resinSystem.id, lot: `SOON-${randomUUID().slice(0, 6)}`, expiresOn: '2099-01-01', quantityL: 5 });
+    const kit = await ResinKit.create({
+      companyId: w.company.id,
+      resinSystemId: w.resinSystem.id,
+      lot: `SOON-${randomUUID().slice(0, 6)}`,
+      expiresOn: '2099-01-01',
+      quantityL: 5,
+    });
     const waiting = await startInstall({ ...w, repair: await freshRepair() });
-    await postAll(waiting, [body('conditions_recorded', 13, { mixTempC: 20, pipeTempC: 20, resinKitId: kit.id, packerId: w.packer.id, patchLengthMm: 910 })]);
+    await postAll(waiting, [
+      body('conditions_recorded', 13, {
+        mixTempC: 20,
+        pipeTempC: 20,
+        resinKitId: kit.id,
+        packerId: w.packer.id,
+        patchLengthMm: 910,
+      }),
+    ]);
     expect((await compare(waiting)).stored.kindsNow).not.toContain('expired-resin');
     await kit.update({ expiresOn: '2021-06-30' });
     const expired = await compare(waiting);
@@ -188,12 +229,22 @@ describe('the derived state on the install row', () => {
     }
     const before = await Promise.all(ids.map((id) => compare(id)));
     // As a seed leaves them: nothing derived.
-    await Install.update({ derivedAt: null, derivedFold: null, flagKinds: [], worstSeverity: null, step: 'safety', eventCount: 0 }, { where: { id: ids } });
+    await Install.update(
+      { derivedAt: null, derivedFold: null, flagKinds: [], worstSeverity: null, step: 'safety', eventCount: 0 },
+      { where: { id: ids } },
+    );
     await ensureDerived(w.office, settingsOf(w.company.get({ plain: true })));
     for (const [i, id] of ids.entries()) expect((await compare(id)).stored).toEqual(before[i].stored);
 
     await Install.update({ derivedAt: null }, { where: { id: ids } });
-    const office = { id: w.office.id, companyId: w.company.id, role: 'office' as const, name: w.office.name, email: w.office.email, crewIds: [] };
+    const office = {
+      id: w.office.id,
+      companyId: w.company.id,
+      role: 'office' as const,
+      name: w.office.name,
+      email: w.office.email,
+      crewIds: [],
+    };
     const page = await listInstalls(office, installListQuerySchema.parse({ sort: 'severity', pageSize: '100' }));
     expect(await Install.count({ where: { companyId: w.company.id, derivedAt: null } })).toBe(0);
     const ranks = page.items.map((item) => worstRank(item.flags));
@@ -213,7 +264,10 @@ describe('the cost of a tap', () => {
     const spy = vi.spyOn(sequelize, 'query').mockImplementation((async (...args: unknown[]) => {
       const result = await original(...args);
       const rows = Array.isArray(result) ? (Array.isArray(result[0]) ? result[0].length : result.length) : 0;
-      queries.push({ sql: String(typeof args[0] === 'string' ? args[0] : (args[0] as { query?: string })?.query), rows });
+      queries.push({
+        sql: String(typeof args[0] === 'string' ? args[0] : (args[0] as { query?: string })?.query),
+        rows,
+      });
       return result;
     }) as never);
     await fn();
@@ -229,8 +283,14 @@ describe('the cost of a tap', () => {
     const base = T0 + 40 * 60_000;
     await InstallEvent.bulkCreate(
       Array.from({ length: notes }, (_, i) => ({
-        companyId: w.company.id, installId: id, clientEventId: randomUUID(), type: 'note' as const, deviceTime: new Date(base + i * 1000),
-        receivedAt: new Date(), userId: w.foreman.id, payload: { text: `reading ${i}` },
+        companyId: w.company.id,
+        installId: id,
+        clientEventId: randomUUID(),
+        type: 'note' as const,
+        deviceTime: new Date(base + i * 1000),
+        receivedAt: new Date(),
+        userId: w.foreman.id,
+        payload: { text: `reading ${i}` },
       })),
     );
     // The bulk insert went around the tap: derive the row again, as for a seeded one.
@@ -244,7 +304,8 @@ describe('the cost of a tap', () => {
     const long = await installWithLog(990);
     expect((await Install.findByPk(long))!.eventCount).toBe(1000);
     const tapAt = (min: number) => body('pressure_reading', min, { pressureKpa: 101 });
-    const cost = async (id: string, min: number) => measured(async () => expect((await postEvent(id, tapAt(min))).status).toBe(201));
+    const cost = async (id: string, min: number) =>
+      measured(async () => expect((await postEvent(id, tapAt(min))).status).toBe(201));
 
     const [a, b] = [await cost(short, 60), await cost(long, 60)];
     const shape = (qs: typeof a) => qs.map((q) => q.rows);
@@ -259,7 +320,19 @@ describe('the cost of a tap', () => {
     // A correction may read the log (corrections are rare) and still leaves the row right.
     const inflate = await InstallEvent.findOne({ where: { installId: long, type: 'bladder_inflated' } });
     const fix = await measured(async () =>
-      expect((await postEvent(long, body('correction', 61, { reason: 'Gauge misread', payload: { pressureKpa: 190 } }, { correctsEventId: inflate!.id }))).status).toBe(201),
+      expect(
+        (
+          await postEvent(
+            long,
+            body(
+              'correction',
+              61,
+              { reason: 'Gauge misread', payload: { pressureKpa: 190 } },
+              { correctsEventId: inflate!.id },
+            ),
+          )
+        ).status,
+      ).toBe(201),
     );
     expect(Math.max(...fix.map((q) => q.rows))).toBeGreaterThanOrEqual(1000);
     await expectStoredMatchesLog(long, 'long log after a correction');

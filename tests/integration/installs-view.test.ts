@@ -22,8 +22,17 @@ describe('GET /api/installs/:id', () => {
     expect(body.state.step).toBe('safety');
     expect(body.plan).toBeNull();
     expect(body.flags).toEqual([]);
-    expect(body.repair).toMatchObject({ id: w.repair.id, segment: { id: w.segment.id, insideDiameterMm: 200 }, accessPoint: { id: w.accessPoints[0].id } });
-    expect(body.job).toEqual({ id: w.job.id, number: w.job.number, title: null, site: { addressLine: '1 Test Street', city: 'Testville' } });
+    expect(body.repair).toMatchObject({
+      id: w.repair.id,
+      segment: { id: w.segment.id, insideDiameterMm: 200 },
+      accessPoint: { id: w.accessPoints[0].id },
+    });
+    expect(body.job).toEqual({
+      id: w.job.id,
+      number: w.job.number,
+      title: null,
+      site: { addressLine: '1 Test Street', city: 'Testville' },
+    });
     expect(body.resinSystem).toBeNull();
     expect(body.options.checklist).toEqual({ id: w.checklist.id, name: 'Before the pull', items: w.checklist.items });
     const kits = Object.fromEntries(body.options.resinKits.map((k: { id: string; expired: boolean }) => [k.id, k]));
@@ -31,8 +40,16 @@ describe('GET /api/installs/:id', () => {
     expect(kits[w.expiredKit.id]).toMatchObject({ expired: true });
     // 300 mm defect + 2 × 305 mm (the company's default overlap) = 910 mm.
     expect(body.options.patchLengthMm).toBe(910);
-    expect(body.options.packers).toEqual([expect.objectContaining({ id: w.packer.id, fits: true, endMarginEachMm: 145 })]);
-    expect(body.company).toEqual({ unitSystem: 'imperial', timeZone: 'America/Denver', workingWindowSafetyMargin: 0.2, holdReserve: 0.1, minOverlapPerEndMm: 305 });
+    expect(body.options.packers).toEqual([
+      expect.objectContaining({ id: w.packer.id, fits: true, endMarginEachMm: 145 }),
+    ]);
+    expect(body.company).toEqual({
+      unitSystem: 'imperial',
+      timeZone: 'America/Denver',
+      workingWindowSafetyMargin: 0.2,
+      holdReserve: 0.1,
+      minOverlapPerEndMm: 305,
+    });
     expect(Date.parse(body.serverTime)).toBeGreaterThan(Date.now() - 60_000);
   });
 
@@ -60,7 +77,13 @@ describe('GET /api/installs/:id', () => {
     expect(status).toBe(200);
     expect(body.state.step).toBe('done');
     // Deflate after the 90 min hold plus the company's default 10 % hold reserve: 99 min after the inflate.
-    expect(body.plan).toMatchObject({ go: true, preview: false, inflateBy: at(16 + 30), holdMin: 90, deflateAfter: at(32 + 99) });
+    expect(body.plan).toMatchObject({
+      go: true,
+      preview: false,
+      inflateBy: at(16 + 30),
+      holdMin: 90,
+      deflateAfter: at(32 + 99),
+    });
     expect(body.flags).toEqual([]);
     expect(body.events).toHaveLength(taps.length);
     expect(body.events[0]).toMatchObject({ type: 'safety_acknowledged', userName: w.foreman.name });
@@ -69,7 +92,16 @@ describe('GET /api/installs/:id', () => {
   it("flags an inflate after inflate-by ('late-inflate') and a deflate before the hold is up ('early-deflate')", async () => {
     await signInAs(w.foreman);
     const late = await startInstall(w);
-    await postAll(late, cleanInstall(w, { bladder_inflated: 16 + 45, pressure_reading: 70, bladder_deflated: 200, inspection_recorded: 210, signed_off: 215 }));
+    await postAll(
+      late,
+      cleanInstall(w, {
+        bladder_inflated: 16 + 45,
+        pressure_reading: 70,
+        bladder_deflated: 200,
+        inspection_recorded: 210,
+        signed_off: 215,
+      }),
+    );
     expect(kinds((await getInstall(late)).body.flags)).toEqual(['late-inflate']);
     const early = await startInstall(w);
     await postAll(early, cleanInstall(w, { bladder_deflated: 32 + 45, inspection_recorded: 90, signed_off: 95 }));

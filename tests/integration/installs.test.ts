@@ -22,7 +22,12 @@ describe('POST /api/installs', () => {
     const first = await createInstall({ id, repairId: a.repair.id });
     expect(first.status).toBe(201);
     expect(first.body.install).toMatchObject({
-      id, repairId: a.repair.id, jobId: a.job.id, crewId: a.crew.id, status: 'not_started', checklistTemplateId: a.checklist.id,
+      id,
+      repairId: a.repair.id,
+      jobId: a.job.id,
+      crewId: a.crew.id,
+      status: 'not_started',
+      checklistTemplateId: a.checklist.id,
     });
     const again = await createInstall({ id, repairId: a.repair.id });
     expect(again.status).toBe(200);
@@ -34,7 +39,13 @@ describe('POST /api/installs', () => {
     await signInAs(a.office);
     const id = randomUUID();
     const other = await Repair.create({
-      companyId: a.company.id, jobId: a.job.id, segmentId: a.segment.id, distanceMm: 20000, defectType: 'hole', conditionGrade: 3, defectLengthMm: 100,
+      companyId: a.company.id,
+      jobId: a.job.id,
+      segmentId: a.segment.id,
+      distanceMm: 20000,
+      defectType: 'hole',
+      conditionGrade: 3,
+      defectLengthMm: 100,
     });
     expect((await createInstall({ id, repairId: a.repair.id })).status).toBe(201);
     const clash = await createInstall({ id, repairId: other.id });
@@ -71,7 +82,12 @@ describe('POST /api/installs/:id/events', () => {
     const tap = body('safety_acknowledged', 0);
     const first = await postEvent(id, tap);
     expect(first.status).toBe(201);
-    expect(first.body.event).toMatchObject({ installId: id, clientEventId: tap.clientEventId, type: 'safety_acknowledged', userId: a.technician.id });
+    expect(first.body.event).toMatchObject({
+      installId: id,
+      clientEventId: tap.clientEventId,
+      type: 'safety_acknowledged',
+      userId: a.technician.id,
+    });
     const replay = await postEvent(id, tap);
     expect(replay.status).toBe(200);
     expect(replay.body.event).toEqual(first.body.event);
@@ -94,7 +110,10 @@ describe('POST /api/installs/:id/events', () => {
     const id = await startInstall(a);
     const tap = body('resin_mixed', 0);
     await postEvent(id, tap);
-    for (const changed of [{ ...tap, deviceTime: new Date(Date.parse(tap.deviceTime) + 1000).toISOString() }, { ...tap, type: 'note', payload: { text: 'hi' } }]) {
+    for (const changed of [
+      { ...tap, deviceTime: new Date(Date.parse(tap.deviceTime) + 1000).toISOString() },
+      { ...tap, type: 'note', payload: { text: 'hi' } },
+    ]) {
       const clash = await postEvent(id, changed);
       expect(clash.status).toBe(409);
       expect(clash.body.error.message).toBe('That event id was already used for a different event');
@@ -124,10 +143,17 @@ describe('POST /api/installs/:id/events', () => {
     const bad = await postEvent(id, body('bladder_inflated', 10, { pressureKpa: -5 }));
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.body.error.fields)).toEqual(['payload.pressureKpa']);
-    const noType = await postEvent(id, { ...body('note', 10, { text: 'x' }), type: 'coffee_break', deviceTime: 'yesterday' });
+    const noType = await postEvent(id, {
+      ...body('note', 10, { text: 'x' }),
+      type: 'coffee_break',
+      deviceTime: 'yesterday',
+    });
     expect(noType.status).toBe(400);
     expect(Object.keys(noType.body.error.fields)).toEqual(expect.arrayContaining(['type', 'deviceTime']));
-    const orphanCorrection = await postEvent(id, body('correction', 10, { reason: 'typo', deviceTime: new Date().toISOString() }));
+    const orphanCorrection = await postEvent(
+      id,
+      body('correction', 10, { reason: 'typo', deviceTime: new Date().toISOString() }),
+    );
     expect(orphanCorrection.status).toBe(400);
     expect(orphanCorrection.body.error.fields).toHaveProperty('correctsEventId');
     expect(await rows(id)).toBe(1);
@@ -151,16 +177,31 @@ describe('POST /api/installs/:id/events', () => {
   it('refuses an expired resin kit and a kit of another company (422)', async () => {
     await signInAs(a.foreman);
     const id = await startInstall(a);
-    const conditions = { mixTempC: 20, pipeTempC: 20, resinKitId: a.expiredKit.id, packerId: a.packer.id, patchLengthMm: 910 };
+    const conditions = {
+      mixTempC: 20,
+      pipeTempC: 20,
+      resinKitId: a.expiredKit.id,
+      packerId: a.packer.id,
+      patchLengthMm: 910,
+    };
     const expired = await postEvent(id, body('conditions_recorded', 0, conditions));
     expect(expired.status).toBe(422);
-    expect(expired.body.error.message).toBe(`Resin kit lot ${a.expiredKit.lot} expired on 2020-01-31; choose another kit`);
+    expect(expired.body.error.message).toBe(
+      `Resin kit lot ${a.expiredKit.lot} expired on 2020-01-31; choose another kit`,
+    );
     const foreign = await postEvent(id, body('conditions_recorded', 0, { ...conditions, resinKitId: b.resinKit.id }));
     expect(foreign.status).toBe(422);
     expect(foreign.body.error.message).not.toMatch(b.resinKit.lot);
     expect(await rows(id)).toBe(0);
-    expect((await postEvent(id, body('conditions_recorded', 0, { ...conditions, resinKitId: a.resinKit.id }))).status).toBe(201);
-    expect(await Install.findByPk(id)).toMatchObject({ resinKitId: a.resinKit.id, resinSystemId: a.resinSystem.id, packerId: a.packer.id, mixTempC: 20 });
+    expect(
+      (await postEvent(id, body('conditions_recorded', 0, { ...conditions, resinKitId: a.resinKit.id }))).status,
+    ).toBe(201);
+    expect(await Install.findByPk(id)).toMatchObject({
+      resinKitId: a.resinKit.id,
+      resinSystemId: a.resinSystem.id,
+      packerId: a.packer.id,
+      mixTempC: 20,
+    });
   });
 
   it('leaves sign-off and a no-go override to the foreman', async () => {
@@ -168,7 +209,10 @@ describe('POST /api/installs/:id/events', () => {
     const id = await startInstall(a);
     await postAll(id, cleanInstall(a).slice(0, -1));
     await signInAs(a.technician);
-    const override = await postEvent(id, body('go_decision', 150, { go: false, overrideReason: 'Line must be back tonight' }));
+    const override = await postEvent(
+      id,
+      body('go_decision', 150, { go: false, overrideReason: 'Line must be back tonight' }),
+    );
     expect(override.status).toBe(403);
     const signOff = await postEvent(id, body('signed_off', 150, { name: 'A Technician' }));
     expect(signOff.status).toBe(403);
@@ -193,8 +237,13 @@ describe('what an install moves along with it', () => {
     await postAll(id, taps.slice(1));
     const install = await Install.findByPk(id);
     expect(install).toMatchObject({
-      status: 'awaiting_review', dryRunSeconds: 180, patchLengthMm: 910, pipeTempC: 20, inspectionResult: 'pass',
-      inspectionNotes: 'Tight to the wall', signedOffById: w.foreman.id,
+      status: 'awaiting_review',
+      dryRunSeconds: 180,
+      patchLengthMm: 910,
+      pipeTempC: 20,
+      inspectionResult: 'pass',
+      inspectionNotes: 'Tight to the wall',
+      signedOffById: w.foreman.id,
     });
     expect(install?.signedOffAt?.toISOString()).toBe(taps.at(-1)!.deviceTime);
     expect(install?.startedAt?.toISOString()).toBe(taps[0].deviceTime);
@@ -207,7 +256,13 @@ describe('what an install moves along with it', () => {
 
   it('keeps the job in progress while another repair has no install awaiting review', async () => {
     await Repair.create({
-      companyId: w.company.id, jobId: w.job.id, segmentId: w.segment.id, distanceMm: 30000, defectType: 'hole', conditionGrade: 3, defectLengthMm: 100,
+      companyId: w.company.id,
+      jobId: w.job.id,
+      segmentId: w.segment.id,
+      distanceMm: 30000,
+      defectType: 'hole',
+      conditionGrade: 3,
+      defectLengthMm: 100,
     });
     await signInAs(w.foreman);
     const id = await startInstall(w);
@@ -221,7 +276,12 @@ describe('what an install moves along with it', () => {
     const taps = cleanInstall(w).slice(0, 10);
     await postAll(id, taps);
     const inflated = await InstallEvent.findOne({ where: { clientEventId: taps[9].clientEventId } });
-    const fix = body('correction', 40, { reason: 'Tapped late', deviceTime: taps[8].deviceTime, payload: { pressureKpa: 110 } }, { correctsEventId: taps[9].clientEventId });
+    const fix = body(
+      'correction',
+      40,
+      { reason: 'Tapped late', deviceTime: taps[8].deviceTime, payload: { pressureKpa: 110 } },
+      { correctsEventId: taps[9].clientEventId },
+    );
     const fixed = await postEvent(id, fix);
     expect(fixed.status).toBe(201);
     expect(fixed.body.event.correctsEventId).toBe(inflated!.id);
@@ -231,12 +291,21 @@ describe('what an install moves along with it', () => {
     expect(view.body.state.inflatePressureKpa).toBe(110);
     const audit = await AuditEntry.findOne({ where: { entityId: inflated!.id, action: 'install_event.corrected' } });
     expect(audit).toMatchObject({ reason: 'Tapped late', userId: w.foreman.id });
-    const backwards = await postEvent(id, body('correction', 41, { reason: 'Oops', deviceTime: taps[0].deviceTime }, { correctsEventId: inflated!.id }));
+    const backwards = await postEvent(
+      id,
+      body('correction', 41, { reason: 'Oops', deviceTime: taps[0].deviceTime }, { correctsEventId: inflated!.id }),
+    );
     expect(backwards.status).toBe(422);
-    const badValue = await postEvent(id, body('correction', 41, { reason: 'Oops', payload: { pressureKpa: 'high' } }, { correctsEventId: inflated!.id }));
+    const badValue = await postEvent(
+      id,
+      body('correction', 41, { reason: 'Oops', payload: { pressureKpa: 'high' } }, { correctsEventId: inflated!.id }),
+    );
     expect(badValue.status).toBe(400);
     expect(badValue.body.error.fields).toHaveProperty(['payload.payload.pressureKpa']);
-    const elsewhere = await postEvent(id, body('correction', 41, { reason: 'Oops', deviceTime: taps[0].deviceTime }, { correctsEventId: randomUUID() }));
+    const elsewhere = await postEvent(
+      id,
+      body('correction', 41, { reason: 'Oops', deviceTime: taps[0].deviceTime }, { correctsEventId: randomUUID() }),
+    );
     expect(elsewhere.status).toBe(422);
   });
 });

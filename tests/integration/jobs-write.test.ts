@@ -8,7 +8,8 @@ import { signInAs, signOut } from './helpers/session';
 import { call, jsonBody } from './helpers/call';
 
 // The year a job made now is numbered in: the company's (America/Denver, see makeWorld) calendar year.
-const yearNow = () => new Intl.DateTimeFormat('en-CA', { timeZone: 'America/Denver', year: 'numeric' }).format(new Date());
+const yearNow = () =>
+  new Intl.DateTimeFormat('en-CA', { timeZone: 'America/Denver', year: 'numeric' }).format(new Date());
 const serial = (number: string) => Number(number.split('-')[1]);
 
 /** A world whose own job is not numbered like the year's jobs, so the numbering starts where the test says. */
@@ -32,7 +33,12 @@ describe('jobs API: create, edit, archive, numbering', () => {
   beforeEach(() => signOut());
 
   const jobCount = (w: World) => Job.count({ where: { companyId: w.company.id } });
-  const base = (w: World, extra: Record<string, unknown> = {}) => ({ customerId: w.customer.id, siteId: w.site.id, title: 'Fix the main', ...extra });
+  const base = (w: World, extra: Record<string, unknown> = {}) => ({
+    customerId: w.customer.id,
+    siteId: w.site.id,
+    title: 'Fix the main',
+    ...extra,
+  });
 
   it('answers 401 without a session on every write', async () => {
     expect((await create(base(a))).status).toBe(401);
@@ -45,7 +51,13 @@ describe('jobs API: create, edit, archive, numbering', () => {
     const before = await jobCount(a);
     const bad = await create({ customerId: 'nope', siteId: '', title: '', scheduledDate: '2026-13-45', crewId: 'x' });
     expect(bad.status).toBe(400);
-    expect(Object.keys(bad.body.error.fields).sort()).toEqual(['crewId', 'customerId', 'scheduledDate', 'siteId', 'title']);
+    expect(Object.keys(bad.body.error.fields).sort()).toEqual([
+      'crewId',
+      'customerId',
+      'scheduledDate',
+      'siteId',
+      'title',
+    ]);
     expect((await call(createRoute, '/api/jobs', {}, jsonBody('POST', '{"title":'))).status).toBe(400);
     expect((await call(createRoute, '/api/jobs', {}, { method: 'POST' })).status).toBe(400);
     expect(await jobCount(a)).toBe(before);
@@ -55,7 +67,13 @@ describe('jobs API: create, edit, archive, numbering', () => {
     await signInAs(a.office);
     const draft = await create(base(a, { notes: 'Roots at 12 m' }));
     expect(draft.status).toBe(201);
-    expect(draft.body).toMatchObject({ status: 'draft', companyId: a.company.id, crewId: null, scheduledDate: null, notes: 'Roots at 12 m' });
+    expect(draft.body).toMatchObject({
+      status: 'draft',
+      companyId: a.company.id,
+      crewId: null,
+      scheduledDate: null,
+      notes: 'Roots at 12 m',
+    });
     expect(draft.body.number).toMatch(new RegExp(`^${yearNow()}-\\d{4,}$`));
     const audit = await AuditEntry.findOne({ where: { entityId: draft.body.id, action: 'create' } });
     expect(audit).toMatchObject({ entityType: 'job', userId: a.office.id });
@@ -92,16 +110,22 @@ describe('jobs API: create, edit, archive, numbering', () => {
     const serials = answers.map((r) => serial(r.body.number)).sort((x, y) => x - y);
     expect(new Set(serials).size).toBe(10);
     expect(serials[9] - serials[0]).toBe(9);
-    const [row] = await sequelize.query<{ last_number: number }>('SELECT last_number FROM job_number_sequences WHERE company_id = :id', {
-      replacements: { id: w.company.id }, type: 'SELECT' as never,
-    });
+    const [row] = await sequelize.query<{ last_number: number }>(
+      'SELECT last_number FROM job_number_sequences WHERE company_id = :id',
+      {
+        replacements: { id: w.company.id },
+        type: 'SELECT' as never,
+      },
+    );
     expect(row.last_number).toBe(serials[9]);
   });
 
   it('continues a seeded sequence and never reuses a number, even of a deleted or archived job', async () => {
     const w = await numberedWorld('Seq');
     const year = Number(yearNow());
-    await sequelize.query('INSERT INTO job_number_sequences (company_id, year, last_number) VALUES (:id, :year, 15)', { replacements: { id: w.company.id, year } });
+    await sequelize.query('INSERT INTO job_number_sequences (company_id, year, last_number) VALUES (:id, :year, 15)', {
+      replacements: { id: w.company.id, year },
+    });
     await signInAs(w.office);
     const first = await create(base(w));
     expect(first.body.number).toBe(`${year}-0016`);
@@ -149,7 +173,10 @@ describe('jobs API: create, edit, archive, numbering', () => {
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ title: 'Main line, two fractures', notes: 'Gate code 1234', status: 'draft' });
     const audit = await AuditEntry.findOne({ where: { entityId: job.id, action: 'update' } });
-    expect(audit?.changes).toEqual({ title: { from: 'Fix the main', to: 'Main line, two fractures' }, notes: { from: null, to: 'Gate code 1234' } });
+    expect(audit?.changes).toEqual({
+      title: { from: 'Fix the main', to: 'Main line, two fractures' },
+      notes: { from: null, to: 'Gate code 1234' },
+    });
     const bad = await patch(job.id, { number: '1999-0001', companyId: b.company.id });
     expect(bad.status).toBe(400);
     expect((await Job.findByPk(job.id))?.number).toBe(job.number);
@@ -159,10 +186,19 @@ describe('jobs API: create, edit, archive, numbering', () => {
     await signInAs(a.office);
     const job = (await create(base(a))).body;
     const customer = await Customer.create({ companyId: a.company.id, name: 'Moved to' });
-    const site = await Site.create({ companyId: a.company.id, customerId: customer.id, name: 'New site', addressLine: '2 Other Road', city: 'Testville' });
+    const site = await Site.create({
+      companyId: a.company.id,
+      customerId: customer.id,
+      name: 'New site',
+      addressLine: '2 Other Road',
+      city: 'Testville',
+    });
     const mismatch = await patch(job.id, { customerId: customer.id });
     expect(mismatch.status).toBe(422);
-    expect((await patch(job.id, { customerId: customer.id, siteId: site.id })).body).toMatchObject({ customerId: customer.id, siteId: site.id });
+    expect((await patch(job.id, { customerId: customer.id, siteId: site.id })).body).toMatchObject({
+      customerId: customer.id,
+      siteId: site.id,
+    });
     expect((await patch(a.job.id, { customerId: customer.id, siteId: site.id })).status).toBe(409);
     expect((await Job.findByPk(a.job.id))?.siteId).toBe(a.site.id);
   });
@@ -173,8 +209,14 @@ describe('jobs API: create, edit, archive, numbering', () => {
     expect((await patch(job.id, { crewId: a.crew.id })).body.status).toBe('draft');
     expect((await patch(job.id, { scheduledDate: '2026-12-09' })).body.status).toBe('scheduled');
     expect((await patch(job.id, { crewId: null })).body).toMatchObject({ status: 'draft', crewId: null });
-    const audit = await AuditEntry.findAll({ where: { entityId: job.id, action: 'update' }, order: [['createdAt', 'ASC']] });
-    expect(audit.at(-1)?.changes).toEqual({ crewId: { from: a.crew.id, to: null }, status: { from: 'scheduled', to: 'draft' } });
+    const audit = await AuditEntry.findAll({
+      where: { entityId: job.id, action: 'update' },
+      order: [['createdAt', 'ASC']],
+    });
+    expect(audit.at(-1)?.changes).toEqual({
+      crewId: { from: a.crew.id, to: null },
+      status: { from: 'scheduled', to: 'draft' },
+    });
   });
 
   it('makes only the office’s sensible status moves: 409 for the others, 422 to schedule without crew and day', async () => {
@@ -188,10 +230,24 @@ describe('jobs API: create, edit, archive, numbering', () => {
     expect((await patch(job.id, { status: 'closed' })).status).toBe(409);
     expect((await patch(job.id, { status: 'draft' })).body.status).toBe('draft');
 
-    const running = await Job.create({ companyId: a.company.id, number: 'T-RUN', customerId: a.customer.id, siteId: a.site.id, status: 'in_progress', crewId: a.crew.id, scheduledDate: '2026-12-01' });
+    const running = await Job.create({
+      companyId: a.company.id,
+      number: 'T-RUN',
+      customerId: a.customer.id,
+      siteId: a.site.id,
+      status: 'in_progress',
+      crewId: a.crew.id,
+      scheduledDate: '2026-12-01',
+    });
     expect((await patch(running.id, { status: 'cancelled' })).status).toBe(409);
     expect((await patch(running.id, { scheduledDate: '2026-12-02' })).status).toBe(409);
-    const approved = await Job.create({ companyId: a.company.id, number: 'T-APP', customerId: a.customer.id, siteId: a.site.id, status: 'approved' });
+    const approved = await Job.create({
+      companyId: a.company.id,
+      number: 'T-APP',
+      customerId: a.customer.id,
+      siteId: a.site.id,
+      status: 'approved',
+    });
     expect((await patch(approved.id, { status: 'closed' })).body.status).toBe('closed');
     expect((await patch('00000000-0000-4000-8000-000000000000', { status: 'closed' })).status).toBe(404);
     expect((await Job.findByPk(running.id))?.status).toBe('in_progress');
@@ -220,8 +276,22 @@ describe('jobs list: the common list contract', () => {
   let w: World;
   beforeAll(async () => {
     w = await makeWorld('List');
-    const row = (number: string, status: 'draft' | 'scheduled' | 'closed', scheduledDate: string | null, title: string, crewId: string | null = null) =>
-      ({ companyId: w.company.id, customerId: w.customer.id, siteId: w.site.id, number, status, scheduledDate, title, crewId });
+    const row = (
+      number: string,
+      status: 'draft' | 'scheduled' | 'closed',
+      scheduledDate: string | null,
+      title: string,
+      crewId: string | null = null,
+    ) => ({
+      companyId: w.company.id,
+      customerId: w.customer.id,
+      siteId: w.site.id,
+      number,
+      status,
+      scheduledDate,
+      title,
+      crewId,
+    });
     await Job.bulkCreate([
       row('2026-0101', 'draft', null, 'Lateral roots'),
       row('2026-0102', 'scheduled', '2026-12-05', 'Cracked main', w.otherCrew.id),
@@ -268,7 +338,10 @@ describe('jobs list: the common list contract', () => {
     await signInAs(w.office);
     const { status, body } = await call(listRoute, '/api/jobs?format=csv&status=scheduled&pageSize=1&sort=number');
     expect(status).toBe(200);
-    const lines = String(body).replace(/^\uFEFF/, '').trim().split('\r\n');
+    const lines = String(body)
+      .replace(/^\uFEFF/, '')
+      .trim()
+      .split('\r\n');
     expect(lines[0]).toBe('Number,Title,Customer,Site,City,Status,Scheduled,Crew,Archived');
     expect(lines.slice(1).map((line) => line.split(',')[0])).toEqual(['2026-0102', '2026-0103', '2026-0199']);
   });

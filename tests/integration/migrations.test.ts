@@ -33,7 +33,8 @@ async function tables(): Promise<string[]> {
   }
 }
 
-const cli = (...args: string[]) => run('node_modules/.bin/sequelize-cli', args, { env: { ...process.env, DATABASE_URL: scratchUrl } });
+const cli = (...args: string[]) =>
+  run('node_modules/.bin/sequelize-cli', args, { env: { ...process.env, DATABASE_URL: scratchUrl } });
 
 describe('migrations', () => {
   beforeAll(async () => {
@@ -47,10 +48,29 @@ describe('migrations', () => {
   it('go all the way up, all the way down, and up again', async () => {
     await cli('db:migrate');
     const up = await tables();
-    expect(up).toEqual(expect.arrayContaining([
-      'companies', 'users', 'crews', 'crew_members', 'customers', 'sites', 'access_points', 'segments', 'jobs', 'repairs',
-      'resin_systems', 'resin_kits', 'packers', 'checklist_templates', 'installs', 'install_events', 'attachments', 'reviews', 'audit_entries',
-    ]));
+    expect(up).toEqual(
+      expect.arrayContaining([
+        'companies',
+        'users',
+        'crews',
+        'crew_members',
+        'customers',
+        'sites',
+        'access_points',
+        'segments',
+        'jobs',
+        'repairs',
+        'resin_systems',
+        'resin_kits',
+        'packers',
+        'checklist_templates',
+        'installs',
+        'install_events',
+        'attachments',
+        'reviews',
+        'audit_entries',
+      ]),
+    );
     await cli('db:migrate:undo:all');
     expect(await tables()).toEqual([]);
     await cli('db:migrate');

@@ -6,7 +6,15 @@ describe('models', () => {
   it('read NUMERIC columns back as numbers, nested includes too', async () => {
     const w = await makeWorld('Delta');
     await ResinSystem.create({
-      companyId: w.company.id, name: 'R', refTempC: 20.5, potLifeMin: 40, holdMin: 90, fullCureMin: 240, minTempC: 5, maxTempC: 35, doublingC: 10,
+      companyId: w.company.id,
+      name: 'R',
+      refTempC: 20.5,
+      potLifeMin: 40,
+      holdMin: 90,
+      fullCureMin: 240,
+      minTempC: 5,
+      maxTempC: 35,
+      doublingC: 10,
     });
     const resin = await ResinSystem.findOne({ where: { companyId: w.company.id } });
     expect(resin!.refTempC).toBe(20.5);
@@ -19,7 +27,14 @@ describe('models', () => {
   it('store timestamps as timestamptz in UTC', async () => {
     const w = await makeWorld('Epsilon');
     const packer = await Packer.create({
-      companyId: w.company.id, name: 'P', minDiameterMm: 140, maxDiameterMm: 165, bladderLengthMm: 1200, endMarginMm: 100, minPressureKpa: 70, maxPressureKpa: 200,
+      companyId: w.company.id,
+      name: 'P',
+      minDiameterMm: 140,
+      maxDiameterMm: 165,
+      bladderLengthMm: 1200,
+      endMarginMm: 100,
+      minPressureKpa: 70,
+      maxPressureKpa: 200,
     });
     const [[row]] = (await Packer.sequelize!.query(
       `SELECT pg_typeof(created_at)::text AS type FROM packers WHERE id = :id`,

@@ -7,7 +7,16 @@ import { signInAs, signOut } from './helpers/session';
 import { call, jsonBody } from './helpers/call';
 
 // Example ratings, not any maker's.
-const good = { name: 'Packer 150', serial: 'SN-1', minDiameterMm: 100, maxDiameterMm: 160, bladderLengthMm: 1000, endMarginMm: 100, minPressureKpa: 60, maxPressureKpa: 200 };
+const good = {
+  name: 'Packer 150',
+  serial: 'SN-1',
+  minDiameterMm: 100,
+  maxDiameterMm: 160,
+  bladderLengthMm: 1000,
+  endMarginMm: 100,
+  minPressureKpa: 60,
+  maxPressureKpa: 200,
+};
 
 describe('packers API', () => {
   let a: InstallWorld;
@@ -32,7 +41,11 @@ describe('packers API', () => {
       expect(page.body.items.map((p: { name: string }) => p.name)).toEqual(['Small', a.packer.name]);
     }
     expect((await call(listRoute, '/api/packers?sort=-maxDiameterMm&pageSize=1')).body.items[0].name).toBe('Large');
-    expect((await call(listRoute, '/api/packers?sort=name&page=2&pageSize=2')).body.items.map((p: { name: string }) => p.name)).toEqual(['Small']);
+    expect(
+      (await call(listRoute, '/api/packers?sort=name&page=2&pageSize=2')).body.items.map(
+        (p: { name: string }) => p.name,
+      ),
+    ).toEqual(['Small']);
     expect((await call(listRoute, '/api/packers?q=larg')).body.total).toBe(1);
     expect((await call(listRoute, '/api/packers?pageSize=500')).status).toBe(400);
   });
@@ -40,10 +53,32 @@ describe('packers API', () => {
   it('creates with an audit entry; bad input and crossed ranges are a 400 with field messages and nothing written', async () => {
     await signInAs(a.admin);
     const before = await count();
-    const bad = await call(createRoute, '/x', {}, jsonBody('POST', { ...good, name: '', minDiameterMm: 0, bladderLengthMm: 'long', maxPressureKpa: 5000 }));
+    const bad = await call(
+      createRoute,
+      '/x',
+      {},
+      jsonBody('POST', { ...good, name: '', minDiameterMm: 0, bladderLengthMm: 'long', maxPressureKpa: 5000 }),
+    );
     expect(bad.status).toBe(400);
-    expect(Object.keys(bad.body.error.fields).sort()).toEqual(['bladderLengthMm', 'maxPressureKpa', 'minDiameterMm', 'name']);
-    const crossed = await call(createRoute, '/x', {}, jsonBody('POST', { ...good, minDiameterMm: 200, maxDiameterMm: 150, minPressureKpa: 200, maxPressureKpa: 200, endMarginMm: 500 }));
+    expect(Object.keys(bad.body.error.fields).sort()).toEqual([
+      'bladderLengthMm',
+      'maxPressureKpa',
+      'minDiameterMm',
+      'name',
+    ]);
+    const crossed = await call(
+      createRoute,
+      '/x',
+      {},
+      jsonBody('POST', {
+        ...good,
+        minDiameterMm: 200,
+        maxDiameterMm: 150,
+        minPressureKpa: 200,
+        maxPressureKpa: 200,
+        endMarginMm: 500,
+      }),
+    );
     expect(crossed.body.error.fields).toEqual({
       maxDiameterMm: ['The largest pipe must be larger than the smallest'],
       endMarginMm: ['Twice the end margin must be shorter than the bladder, or no patch fits'],
@@ -53,7 +88,11 @@ describe('packers API', () => {
     const made = await call(createRoute, '/x', {}, jsonBody('POST', { ...good, minPressureKpa: 103.42 }));
     expect(made.status).toBe(201);
     expect(made.body).toMatchObject({ name: 'Packer 150', minPressureKpa: 103.4, companyId: a.company.id });
-    expect(await AuditEntry.findOne({ where: { entityId: made.body.id } })).toMatchObject({ action: 'create', entityType: 'packer', userId: a.admin.id });
+    expect(await AuditEntry.findOne({ where: { entityId: made.body.id } })).toMatchObject({
+      action: 'create',
+      entityType: 'packer',
+      userId: a.admin.id,
+    });
   });
 
   it('refuses writes by office and field roles with 403', async () => {
@@ -75,7 +114,9 @@ describe('packers API', () => {
     expect(Object.keys(crossed.body.error.fields)).toEqual(['maxPressureKpa']);
     const ok = await call(patchRoute, '/x', { id: p.id }, jsonBody('PATCH', { maxPressureKpa: 180 }));
     expect(ok.body).toMatchObject({ maxPressureKpa: 180, minPressureKpa: 60 });
-    expect((await AuditEntry.findOne({ where: { entityId: p.id, action: 'update' } }))?.changes).toEqual({ maxPressureKpa: { from: 200, to: 180 } });
+    expect((await AuditEntry.findOne({ where: { entityId: p.id, action: 'update' } }))?.changes).toEqual({
+      maxPressureKpa: { from: 200, to: 180 },
+    });
     expect((await call(patchRoute, '/x', { id: p.id }, jsonBody('PATCH', { archivedAt: null }))).status).toBe(400);
   });
 
@@ -88,11 +129,23 @@ describe('packers API', () => {
   });
 
   it('archives a packer an install used and deletes an unused one', async () => {
-    await Install.create({ companyId: a.company.id, repairId: a.repair.id, jobId: a.job.id, crewId: a.crew.id, packerId: a.packer.id });
+    await Install.create({
+      companyId: a.company.id,
+      repairId: a.repair.id,
+      jobId: a.job.id,
+      crewId: a.crew.id,
+      packerId: a.packer.id,
+    });
     await signInAs(a.admin);
     expect((await call(getRoute, '/x', { id: a.packer.id })).body.installCount).toBe(1);
-    expect((await call(archiveRoute, '/x', { id: a.packer.id }, { method: 'DELETE' })).body).toEqual({ id: a.packer.id, archived: true, deleted: false });
-    expect((await call(listRoute, '/api/packers?archived=only')).body.items.map((p: { id: string }) => p.id)).toEqual([a.packer.id]);
+    expect((await call(archiveRoute, '/x', { id: a.packer.id }, { method: 'DELETE' })).body).toEqual({
+      id: a.packer.id,
+      archived: true,
+      deleted: false,
+    });
+    expect((await call(listRoute, '/api/packers?archived=only')).body.items.map((p: { id: string }) => p.id)).toEqual([
+      a.packer.id,
+    ]);
     const spare = await Packer.create({ ...good, companyId: a.company.id, name: 'Spare' });
     expect((await call(archiveRoute, '/x', { id: spare.id }, { method: 'DELETE' })).body.deleted).toBe(true);
     expect(await Packer.findByPk(spare.id)).toBeNull();

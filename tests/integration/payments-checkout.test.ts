@@ -29,7 +29,13 @@ beforeAll(async () => {
   server = createServer(async (request, response) => {
     const chunks: Buffer[] = [];
     for await (const chunk of request) chunks.push(chunk as Buffer);
-    const answer = await webhookRoute(new Request(`${origin}${request.url}`, { method: 'POST', headers: request.headers as Record<string, string>, body: Buffer.concat(chunks) }));
+    const answer = await webhookRoute(
+      new Request(`${origin}${request.url}`, {
+        method: 'POST',
+        headers: request.headers as Record<string, string>,
+        body: Buffer.concat(chunks),
+      }),
+    );
     const body = await answer.json();
     outcomes.push(body.outcome);
     response.writeHead(answer.status, { 'content-type': 'application/json' });
@@ -44,11 +50,20 @@ afterAll(async () => {
   await new Promise<void>((resolve) => server.close(() => resolve()));
 });
 
-const pay = (token: string) => payRoute(new Request(`${origin}/r/${token}/pay`, { method: 'POST' }), { params: Promise.resolve({ token }) });
+const pay = (token: string) =>
+  payRoute(new Request(`${origin}/r/${token}/pay`, { method: 'POST' }), { params: Promise.resolve({ token }) });
 const sessionOf = (id: string) => stripeClient().checkout.sessions.retrieve(id);
 
 async function issuedInvoice(w: World, totalCents = 12_345) {
-  return Invoice.create({ companyId: w.company.id, jobId: w.job.id, number: `INV-${w.job.number}`, status: 'issued', dueOn: '2026-12-31', subtotalCents: totalCents, totalCents });
+  return Invoice.create({
+    companyId: w.company.id,
+    jobId: w.job.id,
+    number: `INV-${w.job.number}`,
+    status: 'issued',
+    dueOn: '2026-12-31',
+    subtotalCents: totalCents,
+    totalCents,
+  });
 }
 
 describe('"Pay now": one open checkout per invoice', () => {
@@ -101,7 +116,12 @@ describe('"Pay now": one open checkout per invoice', () => {
     await pay(await linkToken(w.job.id, w.company.id));
     const sessionId = (await invoice.reload()).paymentSessionId!;
     await signInAs(w.office);
-    const { status } = await call(invoiceStatusRoute, `/api/invoices/${invoice.id}/status`, { id: invoice.id }, jsonBody('POST', { action: 'void', reason: 'Wrong customer' }));
+    const { status } = await call(
+      invoiceStatusRoute,
+      `/api/invoices/${invoice.id}/status`,
+      { id: invoice.id },
+      jsonBody('POST', { action: 'void', reason: 'Wrong customer' }),
+    );
     expect(status).toBe(200);
     expect((await sessionOf(sessionId)).status).toBe('expired');
   });
@@ -110,7 +130,8 @@ describe('"Pay now": one open checkout per invoice', () => {
     const w = await makeWorld('Back');
     const token = await linkToken(w.job.id, w.company.id);
     const linkId = (verifyReportLink(token) as { linkId: string }).linkId;
-    const back = (id: string, paid?: string) => BackPage({ params: Promise.resolve({ linkId: id }), searchParams: Promise.resolve(paid ? { paid } : {}) });
+    const back = (id: string, paid?: string) =>
+      BackPage({ params: Promise.resolve({ linkId: id }), searchParams: Promise.resolve(paid ? { paid } : {}) });
 
     cookieJar.clear();
     cookieJar.set(RETURN_COOKIE, token);
@@ -132,19 +153,31 @@ describe('a payment that does not match is recorded and shown', () => {
     const url = (await pay(await linkToken(w.job.id, w.company.id))).headers.get('location')!;
     // A checkout made outside the one-open rule (a stale tab, a copied page): the provider's own API.
     const stray = await stripeClient().checkout.sessions.create({
-      mode: 'payment', metadata: { invoiceId: invoice.id, companyId: w.company.id }, success_url: `${origin}/r/back/x?paid=1`,
-      line_items: [{ quantity: 1, price_data: { currency: 'usd', unit_amount: 20_000, product_data: { name: 'Invoice' } } }],
+      mode: 'payment',
+      metadata: { invoiceId: invoice.id, companyId: w.company.id },
+      success_url: `${origin}/r/back/x?paid=1`,
+      line_items: [
+        { quantity: 1, price_data: { currency: 'usd', unit_amount: 20_000, product_data: { name: 'Invoice' } } },
+      ],
     });
     await fetch(url, { method: 'POST', redirect: 'manual' });
-    await eventually(async () => ((await invoice.reload()).status === 'paid' ? true : undefined), 10_000, 'the first payment');
+    await eventually(
+      async () => ((await invoice.reload()).status === 'paid' ? true : undefined),
+      10_000,
+      'the first payment',
+    );
     await fetch(stray.url!, { method: 'POST', redirect: 'manual' });
     await eventually(async () => ((await invoice.reload()).paymentAlert ? true : undefined), 10_000, 'the alert');
 
     expect(invoice).toMatchObject({ status: 'paid', paidCents: 20_000 });
-    expect(invoice.paymentAlert).toBe(`A second payment of $200.00 was received for invoice ${invoice.number}, which was already paid: refund it or settle it with the customer.`);
+    expect(invoice.paymentAlert).toBe(
+      `A second payment of $200.00 was received for invoice ${invoice.number}, which was already paid: refund it or settle it with the customer.`,
+    );
     const events = await PaymentEvent.findAll({ where: { invoiceId: invoice.id }, order: [['createdAt', 'ASC']] });
     expect(events.map((e) => e.problem)).toEqual([null, 'already_paid']);
-    const history = await AuditEntry.findOne({ where: { entityType: 'job', entityId: w.job.id, action: 'payment_mismatch' } });
+    const history = await AuditEntry.findOne({
+      where: { entityType: 'job', entityId: w.job.id, action: 'payment_mismatch' },
+    });
     expect(history?.reason).toBe(invoice.paymentAlert);
     expect(history?.changes).toMatchObject({ problem: 'already_paid', amountCents: 20_000 });
   });
@@ -157,7 +190,9 @@ describe('a payment that does not match is recorded and shown', () => {
       const w = await makeWorld('Wrong');
       const invoice = await issuedInvoice(w, 5_000);
       const session = await stripeClient().checkout.sessions.create({
-        mode: 'payment', metadata: { invoiceId: invoice.id, companyId: w.company.id }, success_url: `${origin}/r/back/x?paid=1`,
+        mode: 'payment',
+        metadata: { invoiceId: invoice.id, companyId: w.company.id },
+        success_url: `${origin}/r/back/x?paid=1`,
         line_items: [{ quantity: 1, price_data: { currency, unit_amount: amount, product_data: { name: 'Invoice' } } }],
       });
       await fetch(session.url!, { method: 'POST', redirect: 'manual' });
@@ -166,7 +201,9 @@ describe('a payment that does not match is recorded and shown', () => {
       expect(invoice.paidAt).toBeNull();
       expect(invoice.paymentAlert).toContain(words);
       expect((await PaymentEvent.findOne({ where: { invoiceId: invoice.id } }))?.problem).toBe(problem);
-      expect(await AuditEntry.count({ where: { entityType: 'job', entityId: w.job.id, action: 'payment_mismatch' } })).toBe(1);
+      expect(
+        await AuditEntry.count({ where: { entityType: 'job', entityId: w.job.id, action: 'payment_mismatch' } }),
+      ).toBe(1);
     }
     expect(outcomes).toContain('mismatch');
   });

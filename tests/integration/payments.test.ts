@@ -20,7 +20,13 @@ beforeAll(async () => {
   server = createServer(async (request, response) => {
     const chunks: Buffer[] = [];
     for await (const chunk of request) chunks.push(chunk as Buffer);
-    const answer = await webhookRoute(new Request(`${origin}${request.url}`, { method: 'POST', headers: request.headers as Record<string, string>, body: Buffer.concat(chunks) }));
+    const answer = await webhookRoute(
+      new Request(`${origin}${request.url}`, {
+        method: 'POST',
+        headers: request.headers as Record<string, string>,
+        body: Buffer.concat(chunks),
+      }),
+    );
     const body = await answer.json();
     received.push({ status: answer.status, body });
     response.writeHead(answer.status, { 'content-type': 'application/json' });
@@ -32,30 +38,76 @@ beforeAll(async () => {
 afterAll(() => new Promise<void>((resolve) => server.close(() => resolve())));
 
 const secret = () => process.env.STRIPE_WEBHOOK_SECRET!;
-const sign = (payload: string, withSecret = secret()) => Stripe.webhooks.generateTestHeaderString({ payload, secret: withSecret });
+const sign = (payload: string, withSecret = secret()) =>
+  Stripe.webhooks.generateTestHeaderString({ payload, secret: withSecret });
 const post = (payload: string, signature?: string) =>
-  webhookRoute(new Request(`${origin}/api/payments/webhook`, { method: 'POST', headers: signature ? { 'stripe-signature': signature } : {}, body: payload }));
+  webhookRoute(
+    new Request(`${origin}/api/payments/webhook`, {
+      method: 'POST',
+      headers: signature ? { 'stripe-signature': signature } : {},
+      body: payload,
+    }),
+  );
 
 describe('online payment of an invoice (payment fake over sockets)', () => {
   let a: World;
   let invoice: Invoice;
   beforeAll(async () => {
     a = await makeWorld('Pay');
-    invoice = await Invoice.create({ companyId: a.company.id, jobId: a.job.id, number: `INV-${a.job.number}`, status: 'issued', dueOn: '2026-12-31', subtotalCents: 200_000, taxCents: 16_500, totalCents: 216_500 });
+    invoice = await Invoice.create({
+      companyId: a.company.id,
+      jobId: a.job.id,
+      number: `INV-${a.job.number}`,
+      status: 'issued',
+      dueOn: '2026-12-31',
+      subtotalCents: 200_000,
+      taxCents: 16_500,
+      totalCents: 216_500,
+    });
   });
 
   it('refuses a draft or unknown invoice before talking to the provider', async () => {
-    const job = await Job.create({ companyId: a.company.id, number: `D-${a.job.number}`.slice(0, 20), customerId: a.customer.id, siteId: a.site.id, status: 'approved' });
-    await Invoice.create({ companyId: a.company.id, jobId: job.id, number: 'INV-DRAFT', dueOn: '2026-12-31', subtotalCents: 100, totalCents: 100 });
+    const job = await Job.create({
+      companyId: a.company.id,
+      number: `D-${a.job.number}`.slice(0, 20),
+      customerId: a.customer.id,
+      siteId: a.site.id,
+      status: 'approved',
+    });
+    await Invoice.create({
+      companyId: a.company.id,
+      jobId: job.id,
+      number: 'INV-DRAFT',
+      dueOn: '2026-12-31',
+      subtotalCents: 100,
+      totalCents: 100,
+    });
     await expect(startCheckout(a.company.id, job.id, `${origin}/r/x`)).rejects.toMatchObject({ status: 404 });
     await expect(startCheckout(a.company.id, randomUUID(), `${origin}/r/x`)).rejects.toMatchObject({ status: 404 });
   });
 
   it('refuses a webhook with a wrong, missing or stale signature and changes nothing', async () => {
-    const payload = JSON.stringify({ id: 'evt_forged', object: 'event', type: 'checkout.session.completed', data: { object: { id: 'cs_x', payment_status: 'paid', amount_total: 216_500, currency: 'usd', metadata: { invoiceId: invoice.id, companyId: a.company.id } } } });
+    const payload = JSON.stringify({
+      id: 'evt_forged',
+      object: 'event',
+      type: 'checkout.session.completed',
+      data: {
+        object: {
+          id: 'cs_x',
+          payment_status: 'paid',
+          amount_total: 216_500,
+          currency: 'usd',
+          metadata: { invoiceId: invoice.id, companyId: a.company.id },
+        },
+      },
+    });
     expect((await post(payload, sign(payload, 'whsec_not_ours'))).status).toBe(400);
     expect((await post(payload)).status).toBe(400);
-    const stale = Stripe.webhooks.generateTestHeaderString({ payload, secret: secret(), timestamp: Math.floor(Date.now() / 1000) - 3600 });
+    const stale = Stripe.webhooks.generateTestHeaderString({
+      payload,
+      secret: secret(),
+      timestamp: Math.floor(Date.now() / 1000) - 3600,
+    });
     expect((await post(payload, stale)).status).toBe(400);
     expect((await post(`${payload} `, sign(payload))).status).toBe(400); // body altered after signing
     expect((await invoice.reload()).status).toBe('issued');
@@ -80,17 +132,67 @@ describe('online payment of an invoice (payment fake over sockets)', () => {
 
   it('a replayed event is acknowledged and changes nothing; a short payment does not mark paid', async () => {
     const event = await PaymentEvent.findOne({ where: { invoiceId: invoice.id } });
-    const session = { id: 'cs_replay', payment_status: 'paid', amount_total: 216_500, currency: 'usd', metadata: { invoiceId: invoice.id, companyId: a.company.id } };
-    const replay = JSON.stringify({ id: event!.providerEventId, object: 'event', type: 'checkout.session.completed', data: { object: session } });
+    const session = {
+      id: 'cs_replay',
+      payment_status: 'paid',
+      amount_total: 216_500,
+      currency: 'usd',
+      metadata: { invoiceId: invoice.id, companyId: a.company.id },
+    };
+    const replay = JSON.stringify({
+      id: event!.providerEventId,
+      object: 'event',
+      type: 'checkout.session.completed',
+      data: { object: session },
+    });
     expect(await (await post(replay, sign(replay))).json()).toEqual({ received: true, outcome: 'duplicate' });
 
-    const job = await Job.create({ companyId: a.company.id, number: `S-${a.job.number}`.slice(0, 20), customerId: a.customer.id, siteId: a.site.id, status: 'approved' });
-    const other = await Invoice.create({ companyId: a.company.id, jobId: job.id, number: 'INV-SHORT', status: 'issued', dueOn: '2026-12-31', subtotalCents: 10_000, taxCents: 0, totalCents: 10_000 });
-    const short = JSON.stringify({ id: `evt_short_${randomUUID()}`, object: 'event', type: 'checkout.session.completed', data: { object: { ...session, id: 'cs_short', amount_total: 1, metadata: { invoiceId: other.id, companyId: a.company.id } } } });
+    const job = await Job.create({
+      companyId: a.company.id,
+      number: `S-${a.job.number}`.slice(0, 20),
+      customerId: a.customer.id,
+      siteId: a.site.id,
+      status: 'approved',
+    });
+    const other = await Invoice.create({
+      companyId: a.company.id,
+      jobId: job.id,
+      number: 'INV-SHORT',
+      status: 'issued',
+      dueOn: '2026-12-31',
+      subtotalCents: 10_000,
+      taxCents: 0,
+      totalCents: 10_000,
+    });
+    const short = JSON.stringify({
+      id: `evt_short_${randomUUID()}`,
+      object: 'event',
+      type: 'checkout.session.completed',
+      data: {
+        object: {
+          ...session,
+          id: 'cs_short',
+          amount_total: 1,
+          metadata: { invoiceId: other.id, companyId: a.company.id },
+        },
+      },
+    });
     expect(await (await post(short, sign(short))).json()).toEqual({ received: true, outcome: 'mismatch' });
     expect((await other.reload()).status).toBe('issued');
     // An event naming another company for the invoice is ignored.
-    const foreign = JSON.stringify({ id: `evt_foreign_${randomUUID()}`, object: 'event', type: 'checkout.session.completed', data: { object: { ...session, id: 'cs_f', amount_total: 10_000, metadata: { invoiceId: other.id, companyId: a.otherCrew.id } } } });
+    const foreign = JSON.stringify({
+      id: `evt_foreign_${randomUUID()}`,
+      object: 'event',
+      type: 'checkout.session.completed',
+      data: {
+        object: {
+          ...session,
+          id: 'cs_f',
+          amount_total: 10_000,
+          metadata: { invoiceId: other.id, companyId: a.otherCrew.id },
+        },
+      },
+    });
     expect(await (await post(foreign, sign(foreign))).json()).toEqual({ received: true, outcome: 'ignored' });
     expect((await other.reload()).status).toBe('issued');
   });
@@ -100,9 +202,20 @@ describe('"Pay now" behind the customer link', () => {
   it('sends a valid link to the hosted checkout, refuses a tampered one, and returns a paid one to the report', async () => {
     const { POST: payRoute } = await import('@/app/r/[token]/pay/route');
     const world = await makeWorld('Link');
-    const invoice = await Invoice.create({ companyId: world.company.id, jobId: world.job.id, number: 'INV-LINK', status: 'issued', dueOn: '2026-12-31', subtotalCents: 5000, totalCents: 5000 });
+    const invoice = await Invoice.create({
+      companyId: world.company.id,
+      jobId: world.job.id,
+      number: 'INV-LINK',
+      status: 'issued',
+      dueOn: '2026-12-31',
+      subtotalCents: 5000,
+      totalCents: 5000,
+    });
     const token = await linkToken(world.job.id, world.company.id);
-    const pay = (t: string) => payRoute(new Request(`http://localhost/r/${t}/pay`, { method: 'POST' }), { params: Promise.resolve({ token: t }) });
+    const pay = (t: string) =>
+      payRoute(new Request(`http://localhost/r/${t}/pay`, { method: 'POST' }), {
+        params: Promise.resolve({ token: t }),
+      });
 
     const ok = await pay(token);
     expect(ok.status).toBe(303);

@@ -45,7 +45,8 @@ describe('sign-in attempt counting (PostgreSQL store)', () => {
 
   it('locks an address at its 100th failure within the hour, whatever the e-mails', async () => {
     const ip = randomIp();
-    for (let i = 1; i < LIMITS.signInIp.points; i += 1) expect(await recordSignInFailure(i % 2 ? email() : null, ip)).toBeNull();
+    for (let i = 1; i < LIMITS.signInIp.points; i += 1)
+      expect(await recordSignInFailure(i % 2 ? email() : null, ip)).toBeNull();
     const lock = await recordSignInFailure(email(), ip);
     expect(lock).toBeGreaterThan(LIMITS.signInIp.duration - 60);
     expect(await signInLockedFor(email(), ip)).toBeGreaterThan(0);
@@ -64,9 +65,19 @@ describe('the body of a JSON route', () => {
 
   it('answers 415 to JSON sent as text/plain (what a cross-site form can send) and writes nothing', async () => {
     const before = await count();
-    const answer = await call(createCustomerRoute, '/api/customers', {}, { method: 'POST', headers: { 'content-type': 'text/plain' }, body: JSON.stringify(customer) });
+    const answer = await call(
+      createCustomerRoute,
+      '/api/customers',
+      {},
+      { method: 'POST', headers: { 'content-type': 'text/plain' }, body: JSON.stringify(customer) },
+    );
     expect(answer).toEqual({ status: 415, body: { error: { message: 'Send the body as application/json.' } } });
-    const form = await call(createCustomerRoute, '/api/customers', {}, { method: 'POST', headers: { 'content-type': 'application/x-www-form-urlencoded' }, body: 'name=x' });
+    const form = await call(
+      createCustomerRoute,
+      '/api/customers',
+      {},
+      { method: 'POST', headers: { 'content-type': 'application/x-www-form-urlencoded' }, body: 'name=x' },
+    );
     expect(form.status).toBe(415);
     expect(await count()).toBe(before);
   });
@@ -74,7 +85,16 @@ describe('the body of a JSON route', () => {
   it('answers 413 to a 2 MB body, declared or chunked, and writes nothing', async () => {
     const before = await count();
     const big = JSON.stringify({ ...customer, notes: 'x'.repeat(2 * 1024 * 1024) });
-    const declared = await call(createCustomerRoute, '/api/customers', {}, { method: 'POST', headers: { 'content-type': 'application/json', 'content-length': String(big.length) }, body: big });
+    const declared = await call(
+      createCustomerRoute,
+      '/api/customers',
+      {},
+      {
+        method: 'POST',
+        headers: { 'content-type': 'application/json', 'content-length': String(big.length) },
+        body: big,
+      },
+    );
     expect(declared.status).toBe(413);
     // A stream has no Content-Length: the reader counts the bytes and stops at the limit.
     const chunks = [big.slice(0, 700_000), big.slice(700_000, 1_400_000), big.slice(1_400_000)];
@@ -85,7 +105,12 @@ describe('the body of a JSON route', () => {
         else controller.enqueue(new TextEncoder().encode(next));
       },
     });
-    const chunked = await call(createCustomerRoute, '/api/customers', {}, { method: 'POST', headers: { 'content-type': 'application/json' }, body: stream, duplex: 'half' } as RequestInit);
+    const chunked = await call(createCustomerRoute, '/api/customers', {}, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json' },
+      body: stream,
+      duplex: 'half',
+    } as RequestInit);
     expect(chunked).toEqual({ status: 413, body: { error: { message: 'The request body is larger than 1024 KB.' } } });
     expect(await count()).toBe(before);
   });
@@ -98,22 +123,36 @@ describe('the body of a JSON route', () => {
 });
 
 describe('proxy.ts', () => {
-  const request = (path: string, init: { method?: string; headers?: Record<string, string>; body?: string } = {}) => new NextRequest(`${APP}${path}`, init);
+  const request = (path: string, init: { method?: string; headers?: Record<string, string>; body?: string } = {}) =>
+    new NextRequest(`${APP}${path}`, init);
   const passedOn = (response: Response) => response.headers.get('x-middleware-next') === '1';
 
   it('refuses a cross-site write to the API before any route runs', async () => {
-    const foreign = await proxy(request('/api/customers', { method: 'POST', headers: { origin: 'https://evil.example', 'content-type': 'application/json' }, body: '{}' }));
+    const foreign = await proxy(
+      request('/api/customers', {
+        method: 'POST',
+        headers: { origin: 'https://evil.example', 'content-type': 'application/json' },
+        body: '{}',
+      }),
+    );
     expect(foreign.status).toBe(403);
     expect(passedOn(foreign)).toBe(false);
-    expect(await foreign.json()).toEqual({ error: { message: 'This request came from another site and was refused.' } });
-    expect((await proxy(request('/api/customers/x', { method: 'DELETE', headers: { 'sec-fetch-site': 'cross-site' } }))).status).toBe(403);
+    expect(await foreign.json()).toEqual({
+      error: { message: 'This request came from another site and was refused.' },
+    });
+    expect(
+      (await proxy(request('/api/customers/x', { method: 'DELETE', headers: { 'sec-fetch-site': 'cross-site' } })))
+        .status,
+    ).toBe(403);
     expect(passedOn(await proxy(request('/api/customers', { method: 'POST', headers: { origin: APP } })))).toBe(true);
     expect(passedOn(await proxy(request('/api/customers', { method: 'POST' })))).toBe(true);
   });
 
   it('refuses a declared body over 1 MB with 413, the webhook included', async () => {
     for (const path of ['/api/customers', '/api/payments/webhook', '/api/auth/callback/credentials']) {
-      const answer = await proxy(request(path, { method: 'POST', headers: { 'content-length': String(2 * 1024 * 1024) } }));
+      const answer = await proxy(
+        request(path, { method: 'POST', headers: { 'content-length': String(2 * 1024 * 1024) } }),
+      );
       expect(answer.status).toBe(413);
       expect(passedOn(answer)).toBe(false);
     }
@@ -169,16 +208,30 @@ describe('proxy.ts', () => {
 describe('mail transport', () => {
   it('insists on TLS unless SMTP_TLS=off (implicit TLS on port 465)', () => {
     const e = env();
-    expect(transportOptions({ ...e, SMTP_TLS: 'on', SMTP_PORT: 587 })).toMatchObject({ requireTLS: true, ignoreTLS: false, secure: false });
+    expect(transportOptions({ ...e, SMTP_TLS: 'on', SMTP_PORT: 587 })).toMatchObject({
+      requireTLS: true,
+      ignoreTLS: false,
+      secure: false,
+    });
     expect(transportOptions({ ...e, SMTP_TLS: 'on', SMTP_PORT: 465 })).toMatchObject({ secure: true });
-    expect(transportOptions({ ...e, SMTP_TLS: 'off' })).toMatchObject({ requireTLS: false, ignoreTLS: true, secure: false });
+    expect(transportOptions({ ...e, SMTP_TLS: 'off' })).toMatchObject({
+      requireTLS: false,
+      ignoreTLS: true,
+      secure: false,
+    });
   });
 
   it('with TLS on, a server whose TLS cannot be used gets nothing in clear (the local fake), with it off the fake receives', async () => {
     const e = env();
     if (!process.env.SMTP_PORT) throw new Error('Start the service fakes first (scripts/test.sh does)');
     const message = { from: 'reports@setline.localhost', to: 'owner@perimeter.test', subject: 'TLS check', text: 'x' };
-    await expect(nodemailer.createTransport({ ...transportOptions({ ...e, SMTP_TLS: 'on' }), connectionTimeout: 5000 }).sendMail(message)).rejects.toThrow(/TLS|certificate|STARTTLS/i);
-    await expect(nodemailer.createTransport(transportOptions({ ...e, SMTP_TLS: 'off' })).sendMail(message)).resolves.toMatchObject({ accepted: ['owner@perimeter.test'] });
+    await expect(
+      nodemailer
+        .createTransport({ ...transportOptions({ ...e, SMTP_TLS: 'on' }), connectionTimeout: 5000 })
+        .sendMail(message),
+    ).rejects.toThrow(/TLS|certificate|STARTTLS/i);
+    await expect(
+      nodemailer.createTransport(transportOptions({ ...e, SMTP_TLS: 'off' })).sendMail(message),
+    ).resolves.toMatchObject({ accepted: ['owner@perimeter.test'] });
   });
 });

@@ -14,7 +14,11 @@ describe('/api/profile', () => {
   it('lets a technician switch their own screens to Spanish and back to the browser’s language', async () => {
     const w = await makeWorld('Profile');
     await signInAs(w.technician);
-    expect((await call(GET, '/api/profile')).body).toMatchObject({ id: w.technician.id, locale: null, role: 'technician' });
+    expect((await call(GET, '/api/profile')).body).toMatchObject({
+      id: w.technician.id,
+      locale: null,
+      role: 'technician',
+    });
 
     const set = await patch({ locale: 'es' });
     expect(set.status).toBe(200);
@@ -31,7 +35,13 @@ describe('/api/profile', () => {
     const w = await makeWorld('Profile');
     await signInAs(w.office);
     await patch({ locale: 'es' });
-    for (const body of [{ locale: 'fr' }, { locale: 'es', role: 'admin' }, { locale: 'es', userId: w.admin.id }, {}, 'not json']) {
+    for (const body of [
+      { locale: 'fr' },
+      { locale: 'es', role: 'admin' },
+      { locale: 'es', userId: w.admin.id },
+      {},
+      'not json',
+    ]) {
       const { status, body: answer } = await patch(body);
       expect(status, JSON.stringify(body)).toBe(400);
       expect(answer.error.message).toBeTruthy();

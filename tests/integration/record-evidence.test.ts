@@ -18,11 +18,14 @@ import { linkToken, makeApprovedJob, pdfText } from './report-fixtures';
 
 const requestUpload = (body: unknown) => call(requestRoute, '/api/attachments', {}, jsonBody('POST', body));
 const complete = (id: string) => call(completeRoute, `/api/attachments/${id}/complete`, { id }, { method: 'POST' });
-const pdf = (token: string) => pdfRoute(new Request(`http://localhost/r/${token}/pdf`), { params: Promise.resolve({ token }) });
+const pdf = (token: string) =>
+  pdfRoute(new Request(`http://localhost/r/${token}/pdf`), { params: Promise.resolve({ token }) });
 
 let png: Buffer;
 beforeAll(async () => {
-  png = await sharp({ create: { width: 64, height: 48, channels: 3, background: '#2a7f7a' } }).png().toBuffer();
+  png = await sharp({ create: { width: 64, height: 48, channels: 3, background: '#2a7f7a' } })
+    .png()
+    .toBuffer();
 });
 beforeEach(() => signOut());
 
@@ -32,23 +35,51 @@ describe('uploads to a closed install', () => {
     for (const user of [w.foreman, w.office]) {
       await signInAs(user);
       const before = await Attachment.count({ where: { installId: w.installId } });
-      const refused = await requestUpload({ installId: w.installId, kind: 'after', fileName: 'late.png', contentType: 'image/png', byteSize: png.length });
+      const refused = await requestUpload({
+        installId: w.installId,
+        kind: 'after',
+        fileName: 'late.png',
+        contentType: 'image/png',
+        byteSize: png.length,
+      });
       expect(refused.status).toBe(409);
-      expect(refused.body).toEqual({ error: { message: 'This install is closed (approved): no more files can be added to it.' } });
+      expect(refused.body).toEqual({
+        error: { message: 'This install is closed (approved): no more files can be added to it.' },
+      });
       expect(await Attachment.count({ where: { installId: w.installId } })).toBe(before);
     }
     await Install.update({ status: 'abandoned' }, { where: { id: w.installId } });
     await signInAs(w.foreman);
-    expect((await requestUpload({ installId: w.installId, kind: 'after', fileName: 'late.png', contentType: 'image/png', byteSize: png.length })).status).toBe(409);
+    expect(
+      (
+        await requestUpload({
+          installId: w.installId,
+          kind: 'after',
+          fileName: 'late.png',
+          contentType: 'image/png',
+          byteSize: png.length,
+        })
+      ).status,
+    ).toBe(409);
   });
 
   it('refuses to complete, after approval, an upload asked for before it', async () => {
     const w = await makeInstallWorld('Late');
     await signInAs(w.foreman);
     const installId = await startInstall(w);
-    const asked = await requestUpload({ installId, kind: 'after', fileName: 'slow.png', contentType: 'image/png', byteSize: png.length });
+    const asked = await requestUpload({
+      installId,
+      kind: 'after',
+      fileName: 'slow.png',
+      contentType: 'image/png',
+      byteSize: png.length,
+    });
     expect(asked.status).toBe(201);
-    const put = await fetch(asked.body.upload.url, { method: 'PUT', headers: asked.body.upload.headers, body: new Uint8Array(png) });
+    const put = await fetch(asked.body.upload.url, {
+      method: 'PUT',
+      headers: asked.body.upload.headers,
+      body: new Uint8Array(png),
+    });
     expect(put.ok).toBe(true);
     await Install.update({ status: 'approved' }, { where: { id: installId } });
     const refused = await complete(asked.body.attachment.id);
@@ -65,8 +96,19 @@ describe('the customer report', () => {
       const storageKey = `${w.company.id}/${w.job.id}/${id}.png`;
       await putObject(storageKey, png, 'image/png');
       await Attachment.create({
-        id, companyId: w.company.id, jobId: w.job.id, repairId: w.repair.id, installId: w.installId, kind: 'after', storageKey,
-        contentType: 'image/png', byteSize: png.length, originalName: `${caption}.png`, caption, uploadedById: w.foreman.id, status,
+        id,
+        companyId: w.company.id,
+        jobId: w.job.id,
+        repairId: w.repair.id,
+        installId: w.installId,
+        kind: 'after',
+        storageKey,
+        contentType: 'image/png',
+        byteSize: png.length,
+        originalName: `${caption}.png`,
+        caption,
+        uploadedById: w.foreman.id,
+        status,
       });
       return id;
     };

@@ -10,16 +10,29 @@ import { makeInstallWorld, type InstallWorld } from './helpers/world';
 
 // The install log is evidence: what the server refuses to store, and what the database refuses to change.
 
-const review = (id: string, payload: unknown) => call(reviewRoute, `/api/installs/${id}/review`, { id }, jsonBody('POST', payload));
+const review = (id: string, payload: unknown) =>
+  call(reviewRoute, `/api/installs/${id}/review`, { id }, jsonBody('POST', payload));
 const rows = (installId: string) => InstallEvent.count({ where: { installId } });
 const audits = (companyId: string) => AuditEntry.count({ where: { companyId } });
 const minutesFromNow = (min: number) => new Date(Date.now() + min * 60_000).toISOString();
-const note = (deviceTime: string, extra: Record<string, unknown> = {}) => ({ clientEventId: randomUUID(), type: 'note', deviceTime, payload: { text: 'Flow is back' }, ...extra });
+const note = (deviceTime: string, extra: Record<string, unknown> = {}) => ({
+  clientEventId: randomUUID(),
+  type: 'note',
+  deviceTime,
+  payload: { text: 'Flow is back' },
+  ...extra,
+});
 
 /** A repair of its own on the world's job, so installs of one test do not meet another's. */
 async function freshRepair(w: InstallWorld) {
   return Repair.create({
-    companyId: w.company.id, jobId: w.job.id, segmentId: w.segment.id, distanceMm: 15000, defectType: 'hole', conditionGrade: 3, defectLengthMm: 300,
+    companyId: w.company.id,
+    jobId: w.job.id,
+    segmentId: w.segment.id,
+    distanceMm: 15000,
+    defectType: 'hole',
+    conditionGrade: 3,
+    defectLengthMm: 300,
   });
 }
 
@@ -47,10 +60,21 @@ describe('a closed record stays closed', () => {
     const before = { events: await rows(id), audits: await audits(w.company.id) };
 
     await signInAs(w.foreman);
-    for (const tap of [note(minutesFromNow(0)), body('inspection_recorded', 200, { result: 'fail' }), body('correction', 201, { reason: 'Wrong pressure', payload: { pressureKpa: 120 } }, { correctsEventId: taps[9].clientEventId })]) {
+    for (const tap of [
+      note(minutesFromNow(0)),
+      body('inspection_recorded', 200, { result: 'fail' }),
+      body(
+        'correction',
+        201,
+        { reason: 'Wrong pressure', payload: { pressureKpa: 120 } },
+        { correctsEventId: taps[9].clientEventId },
+      ),
+    ]) {
       const refused = await postEvent(id, tap);
       expect(refused.status, JSON.stringify(refused.body)).toBe(409);
-      expect(refused.body).toEqual({ error: { message: 'This install is closed (approved): nothing more can be recorded on it.' } });
+      expect(refused.body).toEqual({
+        error: { message: 'This install is closed (approved): nothing more can be recorded on it.' },
+      });
     }
     // A tablet draining its outbox sends what it already sent: the stored event, nothing new.
     const replay = await postEvent(id, taps[13]);
@@ -82,7 +106,9 @@ describe('a closed record stays closed', () => {
     expect((await review(id, { decision: 'sent_back', comment: 'Add a photo of the far end' })).status).toBe(201);
     await signInAs(w.foreman);
     expect((await postEvent(id, note(minutesFromNow(0)))).status).toBe(201);
-    expect((await postEvent(id, body('inspection_recorded', 200, { result: 'pass', notes: 'Far end tight' }))).status).toBe(201);
+    expect(
+      (await postEvent(id, body('inspection_recorded', 200, { result: 'pass', notes: 'Far end tight' }))).status,
+    ).toBe(201);
   });
 });
 
@@ -100,24 +126,71 @@ describe('decisions are the foreman’s', () => {
     await signInAs(w.technician);
     const before = { events: await rows(id), audits: await audits(w.company.id) };
     const attempts = [
-      body('correction', 200, { reason: 'It was a no-go', payload: { go: false } }, { correctsEventId: go.clientEventId }),
-      body('correction', 200, { reason: 'Override it', payload: { go: false, overrideReason: 'We were in a hurry' } }, { correctsEventId: go.clientEventId }),
-      body('correction', 200, { reason: 'Decided later', deviceTime: new Date(Date.parse(go.deviceTime) + 30_000).toISOString() }, { correctsEventId: go.clientEventId }),
-      body('correction', 200, { reason: 'Signed by me', payload: { name: 'A Technician' } }, { correctsEventId: sign.clientEventId }),
+      body(
+        'correction',
+        200,
+        { reason: 'It was a no-go', payload: { go: false } },
+        { correctsEventId: go.clientEventId },
+      ),
+      body(
+        'correction',
+        200,
+        { reason: 'Override it', payload: { go: false, overrideReason: 'We were in a hurry' } },
+        { correctsEventId: go.clientEventId },
+      ),
+      body(
+        'correction',
+        200,
+        { reason: 'Decided later', deviceTime: new Date(Date.parse(go.deviceTime) + 30_000).toISOString() },
+        { correctsEventId: go.clientEventId },
+      ),
+      body(
+        'correction',
+        200,
+        { reason: 'Signed by me', payload: { name: 'A Technician' } },
+        { correctsEventId: sign.clientEventId },
+      ),
       // Decision keys smuggled onto another event are refused the same way.
-      body('correction', 200, { reason: 'Typo', payload: { pressureKpa: 101, go: false } }, { correctsEventId: taps[9].clientEventId }),
+      body(
+        'correction',
+        200,
+        { reason: 'Typo', payload: { pressureKpa: 101, go: false } },
+        { correctsEventId: taps[9].clientEventId },
+      ),
     ];
     for (const attempt of attempts) {
       const refused = await postEvent(id, attempt);
       expect(refused.status, JSON.stringify(refused.body)).toBe(403);
-      expect(refused.body).toEqual({ error: { message: 'Only the foreman can correct a go / no-go decision or a sign-off.' } });
+      expect(refused.body).toEqual({
+        error: { message: 'Only the foreman can correct a go / no-go decision or a sign-off.' },
+      });
     }
     expect({ events: await rows(id), audits: await audits(w.company.id) }).toEqual(before);
 
     // Other corrections stay open to the whole crew; the foreman may correct a decision.
-    expect((await postEvent(id, body('correction', 201, { reason: 'Gauge misread', payload: { pressureKpa: 101 } }, { correctsEventId: taps[9].clientEventId }))).status).toBe(201);
+    expect(
+      (
+        await postEvent(
+          id,
+          body(
+            'correction',
+            201,
+            { reason: 'Gauge misread', payload: { pressureKpa: 101 } },
+            { correctsEventId: taps[9].clientEventId },
+          ),
+        )
+      ).status,
+    ).toBe(201);
     await signInAs(w.foreman);
-    const fixed = await postEvent(id, body('correction', 202, { reason: 'Full name', payload: { name: 'The Foreman Jr' } }, { correctsEventId: sign.clientEventId }));
+    const fixed = await postEvent(
+      id,
+      body(
+        'correction',
+        202,
+        { reason: 'Full name', payload: { name: 'The Foreman Jr' } },
+        { correctsEventId: sign.clientEventId },
+      ),
+    );
     expect(fixed.status).toBe(201);
     expect(await rows(id)).toBe(before.events + 2);
   });
@@ -157,8 +230,14 @@ describe('device time is bounded', () => {
     const mixed = body('resin_mixed', 0);
     expect((await postEvent(id, mixed)).status).toBe(201);
     const count = await rows(id);
-    for (const [when, bound] of [[minutesFromNow(10), /5 minutes/], [minutesFromNow(-20 * 24 * 60), /14 days/]] as const) {
-      const refused = await postEvent(id, body('correction', 1, { reason: 'Clock was off', deviceTime: when }, { correctsEventId: mixed.clientEventId }));
+    for (const [when, bound] of [
+      [minutesFromNow(10), /5 minutes/],
+      [minutesFromNow(-20 * 24 * 60), /14 days/],
+    ] as const) {
+      const refused = await postEvent(
+        id,
+        body('correction', 1, { reason: 'Clock was off', deviceTime: when }, { correctsEventId: mixed.clientEventId }),
+      );
       expect(refused.status).toBe(422);
       expect(refused.body.error.message).toMatch(bound);
       expect(refused.body.error.fields).toHaveProperty(['payload.deviceTime']);
@@ -167,9 +246,21 @@ describe('device time is bounded', () => {
   });
 
   it('still answers 200 to the replay of a stored tap whose time is now past the bound', async () => {
-    const old = { clientEventId: randomUUID(), type: 'note' as const, deviceTime: minutesFromNow(-20 * 24 * 60), payload: { text: 'From before' } };
+    const old = {
+      clientEventId: randomUUID(),
+      type: 'note' as const,
+      deviceTime: minutesFromNow(-20 * 24 * 60),
+      payload: { text: 'From before' },
+    };
     // Stored when it was fresh (written directly: the API would refuse it today).
-    await InstallEvent.create({ companyId: w.company.id, installId: id, userId: w.foreman.id, receivedAt: new Date(old.deviceTime), ...old, deviceTime: new Date(old.deviceTime) });
+    await InstallEvent.create({
+      companyId: w.company.id,
+      installId: id,
+      userId: w.foreman.id,
+      receivedAt: new Date(old.deviceTime),
+      ...old,
+      deviceTime: new Date(old.deviceTime),
+    });
     const replay = await postEvent(id, old);
     expect(replay.status).toBe(200);
     expect(replay.body.event.clientEventId).toBe(old.clientEventId);
@@ -208,7 +299,14 @@ describe('the database keeps the install log and the audit trail append-only', (
     await signInAs(w.foreman);
     installId = await startInstall(w);
     await postAll(installId, cleanInstall(w).slice(0, 6));
-    await AuditEntry.create({ companyId: w.company.id, userId: w.office.id, action: 'update', entityType: 'job', entityId: w.job.id, changes: { title: { from: null, to: 'Main line' } } });
+    await AuditEntry.create({
+      companyId: w.company.id,
+      userId: w.office.id,
+      action: 'update',
+      entityType: 'job',
+      entityId: w.job.id,
+      changes: { title: { from: null, to: 'Main line' } },
+    });
   });
 
   /** Runs `sql` in a transaction that is always rolled back, and returns the database's refusal (or null). */
@@ -226,10 +324,10 @@ describe('the database keeps the install log and the audit trail append-only', (
   }
 
   it.each([
-    ['UPDATE install_events SET payload = \'{}\' WHERE install_id = :installId', 'install_events', 'UPDATE'],
+    ["UPDATE install_events SET payload = '{}' WHERE install_id = :installId", 'install_events', 'UPDATE'],
     ['DELETE FROM install_events WHERE install_id = :installId', 'install_events', 'DELETE'],
     ['TRUNCATE install_events CASCADE', 'install_events', 'TRUNCATE'],
-    ['UPDATE audit_entries SET reason = \'edited\' WHERE company_id = :companyId', 'audit_entries', 'UPDATE'],
+    ["UPDATE audit_entries SET reason = 'edited' WHERE company_id = :companyId", 'audit_entries', 'UPDATE'],
     ['DELETE FROM audit_entries WHERE company_id = :companyId', 'audit_entries', 'DELETE'],
     ['TRUNCATE audit_entries', 'audit_entries', 'TRUNCATE'],
   ])('refuses %s', async (sql, table, op) => {
@@ -239,11 +337,19 @@ describe('the database keeps the install log and the audit trail append-only', (
   });
 
   it('refuses a delete that would cascade into the log, and leaves rows without one alone', async () => {
-    expect(await refusal('DELETE FROM installs WHERE id = :installId', { installId })).toMatch(/install_events is append-only: DELETE refused/);
+    expect(await refusal('DELETE FROM installs WHERE id = :installId', { installId })).toMatch(
+      /install_events is append-only: DELETE refused/,
+    );
     expect(await refusal('DELETE FROM jobs WHERE id = :jobId', { jobId: w.job.id })).toMatch(/append-only/);
     expect(await rows(installId)).toBe(6);
     // A job with no events (nothing of the log below it) can still be deleted.
-    const empty = await Job.create({ companyId: w.company.id, number: `E-${randomUUID().slice(0, 8)}`, customerId: w.customer.id, siteId: w.site.id, status: 'draft' });
+    const empty = await Job.create({
+      companyId: w.company.id,
+      number: `E-${randomUUID().slice(0, 8)}`,
+      customerId: w.customer.id,
+      siteId: w.site.id,
+      status: 'draft',
+    });
     expect(await refusal('DELETE FROM jobs WHERE id = :jobId', { jobId: empty.id })).toBeNull();
   });
 

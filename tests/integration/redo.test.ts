@@ -13,15 +13,23 @@ import { signInAs, signOut } from './helpers/session';
 import { makeInstallWorld, type InstallWorld } from './helpers/world';
 
 const redo = (id: string, payload?: unknown) =>
-  call(redoRoute, `/api/installs/${id}/redo`, { id }, payload === undefined ? { method: 'POST' } : jsonBody('POST', payload));
-const review = (id: string, payload: unknown) => call(reviewRoute, `/api/installs/${id}/review`, { id }, jsonBody('POST', payload));
+  call(
+    redoRoute,
+    `/api/installs/${id}/redo`,
+    { id },
+    payload === undefined ? { method: 'POST' } : jsonBody('POST', payload),
+  );
+const review = (id: string, payload: unknown) =>
+  call(reviewRoute, `/api/installs/${id}/review`, { id }, jsonBody('POST', payload));
 
 /** A signed-off install of the world's repair whose inspection passed or failed. */
 async function finished(w: InstallWorld, result: 'pass' | 'fail') {
   await signInAs(w.foreman);
   const id = await startInstall(w);
   const taps = cleanInstall(w).map((tap) =>
-    tap.type === 'inspection_recorded' ? { ...tap, payload: { result, notes: result === 'fail' ? 'Lifted at the upstream end' : 'Tight' } } : tap,
+    tap.type === 'inspection_recorded'
+      ? { ...tap, payload: { result, notes: result === 'fail' ? 'Lifted at the upstream end' : 'Tight' } }
+      : tap,
   );
   await postAll(id, taps);
   return id;
@@ -42,7 +50,14 @@ describe('POST /api/installs/:id/redo', () => {
     await signInAs(a.foreman);
     const first = await redo(oldId, { id: newId });
     expect(first.status).toBe(201);
-    expect(first.body.install).toMatchObject({ id: newId, repairId: a.repair.id, jobId: a.job.id, crewId: a.crew.id, status: 'not_started', replacesInstallId: oldId });
+    expect(first.body.install).toMatchObject({
+      id: newId,
+      repairId: a.repair.id,
+      jobId: a.job.id,
+      crewId: a.crew.id,
+      status: 'not_started',
+      replacesInstallId: oldId,
+    });
     const again = await redo(oldId, { id: newId });
     expect(again.status).toBe(200);
     expect(again.body.install.id).toBe(newId);
@@ -50,7 +65,10 @@ describe('POST /api/installs/:id/redo', () => {
     // The old install and its record stay as they were.
     expect(await Install.findByPk(oldId)).toMatchObject({ status: 'awaiting_review', inspectionResult: 'fail' });
     expect((await Repair.findByPk(a.repair.id))!.status).toBe('planned');
-    expect(await AuditEntry.findOne({ where: { entityId: newId, action: 'install.redone' } })).toMatchObject({ userId: a.foreman.id, changes: { replacesInstallId: oldId } });
+    expect(await AuditEntry.findOne({ where: { entityId: newId, action: 'install.redone' } })).toMatchObject({
+      userId: a.foreman.id,
+      changes: { replacesInstallId: oldId },
+    });
 
     // Both ends of the chain are in the install view.
     const oldView = await getInstall(oldId);
@@ -106,7 +124,7 @@ describe('POST /api/installs/:id/redo', () => {
     expect((await redo(id, { id: randomUUID() })).status).toBe(201);
   });
 
-  it("the customer report names the earlier attempt of a redone patch", async () => {
+  it('the customer report names the earlier attempt of a redone patch', async () => {
     const w = await makeInstallWorld('Gamma');
     const oldId = await finished(w, 'fail');
     await signInAs(w.foreman);
@@ -117,8 +135,12 @@ describe('POST /api/installs/:id/redo', () => {
     const report = await buildReportData(w.company.id, w.job.id, { images: false });
     const repair = report!.repairs[0];
     expect(repair.install).not.toBeNull();
-    expect(repair.earlierAttempts).toEqual([{ started: expect.stringMatching(/^\d{4}-\d{2}-\d{2} \d{2}:\d{2}/), outcome: 'inspection failed' }]);
-    expect(report!.cautions.map((c) => c.title)).toEqual(expect.arrayContaining(['Flow control and plugs', 'Sewage backing up', 'Sewage hygiene']));
+    expect(repair.earlierAttempts).toEqual([
+      { started: expect.stringMatching(/^\d{4}-\d{2}-\d{2} \d{2}:\d{2}/), outcome: 'inspection failed' },
+    ]);
+    expect(report!.cautions.map((c) => c.title)).toEqual(
+      expect.arrayContaining(['Flow control and plugs', 'Sewage backing up', 'Sewage hygiene']),
+    );
   });
 });
 
@@ -135,7 +157,15 @@ describe('conditions and go decision carry the new clock inputs', () => {
     await postAll(id, [
       ...taps,
       // Pipe at 2 °C: below the example resin's range, so no clock without the maker's hold.
-      body('conditions_recorded', 13, { mixTempC: 20, airTempC: 30, prepMinutes: 12, pipeTempC: 2, resinKitId: a.resinKit.id, packerId: a.packer.id, patchLengthMm: 910 }),
+      body('conditions_recorded', 13, {
+        mixTempC: 20,
+        airTempC: 30,
+        prepMinutes: 12,
+        pipeTempC: 2,
+        resinKitId: a.resinKit.id,
+        packerId: a.packer.id,
+        patchLengthMm: 910,
+      }),
       body('go_decision', 14, { go: false, overrideReason: 'Owner needs the line tonight', makerHoldMin: 240 }),
       body('resin_mixed', 16),
       body('bladder_inflated', 30, { pressureKpa: 100 }),
@@ -160,7 +190,13 @@ describe('conditions and go decision carry the new clock inputs', () => {
     const id = await startInstall(a);
     await postAll(id, [
       ...cleanInstall(a).slice(0, 4),
-      body('conditions_recorded', 13, { mixTempC: 20, pipeTempC: 2, resinKitId: a.resinKit.id, packerId: a.packer.id, patchLengthMm: 910 }),
+      body('conditions_recorded', 13, {
+        mixTempC: 20,
+        pipeTempC: 2,
+        resinKitId: a.resinKit.id,
+        packerId: a.packer.id,
+        patchLengthMm: 910,
+      }),
     ]);
     const before = (await getInstall(id)).body.events.length;
     for (const payload of [{ go: false, overrideReason: 'Owner needs the line tonight' }, { go: true }]) {
@@ -170,13 +206,30 @@ describe('conditions and go decision carry the new clock inputs', () => {
     }
     expect((await getInstall(id)).body.events.length).toBe(before);
     // With the hold from the maker's sheet it is taken.
-    expect((await postEvent(id, body('go_decision', 14, { go: false, overrideReason: 'Owner needs the line tonight', makerHoldMin: 240 }))).status).toBe(201);
+    expect(
+      (
+        await postEvent(
+          id,
+          body('go_decision', 14, { go: false, overrideReason: 'Owner needs the line tonight', makerHoldMin: 240 }),
+        )
+      ).status,
+    ).toBe(201);
   });
 
   it('refuses a negative preparation time and a zero maker hold with 400', async () => {
     await signInAs(a.foreman);
     const id = await startInstall(a);
-    const bad = await postEvent(id, body('conditions_recorded', 1, { mixTempC: 20, prepMinutes: -1, pipeTempC: 20, resinKitId: a.resinKit.id, packerId: a.packer.id, patchLengthMm: 910 }));
+    const bad = await postEvent(
+      id,
+      body('conditions_recorded', 1, {
+        mixTempC: 20,
+        prepMinutes: -1,
+        pipeTempC: 20,
+        resinKitId: a.resinKit.id,
+        packerId: a.packer.id,
+        patchLengthMm: 910,
+      }),
+    );
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.body.error.fields)).toEqual(['payload.prepMinutes']);
     const zero = await postEvent(id, body('go_decision', 2, { go: false, overrideReason: 'Because', makerHoldMin: 0 }));
@@ -207,14 +260,35 @@ describe("the clock's settings: company hold reserve and resin preparation minut
 
   it('a resin system carries its minutes from mixing to patch on the packer (default 15, 0–240)', async () => {
     await signInAs(a.admin);
-    const good = { name: 'Prep epoxy', chemistry: 'epoxy', refTempC: 20, potLifeMin: 30, holdMin: 90, fullCureMin: 240, minTempC: 5, maxTempC: 40, sensitivityKind: 'doubling', doublingC: 10 };
+    const good = {
+      name: 'Prep epoxy',
+      chemistry: 'epoxy',
+      refTempC: 20,
+      potLifeMin: 30,
+      holdMin: 90,
+      fullCureMin: 240,
+      minTempC: 5,
+      maxTempC: 40,
+      sensitivityKind: 'doubling',
+      doublingC: 10,
+    };
     const plain = await call(createResinRoute, '/api/resin-systems', {}, jsonBody('POST', good));
     expect(plain.status).toBe(201);
     expect((await ResinSystem.findByPk(plain.body.id))!.prepMinutes).toBe(15);
-    const own = await call(createResinRoute, '/api/resin-systems', {}, jsonBody('POST', { ...good, name: 'Prep epoxy 2', prepMinutes: 22.5 }));
+    const own = await call(
+      createResinRoute,
+      '/api/resin-systems',
+      {},
+      jsonBody('POST', { ...good, name: 'Prep epoxy 2', prepMinutes: 22.5 }),
+    );
     expect(own.status).toBe(201);
     expect((await ResinSystem.findByPk(own.body.id))!.prepMinutes).toBe(22.5);
-    const bad = await call(patchResinRoute, `/api/resin-systems/${own.body.id}`, { id: own.body.id }, jsonBody('PATCH', { prepMinutes: 300 }));
+    const bad = await call(
+      patchResinRoute,
+      `/api/resin-systems/${own.body.id}`,
+      { id: own.body.id },
+      jsonBody('PATCH', { prepMinutes: 300 }),
+    );
     expect(bad.status).toBe(400);
     expect((await ResinSystem.findByPk(own.body.id))!.prepMinutes).toBe(22.5);
   });

@@ -34,8 +34,26 @@ describe('repair planning panel: GET /api/repairs/:id/plan', () => {
     w = await makeInstallWorld('Plan');
     b = await makeWorld('Other');
     // A packer for bigger pipe: listed, never fitting this 200 mm segment.
-    await Packer.create({ companyId: w.company.id, name: `Packer 300 ${w.company.id.slice(0, 4)}`, minDiameterMm: 280, maxDiameterMm: 320, bladderLengthMm: 1500, endMarginMm: 120, minPressureKpa: 50, maxPressureKpa: 120 });
-    long = await Repair.create({ companyId: w.company.id, jobId: w.job.id, segmentId: w.segment.id, position: 2, distanceMm: 20000, defectType: 'lengthwise_crack', conditionGrade: 3, defectLengthMm: 1000 });
+    await Packer.create({
+      companyId: w.company.id,
+      name: `Packer 300 ${w.company.id.slice(0, 4)}`,
+      minDiameterMm: 280,
+      maxDiameterMm: 320,
+      bladderLengthMm: 1500,
+      endMarginMm: 120,
+      minPressureKpa: 50,
+      maxPressureKpa: 120,
+    });
+    long = await Repair.create({
+      companyId: w.company.id,
+      jobId: w.job.id,
+      segmentId: w.segment.id,
+      position: 2,
+      distanceMm: 20000,
+      defectType: 'lengthwise_crack',
+      conditionGrade: 3,
+      defectLengthMm: 1000,
+    });
   });
   beforeEach(() => signOut());
 
@@ -61,7 +79,12 @@ describe('repair planning panel: GET /api/repairs/:id/plan', () => {
     const fits = body.packers.filter((p: { fits: boolean }) => p.fits);
     expect(fits.map((p: { id: string }) => p.id)).toEqual([w.packer.id]);
     // (1 200 mm bladder − 910 mm patch) / 2 = 145 mm bare at each end; the packer asks for 100.
-    expect(fits[0]).toMatchObject({ endMarginEachMm: 145, requiredEndMarginMm: 100, minPressureKpa: 70, maxPressureKpa: 150 });
+    expect(fits[0]).toMatchObject({
+      endMarginEachMm: 145,
+      requiredEndMarginMm: 100,
+      minPressureKpa: 70,
+      maxPressureKpa: 150,
+    });
     // End thrust F = P·π·D²/4 at the highest rated pressure: 150 kPa on a 0.200 m bore = 4 712.4 N.
     expect(fits[0].endThrustAtMax.newtons).toBeCloseTo((150_000 * Math.PI * 0.2 * 0.2) / 4, 6);
     expect(fits[0].endThrustAtMax.newtons).toBeCloseTo(4712.39, 1);
@@ -93,7 +116,14 @@ describe('repair planning panel: GET /api/repairs/:id/plan', () => {
     expect(body.design.ovalityC).toBeCloseTo(Math.pow(0.98 / 1.0404, 3), 12);
     expect(body.design.thick).toBe(true);
     expect(body.warnings).toEqual([]);
-    expect(body.assumptions).toEqual({ ovalityPct: 2, longTermModulusPsi: E_L, shortTermModulusPsi: 250_000, safetyFactor: N, enhancementK: K, poisson: NU });
+    expect(body.assumptions).toEqual({
+      ovalityPct: 2,
+      longTermModulusPsi: E_L,
+      shortTermModulusPsi: 250_000,
+      safetyFactor: N,
+      enhancementK: K,
+      poisson: NU,
+    });
     // X1.4 at 250 000 psi on 7.874 in: 0.1296 in = 3.293 mm, below the 3.446 mm of buckling.
     expect(body.design.checks.minimumStiffness * MM_PER_IN).toBeCloseTo(3.293, 3);
     expect(body.design.summary).toBe('X1.1 buckling at 10.0 ft of water, X1.4 stiffness');
@@ -108,7 +138,10 @@ describe('repair planning panel: GET /api/repairs/:id/plan', () => {
       expect(body.assumptions.shortTermModulusPsi).toBeCloseTo(400_000, -1);
       // X1.4 (E·t³/12 / D³ ≥ 0.093 psi): t = D·(12 × 0.093 / E)^(1/3) = 7.874 in × (1.116 / 400 000)^(1/3) = 2.816 mm.
       expect(body.design.checks.minimumStiffness * MM_PER_IN).toBeCloseTo(2.8156, 3);
-      const asked = await plan(w.repair.id, '?groundwaterHeadMm=3048&thicknessMm=6&ovalityPct=2&shortTermModulusMpa=1723.7');
+      const asked = await plan(
+        w.repair.id,
+        '?groundwaterHeadMm=3048&thicknessMm=6&ovalityPct=2&shortTermModulusMpa=1723.7',
+      );
       expect(asked.body.assumptions.shortTermModulusPsi).toBeCloseTo(250_000, -1);
     } finally {
       await Company.update({ linerShortTermModulusMpa: null }, { where: { id: w.company.id } });
@@ -118,8 +151,17 @@ describe('repair planning panel: GET /api/repairs/:id/plan', () => {
   it('takes the resin-to-fabric ratio and excess of the resin system asked for; another company’s is refused', async () => {
     await signInAs(w.office);
     const slow = await ResinSystem.create({
-      companyId: w.company.id, name: `Thick mix ${w.company.id.slice(0, 4)}`, refTempC: 20, potLifeMin: 40, holdMin: 120, fullCureMin: 300,
-      minTempC: 5, maxTempC: 35, doublingC: 10, resinToFabricRatio: 1.5, resinExcessPct: 15,
+      companyId: w.company.id,
+      name: `Thick mix ${w.company.id.slice(0, 4)}`,
+      refTempC: 20,
+      potLifeMin: 40,
+      holdMin: 120,
+      fullCureMin: 300,
+      minTempC: 5,
+      maxTempC: 35,
+      doublingC: 10,
+      resinToFabricRatio: 1.5,
+      resinExcessPct: 15,
     });
     const { status, body } = await plan(w.repair.id, `?thicknessMm=6&resinSystemId=${slow.id}`);
     expect(status).toBe(200);
@@ -128,7 +170,15 @@ describe('repair planning panel: GET /api/repairs/:id/plan', () => {
     expect(body.resin.basis).toContain('resin to fabric 1.5 by volume, 15 % extra');
     expect(body.resinSystems.map((r: { id: string }) => r.id)).toContain(slow.id);
     const foreign = await ResinSystem.create({
-      companyId: b.company.id, name: 'Foreign mix', refTempC: 20, potLifeMin: 40, holdMin: 120, fullCureMin: 300, minTempC: 5, maxTempC: 35, doublingC: 10,
+      companyId: b.company.id,
+      name: 'Foreign mix',
+      refTempC: 20,
+      potLifeMin: 40,
+      holdMin: 120,
+      fullCureMin: 300,
+      minTempC: 5,
+      maxTempC: 35,
+      doublingC: 10,
     });
     const refused = await plan(w.repair.id, `?thicknessMm=6&resinSystemId=${foreign.id}`);
     expect(refused.status).toBe(422);
@@ -152,7 +202,10 @@ describe('repair planning panel: GET /api/repairs/:id/plan', () => {
     expect(thin.body.warnings.join(' ')).toMatch(/too thin/);
     // 3 447.4 MPa = 500 000 psi (1 psi = 6.894 757 kPa, NIST SP 811). Buckling then asks for 3.0 mm, so the
     // X1.4 stiffness floor at the F1216 minimum modulus (3.293 mm) governs.
-    const stiff = await plan(w.repair.id, '?groundwaterHeadMm=6096&thicknessMm=3.5&ovalityPct=5&longTermModulusMpa=3447.3785');
+    const stiff = await plan(
+      w.repair.id,
+      '?groundwaterHeadMm=6096&thicknessMm=3.5&ovalityPct=5&longTermModulusMpa=3447.3785',
+    );
     expect(stiff.body.design.checks.buckling * MM_PER_IN).toBeCloseTo(f1216PartialMm(200, 6096, 5, 500_000), 4);
     expect(stiff.body.design.governing).toBe('minimumStiffness');
     expect(stiff.body.design.requiredThicknessMm).toBeCloseTo(3.293, 3);
@@ -172,9 +225,18 @@ describe('repair planning panel: GET /api/repairs/:id/plan', () => {
 
   it('falls back to the saved plan and shows the field users of the crew the same figures', async () => {
     await signInAs(w.office);
-    const saved = await call(patchRoute, '/x', { id: w.repair.id }, jsonBody('PATCH', {
-      plannedPatchLengthMm: 1000, plannedPackerId: w.packer.id, plannedThicknessMm: 6, plannedGroundwaterHeadMm: 3048, plannedOvalityPct: 2,
-    }));
+    const saved = await call(
+      patchRoute,
+      '/x',
+      { id: w.repair.id },
+      jsonBody('PATCH', {
+        plannedPatchLengthMm: 1000,
+        plannedPackerId: w.packer.id,
+        plannedThicknessMm: 6,
+        plannedGroundwaterHeadMm: 3048,
+        plannedOvalityPct: 2,
+      }),
+    );
     expect(saved.status).toBe(200);
     await signInAs(w.foreman);
     const { status, body } = await plan(w.repair.id);

@@ -40,7 +40,11 @@ export async function pdfText(pdf: Buffer): Promise<string> {
 }
 
 /** Waits until `probe` returns a value that is not undefined, or fails after `ms`. */
-export async function eventually<T>(probe: () => Promise<T | undefined>, ms = 20_000, what = 'the condition'): Promise<T> {
+export async function eventually<T>(
+  probe: () => Promise<T | undefined>,
+  ms = 20_000,
+  what = 'the condition',
+): Promise<T> {
   const until = Date.now() + ms;
   for (;;) {
     const value = await probe();

@@ -5,7 +5,8 @@ import { openReportLink } from '@/lib/report/link-access';
 import { makeWorld } from './helpers/world';
 import { linkToken, makeApprovedJob, pdfText, unrecordedToken } from './report-fixtures';
 
-const pdf = (token: string) => pdfRoute(new Request(`http://localhost/r/${token}/pdf`), { params: Promise.resolve({ token }) });
+const pdf = (token: string) =>
+  pdfRoute(new Request(`http://localhost/r/${token}/pdf`), { params: Promise.resolve({ token }) });
 const tokenFor = linkToken;
 
 describe('the customer link /r/<token>', () => {
@@ -58,7 +59,8 @@ describe('the customer link /r/<token>', () => {
     const notApproved = await openReportLink(await tokenFor(w.job.id, w.company.id));
     const foreign = await makeApprovedJob('e@example.test');
     const crossCompany = await openReportLink(await tokenFor(foreign.job.id, w.company.id));
-    for (const answer of [missing, notApproved, crossCompany]) expect(answer).toEqual({ ok: false, status: 404, companyName: null });
+    for (const answer of [missing, notApproved, crossCompany])
+      expect(answer).toEqual({ ok: false, status: 404, companyName: null });
     await Job.update({ status: 'reported' }, { where: { id: foreign.job.id } });
     expect((await openReportLink(await tokenFor(foreign.job.id, foreign.company.id))).ok).toBe(true);
   });

@@ -11,21 +11,37 @@ import { signInAs, signOut } from './helpers/session';
 import { makeWorld } from './helpers/world';
 import { linkToken, makeApprovedJob, pdfText } from './report-fixtures';
 
-const revoke = (jobId: string) => call(revokeRoute, `/api/jobs/${jobId}/report-links`, { id: jobId }, { method: 'DELETE' });
-const pdf = (token: string) => pdfRoute(new Request(`http://localhost/r/${token}/pdf`), { params: Promise.resolve({ token }) });
-const pay = (token: string) => payRoute(new Request(`http://localhost/r/${token}/pay`, { method: 'POST' }), { params: Promise.resolve({ token }) });
+const revoke = (jobId: string) =>
+  call(revokeRoute, `/api/jobs/${jobId}/report-links`, { id: jobId }, { method: 'DELETE' });
+const pdf = (token: string) =>
+  pdfRoute(new Request(`http://localhost/r/${token}/pdf`), { params: Promise.resolve({ token }) });
+const pay = (token: string) =>
+  payRoute(new Request(`http://localhost/r/${token}/pay`, { method: 'POST' }), { params: Promise.resolve({ token }) });
 const REFUSED = { ok: false, status: 404, companyName: null };
 
 describe('DELETE /api/jobs/:id/report-links', () => {
   it('revokes every earlier link: page, PDF and Pay now answer like a forged link; a link made afterwards works', async () => {
     const w = await makeApprovedJob('c@example.test');
-    await Invoice.create({ companyId: w.company.id, jobId: w.job.id, number: `INV-R-${w.job.number}`, status: 'issued', dueOn: '2026-12-31', subtotalCents: 5000, totalCents: 5000 });
+    await Invoice.create({
+      companyId: w.company.id,
+      jobId: w.job.id,
+      number: `INV-R-${w.job.number}`,
+      status: 'issued',
+      dueOn: '2026-12-31',
+      subtotalCents: 5000,
+      totalCents: 5000,
+    });
     const first = await linkToken(w.job.id, w.company.id);
     const second = await linkToken(w.job.id, w.company.id);
     const expired = await linkToken(w.job.id, w.company.id, new Date(Date.now() - 1000));
     expect((await openReportLink(first)).ok).toBe(true);
     expect(await refusalCompanyName(expired)).toBe(w.company.name); // genuine, expired, not revoked: may name the company
-    const queued = await ReportSend.create({ companyId: w.company.id, jobId: w.job.id, toAddress: 'c@example.test', linkExpiresAt: new Date(Date.now() + 86_400_000) });
+    const queued = await ReportSend.create({
+      companyId: w.company.id,
+      jobId: w.job.id,
+      toAddress: 'c@example.test',
+      linkExpiresAt: new Date(Date.now() + 86_400_000),
+    });
 
     await signInAs(w.office);
     const before = Date.now();
@@ -47,7 +63,9 @@ describe('DELETE /api/jobs/:id/report-links', () => {
     expect(await refusalCompanyName(expired)).toBeNull();
     // A send still waiting would carry a dead link: it is stopped with a reason.
     expect(await queued.reload()).toMatchObject({ status: 'failed', lastError: expect.stringContaining('revoked') });
-    const audit = await AuditEntry.findOne({ where: { entityType: 'job', entityId: w.job.id, action: 'report_links_revoked' } });
+    const audit = await AuditEntry.findOne({
+      where: { entityType: 'job', entityId: w.job.id, action: 'report_links_revoked' },
+    });
     expect(audit?.userId).toBe(w.office.id);
     expect(audit?.changes).toMatchObject({ links: 3, queuedSendsStopped: 1 });
 
@@ -71,7 +89,9 @@ describe('DELETE /api/jobs/:id/report-links', () => {
     expect((await revoke('not-a-uuid')).status).toBe(404);
     await signInAs(other.admin);
     expect((await revoke(w.job.id)).status).toBe(404);
-    expect((await ReportLink.findAll({ where: { jobId: w.job.id } })).every((link) => link.revokedAt === null)).toBe(true);
+    expect((await ReportLink.findAll({ where: { jobId: w.job.id } })).every((link) => link.revokedAt === null)).toBe(
+      true,
+    );
     expect((await openReportLink(token)).ok).toBe(true);
     await signInAs(w.admin);
     expect((await revoke(w.job.id)).status).toBe(200);
@@ -109,7 +129,14 @@ describe('the customer PDF is cached per report version', () => {
     expect(await headObject(`report-pdf/${w.company.id}/${w.job.id}/${changed}.pdf`)).not.toBeNull();
 
     // A new report goes out: another version.
-    await ReportSend.create({ companyId: w.company.id, jobId: w.job.id, toAddress: 'c@example.test', linkExpiresAt: new Date(Date.now() + 86_400_000), status: 'sent', sentAt: new Date() });
+    await ReportSend.create({
+      companyId: w.company.id,
+      jobId: w.job.id,
+      toAddress: 'c@example.test',
+      linkExpiresAt: new Date(Date.now() + 86_400_000),
+      status: 'sent',
+      sentAt: new Date(),
+    });
     expect(await reportVersion(w.company.id, w.job.id)).not.toBe(changed);
   });
 });

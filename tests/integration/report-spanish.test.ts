@@ -23,7 +23,8 @@ const MAIL = process.env.MAIL_WEB_URL;
 
 let worker: { stop: () => Promise<void> };
 beforeAll(async () => {
-  if (!MAIL || !process.env.SMTP_PORT) throw new Error('Start the service fakes first (scripts/test.sh does; see scripts/fakes.sh)');
+  if (!MAIL || !process.env.SMTP_PORT)
+    throw new Error('Start the service fakes first (scripts/test.sh does; see scripts/fakes.sh)');
   worker = await startReportWorker({ pollingIntervalSeconds: 0.5 });
 });
 afterAll(async () => {
@@ -36,19 +37,39 @@ describe('the repair report in the customer’s language', () => {
     const to = `cliente-${randomUUID().slice(0, 8)}@example.test`;
     const w = await makeApprovedJob(to);
     await signInAs(w.office);
-    const patched = await call(customerPatchRoute, `/api/customers/${w.customer.id}`, { id: w.customer.id }, jsonBody('PATCH', { language: 'es' }));
+    const patched = await call(
+      customerPatchRoute,
+      `/api/customers/${w.customer.id}`,
+      { id: w.customer.id },
+      jsonBody('PATCH', { language: 'es' }),
+    );
     expect(patched.status).toBe(200);
     expect(patched.body.language).toBe('es');
 
-    const { status, body } = await call(sendRoute, `/api/jobs/${w.job.id}/report`, { id: w.job.id }, jsonBody('POST', {}));
+    const { status, body } = await call(
+      sendRoute,
+      `/api/jobs/${w.job.id}/report`,
+      { id: w.job.id },
+      jsonBody('POST', {}),
+    );
     expect(status).toBe(202);
-    await eventually(async () => ((await ReportSend.findByPk(body.id))?.status === 'sent' ? true : undefined), 20_000, 'the send to go out');
+    await eventually(
+      async () => ((await ReportSend.findByPk(body.id))?.status === 'sent' ? true : undefined),
+      20_000,
+      'the send to go out',
+    );
 
-    const listed = await eventually(async () => {
-      const messages = (await (await fetch(`${MAIL}/messages`)).json()) as { id: string; to: string }[];
-      return messages.find((m) => m.to.includes(to));
-    }, 10_000, 'the message in the mailbox');
-    const mail = await simpleParser(Buffer.from(await (await fetch(`${MAIL}/messages/${listed.id}.eml`)).arrayBuffer()));
+    const listed = await eventually(
+      async () => {
+        const messages = (await (await fetch(`${MAIL}/messages`)).json()) as { id: string; to: string }[];
+        return messages.find((m) => m.to.includes(to));
+      },
+      10_000,
+      'the message in the mailbox',
+    );
+    const mail = await simpleParser(
+      Buffer.from(await (await fetch(`${MAIL}/messages/${listed.id}.eml`)).arrayBuffer()),
+    );
     expect(mail.subject).toBe(`Informe de reparación de 1 Test Street, Testville (trabajo ${w.job.number})`);
     expect(mail.text).toContain('El informe completo va adjunto en PDF.');
     expect(mail.text).toContain('También puede leerlo en línea hasta el');
@@ -81,7 +102,9 @@ describe('the repair report in the customer’s language', () => {
     expect(html).toContain('35,8 in');
     expect(html).not.toContain('Patch length');
 
-    const linked = await pdfRoute(new Request(`http://127.0.0.1/r/${token}/pdf`), { params: Promise.resolve({ token }) });
+    const linked = await pdfRoute(new Request(`http://127.0.0.1/r/${token}/pdf`), {
+      params: Promise.resolve({ token }),
+    });
     expect(linked.status).toBe(200);
     expect(await pdfText(Buffer.from(await linked.arrayBuffer()))).toContain('Curado completo');
     // A worker send, two PDF renders and their text extraction: room for a busy machine.
@@ -90,7 +113,12 @@ describe('the repair report in the customer’s language', () => {
   it('refuses a language it does not have, and changes nothing', async () => {
     const w = await makeApprovedJob(null);
     await signInAs(w.office);
-    const { status, body } = await call(customerPatchRoute, `/api/customers/${w.customer.id}`, { id: w.customer.id }, jsonBody('PATCH', { language: 'fr' }));
+    const { status, body } = await call(
+      customerPatchRoute,
+      `/api/customers/${w.customer.id}`,
+      { id: w.customer.id },
+      jsonBody('PATCH', { language: 'fr' }),
+    );
     expect(status).toBe(400);
     expect(body.error.fields.language).toBeTruthy();
     await w.customer.reload();

@@ -6,7 +6,14 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { POST as sendRoute } from '@/app/api/jobs/[id]/report/route';
 import { sequelize } from '@/lib/data/db';
 import { Attachment, ReportSend } from '@/models';
-import { REPORT_QUEUE, UPLOAD_SWEEP_QUEUE, enqueueReportSend, getBoss, stopBoss, type ReportJob } from '@/lib/queue/boss';
+import {
+  REPORT_QUEUE,
+  UPLOAD_SWEEP_QUEUE,
+  enqueueReportSend,
+  getBoss,
+  stopBoss,
+  type ReportJob,
+} from '@/lib/queue/boss';
 import { SCHEDULES, startReportWorker, startReportWorkerWhenReady } from '@/lib/queue/worker';
 import { createReportLink } from '@/lib/data/report-links';
 import { CLAIM_LEASE_SECONDS } from '@/lib/data/report-delivery';
@@ -25,7 +32,8 @@ const MAIL = process.env.MAIL_WEB_URL;
 const ONE_TRY = { retryCount: 0, retryLimit: 2 };
 
 beforeAll(() => {
-  if (!MAIL || !process.env.SMTP_PORT) throw new Error('Start the service fakes first (scripts/test.sh does; see scripts/fakes.sh)');
+  if (!MAIL || !process.env.SMTP_PORT)
+    throw new Error('Start the service fakes first (scripts/test.sh does; see scripts/fakes.sh)');
   process.env.REPORT_RETRY_LIMIT = '2';
   process.env.REPORT_RETRY_DELAY_SECONDS = '1';
 });
@@ -44,7 +52,12 @@ async function queuedSend() {
   const to = `worker-${randomUUID().slice(0, 8)}@example.test`;
   const w = await makeApprovedJob(to);
   await signInAs(w.office);
-  const { status, body } = await call(sendRoute, `/api/jobs/${w.job.id}/report`, { id: w.job.id }, jsonBody('POST', {}));
+  const { status, body } = await call(
+    sendRoute,
+    `/api/jobs/${w.job.id}/report`,
+    { id: w.job.id },
+    jsonBody('POST', {}),
+  );
   expect(status).toBe(202);
   return { w, to, sendId: body.id as string };
 }
@@ -91,15 +104,31 @@ describe('report sends: claimed before mailing, queued with their row', () => {
     const second = new PgBoss({ connectionString: process.env.DATABASE_URL!, max: 2 });
     second.on('error', () => undefined);
     await second.start();
-    await second.work<ReportJob>(REPORT_QUEUE, { pollingIntervalSeconds: 0.5, batchSize: 1, includeMetadata: true }, async (jobs) => {
-      for (const job of jobs) await deliverReportSend(job.data.sendId, { retryCount: job.retryCount, retryLimit: job.retryLimit });
-    });
+    await second.work<ReportJob>(
+      REPORT_QUEUE,
+      { pollingIntervalSeconds: 0.5, batchSize: 1, includeMetadata: true },
+      async (jobs) => {
+        for (const job of jobs)
+          await deliverReportSend(job.data.sendId, { retryCount: job.retryCount, retryLimit: job.retryLimit });
+      },
+    );
     try {
-      await eventually(async () => ((await ReportSend.findByPk(sendId))?.status === 'sent' ? true : undefined), 20_000, 'the send');
-      await eventually(async () => {
-        const jobs = await sequelize.query<{ state: string }>(`SELECT state FROM pgboss.job WHERE name = :name AND data->>'sendId' = :sendId`, { replacements: { name: REPORT_QUEUE, sendId }, type: QueryTypes.SELECT });
-        return jobs.length === 3 && jobs.every((j) => j.state === 'completed') ? true : undefined;
-      }, 20_000, 'all three queue jobs to finish');
+      await eventually(
+        async () => ((await ReportSend.findByPk(sendId))?.status === 'sent' ? true : undefined),
+        20_000,
+        'the send',
+      );
+      await eventually(
+        async () => {
+          const jobs = await sequelize.query<{ state: string }>(
+            `SELECT state FROM pgboss.job WHERE name = :name AND data->>'sendId' = :sendId`,
+            { replacements: { name: REPORT_QUEUE, sendId }, type: QueryTypes.SELECT },
+          );
+          return jobs.length === 3 && jobs.every((j) => j.state === 'completed') ? true : undefined;
+        },
+        20_000,
+        'all three queue jobs to finish',
+      );
       expect(await mailsTo(to)).toBe(1);
       expect((await ReportSend.findByPk(sendId))?.attempts).toBe(1);
     } finally {
@@ -113,7 +142,10 @@ describe('report sends: claimed before mailing, queued with their row', () => {
     await ReportSend.update({ status: 'sending', claimedAt: new Date() }, { where: { id: sendId } });
     expect(await deliverReportSend(sendId, ONE_TRY)).toBe('skipped');
     expect(await mailsTo(to)).toBe(0);
-    await ReportSend.update({ claimedAt: new Date(Date.now() - (CLAIM_LEASE_SECONDS + 5) * 1000) }, { where: { id: sendId } });
+    await ReportSend.update(
+      { claimedAt: new Date(Date.now() - (CLAIM_LEASE_SECONDS + 5) * 1000) },
+      { where: { id: sendId } },
+    );
     expect(await deliverReportSend(sendId, ONE_TRY)).toBe('sent');
     await sleep(300);
     expect(await mailsTo(to)).toBe(1);
@@ -124,7 +156,17 @@ describe('report sends: claimed before mailing, queued with their row', () => {
     const w = await makeApprovedJob(to);
     const orphan = await sequelize.transaction(async (transaction) => {
       const link = await createReportLink(w.company.id, w.job.id, linkExpiry(), transaction);
-      return ReportSend.create({ companyId: w.company.id, jobId: w.job.id, toAddress: to, linkExpiresAt: link.expiresAt, linkId: link.id, sentById: w.office.id }, { transaction });
+      return ReportSend.create(
+        {
+          companyId: w.company.id,
+          jobId: w.job.id,
+          toAddress: to,
+          linkExpiresAt: link.expiresAt,
+          linkId: link.id,
+          sentById: w.office.id,
+        },
+        { transaction },
+      );
     });
     // A send whose job is still waiting on the queue is not queued twice.
     const { sendId: waiting } = await queuedSend();
@@ -138,7 +180,11 @@ describe('report sends: claimed before mailing, queued with their row', () => {
 
     const worker = await startReportWorker({ pollingIntervalSeconds: 0.5 });
     try {
-      await eventually(async () => ((await ReportSend.findByPk(orphan.id))?.status === 'sent' ? true : undefined), 20_000, 'the swept send');
+      await eventually(
+        async () => ((await ReportSend.findByPk(orphan.id))?.status === 'sent' ? true : undefined),
+        20_000,
+        'the swept send',
+      );
       expect(await mailsTo(to)).toBe(1);
     } finally {
       await worker.stop();
@@ -152,7 +198,12 @@ describe('the worker’s start and its schedules', () => {
     const port = await freePort();
     const db = new URL(process.env.DATABASE_URL!);
     const viaProxy = Object.assign(new URL(db.href), { port: String(port) }).href;
-    const starting = startReportWorkerWhenReady({ connectionString: viaProxy, minDelayMs: 200, maxDelayMs: 800, pollingIntervalSeconds: 0.5 });
+    const starting = startReportWorkerWhenReady({
+      connectionString: viaProxy,
+      minDelayMs: 200,
+      maxDelayMs: 800,
+      pollingIntervalSeconds: 0.5,
+    });
     let proxy: Server | undefined;
     try {
       await eventually(async () => (starting.tries() >= 3 ? true : undefined), 10_000, 'three refused starts');
@@ -165,7 +216,11 @@ describe('the worker’s start and its schedules', () => {
       expect(worker, 'the worker started after the database came up').not.toBeNull();
 
       const { to, sendId } = await queuedSend();
-      await eventually(async () => ((await ReportSend.findByPk(sendId))?.status === 'sent' ? true : undefined), 20_000, 'the send');
+      await eventually(
+        async () => ((await ReportSend.findByPk(sendId))?.status === 'sent' ? true : undefined),
+        20_000,
+        'the send',
+      );
       expect(await mailsTo(to)).toBe(1);
     } finally {
       await starting.stop();
@@ -180,19 +235,35 @@ describe('the worker’s start and its schedules', () => {
     try {
       const boss = await getBoss();
       const schedules = await boss.getSchedules();
-      expect(schedules.map(({ name, cron }) => ({ name, cron }))).toEqual(expect.arrayContaining([
-        { name: UPLOAD_SWEEP_QUEUE, cron: '*/15 * * * *' },
-        { name: 'report-sweep', cron: '* * * * *' },
-      ]));
+      expect(schedules.map(({ name, cron }) => ({ name, cron }))).toEqual(
+        expect.arrayContaining([
+          { name: UPLOAD_SWEEP_QUEUE, cron: '*/15 * * * *' },
+          { name: 'report-sweep', cron: '* * * * *' },
+        ]),
+      );
       expect(SCHEDULES[UPLOAD_SWEEP_QUEUE]).toBe('*/15 * * * *');
 
       const key = `test/${w.company.id}/${randomUUID()}.png`;
       await putObject(key, Buffer.from('not checked yet'), 'image/png');
-      const stale = await Attachment.create({ companyId: w.company.id, jobId: w.job.id, kind: 'after', storageKey: key, contentType: 'image/png', byteSize: 15, status: 'pending' });
-      await sequelize.query('UPDATE attachments SET created_at = :at WHERE id = :id', { replacements: { at: new Date(Date.now() - 2 * 86_400_000), id: stale.id } });
+      const stale = await Attachment.create({
+        companyId: w.company.id,
+        jobId: w.job.id,
+        kind: 'after',
+        storageKey: key,
+        contentType: 'image/png',
+        byteSize: 15,
+        status: 'pending',
+      });
+      await sequelize.query('UPDATE attachments SET created_at = :at WHERE id = :id', {
+        replacements: { at: new Date(Date.now() - 2 * 86_400_000), id: stale.id },
+      });
       // What the cron does when it fires: put a job on the sweep queue.
       await boss.send(UPLOAD_SWEEP_QUEUE, {});
-      await eventually(async () => ((await Attachment.count({ where: { id: stale.id } })) === 0 ? true : undefined), 15_000, 'the sweep');
+      await eventually(
+        async () => ((await Attachment.count({ where: { id: stale.id } })) === 0 ? true : undefined),
+        15_000,
+        'the sweep',
+      );
       expect(await headObject(key)).toBeNull();
     } finally {
       await worker.stop();
@@ -214,7 +285,10 @@ async function tcpProxy(port: number, target: number): Promise<Server> {
   const server = createServer((socket) => {
     const upstream = createConnection({ host: '127.0.0.1', port: target });
     socket.pipe(upstream).pipe(socket);
-    const close = () => { socket.destroy(); upstream.destroy(); };
+    const close = () => {
+      socket.destroy();
+      upstream.destroy();
+    };
     socket.on('error', close);
     upstream.on('error', close);
   });

@@ -14,7 +14,8 @@ import { makeWorld } from './helpers/world';
 import { eventually, makeApprovedJob, pdfText } from './report-fixtures';
 
 const MAIL = process.env.MAIL_WEB_URL;
-const send = (jobId: string, body: unknown) => call(sendRoute, `/api/jobs/${jobId}/report`, { id: jobId }, jsonBody('POST', body));
+const send = (jobId: string, body: unknown) =>
+  call(sendRoute, `/api/jobs/${jobId}/report`, { id: jobId }, jsonBody('POST', body));
 const sends = (jobId: string) => call(sendsRoute, `/api/jobs/${jobId}/report-sends`, { id: jobId });
 const statusOf = async (id: string, wanted: string) => {
   const row = await ReportSend.findByPk(id);
@@ -23,7 +24,8 @@ const statusOf = async (id: string, wanted: string) => {
 
 let worker: { stop: () => Promise<void> };
 beforeAll(async () => {
-  if (!MAIL || !process.env.SMTP_PORT) throw new Error('Start the service fakes first (scripts/test.sh does; see scripts/fakes.sh)');
+  if (!MAIL || !process.env.SMTP_PORT)
+    throw new Error('Start the service fakes first (scripts/test.sh does; see scripts/fakes.sh)');
   // Short retries so a failing send gives up within seconds.
   process.env.REPORT_RETRY_LIMIT = '2';
   process.env.REPORT_RETRY_DELAY_SECONDS = '1';
@@ -48,10 +50,14 @@ describe('POST /api/jobs/:id/report', () => {
     expect(row.messageId).toBeTruthy();
     expect((await Job.findByPk(w.job.id))?.status).toBe('reported');
 
-    const listed = await eventually(async () => {
-      const messages = (await (await fetch(`${MAIL}/messages`)).json()) as { id: string; to: string }[];
-      return messages.find((m) => m.to.includes(to));
-    }, 10_000, 'the message in the mailbox');
+    const listed = await eventually(
+      async () => {
+        const messages = (await (await fetch(`${MAIL}/messages`)).json()) as { id: string; to: string }[];
+        return messages.find((m) => m.to.includes(to));
+      },
+      10_000,
+      'the message in the mailbox',
+    );
     const raw = Buffer.from(await (await fetch(`${MAIL}/messages/${listed.id}.eml`)).arrayBuffer());
     const mail = await simpleParser(raw);
     expect(mail.subject).toContain(w.job.number);
@@ -76,8 +82,13 @@ describe('POST /api/jobs/:id/report', () => {
 
     const log = await sends(w.job.id);
     expect(log.status).toBe(200);
-    expect(log.body.items).toEqual([expect.objectContaining({ id: body.id, status: 'sent', attempts: 1, sentByName: w.office.name })]);
-    const audit = await AuditEntry.findAll({ where: { entityId: w.job.id, companyId: w.company.id }, order: [['createdAt', 'ASC']] });
+    expect(log.body.items).toEqual([
+      expect.objectContaining({ id: body.id, status: 'sent', attempts: 1, sentByName: w.office.name }),
+    ]);
+    const audit = await AuditEntry.findAll({
+      where: { entityId: w.job.id, companyId: w.company.id },
+      order: [['createdAt', 'ASC']],
+    });
     expect(audit.map((a) => a.action)).toEqual(expect.arrayContaining(['report_requested', 'report_sent']));
   });
 
@@ -111,7 +122,16 @@ describe('POST /api/jobs/:id/report', () => {
 
   it('answers 409 when a repair of an approved job has no approved install', async () => {
     const w = await makeApprovedJob('c@example.test');
-    await Repair.create({ companyId: w.company.id, jobId: w.job.id, segmentId: w.segment.id, position: 2, distanceMm: 20000, defectType: 'hole', conditionGrade: 3, defectLengthMm: 100 });
+    await Repair.create({
+      companyId: w.company.id,
+      jobId: w.job.id,
+      segmentId: w.segment.id,
+      position: 2,
+      distanceMm: 20000,
+      defectType: 'hole',
+      conditionGrade: 3,
+      defectLengthMm: 100,
+    });
     await signInAs(w.office);
     const { status, body } = await send(w.job.id, {});
     expect(status).toBe(409);
@@ -160,7 +180,9 @@ describe('POST /api/jobs/:id/report', () => {
   it('lets the office preview the PDF', async () => {
     const w = await makeApprovedJob('c@example.test');
     await signInAs(w.office);
-    const response = await previewRoute(new Request(`http://localhost/api/jobs/${w.job.id}/report`), { params: Promise.resolve({ id: w.job.id }) });
+    const response = await previewRoute(new Request(`http://localhost/api/jobs/${w.job.id}/report`), {
+      params: Promise.resolve({ id: w.job.id }),
+    });
     expect(response.status).toBe(200);
     expect(response.headers.get('content-type')).toBe('application/pdf');
     const text = await pdfText(Buffer.from(await response.arrayBuffer()));

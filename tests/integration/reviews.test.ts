@@ -11,38 +11,72 @@ import { signInAs, signOut } from './helpers/session';
 import { makeInstallWorld, type InstallWorld } from './helpers/world';
 
 const list = (query = '') => call(listRoute, `/api/installs${query}`);
-const review = (id: string, payload: unknown) => call(reviewRoute, `/api/installs/${id}/review`, { id }, jsonBody('POST', payload));
+const review = (id: string, payload: unknown) =>
+  call(reviewRoute, `/api/installs/${id}/review`, { id }, jsonBody('POST', payload));
 
-const asSessionUser = (u: User, crewIds: string[]) => ({ id: u.id, companyId: u.companyId, role: u.role, name: u.name, email: u.email, crewIds });
+const asSessionUser = (u: User, crewIds: string[]) => ({
+  id: u.id,
+  companyId: u.companyId,
+  role: u.role,
+  name: u.name,
+  email: u.email,
+  crewIds,
+});
 
 type Bend = Partial<Record<InstallEventType, number>>;
 
 /** A job of its own with `repairs` repairs; returns the job and its repairs. */
 async function newJob(w: InstallWorld, repairs = 1, customerId = w.customer.id) {
   const job = await Job.create({
-    companyId: w.company.id, number: `Q-${randomUUID().slice(0, 8)}`, customerId, siteId: w.site.id, crewId: w.crew.id, status: 'scheduled', scheduledDate: '2026-12-01',
+    companyId: w.company.id,
+    number: `Q-${randomUUID().slice(0, 8)}`,
+    customerId,
+    siteId: w.site.id,
+    crewId: w.crew.id,
+    status: 'scheduled',
+    scheduledDate: '2026-12-01',
   });
   const made = [];
   for (let i = 0; i < repairs; i += 1) {
-    made.push(await Repair.create({
-      companyId: w.company.id, jobId: job.id, segmentId: w.segment.id, position: i + 1, distanceMm: 12000 + i * 1000, defectType: 'open_fracture', conditionGrade: 4, defectLengthMm: 300,
-    }));
+    made.push(
+      await Repair.create({
+        companyId: w.company.id,
+        jobId: job.id,
+        segmentId: w.segment.id,
+        position: i + 1,
+        distanceMm: 12000 + i * 1000,
+        defectType: 'open_fracture',
+        conditionGrade: 4,
+        defectLengthMm: 300,
+      }),
+    );
   }
   return { job, repairs: made };
 }
 
 /** Runs a whole install of the repair as the world's foreman: `bend` moves taps, `skip` leaves some out, `signOff` false stops before it. */
-async function finishedInstall(w: InstallWorld, repair: Repair, { bend = {}, skip = [], signOff = true }: { bend?: Bend; skip?: InstallEventType[]; signOff?: boolean } = {}) {
+async function finishedInstall(
+  w: InstallWorld,
+  repair: Repair,
+  { bend = {}, skip = [], signOff = true }: { bend?: Bend; skip?: InstallEventType[]; signOff?: boolean } = {},
+) {
   await signInAs(w.foreman);
   const id = await startInstall({ ...w, repair });
-  const taps = cleanInstall(w, bend).filter((tap) => !skip.includes(tap.type) && (signOff || tap.type !== 'signed_off'));
+  const taps = cleanInstall(w, bend).filter(
+    (tap) => !skip.includes(tap.type) && (signOff || tap.type !== 'signed_off'),
+  );
   await postAll(id, taps);
   return id;
 }
 
 // The example epoxy at 20 °C (helpers/world.ts): mixed at minute 16, inflate by minute 46, hold 90 min
 // (99 min with the company's default 10 % hold reserve, so the late one is held 100 min).
-const LATE_INFLATE: Bend = { bladder_inflated: 47, pressure_reading: 60, bladder_deflated: 147, inspection_recorded: 148 };
+const LATE_INFLATE: Bend = {
+  bladder_inflated: 47,
+  pressure_reading: 60,
+  bladder_deflated: 147,
+  inspection_recorded: 148,
+};
 const EARLY_DEFLATE: Bend = { bladder_deflated: 100 };
 
 describe('GET /api/installs', () => {
@@ -55,7 +89,10 @@ describe('GET /api/installs', () => {
     const other = await Customer.create({ companyId: a.company.id, name: 'Quillfeather Estates' });
     // Finished at minutes 150, 151, 152 and 149: the tie between the two critical ones goes to the older.
     ids.clean = await finishedInstall(a, (await newJob(a)).repairs[0]);
-    ids.warning = await finishedInstall(a, (await newJob(a, 1, other.id)).repairs[0], { skip: ['dry_run_started', 'dry_run_finished'], bend: { signed_off: 151 } });
+    ids.warning = await finishedInstall(a, (await newJob(a, 1, other.id)).repairs[0], {
+      skip: ['dry_run_started', 'dry_run_finished'],
+      bend: { signed_off: 151 },
+    });
     ids.late = await finishedInstall(a, (await newJob(a)).repairs[0], { bend: { ...LATE_INFLATE, signed_off: 152 } });
     ids.early = await finishedInstall(a, (await newJob(a)).repairs[0], { bend: { ...EARLY_DEFLATE, signed_off: 149 } });
     ids.running = await finishedInstall(a, (await newJob(a)).repairs[0], { signOff: false });
@@ -77,7 +114,9 @@ describe('GET /api/installs', () => {
     expect(early.flags.map((f: { kind: string }) => f.kind)).toEqual(['early-deflate']);
     expect(late.flags).toEqual([expect.objectContaining({ kind: 'late-inflate', severity: 'critical' })]);
     // The sentence names its instants in the company's zone (America/Denver), not in UTC.
-    expect(late.flags[0].message).toMatch(/^Inflated at \d{4}-\d{2}-\d{2} \d{2}:\d{2} GMT-[67], after the inflate-by time/);
+    expect(late.flags[0].message).toMatch(
+      /^Inflated at \d{4}-\d{2}-\d{2} \d{2}:\d{2} GMT-[67], after the inflate-by time/,
+    );
     expect(warning.flags).toEqual([expect.objectContaining({ kind: 'no-dry-run', severity: 'warning' })]);
     expect(warning.worstSeverity).toBe('warning');
     expect(clean.flags).toEqual([]);
@@ -93,7 +132,12 @@ describe('GET /api/installs', () => {
     expect(new Date(late.finishedAt).getTime()).toBeGreaterThan(new Date(early.finishedAt).getTime());
 
     const mildFirst = await list('?status=awaiting_review&sort=-severity');
-    expect(mildFirst.body.items.map((i: { id: string }) => i.id)).toEqual([ids.clean, ids.warning, ids.early, ids.late]);
+    expect(mildFirst.body.items.map((i: { id: string }) => i.id)).toEqual([
+      ids.clean,
+      ids.warning,
+      ids.early,
+      ids.late,
+    ]);
   });
 
   it('sorts by finish and creation time, pages, filters by status and searches job number and customer', async () => {
@@ -102,7 +146,13 @@ describe('GET /api/installs', () => {
     expect(byFinish.body.items.map((i: { id: string }) => i.id)).toEqual([ids.late, ids.warning, ids.clean, ids.early]);
     const all = await list('?sort=createdAt');
     expect(all.body.total).toBe(5);
-    expect(all.body.items.map((i: { id: string }) => i.id)).toEqual([ids.clean, ids.warning, ids.late, ids.early, ids.running]);
+    expect(all.body.items.map((i: { id: string }) => i.id)).toEqual([
+      ids.clean,
+      ids.warning,
+      ids.late,
+      ids.early,
+      ids.running,
+    ]);
     const second = await list('?sort=createdAt&pageSize=2&page=2');
     expect(second.body).toMatchObject({ total: 5, page: 2, pageSize: 2, pageCount: 3 });
     expect(second.body.items.map((i: { id: string }) => i.id)).toEqual([ids.late, ids.early]);
@@ -122,7 +172,10 @@ describe('GET /api/installs', () => {
     await signInAs(a.office);
     const { status, body: csv } = await list('?status=awaiting_review&format=csv&pageSize=1');
     expect(status).toBe(200);
-    const lines = String(csv).replace(/^\uFEFF/, '').trim().split('\r\n');
+    const lines = String(csv)
+      .replace(/^\uFEFF/, '')
+      .trim()
+      .split('\r\n');
     expect(lines[0]).toBe('Job,Customer,Site,Crew,Repair,Status,Finished,Flags');
     expect(lines).toHaveLength(5);
     expect(lines[1]).toMatch(/critical: Deflated at/);
@@ -162,14 +215,21 @@ describe('POST /api/installs/:id/review', () => {
     expect((await Job.findByPk(job.id))!.status).toBe('awaiting_review');
     // Done weeks ago: off the crew's Today list until the office sends it back.
     await job.update({ scheduledDate: '2020-01-06' });
-    const crewToday = async () => (await listTodayJobs(asSessionUser(a.foreman, [a.crew.id]))).jobs.find((j) => j.id === job.id);
+    const crewToday = async () =>
+      (await listTodayJobs(asSessionUser(a.foreman, [a.crew.id]))).jobs.find((j) => j.id === job.id);
     expect(await crewToday()).toBeUndefined();
     await signInAs(a.office);
     const comment = 'Inflated late: add the gauge photo and call the office before the next mix.';
     const { status, body: answer } = await review(id, { decision: 'sent_back', comment: `  ${comment} ` });
     expect(status).toBe(201);
-    expect(answer).toMatchObject({ review: { decision: 'sent_back', comment, reviewerId: a.office.id }, install: { status: 'sent_back' }, job: { status: 'sent_back', reviewComment: comment } });
-    expect(await Review.findAll({ where: { installId: id }, raw: true })).toEqual([expect.objectContaining({ decision: 'sent_back', comment, companyId: a.company.id })]);
+    expect(answer).toMatchObject({
+      review: { decision: 'sent_back', comment, reviewerId: a.office.id },
+      install: { status: 'sent_back' },
+      job: { status: 'sent_back', reviewComment: comment },
+    });
+    expect(await Review.findAll({ where: { installId: id }, raw: true })).toEqual([
+      expect.objectContaining({ decision: 'sent_back', comment, companyId: a.company.id }),
+    ]);
     expect((await Install.findByPk(id))!.status).toBe('sent_back');
     expect(await Job.findByPk(job.id)).toMatchObject({ status: 'sent_back', reviewComment: comment });
     expect(await crewToday()).toMatchObject({ status: 'sent_back', reviewComment: comment });
@@ -177,7 +237,11 @@ describe('POST /api/installs/:id/review', () => {
     expect(audit).toMatchObject({ entityType: 'install', userId: a.office.id, reason: comment });
     expect(audit!.changes).toMatchObject({ status: { from: 'awaiting_review', to: 'sent_back' } });
     const jobAudit = await AuditEntry.findOne({ where: { entityId: job.id, entityType: 'job' } });
-    expect(jobAudit).toMatchObject({ action: 'update', reason: comment, changes: { status: { from: 'awaiting_review', to: 'sent_back' }, reviewComment: { from: null, to: comment } } });
+    expect(jobAudit).toMatchObject({
+      action: 'update',
+      reason: comment,
+      changes: { status: { from: 'awaiting_review', to: 'sent_back' }, reviewComment: { from: null, to: comment } },
+    });
 
     // Decided once: a second decision conflicts.
     expect((await review(id, { decision: 'approved' })).status).toBe(409);
@@ -187,7 +251,12 @@ describe('POST /api/installs/:id/review', () => {
     await signInAs(a.foreman);
     expect((await postEvent(id, body('note', 200, { text: 'Gauge photo is on the tablet' }))).status).toBe(201);
     const reading = (await InstallEvent.findOne({ where: { installId: id, type: 'pressure_reading' } }))!;
-    const fix = body('correction', 201, { reason: 'Read the wrong gauge', payload: { pressureKpa: 99 } }, { correctsEventId: reading.id });
+    const fix = body(
+      'correction',
+      201,
+      { reason: 'Read the wrong gauge', payload: { pressureKpa: 99 } },
+      { correctsEventId: reading.id },
+    );
     expect((await postEvent(id, fix)).status).toBe(201);
     expect((await Install.findByPk(id))!.status).toBe('sent_back');
 
@@ -197,7 +266,9 @@ describe('POST /api/installs/:id/review', () => {
     await signInAs(a.technician);
     expect((await postEvent(id, body('signed_off', 203, { name: 'Tech' }))).status).toBe(403);
     await signInAs(a.foreman);
-    expect((await postEvent(id, body('inspection_recorded', 204, { result: 'pass', notes: 'Re-checked on camera' }))).status).toBe(201);
+    expect(
+      (await postEvent(id, body('inspection_recorded', 204, { result: 'pass', notes: 'Re-checked on camera' }))).status,
+    ).toBe(201);
     expect((await postEvent(id, body('signed_off', 205, { name: 'Foreman' }))).status).toBe(201);
     expect((await Install.findByPk(id))!.status).toBe('awaiting_review');
     expect(await Job.findByPk(job.id)).toMatchObject({ status: 'awaiting_review', reviewComment: comment });
@@ -227,13 +298,23 @@ describe('POST /api/installs/:id/review', () => {
     await signInAs(a.admin);
     const one = await review(first, { decision: 'approved' });
     expect(one.status).toBe(201);
-    expect(one.body).toMatchObject({ review: { decision: 'approved', comment: null }, install: { status: 'approved' }, job: { status: 'awaiting_review' } });
-    expect(await Job.findByPk(job.id)).toMatchObject({ status: 'awaiting_review', reviewComment: 'Earlier: missing pressure reading' });
+    expect(one.body).toMatchObject({
+      review: { decision: 'approved', comment: null },
+      install: { status: 'approved' },
+      job: { status: 'awaiting_review' },
+    });
+    expect(await Job.findByPk(job.id)).toMatchObject({
+      status: 'awaiting_review',
+      reviewComment: 'Earlier: missing pressure reading',
+    });
 
     const two = await review(second, { decision: 'approved', comment: 'Good work' });
     expect(two.status).toBe(201);
     expect(await Job.findByPk(job.id)).toMatchObject({ status: 'approved', reviewComment: null });
-    expect(await AuditEntry.findOne({ where: { entityId: second, action: 'install.approved' } })).toMatchObject({ reason: 'Good work', userId: a.admin.id });
+    expect(await AuditEntry.findOne({ where: { entityId: second, action: 'install.approved' } })).toMatchObject({
+      reason: 'Good work',
+      userId: a.admin.id,
+    });
     expect(await AuditEntry.count({ where: { entityId: job.id, entityType: 'job', action: 'update' } })).toBe(1);
   });
 

@@ -20,17 +20,41 @@ describe('crew schedule', () => {
   beforeEach(() => signOut());
 
   /** A job of the world with one planned repair (and one cancelled, which the board does not count). */
-  async function mkJob(w: World, fields: { crewId?: string | null; scheduledDate?: string | null; status?: JobStatus; archivedAt?: Date | null } = {}) {
+  async function mkJob(
+    w: World,
+    fields: {
+      crewId?: string | null;
+      scheduledDate?: string | null;
+      status?: JobStatus;
+      archivedAt?: Date | null;
+    } = {},
+  ) {
     const job = await Job.create({
-      companyId: w.company.id, number: `S-${++serial}-${w.company.id.slice(0, 6)}`, customerId: w.customer.id, siteId: w.site.id,
-      crewId: null, scheduledDate: null, status: 'draft', ...fields,
+      companyId: w.company.id,
+      number: `S-${++serial}-${w.company.id.slice(0, 6)}`,
+      customerId: w.customer.id,
+      siteId: w.site.id,
+      crewId: null,
+      scheduledDate: null,
+      status: 'draft',
+      ...fields,
     });
-    const repair = { companyId: w.company.id, jobId: job.id, segmentId: w.segment.id, distanceMm: 5000, defectType: 'hole' as const, conditionGrade: 3, defectLengthMm: 100 };
+    const repair = {
+      companyId: w.company.id,
+      jobId: job.id,
+      segmentId: w.segment.id,
+      distanceMm: 5000,
+      defectType: 'hole' as const,
+      conditionGrade: 3,
+      defectLengthMm: 100,
+    };
     const [planned] = await Repair.bulkCreate([repair, { ...repair, position: 2, status: 'cancelled' as const }]);
     return { job, repair: planned };
   }
-  const put = (jobId: string, body: unknown) => call(scheduleRoute, `/api/jobs/${jobId}/schedule`, { id: jobId }, jsonBody('PUT', body));
-  const del = (jobId: string) => call(unscheduleRoute, `/api/jobs/${jobId}/schedule`, { id: jobId }, { method: 'DELETE' });
+  const put = (jobId: string, body: unknown) =>
+    call(scheduleRoute, `/api/jobs/${jobId}/schedule`, { id: jobId }, jsonBody('PUT', body));
+  const del = (jobId: string) =>
+    call(unscheduleRoute, `/api/jobs/${jobId}/schedule`, { id: jobId }, { method: 'DELETE' });
   const board = (query = '') => call(boardRoute, `/api/schedule${query}`);
   const row = (crews: BoardCrew[], id: string) => crews.find((crew) => crew.id === id)!;
   const cell = (crews: BoardCrew[], id: string, date: string) => row(crews, id).cells.find((c) => c.date === date)!;
@@ -52,30 +76,61 @@ describe('crew schedule', () => {
       const { status, body } = await board('?week=2026-12-03');
       expect(status).toBe(200);
       expect(body.timeZone).toBe('America/Denver');
-      expect(body.week).toMatchObject({ start: '2026-11-30', end: '2026-12-06', previous: '2026-11-23', next: '2026-12-07' });
-      expect(body.days.map((d: { label: string }) => d.label)).toEqual(['Mon 30 Nov', 'Tue 1 Dec', 'Wed 2 Dec', 'Thu 3 Dec', 'Fri 4 Dec', 'Sat 5 Dec', 'Sun 6 Dec']);
+      expect(body.week).toMatchObject({
+        start: '2026-11-30',
+        end: '2026-12-06',
+        previous: '2026-11-23',
+        next: '2026-12-07',
+      });
+      expect(body.days.map((d: { label: string }) => d.label)).toEqual([
+        'Mon 30 Nov',
+        'Tue 1 Dec',
+        'Wed 2 Dec',
+        'Thu 3 Dec',
+        'Fri 4 Dec',
+        'Sat 5 Dec',
+        'Sun 6 Dec',
+      ]);
       // Local midnight in Denver is 07:00 UTC in December.
       expect(body.days[0].startsAt).toBe('2026-11-30T07:00:00.000Z');
       expect(body.crews.map((c: BoardCrew) => c.id)).toEqual([a.crew.id, a.otherCrew.id]);
 
       const tuesday = cell(body.crews, a.crew.id, '2026-12-01');
-      expect(tuesday.jobs).toEqual([expect.objectContaining({
-        id: a.job.id, number: a.job.number, status: 'scheduled', customerName: a.customer.name, siteAddress: '1 Test Street, Testville', repairCount: 1,
-      })]);
+      expect(tuesday.jobs).toEqual([
+        expect.objectContaining({
+          id: a.job.id,
+          number: a.job.number,
+          status: 'scheduled',
+          customerName: a.customer.name,
+          siteAddress: '1 Test Street, Testville',
+          repairCount: 1,
+        }),
+      ]);
       expect(tuesday).toMatchObject({ count: 1, overCapacity: false });
-      expect(cell(body.crews, a.otherCrew.id, '2026-12-06').jobs.map((j: { id: string }) => j.id)).toEqual([sunday.job.id]);
+      expect(cell(body.crews, a.otherCrew.id, '2026-12-06').jobs.map((j: { id: string }) => j.id)).toEqual([
+        sunday.job.id,
+      ]);
       const everyId = body.crews.flatMap((c: BoardCrew) => c.cells.flatMap((x) => x.jobs.map((j) => j.id)));
       expect(everyId).not.toContain(nextMonday.job.id);
       expect(everyId).not.toContain(lastSunday.job.id);
       expect(everyId).not.toContain(cancelled.job.id);
       // The next week starts with the Monday job.
       const next = await board('?week=2026-12-07');
-      expect(cell(next.body.crews, a.otherCrew.id, '2026-12-07').jobs.map((j: { id: string }) => j.id)).toEqual([nextMonday.job.id]);
+      expect(cell(next.body.crews, a.otherCrew.id, '2026-12-07').jobs.map((j: { id: string }) => j.id)).toEqual([
+        nextMonday.job.id,
+      ]);
       await Job.destroy({ where: { id: [sunday.job.id, nextMonday.job.id, lastSunday.job.id, cancelled.job.id] } });
     });
 
     it('defaults to the week holding "today" in the company zone, not in UTC', async () => {
-      const office = { id: a.office.id, companyId: a.company.id, role: 'office' as const, name: 'o', email: 'o@x.test', crewIds: [] };
+      const office = {
+        id: a.office.id,
+        companyId: a.company.id,
+        role: 'office' as const,
+        name: 'o',
+        email: 'o@x.test',
+        crewIds: [],
+      };
       // 06:30 UTC on Monday 7 Dec is 23:30 on Sunday 6 Dec in Denver: still the week of 30 Nov, and Sunday is today.
       const late = await getScheduleBoard(office, undefined, new Date('2026-12-07T06:30:00Z'));
       expect(late.week.start).toBe('2026-11-30');
@@ -97,8 +152,12 @@ describe('crew schedule', () => {
 
     it('marks a crew day booked beyond its daily capacity', async () => {
       await Crew.update({ dailyCapacity: 2 }, { where: { id: a.otherCrew.id } });
-      const made = await Promise.all([1, 2, 3].map(() => mkJob(a, { crewId: a.otherCrew.id, scheduledDate: '2026-12-02', status: 'scheduled' })));
-      const two = await Promise.all([1, 2].map(() => mkJob(a, { crewId: a.otherCrew.id, scheduledDate: '2026-12-03', status: 'scheduled' })));
+      const made = await Promise.all(
+        [1, 2, 3].map(() => mkJob(a, { crewId: a.otherCrew.id, scheduledDate: '2026-12-02', status: 'scheduled' })),
+      );
+      const two = await Promise.all(
+        [1, 2].map(() => mkJob(a, { crewId: a.otherCrew.id, scheduledDate: '2026-12-03', status: 'scheduled' })),
+      );
       await signInAs(a.office);
       const { body } = await board('?week=2026-11-30');
       expect(row(body.crews, a.otherCrew.id).dailyCapacity).toBe(2);
@@ -152,7 +211,10 @@ describe('crew schedule', () => {
       await signInAs(b.office);
       const { body } = await board('?week=2026-11-30');
       expect(body.crews.map((c: BoardCrew) => c.id).sort()).toEqual([b.crew.id, b.otherCrew.id].sort());
-      const ids = [...body.crews.flatMap((c: BoardCrew) => c.cells.flatMap((x) => x.jobs.map((j) => j.id))), ...body.unscheduled.map((j: { id: string }) => j.id)];
+      const ids = [
+        ...body.crews.flatMap((c: BoardCrew) => c.cells.flatMap((x) => x.jobs.map((j) => j.id))),
+        ...body.unscheduled.map((j: { id: string }) => j.id),
+      ];
       expect(ids).not.toContain(a.job.id);
     });
   });
@@ -165,7 +227,11 @@ describe('crew schedule', () => {
       await signInAs(a.office);
       const ok = await put(first.job.id, { crewId: a.otherCrew.id, date: '2026-12-10' });
       expect(ok.status).toBe(200);
-      expect(ok.body).toMatchObject({ job: { id: first.job.id, status: 'scheduled', crewId: a.otherCrew.id, scheduledDate: '2026-12-10' }, jobsThatDay: 1, overCapacity: false });
+      expect(ok.body).toMatchObject({
+        job: { id: first.job.id, status: 'scheduled', crewId: a.otherCrew.id, scheduledDate: '2026-12-10' },
+        jobsThatDay: 1,
+        overCapacity: false,
+      });
       const over = await put(second.job.id, { crewId: a.otherCrew.id, date: '2026-12-10' });
       expect(over.status).toBe(200);
       expect(over.body).toMatchObject({ jobsThatDay: 2, overCapacity: true });
@@ -173,7 +239,9 @@ describe('crew schedule', () => {
       const [entry] = await audits(first.job.id);
       expect(entry).toMatchObject({ action: 'schedule', entityType: 'job', userId: a.office.id, reason: null });
       expect(entry.changes).toEqual({
-        crewId: { from: null, to: a.otherCrew.id }, scheduledDate: { from: null, to: '2026-12-10' }, status: { from: 'draft', to: 'scheduled' },
+        crewId: { from: null, to: a.otherCrew.id },
+        scheduledDate: { from: null, to: '2026-12-10' },
+        status: { from: 'draft', to: 'scheduled' },
       });
       const [overEntry] = await audits(second.job.id);
       expect(overEntry.reason).toMatch(/over capacity/i);
@@ -181,7 +249,9 @@ describe('crew schedule', () => {
       // Moving a scheduled job to another day keeps its status and audits only the day.
       const moved = await put(first.job.id, { crewId: a.otherCrew.id, date: '2026-12-11' });
       expect(moved.body.job.status).toBe('scheduled');
-      expect((await audits(first.job.id))[1].changes).toEqual({ scheduledDate: { from: '2026-12-10', to: '2026-12-11' } });
+      expect((await audits(first.job.id))[1].changes).toEqual({
+        scheduledDate: { from: '2026-12-10', to: '2026-12-11' },
+      });
       await Job.destroy({ where: { id: [first.job.id, second.job.id] } });
       await Crew.update({ dailyCapacity: 4 }, { where: { id: a.otherCrew.id } });
     });
@@ -250,7 +320,14 @@ describe('crew schedule', () => {
         mkJob(a, { archivedAt: new Date() }),
       ]);
       const underway = await mkJob(a, { status: 'in_progress', crewId: a.crew.id, scheduledDate: '2026-11-20' });
-      await Install.create({ companyId: a.company.id, repairId: underway.repair.id, jobId: underway.job.id, crewId: a.crew.id, status: 'in_progress', startedAt: new Date() });
+      await Install.create({
+        companyId: a.company.id,
+        repairId: underway.repair.id,
+        jobId: underway.job.id,
+        crewId: a.crew.id,
+        status: 'in_progress',
+        startedAt: new Date(),
+      });
       for (const { job } of [...refused, underway]) {
         const before = job.get({ plain: true });
         const moved = await put(job.id, { crewId: a.otherCrew.id, date: '2026-12-04' });
@@ -258,7 +335,11 @@ describe('crew schedule', () => {
         expect(moved.body.error.message).toContain(job.number);
         expect((await del(job.id)).status, `DELETE ${job.status}`).toBe(409);
         await job.reload();
-        expect(job.get({ plain: true })).toMatchObject({ crewId: before.crewId, scheduledDate: before.scheduledDate, status: before.status });
+        expect(job.get({ plain: true })).toMatchObject({
+          crewId: before.crewId,
+          scheduledDate: before.scheduledDate,
+          status: before.status,
+        });
         expect(await audits(job.id)).toHaveLength(0);
       }
       await Job.destroy({ where: { id: [...refused, underway].map((m) => m.job.id) } });
@@ -268,12 +349,23 @@ describe('crew schedule', () => {
       const { job, repair } = await mkJob(a, { status: 'in_progress', crewId: a.crew.id, scheduledDate: '2026-11-20' });
       await Install.bulkCreate([
         { companyId: a.company.id, repairId: repair.id, jobId: job.id, crewId: a.crew.id, status: 'not_started' },
-        { companyId: a.company.id, repairId: repair.id, jobId: job.id, crewId: a.crew.id, status: 'abandoned', startedAt: new Date() },
+        {
+          companyId: a.company.id,
+          repairId: repair.id,
+          jobId: job.id,
+          crewId: a.crew.id,
+          status: 'abandoned',
+          startedAt: new Date(),
+        },
       ]);
       await signInAs(a.office);
       const moved = await put(job.id, { crewId: a.otherCrew.id, date: '2026-12-04' });
       expect(moved.status).toBe(200);
-      expect(moved.body.job).toMatchObject({ status: 'in_progress', crewId: a.otherCrew.id, scheduledDate: '2026-12-04' });
+      expect(moved.body.job).toMatchObject({
+        status: 'in_progress',
+        crewId: a.otherCrew.id,
+        scheduledDate: '2026-12-04',
+      });
       await job.destroy();
     });
   });
@@ -290,7 +382,9 @@ describe('crew schedule', () => {
       const [entry] = await audits(job.id);
       expect(entry).toMatchObject({ action: 'unschedule', entityType: 'job', userId: a.admin.id });
       expect(entry.changes).toEqual({
-        crewId: { from: a.crew.id, to: null }, scheduledDate: { from: '2026-12-03', to: null }, status: { from: 'scheduled', to: 'draft' },
+        crewId: { from: a.crew.id, to: null },
+        scheduledDate: { from: '2026-12-03', to: null },
+        status: { from: 'scheduled', to: 'draft' },
       });
       // Unscheduling what is not scheduled changes nothing and writes no second line.
       expect((await del(job.id)).status).toBe(200);

@@ -15,18 +15,26 @@ describe('sites API', () => {
     b = await makeWorld('Beta');
     otherCustomer = await Customer.create({ companyId: a.company.id, name: 'Juniper Court' });
     // Four more sites so paging, sorting and filters have something to do (world's own site is "Site", Testville).
-    await Site.bulkCreate([
-      { name: 'Alder Yard', city: 'Oakridge', addressLine: '4 Mill Lane', customerId: a.customer.id },
-      { name: 'Birch House', city: 'Marston', addressLine: '12 Quarry Road', customerId: a.customer.id },
-      { name: 'Cedar Block', city: 'Zellwood', addressLine: '7 Canal Walk', customerId: otherCustomer.id },
-      { name: 'Damson Row', city: 'Brookfield', addressLine: '90 Mill Lane', customerId: otherCustomer.id },
-    ].map((site) => ({ ...site, companyId: a.company.id })));
+    await Site.bulkCreate(
+      [
+        { name: 'Alder Yard', city: 'Oakridge', addressLine: '4 Mill Lane', customerId: a.customer.id },
+        { name: 'Birch House', city: 'Marston', addressLine: '12 Quarry Road', customerId: a.customer.id },
+        { name: 'Cedar Block', city: 'Zellwood', addressLine: '7 Canal Walk', customerId: otherCustomer.id },
+        { name: 'Damson Row', city: 'Brookfield', addressLine: '90 Mill Lane', customerId: otherCustomer.id },
+      ].map((site) => ({ ...site, companyId: a.company.id })),
+    );
   });
   beforeEach(() => signOut());
 
   const count = () => Site.count({ where: { companyId: a.company.id } });
   const names = (body: { items: { name: string }[] }) => body.items.map((s) => s.name);
-  const valid = () => ({ customerId: a.customer.id, name: 'Elm Terrace', addressLine: '3 Elm Terrace', city: 'Marston', postalCode: 'MS1 2AB' });
+  const valid = () => ({
+    customerId: a.customer.id,
+    name: 'Elm Terrace',
+    addressLine: '3 Elm Terrace',
+    city: 'Marston',
+    postalCode: 'MS1 2AB',
+  });
 
   it('answers 401 without a session', async () => {
     expect((await call(listRoute, '/api/sites')).status).toBe(401);
@@ -43,7 +51,10 @@ describe('sites API', () => {
     expect(names((await call(listRoute, '/api/sites?pageSize=2&page=3&sort=name')).body)).toEqual(['Site']);
     expect(names((await call(listRoute, '/api/sites?pageSize=2&sort=-city')).body)).toEqual(['Cedar Block', 'Site']);
     expect(names((await call(listRoute, '/api/sites?sort=city&dir=asc&pageSize=1')).body)).toEqual(['Damson Row']);
-    expect(names((await call(listRoute, '/api/sites?q=mill%20lane&sort=name')).body)).toEqual(['Alder Yard', 'Damson Row']);
+    expect(names((await call(listRoute, '/api/sites?q=mill%20lane&sort=name')).body)).toEqual([
+      'Alder Yard',
+      'Damson Row',
+    ]);
     expect(names((await call(listRoute, '/api/sites?q=marst')).body)).toEqual(['Birch House']);
     const byCustomer = await call(listRoute, `/api/sites?customerId=${otherCustomer.id}&sort=name`);
     expect(names(byCustomer.body)).toEqual(['Cedar Block', 'Damson Row']);
@@ -61,9 +72,15 @@ describe('sites API', () => {
 
   it('exports the current filter as CSV, every row, not one page', async () => {
     await signInAs(a.office);
-    const { status, body } = await call(listRoute, `/api/sites?format=csv&customerId=${a.customer.id}&pageSize=1&sort=name`);
+    const { status, body } = await call(
+      listRoute,
+      `/api/sites?format=csv&customerId=${a.customer.id}&pageSize=1&sort=name`,
+    );
     expect(status).toBe(200);
-    const lines = String(body).replace(/^\uFEFF/, '').trim().split('\r\n');
+    const lines = String(body)
+      .replace(/^\uFEFF/, '')
+      .trim()
+      .split('\r\n');
     expect(lines[0]).toBe('Site,Customer,Street address,City,Region,Postal code,Archived');
     expect(lines).toHaveLength(4);
     expect(lines[1]).toBe(`Alder Yard,${a.customer.name},4 Mill Lane,Oakridge,,,no`);
@@ -72,16 +89,44 @@ describe('sites API', () => {
   it('creates a site for one of its customers with an audit row; bad input is 400 with field messages and writes nothing', async () => {
     await signInAs(a.office);
     const before = await count();
-    const bad = await call(createRoute, '/api/sites', {}, jsonBody('POST', { customerId: 'nope', name: ' ', addressLine: '', city: 'x'.repeat(121), postalCode: 'y'.repeat(21) }));
+    const bad = await call(
+      createRoute,
+      '/api/sites',
+      {},
+      jsonBody('POST', {
+        customerId: 'nope',
+        name: ' ',
+        addressLine: '',
+        city: 'x'.repeat(121),
+        postalCode: 'y'.repeat(21),
+      }),
+    );
     expect(bad.status).toBe(400);
-    expect(Object.keys(bad.body.error.fields).sort()).toEqual(['addressLine', 'city', 'customerId', 'name', 'postalCode']);
+    expect(Object.keys(bad.body.error.fields).sort()).toEqual([
+      'addressLine',
+      'city',
+      'customerId',
+      'name',
+      'postalCode',
+    ]);
     expect((await call(createRoute, '/api/sites', {}, jsonBody('POST', '{"name":'))).status).toBe(400);
     expect((await call(createRoute, '/api/sites', {}, { method: 'POST' })).status).toBe(400);
     expect(await count()).toBe(before);
 
-    const made = await call(createRoute, '/api/sites', {}, jsonBody('POST', { ...valid(), name: '  Elm Terrace ', region: '' }));
+    const made = await call(
+      createRoute,
+      '/api/sites',
+      {},
+      jsonBody('POST', { ...valid(), name: '  Elm Terrace ', region: '' }),
+    );
     expect(made.status).toBe(201);
-    expect(made.body).toMatchObject({ name: 'Elm Terrace', region: null, companyId: a.company.id, customerId: a.customer.id, archivedAt: null });
+    expect(made.body).toMatchObject({
+      name: 'Elm Terrace',
+      region: null,
+      companyId: a.company.id,
+      customerId: a.customer.id,
+      archivedAt: null,
+    });
     const audit = await AuditEntry.findOne({ where: { entityId: made.body.id } });
     expect(audit).toMatchObject({ action: 'create', entityType: 'site', userId: a.office.id, companyId: a.company.id });
     expect(audit?.changes).toMatchObject({ name: 'Elm Terrace', city: 'Marston' });
@@ -133,7 +178,13 @@ describe('sites API', () => {
 
   it('edits with PATCH: only the fields sent change, audited with from and to; the customer cannot be moved', async () => {
     await signInAs(a.office);
-    const site = await Site.create({ companyId: a.company.id, customerId: a.customer.id, name: 'Fir Close', addressLine: '1 Fir Close', city: 'Oakridge' });
+    const site = await Site.create({
+      companyId: a.company.id,
+      customerId: a.customer.id,
+      name: 'Fir Close',
+      addressLine: '1 Fir Close',
+      city: 'Oakridge',
+    });
     const res = await call(patchRoute, '/x', { id: site.id }, jsonBody('PATCH', { city: 'Marston', region: 'North' }));
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ name: 'Fir Close', city: 'Marston', region: 'North' });
@@ -145,7 +196,11 @@ describe('sites API', () => {
     const bad = await call(patchRoute, '/x', { id: site.id }, jsonBody('PATCH', { name: '', city: '' }));
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.body.error.fields).sort()).toEqual(['city', 'name']);
-    expect(await Site.findByPk(site.id)).toMatchObject({ customerId: a.customer.id, name: 'Fir Close', city: 'Marston' });
+    expect(await Site.findByPk(site.id)).toMatchObject({
+      customerId: a.customer.id,
+      name: 'Fir Close',
+      city: 'Marston',
+    });
     expect(await AuditEntry.count({ where: { entityId: site.id, action: 'update' } })).toBe(1);
   });
 
@@ -155,7 +210,9 @@ describe('sites API', () => {
     expect((await call(patchRoute, '/x', { id: a.site.id }, jsonBody('PATCH', { name: 'Mine now' }))).status).toBe(404);
     expect((await call(archiveRoute, '/x', { id: a.site.id }, { method: 'DELETE' })).status).toBe(404);
     expect((await call(getRoute, '/x', { id: 'not-a-uuid' })).status).toBe(404);
-    expect((await call(listRoute, '/api/sites?pageSize=100')).body.items.some((s: { id: string }) => s.id === a.site.id)).toBe(false);
+    expect(
+      (await call(listRoute, '/api/sites?pageSize=100')).body.items.some((s: { id: string }) => s.id === a.site.id),
+    ).toBe(false);
     expect(await Site.findByPk(a.site.id)).toMatchObject({ name: 'Site', archivedAt: null });
   });
 
@@ -165,16 +222,32 @@ describe('sites API', () => {
     expect(res.status).toBe(200);
     expect(res.body).toEqual({ id: a.site.id, archived: true, deleted: false });
     expect((await Site.findByPk(a.site.id))?.archivedAt).toBeInstanceOf(Date);
-    expect((await call(listRoute, '/api/sites?pageSize=100')).body.items.some((s: { id: string }) => s.id === a.site.id)).toBe(false);
+    expect(
+      (await call(listRoute, '/api/sites?pageSize=100')).body.items.some((s: { id: string }) => s.id === a.site.id),
+    ).toBe(false);
     expect(names((await call(listRoute, '/api/sites?archived=only')).body)).toEqual(['Site']);
     expect(await AuditEntry.count({ where: { entityId: a.site.id, action: 'archive' } })).toBe(1);
 
-    const bare = await Site.create({ companyId: a.company.id, customerId: a.customer.id, name: 'Hazel Gate', addressLine: '2 Hazel Gate', city: 'Oakridge' });
-    const point = await AccessPoint.create({ companyId: a.company.id, siteId: bare.id, label: 'CO-1', kind: 'cleanout' });
+    const bare = await Site.create({
+      companyId: a.company.id,
+      customerId: a.customer.id,
+      name: 'Hazel Gate',
+      addressLine: '2 Hazel Gate',
+      city: 'Oakridge',
+    });
+    const point = await AccessPoint.create({
+      companyId: a.company.id,
+      siteId: bare.id,
+      label: 'CO-1',
+      kind: 'cleanout',
+    });
     const gone = await call(archiveRoute, '/x', { id: bare.id }, { method: 'DELETE' });
     expect(gone.body).toEqual({ id: bare.id, archived: false, deleted: true });
     expect(await Site.findByPk(bare.id)).toBeNull();
     expect(await AccessPoint.findByPk(point.id)).toBeNull();
-    expect(await AuditEntry.findOne({ where: { entityId: bare.id, action: 'delete' } })).toMatchObject({ entityType: 'site', changes: { name: 'Hazel Gate' } });
+    expect(await AuditEntry.findOne({ where: { entityId: bare.id, action: 'delete' } })).toMatchObject({
+      entityType: 'site',
+      changes: { name: 'Hazel Gate' },
+    });
   });
 });

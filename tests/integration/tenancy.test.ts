@@ -65,6 +65,8 @@ describe('jobs API and tenant isolation', () => {
   });
 
   it('refuses claims that pair a user with another company', async () => {
-    expect(await userFromClaims({ sub: a.office.id, companyId: b.company.id, role: 'office', tokenVersion: 0 })).toBeNull();
+    expect(
+      await userFromClaims({ sub: a.office.id, companyId: b.company.id, role: 'office', tokenVersion: 0 }),
+    ).toBeNull();
   });
 });

@@ -22,11 +22,17 @@ describe('users API', () => {
 
   const create = (body: unknown) => call(createRoute, '/api/users', {}, jsonBody('POST', body));
   const patch = (id: string, body: unknown) => call(patchRoute, `/api/users/${id}`, { id }, jsonBody('PATCH', body));
-  const reset = (id: string, body: unknown) => call(passwordRoute, `/api/users/${id}/password`, { id }, jsonBody('POST', body));
+  const reset = (id: string, body: unknown) =>
+    call(passwordRoute, `/api/users/${id}/password`, { id }, jsonBody('POST', body));
   const count = () => User.count({ where: { companyId: a.company.id } });
   const fresh = async (role: 'foreman' | 'technician' | 'office' | 'admin' = 'technician') => {
     await signInAs(a.admin);
-    const res = await create({ name: `Fresh ${role} ${Math.random()}`, email: `fresh-${Math.random().toString(36).slice(2)}@alpha.test`, role, password: GOOD_PASSWORD });
+    const res = await create({
+      name: `Fresh ${role} ${Math.random()}`,
+      email: `fresh-${Math.random().toString(36).slice(2)}@alpha.test`,
+      role,
+      password: GOOD_PASSWORD,
+    });
     if (res.status !== 201) throw new Error(JSON.stringify(res.body));
     return (await User.findByPk(res.body.id))!;
   };
@@ -38,7 +44,9 @@ describe('users API', () => {
       await signInAs(user);
       expect((await call(listRoute, '/api/users')).status).toBe(403);
       expect((await call(getRoute, '/x', { id: a.office.id })).status).toBe(403);
-      expect((await create({ name: 'Nope', email: 'nope@alpha.test', role: 'admin', password: GOOD_PASSWORD })).status).toBe(403);
+      expect(
+        (await create({ name: 'Nope', email: 'nope@alpha.test', role: 'admin', password: GOOD_PASSWORD })).status,
+      ).toBe(403);
       expect((await patch(a.technician.id, { role: 'admin' })).status).toBe(403);
       expect((await reset(a.technician.id, { password: GOOD_PASSWORD })).status).toBe(403);
     }
@@ -51,11 +59,19 @@ describe('users API', () => {
     const all = await call(listRoute, '/api/users?pageSize=2&sort=email');
     expect(all.status).toBe(200);
     expect(all.body).toMatchObject({ total: 5, page: 1, pageSize: 2, pageCount: 3 });
-    const emails = (await call(listRoute, '/api/users?pageSize=100&sort=email')).body.items.map((u: { email: string }) => u.email);
+    const emails = (await call(listRoute, '/api/users?pageSize=100&sort=email')).body.items.map(
+      (u: { email: string }) => u.email,
+    );
     expect(emails).toEqual([...emails].sort());
     expect(all.body.items.map((u: { email: string }) => u.email)).toEqual(emails.slice(0, 2));
     const desc = await call(listRoute, '/api/users?pageSize=100&sort=-role');
-    expect(desc.body.items.map((u: { role: string }) => u.role)).toEqual(['technician', 'technician', 'office', 'foreman', 'admin']);
+    expect(desc.body.items.map((u: { role: string }) => u.role)).toEqual([
+      'technician',
+      'technician',
+      'office',
+      'foreman',
+      'admin',
+    ]);
     const techs = await call(listRoute, '/api/users?role=technician');
     expect(techs.body.total).toBe(2);
     const searched = await call(listRoute, `/api/users?q=${encodeURIComponent(b.foreman.email.slice(0, 12))}`);
@@ -69,16 +85,31 @@ describe('users API', () => {
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.body.error.fields).sort()).toEqual(['active', 'role', 'sort']);
     const csv = await call(listRoute, '/api/users?format=csv&active=true');
-    expect(String(csv.body).replace(/^\uFEFF/, '').split('\r\n')[0]).toBe('Name,E-mail,Role,Active');
+    expect(
+      String(csv.body)
+        .replace(/^\uFEFF/, '')
+        .split('\r\n')[0],
+    ).toBe('Name,E-mail,Role,Active');
     expect(String(csv.body)).not.toMatch(/\$2[ab]\$/);
   });
 
   it('creates a user with a lowercased e-mail and a cost-12 bcrypt hash, audited without the password', async () => {
     await signInAs(a.admin);
     const tag = a.company.id.slice(0, 8); // e-mail is unique across companies: keep reruns on one database apart
-    const res = await create({ name: ' Jo Example ', email: ` Jo.Example.${tag.toUpperCase()}@Alpha.TEST `, role: 'foreman', password: GOOD_PASSWORD });
+    const res = await create({
+      name: ' Jo Example ',
+      email: ` Jo.Example.${tag.toUpperCase()}@Alpha.TEST `,
+      role: 'foreman',
+      password: GOOD_PASSWORD,
+    });
     expect(res.status).toBe(201);
-    expect(res.body).toMatchObject({ name: 'Jo Example', email: `jo.example.${tag}@alpha.test`, role: 'foreman', active: true, companyId: a.company.id });
+    expect(res.body).toMatchObject({
+      name: 'Jo Example',
+      email: `jo.example.${tag}@alpha.test`,
+      role: 'foreman',
+      active: true,
+      companyId: a.company.id,
+    });
     expect(res.body).not.toHaveProperty('passwordHash');
     const row = await User.unscoped().findByPk(res.body.id);
     expect(bcrypt.getRounds(row!.passwordHash)).toBe(12);
@@ -97,16 +128,33 @@ describe('users API', () => {
   it('refuses a duplicate e-mail (any case, any company) with 409 and bad input with 400, writing nothing', async () => {
     await signInAs(a.admin);
     const before = await User.count();
-    const dup = await create({ name: 'Copy', email: b.office.email.toUpperCase(), role: 'office', password: GOOD_PASSWORD });
+    const dup = await create({
+      name: 'Copy',
+      email: b.office.email.toUpperCase(),
+      role: 'office',
+      password: GOOD_PASSWORD,
+    });
     expect(dup.status).toBe(409);
     expect(dup.body.error.fields.email).toBeDefined();
     const bad = await create({ name: '', email: 'not-mail', role: 'boss', password: 'short' });
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.body.error.fields).sort()).toEqual(['email', 'name', 'password', 'role']);
     expect(bad.body.error.fields.password[0]).toMatch(/12/);
-    expect((await create({ name: 'X', email: 'x@alpha.test', role: 'office', password: GOOD_PASSWORD, companyId: b.company.id })).status).toBe(400);
+    expect(
+      (
+        await create({
+          name: 'X',
+          email: 'x@alpha.test',
+          role: 'office',
+          password: GOOD_PASSWORD,
+          companyId: b.company.id,
+        })
+      ).status,
+    ).toBe(400);
     expect((await create({ name: 'X', email: 'x@alpha.test', role: 'office' })).status).toBe(400);
-    expect((await create({ name: 'X', email: 'x@alpha.test', role: 'office', password: 'é'.repeat(40) })).status).toBe(400); // 80 bytes > bcrypt's 72
+    expect((await create({ name: 'X', email: 'x@alpha.test', role: 'office', password: 'é'.repeat(40) })).status).toBe(
+      400,
+    ); // 80 bytes > bcrypt's 72
     expect((await call(createRoute, '/api/users', {}, jsonBody('POST', 'nope{'))).status).toBe(400);
     expect(await User.count()).toBe(before);
   });
@@ -148,7 +196,9 @@ describe('users API', () => {
     expect((await patch(target.id, { active: true })).status).toBe(200);
     await signInAs(target);
     expect((await call(listJobsRoute, '/api/jobs')).status).toBe(401);
-    const actions = (await AuditEntry.findAll({ where: { entityId: target.id }, order: [['createdAt', 'ASC']] })).map((e) => e.action);
+    const actions = (await AuditEntry.findAll({ where: { entityId: target.id }, order: [['createdAt', 'ASC']] })).map(
+      (e) => e.action,
+    );
     expect(actions).toEqual(['create', 'deactivate', 'reactivate']);
   });
 

@@ -1,29 +1,72 @@
 import { describe, expect, it } from 'vitest';
-import { companyFormSchema, companyPatchSchema, companyToForm, formToCompanyPatch, isKnownTimeZone } from '@/lib/validation/company';
+import {
+  companyFormSchema,
+  companyPatchSchema,
+  companyToForm,
+  formToCompanyPatch,
+  isKnownTimeZone,
+} from '@/lib/validation/company';
 
 // 1 in = 25.4 mm exactly (the international inch, 1959 agreement).
 describe('company settings form ↔ API body', () => {
-  const stored = { name: 'Acme', timeZone: 'America/Denver', unitSystem: 'imperial' as const, minOverlapPerEndMm: 305, workingWindowSafetyMargin: 0.2, holdReserve: 0.1 };
+  const stored = {
+    name: 'Acme',
+    timeZone: 'America/Denver',
+    unitSystem: 'imperial' as const,
+    minOverlapPerEndMm: 305,
+    workingWindowSafetyMargin: 0.2,
+    holdReserve: 0.1,
+  };
 
   it('shows the overlap in inches and the reserve in per cent for an imperial company', () => {
-    expect(companyToForm(stored)).toEqual({ name: 'Acme', timeZone: 'America/Denver', unitSystem: 'imperial', minOverlapPerEnd: 12.01, safetyMarginPercent: 20, holdReservePercent: 10, linerModulus: Number.NaN });
+    expect(companyToForm(stored)).toEqual({
+      name: 'Acme',
+      timeZone: 'America/Denver',
+      unitSystem: 'imperial',
+      minOverlapPerEnd: 12.01,
+      safetyMarginPercent: 20,
+      holdReservePercent: 10,
+      linerModulus: Number.NaN,
+    });
   });
 
   it('round-trips unchanged settings to the same stored values', () => {
     const body = formToCompanyPatch(companyToForm(stored));
-    expect(body).toEqual({ name: 'Acme', timeZone: 'America/Denver', unitSystem: 'imperial', minOverlapPerEndMm: 305, workingWindowSafetyMargin: 0.2, holdReserve: 0.1, linerShortTermModulusMpa: null });
+    expect(body).toEqual({
+      name: 'Acme',
+      timeZone: 'America/Denver',
+      unitSystem: 'imperial',
+      minOverlapPerEndMm: 305,
+      workingWindowSafetyMargin: 0.2,
+      holdReserve: 0.1,
+      linerShortTermModulusMpa: null,
+    });
     expect(companyPatchSchema.parse(body)).toEqual(body);
   });
 
   it('converts an entry in the unit system picked in the same form', () => {
-    expect(formToCompanyPatch({ ...companyToForm(stored), unitSystem: 'metric', minOverlapPerEnd: 150, safetyMarginPercent: 25 })).toMatchObject({ minOverlapPerEndMm: 150, workingWindowSafetyMargin: 0.25 });
+    expect(
+      formToCompanyPatch({
+        ...companyToForm(stored),
+        unitSystem: 'metric',
+        minOverlapPerEnd: 150,
+        safetyMarginPercent: 25,
+      }),
+    ).toMatchObject({ minOverlapPerEndMm: 150, workingWindowSafetyMargin: 0.25 });
     expect(formToCompanyPatch({ ...companyToForm(stored), minOverlapPerEnd: 6 }).minOverlapPerEndMm).toBe(152); // 6 × 25.4 = 152.4
   });
 
   it('refuses a reserve above 90 % and a negative overlap in the form', () => {
-    const result = companyFormSchema.safeParse({ ...companyToForm(stored), minOverlapPerEnd: -1, safetyMarginPercent: 95 });
+    const result = companyFormSchema.safeParse({
+      ...companyToForm(stored),
+      minOverlapPerEnd: -1,
+      safetyMarginPercent: 95,
+    });
     expect(result.success).toBe(false);
-    expect(result.error!.issues.map((issue) => issue.path[0]).sort()).toEqual(['minOverlapPerEnd', 'safetyMarginPercent']);
+    expect(result.error!.issues.map((issue) => issue.path[0]).sort()).toEqual([
+      'minOverlapPerEnd',
+      'safetyMarginPercent',
+    ]);
   });
 
   it('takes the hold reserve in per cent and refuses more than 100 % or less than 0', () => {
@@ -42,7 +85,13 @@ describe('company settings form ↔ API body', () => {
 });
 
 describe('messages in the company’s units', () => {
-  const stored = { name: 'Units Co', timeZone: 'UTC', minOverlapPerEndMm: 75, workingWindowSafetyMargin: 0.2, holdReserve: 0.1 };
+  const stored = {
+    name: 'Units Co',
+    timeZone: 'UTC',
+    minOverlapPerEndMm: 75,
+    workingWindowSafetyMargin: 0.2,
+    holdReserve: 0.1,
+  };
   const overlapMessage = (unitSystem: 'imperial' | 'metric', minOverlapPerEnd: number) => {
     const result = companyFormSchema.safeParse({ ...companyToForm({ ...stored, unitSystem }), minOverlapPerEnd });
     return result.success ? '' : result.error.issues.map((issue) => issue.message).join(' ');
@@ -57,7 +106,13 @@ describe('messages in the company’s units', () => {
 });
 
 describe('the liner modulus for the F1216 X1 checks', () => {
-  const stored = { name: 'Units Co', timeZone: 'UTC', minOverlapPerEndMm: 75, workingWindowSafetyMargin: 0.2, holdReserve: 0.1 };
+  const stored = {
+    name: 'Units Co',
+    timeZone: 'UTC',
+    minOverlapPerEndMm: 75,
+    workingWindowSafetyMargin: 0.2,
+    holdReserve: 0.1,
+  };
   it('is typed in psi by an imperial company and stored in MPa; empty means the F1216 minimum (null)', () => {
     // ASTM F1216 Table 1: 250 000 psi minimum initial flexural modulus; 1 psi = 6.894 757 kPa (NIST SP 811) → 1723.7 MPa.
     const form = companyToForm({ ...stored, unitSystem: 'imperial', linerShortTermModulusMpa: 1723.7 });
@@ -70,7 +125,10 @@ describe('the liner modulus for the F1216 X1 checks', () => {
     expect(formToCompanyPatch(empty).linerShortTermModulusMpa).toBeNull();
   });
   it('names its bounds in the company’s units', () => {
-    const imperial = companyFormSchema.safeParse({ ...companyToForm({ ...stored, unitSystem: 'imperial' }), linerModulus: 10 });
+    const imperial = companyFormSchema.safeParse({
+      ...companyToForm({ ...stored, unitSystem: 'imperial' }),
+      linerModulus: 10,
+    });
     expect(imperial.error?.issues.map((issue) => issue.message).join(' ')).toMatch(/psi/);
     expect(imperial.error?.issues.map((issue) => issue.message).join(' ')).not.toMatch(/MPa/);
     expect(companyPatchSchema.safeParse({ linerShortTermModulusMpa: 100 }).success).toBe(false);

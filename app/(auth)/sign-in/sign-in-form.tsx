@@ -9,7 +9,10 @@ import { signInWithPassword } from '@/lib/client/sign-in';
 import { checkSignIn, type SignInFields } from '@/lib/validation/sign-in-check';
 
 // One message for every failure (badCredentials), so the form never tells whether an e-mail has an account.
-function failureMessage(result: { status: number; message?: string } | null, t: (key: 'badCredentials' | 'failed') => string): string {
+function failureMessage(
+  result: { status: number; message?: string } | null,
+  t: (key: 'badCredentials' | 'failed') => string,
+): string {
   if (result?.status === 401) return t('badCredentials');
   // 429: the server's "Too many attempts — try again in N minutes."
   if (result?.status === 429 && result.message) return result.message;
@@ -61,7 +64,9 @@ export function SignInForm() {
   return (
     <form onSubmit={(event) => void onSubmit(event)} noValidate className="space-y-5">
       <div>
-        <label htmlFor="email" className="block text-base font-medium">{t('email')}</label>
+        <label htmlFor="email" className="block text-base font-medium">
+          {t('email')}
+        </label>
         <input
           id="email"
           type="email"
@@ -73,10 +78,16 @@ export function SignInForm() {
           name="email"
           onChange={(event) => recheck(event.currentTarget.form, 'email')}
         />
-        {errors.email && <p id="email-error" className="mt-1 text-sm text-missed-700">{errors.email}</p>}
+        {errors.email && (
+          <p id="email-error" className="mt-1 text-sm text-missed-700">
+            {errors.email}
+          </p>
+        )}
       </div>
       <div>
-        <label htmlFor="password" className="block text-base font-medium">{t('password')}</label>
+        <label htmlFor="password" className="block text-base font-medium">
+          {t('password')}
+        </label>
         <input
           id="password"
           type="password"
@@ -87,7 +98,11 @@ export function SignInForm() {
           name="password"
           onChange={(event) => recheck(event.currentTarget.form, 'password')}
         />
-        {errors.password && <p id="password-error" className="mt-1 text-sm text-missed-700">{errors.password}</p>}
+        {errors.password && (
+          <p id="password-error" className="mt-1 text-sm text-missed-700">
+            {errors.password}
+          </p>
+        )}
       </div>
       <div role="alert" aria-live="assertive">
         {failure && <p className="rounded-md bg-missed-100 px-3 py-2 text-base text-missed-700">{failure}</p>}

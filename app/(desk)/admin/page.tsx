@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import { cn } from '@/lib/ui/cn';
 import Link from 'next/link';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany, getSettingsCounts } from '@/lib/data/company';
@@ -16,14 +17,32 @@ export default async function Page() {
     {
       href: '/admin/company',
       title: 'Company',
-      text: `Time zone ${company.timeZone} · ${company.unitSystem} units · overlap ${formatLength(company.minOverlapPerEndMm, company.unitSystem)} per end · working-window reserve ${Math.round(company.workingWindowSafetyMargin * 100)} % · hold reserve ${Math.round(company.holdReserve * 100)} %`,
+      text:
+        `Time zone ${company.timeZone} · ${company.unitSystem} units · overlap ${formatLength(company.minOverlapPerEndMm, company.unitSystem)} per ` +
+        `end · working-window reserve ${Math.round(company.workingWindowSafetyMargin * 100)} % · hold reserve ${Math.round(company.holdReserve * 100)} %`,
     },
-    { href: '/admin/users', title: 'Users', text: `${counts.activeUsers} active of ${counts.users} · roles, passwords, access` },
+    {
+      href: '/admin/users',
+      title: 'Users',
+      text: `${counts.activeUsers} active of ${counts.users} · roles, passwords, access`,
+    },
     { href: '/admin/crews', title: 'Crews', text: `${counts.crews} crews · members and jobs per day` },
-    { href: '/admin/resin-systems', title: 'Resin systems', text: `${counts.resinSystems} · pot life, hold and cure times, temperature range` },
+    {
+      href: '/admin/resin-systems',
+      title: 'Resin systems',
+      text: `${counts.resinSystems} · pot life, hold and cure times, temperature range`,
+    },
     { href: '/admin/resin-kits', title: 'Resin kits', text: `${counts.resinKits} lots · expiry and quantity` },
-    { href: '/admin/packers', title: 'Packers', text: `${counts.packers} · diameter range, bladder length, pressure rating` },
-    { href: '/admin/checklists', title: 'Check-list templates', text: `${counts.checklists} · what the crew confirms before an install` },
+    {
+      href: '/admin/packers',
+      title: 'Packers',
+      text: `${counts.packers} · diameter range, bladder length, pressure rating`,
+    },
+    {
+      href: '/admin/checklists',
+      title: 'Check-list templates',
+      text: `${counts.checklists} · what the crew confirms before an install`,
+    },
   ];
   return (
     <div className="space-y-6">
@@ -32,7 +51,13 @@ export default async function Page() {
         <ul className="grid gap-3 sm:grid-cols-2 xl:grid-cols-3">
           {sections.map((section) => (
             <li key={section.href}>
-              <Link href={section.href} className="block h-full rounded-lg bg-white p-4 ring-1 ring-slate-200 hover:ring-brand-700 focus-visible:outline focus-visible:outline-2 focus-visible:outline-brand-700">
+              <Link
+                href={section.href}
+                className={cn(
+                  'block h-full rounded-lg bg-white p-4 ring-1 ring-slate-200 hover:ring-brand-700',
+                  'focus-visible:outline focus-visible:outline-2 focus-visible:outline-brand-700',
+                )}
+              >
                 <span className="block text-lg font-semibold text-brand-700">{section.title}</span>
                 <span className="mt-1 block text-sm text-slate-600">{section.text}</span>
               </Link>

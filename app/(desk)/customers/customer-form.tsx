@@ -27,7 +27,12 @@ export function CustomerForm({ customer }: { customer?: Input & { id: string } }
   const router = useRouter();
   const closeEdit = useCloseEditSection();
   const [message, setMessage] = useState<string>();
-  const { register, handleSubmit, setError, formState: { errors, isSubmitting } } = useForm<Input, unknown, Output>({
+  const {
+    register,
+    handleSubmit,
+    setError,
+    formState: { errors, isSubmitting },
+  } = useForm<Input, unknown, Output>({
     resolver: zodResolver(customerInputSchema),
     defaultValues: customer ?? { name: '', kind: 'homeowner', language: 'en' },
   });
@@ -49,7 +54,11 @@ export function CustomerForm({ customer }: { customer?: Input & { id: string } }
       </FormField>
       <FormField id="kind" label="Kind" error={errors.kind?.message}>
         <Select {...register('kind')} {...errorProps('kind', errors.kind?.message)}>
-          {CUSTOMER_KINDS.map((kind) => <option key={kind} value={kind}>{label(kind)}</option>)}
+          {CUSTOMER_KINDS.map((kind) => (
+            <option key={kind} value={kind}>
+              {label(kind)}
+            </option>
+          ))}
         </Select>
       </FormField>
       <FormField id="contactName" label="Contact person" error={errors.contactName?.message}>
@@ -60,7 +69,11 @@ export function CustomerForm({ customer }: { customer?: Input & { id: string } }
       </FormField>
       <FormField id="language" label={t('language')} error={errors.language?.message}>
         <Select {...register('language')} {...errorProps('language', errors.language?.message)}>
-          {LOCALES.map((code) => <option key={code} value={code}>{t(`languages.${code}`)}</option>)}
+          {LOCALES.map((code) => (
+            <option key={code} value={code}>
+              {t(`languages.${code}`)}
+            </option>
+          ))}
         </Select>
       </FormField>
       <FormField id="phone" label="Phone" error={errors.phone?.message}>
@@ -74,10 +87,18 @@ export function CustomerForm({ customer }: { customer?: Input & { id: string } }
           <Textarea {...register('notes')} {...errorProps('notes', errors.notes?.message)} />
         </FormField>
       </div>
-      {message && <p role="alert" className="text-sm font-medium text-missed-700 md:col-span-2">{message}</p>}
+      {message && (
+        <p role="alert" className="text-sm font-medium text-missed-700 md:col-span-2">
+          {message}
+        </p>
+      )}
       <div className="flex gap-2 md:col-span-2">
-        <Button type="submit" disabled={isSubmitting}>{customer ? tc('saveChanges') : 'Create customer'}</Button>
-        <Button type="button" variant="secondary" onClick={() => (closeEdit ? closeEdit() : router.back())}>{tc('cancel')}</Button>
+        <Button type="submit" disabled={isSubmitting}>
+          {customer ? tc('saveChanges') : 'Create customer'}
+        </Button>
+        <Button type="button" variant="secondary" onClick={() => (closeEdit ? closeEdit() : router.back())}>
+          {tc('cancel')}
+        </Button>
       </div>
     </form>
   );

@@ -27,5 +27,16 @@ const columns: ColumnDef<Row, unknown>[] = [
 ];
 
 export function CustomersTable({ list, sort, dir }: { list: CustomerListResponse; sort: string; dir: 'asc' | 'desc' }) {
-  return <DataTable caption="Customers" columns={columns} data={list.items} page={list.page} pageCount={list.pageCount} total={list.total} sort={sort} dir={dir} />;
+  return (
+    <DataTable
+      caption="Customers"
+      columns={columns}
+      data={list.items}
+      page={list.page}
+      pageCount={list.pageCount}
+      total={list.total}
+      sort={sort}
+      dir={dir}
+    />
+  );
 }

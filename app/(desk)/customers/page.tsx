@@ -20,9 +20,28 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
   return (
     <div className="space-y-4">
       <PageHeader title="Customers" />
-      <ListToolbar search={query.q} placeholder="Name, contact, e-mail or phone" exportHref={exportHrefOf('/api/customers', raw)} newHref="/customers/new" newLabel="New customer">
-        <FilterSelect name="kind" label="Kind" value={query.kind} options={CUSTOMER_KINDS.map((kind) => ({ value: kind, label: label(kind) }))} />
-        <FilterSelect name="archived" label="Archived" value={query.archived === 'false' ? '' : query.archived} options={[{ value: 'true', label: 'Include archived' }, { value: 'only', label: 'Only archived' }]} />
+      <ListToolbar
+        search={query.q}
+        placeholder="Name, contact, e-mail or phone"
+        exportHref={exportHrefOf('/api/customers', raw)}
+        newHref="/customers/new"
+        newLabel="New customer"
+      >
+        <FilterSelect
+          name="kind"
+          label="Kind"
+          value={query.kind}
+          options={CUSTOMER_KINDS.map((kind) => ({ value: kind, label: label(kind) }))}
+        />
+        <FilterSelect
+          name="archived"
+          label="Archived"
+          value={query.archived === 'false' ? '' : query.archived}
+          options={[
+            { value: 'true', label: 'Include archived' },
+            { value: 'only', label: 'Only archived' },
+          ]}
+        />
       </ListToolbar>
       <CustomersTable list={list} sort={query.sort} dir={query.dir} />
     </div>

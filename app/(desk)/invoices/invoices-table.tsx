@@ -10,11 +10,20 @@ import type { InvoiceListResponse } from '@/lib/data/invoices';
 type Row = InvoiceListResponse['items'][number];
 
 const columns: ColumnDef<Row, unknown>[] = [
-  { id: 'number', header: 'Invoice', enableSorting: true, cell: ({ row }) => <span className="font-semibold">{row.original.number}</span> },
+  {
+    id: 'number',
+    header: 'Invoice',
+    enableSorting: true,
+    cell: ({ row }) => <span className="font-semibold">{row.original.number}</span>,
+  },
   {
     id: 'job',
     header: 'Job',
-    cell: ({ row }) => <Link href={`/jobs/${row.original.jobId}`} className="text-brand-700 hover:underline">{row.original.job?.number}</Link>,
+    cell: ({ row }) => (
+      <Link href={`/jobs/${row.original.jobId}`} className="text-brand-700 hover:underline">
+        {row.original.job?.number}
+      </Link>
+    ),
   },
   { id: 'customer', header: 'Customer', cell: ({ row }) => row.original.job?.customer?.name },
   {
@@ -28,10 +37,28 @@ const columns: ColumnDef<Row, unknown>[] = [
       </span>
     ),
   },
-  { id: 'totalCents', header: 'Total', enableSorting: true, cell: ({ row }) => <span className="tabular-nums">{formatMoney(row.original.totalCents, row.original.currency)}</span> },
+  {
+    id: 'totalCents',
+    header: 'Total',
+    enableSorting: true,
+    cell: ({ row }) => (
+      <span className="tabular-nums">{formatMoney(row.original.totalCents, row.original.currency)}</span>
+    ),
+  },
   { id: 'dueOn', header: 'Due', enableSorting: true, cell: ({ row }) => row.original.dueOn },
 ];
 
 export function InvoicesTable({ list, sort, dir }: { list: InvoiceListResponse; sort: string; dir: 'asc' | 'desc' }) {
-  return <DataTable caption="Invoices" columns={columns} data={list.items} page={list.page} pageCount={list.pageCount} total={list.total} sort={sort} dir={dir} />;
+  return (
+    <DataTable
+      caption="Invoices"
+      columns={columns}
+      data={list.items}
+      page={list.page}
+      pageCount={list.pageCount}
+      total={list.total}
+      sort={sort}
+      dir={dir}
+    />
+  );
 }

@@ -19,8 +19,17 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
   return (
     <div className="space-y-4">
       <PageHeader title="Invoices" description={<>Invoices are drafted on a job&apos;s page from its repairs.</>} />
-      <ListToolbar search={query.q} placeholder="Invoice, job or customer" exportHref={exportHrefOf('/api/invoices', raw)}>
-        <FilterSelect name="status" label="Status" value={query.status} options={INVOICE_STATUSES.map((status) => ({ value: status, label: label(status) }))} />
+      <ListToolbar
+        search={query.q}
+        placeholder="Invoice, job or customer"
+        exportHref={exportHrefOf('/api/invoices', raw)}
+      >
+        <FilterSelect
+          name="status"
+          label="Status"
+          value={query.status}
+          options={INVOICE_STATUSES.map((status) => ({ value: status, label: label(status) }))}
+        />
       </ListToolbar>
       <InvoicesTable list={list} sort={query.sort} dir={query.dir} />
     </div>

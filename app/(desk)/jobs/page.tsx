@@ -20,10 +20,34 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
   return (
     <div className="space-y-4">
       <PageHeader title="Jobs" />
-      <ListToolbar search={query.q} placeholder="Job, title, customer or address" exportHref={exportHrefOf('/api/jobs', raw)} newHref="/jobs/new" newLabel="New job">
-        <FilterSelect name="status" label="Status" value={query.status?.join(',')} options={JOB_STATUSES.map((status) => ({ value: status, label: label(status) }))} />
-        <FilterSelect name="crewId" label="Crew" value={query.crewId} options={crews.map((crew) => ({ value: crew.id, label: crew.name }))} />
-        <FilterSelect name="archived" label="Archived" value={query.archived === 'false' ? '' : query.archived} options={[{ value: 'true', label: 'Include archived' }, { value: 'only', label: 'Only archived' }]} />
+      <ListToolbar
+        search={query.q}
+        placeholder="Job, title, customer or address"
+        exportHref={exportHrefOf('/api/jobs', raw)}
+        newHref="/jobs/new"
+        newLabel="New job"
+      >
+        <FilterSelect
+          name="status"
+          label="Status"
+          value={query.status?.join(',')}
+          options={JOB_STATUSES.map((status) => ({ value: status, label: label(status) }))}
+        />
+        <FilterSelect
+          name="crewId"
+          label="Crew"
+          value={query.crewId}
+          options={crews.map((crew) => ({ value: crew.id, label: crew.name }))}
+        />
+        <FilterSelect
+          name="archived"
+          label="Archived"
+          value={query.archived === 'false' ? '' : query.archived}
+          options={[
+            { value: 'true', label: 'Include archived' },
+            { value: 'only', label: 'Only archived' },
+          ]}
+        />
       </ListToolbar>
       <JobsTable list={list} sort={query.sort} dir={query.dir} />
     </div>

@@ -19,10 +19,30 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
   const [list, { unitSystem, timeZone }] = await Promise.all([listRepairs(user, query), getCompany(user)]);
   return (
     <div className="space-y-4">
-      <PageHeader title="Repairs" description="Repairs are added from their job’s page. Cancelled repairs show with “Include archived”." />
-      <ListToolbar search={query.q} placeholder="Job number, segment, defect or notes" exportHref={exportHrefOf('/api/repairs', raw)}>
-        <FilterSelect name="status" label="Status" value={query.status?.join(',')} options={REPAIR_STATUSES.map((status) => ({ value: status, label: label(status) }))} />
-        <FilterSelect name="archived" label="Archived" value={query.archived === 'false' ? '' : query.archived} options={[{ value: 'true', label: 'Include archived' }, { value: 'only', label: 'Only archived' }]} />
+      <PageHeader
+        title="Repairs"
+        description="Repairs are added from their job’s page. Cancelled repairs show with “Include archived”."
+      />
+      <ListToolbar
+        search={query.q}
+        placeholder="Job number, segment, defect or notes"
+        exportHref={exportHrefOf('/api/repairs', raw)}
+      >
+        <FilterSelect
+          name="status"
+          label="Status"
+          value={query.status?.join(',')}
+          options={REPAIR_STATUSES.map((status) => ({ value: status, label: label(status) }))}
+        />
+        <FilterSelect
+          name="archived"
+          label="Archived"
+          value={query.archived === 'false' ? '' : query.archived}
+          options={[
+            { value: 'true', label: 'Include archived' },
+            { value: 'only', label: 'Only archived' },
+          ]}
+        />
       </ListToolbar>
       <RepairsTable list={list} sort={query.sort} dir={query.dir} unitSystem={unitSystem} timeZone={timeZone} />
     </div>

@@ -14,23 +14,76 @@ const columnsFor = (unitSystem: UnitSystem, timeZone: string): ColumnDef<Row, un
   {
     id: 'job',
     header: 'Job',
-    cell: ({ row }) => <Link href={`/jobs/${row.original.job.id}`} className="whitespace-nowrap text-brand-700 hover:underline">{row.original.job.number}</Link>,
+    cell: ({ row }) => (
+      <Link href={`/jobs/${row.original.job.id}`} className="whitespace-nowrap text-brand-700 hover:underline">
+        {row.original.job.number}
+      </Link>
+    ),
   },
   {
     id: 'position',
     header: 'Repair',
     enableSorting: true,
-    cell: ({ row }) => <Link href={`/repairs/${row.original.id}`} className="whitespace-nowrap font-semibold text-brand-700 hover:underline">Repair {row.original.position}</Link>,
+    cell: ({ row }) => (
+      <Link
+        href={`/repairs/${row.original.id}`}
+        className="whitespace-nowrap font-semibold text-brand-700 hover:underline"
+      >
+        Repair {row.original.position}
+      </Link>
+    ),
   },
   { id: 'segment', header: 'Segment', cell: ({ row }) => row.original.segment.label },
-  { id: 'distanceMm', header: 'Distance', enableSorting: true, cell: ({ row }) => formatLength(row.original.distanceMm, unitSystem, 'long') },
-  { id: 'defect', header: 'Defect', cell: ({ row }) => `${label(row.original.defectType)} (${formatLength(row.original.defectLengthMm, unitSystem)})` },
+  {
+    id: 'distanceMm',
+    header: 'Distance',
+    enableSorting: true,
+    cell: ({ row }) => formatLength(row.original.distanceMm, unitSystem, 'long'),
+  },
+  {
+    id: 'defect',
+    header: 'Defect',
+    cell: ({ row }) => `${label(row.original.defectType)} (${formatLength(row.original.defectLengthMm, unitSystem)})`,
+  },
   { id: 'conditionGrade', header: 'Grade', enableSorting: true, cell: ({ row }) => row.original.conditionGrade },
-  { id: 'patch', header: 'Patch', cell: ({ row }) => (row.original.plannedPatchLengthMm ? formatLength(row.original.plannedPatchLengthMm, unitSystem) : '—') },
+  {
+    id: 'patch',
+    header: 'Patch',
+    cell: ({ row }) =>
+      row.original.plannedPatchLengthMm ? formatLength(row.original.plannedPatchLengthMm, unitSystem) : '—',
+  },
   { id: 'status', header: 'Status', cell: ({ row }) => label(row.original.status) },
-  { id: 'createdAt', header: 'Added', enableSorting: true, cell: ({ row }) => formatInZone(row.original.createdAt, timeZone, 'yyyy-MM-dd') },
+  {
+    id: 'createdAt',
+    header: 'Added',
+    enableSorting: true,
+    cell: ({ row }) => formatInZone(row.original.createdAt, timeZone, 'yyyy-MM-dd'),
+  },
 ];
 
-export function RepairsTable({ list, sort, dir, unitSystem, timeZone }: { list: RepairListResponse; sort: string; dir: 'asc' | 'desc'; unitSystem: UnitSystem; timeZone: string }) {
-  return <DataTable caption="Repairs" columns={columnsFor(unitSystem, timeZone)} data={list.items} page={list.page} pageCount={list.pageCount} total={list.total} sort={sort} dir={dir} />;
+export function RepairsTable({
+  list,
+  sort,
+  dir,
+  unitSystem,
+  timeZone,
+}: {
+  list: RepairListResponse;
+  sort: string;
+  dir: 'asc' | 'desc';
+  unitSystem: UnitSystem;
+  timeZone: string;
+}) {
+  return (
+    <DataTable
+      caption="Repairs"
+      columns={columnsFor(unitSystem, timeZone)}
+      data={list.items}
+      page={list.page}
+      pageCount={list.pageCount}
+      total={list.total}
+      sort={sort}
+      dir={dir}
+    />
+  );
 }

@@ -24,12 +24,28 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
     <div className="space-y-4">
       <PageHeader title="Review" />
       <p className="max-w-3xl text-sm text-slate-600">
-        Installs the crews signed off, with the quality flags worked out from what they recorded. Open one to see its timeline and approve it or send it back.
+        Installs the crews signed off, with the quality flags worked out from what they recorded. Open one to see its
+        timeline and approve it or send it back.
       </p>
-      <ListToolbar search={query.q} placeholder="Job number or customer" exportHref={exportHrefOf('/api/installs', asked)}>
-        <FilterSelect name="status" label="Status" value={query.status} options={INSTALL_STATUSES.map((s) => ({ value: s, label: label(s) }))} />
+      <ListToolbar
+        search={query.q}
+        placeholder="Job number or customer"
+        exportHref={exportHrefOf('/api/installs', asked)}
+      >
+        <FilterSelect
+          name="status"
+          label="Status"
+          value={query.status}
+          options={INSTALL_STATUSES.map((s) => ({ value: s, label: label(s) }))}
+        />
       </ListToolbar>
-      <ReviewsTable list={list} sort={query.sort} dir={query.dir} timeZone={company.timeZone} unitSystem={company.unitSystem} />
+      <ReviewsTable
+        list={list}
+        sort={query.sort}
+        dir={query.dir}
+        timeZone={company.timeZone}
+        unitSystem={company.unitSystem}
+      />
     </div>
   );
 }

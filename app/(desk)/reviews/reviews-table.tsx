@@ -14,12 +14,21 @@ type Row = InstallListResponse['items'][number];
 
 function columnsFor(timeZone: string, unitSystem: UnitSystem): ColumnDef<Row, unknown>[] {
   return [
-    { id: 'severity', header: 'Flags', enableSorting: true, cell: ({ row }) => <FlagBadges flags={row.original.flags} /> },
+    {
+      id: 'severity',
+      header: 'Flags',
+      enableSorting: true,
+      cell: ({ row }) => <FlagBadges flags={row.original.flags} />,
+    },
     {
       id: 'job',
       header: 'Job',
       cell: ({ row }) => (
-        <Link href={`/reviews/${row.original.id}`} className="font-semibold text-brand-700 hover:underline" aria-label={`Review job ${row.original.job.number}, repair ${row.original.repair.position}`}>
+        <Link
+          href={`/reviews/${row.original.id}`}
+          className="font-semibold text-brand-700 hover:underline"
+          aria-label={`Review job ${row.original.job.number}, repair ${row.original.repair.position}`}
+        >
           {row.original.job.number}
         </Link>
       ),
@@ -31,15 +40,45 @@ function columnsFor(timeZone: string, unitSystem: UnitSystem): ColumnDef<Row, un
       header: 'Repair',
       cell: ({ row }) => {
         const r = row.original.repair;
-        return `#${r.position} · ${label(r.defectType)} at ${formatLength(r.distanceMm, unitSystem, 'long')}${r.accessPointLabel ? ` from ${r.accessPointLabel}` : ''}`;
+        return `#${r.position} · ${label(r.defectType)} at ${formatLength(r.distanceMm, unitSystem, 'long')}${
+          r.accessPointLabel ? ` from ` + `${r.accessPointLabel}` : ''
+        }`;
       },
     },
     { id: 'crew', header: 'Crew', cell: ({ row }) => row.original.crew?.name ?? '—' },
-    { id: 'finishedAt', header: 'Finished', enableSorting: true, cell: ({ row }) => (row.original.finishedAt ? formatInZone(row.original.finishedAt, timeZone) : '—') },
+    {
+      id: 'finishedAt',
+      header: 'Finished',
+      enableSorting: true,
+      cell: ({ row }) => (row.original.finishedAt ? formatInZone(row.original.finishedAt, timeZone) : '—'),
+    },
     { id: 'status', header: 'Status', cell: ({ row }) => <StatusBadge status={row.original.status} /> },
   ];
 }
 
-export function ReviewsTable({ list, sort, dir, timeZone, unitSystem }: { list: InstallListResponse; sort: string; dir: 'asc' | 'desc'; timeZone: string; unitSystem: UnitSystem }) {
-  return <DataTable caption="Installs to review" columns={columnsFor(timeZone, unitSystem)} data={list.items} page={list.page} pageCount={list.pageCount} total={list.total} sort={sort} dir={dir} />;
+export function ReviewsTable({
+  list,
+  sort,
+  dir,
+  timeZone,
+  unitSystem,
+}: {
+  list: InstallListResponse;
+  sort: string;
+  dir: 'asc' | 'desc';
+  timeZone: string;
+  unitSystem: UnitSystem;
+}) {
+  return (
+    <DataTable
+      caption="Installs to review"
+      columns={columnsFor(timeZone, unitSystem)}
+      data={list.items}
+      page={list.page}
+      pageCount={list.pageCount}
+      total={list.total}
+      sort={sort}
+      dir={dir}
+    />
+  );
 }

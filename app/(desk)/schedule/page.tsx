@@ -16,8 +16,14 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
   // A hand-edited URL with a bad week shows this week rather than failing the page.
   const parsed = scheduleQuerySchema.safeParse(await searchParams);
   const board = await getScheduleBoard(user, parsed.success ? parsed.data.week : undefined);
-  const overDays = board.crews.flatMap((crew) => crew.cells.filter((cell) => cell.overCapacity).map((cell) => `${crew.name}, ${board.days.find((d) => d.date === cell.date)?.label}`));
-  const weekJobs = board.crews.flatMap((crew) => crew.cells.flatMap((cell) => cell.jobs.map((job) => ({ ...job, crewName: crew.name }))));
+  const overDays = board.crews.flatMap((crew) =>
+    crew.cells
+      .filter((cell) => cell.overCapacity)
+      .map((cell) => `${crew.name}, ${board.days.find((d) => d.date === cell.date)?.label}`),
+  );
+  const weekJobs = board.crews.flatMap((crew) =>
+    crew.cells.flatMap((cell) => cell.jobs.map((job) => ({ ...job, crewName: crew.name }))),
+  );
   const inWeek = board.today >= board.week.start && board.today <= board.week.end;
 
   return (
@@ -25,12 +31,29 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
       <PageHeader
         className="items-end"
         title="Schedule"
-        description={<>Week of {board.days[0].label} – {board.days[6].label} {board.week.end.slice(0, 4)} · days in {board.timeZone}</>}
-        actions={<nav aria-label="Week" className="flex gap-2">
-          <Link href={`/schedule?week=${board.week.previous}`} className={buttonVariants({ variant: 'secondary' })}>Previous week</Link>
-          <Link href={`/schedule?week=${board.week.current}`} className={buttonVariants({ variant: 'secondary' })} aria-current={board.week.start === board.week.current ? 'page' : undefined}>This week</Link>
-          <Link href={`/schedule?week=${board.week.next}`} className={buttonVariants({ variant: 'secondary' })}>Next week</Link>
-        </nav>}
+        description={
+          <>
+            Week of {board.days[0].label} – {board.days[6].label} {board.week.end.slice(0, 4)} · days in{' '}
+            {board.timeZone}
+          </>
+        }
+        actions={
+          <nav aria-label="Week" className="flex gap-2">
+            <Link href={`/schedule?week=${board.week.previous}`} className={buttonVariants({ variant: 'secondary' })}>
+              Previous week
+            </Link>
+            <Link
+              href={`/schedule?week=${board.week.current}`}
+              className={buttonVariants({ variant: 'secondary' })}
+              aria-current={board.week.start === board.week.current ? 'page' : undefined}
+            >
+              This week
+            </Link>
+            <Link href={`/schedule?week=${board.week.next}`} className={buttonVariants({ variant: 'secondary' })}>
+              Next week
+            </Link>
+          </nav>
+        }
       />
       {overDays.length > 0 && (
         <p role="status" className="rounded-md bg-missed-100 p-3 text-sm font-medium text-missed-700">
@@ -43,9 +66,13 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
           <ScheduleForm
             jobs={[
               ...board.unscheduled.map((job) => ({ ...job, group: 'Waiting for a crew or a day' })),
-              ...weekJobs.filter((job) => SCHEDULABLE_STATUSES.includes(job.status)).map((job) => ({ ...job, group: 'On this week’s board' })),
+              ...weekJobs
+                .filter((job) => SCHEDULABLE_STATUSES.includes(job.status))
+                .map((job) => ({ ...job, group: 'On this week’s board' })),
             ]}
-            crews={board.crews.filter((crew) => !crew.archived).map(({ id, name, dailyCapacity }) => ({ id, name, dailyCapacity }))}
+            crews={board.crews
+              .filter((crew) => !crew.archived)
+              .map(({ id, name, dailyCapacity }) => ({ id, name, dailyCapacity }))}
             defaultDay={inWeek ? board.today : board.week.start}
           />
         </div>

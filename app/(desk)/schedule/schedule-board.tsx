@@ -17,13 +17,24 @@ export function ScheduleBoard({ board }: { board: Board }) {
         <caption className="sr-only">Crew schedule, week of {board.days[0].label}</caption>
         <thead>
           <tr className="border-b border-slate-200 bg-slate-50 text-left">
-            <th scope="col" className="w-36 p-2 font-semibold">Crew</th>
+            <th scope="col" className="w-36 p-2 font-semibold">
+              Crew
+            </th>
             {board.days.map((day) => {
               const today = day.date === board.today;
               return (
-                <th key={day.date} scope="col" aria-current={today ? 'date' : undefined} className={cn('p-2 font-semibold', today ? 'bg-brand-100 text-brand-900' : '')}>
+                <th
+                  key={day.date}
+                  scope="col"
+                  aria-current={today ? 'date' : undefined}
+                  className={cn('p-2 font-semibold', today ? 'bg-brand-100 text-brand-900' : '')}
+                >
                   {day.label}
-                  {today && <span aria-hidden="true" className="ml-1 rounded bg-brand-700 px-1 text-xs font-medium text-white">Today</span>}
+                  {today && (
+                    <span aria-hidden="true" className="ml-1 rounded bg-brand-700 px-1 text-xs font-medium text-white">
+                      Today
+                    </span>
+                  )}
                 </th>
               );
             })}
@@ -72,11 +83,17 @@ function JobSummary({ job }: { job: BoardJob }) {
   return (
     <div className="space-y-0.5">
       <div className="flex flex-wrap items-center gap-1">
-        <Link href={`/jobs/${job.id}`} className="font-semibold text-brand-700 hover:underline">{job.number}</Link>
+        <Link href={`/jobs/${job.id}`} className="font-semibold text-brand-700 hover:underline">
+          {job.number}
+        </Link>
         <StatusBadge status={job.status} />
       </div>
-      <p className="truncate" title={job.customerName}>{job.customerName}</p>
-      <p className="truncate text-xs text-slate-600" title={job.siteAddress}>{job.siteAddress}</p>
+      <p className="truncate" title={job.customerName}>
+        {job.customerName}
+      </p>
+      <p className="truncate text-xs text-slate-600" title={job.siteAddress}>
+        {job.siteAddress}
+      </p>
       <p className="text-xs text-slate-600">{job.repairCount === 1 ? '1 repair' : `${job.repairCount} repairs`}</p>
     </div>
   );
@@ -85,8 +102,13 @@ function JobSummary({ job }: { job: BoardJob }) {
 /** The jobs waiting for a crew or a day (drafts included), beside the board. */
 export function UnscheduledList({ jobs }: { jobs: BoardJob[] }) {
   return (
-    <aside aria-labelledby="unscheduled-heading" className="w-full shrink-0 rounded-lg bg-white p-3 ring-1 ring-slate-200 xl:w-72">
-      <h2 id="unscheduled-heading" className="mb-2 font-semibold">Unscheduled jobs ({jobs.length})</h2>
+    <aside
+      aria-labelledby="unscheduled-heading"
+      className="w-full shrink-0 rounded-lg bg-white p-3 ring-1 ring-slate-200 xl:w-72"
+    >
+      <h2 id="unscheduled-heading" className="mb-2 font-semibold">
+        Unscheduled jobs ({jobs.length})
+      </h2>
       {jobs.length === 0 ? (
         <p className="text-sm text-slate-600">Every open job has a crew and a day.</p>
       ) : (
@@ -94,7 +116,9 @@ export function UnscheduledList({ jobs }: { jobs: BoardJob[] }) {
           {jobs.map((job) => (
             <li key={job.id} className="rounded border border-slate-200 p-2">
               <JobSummary job={job} />
-              {job.status !== 'draft' && !job.crewId && <p className="text-xs text-slate-600">Day set ({job.scheduledDate}), no crew</p>}
+              {job.status !== 'draft' && !job.crewId && (
+                <p className="text-xs text-slate-600">Day set ({job.scheduledDate}), no crew</p>
+              )}
               {job.crewId && !job.scheduledDate && <p className="text-xs text-slate-600">Crew set, no day</p>}
             </li>
           ))}

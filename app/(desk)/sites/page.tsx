@@ -21,9 +21,28 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
   return (
     <div className="space-y-4">
       <PageHeader title="Sites" />
-      <ListToolbar search={query.q} placeholder="Name, street or city" exportHref={exportHrefOf('/api/sites', raw)} newHref={newHref} newLabel="New site">
-        <FilterSelect name="customerId" label="Customer" value={query.customerId} options={customers.map((c) => ({ value: c.id, label: c.name }))} />
-        <FilterSelect name="archived" label="Archived" value={query.archived === 'false' ? '' : query.archived} options={[{ value: 'true', label: 'Include archived' }, { value: 'only', label: 'Only archived' }]} />
+      <ListToolbar
+        search={query.q}
+        placeholder="Name, street or city"
+        exportHref={exportHrefOf('/api/sites', raw)}
+        newHref={newHref}
+        newLabel="New site"
+      >
+        <FilterSelect
+          name="customerId"
+          label="Customer"
+          value={query.customerId}
+          options={customers.map((c) => ({ value: c.id, label: c.name }))}
+        />
+        <FilterSelect
+          name="archived"
+          label="Archived"
+          value={query.archived === 'false' ? '' : query.archived}
+          options={[
+            { value: 'true', label: 'Include archived' },
+            { value: 'only', label: 'Only archived' },
+          ]}
+        />
       </ListToolbar>
       <SitesTable list={list} sort={query.sort} dir={query.dir} />
     </div>

@@ -22,7 +22,14 @@ const columns: ColumnDef<Row, unknown>[] = [
   {
     id: 'customer',
     header: 'Customer',
-    cell: ({ row }) => (row.original.customer ? <Link href={`/customers/${row.original.customer.id}`} className="hover:underline">{row.original.customer.name}</Link> : '—'),
+    cell: ({ row }) =>
+      row.original.customer ? (
+        <Link href={`/customers/${row.original.customer.id}`} className="hover:underline">
+          {row.original.customer.name}
+        </Link>
+      ) : (
+        '—'
+      ),
   },
   { id: 'address', header: 'Street address', cell: ({ row }) => row.original.addressLine },
   { id: 'city', header: 'City', enableSorting: true, cell: ({ row }) => row.original.city },
@@ -30,5 +37,16 @@ const columns: ColumnDef<Row, unknown>[] = [
 ];
 
 export function SitesTable({ list, sort, dir }: { list: SiteListResponse; sort: string; dir: 'asc' | 'desc' }) {
-  return <DataTable caption="Sites" columns={columns} data={list.items} page={list.page} pageCount={list.pageCount} total={list.total} sort={sort} dir={dir} />;
+  return (
+    <DataTable
+      caption="Sites"
+      columns={columns}
+      data={list.items}
+      page={list.page}
+      pageCount={list.pageCount}
+      total={list.total}
+      sort={sort}
+      dir={dir}
+    />
+  );
 }

@@ -26,7 +26,9 @@ export default async function Page() {
   const deadlineLabel = (english: string) => (t.has(`deadlines.${english}`) ? t(`deadlines.${english}`) : english);
   const length = (mm: number, kind?: 'long') => formatLength(mm, units, kind, { locale });
   // Today's and tomorrow's installs open without signal even if never opened on this tablet.
-  const installIds = jobs.flatMap((job) => job.repairs.flatMap((repair) => (repair.install ? [repair.install.id] : [])));
+  const installIds = jobs.flatMap((job) =>
+    job.repairs.flatMap((repair) => (repair.install ? [repair.install.id] : [])),
+  );
   const keep = ['/today', ...installIds.flatMap((id) => [`/installs/${id}`, `/api/installs/${id}`])];
   return (
     <IntlScope namespaces={['today']}>
@@ -35,19 +37,36 @@ export default async function Page() {
         <h1 className="text-3xl font-bold">{t('title')}</h1>
         {jobs.length === 0 && <p className="rounded-xl bg-white p-6 text-slate-700">{t('none')}</p>}
         {jobs.map((job) => (
-          <article key={job.id} className="rounded-xl bg-white p-5 shadow-sm ring-1 ring-slate-200" data-testid={`job-${job.number}`}>
+          <article
+            key={job.id}
+            className="rounded-xl bg-white p-5 shadow-sm ring-1 ring-slate-200"
+            data-testid={`job-${job.number}`}
+          >
             <p className="text-sm font-semibold uppercase tracking-wide text-brand-700">
-              {job.scheduledDate === today ? t('today') : job.scheduledDate === tomorrow ? t('tomorrow') : labelIn(tl, job.status)} ·{' '}
-              {t('job', { number: job.number })}
+              {job.scheduledDate === today
+                ? t('today')
+                : job.scheduledDate === tomorrow
+                  ? t('tomorrow')
+                  : labelIn(tl, job.status)}{' '}
+              · {t('job', { number: job.number })}
             </p>
-            <h2 className="text-2xl font-bold">{job.site?.addressLine}, {job.site?.city}</h2>
-            <p className="text-slate-700">{job.customer?.name}{job.customer?.phone ? ` · ${job.customer.phone}` : ''}</p>
+            <h2 className="text-2xl font-bold">
+              {job.site?.addressLine}, {job.site?.city}
+            </h2>
+            <p className="text-slate-700">
+              {job.customer?.name}
+              {job.customer?.phone ? ` · ${job.customer.phone}` : ''}
+            </p>
             {job.reviewComment && (
-              <p className="mt-2 rounded-md bg-near-100 p-3 text-near-700" data-testid="review-comment">{t('office', { comment: job.reviewComment })}</p>
+              <p className="mt-2 rounded-md bg-near-100 p-3 text-near-700" data-testid="review-comment">
+                {t('office', { comment: job.reviewComment })}
+              </p>
             )}
             {job.notes && <p className="mt-2 text-slate-700">{job.notes}</p>}
             <p className="mt-2 text-base">
-              {t('accessPoints', { list: (job.site?.accessPoints ?? []).map((p) => `${p.label} (${labelIn(tl, p.kind)})`).join(', ') })}
+              {t('accessPoints', {
+                list: (job.site?.accessPoints ?? []).map((p) => `${p.label} (${labelIn(tl, p.kind)})`).join(', '),
+              })}
             </p>
             <ul className="mt-3 space-y-3">
               {job.repairs.map((repair) => (
@@ -67,11 +86,24 @@ export default async function Page() {
                   </p>
                   <div className="mt-2 space-y-2">
                     {repair.install?.deadline && (
-                      <RunningClock label={deadlineLabel(repair.install.deadline.label)} start={repair.install.deadline.start} at={repair.install.deadline.at} timeZone={company.timeZone} />
+                      <RunningClock
+                        label={deadlineLabel(repair.install.deadline.label)}
+                        start={repair.install.deadline.start}
+                        at={repair.install.deadline.at}
+                        timeZone={company.timeZone}
+                      />
                     )}
                     {repair.install ? (
-                      <Link href={`/installs/${repair.install.id}`} className={buttonVariants({ variant: repair.install.step === 'done' ? 'secondary' : 'primary', size: 'field' })}>
-                        {repair.install.step === 'done' ? t('installStatus', { status: labelIn(tl, repair.install.status) }) : t('openInstall')}
+                      <Link
+                        href={`/installs/${repair.install.id}`}
+                        className={buttonVariants({
+                          variant: repair.install.step === 'done' ? 'secondary' : 'primary',
+                          size: 'field',
+                        })}
+                      >
+                        {repair.install.step === 'done'
+                          ? t('installStatus', { status: labelIn(tl, repair.install.status) })
+                          : t('openInstall')}
                       </Link>
                     ) : (
                       <StartInstallButton repairId={repair.id} label={t('startInstall')} />

@@ -24,7 +24,11 @@ export function StartInstallButton({ repairId, label }: { repairId: string; labe
           setPending(true);
           setError(null);
           try {
-            await fetchJson('/api/installs', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ id, repairId }) });
+            await fetchJson('/api/installs', {
+              method: 'POST',
+              headers: { 'content-type': 'application/json' },
+              body: JSON.stringify({ id, repairId }),
+            });
             router.push(`/installs/${id}`);
           } catch (e) {
             setError(e instanceof Error ? e.message : t('startFailed'));
@@ -34,7 +38,11 @@ export function StartInstallButton({ repairId, label }: { repairId: string; labe
       >
         {pending ? t('starting') : label}
       </button>
-      {error && <p role="alert" className="mt-1 text-base text-missed-700">{error} {t('needsSignal')}</p>}
+      {error && (
+        <p role="alert" className="mt-1 text-base text-missed-700">
+          {error} {t('needsSignal')}
+        </p>
+      )}
     </div>
   );
 }

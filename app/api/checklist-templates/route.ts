@@ -13,7 +13,10 @@ const routes = recordCollection({
   create: createChecklistTemplate,
   csv: [
     { header: 'Name', value: (t) => t.name },
-    { header: 'Items', value: (t) => t.items.map((item) => `${item.label}${item.required ? '' : ' (optional)'}`).join(' | ') },
+    {
+      header: 'Items',
+      value: (t) => t.items.map((item) => `${item.label}${item.required ? '' : ' (optional)'}`).join(' | '),
+    },
     { header: 'Active', value: (t) => (t.active ? 'yes' : 'no') },
   ],
 });

@@ -17,16 +17,19 @@ export const GET = handle(async (request: Request) => {
   const query = parseOrThrow(installListQuerySchema, searchParamsOf(request));
   if (!wantsCsv(request)) return NextResponse.json(await listInstalls(user, query));
   const { items } = await listInstalls(user, query, true);
-  return csvResponse('installs', toCsv(items, [
-    { header: 'Job', value: (i) => i.job.number },
-    { header: 'Customer', value: (i) => i.customer.name },
-    { header: 'Site', value: (i) => `${i.site.addressLine}, ${i.site.city}` },
-    { header: 'Crew', value: (i) => i.crew?.name },
-    { header: 'Repair', value: (i) => i.repair.position },
-    { header: 'Status', value: (i) => label(i.status) },
-    { header: 'Finished', value: (i) => i.finishedAt?.toISOString() },
-    { header: 'Flags', value: (i) => i.flags.map((f) => `${f.severity}: ${f.message}`).join(' | ') },
-  ]));
+  return csvResponse(
+    'installs',
+    toCsv(items, [
+      { header: 'Job', value: (i) => i.job.number },
+      { header: 'Customer', value: (i) => i.customer.name },
+      { header: 'Site', value: (i) => `${i.site.addressLine}, ${i.site.city}` },
+      { header: 'Crew', value: (i) => i.crew?.name },
+      { header: 'Repair', value: (i) => i.repair.position },
+      { header: 'Status', value: (i) => label(i.status) },
+      { header: 'Finished', value: (i) => i.finishedAt?.toISOString() },
+      { header: 'Flags', value: (i) => i.flags.map((f) => `${f.severity}: ${f.message}`).join(' | ') },
+    ]),
+  );
 });
 
 /** Starts an install; a retried create (same id and repair) answers 200 with the first one. */

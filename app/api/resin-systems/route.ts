@@ -1,5 +1,5 @@
 import { createResinSystem, listResinSystems } from '@/lib/data/resin-systems';
-import { label , ADMIN_ONLY } from '@/lib/domain/vocabulary';
+import { label, ADMIN_ONLY } from '@/lib/domain/vocabulary';
 import { recordCollection } from '@/lib/routes/records';
 import { resinSystemInputSchema, resinSystemListQuerySchema } from '@/lib/validation/resin-systems';
 

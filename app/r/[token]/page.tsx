@@ -7,7 +7,13 @@ import { openReportLink } from '@/lib/report/link-access';
 // answers 404 with the same page whatever the reason (see not-found.tsx).
 export const dynamic = 'force-dynamic';
 
-export default async function Page({ params, searchParams }: { params: Promise<{ token: string }>; searchParams: Promise<{ paid?: string }> }) {
+export default async function Page({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ token: string }>;
+  searchParams: Promise<{ paid?: string }>;
+}) {
   const { token } = await params;
   const access = await openReportLink(token);
   if (!access.ok) notFound();
@@ -16,7 +22,14 @@ export default async function Page({ params, searchParams }: { params: Promise<{
     <ReportView
       data={access.data}
       pdfHref={`/r/${encodeURIComponent(token)}/pdf`}
-      invoiceSlot={<CustomerInvoice companyId={access.claims.companyId} jobId={access.claims.jobId} token={token} justPaid={justPaid} />}
+      invoiceSlot={
+        <CustomerInvoice
+          companyId={access.claims.companyId}
+          jobId={access.claims.jobId}
+          token={token}
+          justPaid={justPaid}
+        />
+      }
     />
   );
 }

@@ -5,7 +5,9 @@ export async function call<P extends Record<string, string>>(
   params: P = {} as P,
   init?: RequestInit,
 ) {
-  const response = await handler(new Request(new URL(url, 'http://localhost'), init), { params: Promise.resolve(params) });
+  const response = await handler(new Request(new URL(url, 'http://localhost'), init), {
+    params: Promise.resolve(params),
+  });
   const body = response.headers.get('content-type')?.includes('json') ? await response.json() : await response.text();
   return { status: response.status, body };
 }

@@ -51,7 +51,10 @@ export type FuzzTarget = {
 };
 
 // bcrypt at cost 12 takes a quarter of a second on purpose: only a few bodies carry a password long enough.
-const password = fc.oneof({ weight: 40, arbitrary: fc.string({ maxLength: 11 }) }, { weight: 1, arbitrary: fc.string({ minLength: 12, maxLength: 30 }) });
+const password = fc.oneof(
+  { weight: 40, arbitrary: fc.string({ maxLength: 11 }) },
+  { weight: 1, arbitrary: fc.string({ minLength: 12, maxLength: 30 }) },
+);
 
 /** One install tap per type, its payload shaped from that type's schema. */
 const eventSchema = z.union(
@@ -80,13 +83,28 @@ const webhookSchema = z.object({
     }),
   }),
 });
-const sign = (payload: string) => ({ 'stripe-signature': Stripe.webhooks.generateTestHeaderString({ payload, secret: process.env.STRIPE_WEBHOOK_SECRET ?? 'whsec_missing' }) });
+const sign = (payload: string) => ({
+  'stripe-signature': Stripe.webhooks.generateTestHeaderString({
+    payload,
+    secret: process.env.STRIPE_WEBHOOK_SECRET ?? 'whsec_missing',
+  }),
+});
 
 async function makeInvoice(w: InstallWorld) {
   await Job.update({ status: 'approved' }, { where: { id: w.job.id } });
-  const made = await withSession(w.office, () => call(createInvoiceRoute, '/api/invoices', {}, jsonBody('POST', {
-    jobId: w.job.id, taxRatePct: 8.25, dueOn: '2026-12-31', lines: [{ description: 'Point repair', quantity: 1, unitPriceCents: 100_000, repairId: w.repair.id }],
-  })));
+  const made = await withSession(w.office, () =>
+    call(
+      createInvoiceRoute,
+      '/api/invoices',
+      {},
+      jsonBody('POST', {
+        jobId: w.job.id,
+        taxRatePct: 8.25,
+        dueOn: '2026-12-31',
+        lines: [{ description: 'Point repair', quantity: 1, unitPriceCents: 100_000, repairId: w.repair.id }],
+      }),
+    ),
+  );
   if (made.status !== 201) throw new Error(`invoice setup answered ${made.status}: ${JSON.stringify(made.body)}`);
   return { invoice: made.body.id as string, company: w.company.id };
 }
@@ -94,8 +112,17 @@ async function makeInvoice(w: InstallWorld) {
 async function makeAttachment(w: InstallWorld) {
   const install = await withSession(w.foreman, () => startInstall(w));
   const row = await Attachment.create({
-    companyId: w.company.id, jobId: w.job.id, repairId: w.repair.id, installId: install, kind: 'after', storageKey: `fuzz/${randomUUID()}.png`,
-    contentType: 'image/png', byteSize: 1024, originalName: 'fuzz.png', uploadedById: w.foreman.id, status: 'ready',
+    companyId: w.company.id,
+    jobId: w.job.id,
+    repairId: w.repair.id,
+    installId: install,
+    kind: 'after',
+    storageKey: `fuzz/${randomUUID()}.png`,
+    contentType: 'image/png',
+    byteSize: 1024,
+    originalName: 'fuzz.png',
+    uploadedById: w.foreman.id,
+    status: 'ready',
   } as never);
   return { attachment: row.id as string, install };
 }
@@ -112,11 +139,21 @@ export const FUZZ_TARGETS: Record<string, FuzzTarget> = {
     schema: uploadRequestSchema,
     setup: installOf,
     overrides: (w, made) => ({
-      installId: fc.oneof({ weight: 4, arbitrary: fc.constantFrom(made.install, w.repair.id) }, { weight: 1, arbitrary: fc.constant(undefined) }),
-      repairId: fc.oneof({ weight: 1, arbitrary: fc.constant(w.repair.id) }, { weight: 3, arbitrary: fc.constant(undefined) }),
+      installId: fc.oneof(
+        { weight: 4, arbitrary: fc.constantFrom(made.install, w.repair.id) },
+        { weight: 1, arbitrary: fc.constant(undefined) },
+      ),
+      repairId: fc.oneof(
+        { weight: 1, arbitrary: fc.constant(w.repair.id) },
+        { weight: 3, arbitrary: fc.constant(undefined) },
+      ),
     }),
   },
-  'DELETE /api/attachments/[id]': { setup: makeAttachment, id: (_, m) => m.attachment, query: fc.record({ reason: fc.string({ maxLength: 600 }) }, { requiredKeys: [] }) },
+  'DELETE /api/attachments/[id]': {
+    setup: makeAttachment,
+    id: (_, m) => m.attachment,
+    query: fc.record({ reason: fc.string({ maxLength: 600 }) }, { requiredKeys: [] }),
+  },
   'POST /api/attachments/[id]/complete': { setup: makeAttachment, id: (_, m) => m.attachment },
   'POST /api/checklist-templates': { schema: checklistTemplateInputSchema },
   'PATCH /api/checklist-templates/[id]': { schema: checklistTemplatePatchSchema, id: (w) => w.checklist.id },
@@ -134,8 +171,19 @@ export const FUZZ_TARGETS: Record<string, FuzzTarget> = {
   'POST /api/installs/[id]/events': { schema: eventSchema, as: 'foreman', setup: installOf, id: (_, m) => m.install },
   'POST /api/installs/[id]/review': { schema: reviewDecisionSchema, setup: installOf, id: (_, m) => m.install },
   // The install neither failed nor was sent back: a well-formed body meets the 409, the rest a 400.
-  'POST /api/installs/[id]/redo': { schema: redoInstallSchema, as: 'foreman', setup: installOf, id: (_, m) => m.install },
-  'POST /api/invoices': { schema: invoiceInputSchema, setup: async (w) => { await Job.update({ status: 'approved' }, { where: { id: w.job.id } }); return {}; } },
+  'POST /api/installs/[id]/redo': {
+    schema: redoInstallSchema,
+    as: 'foreman',
+    setup: installOf,
+    id: (_, m) => m.install,
+  },
+  'POST /api/invoices': {
+    schema: invoiceInputSchema,
+    setup: async (w) => {
+      await Job.update({ status: 'approved' }, { where: { id: w.job.id } });
+      return {};
+    },
+  },
   'PATCH /api/invoices/[id]': { schema: invoicePatchSchema, setup: makeInvoice, id: (_, m) => m.invoice },
   'POST /api/invoices/[id]/status': { schema: invoiceActionSchema, setup: makeInvoice, id: (_, m) => m.invoice },
   'POST /api/jobs': { schema: jobInputSchema },
@@ -167,14 +215,35 @@ export const FUZZ_TARGETS: Record<string, FuzzTarget> = {
   'POST /api/sites/[id]/access-points': { schema: accessPointInputSchema, id: (w) => w.site.id },
   'POST /api/users': { schema: userInputSchema, overrides: () => ({ password }) },
   'PATCH /api/users/[id]': { schema: userPatchSchema, id: (w) => w.technician.id },
-  'POST /api/users/[id]/password': { schema: passwordResetSchema, overrides: () => ({ password }), id: (w) => w.technician.id },
+  'POST /api/users/[id]/password': {
+    schema: passwordResetSchema,
+    overrides: () => ({ password }),
+    id: (w) => w.technician.id,
+  },
 };
 
 /** Every id of a world, for bodies that name rows (the own pool, or another company's). */
 export function idsOf(w: InstallWorld, made: Record<string, string> = {}): string[] {
   return [
-    w.company.id, w.admin.id, w.office.id, w.foreman.id, w.technician.id, w.otherTechnician.id, w.crew.id, w.otherCrew.id, w.customer.id,
-    w.site.id, w.segment.id, ...w.accessPoints.map((a) => a.id), w.job.id, w.repair.id, w.resinSystem.id, w.resinKit.id, w.expiredKit.id,
-    w.packer.id, w.checklist.id, ...Object.values(made),
+    w.company.id,
+    w.admin.id,
+    w.office.id,
+    w.foreman.id,
+    w.technician.id,
+    w.otherTechnician.id,
+    w.crew.id,
+    w.otherCrew.id,
+    w.customer.id,
+    w.site.id,
+    w.segment.id,
+    ...w.accessPoints.map((a) => a.id),
+    w.job.id,
+    w.repair.id,
+    w.resinSystem.id,
+    w.resinKit.id,
+    w.expiredKit.id,
+    w.packer.id,
+    w.checklist.id,
+    ...Object.values(made),
   ];
 }

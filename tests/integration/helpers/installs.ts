@@ -6,11 +6,16 @@ import type { InstallEventType } from '@/lib/domain/vocabulary';
 import { call } from './call';
 import type { InstallWorld } from './world';
 
-const json = (body: unknown): RequestInit => ({ method: 'POST', body: JSON.stringify(body), headers: { 'content-type': 'application/json' } });
+const json = (body: unknown): RequestInit => ({
+  method: 'POST',
+  body: JSON.stringify(body),
+  headers: { 'content-type': 'application/json' },
+});
 
 export const createInstall = (body: unknown) => call(createInstallRoute, '/api/installs', {}, json(body));
 export const getInstall = (id: string) => call(getInstallRoute, `/api/installs/${id}`, { id });
-export const postEvent = (installId: string, body: unknown) => call(postEventRoute, `/api/installs/${installId}/events`, { id: installId }, json(body));
+export const postEvent = (installId: string, body: unknown) =>
+  call(postEventRoute, `/api/installs/${installId}/events`, { id: installId }, json(body));
 
 /** Starts an install of the world's repair as whoever is signed in; returns its id. */
 export async function startInstall(w: InstallWorld) {
@@ -24,7 +29,12 @@ export async function startInstall(w: InstallWorld) {
 export const T0 = Date.now() - 5 * 3600_000;
 export const at = (min: number) => new Date(T0 + min * 60_000).toISOString();
 
-export const body = (type: InstallEventType, min: number, payload: Record<string, unknown> = {}, extra: Record<string, unknown> = {}) => ({
+export const body = (
+  type: InstallEventType,
+  min: number,
+  payload: Record<string, unknown> = {},
+  extra: Record<string, unknown> = {},
+) => ({
   clientEventId: randomUUID(),
   type,
   deviceTime: at(min),
@@ -37,10 +47,21 @@ export function cleanInstall(w: InstallWorld, bend: Partial<Record<InstallEventT
   const t = (type: InstallEventType, min: number) => bend[type] ?? min;
   return [
     body('safety_acknowledged', t('safety_acknowledged', 0)),
-    body('checks_done', t('checks_done', 4), { items: [{ id: 'flow', ok: true }, { id: 'clean', ok: true }] }),
+    body('checks_done', t('checks_done', 4), {
+      items: [
+        { id: 'flow', ok: true },
+        { id: 'clean', ok: true },
+      ],
+    }),
     body('dry_run_started', t('dry_run_started', 8)),
     body('dry_run_finished', t('dry_run_finished', 11), { seconds: 180 }),
-    body('conditions_recorded', t('conditions_recorded', 13), { mixTempC: 20, pipeTempC: 20, resinKitId: w.resinKit.id, packerId: w.packer.id, patchLengthMm: 910 }),
+    body('conditions_recorded', t('conditions_recorded', 13), {
+      mixTempC: 20,
+      pipeTempC: 20,
+      resinKitId: w.resinKit.id,
+      packerId: w.packer.id,
+      patchLengthMm: 910,
+    }),
     body('go_decision', t('go_decision', 14), { go: true }),
     body('resin_mixed', t('resin_mixed', 16)),
     body('patch_loaded', t('patch_loaded', 22)),

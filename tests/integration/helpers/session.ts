@@ -17,7 +17,10 @@ export async function withSession<T>(user: Signable, fn: () => Promise<T>): Prom
 }
 
 const tokenOf = (user: Signable) =>
-  encode({ token: { sub: user.id, companyId: user.companyId, role: user.role, tokenVersion: user.tokenVersion } as never, secret: authSecret() });
+  encode({
+    token: { sub: user.id, companyId: user.companyId, role: user.role, tokenVersion: user.tokenVersion } as never,
+    secret: authSecret(),
+  });
 
 type Signable = { id: string; companyId: string; role: string; tokenVersion: number };
 

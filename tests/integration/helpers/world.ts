@@ -1,6 +1,19 @@
 import { randomUUID } from 'node:crypto';
 import {
-  AccessPoint, ChecklistTemplate, Company, Crew, CrewMember, Customer, Job, Packer, Repair, ResinKit, ResinSystem, Segment, Site, User,
+  AccessPoint,
+  ChecklistTemplate,
+  Company,
+  Crew,
+  CrewMember,
+  Customer,
+  Job,
+  Packer,
+  Repair,
+  ResinKit,
+  ResinSystem,
+  Segment,
+  Site,
+  User,
 } from '@/models';
 import type { Role } from '@/lib/domain/vocabulary';
 
@@ -15,32 +28,79 @@ export async function makeWorld(name = 'Test') {
   const tag = randomUUID().slice(0, 8);
   const company = await Company.create({ name: `${name} ${tag}`, timeZone: 'America/Denver' });
   const mkUser = (role: Role) =>
-    User.create({ companyId: company.id, email: `${role}-${tag}@${name.toLowerCase()}.test`, name: `${role} ${tag}`, passwordHash: HASH, role });
-  const [admin, office, foreman, technician] = await Promise.all((['admin', 'office', 'foreman', 'technician'] as const).map(mkUser));
+    User.create({
+      companyId: company.id,
+      email: `${role}-${tag}@${name.toLowerCase()}.test`,
+      name: `${role} ${tag}`,
+      passwordHash: HASH,
+      role,
+    });
+  const [admin, office, foreman, technician] = await Promise.all(
+    (['admin', 'office', 'foreman', 'technician'] as const).map(mkUser),
+  );
   const crew = await Crew.create({ companyId: company.id, name: `Crew ${tag}` });
-  await CrewMember.bulkCreate([foreman, technician].map((u) => ({ companyId: company.id, crewId: crew.id, userId: u.id })));
+  await CrewMember.bulkCreate(
+    [foreman, technician].map((u) => ({ companyId: company.id, crewId: crew.id, userId: u.id })),
+  );
   const customer = await Customer.create({ companyId: company.id, name: `Customer ${tag}` });
-  const site = await Site.create({ companyId: company.id, customerId: customer.id, name: 'Site', addressLine: '1 Test Street', city: 'Testville' });
+  const site = await Site.create({
+    companyId: company.id,
+    customerId: customer.id,
+    name: 'Site',
+    addressLine: '1 Test Street',
+    city: 'Testville',
+  });
   const [a, b] = await AccessPoint.bulkCreate([
     { companyId: company.id, siteId: site.id, label: 'MH-1', kind: 'manhole' },
     { companyId: company.id, siteId: site.id, label: 'MH-2', kind: 'manhole' },
   ]);
   const segment = await Segment.create({
-    companyId: company.id, siteId: site.id, fromAccessPointId: a.id, toAccessPointId: b.id, label: 'MH-1 → MH-2',
-    material: 'vitrified_clay', nominalSizeMm: 203, insideDiameterMm: 200, lengthMm: 50000,
+    companyId: company.id,
+    siteId: site.id,
+    fromAccessPointId: a.id,
+    toAccessPointId: b.id,
+    label: 'MH-1 → MH-2',
+    material: 'vitrified_clay',
+    nominalSizeMm: 203,
+    insideDiameterMm: 200,
+    lengthMm: 50000,
   });
   const job = await Job.create({
-    companyId: company.id, number: `2026-${tag}`.slice(0, 20), customerId: customer.id, siteId: site.id, crewId: crew.id, status: 'scheduled', scheduledDate: '2026-12-01',
+    companyId: company.id,
+    number: `2026-${tag}`.slice(0, 20),
+    customerId: customer.id,
+    siteId: site.id,
+    crewId: crew.id,
+    status: 'scheduled',
+    scheduledDate: '2026-12-01',
   });
   const repair = await Repair.create({
-    companyId: company.id, jobId: job.id, segmentId: segment.id, distanceMm: 12000, defectType: 'open_fracture', conditionGrade: 4, defectLengthMm: 300,
+    companyId: company.id,
+    jobId: job.id,
+    segmentId: segment.id,
+    distanceMm: 12000,
+    defectType: 'open_fracture',
+    conditionGrade: 4,
+    defectLengthMm: 300,
   });
   const otherCrew = await Crew.create({ companyId: company.id, name: `Other crew ${tag}` });
   const otherTechnician = await mkUserNamed(company.id, `technician2-${tag}@${name.toLowerCase()}.test`, 'technician');
   await CrewMember.create({ companyId: company.id, crewId: otherCrew.id, userId: otherTechnician.id });
   return {
-    company, admin, office, foreman, technician, crew, customer, site, segment, accessPoints: [a, b], job, repair,
-    otherCrew, otherTechnician,
+    company,
+    admin,
+    office,
+    foreman,
+    technician,
+    crew,
+    customer,
+    site,
+    segment,
+    accessPoints: [a, b],
+    job,
+    repair,
+    otherCrew,
+    otherTechnician,
   };
 }
 
@@ -64,7 +124,15 @@ const mkUserNamed = (companyId: string, email: string, role: Role) =>
 async function makeMaterials(companyId: string, tag: string) {
   // The example epoxy of tests/unit/cure/fixtures.ts (example inputs, not any product's data).
   const resinSystem = await ResinSystem.create({
-    companyId, name: `Epoxy ${tag}`, refTempC: 20, potLifeMin: 30, holdMin: 90, fullCureMin: 240, minTempC: 5, maxTempC: 40, doublingC: 10,
+    companyId,
+    name: `Epoxy ${tag}`,
+    refTempC: 20,
+    potLifeMin: 30,
+    holdMin: 90,
+    fullCureMin: 240,
+    minTempC: 5,
+    maxTempC: 40,
+    doublingC: 10,
   });
   const [resinKit, expiredKit] = await ResinKit.bulkCreate([
     { companyId, resinSystemId: resinSystem.id, lot: `LOT-${tag}`, expiresOn: '2099-12-31', quantityL: 5 },
@@ -72,10 +140,22 @@ async function makeMaterials(companyId: string, tag: string) {
   ]);
   // Fits 150–250 mm pipe; the 910 mm patch of the repair (300 mm defect + 2 × 305 mm) leaves 145 mm of bladder each end.
   const packer = await Packer.create({
-    companyId, name: `Packer 200 ${tag}`, minDiameterMm: 150, maxDiameterMm: 250, bladderLengthMm: 1200, endMarginMm: 100, minPressureKpa: 70, maxPressureKpa: 150,
+    companyId,
+    name: `Packer 200 ${tag}`,
+    minDiameterMm: 150,
+    maxDiameterMm: 250,
+    bladderLengthMm: 1200,
+    endMarginMm: 100,
+    minPressureKpa: 70,
+    maxPressureKpa: 150,
   });
   const checklist = await ChecklistTemplate.create({
-    companyId, name: 'Before the pull', items: [{ id: 'flow', label: 'Flow stopped upstream', required: true }, { id: 'clean', label: 'Pipe cleaned', required: true }],
+    companyId,
+    name: 'Before the pull',
+    items: [
+      { id: 'flow', label: 'Flow stopped upstream', required: true },
+      { id: 'clean', label: 'Pipe cleaned', required: true },
+    ],
   });
   return { resinSystem, resinKit, expiredKit, packer, checklist };
 }

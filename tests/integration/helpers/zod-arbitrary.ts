@@ -23,8 +23,28 @@ type Def = {
   values?: unknown[];
   valueType?: z.ZodType;
 };
-type Bag = { minimum?: number; maximum?: number; minLength?: number; maxLength?: number; integer?: boolean; pattern?: RegExp };
-type Check = { _zod: { def: { check: string; value?: number; inclusive?: boolean; minimum?: number; maximum?: number; length?: number; format?: string; pattern?: RegExp } } };
+type Bag = {
+  minimum?: number;
+  maximum?: number;
+  minLength?: number;
+  maxLength?: number;
+  integer?: boolean;
+  pattern?: RegExp;
+};
+type Check = {
+  _zod: {
+    def: {
+      check: string;
+      value?: number;
+      inclusive?: boolean;
+      minimum?: number;
+      maximum?: number;
+      length?: number;
+      format?: string;
+      pattern?: RegExp;
+    };
+  };
+};
 
 const internals = (schema: z.ZodType) => (schema as unknown as { _zod: { def: Def & { checks?: Check[] } } })._zod;
 
@@ -46,11 +66,38 @@ function boundsOf(def: Def & { checks?: Check[] }): Bag {
 
 const LONG = 'x'.repeat(10_000);
 const FAR_DATES = ['0001-01-01', '1900-02-29', '9999-12-31', '2026-02-30', '1970-01-01', '2999-01-01'];
-const FAR_TIMES = ['0001-01-01T00:00:00.000Z', '9999-12-31T23:59:59.999Z', '1970-01-01T00:00:00Z', '2100-06-01T12:00:00+14:00', '2026-13-01T00:00:00Z'];
+const FAR_TIMES = [
+  '0001-01-01T00:00:00.000Z',
+  '9999-12-31T23:59:59.999Z',
+  '1970-01-01T00:00:00Z',
+  '2100-06-01T12:00:00+14:00',
+  '2026-13-01T00:00:00Z',
+];
 
 /** Values of the wrong type or out of any sane range; every field gets some of these. */
 export const hostile: fc.Arbitrary<unknown> = fc.oneof(
-  fc.constantFrom<unknown>(null, true, false, 0, -1, -0.5, 1e308, -1e308, Number.MAX_SAFE_INTEGER + 2, 'NaN', 'Infinity', '-Infinity', '1e308', '', ' ', [], {}, [null], { $gt: '' }, LONG),
+  fc.constantFrom<unknown>(
+    null,
+    true,
+    false,
+    0,
+    -1,
+    -0.5,
+    1e308,
+    -1e308,
+    Number.MAX_SAFE_INTEGER + 2,
+    'NaN',
+    'Infinity',
+    '-Infinity',
+    '1e308',
+    '',
+    ' ',
+    [],
+    {},
+    [null],
+    { $gt: '' },
+    LONG,
+  ),
   fc.constantFrom<unknown>(...FAR_DATES, ...FAR_TIMES),
   fc.string({ maxLength: 30 }),
   fc.string({ unit: 'grapheme', maxLength: 30 }),
@@ -68,13 +115,34 @@ function idArbitrary(pools: IdPools) {
 }
 
 function stringArbitrary(bag: Bag): fc.Arbitrary<string> {
-  if (bag.pattern) return fc.oneof({ weight: 6, arbitrary: fc.stringMatching(bag.pattern) }, { weight: 1, arbitrary: fc.string({ maxLength: 20 }) });
+  if (bag.pattern)
+    return fc.oneof(
+      { weight: 6, arbitrary: fc.stringMatching(bag.pattern) },
+      { weight: 1, arbitrary: fc.string({ maxLength: 20 }) },
+    );
   const min = bag.minLength ?? 0;
   const max = Math.min(bag.maxLength ?? 60, 300);
   return fc.oneof(
     { weight: 5, arbitrary: fc.string({ minLength: min, maxLength: Math.max(min, Math.min(max, 40)) }) },
-    { weight: 2, arbitrary: fc.string({ unit: 'grapheme', minLength: min, maxLength: Math.max(min, Math.min(max, 20)) }) },
-    { weight: 1, arbitrary: fc.constantFrom('Main run', 'MH-1', 'a', '  padded  ', '<script>alert(1)</script>', "O'Brien; DROP TABLE jobs;--", '=1+2', '\u0000', '😀🚰', LONG) },
+    {
+      weight: 2,
+      arbitrary: fc.string({ unit: 'grapheme', minLength: min, maxLength: Math.max(min, Math.min(max, 20)) }),
+    },
+    {
+      weight: 1,
+      arbitrary: fc.constantFrom(
+        'Main run',
+        'MH-1',
+        'a',
+        '  padded  ',
+        '<script>alert(1)</script>',
+        "O'Brien; DROP TABLE jobs;--",
+        '=1+2',
+        '\u0000',
+        '😀🚰',
+        LONG,
+      ),
+    },
   );
 }
 
@@ -94,18 +162,45 @@ function numberArbitrary(bag: Bag, key = ''): fc.Arbitrary<number> {
 }
 
 const dateArbitrary = fc.oneof(
-  { weight: 4, arbitrary: fc.integer({ min: -400, max: 400 }).map((days) => new Date(Date.now() + days * 86_400_000).toISOString().slice(0, 10)) },
+  {
+    weight: 4,
+    arbitrary: fc
+      .integer({ min: -400, max: 400 })
+      .map((days) => new Date(Date.now() + days * 86_400_000).toISOString().slice(0, 10)),
+  },
   { weight: 1, arbitrary: fc.constantFrom(...FAR_DATES) },
 );
 const timeArbitrary = fc.oneof(
-  { weight: 4, arbitrary: fc.integer({ min: -30 * 24 * 60, max: 24 * 60 }).map((min) => new Date(Date.now() + min * 60_000).toISOString()) },
+  {
+    weight: 4,
+    arbitrary: fc
+      .integer({ min: -30 * 24 * 60, max: 24 * 60 })
+      .map((min) => new Date(Date.now() + min * 60_000).toISOString()),
+  },
   { weight: 1, arbitrary: fc.constantFrom(...FAR_TIMES) },
 );
 
 /** Keys whose schema checks against a list the generator cannot see (a refine): the list, and a few outside it. */
 const KEYS: Record<string, fc.Arbitrary<unknown>> = {
-  timeZone: fc.constantFrom('America/Denver', 'UTC', 'Europe/Berlin', 'Asia/Kolkata', 'Mars/Olympus_Mons', 'america/denver', ''),
-  contentType: fc.constantFrom('image/jpeg', 'image/png', 'image/webp', 'video/mp4', 'IMAGE/PNG', 'application/pdf', 'text/html', 'image/svg+xml'),
+  timeZone: fc.constantFrom(
+    'America/Denver',
+    'UTC',
+    'Europe/Berlin',
+    'Asia/Kolkata',
+    'Mars/Olympus_Mons',
+    'america/denver',
+    '',
+  ),
+  contentType: fc.constantFrom(
+    'image/jpeg',
+    'image/png',
+    'image/webp',
+    'video/mp4',
+    'IMAGE/PNG',
+    'application/pdf',
+    'text/html',
+    'image/svg+xml',
+  ),
 };
 
 type Options = { pools: IdPools; overrides: Record<string, fc.Arbitrary<unknown>>; noise: number; key?: string };
@@ -114,7 +209,11 @@ type Options = { pools: IdPools; overrides: Record<string, fc.Arbitrary<unknown>
  * A body for the schema. A third are hostile through and through or of the schema's shape with many bad
  * fields; the rest are of its shape with a rare bad field, so they reach the data layer.
  */
-export function arbitraryOf(schema: z.ZodType, pools: IdPools, extra: Record<string, fc.Arbitrary<unknown>> = {}): fc.Arbitrary<unknown> {
+export function arbitraryOf(
+  schema: z.ZodType,
+  pools: IdPools,
+  extra: Record<string, fc.Arbitrary<unknown>> = {},
+): fc.Arbitrary<unknown> {
   const overrides = { ...KEYS, ...extra };
   return fc.oneof(
     { weight: 4, arbitrary: node(schema, { pools, overrides, noise: 0.02 }, 0) },
@@ -126,7 +225,10 @@ export function arbitraryOf(schema: z.ZodType, pools: IdPools, extra: Record<str
 /** One value of the schema's shape, or (with probability `noise`) a hostile one. */
 function node(schema: z.ZodType, options: Options, depth: number): fc.Arbitrary<unknown> {
   const hostileWeight = Math.max(1, Math.round(options.noise * 100));
-  return fc.oneof({ weight: 100 - hostileWeight, arbitrary: shaped(schema, options, depth) }, { weight: hostileWeight, arbitrary: hostile });
+  return fc.oneof(
+    { weight: 100 - hostileWeight, arbitrary: shaped(schema, options, depth) },
+    { weight: hostileWeight, arbitrary: hostile },
+  );
 }
 
 function shaped(schema: z.ZodType, options: Options, depth: number): fc.Arbitrary<unknown> {
@@ -139,9 +241,17 @@ function shaped(schema: z.ZodType, options: Options, depth: number): fc.Arbitrar
       if (def.format === 'uuid' || def.format === 'guid') return idArbitrary(pools);
       if (def.format === 'email') {
         return fc.oneof(
-          { weight: 6, arbitrary: fc.tuple(fc.stringMatching(/^[a-z][a-z0-9]{0,15}$/), fc.stringMatching(/^[a-z]{2,12}$/)).map(([user, host]) => `${user}@${host}.test`) },
+          {
+            weight: 6,
+            arbitrary: fc
+              .tuple(fc.stringMatching(/^[a-z][a-z0-9]{0,15}$/), fc.stringMatching(/^[a-z]{2,12}$/))
+              .map(([user, host]) => `${user}@${host}.test`),
+          },
           { weight: 1, arbitrary: fc.emailAddress() },
-          { weight: 1, arbitrary: fc.constantFrom('not-an-email', 'a@b', `${'a'.repeat(250)}@x.test`, 'ÜNICODE@exämple.test') },
+          {
+            weight: 1,
+            arbitrary: fc.constantFrom('not-an-email', 'a@b', `${'a'.repeat(250)}@x.test`, 'ÜNICODE@exämple.test'),
+          },
         );
       }
       if (def.format === 'date') return dateArbitrary;
@@ -149,7 +259,9 @@ function shaped(schema: z.ZodType, options: Options, depth: number): fc.Arbitrar
       return stringArbitrary(bag);
     case 'number':
     case 'int':
-      return def.coerce ? fc.oneof(numberArbitrary(bag, options.key), numberArbitrary(bag, options.key).map(String)) : numberArbitrary(bag, options.key);
+      return def.coerce
+        ? fc.oneof(numberArbitrary(bag, options.key), numberArbitrary(bag, options.key).map(String))
+        : numberArbitrary(bag, options.key);
     case 'bigint':
       return fc.bigInt({ min: -(2n ** 70n), max: 2n ** 70n }).map(String);
     case 'boolean':
@@ -200,7 +312,14 @@ function objectArbitrary(shape: Record<string, z.ZodType>, options: Options, dep
   }
   const extra = fc.oneof(
     { weight: 100 - rare, arbitrary: fc.constant({}) },
-    { weight: rare, arbitrary: fc.dictionary(fc.constantFrom('companyId', 'id', 'status', '__proto__', 'constructor', 'extra', 'createdAt'), hostile, { maxKeys: 2 }) },
+    {
+      weight: rare,
+      arbitrary: fc.dictionary(
+        fc.constantFrom('companyId', 'id', 'status', '__proto__', 'constructor', 'extra', 'createdAt'),
+        hostile,
+        { maxKeys: 2 },
+      ),
+    },
   );
   return fc.tuple(fc.record(fields), extra).map(([record, more]) => ({ ...more, ...record }));
 }

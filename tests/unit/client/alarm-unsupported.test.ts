@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { installAudioUnlock, notify, requestNotificationPermission, soundAlarm, unlockAudio, vibrate } from '@/lib/client/alarm';
+import {
+  installAudioUnlock,
+  notify,
+  requestNotificationPermission,
+  soundAlarm,
+  unlockAudio,
+  vibrate,
+} from '@/lib/client/alarm';
 
 // Node has no window, audio, vibration or notifications: like an old browser, every call is a quiet no-op.
 describe('alarm without browser support', () => {

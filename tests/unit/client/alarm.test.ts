@@ -129,12 +129,21 @@ describe('notifications', () => {
   it('goes through the service worker registration when there is one, else the page', async () => {
     const { constructed } = stubNotification('granted');
     const showNotification = vi.fn(async () => undefined);
-    Object.defineProperty(navigator, 'serviceWorker', { value: { getRegistration: async () => ({ showNotification }) }, configurable: true });
+    Object.defineProperty(navigator, 'serviceWorker', {
+      value: { getRegistration: async () => ({ showNotification }) },
+      configurable: true,
+    });
     const { notify } = await load();
     await expect(notify('Inflate by', '1 minute left.', 'inflate')).resolves.toBe(true);
-    expect(showNotification).toHaveBeenCalledWith('Inflate by', expect.objectContaining({ body: '1 minute left.', tag: 'inflate' }));
+    expect(showNotification).toHaveBeenCalledWith(
+      'Inflate by',
+      expect.objectContaining({ body: '1 minute left.', tag: 'inflate' }),
+    );
 
-    Object.defineProperty(navigator, 'serviceWorker', { value: { getRegistration: async () => undefined }, configurable: true });
+    Object.defineProperty(navigator, 'serviceWorker', {
+      value: { getRegistration: async () => undefined },
+      configurable: true,
+    });
     await expect(notify('Inflate by', 'Time is up.')).resolves.toBe(true);
     expect(constructed).toEqual([['Inflate by', expect.objectContaining({ body: 'Time is up.' })]]);
     Reflect.deleteProperty(navigator, 'serviceWorker');

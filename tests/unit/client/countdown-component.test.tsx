@@ -29,7 +29,9 @@ describe('<Countdown>', () => {
 
   it("shows the deadline's clock time in the company's zone on a 24-hour clock", () => {
     // 08:40 UTC is 02:40 in America/Denver in May (MDT, UTC−6: IANA tz database).
-    render(<Countdown label="Inflate by" start={START} deadline={at(40)} now={at(9)} timeZone="America/Denver" />, { wrapper: IntlWrapper });
+    render(<Countdown label="Inflate by" start={START} deadline={at(40)} now={at(9)} timeZone="America/Denver" />, {
+      wrapper: IntlWrapper,
+    });
     expect(screen.getByTestId('countdown').querySelector('time')).toHaveTextContent(/^02:40$/);
   });
 
@@ -51,7 +53,9 @@ describe('<Countdown>', () => {
   });
 
   it("shows the deadline's clock time in the zone given", () => {
-    render(<Countdown label="Deflate after" start={START} deadline={at(40)} now={at(1)} timeZone="UTC" />, { wrapper: IntlWrapper });
+    render(<Countdown label="Deflate after" start={START} deadline={at(40)} now={at(1)} timeZone="UTC" />, {
+      wrapper: IntlWrapper,
+    });
     const time = screen.getByText(/08:40|8:40/);
     expect(time).toHaveAttribute('datetime', at(40).toISOString());
   });

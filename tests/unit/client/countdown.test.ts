@@ -9,7 +9,11 @@ describe('countdownState', () => {
   const forty = { start: START, deadline: at(40 * MIN) };
 
   it('a 40 min window: neutral with 31 min left, still neutral just over 8, near at 8 (20 % of 40)', () => {
-    expect(countdownState({ ...forty, now: at(9 * MIN) })).toMatchObject({ tone: 'neutral', remainingMs: 31 * MIN, label: '0:31:00' });
+    expect(countdownState({ ...forty, now: at(9 * MIN) })).toMatchObject({
+      tone: 'neutral',
+      remainingMs: 31 * MIN,
+      label: '0:31:00',
+    });
     expect(countdownState({ ...forty, now: at(32 * MIN - 1000) }).tone).toBe('neutral');
     expect(countdownState({ ...forty, now: at(32 * MIN) })).toMatchObject({ tone: 'near', label: '0:08:00' });
     expect(countdownState({ ...forty, now: at(39 * MIN) }).tone).toBe('near');
@@ -28,9 +32,20 @@ describe('countdownState', () => {
   });
 
   it('missed once passed, with the time over', () => {
-    expect(countdownState({ ...forty, now: at(40 * MIN) })).toMatchObject({ tone: 'near', remainingMs: 0, label: '0:00:00' });
-    expect(countdownState({ ...forty, now: at(40 * MIN + 1) })).toMatchObject({ tone: 'missed', label: '+0:00:01 over' });
-    expect(countdownState({ ...forty, now: at(41 * MIN + 5000) })).toMatchObject({ tone: 'missed', remainingMs: -(MIN + 5000), label: '+0:01:05 over' });
+    expect(countdownState({ ...forty, now: at(40 * MIN) })).toMatchObject({
+      tone: 'near',
+      remainingMs: 0,
+      label: '0:00:00',
+    });
+    expect(countdownState({ ...forty, now: at(40 * MIN + 1) })).toMatchObject({
+      tone: 'missed',
+      label: '+0:00:01 over',
+    });
+    expect(countdownState({ ...forty, now: at(41 * MIN + 5000) })).toMatchObject({
+      tone: 'missed',
+      remainingMs: -(MIN + 5000),
+      label: '+0:01:05 over',
+    });
     expect(countdownState({ ...forty, now: at(40 * MIN + 2 * 3600_000) }).label).toBe('+2:00:00 over');
   });
 
@@ -41,7 +56,10 @@ describe('countdownState', () => {
   });
 
   it('shows hours past 24 without wrapping', () => {
-    expect(countdownState({ start: START, deadline: at(30 * 3600_000), now: START })).toMatchObject({ tone: 'neutral', label: '30:00:00' });
+    expect(countdownState({ start: START, deadline: at(30 * 3600_000), now: START })).toMatchObject({
+      tone: 'neutral',
+      label: '30:00:00',
+    });
   });
 
   it('treats a deadline before its start as a 5-minute window', () => {

@@ -6,7 +6,13 @@ export type Answer = number | 'network-error' | { status: number; message: strin
 
 export interface SentRequest {
   url: string;
-  body: { clientEventId: string; type: string; deviceTime: string; payload: Record<string, unknown>; correctsEventId?: string };
+  body: {
+    clientEventId: string;
+    type: string;
+    deviceTime: string;
+    payload: Record<string, unknown>;
+    correctsEventId?: string;
+  };
 }
 
 /**
@@ -36,5 +42,11 @@ export const INSTALL_B = '0c8e7f6a-5b4d-4c3b-8a29-1e0f9d8c7b6a';
 /** A valid tap of `type` (payload-free types by default) for an install. */
 export function tap(installId = INSTALL_A, type = 'note', minute = 0): NewOutboxEvent {
   const payload = type === 'note' ? { text: `note at minute ${minute}` } : {};
-  return { installId, clientEventId: randomUUID(), type, deviceTime: new Date(Date.UTC(2026, 4, 4, 8, minute)).toISOString(), payload };
+  return {
+    installId,
+    clientEventId: randomUUID(),
+    type,
+    deviceTime: new Date(Date.UTC(2026, 4, 4, 8, minute)).toISOString(),
+    payload,
+  };
 }

@@ -6,7 +6,10 @@ import { clockOffsetMs, resetServerClock } from '@/lib/client/server-time';
 const HOUR_AHEAD = new Date(Date.now() + 3_600_000).toUTCString();
 
 function answer(status: number, body: unknown, headers: Record<string, string> = {}) {
-  return vi.fn(async () => new Response(JSON.stringify(body), { status, headers: { 'content-type': 'application/json', ...headers } }));
+  return vi.fn(
+    async () =>
+      new Response(JSON.stringify(body), { status, headers: { 'content-type': 'application/json', ...headers } }),
+  );
 }
 
 beforeEach(() => resetServerClock());
@@ -23,16 +26,31 @@ describe('fetchJson', () => {
   });
 
   it("throws a FetchError with the server's error.message and fields on non-2xx", async () => {
-    vi.stubGlobal('fetch', answer(422, { error: { message: 'Invalid input — pressureKpa: too high', fields: { pressureKpa: ['too high'] } } }));
+    vi.stubGlobal(
+      'fetch',
+      answer(422, {
+        error: { message: 'Invalid input — pressureKpa: too high', fields: { pressureKpa: ['too high'] } },
+      }),
+    );
     const error = await fetchJson('/api/installs/x').catch((e: unknown) => e);
     expect(error).toBeInstanceOf(FetchError);
-    expect(error).toMatchObject({ status: 422, message: 'Invalid input — pressureKpa: too high', fields: { pressureKpa: ['too high'] } });
+    expect(error).toMatchObject({
+      status: 422,
+      message: 'Invalid input — pressureKpa: too high',
+      fields: { pressureKpa: ['too high'] },
+    });
   });
 
   it('throws a plain message when the error body is not ours, and status 0 with no connection', async () => {
-    vi.stubGlobal('fetch', vi.fn(async () => new Response('<html>bad gateway</html>', { status: 502 })));
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async () => new Response('<html>bad gateway</html>', { status: 502 })),
+    );
     await expect(fetchJson('/api/today')).rejects.toMatchObject({ status: 502, message: 'The server answered 502.' });
-    vi.stubGlobal('fetch', vi.fn(async () => Promise.reject(new TypeError('Failed to fetch'))));
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async () => Promise.reject(new TypeError('Failed to fetch'))),
+    );
     await expect(fetchJson('/api/today')).rejects.toMatchObject({ status: 0 });
   });
 

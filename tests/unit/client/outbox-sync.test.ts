@@ -1,7 +1,13 @@
 // @vitest-environment jsdom
 import 'fake-indexeddb/auto';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
-import { enqueueEvent, pendingCount, resetOutboxForTests, startOutboxSync, type FlushResult } from '@/lib/client/outbox';
+import {
+  enqueueEvent,
+  pendingCount,
+  resetOutboxForTests,
+  startOutboxSync,
+  type FlushResult,
+} from '@/lib/client/outbox';
 import { fakeServer, tap, type Answer } from './fake-server';
 
 // Only the sync loop's timers are faked; IndexedDB (fake-indexeddb) runs on real tasks.

@@ -36,7 +36,9 @@ describe('enqueueEvent', () => {
   it('refuses a malformed tap with the field at fault, and stores nothing', async () => {
     await expect(enqueueEvent({ ...tap(), installId: 'not-a-uuid' })).rejects.toThrow(OutboxInputError);
     await expect(enqueueEvent({ ...tap(), type: 'dance' })).rejects.toThrow(/type/);
-    await expect(enqueueEvent({ ...tap(INSTALL_A, 'bladder_inflated'), payload: { pressureKpa: -5 } })).rejects.toThrow(/payload\.pressureKpa/);
+    await expect(enqueueEvent({ ...tap(INSTALL_A, 'bladder_inflated'), payload: { pressureKpa: -5 } })).rejects.toThrow(
+      /payload\.pressureKpa/,
+    );
     expect(await listEntries()).toEqual([]);
   });
 });
@@ -68,14 +70,23 @@ describe('flushOutbox', () => {
     expect(result).toEqual({ synced: 3, rejected: 0, remaining: 0 });
     expect(server.ids()).toEqual(taps.map((t) => t.clientEventId));
     expect(server.sent[0].url).toBe(`https://example.test/api/installs/${INSTALL_B}/events`);
-    expect(server.sent[0].body).toEqual({ clientEventId: taps[0].clientEventId, type: 'note', deviceTime: taps[0].deviceTime, payload: taps[0].payload });
+    expect(server.sent[0].body).toEqual({
+      clientEventId: taps[0].clientEventId,
+      type: 'note',
+      deviceTime: taps[0].deviceTime,
+      payload: taps[0].payload,
+    });
     const stored = await listEntries();
     expect(stored.every((e) => e.status === 'synced' && e.attempts === 1 && typeof e.syncedAt === 'string')).toBe(true);
   });
 
   it('sends correctsEventId when the tap has one', async () => {
     const original = await enqueueEvent(tap());
-    const correction = { ...tap(INSTALL_A, 'correction'), payload: { reason: 'wrong time typed', deviceTime: '2026-05-04T08:03:00.000Z' }, correctsEventId: original.clientEventId };
+    const correction = {
+      ...tap(INSTALL_A, 'correction'),
+      payload: { reason: 'wrong time typed', deviceTime: '2026-05-04T08:03:00.000Z' },
+      correctsEventId: original.clientEventId,
+    };
     await enqueueEvent(correction);
     const server = fakeServer();
     await flushOutbox({ fetchImpl: server.fetchImpl });
@@ -112,22 +123,33 @@ describe('flushOutbox', () => {
     expect(server.sent).toHaveLength(1);
   });
 
-  it.each([409, 422, 400, 404, 403, 425])('marks %i rejected with the server message, and still sends the next entry', async (status) => {
-    const bad = await enqueueEvent(tap(INSTALL_A, 'note', 0));
-    const next = await enqueueEvent(tap(INSTALL_A, 'note', 1));
-    const server = fakeServer((request) => (request.body.clientEventId === bad.clientEventId ? { status, message: 'Inflated before the resin was mixed.' } : 201));
+  it.each([409, 422, 400, 404, 403, 425])(
+    'marks %i rejected with the server message, and still sends the next entry',
+    async (status) => {
+      const bad = await enqueueEvent(tap(INSTALL_A, 'note', 0));
+      const next = await enqueueEvent(tap(INSTALL_A, 'note', 1));
+      const server = fakeServer((request) =>
+        request.body.clientEventId === bad.clientEventId
+          ? { status, message: 'Inflated before the resin was mixed.' }
+          : 201,
+      );
 
-    const result = await flushOutbox({ fetchImpl: server.fetchImpl });
-    expect(result).toEqual({ synced: 1, rejected: 1, remaining: 0 });
-    expect(server.ids()).toEqual([bad.clientEventId, next.clientEventId]);
-    const [rejected, synced] = await listEntries();
-    expect(rejected).toMatchObject({ status: 'rejected', attempts: 1, lastError: 'Inflated before the resin was mixed.' });
-    expect(synced.status).toBe('synced');
+      const result = await flushOutbox({ fetchImpl: server.fetchImpl });
+      expect(result).toEqual({ synced: 1, rejected: 1, remaining: 0 });
+      expect(server.ids()).toEqual([bad.clientEventId, next.clientEventId]);
+      const [rejected, synced] = await listEntries();
+      expect(rejected).toMatchObject({
+        status: 'rejected',
+        attempts: 1,
+        lastError: 'Inflated before the resin was mixed.',
+      });
+      expect(synced.status).toBe('synced');
 
-    // A rejected entry stays on the tablet and is never sent again.
-    await flushOutbox({ fetchImpl: server.fetchImpl });
-    expect(server.sent).toHaveLength(2);
-  });
+      // A rejected entry stays on the tablet and is never sent again.
+      await flushOutbox({ fetchImpl: server.fetchImpl });
+      expect(server.sent).toHaveLength(2);
+    },
+  );
 
   it('does not send synced entries again', async () => {
     await enqueueEvent(tap());
@@ -155,7 +177,11 @@ describe('flushOutbox', () => {
       }
     }) as typeof fetch;
 
-    const results = await Promise.all([flushOutbox({ fetchImpl: counting }), flushOutbox({ fetchImpl: counting }), flushOutbox({ fetchImpl: counting })]);
+    const results = await Promise.all([
+      flushOutbox({ fetchImpl: counting }),
+      flushOutbox({ fetchImpl: counting }),
+      flushOutbox({ fetchImpl: counting }),
+    ]);
     expect(server.sent).toHaveLength(4);
     expect(new Set(server.ids()).size).toBe(4);
     expect(most).toBe(1);
@@ -178,7 +204,9 @@ describe('flushOutbox', () => {
   it('counts a request that hangs past the timeout as no answer', async () => {
     await enqueueEvent(tap());
     const hanging = ((_url: string, init?: RequestInit) =>
-      new Promise((_resolve, reject) => init?.signal?.addEventListener('abort', () => reject(new DOMException('aborted', 'AbortError'))))) as typeof fetch;
+      new Promise((_resolve, reject) =>
+        init?.signal?.addEventListener('abort', () => reject(new DOMException('aborted', 'AbortError'))),
+      )) as typeof fetch;
     const result = await flushOutbox({ fetchImpl: hanging, timeoutMs: 20 });
     expect(result).toEqual({ synced: 0, rejected: 0, remaining: 1, failed: 'The server did not answer in time.' });
   });

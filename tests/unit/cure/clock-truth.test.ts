@@ -62,7 +62,11 @@ describe('the warmer of resin and air sets the working window (10 °C halving ru
     expect(plan.go).toBe(false);
     // 45 °C = 113 °F, 40 °C = 104 °F (NIST SP 811 B.9: t/°F = 1.8 t/°C + 32).
     expect(plan.reasons.join(' ')).toMatch(/Mixing at 113 °F is warmer than this resin's maximum of 104 °F/);
-    expect(flagsFor({ resin: typicalEpoxy, mixedAt, mixTempC: 20, airTempC: 45, pipeTempC: 20, dryRunSeconds: 60 }).map((f) => f.kind)).toEqual(['hot-cure']);
+    expect(
+      flagsFor({ resin: typicalEpoxy, mixedAt, mixTempC: 20, airTempC: 45, pipeTempC: 20, dryRunSeconds: 60 }).map(
+        (f) => f.kind,
+      ),
+    ).toEqual(['hot-cure']);
   });
 });
 
@@ -125,7 +129,13 @@ describe('hold reserve: deflateAfter = inflatedAt + holdMin × (1 + holdReserve)
 
   it('deflating inside the reserve is a warning, before the hold a critical flag', () => {
     const install: InstallRecord = {
-      resin: typicalEpoxy, mixedAt, mixTempC: 20, pipeTempC: 20, dryRunSeconds: 60, holdReserve: 0.1, inflatedAt,
+      resin: typicalEpoxy,
+      mixedAt,
+      mixTempC: 20,
+      pipeTempC: 20,
+      dryRunSeconds: 60,
+      holdReserve: 0.1,
+      inflatedAt,
     };
     const after = (min: number) => flagsFor({ ...install, deflatedAt: plusMin(inflatedAt, min) });
     expect(after(100)).toEqual([]);
@@ -138,10 +148,20 @@ describe('hold reserve: deflateAfter = inflatedAt + holdMin × (1 + holdReserve)
 describe('times in flags are in the company zone, never a raw ISO instant', () => {
   it('a late inflate read in America/Denver (UTC−6 in June, IANA tz database)', () => {
     const events = [
-      { id: 'a', type: 'conditions_recorded' as const, deviceTime: '2026-06-02T07:55:00Z', payload: { mixTempC: 20, pipeTempC: 20, resinKitId: 'k', packerId: 'p', patchLengthMm: 600 } },
+      {
+        id: 'a',
+        type: 'conditions_recorded' as const,
+        deviceTime: '2026-06-02T07:55:00Z',
+        payload: { mixTempC: 20, pipeTempC: 20, resinKitId: 'k', packerId: 'p', patchLengthMm: 600 },
+      },
       { id: 'b', type: 'dry_run_finished' as const, deviceTime: '2026-06-02T07:56:00Z', payload: { seconds: 300 } },
       { id: 'c', type: 'resin_mixed' as const, deviceTime: '2026-06-02T08:00:00Z', payload: {} },
-      { id: 'd', type: 'bladder_inflated' as const, deviceTime: '2026-06-02T08:40:23.409Z', payload: { pressureKpa: 120 } },
+      {
+        id: 'd',
+        type: 'bladder_inflated' as const,
+        deviceTime: '2026-06-02T08:40:23.409Z',
+        payload: { pressureKpa: 120 },
+      },
     ];
     const clock = installClock({
       state: deriveInstallState(events),

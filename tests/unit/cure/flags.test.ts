@@ -84,7 +84,9 @@ describe('flagsFor', () => {
     expect(kinds({ ...clean, resinKitExpiresOn: '2025-06-02' })).toEqual([]); // good for the whole last day
     expect(kinds({ ...clean, resinKitExpiresOn: at('2025-05-30T00:00:00Z') })).toEqual(['expired-resin']);
     // not mixed yet: judged against today
-    expect(kinds({ resin: typicalEpoxy, dryRunSeconds: 60, resinKitExpiresOn: '2025-06-01', now: mixedAt })).toEqual(['expired-resin']);
+    expect(kinds({ resin: typicalEpoxy, dryRunSeconds: 60, resinKitExpiresOn: '2025-06-01', now: mixedAt })).toEqual([
+      'expired-resin',
+    ]);
   });
 
   it('lists several flags in a fixed order', () => {
@@ -138,7 +140,15 @@ describe('flagsFor — invalid input throws CureInputError', () => {
         fc.array(fc.double({ min: 0, max: 400, noNaN: true }), { maxLength: 5 }),
         (mixTempC, pipeTempC, inflateMin, holdMin, dryRunSeconds, pressuresKpa) => {
           const inflatedAt = plusMin(mixedAt, inflateMin);
-          const flags = flagsFor({ ...clean, mixTempC, pipeTempC, inflatedAt, deflatedAt: plusMin(inflatedAt, holdMin), dryRunSeconds, pressuresKpa });
+          const flags = flagsFor({
+            ...clean,
+            mixTempC,
+            pipeTempC,
+            inflatedAt,
+            deflatedAt: plusMin(inflatedAt, holdMin),
+            dryRunSeconds,
+            pressuresKpa,
+          });
           for (const f of flags) {
             expect(['critical', 'warning']).toContain(f.severity);
             expect(f.message).not.toMatch(/NaN|Invalid Date|undefined/);

@@ -36,27 +36,52 @@ describe('planCure — the working window', () => {
   });
 
   it('takes a custom safety margin', () => {
-    const plan = planCure(typicalEpoxy, { mixedAt, mixTempC: 20, pipeTempC: 20, dryRunSeconds: 300, safetyMargin: 0.5 });
+    const plan = planCure(typicalEpoxy, {
+      mixedAt,
+      mixTempC: 20,
+      pipeTempC: 20,
+      dryRunSeconds: 300,
+      safetyMargin: 0.5,
+    });
     expect(plan.safeInflateBy).toEqual(at('2025-06-02T08:15:00Z'));
   });
 });
 
 describe('planCure — go / no-go', () => {
   it('goes when dry run plus preparation fit in the safe window', () => {
-    const plan = planCure(typicalEpoxy, { mixedAt, mixTempC: 20, pipeTempC: 20, dryRunSeconds: 5 * 60, prepMinutes: 5 });
+    const plan = planCure(typicalEpoxy, {
+      mixedAt,
+      mixTempC: 20,
+      pipeTempC: 20,
+      dryRunSeconds: 5 * 60,
+      prepMinutes: 5,
+    });
     expect(plan.go).toBe(true);
     expect(plan.reasons).toEqual([]);
     expect(plan.neededMin).toBe(10);
   });
 
   it('goes when the need exactly equals the safe window', () => {
-    const plan = planCure(typicalEpoxy, { mixedAt, mixTempC: 20, pipeTempC: 20, dryRunSeconds: 14 * 60, prepMinutes: 10, safetyMargin: 0.2 });
+    const plan = planCure(typicalEpoxy, {
+      mixedAt,
+      mixTempC: 20,
+      pipeTempC: 20,
+      dryRunSeconds: 14 * 60,
+      prepMinutes: 10,
+      safetyMargin: 0.2,
+    });
     expect(plan.neededMin).toBe(24);
     expect(plan.go).toBe(true);
   });
 
   it('does not go when the pull is too slow, and says what would help', () => {
-    const plan = planCure(typicalEpoxy, { mixedAt, mixTempC: 30, pipeTempC: 20, dryRunSeconds: 10 * 60, prepMinutes: 5 });
+    const plan = planCure(typicalEpoxy, {
+      mixedAt,
+      mixTempC: 30,
+      pipeTempC: 20,
+      dryRunSeconds: 10 * 60,
+      prepMinutes: 5,
+    });
     // 15 min window at 30 °C, 12 min safe; 15 min needed
     expect(plan.go).toBe(false);
     expect(plan.reasons).toHaveLength(1);
@@ -76,7 +101,13 @@ describe('planCure — go / no-go', () => {
     const cold = planCure(typicalEpoxy, { mixedAt, mixTempC: 20, pipeTempC: 3, dryRunSeconds: 60 });
     expect(cold.go).toBe(false);
     expect(cold.reasons.join(' ')).toMatch(/colder than this resin's minimum of 5 °C/);
-    const hot = planCure(typicalEpoxy, { mixedAt, mixTempC: 20, pipeTempC: 45, dryRunSeconds: 60, unitSystem: 'imperial' });
+    const hot = planCure(typicalEpoxy, {
+      mixedAt,
+      mixTempC: 20,
+      pipeTempC: 45,
+      dryRunSeconds: 60,
+      unitSystem: 'imperial',
+    });
     expect(hot.go).toBe(false);
     expect(hot.reasons.join(' ')).toMatch(/113 °F.*maximum of 104 °F/);
   });
@@ -206,7 +237,11 @@ describe('planCure — invalid input throws CureInputError', () => {
     ['invalid mix date', typicalEpoxy, { ...ok, mixedAt: new Date('nonsense') }],
     ['mix date not a Date', typicalEpoxy, { ...ok, mixedAt: '2025-06-02' }],
     ['inflated before mixed', typicalEpoxy, { ...ok, inflatedAt: plusMin(mixedAt, -1) }],
-    ['deflated before inflated', typicalEpoxy, { ...ok, inflatedAt: plusMin(mixedAt, 10), deflatedAt: plusMin(mixedAt, 9) }],
+    [
+      'deflated before inflated',
+      typicalEpoxy,
+      { ...ok, inflatedAt: plusMin(mixedAt, 10), deflatedAt: plusMin(mixedAt, 9) },
+    ],
     ['deflated, never inflated', typicalEpoxy, { ...ok, deflatedAt: plusMin(mixedAt, 9) }],
     ['safety margin above 0.9', typicalEpoxy, { ...ok, safetyMargin: 0.95 }],
     ['negative safety margin', typicalEpoxy, { ...ok, safetyMargin: -0.1 }],

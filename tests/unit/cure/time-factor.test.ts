@@ -33,9 +33,13 @@ describe('timeFactor — properties', () => {
 
   it('with { doublingC }, doublingC warmer halves the time', () => {
     fc.assert(
-      fc.property(fc.double({ min: 1, max: 40, noNaN: true }), fc.double({ min: -20, max: 20, noNaN: true }), (d, ref) => {
-        expect(timeFactor({ doublingC: d }, ref, ref + d)).toBeCloseTo(0.5, 12);
-      }),
+      fc.property(
+        fc.double({ min: 1, max: 40, noNaN: true }),
+        fc.double({ min: -20, max: 20, noNaN: true }),
+        (d, ref) => {
+          expect(timeFactor({ doublingC: d }, ref, ref + d)).toBeCloseTo(0.5, 12);
+        },
+      ),
     );
   });
 
@@ -50,11 +54,15 @@ describe('timeFactor — properties', () => {
 
   it('Arrhenius with Ea ≈ 50–53 kJ/mol roughly doubles the rate per 10 °C near room temperature', () => {
     fc.assert(
-      fc.property(fc.double({ min: 50, max: 53, noNaN: true }), fc.double({ min: 15, max: 30, noNaN: true }), (ea, ref) => {
-        const rateRatio = 1 / timeFactor({ activationEnergyKJ: ea }, ref, ref + 10);
-        expect(rateRatio).toBeGreaterThan(1.8);
-        expect(rateRatio).toBeLessThan(2.2);
-      }),
+      fc.property(
+        fc.double({ min: 50, max: 53, noNaN: true }),
+        fc.double({ min: 15, max: 30, noNaN: true }),
+        (ea, ref) => {
+          const rateRatio = 1 / timeFactor({ activationEnergyKJ: ea }, ref, ref + 10);
+          expect(rateRatio).toBeGreaterThan(1.8);
+          expect(rateRatio).toBeLessThan(2.2);
+        },
+      ),
     );
   });
 

@@ -31,7 +31,11 @@ const DEFAULT_HOLD_RESERVE = 0.1;
 
 describe.each(SCENARIOS)('the %s demo company', (_name, spec) => {
   const t = buildCompany(spec, { now: NOW, passwordHash: 'not-a-hash' });
-  const company = t.companies[0] as Row & { min_overlap_per_end_mm: number; working_window_safety_margin: number; time_zone: string };
+  const company = t.companies[0] as Row & {
+    min_overlap_per_end_mm: number;
+    working_window_safety_margin: number;
+    time_zone: string;
+  };
 
   it('plans each patch at the length lib/sizing gives (defect plus the company overlap at each end)', () => {
     expect(t.repairs.length).toBeGreaterThan(0);

@@ -37,7 +37,12 @@ describe('designLiner — the floors ASTM F1216 X1 sets beside the equations', (
 
   it('a fully deteriorated design has no DR floor (X1.3 carries it)', () => {
     const d = designLiner({
-      ...dry, condition: 'full', waterAboveTopFt: 0, soilCoverFt: 10, soilDensityPcf: 120, soilModulusPsi: 1_000,
+      ...dry,
+      condition: 'full',
+      waterAboveTopFt: 0,
+      soilCoverFt: 10,
+      soilDensityPcf: 120,
+      soilModulusPsi: 1_000,
     });
     expect(d.checks.dimensionRatio).toBeUndefined();
     expect(d.governing).toBe('fullyDeteriorated');
@@ -54,8 +59,15 @@ describe('X1.3 edition', () => {
     const qt = 0.433 * Hw + (w * H * Rw) / 144 + Ws;
     const older = Math.cbrt((12 * Math.pow((N * qt) / C, 2) * D ** 3) / (32 * Rw * B * Es * EL));
     const current = designLiner({
-      condition: 'full', meanDiameterIn: D, ovalityPct: 2, longTermModulusPsi: EL, waterAboveTopFt: Hw, soilCoverFt: H,
-      soilDensityPcf: w, liveLoadPsi: Ws, soilModulusPsi: Es,
+      condition: 'full',
+      meanDiameterIn: D,
+      ovalityPct: 2,
+      longTermModulusPsi: EL,
+      waterAboveTopFt: Hw,
+      soilCoverFt: H,
+      soilDensityPcf: w,
+      liveLoadPsi: Ws,
+      soilModulusPsi: Es,
     }).checks.fullyDeteriorated!;
     expect(current).toBeCloseTo(1.01, 2);
     expect(older).toBeCloseTo(1.07, 2);

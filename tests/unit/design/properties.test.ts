@@ -34,7 +34,11 @@ const fullArb: fc.Arbitrary<LinerDesignInput> = fc
   .map(({ waterShare, ...r }) => ({ ...r, waterAboveTopFt: waterShare * r.soilCoverFt }));
 
 // No groundwater at all: the DR ≤ 100 floor (and X1.4 when E is known) must still give a thickness.
-const dryArb: fc.Arbitrary<LinerDesignInput> = fc.record({ ...common, condition: fc.constant('partial' as const), groundwaterFtAboveInvert: fc.constant(0) });
+const dryArb: fc.Arbitrary<LinerDesignInput> = fc.record({
+  ...common,
+  condition: fc.constant('partial' as const),
+  groundwaterFtAboveInvert: fc.constant(0),
+});
 
 const anyValid = fc.oneof(partialArb, fullArb, dryArb);
 
@@ -145,9 +149,13 @@ describe('designLiner — invalid input throws DesignInputError', () => {
   it('any non-finite number in any numeric field throws', () => {
     const fields = Object.keys(ok).filter((k) => k !== 'condition') as (keyof LinerDesignInput)[];
     fc.assert(
-      fc.property(fc.constantFrom(...fields), fc.constantFrom(NaN, Infinity, -Infinity, 'x' as unknown as number), (field, bad) => {
-        expect(() => designLiner({ ...ok, [field]: bad })).toThrow(DesignInputError);
-      }),
+      fc.property(
+        fc.constantFrom(...fields),
+        fc.constantFrom(NaN, Infinity, -Infinity, 'x' as unknown as number),
+        (field, bad) => {
+          expect(() => designLiner({ ...ok, [field]: bad })).toThrow(DesignInputError);
+        },
+      ),
     );
   });
 

@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { PSI_PER_FT_WATER, buoyancyFactor, designLiner, elasticSupport, ovalityReduction, totalLoadPsi } from '@/lib/design';
+import {
+  PSI_PER_FT_WATER,
+  buoyancyFactor,
+  designLiner,
+  elasticSupport,
+  ovalityReduction,
+  totalLoadPsi,
+} from '@/lib/design';
 
 // Check values: the ASTM F1216 Appendix X1 worked examples as reproduced in a published
 // trenchless-technology textbook (D = 48 in, K = 7, E_L = 125 000 psi, q = 2 %, N = 2).
@@ -77,7 +84,10 @@ describe('designLiner — fully deteriorated worked example', () => {
     // q_t = 0.433 × 8 + 120 × 16 × 0.835/144 + 0.35 = 3.464 + 11.133 + 0.35 = 14.947 psi.
     expect(buoyancyFactor(8, 16)).toBeCloseTo(0.835, 10);
     expect(elasticSupport(16)).toBeCloseTo(0.414, 3);
-    expect(totalLoadPsi({ waterAboveTopFt: 8, soilCoverFt: 16, soilDensityPcf: 120, liveLoadPsi: 0.35 })).toBeCloseTo(14.947, 3);
+    expect(totalLoadPsi({ waterAboveTopFt: 8, soilCoverFt: 16, soilDensityPcf: 120, liveLoadPsi: 0.35 })).toBeCloseTo(
+      14.947,
+      3,
+    );
   });
 
   it('R_w is not taken below 0.67', () => {

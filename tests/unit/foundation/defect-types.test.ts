@@ -4,7 +4,9 @@ import { DEFECT_TYPES, LABELS, label } from '@/lib/domain/vocabulary';
 import { repairInputSchema, repairPatchSchema } from '@/lib/validation/repairs';
 
 const require = createRequire(import.meta.url);
-const { RENAMES } = require('../../../migrations/20261202001210-own-defect-names.cjs') as { RENAMES: [string, string][] };
+const { RENAMES } = require('../../../migrations/20261202001210-own-defect-names.cjs') as {
+  RENAMES: [string, string][];
+};
 
 describe('defect types: our own plain-English names', () => {
   it('no code is one of the noun-first crack codes', () => {
@@ -26,11 +28,19 @@ describe('defect types: our own plain-English names', () => {
   it('the migration maps every stored code one to one onto the new list, so down restores what up changed', () => {
     expect(RENAMES.map(([, to]) => to).sort()).toEqual([...DEFECT_TYPES].sort());
     expect(new Set(RENAMES.map(([from]) => from)).size).toBe(RENAMES.length);
-    expect(RENAMES.map(([from]) => from)).toEqual(expect.arrayContaining(['crack_longitudinal', 'crack_circumferential', 'crack_multiple']));
+    expect(RENAMES.map(([from]) => from)).toEqual(
+      expect.arrayContaining(['crack_longitudinal', 'crack_circumferential', 'crack_multiple']),
+    );
   });
 
   it('the API refuses an old code', () => {
-    const body = { jobId: crypto.randomUUID(), segmentId: crypto.randomUUID(), distanceMm: 1000, conditionGrade: 3, defectLengthMm: 100 };
+    const body = {
+      jobId: crypto.randomUUID(),
+      segmentId: crypto.randomUUID(),
+      distanceMm: 1000,
+      conditionGrade: 3,
+      defectLengthMm: 100,
+    };
     expect(repairInputSchema.safeParse({ ...body, defectType: 'crack_longitudinal' }).success).toBe(false);
     expect(repairInputSchema.safeParse({ ...body, defectType: 'lengthwise_crack' }).success).toBe(true);
   });

@@ -23,7 +23,13 @@ describe('parseEnv', () => {
   const url = 'postgres://a:b@127.0.0.1:1/x';
   const SESSION = 's'.repeat(32);
   const LINKS = 'l'.repeat(32);
-  const production = { DATABASE_URL: url, NODE_ENV: 'production', NEXTAUTH_SECRET: SESSION, REPORT_LINK_SECRET: LINKS, NEXTAUTH_URL: 'https://app.example.test' };
+  const production = {
+    DATABASE_URL: url,
+    NODE_ENV: 'production',
+    NEXTAUTH_SECRET: SESSION,
+    REPORT_LINK_SECRET: LINKS,
+    NEXTAUTH_URL: 'https://app.example.test',
+  };
   const problemsOf = (source: Record<string, string | undefined>) => {
     try {
       parseEnv(source);
@@ -34,27 +40,51 @@ describe('parseEnv', () => {
   };
 
   it('accepts a complete production environment as given', () => {
-    expect(parseEnv(production)).toMatchObject({ NEXTAUTH_SECRET: SESSION, REPORT_LINK_SECRET: LINKS, SMTP_TLS: 'on', TRUSTED_PROXY: 0 });
+    expect(parseEnv(production)).toMatchObject({
+      NEXTAUTH_SECRET: SESSION,
+      REPORT_LINK_SECRET: LINKS,
+      SMTP_TLS: 'on',
+      TRUSTED_PROXY: 0,
+    });
   });
 
   it('refuses production without either secret, naming each', () => {
-    expect(problemsOf({ ...production, NEXTAUTH_SECRET: undefined })).toMatch(/NEXTAUTH_SECRET: required outside development and test/);
-    expect(problemsOf({ ...production, REPORT_LINK_SECRET: undefined })).toMatch(/REPORT_LINK_SECRET: required outside development and test/);
+    expect(problemsOf({ ...production, NEXTAUTH_SECRET: undefined })).toMatch(
+      /NEXTAUTH_SECRET: required outside development and test/,
+    );
+    expect(problemsOf({ ...production, REPORT_LINK_SECRET: undefined })).toMatch(
+      /REPORT_LINK_SECRET: required outside development and test/,
+    );
     const both = problemsOf({ ...production, NEXTAUTH_SECRET: '', REPORT_LINK_SECRET: '' });
     expect(both).toMatch(/^Setline cannot start/);
     expect(both).toMatch(/NEXTAUTH_SECRET[\s\S]*REPORT_LINK_SECRET/);
   });
 
   it('refuses secrets under 32 characters, and one secret used for both', () => {
-    expect(problemsOf({ ...production, NEXTAUTH_SECRET: 'x'.repeat(31) })).toMatch(/NEXTAUTH_SECRET must be at least 32 characters/);
-    expect(problemsOf({ ...production, REPORT_LINK_SECRET: 'x'.repeat(31) })).toMatch(/REPORT_LINK_SECRET must be at least 32 characters/);
-    expect(problemsOf({ ...production, REPORT_LINK_SECRET: SESSION })).toMatch(/REPORT_LINK_SECRET: must differ from NEXTAUTH_SECRET/);
+    expect(problemsOf({ ...production, NEXTAUTH_SECRET: 'x'.repeat(31) })).toMatch(
+      /NEXTAUTH_SECRET must be at least 32 characters/,
+    );
+    expect(problemsOf({ ...production, REPORT_LINK_SECRET: 'x'.repeat(31) })).toMatch(
+      /REPORT_LINK_SECRET must be at least 32 characters/,
+    );
+    expect(problemsOf({ ...production, REPORT_LINK_SECRET: SESSION })).toMatch(
+      /REPORT_LINK_SECRET: must differ from NEXTAUTH_SECRET/,
+    );
   });
 
   it('refuses a plain-http public address in production, except on loopback', () => {
-    expect(problemsOf({ ...production, NEXTAUTH_URL: 'http://app.example.test' })).toMatch(/NEXTAUTH_URL: must be an https:\/\/ address/);
-    expect(problemsOf({ ...production, APP_URL: 'http://reports.example.test' })).toMatch(/APP_URL: must be an https:\/\/ address/);
-    for (const loopback of ['http://127.0.0.1:3000', 'http://localhost:3000', 'http://[::1]:3000', 'http://demo.localhost']) {
+    expect(problemsOf({ ...production, NEXTAUTH_URL: 'http://app.example.test' })).toMatch(
+      /NEXTAUTH_URL: must be an https:\/\/ address/,
+    );
+    expect(problemsOf({ ...production, APP_URL: 'http://reports.example.test' })).toMatch(
+      /APP_URL: must be an https:\/\/ address/,
+    );
+    for (const loopback of [
+      'http://127.0.0.1:3000',
+      'http://localhost:3000',
+      'http://[::1]:3000',
+      'http://demo.localhost',
+    ]) {
       expect(problemsOf({ ...production, NEXTAUTH_URL: loopback })).toBe('');
     }
   });

@@ -37,9 +37,11 @@ describe('the layering held by ESLint', { timeout: 60_000 }, () => {
     const listed = "'use client';\nimport { listJobs } from '@/lib/data/jobs';\nexport const probe = listJobs;\n";
     expect(await problems('app/(desk)/jobs/probe.tsx', listed)).toContain('setline/no-server-import-in-client');
     // lib/report/images.ts is on no list: it starts with `import 'server-only'`.
-    const declared = "'use client';\nimport { loadReportImages } from '@/lib/report/images';\nexport const probe = loadReportImages;\n";
+    const declared =
+      "'use client';\nimport { loadReportImages } from '@/lib/report/images';\nexport const probe = loadReportImages;\n";
     expect(await problems('components/report/probe.tsx', declared)).toContain('setline/no-server-import-in-client');
-    const typeOnly = "'use client';\nimport type { JobListResponse } from '@/lib/data/jobs';\nexport type Probe = JobListResponse;\n";
+    const typeOnly =
+      "'use client';\nimport type { JobListResponse } from '@/lib/data/jobs';\nexport type Probe = JobListResponse;\n";
     expect(await problems('app/(desk)/jobs/probe.tsx', typeOnly)).toEqual([]);
     const server = "import { listJobs } from '@/lib/data/jobs';\nexport const probe = listJobs;\n";
     expect(await problems('app/(desk)/jobs/probe.tsx', server)).toEqual([]);

@@ -4,7 +4,12 @@ import { parseEnv } from '@/lib/env';
 import { contentSecurityPolicy, crossSiteRefusal, securityHeaders, storageOrigins } from '@/lib/security/headers';
 import { clientIp } from '@/lib/security/throttle';
 
-const e = parseEnv({ DATABASE_URL: 'postgres://a:b@127.0.0.1:1/x', NODE_ENV: 'test', S3_ENDPOINT: 'http://127.0.0.1:54393', STRIPE_API_URL: 'http://127.0.0.1:54395' });
+const e = parseEnv({
+  DATABASE_URL: 'postgres://a:b@127.0.0.1:1/x',
+  NODE_ENV: 'test',
+  S3_ENDPOINT: 'http://127.0.0.1:54393',
+  STRIPE_API_URL: 'http://127.0.0.1:54395',
+});
 const APP = 'http://127.0.0.1:3000';
 
 describe('callbackUrl', () => {
@@ -14,7 +19,19 @@ describe('callbackUrl', () => {
   });
 
   it('sends anything that could leave the site to the default', () => {
-    for (const bad of ['/\\evil.example', '//evil.example', 'https://evil.example/jobs', '\\\\evil.example', 'javascript:alert(1)', '/\t/evil.example', ' /jobs', '', null, undefined, `/${'a'.repeat(2001)}`]) {
+    for (const bad of [
+      '/\\evil.example',
+      '//evil.example',
+      'https://evil.example/jobs',
+      '\\\\evil.example',
+      'javascript:alert(1)',
+      '/\t/evil.example',
+      ' /jobs',
+      '',
+      null,
+      undefined,
+      `/${'a'.repeat(2001)}`,
+    ]) {
       expect(safeCallbackPath(bad as string)).toBe('/');
     }
     expect(safeCallbackPath('//evil.example', '/today')).toBe('/today');
@@ -50,8 +67,20 @@ describe('Content-Security-Policy', () => {
   });
 
   it('names the AWS bucket hosts when no endpoint is configured', () => {
-    const aws = parseEnv({ DATABASE_URL: 'postgres://a:b@127.0.0.1:1/x', NODE_ENV: 'production', NEXTAUTH_SECRET: 'a'.repeat(32), REPORT_LINK_SECRET: 'b'.repeat(32), S3_BUCKET: 'evidence', S3_REGION: 'eu-west-1', S3_ACCESS_KEY_ID: 'i', S3_SECRET_ACCESS_KEY: 's' });
-    expect(storageOrigins(aws)).toEqual(['https://evidence.s3.eu-west-1.amazonaws.com', 'https://s3.eu-west-1.amazonaws.com']);
+    const aws = parseEnv({
+      DATABASE_URL: 'postgres://a:b@127.0.0.1:1/x',
+      NODE_ENV: 'production',
+      NEXTAUTH_SECRET: 'a'.repeat(32),
+      REPORT_LINK_SECRET: 'b'.repeat(32),
+      S3_BUCKET: 'evidence',
+      S3_REGION: 'eu-west-1',
+      S3_ACCESS_KEY_ID: 'i',
+      S3_SECRET_ACCESS_KEY: 's',
+    });
+    expect(storageOrigins(aws)).toEqual([
+      'https://evidence.s3.eu-west-1.amazonaws.com',
+      'https://s3.eu-west-1.amazonaws.com',
+    ]);
   });
 
   it('upgrades insecure requests only over https', () => {
@@ -62,7 +91,10 @@ describe('Content-Security-Policy', () => {
 
 describe('security headers', () => {
   it('sends no referrer from a report link, and HSTS only over https', () => {
-    expect(securityHeaders('/jobs', false)).toMatchObject({ 'X-Content-Type-Options': 'nosniff', 'Referrer-Policy': 'strict-origin-when-cross-origin' });
+    expect(securityHeaders('/jobs', false)).toMatchObject({
+      'X-Content-Type-Options': 'nosniff',
+      'Referrer-Policy': 'strict-origin-when-cross-origin',
+    });
     expect(securityHeaders('/r/abc.def', false)['Referrer-Policy']).toBe('no-referrer');
     expect(securityHeaders('/jobs', false)['Strict-Transport-Security']).toBeUndefined();
     expect(securityHeaders('/jobs', true)['Strict-Transport-Security']).toMatch(/^max-age=\d+/);
@@ -71,7 +103,11 @@ describe('security headers', () => {
 });
 
 describe('cross-site writes to the API', () => {
-  const request = (method: string, path: string, headers: Record<string, string> = {}) => ({ method, url: `${APP}${path}`, headers: new Headers(headers) });
+  const request = (method: string, path: string, headers: Record<string, string> = {}) => ({
+    method,
+    url: `${APP}${path}`,
+    headers: new Headers(headers),
+  });
   const refused = (r: ReturnType<typeof request>) => crossSiteRefusal(r, [APP]) !== null;
 
   it('refuses a foreign Origin, a foreign Referer without Origin, and Sec-Fetch-Site cross-site', () => {

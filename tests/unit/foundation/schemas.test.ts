@@ -18,7 +18,13 @@ describe('signInSchema', () => {
 
 describe('jobListQuerySchema', () => {
   it('gives defaults for an empty query string', () => {
-    expect(jobListQuerySchema.parse({})).toEqual({ page: 1, pageSize: 25, sort: 'scheduledDate', dir: 'desc', archived: 'false' });
+    expect(jobListQuerySchema.parse({})).toEqual({
+      page: 1,
+      pageSize: 25,
+      sort: 'scheduledDate',
+      dir: 'desc',
+      archived: 'false',
+    });
   });
 
   it('reads numbers and a comma list of statuses from strings', () => {
@@ -30,7 +36,14 @@ describe('jobListQuerySchema', () => {
   });
 
   it('refuses out-of-range pages, unknown statuses and sort keys, and bad dates', () => {
-    for (const bad of [{ page: '0' }, { pageSize: '500' }, { status: 'done' }, { sort: 'password' }, { from: '12/01/2026' }, { crewId: 'x' }]) {
+    for (const bad of [
+      { page: '0' },
+      { pageSize: '500' },
+      { status: 'done' },
+      { sort: 'password' },
+      { from: '12/01/2026' },
+      { crewId: 'x' },
+    ]) {
       expect(jobListQuerySchema.safeParse(bad).success, JSON.stringify(bad)).toBe(false);
     }
   });

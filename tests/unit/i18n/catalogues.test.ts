@@ -27,7 +27,13 @@ function placeholders(message: string): string[] {
   const found = new Set<string>();
   const walk = (elements: MessageFormatElement[]) => {
     for (const element of elements) {
-      if (element.type === TYPE.argument || element.type === TYPE.number || element.type === TYPE.date || element.type === TYPE.time) found.add(element.value);
+      if (
+        element.type === TYPE.argument ||
+        element.type === TYPE.number ||
+        element.type === TYPE.date ||
+        element.type === TYPE.time
+      )
+        found.add(element.value);
       if (element.type === TYPE.select || element.type === TYPE.plural) {
         found.add(element.value);
         for (const option of Object.values(element.options)) walk(option.value);
@@ -49,10 +55,13 @@ describe('message catalogues', () => {
     expect(Object.keys(CATALOGUES).sort()).toEqual([...LOCALES].sort());
   });
 
-  it.each(LOCALES.flatMap((a) => LOCALES.filter((b) => b !== a).map((b) => [a, b] as const)))('every key in %s is in %s', (a, b) => {
-    const missing = [...flat[a].keys()].filter((key) => !flat[b].has(key));
-    expect(missing, `keys of ${a} missing in ${b}`).toEqual([]);
-  });
+  it.each(LOCALES.flatMap((a) => LOCALES.filter((b) => b !== a).map((b) => [a, b] as const)))(
+    'every key in %s is in %s',
+    (a, b) => {
+      const missing = [...flat[a].keys()].filter((key) => !flat[b].has(key));
+      expect(missing, `keys of ${a} missing in ${b}`).toEqual([]);
+    },
+  );
 
   it('uses the same placeholders and tags for a key in every language', () => {
     const differing: string[] = [];

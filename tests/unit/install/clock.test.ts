@@ -51,7 +51,9 @@ describe('installClock', () => {
     expect(installClock(base(early)).flags.map((f) => f.kind)).toContain('early-deflate');
     const high = cleanLog().map((e) => (e.type === 'pressure_reading' ? { ...e, payload: { pressureKpa: 200 } } : e));
     expect(installClock(base(high)).flags.map((f) => f.kind)).toEqual(['pressure-out-of-range']);
-    expect(installClock(base(undefined, { resinKitExpiresOn: '2026-11-30' })).flags.map((f) => f.kind)).toEqual(['expired-resin']);
+    expect(installClock(base(undefined, { resinKitExpiresOn: '2026-11-30' })).flags.map((f) => f.kind)).toEqual([
+      'expired-resin',
+    ]);
   });
 
   it('does not throw on a log the clock cannot read; it says why', () => {

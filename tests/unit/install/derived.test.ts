@@ -1,7 +1,16 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { installClock } from '@/lib/install/plan-and-flags';
-import { coreOf, deriveRow, emptyStoredFold, foldEvent, foldOfState, foldsInOrder, stateOfFold, type DeriveMaterials } from '@/lib/install/derived';
+import {
+  coreOf,
+  deriveRow,
+  emptyStoredFold,
+  foldEvent,
+  foldOfState,
+  foldsInOrder,
+  stateOfFold,
+  type DeriveMaterials,
+} from '@/lib/install/derived';
 import { deriveInstallState, type InstallEventInput } from '@/lib/install/state';
 import { at, cleanLog, conditions, ev } from './events';
 
@@ -10,7 +19,15 @@ import { at, cleanLog, conditions, ev } from './events';
 
 const materials: DeriveMaterials = {
   // The integration world's example epoxy (tests/integration/helpers/world.ts): 30 min pot life, 90 min hold at 20 °C.
-  resin: { refTempC: 20, potLifeMin: 30, holdMin: 90, fullCureMin: 240, minTempC: 5, maxTempC: 40, sensitivity: { doublingC: 10 } },
+  resin: {
+    refTempC: 20,
+    potLifeMin: 30,
+    holdMin: 90,
+    fullCureMin: 240,
+    minTempC: 5,
+    maxTempC: 40,
+    sensitivity: { doublingC: 10 },
+  },
   packer: { minPressureKpa: 70, maxPressureKpa: 150 },
   resinKitExpiresOn: '2099-12-31',
 };
@@ -20,8 +37,15 @@ const settings = { safetyMargin: 0.2, holdReserve: 0.1, unitSystem: 'metric' as 
 function foldOneByOne(events: InstallEventInput[]) {
   let fold = { ...emptyStoredFold(), materials };
   for (const event of [...events].sort((a, b) => +new Date(a.deviceTime) - +new Date(b.deviceTime))) {
-    expect(foldsInOrder(fold, { deviceTime: new Date(event.deviceTime), receivedAt: new Date(event.receivedAt!) })).toBe(true);
-    fold = foldEvent(fold, { type: event.type, deviceTime: new Date(event.deviceTime), receivedAt: new Date(event.receivedAt!), payload: event.payload ?? {} });
+    expect(
+      foldsInOrder(fold, { deviceTime: new Date(event.deviceTime), receivedAt: new Date(event.receivedAt!) }),
+    ).toBe(true);
+    fold = foldEvent(fold, {
+      type: event.type,
+      deviceTime: new Date(event.deviceTime),
+      receivedAt: new Date(event.receivedAt!),
+      payload: event.payload ?? {},
+    });
   }
   return fold;
 }
@@ -34,10 +58,19 @@ function expectSame(events: InstallEventInput[]) {
   const folded = stateOfFold(incremental.fold);
   expect(coreOf(folded)).toEqual(coreOf(whole));
   expect(folded.step).toEqual(whole.step);
-  expect(folded.pressuresKpa).toEqual(pressuresKpa.length ? [Math.min(...pressuresKpa), Math.max(...pressuresKpa)] : []);
+  expect(folded.pressuresKpa).toEqual(
+    pressuresKpa.length ? [Math.min(...pressuresKpa), Math.max(...pressuresKpa)] : [],
+  );
   expect(incremental.columns).toEqual(fromLog.columns);
   // And the stored flags are the whole-log flags that do not depend on the present moment.
-  const clock = installClock({ state: whole, ...materials, safetyMargin: 0.2, holdReserve: 0.1, unitSystem: 'metric', now: null });
+  const clock = installClock({
+    state: whole,
+    ...materials,
+    safetyMargin: 0.2,
+    holdReserve: 0.1,
+    unitSystem: 'metric',
+    now: null,
+  });
   expect(incremental.columns.flagKinds).toEqual(clock.flags.map((f) => f.kind));
   expect(incremental.columns.inflateBy).toEqual(whole.mixedAt && clock.plan ? clock.plan.inflateBy : null);
   return incremental.columns;
@@ -46,7 +79,14 @@ function expectSame(events: InstallEventInput[]) {
 describe('the stored fold of an install', () => {
   it('matches the whole-log fold on a clean install, with its plan and no flags', () => {
     const columns = expectSame(cleanLog());
-    expect(columns).toMatchObject({ step: 'done', mixedAt: at(16), inflatedAt: at(32), maxPressureKpa: 100, flagKinds: [], worstSeverity: null });
+    expect(columns).toMatchObject({
+      step: 'done',
+      mixedAt: at(16),
+      inflatedAt: at(32),
+      maxPressureKpa: 100,
+      flagKinds: [],
+      worstSeverity: null,
+    });
     // 30 min working window at 20 °C; hold 90 min × (1 + 0.1 reserve) = 99 min after the inflate.
     expect(columns.inflateBy).toEqual(at(16 + 30));
     expect(columns.holdPlannedMin).toBeCloseTo(99, 6);
@@ -76,27 +116,50 @@ describe('the stored fold of an install', () => {
 
   it('matches the whole-log fold for any log in order (fast-check)', () => {
     const types = [
-      'safety_acknowledged', 'checks_done', 'dry_run_started', 'dry_run_finished', 'conditions_recorded', 'go_decision', 'resin_mixed',
-      'patch_loaded', 'packer_in_position', 'bladder_inflated', 'pressure_reading', 'bladder_deflated', 'inspection_recorded', 'note',
+      'safety_acknowledged',
+      'checks_done',
+      'dry_run_started',
+      'dry_run_finished',
+      'conditions_recorded',
+      'go_decision',
+      'resin_mixed',
+      'patch_loaded',
+      'packer_in_position',
+      'bladder_inflated',
+      'pressure_reading',
+      'bladder_deflated',
+      'inspection_recorded',
+      'note',
       'signed_off',
     ] as const;
     const payloadOf = (type: (typeof types)[number], n: number): Record<string, unknown> => {
       switch (type) {
-        case 'dry_run_finished': return { seconds: 60 + n * 7 };
-        case 'conditions_recorded': return { ...conditions, mixTempC: 5 + (n % 40), pipeTempC: (n % 50) - 2 };
-        case 'go_decision': return { go: n % 2 === 0 };
+        case 'dry_run_finished':
+          return { seconds: 60 + n * 7 };
+        case 'conditions_recorded':
+          return { ...conditions, mixTempC: 5 + (n % 40), pipeTempC: (n % 50) - 2 };
+        case 'go_decision':
+          return { go: n % 2 === 0 };
         case 'bladder_inflated':
-        case 'pressure_reading': return { pressureKpa: 40 + n * 3 };
-        case 'inspection_recorded': return { result: n % 3 ? 'pass' : 'fail' };
-        default: return {};
+        case 'pressure_reading':
+          return { pressureKpa: 40 + n * 3 };
+        case 'inspection_recorded':
+          return { result: n % 3 ? 'pass' : 'fail' };
+        default:
+          return {};
       }
     };
     fc.assert(
-      fc.property(fc.array(fc.record({ type: fc.constantFrom(...types), gap: fc.integer({ min: 0, max: 40 }), n: fc.nat(60) }), { maxLength: 40 }), (taps) => {
-        let min = 0;
-        const log = taps.map(({ type, gap, n }) => ev(type, (min += gap), payloadOf(type, n)));
-        expectSame(log);
-      }),
+      fc.property(
+        fc.array(fc.record({ type: fc.constantFrom(...types), gap: fc.integer({ min: 0, max: 40 }), n: fc.nat(60) }), {
+          maxLength: 40,
+        }),
+        (taps) => {
+          let min = 0;
+          const log = taps.map(({ type, gap, n }) => ev(type, (min += gap), payloadOf(type, n)));
+          expectSame(log);
+        },
+      ),
       { numRuns: 300 },
     );
   });

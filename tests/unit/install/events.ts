@@ -6,12 +6,31 @@ export const T0 = Date.parse('2026-12-01T08:00:00Z');
 export const at = (min: number) => new Date(T0 + min * 60_000);
 
 let seq = 0;
-export function ev(type: InstallEventType, min: number, payload: Record<string, unknown> = {}, extra: Partial<InstallEventInput> = {}): InstallEventInput {
+export function ev(
+  type: InstallEventType,
+  min: number,
+  payload: Record<string, unknown> = {},
+  extra: Partial<InstallEventInput> = {},
+): InstallEventInput {
   seq += 1;
-  return { id: `e${seq}`, clientEventId: `c${seq}`, type, deviceTime: at(min), receivedAt: at(min + 0.05), payload, ...extra };
+  return {
+    id: `e${seq}`,
+    clientEventId: `c${seq}`,
+    type,
+    deviceTime: at(min),
+    receivedAt: at(min + 0.05),
+    payload,
+    ...extra,
+  };
 }
 
-export const conditions = { mixTempC: 20, pipeTempC: 20, resinKitId: 'kit-1', packerId: 'packer-1', patchLengthMm: 910 };
+export const conditions = {
+  mixTempC: 20,
+  pipeTempC: 20,
+  resinKitId: 'kit-1',
+  packerId: 'packer-1',
+  patchLengthMm: 910,
+};
 
 /** A whole clean install, in order. */
 export function cleanLog(): InstallEventInput[] {

@@ -23,7 +23,9 @@ describe('<StepInflate> pressure entry', () => {
     expect(alert).toHaveTextContent('until the gauge reads 70–150 kPa');
     // The release instruction stands first on the step, before any way to record.
     const step = screen.getByTestId('step-inflate');
-    expect(step.textContent!.indexOf('Release pressure now')).toBeLessThan(step.textContent!.indexOf('Bladder inflated'));
+    expect(step.textContent!.indexOf('Release pressure now')).toBeLessThan(
+      step.textContent!.indexOf('Bladder inflated'),
+    );
     fireEvent.click(screen.getByRole('button', { name: 'Bladder inflated' }));
     expect(onInflate).not.toHaveBeenCalled();
   });
@@ -40,7 +42,9 @@ describe('<StepInflate> pressure entry', () => {
     const onInflate = vi.fn();
     render(<StepInflate unitSystem="metric" rating={rating} onInflate={onInflate} />, { wrapper: IntlWrapper });
     typePressure('75');
-    expect(screen.getByTestId('pressure-below-groundwater')).toHaveTextContent('75 kPa does not beat the groundwater on this repair (80 kPa)');
+    expect(screen.getByTestId('pressure-below-groundwater')).toHaveTextContent(
+      '75 kPa does not beat the groundwater on this repair (80 kPa)',
+    );
     typePressure('100');
     expect(screen.queryByTestId('pressure-below-groundwater')).toBeNull();
     expect(screen.queryByTestId('pressure-over-rating')).toBeNull();

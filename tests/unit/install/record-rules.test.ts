@@ -6,13 +6,18 @@ const offset = (ms: number) => new Date(received.getTime() + ms);
 
 describe('deviceTimeProblem', () => {
   it('takes times from 14 days before to 5 minutes after the receive time, bounds included', () => {
-    for (const ms of [0, 5 * 60_000, -14 * 24 * 3600_000, -3600_000, 60_000]) expect(deviceTimeProblem(offset(ms), received)).toBeNull();
+    for (const ms of [0, 5 * 60_000, -14 * 24 * 3600_000, -3600_000, 60_000])
+      expect(deviceTimeProblem(offset(ms), received)).toBeNull();
   });
 
   it('names the bound that was broken', () => {
     expect(deviceTimeProblem(offset(5 * 60_000 + 1), received)).toMatch(/^deviceTime is more than 5 minutes after/);
-    expect(deviceTimeProblem(offset(-14 * 24 * 3600_000 - 1), received)).toMatch(/^deviceTime is more than 14 days before/);
-    expect(deviceTimeProblem(offset(-15 * 24 * 3600_000).toISOString(), received, 'The corrected time')).toMatch(/^The corrected time is more than 14 days/);
+    expect(deviceTimeProblem(offset(-14 * 24 * 3600_000 - 1), received)).toMatch(
+      /^deviceTime is more than 14 days before/,
+    );
+    expect(deviceTimeProblem(offset(-15 * 24 * 3600_000).toISOString(), received, 'The corrected time')).toMatch(
+      /^The corrected time is more than 14 days/,
+    );
     expect(deviceTimeProblem('not a date', received)).toMatch(/not a date/);
   });
 });

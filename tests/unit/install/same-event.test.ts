@@ -12,7 +12,13 @@ describe('isSameEvent', () => {
   };
 
   it('matches a replay: the same instant in another offset, keys in another order', () => {
-    expect(isSameEvent(stored, { ...stored, deviceTime: '2026-12-01T08:00:00-07:00', payload: { confirmedOutOfRange: false, pressureKpa: 100 } })).toBe(true);
+    expect(
+      isSameEvent(stored, {
+        ...stored,
+        deviceTime: '2026-12-01T08:00:00-07:00',
+        payload: { confirmedOutOfRange: false, pressureKpa: 100 },
+      }),
+    ).toBe(true);
   });
 
   it('tells a different event apart', () => {

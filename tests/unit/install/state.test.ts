@@ -6,7 +6,14 @@ describe('deriveInstallState', () => {
   it('starts at safety with nothing recorded', () => {
     const s = deriveInstallState([]);
     expect(s.step).toBe('safety');
-    expect(s).toMatchObject({ safetyAcknowledged: false, checksDone: false, conditions: null, mixedAt: null, pressuresKpa: [], startedAt: null });
+    expect(s).toMatchObject({
+      safetyAcknowledged: false,
+      checksDone: false,
+      conditions: null,
+      mixedAt: null,
+      pressuresKpa: [],
+      startedAt: null,
+    });
   });
 
   it('walks the steps of a clean install in order', () => {
@@ -14,8 +21,21 @@ describe('deriveInstallState', () => {
     const steps: InstallStep[] = [];
     for (let i = 0; i <= log.length; i += 1) steps.push(deriveInstallState(log.slice(0, i)).step);
     expect(steps).toEqual([
-      'safety', 'checks', 'dry_run', 'dry_run', 'conditions', 'mix', 'mix', 'load', 'position', 'inflate', 'hold', 'hold',
-      'inspect', 'sign_off', 'done',
+      'safety',
+      'checks',
+      'dry_run',
+      'dry_run',
+      'conditions',
+      'mix',
+      'mix',
+      'load',
+      'position',
+      'inflate',
+      'hold',
+      'hold',
+      'inspect',
+      'sign_off',
+      'done',
     ]);
   });
 
@@ -58,7 +78,13 @@ describe('deriveInstallState', () => {
 
   it('lets the pre-mix steps be skipped or come in any order', () => {
     expect(deriveInstallState([ev('conditions_recorded', 0, conditions)]).step).toBe('safety');
-    expect(deriveInstallState([ev('safety_acknowledged', 1), ev('dry_run_started', 2), ev('dry_run_finished', 3, { seconds: 60 })]).step).toBe('checks');
+    expect(
+      deriveInstallState([
+        ev('safety_acknowledged', 1),
+        ev('dry_run_started', 2),
+        ev('dry_run_finished', 3, { seconds: 60 }),
+      ]).step,
+    ).toBe('checks');
     const mixedStraightAway = deriveInstallState([ev('resin_mixed', 0)]);
     expect(mixedStraightAway.step).toBe('load');
     expect(mixedStraightAway.dryRunSeconds).toBeNull();
@@ -81,7 +107,12 @@ describe('deriveInstallState', () => {
     const inflated = log.find((e) => e.type === 'bladder_inflated')!;
     const s = deriveInstallState([
       ...log,
-      ev('correction', 200, { reason: 'Tablet clock was off', deviceTime: at(30).toISOString(), payload: { pressureKpa: 105 } }, { correctsEventId: inflated.id }),
+      ev(
+        'correction',
+        200,
+        { reason: 'Tablet clock was off', deviceTime: at(30).toISOString(), payload: { pressureKpa: 105 } },
+        { correctsEventId: inflated.id },
+      ),
     ]);
     expect(s.inflatedAt).toEqual(at(30));
     expect(s.inflatePressureKpa).toBe(105);
@@ -94,14 +125,27 @@ describe('deriveInstallState', () => {
     const mixed = ev('resin_mixed', 10);
     const s = deriveInstallState([
       mixed,
-      ev('correction', 40, { reason: 'second thought', deviceTime: at(12).toISOString() }, { correctsEventId: mixed.clientEventId }),
-      ev('correction', 30, { reason: 'first thought', deviceTime: at(11).toISOString() }, { correctsEventId: mixed.id }),
+      ev(
+        'correction',
+        40,
+        { reason: 'second thought', deviceTime: at(12).toISOString() },
+        { correctsEventId: mixed.clientEventId },
+      ),
+      ev(
+        'correction',
+        30,
+        { reason: 'first thought', deviceTime: at(11).toISOString() },
+        { correctsEventId: mixed.id },
+      ),
     ]);
     expect(s.mixedAt).toEqual(at(12));
   });
 
   it('ignores a correction whose event is not in the log', () => {
-    const s = deriveInstallState([ev('resin_mixed', 10), ev('correction', 11, { reason: 'lost', deviceTime: at(1).toISOString() }, { correctsEventId: 'nope' })]);
+    const s = deriveInstallState([
+      ev('resin_mixed', 10),
+      ev('correction', 11, { reason: 'lost', deviceTime: at(1).toISOString() }, { correctsEventId: 'nope' }),
+    ]);
     expect(s.mixedAt).toEqual(at(10));
   });
 });
@@ -111,8 +155,16 @@ describe('orderProblem', () => {
     const log = cleanLog();
     return deriveInstallState(log.slice(0, log.findIndex((e) => e.type === type) + 1));
   };
-  const next = (type: Parameters<typeof orderProblem>[1]['type'], min: number, payload: Record<string, unknown> = {}, correctsEventId?: string) => ({
-    type, deviceTime: at(min), payload, correctsEventId,
+  const next = (
+    type: Parameters<typeof orderProblem>[1]['type'],
+    min: number,
+    payload: Record<string, unknown> = {},
+    correctsEventId?: string,
+  ) => ({
+    type,
+    deviceTime: at(min),
+    payload,
+    correctsEventId,
   });
 
   it('accepts every event of a clean install in turn', () => {
@@ -149,7 +201,9 @@ describe('orderProblem', () => {
     const done = upTo('signed_off');
     expect(orderProblem(done, next('note', 160, { text: 'Customer told' }))).toBeNull();
     const loaded = done.log.find((e) => e.type === 'patch_loaded')!;
-    expect(orderProblem(done, next('correction', 160, { reason: 'Wrong tap', deviceTime: at(21).toISOString() }, loaded.id))).toBeNull();
+    expect(
+      orderProblem(done, next('correction', 160, { reason: 'Wrong tap', deviceTime: at(21).toISOString() }, loaded.id)),
+    ).toBeNull();
   });
 
   it('lets a sent-back install be inspected and signed off again, but never re-run its clock', () => {
@@ -174,22 +228,39 @@ describe('orderProblem', () => {
 
   it('refuses a correction of an event that is not on this install, or of a correction', () => {
     const s = upTo('resin_mixed');
-    expect(orderProblem(s, next('correction', 30, { reason: 'typo', deviceTime: at(1).toISOString() }, 'elsewhere'))).toMatch(/not on this install/);
+    expect(
+      orderProblem(s, next('correction', 30, { reason: 'typo', deviceTime: at(1).toISOString() }, 'elsewhere')),
+    ).toMatch(/not on this install/);
     const log = cleanLog().slice(0, 7);
-    const fix = ev('correction', 30, { reason: 'typo', deviceTime: at(15).toISOString() }, { correctsEventId: log[6].id });
+    const fix = ev(
+      'correction',
+      30,
+      { reason: 'typo', deviceTime: at(15).toISOString() },
+      { correctsEventId: log[6].id },
+    );
     const corrected = deriveInstallState([...log, fix]);
     expect(corrected.mixedAt).toEqual(at(15));
-    expect(orderProblem(corrected, next('correction', 31, { reason: 'again', deviceTime: at(14).toISOString() }, fix.id))).toMatch(/original event/);
+    expect(
+      orderProblem(corrected, next('correction', 31, { reason: 'again', deviceTime: at(14).toISOString() }, fix.id)),
+    ).toMatch(/original event/);
   });
 
   it('refuses a correction that would put the clock out of order', () => {
     const s = upTo('bladder_deflated');
     const inflated = s.log.find((e) => e.type === 'bladder_inflated')!;
     const mixed = s.log.find((e) => e.type === 'resin_mixed')!;
-    expect(orderProblem(s, next('correction', 200, { reason: 'clock', deviceTime: at(10).toISOString() }, inflated.id))).toMatch(/inflated before the resin/);
-    expect(orderProblem(s, next('correction', 200, { reason: 'clock', deviceTime: at(200).toISOString() }, inflated.id))).toMatch(/deflated before/);
-    expect(orderProblem(s, next('correction', 200, { reason: 'clock', deviceTime: at(40).toISOString() }, mixed.id))).toMatch(/inflated before/);
-    expect(orderProblem(s, next('correction', 200, { reason: 'clock', deviceTime: at(15).toISOString() }, mixed.id))).toBeNull();
+    expect(
+      orderProblem(s, next('correction', 200, { reason: 'clock', deviceTime: at(10).toISOString() }, inflated.id)),
+    ).toMatch(/inflated before the resin/);
+    expect(
+      orderProblem(s, next('correction', 200, { reason: 'clock', deviceTime: at(200).toISOString() }, inflated.id)),
+    ).toMatch(/deflated before/);
+    expect(
+      orderProblem(s, next('correction', 200, { reason: 'clock', deviceTime: at(40).toISOString() }, mixed.id)),
+    ).toMatch(/inflated before/);
+    expect(
+      orderProblem(s, next('correction', 200, { reason: 'clock', deviceTime: at(15).toISOString() }, mixed.id)),
+    ).toBeNull();
   });
 });
 
@@ -197,8 +268,18 @@ describe('the clock inputs of issue 12 in the event log', () => {
   it("folds air temperature, preparation minutes and the maker's hold; older events without them read as null", () => {
     const base = { resinKitId: 'k', packerId: 'p', patchLengthMm: 600, mixTempC: 18, pipeTempC: 3 };
     const withAll = deriveInstallState([
-      { id: '1', type: 'conditions_recorded', deviceTime: '2026-06-02T08:00:00Z', payload: { ...base, airTempC: 24, prepMinutes: 12 } },
-      { id: '2', type: 'go_decision', deviceTime: '2026-06-02T08:01:00Z', payload: { go: false, overrideReason: 'Line needed tonight', makerHoldMin: 240 } },
+      {
+        id: '1',
+        type: 'conditions_recorded',
+        deviceTime: '2026-06-02T08:00:00Z',
+        payload: { ...base, airTempC: 24, prepMinutes: 12 },
+      },
+      {
+        id: '2',
+        type: 'go_decision',
+        deviceTime: '2026-06-02T08:01:00Z',
+        payload: { go: false, overrideReason: 'Line needed tonight', makerHoldMin: 240 },
+      },
     ]);
     expect(withAll.conditions).toMatchObject({ mixTempC: 18, airTempC: 24, prepMinutes: 12, pipeTempC: 3 });
     expect(withAll.goDecision).toMatchObject({ go: false, makerHoldMin: 240 });

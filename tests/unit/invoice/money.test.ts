@@ -25,13 +25,34 @@ describe('invoice money in integer cents', () => {
   });
 
   it('totals lines and tax; the total is always subtotal + tax', () => {
-    const totals = invoiceTotals([{ quantity: 1, unitPriceCents: 185_000 }, { quantity: 2, unitPriceCents: 12_550 }], 825);
-    expect(totals).toEqual({ amounts: [185_000, 25_100], subtotalCents: 210_100, taxCents: 17_333, totalCents: 227_433 });
+    const totals = invoiceTotals(
+      [
+        { quantity: 1, unitPriceCents: 185_000 },
+        { quantity: 2, unitPriceCents: 12_550 },
+      ],
+      825,
+    );
+    expect(totals).toEqual({
+      amounts: [185_000, 25_100],
+      subtotalCents: 210_100,
+      taxCents: 17_333,
+      totalCents: 227_433,
+    });
     fc.assert(
-      fc.property(fc.array(fc.record({ quantity: fc.integer({ min: 1, max: 100_000 }).map((n) => n / 1000), unitPriceCents: fc.integer({ min: 0, max: 1_000_000 }) }), { minLength: 1, maxLength: 20 }), fc.integer({ min: 0, max: 5000 }), (lines, bp) => {
-        const t = invoiceTotals(lines, bp);
-        return Number.isInteger(t.totalCents) && t.totalCents === t.subtotalCents + t.taxCents && t.taxCents >= 0;
-      }),
+      fc.property(
+        fc.array(
+          fc.record({
+            quantity: fc.integer({ min: 1, max: 100_000 }).map((n) => n / 1000),
+            unitPriceCents: fc.integer({ min: 0, max: 1_000_000 }),
+          }),
+          { minLength: 1, maxLength: 20 },
+        ),
+        fc.integer({ min: 0, max: 5000 }),
+        (lines, bp) => {
+          const t = invoiceTotals(lines, bp);
+          return Number.isInteger(t.totalCents) && t.totalCents === t.subtotalCents + t.taxCents && t.taxCents >= 0;
+        },
+      ),
     );
   });
 

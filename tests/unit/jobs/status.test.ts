@@ -8,8 +8,14 @@ const nothing = { crewId: null, scheduledDate: null, changed: true };
 describe('nextJobStatus', () => {
   it('schedules a draft once both crew and day are set, and unschedules when either goes', () => {
     expect(nextJobStatus('draft', undefined, crewAndDay)).toEqual({ ok: true, status: 'scheduled' });
-    expect(nextJobStatus('draft', undefined, { ...crewAndDay, scheduledDate: null })).toEqual({ ok: true, status: 'draft' });
-    expect(nextJobStatus('scheduled', undefined, { ...crewAndDay, crewId: null })).toEqual({ ok: true, status: 'draft' });
+    expect(nextJobStatus('draft', undefined, { ...crewAndDay, scheduledDate: null })).toEqual({
+      ok: true,
+      status: 'draft',
+    });
+    expect(nextJobStatus('scheduled', undefined, { ...crewAndDay, crewId: null })).toEqual({
+      ok: true,
+      status: 'draft',
+    });
   });
 
   it('leaves the status alone when the crew and day were not part of the edit', () => {

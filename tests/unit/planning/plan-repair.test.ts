@@ -4,10 +4,46 @@ import type { Packer } from '@/lib/sizing';
 
 // Test inputs, not any maker's figures.
 const packers: Packer[] = [
-  { id: 'fits', name: 'Bore 200', minDiameterMm: 185, maxDiameterMm: 215, bladderLengthMm: 1200, endMarginMm: 100, minPressureKpa: 70, maxPressureKpa: 150 },
-  { id: 'small', name: 'Bore 300', minDiameterMm: 280, maxDiameterMm: 320, bladderLengthMm: 1500, endMarginMm: 120, minPressureKpa: 50, maxPressureKpa: 120 },
-  { id: 'short', name: 'Short 200', minDiameterMm: 185, maxDiameterMm: 215, bladderLengthMm: 900, endMarginMm: 100, minPressureKpa: 70, maxPressureKpa: 150 },
-  { id: 'weak', name: 'Low rated 200', minDiameterMm: 185, maxDiameterMm: 215, bladderLengthMm: 1200, endMarginMm: 100, minPressureKpa: 5, maxPressureKpa: 20 },
+  {
+    id: 'fits',
+    name: 'Bore 200',
+    minDiameterMm: 185,
+    maxDiameterMm: 215,
+    bladderLengthMm: 1200,
+    endMarginMm: 100,
+    minPressureKpa: 70,
+    maxPressureKpa: 150,
+  },
+  {
+    id: 'small',
+    name: 'Bore 300',
+    minDiameterMm: 280,
+    maxDiameterMm: 320,
+    bladderLengthMm: 1500,
+    endMarginMm: 120,
+    minPressureKpa: 50,
+    maxPressureKpa: 120,
+  },
+  {
+    id: 'short',
+    name: 'Short 200',
+    minDiameterMm: 185,
+    maxDiameterMm: 215,
+    bladderLengthMm: 900,
+    endMarginMm: 100,
+    minPressureKpa: 70,
+    maxPressureKpa: 150,
+  },
+  {
+    id: 'weak',
+    name: 'Low rated 200',
+    minDiameterMm: 185,
+    maxDiameterMm: 215,
+    bladderLengthMm: 1200,
+    endMarginMm: 100,
+    minPressureKpa: 5,
+    maxPressureKpa: 20,
+  },
 ];
 
 const base: Omit<PlanInput, 'unitSystem'> = {
@@ -20,7 +56,13 @@ const base: Omit<PlanInput, 'unitSystem'> = {
 /** Every sentence of a plan a person reads: warnings, notes, packer reasons, the resin basis and the checks run. */
 function sentences(input: PlanInput) {
   const plan = planRepair(input);
-  return [...plan.warnings, ...plan.notes, ...plan.packers.flatMap((p) => p.reasons), plan.resin?.basis ?? '', plan.design?.summary ?? ''].join('\n');
+  return [
+    ...plan.warnings,
+    ...plan.notes,
+    ...plan.packers.flatMap((p) => p.reasons),
+    plan.resin?.basis ?? '',
+    plan.design?.summary ?? '',
+  ].join('\n');
 }
 
 // Inputs that make every message appear: a short patch, packers that do not fit for each reason, groundwater of
@@ -56,8 +98,12 @@ describe('planRepair — every message in the company’s units (NIST SP 811 sym
   it('the messages say what they should, with values converted exactly (1 in = 25.4 mm, NIST SP 811)', () => {
     const plan = planRepair({ ...base, patchLengthMm: 800, unitSystem: 'imperial' });
     // Proposed 300 + 2 × 305 = 910 mm = 35.8 in.
-    expect(plan.warnings[0]).toBe('The chosen patch is shorter than the defect plus the company’s overlap at each end (35.8 in).');
-    expect(plan.packers.find((p) => p.id === 'small')!.reasons).toEqual(["Pipe 7.9 in is smaller than the packer's minimum of 11.0 in."]);
+    expect(plan.warnings[0]).toBe(
+      'The chosen patch is shorter than the defect plus the company’s overlap at each end (35.8 in).',
+    );
+    expect(plan.packers.find((p) => p.id === 'small')!.reasons).toEqual([
+      "Pipe 7.9 in is smaller than the packer's minimum of 11.0 in.",
+    ]);
   });
 });
 
@@ -86,7 +132,9 @@ describe('planRepair — the thickness check and its floors (ASTM F1216 X1, from
     // 914.4 mm = 3.0 ft (1 ft = 304.8 mm, NIST SP 811, exact).
     expect(describeChecks(checks, 914.4, 'imperial')).toBe('X1.1 buckling at 3.0 ft of water, X1.4 stiffness');
     expect(describeChecks(checks, 914.4, 'metric')).toBe('X1.1 buckling at 0.91 m of water, X1.4 stiffness');
-    expect(describeChecks({ ...checks, ovality: 0.1 }, 914.4, 'metric')).toBe('X1.1 buckling at 0.91 m of water, X1.2 ovality bending, X1.4 stiffness');
+    expect(describeChecks({ ...checks, ovality: 0.1 }, 914.4, 'metric')).toBe(
+      'X1.1 buckling at 0.91 m of water, X1.2 ovality bending, X1.4 stiffness',
+    );
   });
 });
 
@@ -114,6 +162,8 @@ describe('planRepair — resin from the resin system, pressure against groundwat
     expect(weak.fits).toBe(false);
     expect(weak.reasons).toEqual(['Rated only to 20 kPa: it cannot press the patch against 25 kPa of groundwater.']);
     expect(plan.packers.find((p) => p.id === 'fits')!.fits).toBe(true);
-    expect(plan.notes[0]).toBe('Groundwater stands 2.50 m above the invert (25 kPa): inflate above that, within the packer’s rating.');
+    expect(plan.notes[0]).toBe(
+      'Groundwater stands 2.50 m above the invert (25 kPa): inflate above that, within the packer’s rating.',
+    );
   });
 });

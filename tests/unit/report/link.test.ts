@@ -30,9 +30,14 @@ describe('report links', () => {
     for (const c of alphabet.replace(signature.at(-1)!, '')) {
       expect(verifyReportLink(`${payload}.${signature.slice(0, -1)}${c}`, NOW, SECRET).ok).toBe(false);
     }
-    const later = Buffer.from(Buffer.from(payload, 'base64url').toString().replace(/\d+$/, '9999999999')).toString('base64url');
+    const later = Buffer.from(Buffer.from(payload, 'base64url').toString().replace(/\d+$/, '9999999999')).toString(
+      'base64url',
+    );
     expect(verifyReportLink(`${later}.${signature}`, NOW, SECRET)).toEqual({ ok: false, reason: 'signature' });
-    expect(verifyReportLink(`${payload}.${signature.slice(0, -4)}`, NOW, SECRET)).toEqual({ ok: false, reason: 'signature' });
+    expect(verifyReportLink(`${payload}.${signature.slice(0, -4)}`, NOW, SECRET)).toEqual({
+      ok: false,
+      reason: 'signature',
+    });
     for (const junk of ['', '.', 'abc', `${payload}.${signature}.x`, `${payload}.sig+/=`, 'a'.repeat(400)]) {
       expect(verifyReportLink(junk, NOW, SECRET)).toEqual({ ok: false, reason: 'malformed' });
     }
@@ -44,10 +49,20 @@ describe('report links', () => {
       const payload = Buffer.from(text).toString('base64url');
       return `${payload}.${createHmac('sha256', SECRET).update(payload).digest('base64url')}`;
     };
-    expect(verifyReportLink(sign(`r2:${LINK}:not-a-uuid:${COMPANY}:9999999999`), NOW, SECRET)).toEqual({ ok: false, reason: 'malformed' });
+    expect(verifyReportLink(sign(`r2:${LINK}:not-a-uuid:${COMPANY}:9999999999`), NOW, SECRET)).toEqual({
+      ok: false,
+      reason: 'malformed',
+    });
     // The earlier form without a link row cannot be revoked, so it is refused even when well signed.
-    expect(verifyReportLink(sign(`r1:${JOB}:${COMPANY}:9999999999`), NOW, SECRET)).toEqual({ ok: false, reason: 'malformed' });
-    expect(verifyReportLink(sign(`r2:${LINK}:${JOB}:${COMPANY}:9999999999`), NOW, SECRET)).toEqual({ ok: true, ...claims, expiresAt: new Date(9_999_999_999_000) });
+    expect(verifyReportLink(sign(`r1:${JOB}:${COMPANY}:9999999999`), NOW, SECRET)).toEqual({
+      ok: false,
+      reason: 'malformed',
+    });
+    expect(verifyReportLink(sign(`r2:${LINK}:${JOB}:${COMPANY}:9999999999`), NOW, SECRET)).toEqual({
+      ok: true,
+      ...claims,
+      expiresAt: new Date(9_999_999_999_000),
+    });
   });
 
   it('only signs ids and real dates', () => {

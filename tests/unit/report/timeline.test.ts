@@ -49,7 +49,13 @@ describe('ticksBetween', () => {
   it('uses the smallest round step giving at most 8 ticks, on whole multiples of it', () => {
     // 256 minutes: 30-minute steps would give 9, so 60-minute steps: 16:00, 17:00, 18:00, 19:00 UTC.
     const ticks = ticksBetween(T0, T0 + 256 * 60_000);
-    expect(ticks.map((t) => new Date(t).toISOString().slice(11, 16))).toEqual(['15:00', '16:00', '17:00', '18:00', '19:00']);
+    expect(ticks.map((t) => new Date(t).toISOString().slice(11, 16))).toEqual([
+      '15:00',
+      '16:00',
+      '17:00',
+      '18:00',
+      '19:00',
+    ]);
     const short = ticksBetween(T0 + 60_000, T0 + 31 * 60_000);
     expect(short.map((t) => (t - T0) / 60_000)).toEqual([5, 10, 15, 20, 25, 30]);
   });

@@ -26,7 +26,11 @@ describe('timelineGeometry', () => {
     expect(g.plotRight).toBe(1180);
     expect(g.start).toEqual(at(-3));
     expect(g.end).toEqual(at(103));
-    expect(g.lanes.map((l) => [l.key, l.y, l.height])).toEqual([['working', 8, 28], ['hold', 48, 28], ['cure', 88, 28]]);
+    expect(g.lanes.map((l) => [l.key, l.y, l.height])).toEqual([
+      ['working', 8, 28],
+      ['hold', 48, 28],
+      ['cure', 88, 28],
+    ]);
     expect(g.axisY).toBe(128);
     expect(g.height).toBe(156);
 
@@ -64,7 +68,17 @@ describe('timelineGeometry', () => {
   });
 
   it('shows only the working window before the inflate, and nothing before the mix', () => {
-    const mixed = timelineGeometry({ mixedAt: at(0), inflateBy: at(30), inflatedAt: null, deflatedAt: null, deflateAfter: at(99), returnToService: at(200) }, LAYOUT)!;
+    const mixed = timelineGeometry(
+      {
+        mixedAt: at(0),
+        inflateBy: at(30),
+        inflatedAt: null,
+        deflatedAt: null,
+        deflateAfter: at(99),
+        returnToService: at(200),
+      },
+      LAYOUT,
+    )!;
     expect(mixed.lanes.map((l) => l.key)).toEqual(['working']);
     expect(mixed.lanes[0].actual).toBeNull();
     expect(mixed.lanes[0].mark).toBeNull();

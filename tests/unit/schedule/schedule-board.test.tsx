@@ -9,8 +9,15 @@ vi.mock('next/navigation', () => ({ useRouter: () => ({ refresh: vi.fn(), push: 
 afterEach(() => cleanup());
 
 const job = (n: number, status: BoardJob['status'] = 'scheduled'): BoardJob => ({
-  id: `00000000-0000-4000-8000-00000000000${n}`, number: `2026-000${n}`, title: null, status, crewId: 'c1', scheduledDate: '2026-12-02',
-  customerName: `Customer ${n}`, siteAddress: `${n} Elm Row, Testville`, repairCount: n,
+  id: `00000000-0000-4000-8000-00000000000${n}`,
+  number: `2026-000${n}`,
+  title: null,
+  status,
+  crewId: 'c1',
+  scheduledDate: '2026-12-02',
+  customerName: `Customer ${n}`,
+  siteAddress: `${n} Elm Row, Testville`,
+  repairCount: n,
 });
 
 function boardWith(jobsWednesday: BoardJob[], capacity: number): Board {
@@ -20,13 +27,18 @@ function boardWith(jobsWednesday: BoardJob[], capacity: number): Board {
     today: '2026-12-01',
     week: { start: '2026-11-30', end: '2026-12-06', previous: '2026-11-23', next: '2026-12-07', current: '2026-11-30' },
     days,
-    crews: [{
-      id: 'c1', name: 'East crew', dailyCapacity: capacity, archived: false,
-      cells: days.map(({ date }) => {
-        const jobs = date === '2026-12-02' ? jobsWednesday : [];
-        return { date, jobs, count: jobs.length, overCapacity: jobs.length > capacity };
-      }),
-    }],
+    crews: [
+      {
+        id: 'c1',
+        name: 'East crew',
+        dailyCapacity: capacity,
+        archived: false,
+        cells: days.map(({ date }) => {
+          const jobs = date === '2026-12-02' ? jobsWednesday : [];
+          return { date, jobs, count: jobs.length, overCapacity: jobs.length > capacity };
+        }),
+      },
+    ],
     unscheduled: [],
   };
 }
@@ -50,7 +62,10 @@ describe('ScheduleBoard', () => {
   it('lists each job with its link, customer, address, repairs and status', () => {
     render(<ScheduleBoard board={boardWith([job(2)], 4)} />);
     const cell = wednesdayCell();
-    expect(within(cell).getByRole('link', { name: '2026-0002' })).toHaveAttribute('href', '/jobs/00000000-0000-4000-8000-000000000002');
+    expect(within(cell).getByRole('link', { name: '2026-0002' })).toHaveAttribute(
+      'href',
+      '/jobs/00000000-0000-4000-8000-000000000002',
+    );
     expect(cell).toHaveTextContent('Customer 2');
     expect(cell).toHaveTextContent('2 Elm Row, Testville');
     expect(cell).toHaveTextContent('2 repairs');
@@ -70,6 +85,10 @@ describe('ScheduleBoard', () => {
   it('offers Unassign only on jobs the schedule may still move', () => {
     render(<ScheduleBoard board={boardWith([job(1), job(2, 'closed')], 4)} />);
     const cell = wednesdayCell();
-    expect(within(cell).getAllByRole('button').map((b) => b.textContent)).toEqual(['Unassign 2026-0001']);
+    expect(
+      within(cell)
+        .getAllByRole('button')
+        .map((b) => b.textContent),
+    ).toEqual(['Unassign 2026-0001']);
   });
 });

@@ -37,7 +37,15 @@ describe('weekDays', () => {
 
   it('lists seven days, Monday first, labelled as the board heads its columns', () => {
     const days = weekDays('2026-12-03', DENVER);
-    expect(days.map((d) => d.date)).toEqual(['2026-11-30', '2026-12-01', '2026-12-02', '2026-12-03', '2026-12-04', '2026-12-05', '2026-12-06']);
+    expect(days.map((d) => d.date)).toEqual([
+      '2026-11-30',
+      '2026-12-01',
+      '2026-12-02',
+      '2026-12-03',
+      '2026-12-04',
+      '2026-12-05',
+      '2026-12-06',
+    ]);
     expect(days[0].label).toBe('Mon 30 Nov');
     expect(days[6].label).toBe('Sun 6 Dec');
     expect(days[0].startsAt.toISOString()).toBe('2026-11-30T07:00:00.000Z');
@@ -48,7 +56,15 @@ describe('weekDays', () => {
   // (1 Nov), at 02:00 local (15 U.S.C. § 260a, Energy Policy Act of 2005). Denver: MST UTC−7, MDT UTC−6.
   it('spring-forward week in Denver: Sunday 8 March 2026 is 23 hours long', () => {
     const days = weekDays('2026-03-08', DENVER);
-    expect(days.map((d) => d.date)).toEqual(['2026-03-02', '2026-03-03', '2026-03-04', '2026-03-05', '2026-03-06', '2026-03-07', '2026-03-08']);
+    expect(days.map((d) => d.date)).toEqual([
+      '2026-03-02',
+      '2026-03-03',
+      '2026-03-04',
+      '2026-03-05',
+      '2026-03-06',
+      '2026-03-07',
+      '2026-03-08',
+    ]);
     expect(days[0].startsAt.toISOString()).toBe('2026-03-02T07:00:00.000Z');
     expect(days[6].startsAt.toISOString()).toBe('2026-03-08T07:00:00.000Z');
     expect(days[6].endsAt.toISOString()).toBe('2026-03-09T06:00:00.000Z');
@@ -71,7 +87,15 @@ describe('weekDays', () => {
   it('does not depend on the server’s own time zone', () => {
     process.env.TZ = 'Pacific/Auckland';
     const days = weekDays('2026-03-08', DENVER);
-    expect(days.map((d) => d.date)).toEqual(['2026-03-02', '2026-03-03', '2026-03-04', '2026-03-05', '2026-03-06', '2026-03-07', '2026-03-08']);
+    expect(days.map((d) => d.date)).toEqual([
+      '2026-03-02',
+      '2026-03-03',
+      '2026-03-04',
+      '2026-03-05',
+      '2026-03-06',
+      '2026-03-07',
+      '2026-03-08',
+    ]);
     expect(days[6].endsAt.getTime() - days[6].startsAt.getTime()).toBe(23 * HOUR);
   });
 });

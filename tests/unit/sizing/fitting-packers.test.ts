@@ -23,7 +23,9 @@ describe('fittingPackers', () => {
   it('writes its reasons in the company’s units: an imperial company reads inches, never mm', () => {
     const result = fittingPackers(fleet, { insideDiameterMm: 150, patchLengthMm: 909.6 }, 'imperial');
     // 45.2 mm = 1.8 in, 50 mm = 2.0 in, 909.6 mm = 35.8 in, 150 mm = 5.9 in, 250 mm = 9.8 in (1 in = 25.4 mm, NIST SP 811, exact).
-    expect(result[0].reasons).toEqual(['The 35.8 in patch leaves 1.8 in of bladder at each end; this packer needs at least 2.0 in.']);
+    expect(result[0].reasons).toEqual([
+      'The 35.8 in patch leaves 1.8 in of bladder at each end; this packer needs at least 2.0 in.',
+    ]);
     expect(result[2].reasons).toEqual(["Pipe 5.9 in is smaller than the packer's minimum of 9.8 in."]);
     for (const reason of result.flatMap((r) => r.reasons)) expect(reason).not.toMatch(/\bmm\b/);
   });
@@ -56,8 +58,12 @@ describe('fittingPackers', () => {
       expect(() => fittingPackers(fleet, { insideDiameterMm: bad, patchLengthMm: 600 })).toThrow(SizingInputError);
       expect(() => fittingPackers(fleet, { insideDiameterMm: 150, patchLengthMm: bad })).toThrow(SizingInputError);
     }
-    expect(() => fittingPackers([{ ...fleet[0], bladderLengthMm: NaN }], { insideDiameterMm: 150, patchLengthMm: 600 })).toThrow(SizingInputError);
-    expect(() => fittingPackers([{ ...fleet[0], minDiameterMm: 200 }], { insideDiameterMm: 150, patchLengthMm: 600 })).toThrow(SizingInputError);
+    expect(() =>
+      fittingPackers([{ ...fleet[0], bladderLengthMm: NaN }], { insideDiameterMm: 150, patchLengthMm: 600 }),
+    ).toThrow(SizingInputError);
+    expect(() =>
+      fittingPackers([{ ...fleet[0], minDiameterMm: 200 }], { insideDiameterMm: 150, patchLengthMm: 600 }),
+    ).toThrow(SizingInputError);
   });
 });
 

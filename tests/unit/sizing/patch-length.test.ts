@@ -15,17 +15,23 @@ describe('patchLength', () => {
 
   it('is never shorter than the defect plus both overlaps', () => {
     fc.assert(
-      fc.property(fc.double({ min: 0, max: 1e5, noNaN: true }), fc.double({ min: 0, max: 1e4, noNaN: true }), (d, o) => {
-        expect(patchLength({ defectLengthMm: d, overlapPerEndMm: o })).toBeGreaterThanOrEqual(d);
-        expect(patchLength({ defectLengthMm: d, overlapPerEndMm: o })).toBeCloseTo(d + 2 * o, 6);
-      }),
+      fc.property(
+        fc.double({ min: 0, max: 1e5, noNaN: true }),
+        fc.double({ min: 0, max: 1e4, noNaN: true }),
+        (d, o) => {
+          expect(patchLength({ defectLengthMm: d, overlapPerEndMm: o })).toBeGreaterThanOrEqual(d);
+          expect(patchLength({ defectLengthMm: d, overlapPerEndMm: o })).toBeCloseTo(d + 2 * o, 6);
+        },
+      ),
     );
   });
 
   it('rejects negative or non-finite lengths', () => {
     for (const bad of [-1, NaN, Infinity, undefined]) {
       expect(() => patchLength({ defectLengthMm: bad as number, overlapPerEndMm: 100 })).toThrow(SizingInputError);
-      expect(() => patchLength({ defectLengthMm: 100, overlapPerEndMm: bad === undefined ? -5 : bad })).toThrow(SizingInputError);
+      expect(() => patchLength({ defectLengthMm: 100, overlapPerEndMm: bad === undefined ? -5 : bad })).toThrow(
+        SizingInputError,
+      );
     }
   });
 });

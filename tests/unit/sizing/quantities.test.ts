@@ -15,9 +15,15 @@ describe('resinQuantity', () => {
   it('matches hand arithmetic on the patch as it lies in the pipe (a ring, outside = the pipe bore)', () => {
     // By hand: π/4 × (150² − 138²) × 600 = π × (150 − 6) × 6 × 600 = 1 628 602 mm³ = 1.628 60 L of laminate;
     // × 0.5 resin × 1.1 excess = 0.895 73 L; ÷ 3.785 411 784 L/gal (NIST SP 811 App. B, exact) = 0.236 63 US gal.
-    const q = resinQuantity({ insideDiameterMm: 150, patchLengthMm: 600, thicknessMm: 6, resinFraction: 0.5, excess: 1.1 });
+    const q = resinQuantity({
+      insideDiameterMm: 150,
+      patchLengthMm: 600,
+      thicknessMm: 6,
+      resinFraction: 0.5,
+      excess: 1.1,
+    });
     expect(q.laminateL).toBeCloseTo(1.6286, 4);
-    expect(q.laminateL).toBeCloseTo((Math.PI / 4) * (150 ** 2 - 138 ** 2) * 600 / 1e6, 12);
+    expect(q.laminateL).toBeCloseTo(((Math.PI / 4) * (150 ** 2 - 138 ** 2) * 600) / 1e6, 12);
     expect(q.resinL).toBeCloseTo(0.89573, 5);
     expect(q.resinUsGal).toBeCloseTo(0.23663, 5);
   });
@@ -37,18 +43,28 @@ describe('resinQuantity', () => {
     expect(DEFAULT_RESIN_FRACTION).toBe(0.5);
     expect(DEFAULT_EXCESS).toBe(1.1);
     const byDefault = resinQuantity({ insideDiameterMm: 225, patchLengthMm: 800, thicknessMm: 7.5 });
-    const explicit = resinQuantity({ insideDiameterMm: 225, patchLengthMm: 800, thicknessMm: 7.5, resinFraction: 0.5, excess: 1.1 });
+    const explicit = resinQuantity({
+      insideDiameterMm: 225,
+      patchLengthMm: 800,
+      thicknessMm: 7.5,
+      resinFraction: 0.5,
+      excess: 1.1,
+    });
     expect(byDefault).toEqual(explicit);
   });
 
   it('grows in proportion to the patch length', () => {
     fc.assert(
-      fc.property(fc.double({ min: 100, max: 1500, noNaN: true }), fc.double({ min: 100, max: 3000, noNaN: true }), (d, length) => {
-        const one = resinQuantity({ insideDiameterMm: d, patchLengthMm: length, thicknessMm: 6 });
-        const two = resinQuantity({ insideDiameterMm: d, patchLengthMm: 2 * length, thicknessMm: 6 });
-        expect(two.resinL).toBeCloseTo(2 * one.resinL, 9);
-        expect(Number.isFinite(one.resinUsGal)).toBe(true);
-      }),
+      fc.property(
+        fc.double({ min: 100, max: 1500, noNaN: true }),
+        fc.double({ min: 100, max: 3000, noNaN: true }),
+        (d, length) => {
+          const one = resinQuantity({ insideDiameterMm: d, patchLengthMm: length, thicknessMm: 6 });
+          const two = resinQuantity({ insideDiameterMm: d, patchLengthMm: 2 * length, thicknessMm: 6 });
+          expect(two.resinL).toBeCloseTo(2 * one.resinL, 9);
+          expect(Number.isFinite(one.resinUsGal)).toBe(true);
+        },
+      ),
     );
   });
 

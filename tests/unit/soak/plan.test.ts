@@ -6,7 +6,12 @@ import { FIXED_TAPS, installTaps, splitTaps } from '../../../scripts/soak/plan.m
 
 // The soak (scripts/soak) must send only taps the server accepts, in an order its rules allow: any tap the
 // server refused would stop a tablet and make the run fail for the wrong reason.
-const tablet = { name: 'Soak Foreman 01', kitId: randomUUID(), packerId: randomUUID(), checklist: [{ id: 'flow' }, { id: 'packer' }] };
+const tablet = {
+  name: 'Soak Foreman 01',
+  kitId: randomUUID(),
+  packerId: randomUUID(),
+  checklist: [{ id: 'flow' }, { id: 'packer' }],
+};
 const repair = { planned_patch_length_mm: 800 };
 
 /** Walks taps through the body schema and the ordering rule as the server does, one after the other. */
@@ -14,7 +19,12 @@ function record(taps: [string, Record<string, unknown>][]) {
   const stored: InstallEventInput[] = [];
   const start = Date.now();
   taps.forEach(([type, payload], i) => {
-    const parsed = parseEventBody({ clientEventId: randomUUID(), type, deviceTime: new Date(start + i).toISOString(), payload });
+    const parsed = parseEventBody({
+      clientEventId: randomUUID(),
+      type,
+      deviceTime: new Date(start + i).toISOString(),
+      payload,
+    });
     expect(parsed.success, `${type}: ${JSON.stringify(parsed.error?.issues)}`).toBe(true);
     if (!parsed.success) return;
     const event = { ...parsed.data, id: randomUUID(), deviceTime: new Date(parsed.data.deviceTime) };

@@ -1,5 +1,13 @@
 import { describe, expect, it } from 'vitest';
-import { ALLOWED_SUMMARY, MAX_BYTES, allowedType, formatBytes, objectKey, thumbnailKey, uploadRefusal } from '@/lib/storage/limits';
+import {
+  ALLOWED_SUMMARY,
+  MAX_BYTES,
+  allowedType,
+  formatBytes,
+  objectKey,
+  thumbnailKey,
+  uploadRefusal,
+} from '@/lib/storage/limits';
 import { uploadRequestSchema } from '@/lib/validation/attachments';
 import { parseEnv, storageEnv } from '@/lib/env';
 
@@ -18,7 +26,14 @@ describe('upload limits', () => {
   });
 
   it('refuses any other type, naming what is taken', () => {
-    for (const type of ['image/gif', 'image/svg+xml', 'application/pdf', 'text/plain', 'application/x-msdownload', '']) {
+    for (const type of [
+      'image/gif',
+      'image/svg+xml',
+      'application/pdf',
+      'text/plain',
+      'application/x-msdownload',
+      '',
+    ]) {
       expect(uploadRefusal(type, 10)).toContain(ALLOWED_SUMMARY);
     }
     expect(ALLOWED_SUMMARY).toBe('JPEG, PNG or WebP images up to 15 MB, MP4, WebM or QuickTime videos up to 200 MB');
@@ -50,7 +65,13 @@ describe('storage keys', () => {
 });
 
 describe('uploadRequestSchema', () => {
-  const good = { installId: id, kind: 'inspection', fileName: '../../etc/passwd.png', contentType: 'Image/PNG', byteSize: 1000 };
+  const good = {
+    installId: id,
+    kind: 'inspection',
+    fileName: '../../etc/passwd.png',
+    contentType: 'Image/PNG',
+    byteSize: 1000,
+  };
 
   it('accepts a well-formed request (the name is only a label) and lower-cases the type', () => {
     const parsed = uploadRequestSchema.parse(good);
@@ -80,20 +101,38 @@ describe('storageEnv', () => {
 
   it('falls back to the local fake outside production', () => {
     expect(storageEnv(parseEnv(db))).toEqual({
-      endpoint: 'http://127.0.0.1:54393', region: 'us-east-1', bucket: 'setline-evidence', accessKeyId: 'S3RVER', secretAccessKey: 'S3RVER', forcePathStyle: true,
+      endpoint: 'http://127.0.0.1:54393',
+      region: 'us-east-1',
+      bucket: 'setline-evidence',
+      accessKeyId: 'S3RVER',
+      secretAccessKey: 'S3RVER',
+      forcePathStyle: true,
     });
   });
 
   it('requires the bucket, region and key pair in production, naming each missing one', () => {
     const production = parseEnv({ ...db, NODE_ENV: 'production', ...PRODUCTION_SECRETS, S3_BUCKET: 'evidence' });
-    expect(() => storageEnv(production)).toThrow(/S3_REGION: required in production[\s\S]*S3_ACCESS_KEY_ID[\s\S]*S3_SECRET_ACCESS_KEY/);
+    expect(() => storageEnv(production)).toThrow(
+      /S3_REGION: required in production[\s\S]*S3_ACCESS_KEY_ID[\s\S]*S3_SECRET_ACCESS_KEY/,
+    );
   });
 
   it('uses AWS itself (no endpoint, virtual-host addressing) when production names no endpoint', () => {
     const production = parseEnv({
-      ...db, NODE_ENV: 'production', ...PRODUCTION_SECRETS, S3_BUCKET: 'evidence', S3_REGION: 'eu-west-1', S3_ACCESS_KEY_ID: 'id', S3_SECRET_ACCESS_KEY: 'secret',
+      ...db,
+      NODE_ENV: 'production',
+      ...PRODUCTION_SECRETS,
+      S3_BUCKET: 'evidence',
+      S3_REGION: 'eu-west-1',
+      S3_ACCESS_KEY_ID: 'id',
+      S3_SECRET_ACCESS_KEY: 'secret',
     });
-    expect(storageEnv(production)).toMatchObject({ endpoint: undefined, region: 'eu-west-1', bucket: 'evidence', forcePathStyle: false });
+    expect(storageEnv(production)).toMatchObject({
+      endpoint: undefined,
+      region: 'eu-west-1',
+      bucket: 'evidence',
+      forcePathStyle: false,
+    });
   });
 
   it('refuses a malformed endpoint or path-style flag at start-up', () => {

@@ -42,7 +42,13 @@ describe('primitives', () => {
   });
 
   it('PageHeader: one h1, the back link and the actions', () => {
-    render(<PageHeader title="Packers" back={{ href: '/admin', label: 'Company' }} actions={<button type="button">Archive</button>} />);
+    render(
+      <PageHeader
+        title="Packers"
+        back={{ href: '/admin', label: 'Company' }}
+        actions={<button type="button">Archive</button>}
+      />,
+    );
     expect(screen.getByRole('heading', { level: 1 }).textContent).toBe('Packers');
     expect(screen.getByRole('link', { name: '← Company' }).getAttribute('href')).toBe('/admin');
     expect(screen.getByRole('button', { name: 'Archive' })).toBeTruthy();

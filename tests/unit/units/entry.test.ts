@@ -49,22 +49,54 @@ describe('nominal sizes in the form', () => {
 });
 
 describe('segment form schema', () => {
-  const ids = { siteId: '6d1c9a8e-3f2b-4c5d-9e7f-0a1b2c3d4e5f', fromAccessPointId: '7e2d0b9f-4a3c-4d6e-8f0a-1b2c3d4e5f60', toAccessPointId: '' };
+  const ids = {
+    siteId: '6d1c9a8e-3f2b-4c5d-9e7f-0a1b2c3d4e5f',
+    fromAccessPointId: '7e2d0b9f-4a3c-4d6e-8f0a-1b2c3d4e5f60',
+    toAccessPointId: '',
+  };
   it('converts an imperial entry to the SI body the API takes', () => {
     const result = segmentFormSchema('imperial').safeParse({
-      ...ids, label: 'MH-1 → MH-2', material: 'vitrified_clay', nominalSizeMm: '8', insideDiameterMm: 7.9, lengthMm: 164, depthMm: NaN,
+      ...ids,
+      label: 'MH-1 → MH-2',
+      material: 'vitrified_clay',
+      nominalSizeMm: '8',
+      insideDiameterMm: 7.9,
+      lengthMm: 164,
+      depthMm: NaN,
     });
     expect(result.success).toBe(true);
-    expect(result.data).toMatchObject({ toAccessPointId: null, nominalSizeMm: 203, insideDiameterMm: 200.7, lengthMm: 49987, depthMm: null });
+    expect(result.data).toMatchObject({
+      toAccessPointId: null,
+      nominalSizeMm: 203,
+      insideDiameterMm: 200.7,
+      lengthMm: 49987,
+      depthMm: null,
+    });
   });
 
   it('reports blank or implausible sizes on the field the user typed them in', () => {
-    const result = segmentFormSchema('metric').safeParse({ ...ids, label: 'A', material: 'pvc', nominalSizeMm: 150, insideDiameterMm: 6, lengthMm: '', depthMm: '' });
+    const result = segmentFormSchema('metric').safeParse({
+      ...ids,
+      label: 'A',
+      material: 'pvc',
+      nominalSizeMm: 150,
+      insideDiameterMm: 6,
+      lengthMm: '',
+      depthMm: '',
+    });
     expect(result.success).toBe(false);
     const paths = result.error!.issues.map((issue) => issue.path.join('.'));
     expect(paths).toEqual(expect.arrayContaining(['lengthMm']));
     // The ID check needs every number: with the length blank the pipe stops before it.
-    const odd = segmentFormSchema('metric').safeParse({ ...ids, label: 'A', material: 'pvc', nominalSizeMm: 150, insideDiameterMm: 6, lengthMm: 10, depthMm: '' });
+    const odd = segmentFormSchema('metric').safeParse({
+      ...ids,
+      label: 'A',
+      material: 'pvc',
+      nominalSizeMm: 150,
+      insideDiameterMm: 6,
+      lengthMm: 10,
+      depthMm: '',
+    });
     expect(odd.error!.issues.map((issue) => issue.path.join('.'))).toEqual(['insideDiameterMm']);
   });
 });

@@ -1,11 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import {
-  convertForce,
-  convertLength,
-  convertPressure,
-  convertTemperature,
-  convertVolume,
-} from '@/lib/units';
+import { convertForce, convertLength, convertPressure, convertTemperature, convertVolume } from '@/lib/units';
 
 // Check values from NIST Special Publication 811 (2008), Appendix B.
 describe('conversion factors (NIST SP 811)', () => {

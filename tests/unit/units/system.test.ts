@@ -40,18 +40,37 @@ describe('unit system helpers', () => {
   });
 
   it('labels each system', () => {
-    expect(unitLabels('metric')).toEqual({ shortLength: 'mm', longLength: 'm', pressure: 'kPa', temperature: '°C', volume: 'L', force: 'kN' });
-    expect(unitLabels('imperial')).toEqual({ shortLength: 'in', longLength: 'ft', pressure: 'psi', temperature: '°F', volume: 'US gal', force: 'lbf' });
+    expect(unitLabels('metric')).toEqual({
+      shortLength: 'mm',
+      longLength: 'm',
+      pressure: 'kPa',
+      temperature: '°C',
+      volume: 'L',
+      force: 'kN',
+    });
+    expect(unitLabels('imperial')).toEqual({
+      shortLength: 'in',
+      longLength: 'ft',
+      pressure: 'psi',
+      temperature: '°F',
+      volume: 'US gal',
+      force: 'lbf',
+    });
     expect(() => unitLabels('nautical' as never)).toThrow(UnitInputError);
   });
 
   it('round-trips every quantity through SI', () => {
     fc.assert(
-      fc.property(finite, fc.constantFrom(...systems), fc.constantFrom('short' as const, 'long' as const), (v, system, kind) => {
-        near(lengthFromSi(lengthToSi(v, system, kind), system, kind), v);
-        near(pressureFromSi(pressureToSi(v, system), system), v);
-        near(volumeFromSi(volumeToSi(v, system), system), v);
-      }),
+      fc.property(
+        finite,
+        fc.constantFrom(...systems),
+        fc.constantFrom('short' as const, 'long' as const),
+        (v, system, kind) => {
+          near(lengthFromSi(lengthToSi(v, system, kind), system, kind), v);
+          near(pressureFromSi(pressureToSi(v, system), system), v);
+          near(volumeFromSi(volumeToSi(v, system), system), v);
+        },
+      ),
     );
     fc.assert(
       fc.property(fc.double({ min: -200, max: 1000, noNaN: true }), fc.constantFrom(...systems), (c, system) => {

@@ -1,5 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { temperatureDifferenceFromSi, temperatureDifferenceToSi, temperatureFromSi, temperatureToSi, UnitInputError } from '@/lib/units';
+import {
+  temperatureDifferenceFromSi,
+  temperatureDifferenceToSi,
+  temperatureFromSi,
+  temperatureToSi,
+  UnitInputError,
+} from '@/lib/units';
 
 // NIST SP 811 §4.2.1.1 / App. B.9: t/°F = 1.8·t/°C + 32 for a temperature; an interval of 1 °C = 1.8 °F (no offset).
 describe('temperature differences', () => {
@@ -21,7 +27,10 @@ describe('temperature differences', () => {
 
   it('equal the difference of two converted temperatures', () => {
     const [a, b] = [41, 95]; // °F
-    expect(temperatureDifferenceToSi(b - a, 'imperial')).toBeCloseTo(temperatureToSi(b, 'imperial') - temperatureToSi(a, 'imperial'), 12);
+    expect(temperatureDifferenceToSi(b - a, 'imperial')).toBeCloseTo(
+      temperatureToSi(b, 'imperial') - temperatureToSi(a, 'imperial'),
+      12,
+    );
   });
 
   it('refuse a value that is not a number', () => {

@@ -8,7 +8,11 @@ import { FormField, errorProps } from '@/components/desk/form-field';
 import { Input } from '@/components/ui/input';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
-import { checklistTemplateInputSchema, type ChecklistTemplateFormValues, type ChecklistTemplateInput } from '@/lib/validation/checklist-templates';
+import {
+  checklistTemplateInputSchema,
+  type ChecklistTemplateFormValues,
+  type ChecklistTemplateInput,
+} from '@/lib/validation/checklist-templates';
 import { cardClass } from '@/components/ui/card';
 import { cn } from '@/lib/ui/cn';
 
@@ -19,7 +23,14 @@ import { cn } from '@/lib/ui/cn';
 export function ChecklistForm({ id, initial }: { id?: string; initial?: ChecklistTemplateFormValues }) {
   const router = useRouter();
   const [message, setMessage] = useState<string>();
-  const { register, control, handleSubmit, setError, setFocus, formState: { errors, isSubmitting } } = useForm<ChecklistTemplateFormValues, unknown, ChecklistTemplateInput>({
+  const {
+    register,
+    control,
+    handleSubmit,
+    setError,
+    setFocus,
+    formState: { errors, isSubmitting },
+  } = useForm<ChecklistTemplateFormValues, unknown, ChecklistTemplateInput>({
     resolver: zodResolver(checklistTemplateInputSchema),
     defaultValues: initial ?? { name: '', active: true, items: [{ label: '', required: true }] },
   });
@@ -53,37 +64,98 @@ export function ChecklistForm({ id, initial }: { id?: string; initial?: Checklis
       </div>
       <fieldset>
         <legend className="mb-2 text-sm font-semibold">Items, in the order the crew sees them</legend>
-        {errors.items?.message && <p role="alert" className="text-xs font-medium text-missed-700">{errors.items.message}</p>}
+        {errors.items?.message && (
+          <p role="alert" className="text-xs font-medium text-missed-700">
+            {errors.items.message}
+          </p>
+        )}
         <ol className="space-y-2">
           {fields.map((field, index) => {
             const error = errors.items?.[index]?.label?.message ?? errors.items?.[index]?.id?.message;
             const name = `items.${index}.label` as const;
             return (
               <li key={field.key} className="flex flex-wrap items-start gap-2 rounded-md bg-slate-50 p-2">
-                <span className="w-6 pt-2 text-right text-sm text-slate-500" aria-hidden="true">{index + 1}.</span>
+                <span className="w-6 pt-2 text-right text-sm text-slate-500" aria-hidden="true">
+                  {index + 1}.
+                </span>
                 <div className="min-w-64 flex-1">
-                  <Input aria-label={`Item ${index + 1}`} {...register(name)} {...errorProps(`item-${index}`, error)} className="w-full" />
-                  {error && <p id={`item-${index}-error`} role="alert" className="text-xs font-medium text-missed-700">{error}</p>}
+                  <Input
+                    aria-label={`Item ${index + 1}`}
+                    {...register(name)}
+                    {...errorProps(`item-${index}`, error)}
+                    className="w-full"
+                  />
+                  {error && (
+                    <p id={`item-${index}-error`} role="alert" className="text-xs font-medium text-missed-700">
+                      {error}
+                    </p>
+                  )}
                 </div>
                 <label className="flex items-center gap-1 pt-2 text-sm">
-                  <input type="checkbox" {...register(`items.${index}.required`)} className="h-4 w-4" aria-label={`Item ${index + 1} required`} /> Required
+                  <input
+                    type="checkbox"
+                    {...register(`items.${index}.required`)}
+                    className="h-4 w-4"
+                    aria-label={`Item ${index + 1} required`}
+                  />{' '}
+                  Required
                 </label>
-                <Button type="button" variant="ghost" aria-label={`Move item ${index + 1} up`} disabled={index === 0} onClick={() => shift(index, index - 1)}>↑</Button>
-                <Button type="button" variant="ghost" aria-label={`Move item ${index + 1} down`} disabled={index === fields.length - 1} onClick={() => shift(index, index + 1)}>↓</Button>
-                <Button type="button" variant="ghost" aria-label={`Remove item ${index + 1}`} onClick={() => remove(index)}>Remove</Button>
+                <Button
+                  type="button"
+                  variant="ghost"
+                  aria-label={`Move item ${index + 1} up`}
+                  disabled={index === 0}
+                  onClick={() => shift(index, index - 1)}
+                >
+                  ↑
+                </Button>
+                <Button
+                  type="button"
+                  variant="ghost"
+                  aria-label={`Move item ${index + 1} down`}
+                  disabled={index === fields.length - 1}
+                  onClick={() => shift(index, index + 1)}
+                >
+                  ↓
+                </Button>
+                <Button
+                  type="button"
+                  variant="ghost"
+                  aria-label={`Remove item ${index + 1}`}
+                  onClick={() => remove(index)}
+                >
+                  Remove
+                </Button>
               </li>
             );
           })}
         </ol>
-        <Button type="button" variant="secondary" className="mt-2" onClick={() => { append({ label: '', required: true }); setTimeout(() => setFocus(`items.${fields.length}.label`), 0); }}>
+        <Button
+          type="button"
+          variant="secondary"
+          className="mt-2"
+          onClick={() => {
+            append({ label: '', required: true });
+            setTimeout(() => setFocus(`items.${fields.length}.label`), 0);
+          }}
+        >
           Add item
         </Button>
       </fieldset>
-      <p className="text-xs text-slate-600">Checks support, never replace, the confined-space, traffic and chemical procedures your local codes and licensed practice require.</p>
-      <p role="status" aria-live="polite" className="text-sm text-slate-700">{message}</p>
+      <p className="text-xs text-slate-600">
+        Checks support, never replace, the confined-space, traffic and chemical procedures your local codes and licensed
+        practice require.
+      </p>
+      <p role="status" aria-live="polite" className="text-sm text-slate-700">
+        {message}
+      </p>
       <div className="flex gap-2">
-        <Button type="submit" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : id ? 'Save check-list' : 'Create check-list'}</Button>
-        <Button type="button" variant="secondary" onClick={() => router.back()}>Cancel</Button>
+        <Button type="submit" disabled={isSubmitting}>
+          {isSubmitting ? 'Saving…' : id ? 'Save check-list' : 'Create check-list'}
+        </Button>
+        <Button type="button" variant="secondary" onClick={() => router.back()}>
+          Cancel
+        </Button>
       </div>
     </form>
   );

@@ -19,15 +19,37 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
   const list = await listChecklistTemplates(user, { ...query, pageSize: 100 });
   return (
     <div className="space-y-4">
-      <PageHeader back={{ href: '/admin', label: 'Company' }} title="Check-list templates" description="A new install takes the most recently saved active template." />
-      <ListToolbar search={query.q} placeholder="Name" exportHref={exportHrefOf('/api/checklist-templates', raw)} newHref="/admin/checklists/new" newLabel="New check-list">
-        <FilterSelect name="archived" label="Inactive" value={query.archived === 'false' ? '' : query.archived} options={[{ value: 'true', label: 'Include inactive' }, { value: 'only', label: 'Only inactive' }]} />
+      <PageHeader
+        back={{ href: '/admin', label: 'Company' }}
+        title="Check-list templates"
+        description="A new install takes the most recently saved active template."
+      />
+      <ListToolbar
+        search={query.q}
+        placeholder="Name"
+        exportHref={exportHrefOf('/api/checklist-templates', raw)}
+        newHref="/admin/checklists/new"
+        newLabel="New check-list"
+      >
+        <FilterSelect
+          name="archived"
+          label="Inactive"
+          value={query.archived === 'false' ? '' : query.archived}
+          options={[
+            { value: 'true', label: 'Include inactive' },
+            { value: 'only', label: 'Only inactive' },
+          ]}
+        />
       </ListToolbar>
       <ul className="divide-y divide-slate-100 rounded-lg bg-white text-sm ring-1 ring-slate-200">
         {list.items.map((t) => (
           <li key={t.id} className="flex justify-between px-3 py-2">
-            <Link href={`/admin/checklists/${t.id}`} className="font-semibold text-brand-700 hover:underline">{t.name}</Link>
-            <span className="text-slate-600">{t.items.length} item(s) {!t.active && <Badge>inactive</Badge>}</span>
+            <Link href={`/admin/checklists/${t.id}`} className="font-semibold text-brand-700 hover:underline">
+              {t.name}
+            </Link>
+            <span className="text-slate-600">
+              {t.items.length} item(s) {!t.active && <Badge>inactive</Badge>}
+            </span>
           </li>
         ))}
         {list.items.length === 0 && <li className="px-3 py-6 text-center text-slate-500">Nothing matches.</li>}

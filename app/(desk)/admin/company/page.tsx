@@ -14,7 +14,11 @@ export default async function Page() {
   const company = await getCompany(user);
   return (
     <div className="space-y-6">
-      <PageHeader back={{ href: '/admin', label: 'Company settings' }} title="Company" description="Name, time zone, units and the planning margins every job uses." />
+      <PageHeader
+        back={{ href: '/admin', label: 'Company settings' }}
+        title="Company"
+        description="Name, time zone, units and the planning margins every job uses."
+      />
       <CompanyForm initial={companyToForm(company)} timeZones={knownTimeZones()} />
       <AuditHistory user={user} entityType="company" entityId={company.id} timeZone={company.timeZone} />
     </div>

@@ -16,7 +16,12 @@ import { cardClass } from '@/components/ui/card';
 export function CrewForm({ crew }: { crew?: CrewInput & { id: string } }) {
   const router = useRouter();
   const [message, setMessage] = useState<{ ok: boolean; text: string }>();
-  const { register, handleSubmit, setError, formState: { errors, isSubmitting } } = useForm<CrewInput>({
+  const {
+    register,
+    handleSubmit,
+    setError,
+    formState: { errors, isSubmitting },
+  } = useForm<CrewInput>({
     resolver: zodResolver(crewInputSchema),
     defaultValues: crew ? { name: crew.name, dailyCapacity: crew.dailyCapacity } : { name: '', dailyCapacity: 4 },
   });
@@ -34,12 +39,32 @@ export function CrewForm({ crew }: { crew?: CrewInput & { id: string } }) {
       <FormField id="name" label="Crew name" error={errors.name?.message}>
         <Input {...register('name')} {...errorProps('name', errors.name?.message)} />
       </FormField>
-      <FormField id="dailyCapacity" label="Jobs per day" error={errors.dailyCapacity?.message} hint="The schedule marks days booked beyond this.">
-        <Input type="number" min={1} step={1} {...register('dailyCapacity', { valueAsNumber: true })} {...errorProps('dailyCapacity', errors.dailyCapacity?.message)} />
+      <FormField
+        id="dailyCapacity"
+        label="Jobs per day"
+        error={errors.dailyCapacity?.message}
+        hint="The schedule marks days booked beyond this."
+      >
+        <Input
+          type="number"
+          min={1}
+          step={1}
+          {...register('dailyCapacity', { valueAsNumber: true })}
+          {...errorProps('dailyCapacity', errors.dailyCapacity?.message)}
+        />
       </FormField>
-      {message && <p role={message.ok ? 'status' : 'alert'} className={cn('text-sm font-medium md:col-span-2', message.ok ? 'text-safe-700' : 'text-missed-700')}>{message.text}</p>}
+      {message && (
+        <p
+          role={message.ok ? 'status' : 'alert'}
+          className={cn('text-sm font-medium md:col-span-2', message.ok ? 'text-safe-700' : 'text-missed-700')}
+        >
+          {message.text}
+        </p>
+      )}
       <div className="md:col-span-2">
-        <Button type="submit" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : crew ? 'Save changes' : 'Create crew'}</Button>
+        <Button type="submit" disabled={isSubmitting}>
+          {isSubmitting ? 'Saving…' : crew ? 'Save changes' : 'Create crew'}
+        </Button>
       </div>
     </form>
   );

@@ -24,5 +24,16 @@ const columns: ColumnDef<Row, unknown>[] = [
 ];
 
 export function CrewsTable({ list, sort, dir }: { list: CrewListResponse; sort: string; dir: 'asc' | 'desc' }) {
-  return <DataTable caption="Crews" columns={columns} data={list.items} page={list.page} pageCount={list.pageCount} total={list.total} sort={sort} dir={dir} />;
+  return (
+    <DataTable
+      caption="Crews"
+      columns={columns}
+      data={list.items}
+      page={list.page}
+      pageCount={list.pageCount}
+      total={list.total}
+      sort={sort}
+      dir={dir}
+    />
+  );
 }

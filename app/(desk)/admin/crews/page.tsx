@@ -19,8 +19,22 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
   return (
     <div className="space-y-4">
       <PageHeader back={{ href: '/admin', label: 'Company settings' }} title="Crews" />
-      <ListToolbar search={query.q} placeholder="Crew name" exportHref={exportHrefOf('/api/crews', raw)} newHref="/admin/crews/new" newLabel="New crew">
-        <FilterSelect name="archived" label="Archived" value={query.archived === 'false' ? '' : query.archived} options={[{ value: 'true', label: 'Include archived' }, { value: 'only', label: 'Only archived' }]} />
+      <ListToolbar
+        search={query.q}
+        placeholder="Crew name"
+        exportHref={exportHrefOf('/api/crews', raw)}
+        newHref="/admin/crews/new"
+        newLabel="New crew"
+      >
+        <FilterSelect
+          name="archived"
+          label="Archived"
+          value={query.archived === 'false' ? '' : query.archived}
+          options={[
+            { value: 'true', label: 'Include archived' },
+            { value: 'only', label: 'Only archived' },
+          ]}
+        />
       </ListToolbar>
       <CrewsTable list={list} sort={query.sort} dir={query.dir} />
     </div>

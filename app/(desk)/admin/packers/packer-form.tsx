@@ -14,28 +14,60 @@ import { cardClass } from '@/components/ui/card';
 import { cn } from '@/lib/ui/cn';
 
 const BLANK: PackerFormValues = {
-  name: '', serial: '', minDiameterMm: Number.NaN, maxDiameterMm: Number.NaN, bladderLengthMm: Number.NaN, endMarginMm: Number.NaN,
-  minPressureKpa: Number.NaN, maxPressureKpa: Number.NaN,
+  name: '',
+  serial: '',
+  minDiameterMm: Number.NaN,
+  maxDiameterMm: Number.NaN,
+  bladderLengthMm: Number.NaN,
+  endMarginMm: Number.NaN,
+  minPressureKpa: Number.NaN,
+  maxPressureKpa: Number.NaN,
 };
 
 /** New or edit: lengths in inches or mm, pressures in psi or kPa, as the company works; stored in mm and kPa. */
-export function PackerForm({ id, initial, unitSystem }: { id?: string; initial?: PackerFormValues; unitSystem: UnitSystem }) {
+export function PackerForm({
+  id,
+  initial,
+  unitSystem,
+}: {
+  id?: string;
+  initial?: PackerFormValues;
+  unitSystem: UnitSystem;
+}) {
   const router = useRouter();
   const [message, setMessage] = useState<string>();
   const { shortLength: len, pressure } = unitLabels(unitSystem);
-  const { register, handleSubmit, setError, formState: { errors, isSubmitting, dirtyFields } } = useForm<PackerFormValues, unknown, PackerInput>({
+  const {
+    register,
+    handleSubmit,
+    setError,
+    formState: { errors, isSubmitting, dirtyFields },
+  } = useForm<PackerFormValues, unknown, PackerInput>({
     resolver: zodResolver(packerFormSchema(unitSystem)),
     defaultValues: initial ?? BLANK,
   });
   const onSubmit = handleSubmit(async (values) => {
-    const saved = await saveSettings({ collection: '/api/packers', id, values, dirty: dirtyFields, setError, setMessage });
+    const saved = await saveSettings({
+      collection: '/api/packers',
+      id,
+      values,
+      dirty: dirtyFields,
+      setError,
+      setMessage,
+    });
     if (!saved) return;
     router.push(id ? `/admin/packers/${saved}` : '/admin/packers');
     router.refresh();
   });
   const num = (name: keyof PackerFormValues, text: string, hint?: string) => (
     <FormField id={name} label={text} error={errors[name]?.message} hint={hint}>
-      <Input type="number" step="any" inputMode="decimal" {...register(name, { valueAsNumber: true })} {...errorProps(name, errors[name]?.message)} />
+      <Input
+        type="number"
+        step="any"
+        inputMode="decimal"
+        {...register(name, { valueAsNumber: true })}
+        {...errorProps(name, errors[name]?.message)}
+      />
     </FormField>
   );
   return (
@@ -52,11 +84,22 @@ export function PackerForm({ id, initial, unitSystem }: { id?: string; initial?:
       {num('endMarginMm', `Bare bladder at each end of the patch (${len})`)}
       {num('minPressureKpa', `Lowest inflation pressure (${pressure})`)}
       {num('maxPressureKpa', `Highest inflation pressure (${pressure})`)}
-      <p className="text-xs text-slate-600 md:col-span-2">Enter the maker’s rating. A pressurised bladder can burst or move suddenly: never exceed its rating, and follow the maker’s instructions and local codes.</p>
-      {message && <p role="alert" className="text-sm font-medium text-missed-700 md:col-span-2">{message}</p>}
+      <p className="text-xs text-slate-600 md:col-span-2">
+        Enter the maker’s rating. A pressurised bladder can burst or move suddenly: never exceed its rating, and follow
+        the maker’s instructions and local codes.
+      </p>
+      {message && (
+        <p role="alert" className="text-sm font-medium text-missed-700 md:col-span-2">
+          {message}
+        </p>
+      )}
       <div className="flex gap-2 md:col-span-2">
-        <Button type="submit" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : id ? 'Save changes' : 'Add packer'}</Button>
-        <Button type="button" variant="secondary" onClick={() => router.back()}>Cancel</Button>
+        <Button type="submit" disabled={isSubmitting}>
+          {isSubmitting ? 'Saving…' : id ? 'Save changes' : 'Add packer'}
+        </Button>
+        <Button type="button" variant="secondary" onClick={() => router.back()}>
+          Cancel
+        </Button>
       </div>
     </form>
   );

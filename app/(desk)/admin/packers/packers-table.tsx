@@ -10,7 +10,9 @@ type Row = PackerListResponse['items'][number];
 
 const columnsFor = (units: UnitSystem): ColumnDef<Row, unknown>[] => [
   {
-    id: 'name', header: 'Packer', enableSorting: true,
+    id: 'name',
+    header: 'Packer',
+    enableSorting: true,
     cell: ({ row }) => (
       <Link href={`/admin/packers/${row.original.id}`} className="font-semibold text-brand-700 hover:underline">
         {row.original.name}
@@ -19,12 +21,54 @@ const columnsFor = (units: UnitSystem): ColumnDef<Row, unknown>[] => [
     ),
   },
   { id: 'serial', header: 'Serial', cell: ({ row }) => row.original.serial ?? '—' },
-  { id: 'minDiameterMm', header: 'From pipe', enableSorting: true, cell: ({ row }) => formatLength(row.original.minDiameterMm, units) },
-  { id: 'maxDiameterMm', header: 'To pipe', enableSorting: true, cell: ({ row }) => formatLength(row.original.maxDiameterMm, units) },
-  { id: 'bladderLengthMm', header: 'Bladder', enableSorting: true, cell: ({ row }) => `${formatLength(row.original.bladderLengthMm, units)} (ends ${formatLength(row.original.endMarginMm, units)})` },
-  { id: 'pressure', header: 'Pressure', cell: ({ row }) => `${formatPressure(row.original.minPressureKpa, units)} – ${formatPressure(row.original.maxPressureKpa, units)}` },
+  {
+    id: 'minDiameterMm',
+    header: 'From pipe',
+    enableSorting: true,
+    cell: ({ row }) => formatLength(row.original.minDiameterMm, units),
+  },
+  {
+    id: 'maxDiameterMm',
+    header: 'To pipe',
+    enableSorting: true,
+    cell: ({ row }) => formatLength(row.original.maxDiameterMm, units),
+  },
+  {
+    id: 'bladderLengthMm',
+    header: 'Bladder',
+    enableSorting: true,
+    cell: ({ row }) =>
+      `${formatLength(row.original.bladderLengthMm, units)} (ends ${formatLength(row.original.endMarginMm, units)})`,
+  },
+  {
+    id: 'pressure',
+    header: 'Pressure',
+    cell: ({ row }) =>
+      `${formatPressure(row.original.minPressureKpa, units)} – ${formatPressure(row.original.maxPressureKpa, units)}`,
+  },
 ];
 
-export function PackersTable({ list, sort, dir, units }: { list: PackerListResponse; sort: string; dir: 'asc' | 'desc'; units: UnitSystem }) {
-  return <DataTable caption="Packers" columns={columnsFor(units)} data={list.items} page={list.page} pageCount={list.pageCount} total={list.total} sort={sort} dir={dir} />;
+export function PackersTable({
+  list,
+  sort,
+  dir,
+  units,
+}: {
+  list: PackerListResponse;
+  sort: string;
+  dir: 'asc' | 'desc';
+  units: UnitSystem;
+}) {
+  return (
+    <DataTable
+      caption="Packers"
+      columns={columnsFor(units)}
+      data={list.items}
+      page={list.page}
+      pageCount={list.pageCount}
+      total={list.total}
+      sort={sort}
+      dir={dir}
+    />
+  );
 }

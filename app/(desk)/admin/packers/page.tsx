@@ -20,8 +20,22 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
   return (
     <div className="space-y-4">
       <PageHeader back={{ href: '/admin', label: 'Company' }} title="Packers" />
-      <ListToolbar search={query.q} placeholder="Name or serial" exportHref={exportHrefOf('/api/packers', raw)} newHref="/admin/packers/new" newLabel="New packer">
-        <FilterSelect name="archived" label="Archived" value={query.archived === 'false' ? '' : query.archived} options={[{ value: 'true', label: 'Include archived' }, { value: 'only', label: 'Only archived' }]} />
+      <ListToolbar
+        search={query.q}
+        placeholder="Name or serial"
+        exportHref={exportHrefOf('/api/packers', raw)}
+        newHref="/admin/packers/new"
+        newLabel="New packer"
+      >
+        <FilterSelect
+          name="archived"
+          label="Archived"
+          value={query.archived === 'false' ? '' : query.archived}
+          options={[
+            { value: 'true', label: 'Include archived' },
+            { value: 'only', label: 'Only archived' },
+          ]}
+        />
       </ListToolbar>
       <PackersTable list={list} sort={query.sort} dir={query.dir} units={company.unitSystem} />
     </div>

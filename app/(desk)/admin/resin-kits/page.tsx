@@ -26,10 +26,37 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
   return (
     <div className="space-y-4">
       <PageHeader back={{ href: '/admin', label: 'Company' }} title="Resin kits" />
-      <ListToolbar search={query.q} placeholder="Lot or notes" exportHref={exportHrefOf('/api/resin-kits', raw)} newHref="/admin/resin-kits/new" newLabel="New kit">
-        <FilterSelect name="resinSystemId" label="Resin system" value={query.resinSystemId} options={systems.items.map((s) => ({ value: s.id, label: s.name }))} />
-        <FilterSelect name="expired" label="Expiry" value={query.expired} options={[{ value: 'false', label: 'Usable' }, { value: 'true', label: 'Expired' }]} />
-        <FilterSelect name="archived" label="Archived" value={query.archived === 'false' ? '' : query.archived} options={[{ value: 'true', label: 'Include archived' }, { value: 'only', label: 'Only archived' }]} />
+      <ListToolbar
+        search={query.q}
+        placeholder="Lot or notes"
+        exportHref={exportHrefOf('/api/resin-kits', raw)}
+        newHref="/admin/resin-kits/new"
+        newLabel="New kit"
+      >
+        <FilterSelect
+          name="resinSystemId"
+          label="Resin system"
+          value={query.resinSystemId}
+          options={systems.items.map((s) => ({ value: s.id, label: s.name }))}
+        />
+        <FilterSelect
+          name="expired"
+          label="Expiry"
+          value={query.expired}
+          options={[
+            { value: 'false', label: 'Usable' },
+            { value: 'true', label: 'Expired' },
+          ]}
+        />
+        <FilterSelect
+          name="archived"
+          label="Archived"
+          value={query.archived === 'false' ? '' : query.archived}
+          options={[
+            { value: 'true', label: 'Include archived' },
+            { value: 'only', label: 'Only archived' },
+          ]}
+        />
       </ListToolbar>
       <ResinKitsTable list={list} sort={query.sort} dir={query.dir} units={company.unitSystem} />
     </div>

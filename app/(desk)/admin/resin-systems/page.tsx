@@ -20,9 +20,28 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
   return (
     <div className="space-y-4">
       <PageHeader back={{ href: '/admin', label: 'Company' }} title="Resin systems" />
-      <ListToolbar search={query.q} placeholder="Name" exportHref={exportHrefOf('/api/resin-systems', raw)} newHref="/admin/resin-systems/new" newLabel="New resin system">
-        <FilterSelect name="chemistry" label="Chemistry" value={query.chemistry} options={RESIN_CHEMISTRIES.map((c) => ({ value: c, label: label(c) }))} />
-        <FilterSelect name="archived" label="Archived" value={query.archived === 'false' ? '' : query.archived} options={[{ value: 'true', label: 'Include archived' }, { value: 'only', label: 'Only archived' }]} />
+      <ListToolbar
+        search={query.q}
+        placeholder="Name"
+        exportHref={exportHrefOf('/api/resin-systems', raw)}
+        newHref="/admin/resin-systems/new"
+        newLabel="New resin system"
+      >
+        <FilterSelect
+          name="chemistry"
+          label="Chemistry"
+          value={query.chemistry}
+          options={RESIN_CHEMISTRIES.map((c) => ({ value: c, label: label(c) }))}
+        />
+        <FilterSelect
+          name="archived"
+          label="Archived"
+          value={query.archived === 'false' ? '' : query.archived}
+          options={[
+            { value: 'true', label: 'Include archived' },
+            { value: 'only', label: 'Only archived' },
+          ]}
+        />
       </ListToolbar>
       <ResinSystemsTable list={list} sort={query.sort} dir={query.dir} units={company.unitSystem} />
     </div>

@@ -19,10 +19,33 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
   const list = await listUsers(user, query);
   return (
     <div className="space-y-4">
-      <PageHeader back={{ href: '/admin', label: 'Company settings' }} title="Users" description="Deactivating someone, changing their role or resetting their password signs them out everywhere at once." />
-      <ListToolbar search={query.q} placeholder="Name or e-mail" exportHref={exportHrefOf('/api/users', raw)} newHref="/admin/users/new" newLabel="New user">
-        <FilterSelect name="role" label="Role" value={query.role} options={ROLES.map((role) => ({ value: role, label: label(role) }))} />
-        <FilterSelect name="active" label="Status" value={query.active} options={[{ value: 'true', label: 'Active' }, { value: 'false', label: 'Deactivated' }]} />
+      <PageHeader
+        back={{ href: '/admin', label: 'Company settings' }}
+        title="Users"
+        description="Deactivating someone, changing their role or resetting their password signs them out everywhere at once."
+      />
+      <ListToolbar
+        search={query.q}
+        placeholder="Name or e-mail"
+        exportHref={exportHrefOf('/api/users', raw)}
+        newHref="/admin/users/new"
+        newLabel="New user"
+      >
+        <FilterSelect
+          name="role"
+          label="Role"
+          value={query.role}
+          options={ROLES.map((role) => ({ value: role, label: label(role) }))}
+        />
+        <FilterSelect
+          name="active"
+          label="Status"
+          value={query.active}
+          options={[
+            { value: 'true', label: 'Active' },
+            { value: 'false', label: 'Deactivated' },
+          ]}
+        />
       </ListToolbar>
       <UsersTable list={list} sort={query.sort} dir={query.dir} selfId={user.id} />
     </div>

@@ -26,7 +26,10 @@ export function UserActions({ user, isSelf }: { user: Target; isSelf: boolean })
     const result = await submitJson(`/api/users/${user.id}`, 'PATCH', { active: !user.active });
     setBusy(false);
     if (!result.ok) return setMessage({ ok: false, text: result.error.message });
-    setMessage({ ok: true, text: user.active ? `${user.name} is deactivated and signed out.` : `${user.name} can sign in again.` });
+    setMessage({
+      ok: true,
+      text: user.active ? `${user.name} is deactivated and signed out.` : `${user.name} can sign in again.`,
+    });
     router.refresh();
   };
 
@@ -34,11 +37,23 @@ export function UserActions({ user, isSelf }: { user: Target; isSelf: boolean })
     <div className="flex flex-col gap-1">
       <div className="flex flex-wrap gap-2">
         {!isSelf && (
-          <Button type="button" variant="secondary" onClick={toggleActive} disabled={busy} aria-label={`${user.active ? 'Deactivate' : 'Reactivate'} ${user.name}`}>
+          <Button
+            type="button"
+            variant="secondary"
+            onClick={toggleActive}
+            disabled={busy}
+            aria-label={`${user.active ? 'Deactivate' : 'Reactivate'} ${user.name}`}
+          >
             {user.active ? 'Deactivate' : 'Reactivate'}
           </Button>
         )}
-        <Button type="button" variant="ghost" onClick={() => setResetting((open) => !open)} aria-expanded={resetting} aria-label={`Reset password ${user.name}`}>
+        <Button
+          type="button"
+          variant="ghost"
+          onClick={() => setResetting((open) => !open)}
+          aria-expanded={resetting}
+          aria-label={`Reset password ${user.name}`}
+        >
           Reset password
         </Button>
       </div>
@@ -51,14 +66,25 @@ export function UserActions({ user, isSelf }: { user: Target; isSelf: boolean })
           }}
         />
       )}
-      {message && <p role={message.ok ? 'status' : 'alert'} className={cn('text-xs font-medium', message.ok ? 'text-safe-700' : 'text-missed-700')}>{message.text}</p>}
+      {message && (
+        <p
+          role={message.ok ? 'status' : 'alert'}
+          className={cn('text-xs font-medium', message.ok ? 'text-safe-700' : 'text-missed-700')}
+        >
+          {message.text}
+        </p>
+      )}
     </div>
   );
 }
 
 function PasswordForm({ user, onDone }: { user: Target; onDone: (message: string) => void }) {
   const [failure, setFailure] = useState<string>();
-  const { register, handleSubmit, formState: { errors, isSubmitting } } = useForm<z.input<typeof passwordResetSchema>>({ resolver: zodResolver(passwordResetSchema) });
+  const {
+    register,
+    handleSubmit,
+    formState: { errors, isSubmitting },
+  } = useForm<z.input<typeof passwordResetSchema>>({ resolver: zodResolver(passwordResetSchema) });
   const id = `password-${user.id}`;
   const error = errors.password?.message ?? failure;
   const onSubmit = handleSubmit(async (values) => {
@@ -68,7 +94,9 @@ function PasswordForm({ user, onDone }: { user: Target; onDone: (message: string
   });
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-wrap items-start gap-2 text-sm">
-      <label htmlFor={id} className="sr-only">New password for {user.name}</label>
+      <label htmlFor={id} className="sr-only">
+        New password for {user.name}
+      </label>
       <Input
         id={id}
         type="password"
@@ -77,10 +105,15 @@ function PasswordForm({ user, onDone }: { user: Target; onDone: (message: string
         {...register('password')}
         aria-invalid={error ? true : undefined}
         aria-describedby={error ? `${id}-error` : undefined}
-       
       />
-      <Button type="submit" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : 'Save password'}</Button>
-      {error && <p id={`${id}-error`} role="alert" className="w-full text-xs font-medium text-missed-700">{error}</p>}
+      <Button type="submit" disabled={isSubmitting}>
+        {isSubmitting ? 'Saving…' : 'Save password'}
+      </Button>
+      {error && (
+        <p id={`${id}-error`} role="alert" className="w-full text-xs font-medium text-missed-700">
+          {error}
+        </p>
+      )}
     </form>
   );
 }

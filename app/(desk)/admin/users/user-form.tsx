@@ -23,7 +23,12 @@ type EditInput = z.input<typeof editSchema>;
 export function NewUserForm() {
   const router = useRouter();
   const [message, setMessage] = useState<string>();
-  const { register, handleSubmit, setError, formState: { errors, isSubmitting } } = useForm<NewInput>({
+  const {
+    register,
+    handleSubmit,
+    setError,
+    formState: { errors, isSubmitting },
+  } = useForm<NewInput>({
     resolver: zodResolver(userInputSchema),
     defaultValues: { name: '', email: '', role: 'technician', password: '' },
   });
@@ -42,30 +47,65 @@ export function NewUserForm() {
         <Input type="email" autoComplete="off" {...register('email')} {...errorProps('email', errors.email?.message)} />
       </FormField>
       <RoleSelect register={register('role')} error={errors.role?.message} />
-      <FormField id="password" label="Initial password" error={errors.password?.message} hint={`At least ${PASSWORD_MIN_LENGTH} characters; hand it over in person.`}>
-        <Input type="password" autoComplete="new-password" {...register('password')} {...errorProps('password', errors.password?.message)} />
+      <FormField
+        id="password"
+        label="Initial password"
+        error={errors.password?.message}
+        hint={`At least ${PASSWORD_MIN_LENGTH} characters; hand it over in person.`}
+      >
+        <Input
+          type="password"
+          autoComplete="new-password"
+          {...register('password')}
+          {...errorProps('password', errors.password?.message)}
+        />
       </FormField>
-      {message && <p role="alert" className="text-sm font-medium text-missed-700 md:col-span-2">{message}</p>}
+      {message && (
+        <p role="alert" className="text-sm font-medium text-missed-700 md:col-span-2">
+          {message}
+        </p>
+      )}
       <div className="flex gap-2 md:col-span-2">
-        <Button type="submit" disabled={isSubmitting}>{isSubmitting ? 'Creating…' : 'Create user'}</Button>
-        <Button type="button" variant="secondary" onClick={() => router.back()}>Cancel</Button>
+        <Button type="submit" disabled={isSubmitting}>
+          {isSubmitting ? 'Creating…' : 'Create user'}
+        </Button>
+        <Button type="button" variant="secondary" onClick={() => router.back()}>
+          Cancel
+        </Button>
       </div>
     </form>
   );
 }
 
 /** Rename or change the role (PATCH /api/users/:id); a role change signs the user out. */
-export function EditUserForm({ user, isSelf }: { user: { id: string; name: string; role: NewInput['role'] }; isSelf: boolean }) {
+export function EditUserForm({
+  user,
+  isSelf,
+}: {
+  user: { id: string; name: string; role: NewInput['role'] };
+  isSelf: boolean;
+}) {
   const router = useRouter();
   const [message, setMessage] = useState<{ ok: boolean; text: string }>();
-  const { register, handleSubmit, setError, formState: { errors, isSubmitting } } = useForm<EditInput>({
+  const {
+    register,
+    handleSubmit,
+    setError,
+    formState: { errors, isSubmitting },
+  } = useForm<EditInput>({
     resolver: zodResolver(editSchema),
     defaultValues: { name: user.name, role: user.role },
   });
   const onSubmit = handleSubmit(async (values) => {
     const result = await submitJson(`/api/users/${user.id}`, 'PATCH', values);
     if (!result.ok) return setMessage({ ok: false, text: applyServerErrors(result.error, setError) });
-    setMessage({ ok: true, text: values.role && values.role !== user.role ? 'Saved; the user was signed out and signs in again with the new role.' : 'Saved.' });
+    setMessage({
+      ok: true,
+      text:
+        values.role && values.role !== user.role
+          ? 'Saved; the user was signed out and signs in again with the new role.'
+          : 'Saved.',
+    });
     router.refresh();
   });
   return (
@@ -73,20 +113,48 @@ export function EditUserForm({ user, isSelf }: { user: { id: string; name: strin
       <FormField id="name" label="Name" error={errors.name?.message}>
         <Input {...register('name')} {...errorProps('name', errors.name?.message)} />
       </FormField>
-      <RoleSelect register={register('role')} error={errors.role?.message} disabled={isSelf} hint={isSelf ? 'You cannot change your own role.' : undefined} />
-      {message && <p role={message.ok ? 'status' : 'alert'} className={cn('text-sm font-medium md:col-span-2', message.ok ? 'text-safe-700' : 'text-missed-700')}>{message.text}</p>}
+      <RoleSelect
+        register={register('role')}
+        error={errors.role?.message}
+        disabled={isSelf}
+        hint={isSelf ? 'You cannot change your own role.' : undefined}
+      />
+      {message && (
+        <p
+          role={message.ok ? 'status' : 'alert'}
+          className={cn('text-sm font-medium md:col-span-2', message.ok ? 'text-safe-700' : 'text-missed-700')}
+        >
+          {message.text}
+        </p>
+      )}
       <div className="md:col-span-2">
-        <Button type="submit" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : 'Save changes'}</Button>
+        <Button type="submit" disabled={isSubmitting}>
+          {isSubmitting ? 'Saving…' : 'Save changes'}
+        </Button>
       </div>
     </form>
   );
 }
 
-function RoleSelect({ register, error, disabled, hint }: { register: ReturnType<ReturnType<typeof useForm<EditInput>>['register']>; error?: string; disabled?: boolean; hint?: string }) {
+function RoleSelect({
+  register,
+  error,
+  disabled,
+  hint,
+}: {
+  register: ReturnType<ReturnType<typeof useForm<EditInput>>['register']>;
+  error?: string;
+  disabled?: boolean;
+  hint?: string;
+}) {
   return (
     <FormField id="role" label="Role" error={error} hint={hint}>
       <Select {...register} {...errorProps('role', error)} disabled={disabled}>
-        {ROLES.map((role) => <option key={role} value={role}>{label(role)}</option>)}
+        {ROLES.map((role) => (
+          <option key={role} value={role}>
+            {label(role)}
+          </option>
+        ))}
       </Select>
     </FormField>
   );

@@ -10,7 +10,17 @@ import { UserActions } from './user-actions';
 
 type Row = UserListResponse['items'][number];
 
-export function UsersTable({ list, sort, dir, selfId }: { list: UserListResponse; sort: string; dir: 'asc' | 'desc'; selfId: string }) {
+export function UsersTable({
+  list,
+  sort,
+  dir,
+  selfId,
+}: {
+  list: UserListResponse;
+  sort: string;
+  dir: 'asc' | 'desc';
+  selfId: string;
+}) {
   const columns: ColumnDef<Row, unknown>[] = [
     {
       id: 'name',
@@ -25,8 +35,28 @@ export function UsersTable({ list, sort, dir, selfId }: { list: UserListResponse
     },
     { id: 'email', header: 'E-mail', enableSorting: true, cell: ({ row }) => row.original.email },
     { id: 'role', header: 'Role', enableSorting: true, cell: ({ row }) => label(row.original.role) },
-    { id: 'status', header: 'Status', cell: ({ row }) => (row.original.active ? <Badge tone="safe">Active</Badge> : <Badge tone="missed">Deactivated</Badge>) },
-    { id: 'actions', header: 'Actions', cell: ({ row }) => <UserActions user={row.original} isSelf={row.original.id === selfId} /> },
+    {
+      id: 'status',
+      header: 'Status',
+      cell: ({ row }) =>
+        row.original.active ? <Badge tone="safe">Active</Badge> : <Badge tone="missed">Deactivated</Badge>,
+    },
+    {
+      id: 'actions',
+      header: 'Actions',
+      cell: ({ row }) => <UserActions user={row.original} isSelf={row.original.id === selfId} />,
+    },
   ];
-  return <DataTable caption="Users" columns={columns} data={list.items} page={list.page} pageCount={list.pageCount} total={list.total} sort={sort} dir={dir} />;
+  return (
+    <DataTable
+      caption="Users"
+      columns={columns}
+      data={list.items}
+      page={list.page}
+      pageCount={list.pageCount}
+      total={list.total}
+      sort={sort}
+      dir={dir}
+    />
+  );
 }

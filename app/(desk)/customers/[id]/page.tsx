@@ -28,15 +28,42 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
       <PageHeader
         back={{ href: '/customers', label: 'Customers' }}
         title={customer.name}
-        description={<>{label(customer.kind)} · <span data-testid="customer-language">{tcu(`languages.${customer.language}`)}</span>{customer.archivedAt ? ' · archived' : ''}</>}
-        actions={!customer.archivedAt && <ArchiveButton url={`/api/customers/${customer.id}`} what="customer" backTo="/customers" />}
+        description={
+          <>
+            {label(customer.kind)} ·{' '}
+            <span data-testid="customer-language">{tcu(`languages.${customer.language}`)}</span>
+            {customer.archivedAt ? ' · archived' : ''}
+          </>
+        }
+        actions={
+          !customer.archivedAt && (
+            <ArchiveButton url={`/api/customers/${customer.id}`} what="customer" backTo="/customers" />
+          )
+        }
       />
       <dl className={cn(cardClass, 'grid grid-cols-2 gap-4 text-sm md:grid-cols-4')}>
-        <div><dt className="text-slate-500">Contact</dt><dd className="font-medium">{customer.contactName ?? '—'}</dd></div>
-        <div><dt className="text-slate-500">E-mail</dt><dd className="font-medium">{customer.email ?? '—'}</dd></div>
-        <div><dt className="text-slate-500">Phone</dt><dd className="font-medium">{customer.phone ?? '—'}</dd></div>
-        <div><dt className="text-slate-500">Billing address</dt><dd className="whitespace-pre-line font-medium">{customer.billingAddress ?? '—'}</dd></div>
-        {customer.notes && <div className="col-span-full"><dt className="text-slate-500">Notes</dt><dd className="whitespace-pre-line">{customer.notes}</dd></div>}
+        <div>
+          <dt className="text-slate-500">Contact</dt>
+          <dd className="font-medium">{customer.contactName ?? '—'}</dd>
+        </div>
+        <div>
+          <dt className="text-slate-500">E-mail</dt>
+          <dd className="font-medium">{customer.email ?? '—'}</dd>
+        </div>
+        <div>
+          <dt className="text-slate-500">Phone</dt>
+          <dd className="font-medium">{customer.phone ?? '—'}</dd>
+        </div>
+        <div>
+          <dt className="text-slate-500">Billing address</dt>
+          <dd className="whitespace-pre-line font-medium">{customer.billingAddress ?? '—'}</dd>
+        </div>
+        {customer.notes && (
+          <div className="col-span-full">
+            <dt className="text-slate-500">Notes</dt>
+            <dd className="whitespace-pre-line">{customer.notes}</dd>
+          </div>
+        )}
       </dl>
       <EditSection label="Edit customer">
         <IntlScope namespaces={['customers']}>
@@ -46,13 +73,20 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
       <section>
         <div className="mb-2 flex items-center justify-between">
           <h2 className="text-lg font-semibold">Sites</h2>
-          <Link href={`/sites/new?customerId=${customer.id}`} className={buttonVariants({ variant: 'secondary' })}>New site</Link>
+          <Link href={`/sites/new?customerId=${customer.id}`} className={buttonVariants({ variant: 'secondary' })}>
+            New site
+          </Link>
         </div>
         <ul className="divide-y divide-slate-100 rounded-lg bg-white text-sm ring-1 ring-slate-200">
           {customer.sites.map((site) => (
             <li key={site.id} className="px-3 py-2">
-              <Link href={`/sites/${site.id}`} className="font-medium text-brand-700 hover:underline">{site.name}</Link>
-              <span className="text-slate-600"> · {site.addressLine}, {site.city}</span>
+              <Link href={`/sites/${site.id}`} className="font-medium text-brand-700 hover:underline">
+                {site.name}
+              </Link>
+              <span className="text-slate-600">
+                {' '}
+                · {site.addressLine}, {site.city}
+              </span>
               {site.archivedAt && <span className="text-xs text-slate-500"> (archived)</span>}
             </li>
           ))}

@@ -13,13 +13,22 @@ export async function EditJob({ user, job }: { user: SessionUser; job: Awaited<R
   }
   const customer = options.customers.find((c) => c.id === job.customerId)!;
   if (!customer.sites.some((s) => s.id === job.siteId)) {
-    customer.sites.push({ id: job.site.id, name: job.site.name, addressLine: job.site.addressLine, city: job.site.city });
+    customer.sites.push({
+      id: job.site.id,
+      name: job.site.name,
+      addressLine: job.site.addressLine,
+      city: job.site.city,
+    });
   }
   return (
     <EditSection label="Edit job">
       <JobForm
         options={options}
-        job={{ ...job, siteLocked: job.status !== 'draft' || job.repairs.length > 0, scheduleLocked: !RESCHEDULABLE.includes(job.status) }}
+        job={{
+          ...job,
+          siteLocked: job.status !== 'draft' || job.repairs.length > 0,
+          scheduleLocked: !RESCHEDULABLE.includes(job.status),
+        }}
       />
     </EditSection>
   );

@@ -32,22 +32,51 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
       <PageHeader
         back={{ href: '/jobs', label: 'Jobs' }}
         title={`Job ${job.number}`}
-        badge={<>
-          <StatusBadge status={job.status} />
-          {job.archivedAt && <span className="text-sm font-normal text-slate-500">(archived)</span>}
-        </>}
+        badge={
+          <>
+            <StatusBadge status={job.status} />
+            {job.archivedAt && <span className="text-sm font-normal text-slate-500">(archived)</span>}
+          </>
+        }
         description={job.title}
-        actions={!job.archivedAt && <>
-          <JobStatusActions jobId={job.id} status={job.status} />
-          <ArchiveButton url={`/api/jobs/${job.id}`} what="job" backTo="/jobs" />
-        </>}
+        actions={
+          !job.archivedAt && (
+            <>
+              <JobStatusActions jobId={job.id} status={job.status} />
+              <ArchiveButton url={`/api/jobs/${job.id}`} what="job" backTo="/jobs" />
+            </>
+          )
+        }
       />
       <dl className={cn(cardClass, 'grid grid-cols-2 gap-4 text-sm md:grid-cols-4')}>
-        <div><dt className="text-slate-500">Customer</dt><dd className="font-medium"><Link href={`/customers/${job.customer.id}`} className="text-brand-700 hover:underline">{job.customer.name}</Link></dd></div>
-        <div><dt className="text-slate-500">Site</dt><dd className="font-medium">{site.addressLine}, {site.city}</dd></div>
-        <div><dt className="text-slate-500">Scheduled</dt><dd className="font-medium">{job.scheduledDate ?? 'Not yet'}</dd></div>
-        <div><dt className="text-slate-500">Crew</dt><dd className="font-medium">{job.crew?.name ?? 'None'}</dd></div>
-        {job.notes && <div className="col-span-full"><dt className="text-slate-500">Notes</dt><dd className="whitespace-pre-line">{job.notes}</dd></div>}
+        <div>
+          <dt className="text-slate-500">Customer</dt>
+          <dd className="font-medium">
+            <Link href={`/customers/${job.customer.id}`} className="text-brand-700 hover:underline">
+              {job.customer.name}
+            </Link>
+          </dd>
+        </div>
+        <div>
+          <dt className="text-slate-500">Site</dt>
+          <dd className="font-medium">
+            {site.addressLine}, {site.city}
+          </dd>
+        </div>
+        <div>
+          <dt className="text-slate-500">Scheduled</dt>
+          <dd className="font-medium">{job.scheduledDate ?? 'Not yet'}</dd>
+        </div>
+        <div>
+          <dt className="text-slate-500">Crew</dt>
+          <dd className="font-medium">{job.crew?.name ?? 'None'}</dd>
+        </div>
+        {job.notes && (
+          <div className="col-span-full">
+            <dt className="text-slate-500">Notes</dt>
+            <dd className="whitespace-pre-line">{job.notes}</dd>
+          </div>
+        )}
       </dl>
       {!job.archivedAt && <EditJob user={user} job={job} />}
       {job.reviewComment && (
@@ -55,33 +84,74 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
       )}
       <section aria-labelledby="repairs-heading">
         <div className="mb-2 flex items-center justify-between">
-          <h2 id="repairs-heading" className="text-lg font-semibold">Repairs</h2>
-          {open && <Link href={`/repairs/new?jobId=${job.id}`} className={buttonVariants({ variant: 'secondary' })}>Add repair</Link>}
+          <h2 id="repairs-heading" className="text-lg font-semibold">
+            Repairs
+          </h2>
+          {open && (
+            <Link href={`/repairs/new?jobId=${job.id}`} className={buttonVariants({ variant: 'secondary' })}>
+              Add repair
+            </Link>
+          )}
         </div>
         <table className="min-w-full rounded-lg bg-white text-sm ring-1 ring-slate-200">
           <caption className="sr-only">Repairs of job {job.number}</caption>
           <thead className="bg-slate-100 text-left text-xs uppercase text-slate-600">
             <tr>
-              <th scope="col" className="px-3 py-2">#</th><th scope="col" className="px-3 py-2">Segment</th><th scope="col" className="px-3 py-2">Distance</th>
-              <th scope="col" className="px-3 py-2">Defect</th><th scope="col" className="px-3 py-2">Grade</th><th scope="col" className="px-3 py-2">Clock</th>
-              <th scope="col" className="px-3 py-2">Patch</th><th scope="col" className="px-3 py-2">Status</th>
+              <th scope="col" className="px-3 py-2">
+                #
+              </th>
+              <th scope="col" className="px-3 py-2">
+                Segment
+              </th>
+              <th scope="col" className="px-3 py-2">
+                Distance
+              </th>
+              <th scope="col" className="px-3 py-2">
+                Defect
+              </th>
+              <th scope="col" className="px-3 py-2">
+                Grade
+              </th>
+              <th scope="col" className="px-3 py-2">
+                Clock
+              </th>
+              <th scope="col" className="px-3 py-2">
+                Patch
+              </th>
+              <th scope="col" className="px-3 py-2">
+                Status
+              </th>
             </tr>
           </thead>
           <tbody className="divide-y divide-slate-100">
             {job.repairs.map((repair) => (
               <tr key={repair.id}>
-                <td className="px-3 py-2"><Link href={`/repairs/${repair.id}`} className="font-semibold text-brand-700 hover:underline">Repair {repair.position}</Link></td>
-                <td className="px-3 py-2">{repair.segment?.label} · {formatLength(Number(repair.segment?.insideDiameterMm), unitSystem)} ID</td>
+                <td className="px-3 py-2">
+                  <Link href={`/repairs/${repair.id}`} className="font-semibold text-brand-700 hover:underline">
+                    Repair {repair.position}
+                  </Link>
+                </td>
+                <td className="px-3 py-2">
+                  {repair.segment?.label} · {formatLength(Number(repair.segment?.insideDiameterMm), unitSystem)} ID
+                </td>
                 <td className="px-3 py-2">{formatLength(repair.distanceMm, unitSystem, 'long')}</td>
-                <td className="px-3 py-2">{label(repair.defectType)} ({formatLength(repair.defectLengthMm, unitSystem)})</td>
+                <td className="px-3 py-2">
+                  {label(repair.defectType)} ({formatLength(repair.defectLengthMm, unitSystem)})
+                </td>
                 <td className="px-3 py-2">{repair.conditionGrade}</td>
                 <td className="px-3 py-2">{repair.clockPosition ?? '—'}</td>
-                <td className="px-3 py-2">{repair.plannedPatchLengthMm ? formatLength(repair.plannedPatchLengthMm, unitSystem) : '—'}</td>
+                <td className="px-3 py-2">
+                  {repair.plannedPatchLengthMm ? formatLength(repair.plannedPatchLengthMm, unitSystem) : '—'}
+                </td>
                 <td className="px-3 py-2">{label(repair.status)}</td>
               </tr>
             ))}
             {job.repairs.length === 0 && (
-              <tr><td colSpan={8} className="px-3 py-6 text-center text-slate-500">No repairs yet.</td></tr>
+              <tr>
+                <td colSpan={8} className="px-3 py-6 text-center text-slate-500">
+                  No repairs yet.
+                </td>
+              </tr>
             )}
           </tbody>
         </table>
@@ -90,7 +160,9 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
         <h2 className="mb-2 text-lg font-semibold">Access points</h2>
         <ul className="flex flex-wrap gap-2 text-sm">
           {(site.accessPoints ?? []).map((point) => (
-            <li key={point.id} className="rounded bg-white px-3 py-1 ring-1 ring-slate-200">{point.label} · {label(point.kind)}</li>
+            <li key={point.id} className="rounded bg-white px-3 py-1 ring-1 ring-slate-200">
+              {point.label} · {label(point.kind)}
+            </li>
           ))}
         </ul>
       </section>

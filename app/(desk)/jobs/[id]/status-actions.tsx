@@ -8,7 +8,11 @@ import { label, type JobStatus } from '@/lib/domain/vocabulary';
 import { OFFICE_TRANSITIONS } from '@/lib/jobs/status';
 
 // Scheduling is done by giving the job a crew and a day, not by a button here.
-const VERBS: Partial<Record<JobStatus, string>> = { cancelled: 'Cancel job', closed: 'Close job', draft: 'Back to draft' };
+const VERBS: Partial<Record<JobStatus, string>> = {
+  cancelled: 'Cancel job',
+  closed: 'Close job',
+  draft: 'Back to draft',
+};
 
 /** The office's status moves for this job (cancel, close, reopen), each confirmed and sent as a PATCH. */
 export function JobStatusActions({ jobId, status }: { jobId: string; status: JobStatus }) {
@@ -28,9 +32,15 @@ export function JobStatusActions({ jobId, status }: { jobId: string; status: Job
   return (
     <span className="inline-flex items-center gap-2">
       {moves.map((to) => (
-        <Button key={to} type="button" variant="secondary" disabled={busy} onClick={() => move(to)}>{VERBS[to]}</Button>
+        <Button key={to} type="button" variant="secondary" disabled={busy} onClick={() => move(to)}>
+          {VERBS[to]}
+        </Button>
       ))}
-      {message && <span role="alert" className="text-sm text-missed-700">{message}</span>}
+      {message && (
+        <span role="alert" className="text-sm text-missed-700">
+          {message}
+        </span>
+      )}
     </span>
   );
 }

@@ -5,7 +5,11 @@ import { lengthFromSi, type UnitSystem } from '@/lib/units';
 import { RepairForm } from '../repair-form';
 
 /** The repair's form on its page, in the company's units. */
-export async function EditRepair({ user, repair, unitSystem }: {
+export async function EditRepair({
+  user,
+  repair,
+  unitSystem,
+}: {
   user: SessionUser;
   repair: Awaited<ReturnType<typeof getRepair>>;
   unitSystem: UnitSystem;
@@ -23,9 +27,14 @@ export async function EditRepair({ user, repair, unitSystem }: {
         segments={segments}
         unitSystem={unitSystem}
         initial={{
-          segmentId: repair.segmentId, distance: shown(repair.distanceMm, 'long'), defectType: repair.defectType,
-          conditionGrade: repair.conditionGrade, defectLength: shown(repair.defectLengthMm, 'short'),
-          clockPosition: repair.clockPosition ?? '', notes: repair.notes ?? '', ownerDefectCode: repair.ownerDefectCode ?? '',
+          segmentId: repair.segmentId,
+          distance: shown(repair.distanceMm, 'long'),
+          defectType: repair.defectType,
+          conditionGrade: repair.conditionGrade,
+          defectLength: shown(repair.defectLengthMm, 'short'),
+          clockPosition: repair.clockPosition ?? '',
+          notes: repair.notes ?? '',
+          ownerDefectCode: repair.ownerDefectCode ?? '',
         }}
       />
     </EditSection>

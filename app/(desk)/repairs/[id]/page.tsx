@@ -34,18 +34,56 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
         title={`Repair ${repair.position} · job ${repair.job.number}`}
         badge={<StatusBadge status={repair.status} />}
         description={`${label(repair.defectType)}, grade ${repair.conditionGrade}`}
-        actions={repair.status !== 'cancelled' && <ArchiveButton url={`/api/repairs/${repair.id}`} what="repair" backTo={`/jobs/${repair.job.id}`} />}
+        actions={
+          repair.status !== 'cancelled' && (
+            <ArchiveButton url={`/api/repairs/${repair.id}`} what="repair" backTo={`/jobs/${repair.job.id}`} />
+          )
+        }
       />
       <dl className={cn(cardClass, 'grid grid-cols-2 gap-4 text-sm md:grid-cols-4')}>
-        <div><dt className="text-slate-500">Segment</dt><dd className="font-medium">{segment.label} · {label(segment.material)}</dd></div>
-        <div><dt className="text-slate-500">Inside diameter</dt><dd className="font-medium">{formatLength(segment.insideDiameterMm, unitSystem)}</dd></div>
-        <div><dt className="text-slate-500">Distance from access point</dt><dd className="font-medium">{formatLength(repair.distanceMm, unitSystem, 'long')}{segment.fromAccessPoint ? ` from ${segment.fromAccessPoint.label}` : ''}</dd></div>
-        <div><dt className="text-slate-500">Defect length</dt><dd className="font-medium">{formatLength(repair.defectLengthMm, unitSystem)}</dd></div>
-        <div><dt className="text-slate-500">Owner’s defect code</dt><dd className="font-medium">{repair.ownerDefectCode ?? '—'}</dd></div>
-        <div><dt className="text-slate-500">Clock position</dt><dd className="font-medium">{repair.clockPosition ?? '—'}</dd></div>
-        <div><dt className="text-slate-500">Planned packer</dt><dd className="font-medium">{repair.plannedPacker?.name ?? '—'}</dd></div>
-        <div><dt className="text-slate-500">Installs</dt><dd className="font-medium">{repair.installCount}</dd></div>
-        {repair.notes && <div className="col-span-full"><dt className="text-slate-500">Notes</dt><dd className="whitespace-pre-line">{repair.notes}</dd></div>}
+        <div>
+          <dt className="text-slate-500">Segment</dt>
+          <dd className="font-medium">
+            {segment.label} · {label(segment.material)}
+          </dd>
+        </div>
+        <div>
+          <dt className="text-slate-500">Inside diameter</dt>
+          <dd className="font-medium">{formatLength(segment.insideDiameterMm, unitSystem)}</dd>
+        </div>
+        <div>
+          <dt className="text-slate-500">Distance from access point</dt>
+          <dd className="font-medium">
+            {formatLength(repair.distanceMm, unitSystem, 'long')}
+            {segment.fromAccessPoint ? ` from ${segment.fromAccessPoint.label}` : ''}
+          </dd>
+        </div>
+        <div>
+          <dt className="text-slate-500">Defect length</dt>
+          <dd className="font-medium">{formatLength(repair.defectLengthMm, unitSystem)}</dd>
+        </div>
+        <div>
+          <dt className="text-slate-500">Owner’s defect code</dt>
+          <dd className="font-medium">{repair.ownerDefectCode ?? '—'}</dd>
+        </div>
+        <div>
+          <dt className="text-slate-500">Clock position</dt>
+          <dd className="font-medium">{repair.clockPosition ?? '—'}</dd>
+        </div>
+        <div>
+          <dt className="text-slate-500">Planned packer</dt>
+          <dd className="font-medium">{repair.plannedPacker?.name ?? '—'}</dd>
+        </div>
+        <div>
+          <dt className="text-slate-500">Installs</dt>
+          <dd className="font-medium">{repair.installCount}</dd>
+        </div>
+        {repair.notes && (
+          <div className="col-span-full">
+            <dt className="text-slate-500">Notes</dt>
+            <dd className="whitespace-pre-line">{repair.notes}</dd>
+          </div>
+        )}
       </dl>
       {jobOpen && <EditRepair user={user} repair={repair} unitSystem={unitSystem} />}
       <PlanPanel repairId={repair.id} initial={plan} editable={editable} />

@@ -19,7 +19,10 @@ export default async function Page({ searchParams }: { searchParams: Promise<{ j
   const { unitSystem } = await getCompany(user);
   return (
     <div className="space-y-4">
-      <PageHeader back={{ href: `/jobs/${job.id}`, label: `Job ${job.number}` }} title={`New repair on job ${job.number}`} />
+      <PageHeader
+        back={{ href: `/jobs/${job.id}`, label: `Job ${job.number}` }}
+        title={`New repair on job ${job.number}`}
+      />
       <RepairForm jobId={job.id} segments={segments} unitSystem={unitSystem} />
     </div>
   );

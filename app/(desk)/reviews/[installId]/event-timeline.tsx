@@ -14,32 +14,64 @@ type LoggedEvent = {
 };
 
 /** Every event as stored: tapped (device clock) and heard (server clock) in the company's zone, who tapped, what it recorded. */
-export function EventTimeline({ log, timeZone, unitSystem, kits, packers }: { log: LoggedEvent[]; timeZone: string; unitSystem: UnitSystem; kits: Record<string, string>; packers: Record<string, string> }) {
+export function EventTimeline({
+  log,
+  timeZone,
+  unitSystem,
+  kits,
+  packers,
+}: {
+  log: LoggedEvent[];
+  timeZone: string;
+  unitSystem: UnitSystem;
+  kits: Record<string, string>;
+  packers: Record<string, string>;
+}) {
   const time = (at: Date | string) => formatInZone(at, timeZone, 'MMM d HH:mm:ss');
   const ctx = { unitSystem, kitName: (id: string) => kits[id], packerName: (id: string) => packers[id], time };
   return (
     <section aria-labelledby="events-heading" className="overflow-hidden rounded-lg bg-white ring-1 ring-slate-200">
-      <h2 id="events-heading" className="px-4 pt-4 text-lg font-semibold">What the crew recorded</h2>
-      <p className="px-4 pb-2 text-xs text-slate-500">Times in {timeZone}. “Tapped” is the tablet’s clock, “received” the server’s.</p>
+      <h2 id="events-heading" className="px-4 pt-4 text-lg font-semibold">
+        What the crew recorded
+      </h2>
+      <p className="px-4 pb-2 text-xs text-slate-500">
+        Times in {timeZone}. “Tapped” is the tablet’s clock, “received” the server’s.
+      </p>
       <table className="min-w-full text-sm" data-testid="event-timeline">
         <thead className="bg-slate-100 text-left text-xs uppercase tracking-wide text-slate-600">
           <tr>
-            <th scope="col" className="px-3 py-2">Event</th>
-            <th scope="col" className="px-3 py-2">Tapped</th>
-            <th scope="col" className="px-3 py-2">Received</th>
-            <th scope="col" className="px-3 py-2">By</th>
-            <th scope="col" className="px-3 py-2">Recorded</th>
+            <th scope="col" className="px-3 py-2">
+              Event
+            </th>
+            <th scope="col" className="px-3 py-2">
+              Tapped
+            </th>
+            <th scope="col" className="px-3 py-2">
+              Received
+            </th>
+            <th scope="col" className="px-3 py-2">
+              By
+            </th>
+            <th scope="col" className="px-3 py-2">
+              Recorded
+            </th>
           </tr>
         </thead>
         <tbody className="divide-y divide-slate-100">
           {log.map((event) => {
             const isCorrection = event.type === 'correction';
-            const details = isCorrection ? correctionDetails(event.payload, event.corrects, ctx) : eventDetails(event.type, event.payload, ctx);
+            const details = isCorrection
+              ? correctionDetails(event.payload, event.corrects, ctx)
+              : eventDetails(event.type, event.payload, ctx);
             return (
               <tr key={event.id} data-type={event.type} className={isCorrection ? 'bg-near-100/50' : undefined}>
                 <td className="px-3 py-2 font-medium">
                   {label(event.type)}
-                  {isCorrection && event.corrects && <span className="block text-xs font-normal text-slate-600">of “{label(event.corrects.type)}” tapped {time(event.corrects.deviceTime)}</span>}
+                  {isCorrection && event.corrects && (
+                    <span className="block text-xs font-normal text-slate-600">
+                      of “{label(event.corrects.type)}” tapped {time(event.corrects.deviceTime)}
+                    </span>
+                  )}
                 </td>
                 <td className="px-3 py-2 font-mono tabular-nums">{time(event.deviceTime)}</td>
                 <td className="px-3 py-2 font-mono tabular-nums">{event.receivedAt ? time(event.receivedAt) : '—'}</td>

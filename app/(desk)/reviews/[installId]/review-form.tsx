@@ -17,7 +17,13 @@ export function ReviewForm({ installId }: { installId: string }) {
   const router = useRouter();
   const { mutate } = useSWRConfig();
   const [message, setMessage] = useState<{ tone: 'ok' | 'error'; text: string }>();
-  const { register, handleSubmit, setValue, setError, formState: { errors, isSubmitting } } = useForm<ReviewDecisionInput, unknown, ReviewDecision>({
+  const {
+    register,
+    handleSubmit,
+    setValue,
+    setError,
+    formState: { errors, isSubmitting },
+  } = useForm<ReviewDecisionInput, unknown, ReviewDecision>({
     resolver: zodResolver(reviewDecisionSchema),
     defaultValues: { decision: 'approved', comment: '' },
   });
@@ -38,14 +44,29 @@ export function ReviewForm({ installId }: { installId: string }) {
   return (
     <form onSubmit={(e) => e.preventDefault()} noValidate className="max-w-2xl space-y-3">
       <input type="hidden" {...register('decision')} />
-      <FormField id="comment" label="Comment for the crew" hint="Required to send back; shown to the crew on their Today screen." error={errors.comment?.message}>
+      <FormField
+        id="comment"
+        label="Comment for the crew"
+        hint="Required to send back; shown to the crew on their Today screen."
+        error={errors.comment?.message}
+      >
         <Textarea {...register('comment')} {...errorProps('comment', errors.comment?.message)} rows={3} />
       </FormField>
       <div className="flex gap-2">
-        <Button type="button" disabled={isSubmitting} onClick={() => decide('approved')}>Approve</Button>
-        <Button type="button" variant="danger" disabled={isSubmitting} onClick={() => decide('sent_back')}>Send back</Button>
+        <Button type="button" disabled={isSubmitting} onClick={() => decide('approved')}>
+          Approve
+        </Button>
+        <Button type="button" variant="danger" disabled={isSubmitting} onClick={() => decide('sent_back')}>
+          Send back
+        </Button>
       </div>
-      <p role="status" aria-live="polite" className={message?.tone === 'error' ? 'text-sm font-medium text-missed-700' : 'text-sm font-medium text-safe-700'}>
+      <p
+        role="status"
+        aria-live="polite"
+        className={
+          message?.tone === 'error' ? 'text-sm font-medium text-missed-700' : 'text-sm font-medium text-safe-700'
+        }
+      >
         {message?.text}
       </p>
     </form>

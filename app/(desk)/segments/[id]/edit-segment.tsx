@@ -6,7 +6,11 @@ import type { UnitSystem } from '@/lib/units';
 import { SegmentForm } from '../segment-form';
 
 /** The segment's form on its page: its ends are chosen among its site's access points. */
-export async function EditSegment({ user, segment, unitSystem }: {
+export async function EditSegment({
+  user,
+  segment,
+  unitSystem,
+}: {
   user: SessionUser;
   segment: Awaited<ReturnType<typeof getSegment>>;
   unitSystem: UnitSystem;

@@ -20,7 +20,8 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
   const user = await requirePageUser(DESK_ROLES);
   const segment = await recordForPage((await params).id, (id) => getSegment(user, id));
   const { timeZone, unitSystem } = await getCompany(user);
-  const short = (mm: number, decimals?: number) => formatLength(mm, unitSystem, 'short', decimals === undefined ? {} : { decimals });
+  const short = (mm: number, decimals?: number) =>
+    formatLength(mm, unitSystem, 'short', decimals === undefined ? {} : { decimals });
   const long = (mm: number) => formatLength(mm, unitSystem, 'long');
   const ends = `${segment.fromAccessPoint.label} → ${segment.toAccessPoint?.label ?? 'open end'}`;
   return (
@@ -29,22 +30,63 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
         back={{ href: `/sites/${segment.siteId}`, label: segment.site.name }}
         title={`Segment ${segment.label}`}
         description={`${ends}${segment.archivedAt ? ' · archived' : ''}`}
-        actions={!segment.archivedAt && <ArchiveButton url={`/api/segments/${segment.id}`} what="segment" backTo={`/sites/${segment.siteId}`} />}
+        actions={
+          !segment.archivedAt && (
+            <ArchiveButton url={`/api/segments/${segment.id}`} what="segment" backTo={`/sites/${segment.siteId}`} />
+          )
+        }
       />
       <dl className={cn(cardClass, 'grid grid-cols-2 gap-4 text-sm md:grid-cols-4')}>
-        <div><dt className="text-slate-500">Site</dt><dd className="font-medium">{segment.site.addressLine}, {segment.site.city}</dd></div>
-        <div><dt className="text-slate-500">Customer</dt><dd className="font-medium">{segment.site.customer?.name ?? '—'}</dd></div>
-        <div><dt className="text-slate-500">From access point</dt><dd className="font-medium">{segment.fromAccessPoint.label} ({label(segment.fromAccessPoint.kind)})</dd></div>
-        <div><dt className="text-slate-500">To access point</dt><dd className="font-medium">{segment.toAccessPoint ? `${segment.toAccessPoint.label} (${label(segment.toAccessPoint.kind)})` : 'Open end'}</dd></div>
-        <div><dt className="text-slate-500">Material</dt><dd className="font-medium">{label(segment.material)}</dd></div>
-        <div><dt className="text-slate-500">Nominal size</dt><dd className="font-medium">{short(segment.nominalSizeMm)}</dd></div>
-        <div><dt className="text-slate-500">Inside diameter</dt><dd className="font-medium">{short(Number(segment.insideDiameterMm), unitSystem === 'imperial' ? 2 : 1)}</dd></div>
-        <div><dt className="text-slate-500">Length</dt><dd className="font-medium">{long(segment.lengthMm)}</dd></div>
-        <div><dt className="text-slate-500">Depth</dt><dd className="font-medium">{segment.depthMm === null ? '—' : long(segment.depthMm)}</dd></div>
+        <div>
+          <dt className="text-slate-500">Site</dt>
+          <dd className="font-medium">
+            {segment.site.addressLine}, {segment.site.city}
+          </dd>
+        </div>
+        <div>
+          <dt className="text-slate-500">Customer</dt>
+          <dd className="font-medium">{segment.site.customer?.name ?? '—'}</dd>
+        </div>
+        <div>
+          <dt className="text-slate-500">From access point</dt>
+          <dd className="font-medium">
+            {segment.fromAccessPoint.label} ({label(segment.fromAccessPoint.kind)})
+          </dd>
+        </div>
+        <div>
+          <dt className="text-slate-500">To access point</dt>
+          <dd className="font-medium">
+            {segment.toAccessPoint
+              ? `${segment.toAccessPoint.label} (${label(segment.toAccessPoint.kind)})`
+              : 'Open end'}
+          </dd>
+        </div>
+        <div>
+          <dt className="text-slate-500">Material</dt>
+          <dd className="font-medium">{label(segment.material)}</dd>
+        </div>
+        <div>
+          <dt className="text-slate-500">Nominal size</dt>
+          <dd className="font-medium">{short(segment.nominalSizeMm)}</dd>
+        </div>
+        <div>
+          <dt className="text-slate-500">Inside diameter</dt>
+          <dd className="font-medium">{short(Number(segment.insideDiameterMm), unitSystem === 'imperial' ? 2 : 1)}</dd>
+        </div>
+        <div>
+          <dt className="text-slate-500">Length</dt>
+          <dd className="font-medium">{long(segment.lengthMm)}</dd>
+        </div>
+        <div>
+          <dt className="text-slate-500">Depth</dt>
+          <dd className="font-medium">{segment.depthMm === null ? '—' : long(segment.depthMm)}</dd>
+        </div>
       </dl>
       <EditSegment user={user} segment={segment} unitSystem={unitSystem} />
       <section aria-labelledby="repairs-heading">
-        <h2 id="repairs-heading" className="mb-2 text-lg font-semibold">Repairs on this segment</h2>
+        <h2 id="repairs-heading" className="mb-2 text-lg font-semibold">
+          Repairs on this segment
+        </h2>
         {segment.repairs.length === 0 ? (
           <EmptyState>No repairs planned on this segment.</EmptyState>
         ) : (
@@ -52,18 +94,47 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
             <caption className="sr-only">Repairs on this segment</caption>
             <thead className="bg-slate-100 text-left text-xs uppercase tracking-wide text-slate-600">
               <tr>
-                <th scope="col" className="px-3 py-2">Repair</th><th scope="col" className="px-3 py-2">Job</th>
-                <th scope="col" className="px-3 py-2">Distance</th><th scope="col" className="px-3 py-2">Defect</th>
-                <th scope="col" className="px-3 py-2">Grade</th><th scope="col" className="px-3 py-2">Status</th>
+                <th scope="col" className="px-3 py-2">
+                  Repair
+                </th>
+                <th scope="col" className="px-3 py-2">
+                  Job
+                </th>
+                <th scope="col" className="px-3 py-2">
+                  Distance
+                </th>
+                <th scope="col" className="px-3 py-2">
+                  Defect
+                </th>
+                <th scope="col" className="px-3 py-2">
+                  Grade
+                </th>
+                <th scope="col" className="px-3 py-2">
+                  Status
+                </th>
               </tr>
             </thead>
             <tbody className="divide-y divide-slate-100">
               {segment.repairs.map((repair) => (
                 <tr key={repair.id}>
-                  <td className="px-3 py-2"><Link href={`/repairs/${repair.id}`} className="font-semibold text-brand-700 hover:underline">Repair {repair.position}</Link></td>
-                  <td className="px-3 py-2">{repair.job ? <Link href={`/jobs/${repair.job.id}`} className="hover:underline">{repair.job.number}</Link> : '—'}</td>
+                  <td className="px-3 py-2">
+                    <Link href={`/repairs/${repair.id}`} className="font-semibold text-brand-700 hover:underline">
+                      Repair {repair.position}
+                    </Link>
+                  </td>
+                  <td className="px-3 py-2">
+                    {repair.job ? (
+                      <Link href={`/jobs/${repair.job.id}`} className="hover:underline">
+                        {repair.job.number}
+                      </Link>
+                    ) : (
+                      '—'
+                    )}
+                  </td>
                   <td className="px-3 py-2">{long(repair.distanceMm)}</td>
-                  <td className="px-3 py-2">{label(repair.defectType)} ({short(repair.defectLengthMm)})</td>
+                  <td className="px-3 py-2">
+                    {label(repair.defectType)} ({short(repair.defectLengthMm)})
+                  </td>
                   <td className="px-3 py-2">{repair.conditionGrade}</td>
                   <td className="px-3 py-2">{label(repair.status)}</td>
                 </tr>

@@ -24,7 +24,11 @@ export default async function Page({ searchParams }: { searchParams: Promise<{ s
       <PageHeader back={{ href: `/sites/${site.id}`, label: site.name }} title="New segment" />
       {site.accessPoints.length === 0 ? (
         <p className="rounded-md bg-near-100 p-3 text-sm text-near-700">
-          This site has no access points yet. <Link href={`/sites/${site.id}`} className="font-semibold underline">Add the manholes or cleanouts</Link> at each end first.
+          This site has no access points yet.{' '}
+          <Link href={`/sites/${site.id}`} className="font-semibold underline">
+            Add the manholes or cleanouts
+          </Link>{' '}
+          at each end first.
         </p>
       ) : (
         <SegmentForm siteId={site.id} accessPoints={site.accessPoints} unitSystem={unitSystem} />

@@ -28,48 +28,108 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
       <PageHeader
         back={{ href: '/sites', label: 'Sites' }}
         title={site.name}
-        description={<><Link href={`/customers/${site.customer.id}`} className="hover:underline">{site.customer.name}</Link>{site.archivedAt ? ' · archived' : ''}</>}
+        description={
+          <>
+            <Link href={`/customers/${site.customer.id}`} className="hover:underline">
+              {site.customer.name}
+            </Link>
+            {site.archivedAt ? ' · archived' : ''}
+          </>
+        }
         actions={!site.archivedAt && <ArchiveButton url={`/api/sites/${site.id}`} what="site" backTo="/sites" />}
       />
       <dl className={cn(cardClass, 'grid grid-cols-2 gap-4 text-sm md:grid-cols-4')}>
-        <div><dt className="text-slate-500">Street address</dt><dd className="font-medium">{site.addressLine}</dd></div>
-        <div><dt className="text-slate-500">City</dt><dd className="font-medium">{site.city}</dd></div>
-        <div><dt className="text-slate-500">Region</dt><dd className="font-medium">{site.region ?? '—'}</dd></div>
-        <div><dt className="text-slate-500">Postal code</dt><dd className="font-medium">{site.postalCode ?? '—'}</dd></div>
-        {site.notes && <div className="col-span-full"><dt className="text-slate-500">Notes</dt><dd className="whitespace-pre-line">{site.notes}</dd></div>}
+        <div>
+          <dt className="text-slate-500">Street address</dt>
+          <dd className="font-medium">{site.addressLine}</dd>
+        </div>
+        <div>
+          <dt className="text-slate-500">City</dt>
+          <dd className="font-medium">{site.city}</dd>
+        </div>
+        <div>
+          <dt className="text-slate-500">Region</dt>
+          <dd className="font-medium">{site.region ?? '—'}</dd>
+        </div>
+        <div>
+          <dt className="text-slate-500">Postal code</dt>
+          <dd className="font-medium">{site.postalCode ?? '—'}</dd>
+        </div>
+        {site.notes && (
+          <div className="col-span-full">
+            <dt className="text-slate-500">Notes</dt>
+            <dd className="whitespace-pre-line">{site.notes}</dd>
+          </div>
+        )}
       </dl>
-      <EditSection label="Edit site"><SiteForm site={site} /></EditSection>
+      <EditSection label="Edit site">
+        <SiteForm site={site} />
+      </EditSection>
       <AccessPointsPanel siteId={site.id} accessPoints={site.accessPoints} unitSystem={unitSystem} />
       <section aria-labelledby="segments-heading">
         <div className="mb-2 flex items-center justify-between">
-          <h2 id="segments-heading" className="text-lg font-semibold">Segments</h2>
-          {!site.archivedAt && <Link href={`/segments/new?siteId=${site.id}`} className={buttonVariants({ variant: 'secondary' })}>New segment</Link>}
+          <h2 id="segments-heading" className="text-lg font-semibold">
+            Segments
+          </h2>
+          {!site.archivedAt && (
+            <Link href={`/segments/new?siteId=${site.id}`} className={buttonVariants({ variant: 'secondary' })}>
+              New segment
+            </Link>
+          )}
         </div>
         <table className="min-w-full rounded-lg bg-white text-sm ring-1 ring-slate-200">
           <caption className="sr-only">Segments of this site</caption>
           <thead className="bg-slate-100 text-left text-xs uppercase tracking-wide text-slate-600">
             <tr>
-              <th scope="col" className="px-3 py-2">Segment</th><th scope="col" className="px-3 py-2">From → to</th>
-              <th scope="col" className="px-3 py-2">Material</th><th scope="col" className="px-3 py-2">Nominal</th>
-              <th scope="col" className="px-3 py-2">Inside diameter</th><th scope="col" className="px-3 py-2">Length</th>
+              <th scope="col" className="px-3 py-2">
+                Segment
+              </th>
+              <th scope="col" className="px-3 py-2">
+                From → to
+              </th>
+              <th scope="col" className="px-3 py-2">
+                Material
+              </th>
+              <th scope="col" className="px-3 py-2">
+                Nominal
+              </th>
+              <th scope="col" className="px-3 py-2">
+                Inside diameter
+              </th>
+              <th scope="col" className="px-3 py-2">
+                Length
+              </th>
             </tr>
           </thead>
           <tbody className="divide-y divide-slate-100">
             {site.segments.map((segment) => (
               <tr key={segment.id}>
                 <td className="px-3 py-2">
-                  <Link href={`/segments/${segment.id}`} className="font-semibold text-brand-700 hover:underline">{segment.label}</Link>
+                  <Link href={`/segments/${segment.id}`} className="font-semibold text-brand-700 hover:underline">
+                    {segment.label}
+                  </Link>
                   {segment.archivedAt && <span className="ml-2 text-xs text-slate-500">(archived)</span>}
                 </td>
-                <td className="px-3 py-2">{pointLabel.get(segment.fromAccessPointId)} → {segment.toAccessPointId ? pointLabel.get(segment.toAccessPointId) : 'open end'}</td>
+                <td className="px-3 py-2">
+                  {pointLabel.get(segment.fromAccessPointId)} →{' '}
+                  {segment.toAccessPointId ? pointLabel.get(segment.toAccessPointId) : 'open end'}
+                </td>
                 <td className="px-3 py-2">{label(segment.material)}</td>
                 <td className="px-3 py-2">{formatLength(segment.nominalSizeMm, unitSystem)}</td>
-                <td className="px-3 py-2">{formatLength(Number(segment.insideDiameterMm), unitSystem, 'short', { decimals: unitSystem === 'imperial' ? 2 : 1 })}</td>
+                <td className="px-3 py-2">
+                  {formatLength(Number(segment.insideDiameterMm), unitSystem, 'short', {
+                    decimals: unitSystem === 'imperial' ? 2 : 1,
+                  })}
+                </td>
                 <td className="px-3 py-2">{formatLength(segment.lengthMm, unitSystem, 'long')}</td>
               </tr>
             ))}
             {site.segments.length === 0 && (
-              <tr><td colSpan={6} className="px-3 py-4 text-slate-500">No segments yet. Add the access points at both ends first.</td></tr>
+              <tr>
+                <td colSpan={6} className="px-3 py-4 text-slate-500">
+                  No segments yet. Add the access points at both ends first.
+                </td>
+              </tr>
             )}
           </tbody>
         </table>

@@ -15,9 +15,11 @@ export default async function Page({ searchParams }: { searchParams: Promise<{ c
   return (
     <div className="space-y-4">
       <PageHeader
-        back={preselected
-          ? { href: `/customers/${preselected}`, label: customers.find((c) => c.id === preselected)?.name }
-          : { href: '/sites', label: 'Sites' }}
+        back={
+          preselected
+            ? { href: `/customers/${preselected}`, label: customers.find((c) => c.id === preselected)?.name }
+            : { href: '/sites', label: 'Sites' }
+        }
         title="New site"
       />
       <SiteForm customers={customers} customerId={preselected} />

@@ -10,7 +10,10 @@ import { formatInZone } from '@/lib/time/dates';
 import type { InstallState } from '@/lib/install/state';
 
 type Deadline = { key: string; label: string; start: Date; deadline: Date };
-type DeadlineWords = (key: 'returnToService' | 'safeInflateBy' | 'inflateBy' | 'deflateMaker' | 'deflateReserve' | 'deflate', values?: { pct: number }) => string;
+type DeadlineWords = (
+  key: 'returnToService' | 'safeInflateBy' | 'inflateBy' | 'deflateMaker' | 'deflateReserve' | 'deflate',
+  values?: { pct: number },
+) => string;
 
 const ENGLISH: Record<string, string> = {
   returnToService: 'Return to service',
@@ -20,7 +23,8 @@ const ENGLISH: Record<string, string> = {
   deflate: 'Deflate after',
 };
 /** The English names, for callers without the `install.deadlines` messages (tests of the clock rules). */
-const english: DeadlineWords = (key, values) => (key === 'deflateReserve' ? `Deflate after (hold + ${values?.pct} %)` : ENGLISH[key]);
+const english: DeadlineWords = (key, values) =>
+  key === 'deflateReserve' ? `Deflate after (hold + ${values?.pct} %)` : ENGLISH[key];
 
 /** The running clocks of this install, with their alarms: before inflating, then while holding. */
 export function deadlinesOf(state: InstallState, plan: CurePlan | null, t: DeadlineWords = english): Deadline[] {
@@ -28,7 +32,14 @@ export function deadlinesOf(state: InstallState, plan: CurePlan | null, t: Deadl
   if (state.signedOffAt) return [];
   if (!plan || !state.mixedAt || state.deflatedAt) {
     if (plan?.returnToService && state.inflatedAt) {
-      return [{ key: 'returnToService', label: t('returnToService'), start: state.inflatedAt, deadline: plan.returnToService }];
+      return [
+        {
+          key: 'returnToService',
+          label: t('returnToService'),
+          start: state.inflatedAt,
+          deadline: plan.returnToService,
+        },
+      ];
     }
     return [];
   }
@@ -39,8 +50,19 @@ export function deadlinesOf(state: InstallState, plan: CurePlan | null, t: Deadl
     ];
   }
   return [
-    ...(plan.deflateAfter ? [{ key: 'deflateAfter', label: deflateLabel(plan, t), start: state.inflatedAt, deadline: plan.deflateAfter }] : []),
-    ...(plan.returnToService ? [{ key: 'returnToService', label: t('returnToService'), start: state.inflatedAt, deadline: plan.returnToService }] : []),
+    ...(plan.deflateAfter
+      ? [{ key: 'deflateAfter', label: deflateLabel(plan, t), start: state.inflatedAt, deadline: plan.deflateAfter }]
+      : []),
+    ...(plan.returnToService
+      ? [
+          {
+            key: 'returnToService',
+            label: t('returnToService'),
+            start: state.inflatedAt,
+            deadline: plan.returnToService,
+          },
+        ]
+      : []),
   ];
 }
 
@@ -49,12 +71,22 @@ export function ClockStrip({ deadlines, now, timeZone }: { deadlines: Deadline[]
   const fired = useRef(new Set<string>());
   useEffect(() => {
     for (const d of deadlines) {
-      for (const alarm of alarmsDue({ now, deadline: d.deadline, start: d.start, id: d.key, alreadyFired: fired.current })) {
+      for (const alarm of alarmsDue({
+        now,
+        deadline: d.deadline,
+        start: d.start,
+        id: d.key,
+        alreadyFired: fired.current,
+      })) {
         fired.current.add(alarm.key);
         soundAlarm(alarm.kind === 'five-minutes' ? 'warning' : 'urgent');
         vibrate();
         const message = t(alarm.kind);
-        void notify(t('title', { clock: d.label, message }), t('body', { clock: d.label.toLowerCase(), time: formatInZone(d.deadline, timeZone, 'HH:mm zzz') }), alarm.key);
+        void notify(
+          t('title', { clock: d.label, message }),
+          t('body', { clock: d.label.toLowerCase(), time: formatInZone(d.deadline, timeZone, 'HH:mm zzz') }),
+          alarm.key,
+        );
       }
     }
   }, [deadlines, now, timeZone, t]);

@@ -15,7 +15,17 @@ type ChainLink = { id: string; status: string; inspectionResult: string | null }
  * A signed-off install reads as a record: when each step happened (in the company's zone), what the
  * clock allowed, the inspection — and no countdown runs on. A failed or sent-back patch offers a redo.
  */
-export function InstallRecord({ state, plan, timeZone, unitSystem, chain, canRedo, redoing, redoError, onRedo }: {
+export function InstallRecord({
+  state,
+  plan,
+  timeZone,
+  unitSystem,
+  chain,
+  canRedo,
+  redoing,
+  redoError,
+  onRedo,
+}: {
   state: InstallState;
   plan: CurePlan | null;
   timeZone: string;
@@ -39,10 +49,16 @@ export function InstallRecord({ state, plan, timeZone, unitSystem, chain, canRed
     [t('deflated'), at(state.deflatedAt)],
     [t('inflateBy'), at(plan && state.mixedAt ? plan.inflateBy : null)],
     [t('deflateAfter'), at(plan?.deflateAfter)],
-    [t('returnToService'), plan?.returnToService ? at(plan.returnToService) : plan && plan.fullCureMin === null ? t('perMakerSheet') : '—'],
+    [
+      t('returnToService'),
+      plan?.returnToService ? at(plan.returnToService) : plan && plan.fullCureMin === null ? t('perMakerSheet') : '—',
+    ],
     [t('signedOff'), at(state.signedOffAt)],
   ];
-  const held = state.inflatedAt && state.deflatedAt ? formatDuration((state.deflatedAt.getTime() - state.inflatedAt.getTime()) / 1000) : null;
+  const held =
+    state.inflatedAt && state.deflatedAt
+      ? formatDuration((state.deflatedAt.getTime() - state.inflatedAt.getTime()) / 1000)
+      : null;
   const c = state.conditions;
   const failed = state.inspection?.result === 'fail';
   return (
@@ -66,7 +82,8 @@ export function InstallRecord({ state, plan, timeZone, unitSystem, chain, canRed
             <dt className="text-slate-600">{t('temperatures')}</dt>
             <dd className="font-semibold">
               {formatTemperature(c.mixTempC, unitSystem, { locale })} /{' '}
-              {c.airTempC === null ? '—' : formatTemperature(c.airTempC, unitSystem, { locale })} / {formatTemperature(c.pipeTempC, unitSystem, { locale })}
+              {c.airTempC === null ? '—' : formatTemperature(c.airTempC, unitSystem, { locale })} /{' '}
+              {formatTemperature(c.pipeTempC, unitSystem, { locale })}
             </dd>
           </div>
         )}
@@ -85,7 +102,9 @@ export function InstallRecord({ state, plan, timeZone, unitSystem, chain, canRed
       {state.inspection && (
         <Callout tone={failed ? 'missed' : 'safe'}>
           <p className="font-bold" data-testid="record-inspection">
-            {failed ? t('inspectionFailed', { at: at(state.inspection.at) }) : t('inspectionPassed', { at: at(state.inspection.at) })}
+            {failed
+              ? t('inspectionFailed', { at: at(state.inspection.at) })
+              : t('inspectionPassed', { at: at(state.inspection.at) })}
           </p>
           {state.inspection.notes && <p>{state.inspection.notes}</p>}
         </Callout>
@@ -93,15 +112,28 @@ export function InstallRecord({ state, plan, timeZone, unitSystem, chain, canRed
       {chain.replaces && (
         <p className="text-base">
           {t.rich('redoes', {
-            link: (chunks) => <Link className="font-semibold text-brand-700 underline" href={`/installs/${chain.replaces?.id}`}>{chunks}</Link>,
-            why: chain.replaces.inspectionResult === 'fail' ? tw('whyFailed') : chain.replaces.status === 'sent_back' ? tw('whySentBack') : '',
+            link: (chunks) => (
+              <Link className="font-semibold text-brand-700 underline" href={`/installs/${chain.replaces?.id}`}>
+                {chunks}
+              </Link>
+            ),
+            why:
+              chain.replaces.inspectionResult === 'fail'
+                ? tw('whyFailed')
+                : chain.replaces.status === 'sent_back'
+                  ? tw('whySentBack')
+                  : '',
           })}
         </p>
       )}
       {chain.replacedBy ? (
         <p className="text-base font-semibold" data-testid="replaced-by">
           {t.rich('redone', {
-            link: (chunks) => <Link className="text-brand-700 underline" href={`/installs/${chain.replacedBy?.id}`}>{chunks}</Link>,
+            link: (chunks) => (
+              <Link className="text-brand-700 underline" href={`/installs/${chain.replacedBy?.id}`}>
+                {chunks}
+              </Link>
+            ),
           })}
         </p>
       ) : canRedo ? (
@@ -109,16 +141,25 @@ export function InstallRecord({ state, plan, timeZone, unitSystem, chain, canRed
           {confirm ? (
             <>
               <Callout tone="near">{t('redoConfirm')}</Callout>
-              <PrimaryAction disabled={redoing} onClick={onRedo}>{redoing ? t('starting') : t('startRedo')}</PrimaryAction>
-              <button type="button" onClick={() => setConfirm(false)} className="w-full py-3 text-lg underline">{t('notNow')}</button>
+              <PrimaryAction disabled={redoing} onClick={onRedo}>
+                {redoing ? t('starting') : t('startRedo')}
+              </PrimaryAction>
+              <button type="button" onClick={() => setConfirm(false)} className="w-full py-3 text-lg underline">
+                {t('notNow')}
+              </button>
             </>
           ) : (
-            <PrimaryAction variant="secondary" onClick={() => setConfirm(true)}>{t('redo')}</PrimaryAction>
+            <PrimaryAction variant="secondary" onClick={() => setConfirm(true)}>
+              {t('redo')}
+            </PrimaryAction>
           )}
-          {redoError && <p role="alert" className="text-base font-medium text-missed-700">{redoError}</p>}
+          {redoError && (
+            <p role="alert" className="text-base font-medium text-missed-700">
+              {redoError}
+            </p>
+          )}
         </div>
       ) : null}
     </section>
   );
 }
-

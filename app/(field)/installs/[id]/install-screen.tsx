@@ -69,10 +69,23 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
     };
   }, [viewer.id, viewer.name]);
 
-  const kits = view.options.resinKits.map((k) => ({ id: k.id, lot: k.lot, expiresOn: k.expiresOn, expired: k.expired, resinName: k.resinSystem.name, prepMinutes: k.resinSystem.prepMinutes ?? null }));
+  const kits = view.options.resinKits.map((k) => ({
+    id: k.id,
+    lot: k.lot,
+    expiresOn: k.expiresOn,
+    expired: k.expired,
+    resinName: k.resinSystem.name,
+    prepMinutes: k.resinSystem.prepMinutes ?? null,
+  }));
   const packers = view.options.packers.map((p) => ({ id: p.id, name: p.name, fits: p.fits, reasons: p.reasons }));
   const packer = view.options.packers.find((p) => p.id === state.conditions?.packerId) ?? null;
-  const rating = packer ? { minPressureKpa: packer.minPressureKpa, maxPressureKpa: packer.maxPressureKpa, groundwaterKpa: groundwaterKpaOf(view.repair.plannedGroundwaterHeadMm) } : null;
+  const rating = packer
+    ? {
+        minPressureKpa: packer.minPressureKpa,
+        maxPressureKpa: packer.maxPressureKpa,
+        groundwaterKpa: groundwaterKpaOf(view.repair.plannedGroundwaterHeadMm),
+      }
+    : null;
   const canDecide = viewer.role !== 'technician';
   const first = async (fn: () => Promise<void>) => {
     unlockAudio();
@@ -86,15 +99,32 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
 
   const synced = new Set(view.events.map((e) => e.clientEventId));
   const logged = [
-    ...view.events.map((e) => ({ clientEventId: e.clientEventId, type: e.type, deviceTime: String(e.deviceTime), synced: true, userName: e.userName })),
-    ...local.filter((e) => !synced.has(e.clientEventId)).map((e) => ({ clientEventId: e.clientEventId, type: e.type, deviceTime: e.deviceTime, synced: e.status === 'synced' })),
+    ...view.events.map((e) => ({
+      clientEventId: e.clientEventId,
+      type: e.type,
+      deviceTime: String(e.deviceTime),
+      synced: true,
+      userName: e.userName,
+    })),
+    ...local
+      .filter((e) => !synced.has(e.clientEventId))
+      .map((e) => ({
+        clientEventId: e.clientEventId,
+        type: e.type,
+        deviceTime: e.deviceTime,
+        synced: e.status === 'synced',
+      })),
   ].sort((a, b) => Date.parse(a.deviceTime) - Date.parse(b.deviceTime));
 
   return (
     <div className="space-y-4">
       <header>
-        <Link href="/today" className="text-base font-semibold text-brand-700 underline">{t('backToToday')}</Link>
-        <h1 className="mt-1 text-3xl font-bold">{t('heading', { position: view.repair.position, number: view.job.number })}</h1>
+        <Link href="/today" className="text-base font-semibold text-brand-700 underline">
+          {t('backToToday')}
+        </Link>
+        <h1 className="mt-1 text-3xl font-bold">
+          {t('heading', { position: view.repair.position, number: view.job.number })}
+        </h1>
         <p className="text-lg text-slate-700">
           {t('where', {
             address: view.job.site.addressLine,
@@ -108,8 +138,17 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
       {view.chain.replaces && !state.signedOffAt && state.inspection?.result !== 'fail' && (
         <p className="rounded-lg bg-slate-100 px-4 py-2 text-lg" data-testid="redo-of">
           {t.rich('redoOf', {
-            link: (chunks) => <Link className="font-semibold text-brand-700 underline" href={`/installs/${view.chain.replaces?.id}`}>{chunks}</Link>,
-            why: view.chain.replaces.inspectionResult === 'fail' ? t('whyFailed') : view.chain.replaces.status === 'sent_back' ? t('whySentBack') : '',
+            link: (chunks) => (
+              <Link className="font-semibold text-brand-700 underline" href={`/installs/${view.chain.replaces?.id}`}>
+                {chunks}
+              </Link>
+            ),
+            why:
+              view.chain.replaces.inspectionResult === 'fail'
+                ? t('whyFailed')
+                : view.chain.replaces.status === 'sent_back'
+                  ? t('whySentBack')
+                  : '',
           })}
         </p>
       )}
@@ -118,7 +157,13 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
       {flags.length > 0 && (
         <ul className="space-y-2" data-testid="flags">
           {flags.map((flag) => (
-            <li key={flag.kind} data-kind={flag.kind} className={`rounded-lg px-4 py-2 text-lg font-semibold ${flag.severity === 'critical' ? 'bg-missed-100 text-missed-700' : 'bg-near-100 text-near-700'}`}>
+            <li
+              key={flag.kind}
+              data-kind={flag.kind}
+              className={`rounded-lg px-4 py-2 text-lg font-semibold ${
+                flag.severity === 'critical' ? 'bg-missed-100 text-missed-700' : 'bg-near-100 ' + 'text-near-700'
+              }`}
+            >
               {locale === 'en' || !tf.has(flag.kind) ? flag.message : tf(flag.kind)}
             </li>
           ))}
@@ -139,7 +184,12 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
       )}
       {renderStep()}
       {AFTER_DEFLATE.includes(step) && (
-        <EvidencePanel target={{ installId: view.install.id }} size="field" title={t('inspectionImages')} defaultKind="inspection" />
+        <EvidencePanel
+          target={{ installId: view.install.id }}
+          size="field"
+          title={t('inspectionImages')}
+          defaultKind="inspection"
+        />
       )}
       <EventLog events={logged} timeZone={view.company.timeZone} />
     </div>
@@ -149,7 +199,9 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
     setRedo({ busy: true, error: null });
     let result;
     try {
-      result = await submitJson<{ install: { id: string } }>(`/api/installs/${view.install.id}/redo`, 'POST', { id: crypto.randomUUID() });
+      result = await submitJson<{ install: { id: string } }>(`/api/installs/${view.install.id}/redo`, 'POST', {
+        id: crypto.randomUUID(),
+      });
     } catch {
       return setRedo({ busy: false, error: t('redoNoSignal') });
     }
@@ -162,7 +214,12 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
       case 'safety':
         return <StepSafety onAcknowledge={() => void first(() => tap('safety_acknowledged'))} />;
       case 'checks':
-        return <StepChecks items={view.options.checklist?.items ?? [{ id: 'ready', label: t('defaultCheck'), required: true }]} onDone={(items) => void tap('checks_done', { items })} />;
+        return (
+          <StepChecks
+            items={view.options.checklist?.items ?? [{ id: 'ready', label: t('defaultCheck'), required: true }]}
+            onDone={(items) => void tap('checks_done', { items })}
+          />
+        );
       case 'dry_run':
         return (
           <StepDryRun
@@ -194,18 +251,55 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
               plan={plan}
               canOverride={canDecide}
               onGo={() => void tap('go_decision', { go: true })}
-              onOverride={(overrideReason, makerHoldMin) => void tap('go_decision', { go: false, overrideReason, ...(makerHoldMin !== null ? { makerHoldMin } : {}) })}
+              onOverride={(overrideReason, makerHoldMin) =>
+                void tap('go_decision', {
+                  go: false,
+                  overrideReason,
+                  ...(makerHoldMin !== null ? { makerHoldMin } : {}),
+                })
+              }
               onChangeConditions={() => setEditingConditions(true)}
             />
           );
         }
-        return <StepTap testId="step-mix" title={t('mixTitle')} hint={t('mixHint')} label={t('clock.mixed')} onTap={() => void first(() => tap('resin_mixed'))} />;
+        return (
+          <StepTap
+            testId="step-mix"
+            title={t('mixTitle')}
+            hint={t('mixHint')}
+            label={t('clock.mixed')}
+            onTap={() => void first(() => tap('resin_mixed'))}
+          />
+        );
       case 'load':
-        return <StepTap testId="step-load" title={t('loadTitle')} label={t('clock.loaded')} onTap={() => void tap('patch_loaded')} />;
+        return (
+          <StepTap
+            testId="step-load"
+            title={t('loadTitle')}
+            label={t('clock.loaded')}
+            onTap={() => void tap('patch_loaded')}
+          />
+        );
       case 'position':
-        return <StepTap testId="step-position" title={t('positionTitle')} hint={t('positionHint')} label={t('clock.inPosition')} onTap={() => void tap('packer_in_position')} />;
+        return (
+          <StepTap
+            testId="step-position"
+            title={t('positionTitle')}
+            hint={t('positionHint')}
+            label={t('clock.inPosition')}
+            onTap={() => void tap('packer_in_position')}
+          />
+        );
       case 'inflate':
-        return <StepInflate unitSystem={unitSystem} rating={rating} onInflate={(pressureKpa, confirmedOutOfRange) => void tap('bladder_inflated', { pressureKpa, ...(confirmedOutOfRange ? { confirmedOutOfRange } : {}) })} />;
+        return (
+          <StepInflate
+            unitSystem={unitSystem}
+            rating={rating}
+            onInflate={(pressureKpa, confirmedOutOfRange) =>
+              void tap('bladder_inflated', { pressureKpa, ...(confirmedOutOfRange ? { confirmedOutOfRange } : {}) })
+            }
+          />
+        );
       case 'hold':
         return (
           <StepHold
@@ -214,16 +308,37 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
             deflateAfter={plan?.deflateAfter ?? null}
             holdNote={holdNoteOf(plan, t)}
             now={now}
-            onPressure={(pressureKpa, confirmedOutOfRange) => void tap('pressure_reading', { pressureKpa, ...(confirmedOutOfRange ? { confirmedOutOfRange } : {}) })}
-            onDeflate={(early) => void tap('bladder_deflated', early ? { reason: early.reason, confirmedEarly: true } : {})}
+            onPressure={(pressureKpa, confirmedOutOfRange) =>
+              void tap('pressure_reading', { pressureKpa, ...(confirmedOutOfRange ? { confirmedOutOfRange } : {}) })
+            }
+            onDeflate={(early) =>
+              void tap('bladder_deflated', early ? { reason: early.reason, confirmedEarly: true } : {})
+            }
           />
         );
       case 'inspect':
-        return <StepInspect onRecord={(result, notes) => void tap('inspection_recorded', { result, ...(notes ? { notes } : {}) })} />;
+        return (
+          <StepInspect
+            onRecord={(result, notes) => void tap('inspection_recorded', { result, ...(notes ? { notes } : {}) })}
+          />
+        );
       case 'sign_off':
-        return <StepSignOff canSign={canDecide} defaultName={viewer.name} onSign={(name) => void tap('signed_off', { name })} />;
+        return (
+          <StepSignOff
+            canSign={canDecide}
+            defaultName={viewer.name}
+            onSign={(name) => void tap('signed_off', { name })}
+          />
+        );
       default:
-        return <StepDone status={view.install.status} canSign={canDecide} defaultName={viewer.name} onResubmit={(name) => void tap('signed_off', { name })} />;
+        return (
+          <StepDone
+            status={view.install.status}
+            canSign={canDecide}
+            defaultName={viewer.name}
+            onResubmit={(name) => void tap('signed_off', { name })}
+          />
+        );
     }
   }
 }
@@ -233,12 +348,17 @@ function holdNoteOf(plan: CurePlan | null, t: ReturnType<typeof useTranslations<
   if (!plan || plan.keepInflatedMin === null) return t('holdUnknown');
   const reserve = plan.holdReserve > 0 ? t('holdReserve', { pct: Math.round(plan.holdReserve * 100) }) : '';
   const keep = formatDuration(plan.keepInflatedMin * 60);
-  if (plan.holdSource === 'maker') return t('holdMaker', { hold: formatDuration((plan.makerHoldMin ?? 0) * 60), reserve, keep });
+  if (plan.holdSource === 'maker')
+    return t('holdMaker', { hold: formatDuration((plan.makerHoldMin ?? 0) * 60), reserve, keep });
   return t('holdResin', { hold: formatDuration((plan.holdMin ?? 0) * 60), reserve, keep });
 }
 
 /** Plan and flags recomputed on the tablet by the server's own rule, so they are right offline too. */
-function liveClock(view: InstallViewResponse, state: InstallState, now: Date): { plan: CurePlan | null; flags: QualityFlag[] } {
+function liveClock(
+  view: InstallViewResponse,
+  state: InstallState,
+  now: Date,
+): { plan: CurePlan | null; flags: QualityFlag[] } {
   const conditions = state.conditions;
   const kit = conditions ? view.options.resinKits.find((k) => k.id === conditions.resinKitId) : undefined;
   const packer = conditions ? view.options.packers.find((p) => p.id === conditions.packerId) : undefined;
@@ -262,4 +382,5 @@ function liveClock(view: InstallViewResponse, state: InstallState, now: Date): {
 const groundwaterKpaOf = (headMm: number | null | undefined) => (headMm ? groundwaterPressureKpa(headMm) : null);
 
 /** A redo is offered after a failed inspection or a send-back (here, not in the record, which loads only when shown). */
-const mayOfferRedo = (state: InstallState, status: string) => state.inspection?.result === 'fail' || status === 'sent_back';
+const mayOfferRedo = (state: InstallState, status: string) =>
+  state.inspection?.result === 'fail' || status === 'sent_back';

@@ -19,12 +19,20 @@ export function OutboxNotices({ waiting, parked }: { waiting: OutboxEntry[]; par
   return (
     <>
       {[...byUser].map(([key, { name, count }]) => (
-        <p key={key} className="rounded-lg bg-slate-100 px-4 py-2 text-lg font-semibold text-slate-800" data-testid="outbox-waiting">
+        <p
+          key={key}
+          className="rounded-lg bg-slate-100 px-4 py-2 text-lg font-semibold text-slate-800"
+          data-testid="outbox-waiting"
+        >
           {t('waiting', { count, name })}
         </p>
       ))}
       {parked.length > 0 && (
-        <section className="rounded-lg border-2 border-missed-700 bg-missed-100 px-4 py-3 text-missed-700" data-testid="outbox-parked" aria-label={t('needsAttention')}>
+        <section
+          className="rounded-lg border-2 border-missed-700 bg-missed-100 px-4 py-3 text-missed-700"
+          data-testid="outbox-parked"
+          aria-label={t('needsAttention')}
+        >
           <h2 className="text-lg font-bold">{t('parkedTitle')}</h2>
           <p className="text-base">{t('parkedText')}</p>
           <ul className="mt-2 space-y-1">

@@ -35,7 +35,10 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
   return (
     <IntlScope namespaces={NAMESPACES}>
       <KeepForOffline urls={keep} userId={user.id} />
-      <InstallScreen initial={JSON.parse(JSON.stringify(view))} viewer={{ id: user.id, name: user.name, role: user.role }} />
+      <InstallScreen
+        initial={JSON.parse(JSON.stringify(view))}
+        viewer={{ id: user.id, name: user.name, role: user.role }}
+      />
     </IntlScope>
   );
 }

@@ -8,10 +8,19 @@ type Item = { id: string; label: string; required: boolean };
 type Answer = { ok: boolean; note: string };
 
 /** The company's check-list: each item ticked, or a note saying why not. */
-export function StepChecks({ items, onDone }: { items: Item[]; onDone: (answers: { id: string; ok: boolean; note?: string }[]) => void }) {
+export function StepChecks({
+  items,
+  onDone,
+}: {
+  items: Item[];
+  onDone: (answers: { id: string; ok: boolean; note?: string }[]) => void;
+}) {
   const t = useTranslations('install.checks');
-  const [answers, setAnswers] = useState<Record<string, Answer>>(() => Object.fromEntries(items.map((i) => [i.id, { ok: false, note: '' }])));
-  const set = (id: string, change: Partial<Answer>) => setAnswers((all) => ({ ...all, [id]: { ...all[id], ...change } }));
+  const [answers, setAnswers] = useState<Record<string, Answer>>(() =>
+    Object.fromEntries(items.map((i) => [i.id, { ok: false, note: '' }])),
+  );
+  const set = (id: string, change: Partial<Answer>) =>
+    setAnswers((all) => ({ ...all, [id]: { ...all[id], ...change } }));
   const unanswered = items.filter((i) => !answers[i.id].ok && answers[i.id].note.trim().length < 3);
   return (
     <StepCard title={t('title')} testId="step-checks">
@@ -19,8 +28,16 @@ export function StepChecks({ items, onDone }: { items: Item[]; onDone: (answers:
         {items.map((item) => (
           <li key={item.id} className="rounded-lg bg-slate-50 p-3">
             <label className="flex min-h-touch cursor-pointer items-center gap-4 text-lg">
-              <input type="checkbox" className="h-8 w-8 accent-brand-700" checked={answers[item.id].ok} onChange={(e) => set(item.id, { ok: e.target.checked })} />
-              <span>{item.label}{item.required ? '' : t('optional')}</span>
+              <input
+                type="checkbox"
+                className="h-8 w-8 accent-brand-700"
+                checked={answers[item.id].ok}
+                onChange={(e) => set(item.id, { ok: e.target.checked })}
+              />
+              <span>
+                {item.label}
+                {item.required ? '' : t('optional')}
+              </span>
             </label>
             {!answers[item.id].ok && (
               <input
@@ -34,10 +51,20 @@ export function StepChecks({ items, onDone }: { items: Item[]; onDone: (answers:
           </li>
         ))}
       </ul>
-      {unanswered.length > 0 && <p className="text-base text-slate-700">{t('unanswered', { count: unanswered.length })}</p>}
+      {unanswered.length > 0 && (
+        <p className="text-base text-slate-700">{t('unanswered', { count: unanswered.length })}</p>
+      )}
       <PrimaryAction
         disabled={unanswered.length > 0}
-        onClick={() => onDone(items.map((i) => ({ id: i.id, ok: answers[i.id].ok, ...(answers[i.id].ok ? {} : { note: answers[i.id].note.trim() }) })))}
+        onClick={() =>
+          onDone(
+            items.map((i) => ({
+              id: i.id,
+              ok: answers[i.id].ok,
+              ...(answers[i.id].ok ? {} : { note: answers[i.id].note.trim() }),
+            })),
+          )
+        }
       >
         {t('done')}
       </PrimaryAction>

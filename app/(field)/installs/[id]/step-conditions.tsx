@@ -11,11 +11,21 @@ import { eventPayloadSchemas } from '@/lib/validation/install-events';
 import { FieldInput, PrimaryAction, StepCard } from './field-ui';
 import { KitScan } from './kit-scan';
 
-export type KitOption = { id: string; lot: string; expiresOn: string; expired: boolean; resinName: string; prepMinutes: number | null };
+export type KitOption = {
+  id: string;
+  lot: string;
+  expiresOn: string;
+  expired: boolean;
+  resinName: string;
+  prepMinutes: number | null;
+};
 export type PackerOption = { id: string; name: string; fits: boolean; reasons: string[] };
 export type Conditions = z.infer<(typeof eventPayloadSchemas)['conditions_recorded']>;
 
-type Messages = (key: 'errMixTemp' | 'errAirTemp' | 'errPrep' | 'errNotBelowZero' | 'errPipeTemp' | 'errKit' | 'errPacker' | 'errPatch') => string;
+type Messages = (
+  key:
+    'errMixTemp' | 'errAirTemp' | 'errPrep' | 'errNotBelowZero' | 'errPipeTemp' | 'errKit' | 'errPacker' | 'errPatch',
+) => string;
 
 // Entered in the company's units; converted to SI once, then checked against the event's own schema.
 const formSchemaOf = (t: Messages) =>
@@ -44,20 +54,27 @@ export function StepConditions({
   kits: KitOption[];
   packers: PackerOption[];
   plannedPatchLengthMm: number | null;
-  initial: (Omit<Conditions, 'airTempC' | 'prepMinutes'> & { airTempC?: number | null; prepMinutes?: number | null }) | null;
+  initial:
+    (Omit<Conditions, 'airTempC' | 'prepMinutes'> & { airTempC?: number | null; prepMinutes?: number | null }) | null;
   onSave: (conditions: Conditions) => void;
 }) {
   const t = useTranslations('install.conditions');
   const locale = useLocale();
   const formSchema = useMemo(() => formSchemaOf(t), [t]);
   const units = unitLabels(unitSystem);
-  const { register, handleSubmit, setError, setValue, getFieldState, control, formState } = useForm<FormInput, unknown, FormValues>({
+  const { register, handleSubmit, setError, setValue, getFieldState, control, formState } = useForm<
+    FormInput,
+    unknown,
+    FormValues
+  >({
     resolver: zodResolver(formSchema),
     defaultValues: {
       prepMinutes: initial?.prepMinutes ?? undefined,
       resinKitId: initial?.resinKitId ?? '',
       packerId: initial?.packerId ?? packers.find((p) => p.fits)?.id ?? '',
-      patchLength: plannedPatchLengthMm ? Number(lengthFromSi(initial?.patchLengthMm ?? plannedPatchLengthMm, unitSystem).toFixed(1)) : undefined,
+      patchLength: plannedPatchLengthMm
+        ? Number(lengthFromSi(initial?.patchLengthMm ?? plannedPatchLengthMm, unitSystem).toFixed(1))
+        : undefined,
     },
   });
   const { errors } = formState;
@@ -65,7 +82,8 @@ export function StepConditions({
   const kitId = useWatch({ control, name: 'resinKitId' });
   const kitPrep = kits.find((k) => k.id === kitId)?.prepMinutes;
   useEffect(() => {
-    if (kitPrep != null && !getFieldState('prepMinutes').isDirty && initial?.prepMinutes == null) setValue('prepMinutes', kitPrep);
+    if (kitPrep != null && !getFieldState('prepMinutes').isDirty && initial?.prepMinutes == null)
+      setValue('prepMinutes', kitPrep);
   }, [kitPrep, getFieldState, setValue, initial]);
 
   const submit = handleSubmit((values) => {
@@ -86,7 +104,16 @@ export function StepConditions({
     const checked = eventPayloadSchemas.conditions_recorded.safeParse(conditions);
     if (!checked.success) {
       for (const issue of checked.error.issues) {
-        const field = ({ mixTempC: 'mixTemp', airTempC: 'airTemp', prepMinutes: 'prepMinutes', pipeTempC: 'pipeTemp', patchLengthMm: 'patchLength' } as const)[issue.path[0] as 'mixTempC'] ?? 'mixTemp';
+        const field =
+          (
+            {
+              mixTempC: 'mixTemp',
+              airTempC: 'airTemp',
+              prepMinutes: 'prepMinutes',
+              pipeTempC: 'pipeTemp',
+              patchLengthMm: 'patchLength',
+            } as const
+          )[issue.path[0] as 'mixTempC'] ?? 'mixTemp';
         setError(field, { message: t('errOutOfRange', { message: issue.message }) });
       }
       return;
@@ -98,32 +125,73 @@ export function StepConditions({
     <StepCard title={t('title')} testId="step-conditions">
       <form onSubmit={submit} noValidate className="space-y-4">
         <div className="grid gap-4 sm:grid-cols-2">
-          <FieldInput id="mixTemp" label={t('mixTemp', { unit: units.temperature })} inputMode="decimal" error={errors.mixTemp?.message} {...register('mixTemp')} />
-          <FieldInput id="airTemp" label={t('airTemp', { unit: units.temperature })} inputMode="decimal" error={errors.airTemp?.message} {...register('airTemp')} />
-          <FieldInput id="pipeTemp" label={t('pipeTemp', { unit: units.temperature })} inputMode="decimal" error={errors.pipeTemp?.message} {...register('pipeTemp')} />
+          <FieldInput
+            id="mixTemp"
+            label={t('mixTemp', { unit: units.temperature })}
+            inputMode="decimal"
+            error={errors.mixTemp?.message}
+            {...register('mixTemp')}
+          />
+          <FieldInput
+            id="airTemp"
+            label={t('airTemp', { unit: units.temperature })}
+            inputMode="decimal"
+            error={errors.airTemp?.message}
+            {...register('airTemp')}
+          />
+          <FieldInput
+            id="pipeTemp"
+            label={t('pipeTemp', { unit: units.temperature })}
+            inputMode="decimal"
+            error={errors.pipeTemp?.message}
+            {...register('pipeTemp')}
+          />
         </div>
         <p className="text-base text-slate-600">{t('warmer')}</p>
         <div>
-          <label htmlFor="resinKitId" className="block text-lg font-semibold">{t('kit')}</label>
-          <KitScan kits={kits} onPick={(id) => setValue('resinKitId', id, { shouldDirty: true, shouldValidate: true })} />
-          <select id="resinKitId" className="mt-1 block min-h-touch w-full rounded-md border-2 border-slate-400 px-3 text-xl" aria-describedby={errors.resinKitId ? 'resinKitId-error' : undefined} {...register('resinKitId')}>
+          <label htmlFor="resinKitId" className="block text-lg font-semibold">
+            {t('kit')}
+          </label>
+          <KitScan
+            kits={kits}
+            onPick={(id) => setValue('resinKitId', id, { shouldDirty: true, shouldValidate: true })}
+          />
+          <select
+            id="resinKitId"
+            className="mt-1 block min-h-touch w-full rounded-md border-2 border-slate-400 px-3 text-xl"
+            aria-describedby={errors.resinKitId ? 'resinKitId-error' : undefined}
+            {...register('resinKitId')}
+          >
             <option value="">{t('choose')}</option>
             {kits.map((kit) => (
               <option key={kit.id} value={kit.id}>
                 {kit.lot} · {kit.resinName} ·{' '}
-                {kit.expired ? t('kitExpired', { date: formatDay(kit.expiresOn, locale) }) : t('kitUseBy', { date: formatDay(kit.expiresOn, locale) })}
+                {kit.expired
+                  ? t('kitExpired', { date: formatDay(kit.expiresOn, locale) })
+                  : t('kitUseBy', { date: formatDay(kit.expiresOn, locale) })}
               </option>
             ))}
           </select>
-          {errors.resinKitId && <p id="resinKitId-error" role="alert" className="mt-1 text-base font-medium text-missed-700">{errors.resinKitId.message}</p>}
+          {errors.resinKitId && (
+            <p id="resinKitId-error" role="alert" className="mt-1 text-base font-medium text-missed-700">
+              {errors.resinKitId.message}
+            </p>
+          )}
         </div>
         <div>
-          <label htmlFor="packerId" className="block text-lg font-semibold">{t('packer')}</label>
-          <select id="packerId" className="mt-1 block min-h-touch w-full rounded-md border-2 border-slate-400 px-3 text-xl" {...register('packerId')}>
+          <label htmlFor="packerId" className="block text-lg font-semibold">
+            {t('packer')}
+          </label>
+          <select
+            id="packerId"
+            className="mt-1 block min-h-touch w-full rounded-md border-2 border-slate-400 px-3 text-xl"
+            {...register('packerId')}
+          >
             <option value="">{t('choose')}</option>
             {packers.map((packer) => (
               <option key={packer.id} value={packer.id}>
-                {packer.name}{packer.fits ? t('fits') : t('doesNotFit', { reasons: packer.reasons.join('; ') })}
+                {packer.name}
+                {packer.fits ? t('fits') : t('doesNotFit', { reasons: packer.reasons.join('; ') })}
               </option>
             ))}
           </select>
@@ -137,7 +205,13 @@ export function StepConditions({
           error={errors.prepMinutes?.message}
           {...register('prepMinutes')}
         />
-        <FieldInput id="patchLength" label={t('patchLength', { unit: units.shortLength })} inputMode="decimal" error={errors.patchLength?.message} {...register('patchLength')} />
+        <FieldInput
+          id="patchLength"
+          label={t('patchLength', { unit: units.shortLength })}
+          inputMode="decimal"
+          error={errors.patchLength?.message}
+          {...register('patchLength')}
+        />
         <PrimaryAction onClick={() => void submit()}>{t('save')}</PrimaryAction>
       </form>
     </StepCard>

@@ -25,11 +25,15 @@ export function useInstall(id: string, fallbackData: InstallViewResponse, viewer
     },
     () => refetch.current(),
   );
-  const { data, mutate } = useSWR<InstallViewResponse>(`/api/installs/${id}`, (url: string) => fetchJson<InstallViewResponse>(url), {
-    fallbackData,
-    refreshInterval: refreshIntervalFor(live),
-    revalidateOnFocus: true,
-  });
+  const { data, mutate } = useSWR<InstallViewResponse>(
+    `/api/installs/${id}`,
+    (url: string) => fetchJson<InstallViewResponse>(url),
+    {
+      fallbackData,
+      refreshInterval: refreshIntervalFor(live),
+      revalidateOnFocus: true,
+    },
+  );
   useEffect(() => {
     refetch.current = () => void mutate();
   }, [mutate]);
@@ -85,7 +89,16 @@ export function useInstall(id: string, fallbackData: InstallViewResponse, viewer
     async (type: InstallEventType, payload: Record<string, unknown> = {}, correctsEventId?: string) => {
       const deviceTime = new Date(Math.max(serverNow().getTime(), latestMs + 1)).toISOString();
       const { enqueueEvent, flushOutbox } = await loadOutbox();
-      await enqueueEvent({ installId: id, clientEventId: crypto.randomUUID(), type, deviceTime, payload, correctsEventId, userId: viewer.id, userName: viewer.name });
+      await enqueueEvent({
+        installId: id,
+        clientEventId: crypto.randomUUID(),
+        type,
+        deviceTime,
+        payload,
+        correctsEventId,
+        userId: viewer.id,
+        userName: viewer.name,
+      });
       // Sending is best effort: the outbox keeps the tap and the sync loop retries.
       void flushOutbox().then(() => mutate());
     },

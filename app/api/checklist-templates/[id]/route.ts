@@ -1,5 +1,9 @@
 import { ADMIN_ONLY } from '@/lib/domain/vocabulary';
-import { archiveChecklistTemplate, getChecklistTemplate, updateChecklistTemplate } from '@/lib/data/checklist-templates';
+import {
+  archiveChecklistTemplate,
+  getChecklistTemplate,
+  updateChecklistTemplate,
+} from '@/lib/data/checklist-templates';
 import { recordItem } from '@/lib/routes/records';
 import { checklistTemplatePatchSchema } from '@/lib/validation/checklist-templates';
 

@@ -15,15 +15,23 @@ import { paymentReturnUrl, reportLinkUrl } from '@/lib/report/link';
 export const POST = handle(async (request: Request, { params }: { params: Promise<{ token: string }> }) => {
   const token = (await params).token;
   const check = await checkLiveLink(token);
-  if (!check.ok) return new Response(refusedLinkText(null), { status: 404, headers: { 'content-type': 'text/plain; charset=utf-8' } });
+  if (!check.ok)
+    return new Response(refusedLinkText(null), {
+      status: 404,
+      headers: { 'content-type': 'text/plain; charset=utf-8' },
+    });
   const page = reportLinkUrl(token);
   try {
-    const response = NextResponse.redirect(await startCheckout(check.companyId, check.jobId, paymentReturnUrl(check.linkId)), 303);
+    const response = NextResponse.redirect(
+      await startCheckout(check.companyId, check.jobId, paymentReturnUrl(check.linkId)),
+      303,
+    );
     response.cookies.set(RETURN_COOKIE, token, returnCookieOptions(request));
     return response;
   } catch (error) {
     // Already paid or being confirmed (409), or nothing to pay (404): back to the report, which says which.
-    if (error instanceof AppError && (error.status === 409 || error.status === 404)) return NextResponse.redirect(page, 303);
+    if (error instanceof AppError && (error.status === 409 || error.status === 404))
+      return NextResponse.redirect(page, 303);
     throw error;
   }
 });

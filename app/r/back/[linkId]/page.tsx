@@ -8,9 +8,19 @@ import { RETURN_COOKIE } from '@/lib/report/payment-return';
 // "Pay now" left in this browser for this very link, the customer lands on the report again; anyone else
 // gets a plain page that says nothing about the report or the job.
 export const dynamic = 'force-dynamic';
-export const metadata: Metadata = { title: 'Payment', robots: { index: false, follow: false }, referrer: 'no-referrer' };
+export const metadata: Metadata = {
+  title: 'Payment',
+  robots: { index: false, follow: false },
+  referrer: 'no-referrer',
+};
 
-export default async function Page({ params, searchParams }: { params: Promise<{ linkId: string }>; searchParams: Promise<{ paid?: string }> }) {
+export default async function Page({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ linkId: string }>;
+  searchParams: Promise<{ paid?: string }>;
+}) {
   const { linkId } = await params;
   const paid = (await searchParams).paid === '1';
   const token = (await cookies()).get(RETURN_COOKIE)?.value;

@@ -17,8 +17,28 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
   const { timeZone } = await getCompany(user);
   return (
     <div className="space-y-6">
-      <PageHeader back={{ href: '/admin/checklists', label: 'Check-lists' }} title={template.name} description={<>Used on {template.installCount} install(s){template.active ? '' : ' · inactive'}</>} actions={template.active && <ArchiveButton url={`/api/checklist-templates/${template.id}`} what="check-list" backTo="/admin/checklists" />} />
-      <ChecklistForm id={template.id} initial={{ name: template.name, active: template.active, items: template.items }} />
+      <PageHeader
+        back={{ href: '/admin/checklists', label: 'Check-lists' }}
+        title={template.name}
+        description={
+          <>
+            Used on {template.installCount} install(s){template.active ? '' : ' · inactive'}
+          </>
+        }
+        actions={
+          template.active && (
+            <ArchiveButton
+              url={`/api/checklist-templates/${template.id}`}
+              what="check-list"
+              backTo="/admin/checklists"
+            />
+          )
+        }
+      />
+      <ChecklistForm
+        id={template.id}
+        initial={{ name: template.name, active: template.active, items: template.items }}
+      />
       <AuditHistory user={user} entityType="checklist_template" entityId={template.id} timeZone={timeZone} />
     </div>
   );

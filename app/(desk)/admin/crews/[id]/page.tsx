@@ -24,7 +24,13 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
         back={{ href: '/admin/crews', label: 'Crews' }}
         title={crew.name}
         description={`Up to ${crew.dailyCapacity} jobs a day${archived ? ' · archived' : ''}`}
-        actions={archived ? <RestoreCrewButton crewId={crew.id} /> : <ArchiveButton url={`/api/crews/${crew.id}`} what="crew" backTo="/admin/crews" />}
+        actions={
+          archived ? (
+            <RestoreCrewButton crewId={crew.id} />
+          ) : (
+            <ArchiveButton url={`/api/crews/${crew.id}`} what="crew" backTo="/admin/crews" />
+          )
+        }
       />
       <CrewForm crew={crew} />
       <CrewMembers crewId={crew.id} members={crew.members} candidates={candidates} readOnly={archived} />

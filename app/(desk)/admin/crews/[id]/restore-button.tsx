@@ -16,8 +16,14 @@ export function RestoreCrewButton({ crewId }: { crewId: string }) {
   };
   return (
     <span className="inline-flex items-center gap-2">
-      <Button type="button" variant="secondary" onClick={restore}>Restore</Button>
-      {message && <span role="alert" className="text-sm text-missed-700">{message}</span>}
+      <Button type="button" variant="secondary" onClick={restore}>
+        Restore
+      </Button>
+      {message && (
+        <span role="alert" className="text-sm text-missed-700">
+          {message}
+        </span>
+      )}
     </span>
   );
 }

@@ -18,7 +18,20 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
   const { unitSystem, timeZone } = await getCompany(user);
   return (
     <div className="space-y-6">
-      <PageHeader back={{ href: '/admin/packers', label: 'Packers' }} title={packer.name} description={<>Used on {packer.installCount} install(s){packer.archivedAt ? ' · archived' : ''}</>} actions={!packer.archivedAt && <ArchiveButton url={`/api/packers/${packer.id}`} what="packer" backTo="/admin/packers" />} />
+      <PageHeader
+        back={{ href: '/admin/packers', label: 'Packers' }}
+        title={packer.name}
+        description={
+          <>
+            Used on {packer.installCount} install(s){packer.archivedAt ? ' · archived' : ''}
+          </>
+        }
+        actions={
+          !packer.archivedAt && (
+            <ArchiveButton url={`/api/packers/${packer.id}`} what="packer" backTo="/admin/packers" />
+          )
+        }
+      />
       <PackerForm id={packer.id} initial={packerToForm(packer, unitSystem)} unitSystem={unitSystem} />
       <AuditHistory user={user} entityType="packer" entityId={packer.id} timeZone={timeZone} />
     </div>

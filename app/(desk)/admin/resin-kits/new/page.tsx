@@ -13,7 +13,12 @@ import { PageHeader } from '@/components/ui/page-header';
 export const metadata: Metadata = { title: 'New resin kit' };
 
 const scannedSchema = z.object({
-  lot: z.string().trim().regex(/^[\x21-\x7e]{1,40}$/).optional().catch(undefined),
+  lot: z
+    .string()
+    .trim()
+    .regex(/^[\x21-\x7e]{1,40}$/)
+    .optional()
+    .catch(undefined),
   expiresOn: isoDateSchema.optional().catch(undefined),
 });
 
@@ -21,13 +26,24 @@ const scannedSchema = z.object({
 export default async function Page({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
   const user = await requirePageUser(ADMIN_ONLY);
   const scanned = scannedSchema.parse(await searchParams);
-  const [{ unitSystem }, systems] = await Promise.all([getCompany(user), listResinSystems(user, resinSystemListQuerySchema.parse({ pageSize: '100' }))]);
+  const [{ unitSystem }, systems] = await Promise.all([
+    getCompany(user),
+    listResinSystems(user, resinSystemListQuerySchema.parse({ pageSize: '100' })),
+  ]);
   return (
     <div className="space-y-4">
       <PageHeader back={{ href: '/admin/resin-kits', label: 'Resin kits' }} title="New resin kit" />
-      {systems.items.length === 0
-        ? <p>Add a <Link href="/admin/resin-systems/new" className="text-brand-700 underline">resin system</Link> first: every kit belongs to one.</p>
-        : <ResinKitForm unitSystem={unitSystem} systems={systems.items} scanned={scanned} />}
+      {systems.items.length === 0 ? (
+        <p>
+          Add a{' '}
+          <Link href="/admin/resin-systems/new" className="text-brand-700 underline">
+            resin system
+          </Link>{' '}
+          first: every kit belongs to one.
+        </p>
+      ) : (
+        <ResinKitForm unitSystem={unitSystem} systems={systems.items} scanned={scanned} />
+      )}
     </div>
   );
 }

@@ -22,11 +22,20 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
       <PageHeader
         back={{ href: '/admin/resin-systems', label: 'Resin systems' }}
         title={system.name}
-        description={<>
-          {system.kitCount} kit(s) · used on {system.installCount} install(s){system.archivedAt ? ' · archived' : ''} ·{' '}
-          <Link href={`/admin/resin-kits?resinSystemId=${system.id}`} className="text-brand-700 hover:underline">its kits</Link>
-        </>}
-        actions={!system.archivedAt && <ArchiveButton url={`/api/resin-systems/${system.id}`} what="resin system" backTo="/admin/resin-systems" />}
+        description={
+          <>
+            {system.kitCount} kit(s) · used on {system.installCount} install(s){system.archivedAt ? ' · archived' : ''}{' '}
+            ·{' '}
+            <Link href={`/admin/resin-kits?resinSystemId=${system.id}`} className="text-brand-700 hover:underline">
+              its kits
+            </Link>
+          </>
+        }
+        actions={
+          !system.archivedAt && (
+            <ArchiveButton url={`/api/resin-systems/${system.id}`} what="resin system" backTo="/admin/resin-systems" />
+          )
+        }
       />
       <ResinSystemForm id={system.id} initial={resinSystemToForm(system, unitSystem)} unitSystem={unitSystem} />
       <AuditHistory user={user} entityType="resin_system" entityId={system.id} timeZone={timeZone} />

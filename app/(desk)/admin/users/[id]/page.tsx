@@ -25,9 +25,12 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
       <PageHeader
         back={{ href: '/admin/users', label: 'Users' }}
         title={user.name}
-        description={<>
-          {user.email} · {label(user.role)} · {user.active ? <Badge tone="safe">Active</Badge> : <Badge tone="missed">Deactivated</Badge>}
-        </>}
+        description={
+          <>
+            {user.email} · {label(user.role)} ·{' '}
+            {user.active ? <Badge tone="safe">Active</Badge> : <Badge tone="missed">Deactivated</Badge>}
+          </>
+        }
         actions={<UserActions user={user} isSelf={isSelf} />}
       />
       <EditUserForm user={user} isSelf={isSelf} />
@@ -39,7 +42,9 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
           <ul className="flex flex-wrap gap-2">
             {user.crews.map((crew) => (
               <li key={crew.id}>
-                <Link href={`/admin/crews/${crew.id}`} className="text-brand-700 hover:underline">{crew.name}</Link>
+                <Link href={`/admin/crews/${crew.id}`} className="text-brand-700 hover:underline">
+                  {crew.name}
+                </Link>
                 {crew.archivedAt && <span className="text-xs text-slate-500"> (archived)</span>}
               </li>
             ))}

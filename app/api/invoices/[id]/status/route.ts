@@ -10,5 +10,7 @@ import { invoiceActionSchema } from '@/lib/validation/invoices';
 export const POST = handle(async (request: Request, { params }: { params: Promise<{ id: string }> }) => {
   const user = await requireUser(DESK_ROLES);
   const id = await ownRowId(user, 'invoice', params, 'Invoice');
-  return NextResponse.json(await changeInvoiceStatus(user, id, parseOrThrow(invoiceActionSchema, await bodyOf(request))));
+  return NextResponse.json(
+    await changeInvoiceStatus(user, id, parseOrThrow(invoiceActionSchema, await bodyOf(request))),
+  );
 });
