@@ -1,4 +1,5 @@
 import type { FlagSeverity, QualityFlag } from '@/lib/cure';
+import { formatInZone } from '@/lib/time/dates';
 
 // How the office weighs an install's quality flags, and how their sentences read on the desk.
 
@@ -34,3 +35,11 @@ export const FLAG_LABELS: Record<QualityFlag['kind'], string> = {
   'pressure-out-of-range': 'Pressure outside rating',
   'expired-resin': 'Expired resin',
 };
+
+/** Flag sentences with their instants in the company's zone, as the office reads them. */
+export function localisedFlags(flags: QualityFlag[], timeZone: string): QualityFlag[] {
+  return flags.map((flag) => ({
+    ...flag,
+    message: localiseSentence(flag.message, (at) => formatInZone(at, timeZone)),
+  }));
+}

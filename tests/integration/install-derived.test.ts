@@ -3,7 +3,7 @@ import { QueryTypes } from 'sequelize';
 import { afterEach, beforeAll, describe, expect, it, vi } from 'vitest';
 import { resinClockSpec } from '@/lib/cure';
 import { ensureDerived, flagKindsNowSql, settingsOf, severityRankSql } from '@/lib/data/install-derive';
-import { listInstalls } from '@/lib/data/reviews';
+import { listInstalls } from '@/lib/data/install-list';
 import { installClock } from '@/lib/install/plan-and-flags';
 import { deriveInstallState } from '@/lib/install/state';
 import { worstRank } from '@/lib/review/flags';

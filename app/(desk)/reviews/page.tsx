@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import { ListToolbar, FilterSelect, exportHrefOf } from '@/components/desk/list-toolbar';
 import { requirePageUser } from '@/lib/auth/session';
 import { getCompany } from '@/lib/data/company';
-import { listInstalls } from '@/lib/data/reviews';
+import { listInstalls } from '@/lib/data/install-list';
 import { DESK_ROLES, INSTALL_STATUSES, label } from '@/lib/domain/vocabulary';
 import { installListQuerySchema } from '@/lib/validation/reviews';
 import { ReviewsTable } from './reviews-table';

@@ -2,7 +2,7 @@
 
 import type { ColumnDef } from '@tanstack/react-table';
 import Link from 'next/link';
-import type { InstallListResponse } from '@/lib/data/reviews';
+import type { InstallListResponse } from '@/lib/data/install-list';
 import { FlagBadges } from '@/components/review/flag-badges';
 import { StatusBadge } from '@/components/ui/badge';
 import { DataTable } from '@/components/ui/data-table';

@@ -2,7 +2,7 @@ import { NextResponse } from 'next/server';
 import { requireUser } from '@/lib/auth/session';
 import { csvResponse, toCsv } from '@/lib/server/csv';
 import { createInstall, type CreateInstallResponse } from '@/lib/data/installs';
-import { listInstalls } from '@/lib/data/reviews';
+import { listInstalls } from '@/lib/data/install-list';
 import { label } from '@/lib/domain/vocabulary';
 import { bodyOrUndefined, handle, parseOrThrow, searchParamsOf, wantsCsv } from '@/lib/server/http';
 import { createInstallSchema } from '@/lib/validation/install-events';

@@ -1,0 +1,185 @@
+import 'server-only';
+// The office's and crews' list of installs (GET /api/installs, the review queue): one page of installs with
+// their flags, sorted in SQL over the derived columns when sorted by severity.
+import { Op, literal, type InferAttributes, type Model, type WhereOptions } from 'sequelize';
+import {
+  AccessPoint,
+  Crew,
+  Customer,
+  Install,
+  InstallEvent,
+  Job,
+  Packer,
+  Repair,
+  ResinKit,
+  ResinSystem,
+  Segment,
+  Site,
+} from '@/models';
+import type { SessionUser } from '@/lib/auth/session';
+import { resinClockSpec } from '@/lib/cure';
+import { isDeskRole } from '@/lib/auth/roles';
+import { installClock } from '@/lib/install/plan-and-flags';
+import { deriveInstallState } from '@/lib/install/state';
+import { localisedFlags, worstSeverity } from '@/lib/review/flags';
+import type { InstallListQuery } from '@/lib/validation/reviews';
+import { getCompany } from './company';
+import { ensureDerived, settingsOf, severityRankSql } from './install-derive';
+import { allOf, pageOf, searchWhere, windowOf } from './list';
+
+type Plain<M extends Model> = InferAttributes<M>;
+type Company = Awaited<ReturnType<typeof getCompany>>;
+
+export type InstallListResponse = Awaited<ReturnType<typeof listInstalls>>;
+
+/**
+ * A page of the company's installs with their quality flags (field users: only their crews').
+ * `sort=severity` orders in SQL by the worst flag kept on each install's row (plus the two that time passing
+ * raises, against now()) and pages there; the flags of the page itself are worked out from their logs.
+ */
+export async function listInstalls(user: SessionUser, query: InstallListQuery, exportAll = false) {
+  const company = await getCompany(user);
+  const where = allOf(
+    { companyId: user.companyId },
+    query.status ? { status: query.status } : undefined,
+    searchWhere(query.q, ['$job.number$', '$job.customer.name$']),
+    crewScope(user),
+  );
+  const now = new Date();
+  if (query.sort === 'severity') {
+    await ensureDerived(user, settingsOf(company));
+    // Ascending (the default) puts the worst first; ties go oldest-finished first.
+    const rank = literal(severityRankSql('"Install"', '"resinKit"'));
+    const { rows, count } = await Install.findAndCountAll({
+      where,
+      include: LIST_INCLUDE,
+      order: [
+        [rank, query.dir === 'asc' ? 'DESC' : 'ASC'],
+        ['finishedAt', 'ASC NULLS LAST'],
+        ['id', 'ASC'],
+      ],
+      ...windowOf(query, exportAll),
+    });
+    return pageOf(await itemsOf(user, rows, company, now), count, query);
+  }
+  const { rows, count } = await Install.findAndCountAll({
+    where,
+    include: LIST_INCLUDE,
+    order: [
+      [query.sort, `${query.dir.toUpperCase()} NULLS LAST`],
+      ['id', 'ASC'],
+    ],
+    ...windowOf(query, exportAll),
+  });
+  return pageOf(await itemsOf(user, rows, company, now), count, query);
+}
+
+export type InstallListItem = Awaited<ReturnType<typeof itemsOf>>[number];
+
+/** Field users see the installs of their crews (by the install's crew or its job's). */
+function crewScope(user: SessionUser): WhereOptions | undefined {
+  if (isDeskRole(user.role)) return undefined;
+  if (user.crewIds.length === 0) return { id: null };
+  return { [Op.or]: [{ crewId: { [Op.in]: user.crewIds } }, { '$job.crew_id$': { [Op.in]: user.crewIds } }] };
+}
+
+const LIST_INCLUDE = [
+  {
+    model: Job,
+    as: 'job',
+    required: true,
+    attributes: ['id', 'number', 'title', 'status', 'crewId'],
+    include: [
+      { model: Customer, as: 'customer', attributes: ['id', 'name'] },
+      { model: Site, as: 'site', attributes: ['id', 'name', 'addressLine', 'city'] },
+      { model: Crew, as: 'crew', attributes: ['id', 'name'] },
+    ],
+  },
+  { model: Crew, as: 'crew', attributes: ['id', 'name'] },
+  {
+    model: Repair,
+    as: 'repair',
+    attributes: ['id', 'position', 'distanceMm', 'defectType', 'clockPosition'],
+    include: [
+      {
+        model: Segment,
+        as: 'segment',
+        attributes: ['id', 'label'],
+        include: [{ model: AccessPoint, as: 'fromAccessPoint', attributes: ['label'] }],
+      },
+      { model: AccessPoint, as: 'fromAccessPoint', attributes: ['label'] },
+    ],
+  },
+  { model: ResinSystem, as: 'resinSystem' },
+  { model: ResinKit, as: 'resinKit', attributes: ['id', 'lot', 'expiresOn'] },
+  { model: Packer, as: 'packer', attributes: ['id', 'minPressureKpa', 'maxPressureKpa'] },
+];
+
+type ListRow = Plain<Install> & {
+  job: Pick<Plain<Job>, 'id' | 'number' | 'title' | 'status' | 'crewId'> & {
+    customer: Pick<Plain<Customer>, 'id' | 'name'>;
+    site: Pick<Plain<Site>, 'id' | 'name' | 'addressLine' | 'city'>;
+    crew: Pick<Plain<Crew>, 'id' | 'name'> | null;
+  };
+  crew: Pick<Plain<Crew>, 'id' | 'name'> | null;
+  repair: Pick<Plain<Repair>, 'id' | 'position' | 'distanceMm' | 'defectType' | 'clockPosition'> & {
+    segment: { id: string; label: string; fromAccessPoint: { label: string } | null } | null;
+    fromAccessPoint: { label: string } | null;
+  };
+  resinSystem: Plain<ResinSystem> | null;
+  resinKit: Pick<Plain<ResinKit>, 'id' | 'lot' | 'expiresOn'> | null;
+  packer: Pick<Plain<Packer>, 'id' | 'minPressureKpa' | 'maxPressureKpa'> | null;
+};
+
+/** List rows with their flags, worked out from each install's event log by the field screen's own rule. */
+async function itemsOf(user: SessionUser, rows: Install[], company: Company, now: Date) {
+  const ids = rows.map((row) => row.id);
+  const events = ids.length
+    ? await InstallEvent.findAll({ where: { companyId: user.companyId, installId: { [Op.in]: ids } } })
+    : [];
+  const byInstall = new Map<string, Plain<InstallEvent>[]>();
+  for (const event of events) {
+    const list = byInstall.get(event.installId) ?? [];
+    list.push(event.get({ plain: true }));
+    byInstall.set(event.installId, list);
+  }
+  return rows.map((model) => {
+    const row = model.get({ plain: true }) as ListRow;
+    const { flags } = installClock({
+      state: deriveInstallState(byInstall.get(row.id) ?? []),
+      resin: row.resinSystem ? resinClockSpec(row.resinSystem) : null,
+      packer: row.packer
+        ? { minPressureKpa: row.packer.minPressureKpa, maxPressureKpa: row.packer.maxPressureKpa }
+        : null,
+      resinKitExpiresOn: row.resinKit?.expiresOn ?? null,
+      safetyMargin: company.workingWindowSafetyMargin,
+      holdReserve: company.holdReserve,
+      timeZone: company.timeZone,
+      unitSystem: company.unitSystem,
+      now,
+    });
+    const localised = localisedFlags(flags, company.timeZone);
+    return {
+      id: row.id,
+      status: row.status,
+      createdAt: row.createdAt,
+      startedAt: row.startedAt,
+      finishedAt: row.finishedAt,
+      job: { id: row.job.id, number: row.job.number, title: row.job.title, status: row.job.status },
+      customer: row.job.customer,
+      site: row.job.site,
+      crew: row.crew ?? row.job.crew ?? null,
+      repair: {
+        id: row.repair.id,
+        position: row.repair.position,
+        distanceMm: row.repair.distanceMm,
+        defectType: row.repair.defectType,
+        clockPosition: row.repair.clockPosition,
+        segmentLabel: row.repair.segment?.label ?? null,
+        accessPointLabel: row.repair.fromAccessPoint?.label ?? row.repair.segment?.fromAccessPoint?.label ?? null,
+      },
+      flags: localised,
+      worstSeverity: worstSeverity(localised),
+    };
+  });
+}
