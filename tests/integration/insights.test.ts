@@ -89,6 +89,8 @@ describe('GET /api/insights', () => {
       repairId: other.repair.id,
       jobId: other.job.id,
       crewId: other.crew.id,
+      // Filled by hand like the rows above: marked derived, or the lazy derivation would rebuild it from no events.
+      derivedAt: new Date(),
       ...done(at('2026-11-05T16:00:00Z'), 30, 50, 10, 300, ['late-inflate', 'early-deflate']),
     });
   });
