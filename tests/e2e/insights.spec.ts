@@ -13,8 +13,9 @@ test.describe('insights', () => {
     await expect(page.getByTestId('insights-summary')).toContainText(
       /\d+ installs mixed from \d{4}-\d{2}-\d{2} to \d{4}-\d{2}-\d{2} by all crews/,
     );
-    // recharts draws each chart as an SVG once its chunk has loaded: five sections, five charts.
-    await expect(page.locator('svg.recharts-surface')).toHaveCount(5, { timeout: 20_000 });
+    // recharts draws each chart in a wrapper once its chunk has loaded: five sections, five charts (its legend
+    // icons are SVGs of the same class, so the wrappers are counted).
+    await expect(page.locator('.recharts-wrapper')).toHaveCount(5, { timeout: 20_000 });
     for (const section of ['weekly', 'flags', 'margin', 'hold', 'pressure']) {
       await expect(page.getByTestId(`insights-${section}`).getByRole('img')).toBeVisible();
     }
@@ -39,15 +40,18 @@ test.describe('insights', () => {
 
   test('a reversed period is refused with a message, and the default period is shown', async ({ page }) => {
     await signIn(page, 'admin@demo.test');
+    // The sign-in form posts itself and then navigates: wait for the session before going elsewhere.
+    await expect(page).not.toHaveURL(/\/sign-in/);
     await page.goto('/insights?from=2026-05-01&to=2026-01-01');
-    await expect(page.getByRole('alert')).toContainText('The period ends before it starts');
+    await expect(page.getByRole('main').getByRole('alert')).toContainText('The period ends before it starts');
     await expect(page.getByTestId('insights-summary')).toBeVisible();
   });
 
   test('has no accessibility violations (axe, WCAG 2.1 A/AA)', async ({ page }) => {
     await signIn(page, 'office@demo.test');
+    await expect(page).not.toHaveURL(/\/sign-in/);
     await page.goto('/insights');
-    await expect(page.locator('svg.recharts-surface')).toHaveCount(5, { timeout: 20_000 });
+    await expect(page.locator('.recharts-wrapper')).toHaveCount(5, { timeout: 20_000 });
     const results = await new AxeBuilder({ page }).withTags(['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa']).analyze();
     expect(results.violations.map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`)).toEqual([]);
   });
