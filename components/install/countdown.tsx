@@ -40,8 +40,11 @@ export function Countdown({
   const { tone, label: left, remainingMs } = countdownState({ now, start, deadline });
   const digits = tone === 'missed' ? t('over', { time: formatDuration(Math.ceil(-remainingMs / 1000)) }) : left;
   const style = TONES[tone];
+  const Box = compact ? 'div' : 'section';
   return (
-    <section
+    // On a board many clocks share a label, so there each is a labelled group, not a landmark of its own.
+    <Box
+      role={compact ? 'group' : undefined}
       className={`rounded-xl border-2 ${compact ? 'p-3' : 'p-4'} ${style.box}`}
       data-tone={tone}
       data-testid="countdown"
@@ -65,7 +68,7 @@ export function Countdown({
       <p className="sr-only" aria-live="polite" suppressHydrationWarning>
         {`${label}: ${t(tone)}`}
       </p>
-    </section>
+    </Box>
   );
 }
 
