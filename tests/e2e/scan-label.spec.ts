@@ -26,6 +26,8 @@ async function scanPhoto(page: Page, file: Awaited<ReturnType<typeof label>>) {
 test.describe('scan a resin kit label', () => {
   test('the admin adds a kit from its label: lot and expiry filled, an existing lot pointed to', async ({ page }) => {
     await signIn(page, 'admin@demo.test');
+    // The sign-in form posts itself, then navigates: wait for the session before going elsewhere.
+    await expect(page).not.toHaveURL(/\/sign-in/);
     await page.goto('/admin/resin-kits/new');
     await hydrated(page);
     await expect(page.getByRole('button', { name: 'Scan label' })).toBeVisible();
@@ -44,6 +46,8 @@ test.describe('scan a resin kit label', () => {
 
   test('on the conditions step a known lot picks its kit and an unknown one is offered the list', async ({ page }) => {
     await signIn(page, 'foreman@demo.test');
+    // The sign-in form posts itself, then navigates: wait for the session before going elsewhere.
+    await expect(page).not.toHaveURL(/\/sign-in/);
     const id = await newInstall(page, '-0002', 0);
     await page.goto(`/installs/${id}`);
     await acknowledgeAndCheck(page);
