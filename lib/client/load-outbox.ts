@@ -1,15 +1,10 @@
-// The outbox (Dexie and the event schemas it checks taps with) is loaded once, after the first
-// paint: drawing an install's step needs neither, and together they weigh more than the screen.
-// Its chunk is precached by the service worker, so it loads without signal too.
+// The outbox (Dexie and the event schemas it checks taps with) ships with the install screen itself, not as a
+// chunk loaded after the first paint: a tablet that loses its signal before such a chunk arrived (no service
+// worker yet, or one that did not keep it) could not queue the crew's tap at all. Callers keep the promise form.
+import * as outbox from './outbox';
 
-type OutboxModule = typeof import('./outbox');
-
-let loading: Promise<OutboxModule> | null = null;
+type OutboxModule = typeof outbox;
 
 export function loadOutbox(): Promise<OutboxModule> {
-  loading ??= import('./outbox').catch((error: unknown) => {
-    loading = null;
-    throw error;
-  });
-  return loading;
+  return Promise.resolve(outbox);
 }
