@@ -17,7 +17,7 @@ test.describe('insights', () => {
     // icons are SVGs of the same class, so the wrappers are counted).
     await expect(page.locator('.recharts-wrapper')).toHaveCount(5, { timeout: 20_000 });
     for (const section of ['weekly', 'flags', 'margin', 'hold', 'pressure']) {
-      await expect(page.getByTestId(`insights-${section}`).getByRole('img')).toBeVisible();
+      await expect(page.getByTestId(`insights-${section}`).getByRole('img').first()).toBeVisible();
     }
 
     await hydrated(page);
