@@ -155,3 +155,6 @@ export const LABELS: Record<string, string> = {
 };
 
 export const label = (code: string) => LABELS[code] ?? code.replace(/_/g, ' ').replace(/^./, (c) => c.toUpperCase());
+
+/** A closed list as the options of a select or filter: each code with its label. */
+export const labelledOptions = (codes: readonly string[]) => codes.map((code) => ({ value: code, label: label(code) }));
