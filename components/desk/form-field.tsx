@@ -124,6 +124,3 @@ export function Field<F extends FieldValues>({
   );
   return className ? <div className={className}>{field}</div> : field;
 }
-
-/** Rows with an id and a name (customers, crews, resin systems) as the choices of a select. */
-export const byName = (rows: { id: string; name: string }[]) => rows.map((row) => ({ value: row.id, label: row.name }));

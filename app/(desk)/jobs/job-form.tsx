@@ -4,7 +4,8 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm, useWatch } from 'react-hook-form';
 import type { z } from 'zod';
 import { FormActions } from '@/components/desk/form-actions';
-import { Field, byName } from '@/components/desk/form-field';
+import { Field } from '@/components/desk/form-field';
+import { namedOptions } from '@/lib/domain/vocabulary';
 import { useSaveRecord } from '@/components/desk/use-save-record';
 import type { JobFormOptions } from '@/lib/data/jobs';
 import { jobInputSchema } from '@/lib/validation/jobs';
@@ -65,7 +66,7 @@ export function JobForm({ options, job }: { options: JobFormOptions; job?: Editi
         hint={job?.siteLocked ? 'Only a draft job can move to another customer.' : undefined}
         disabled={job?.siteLocked}
         autoFocus={!job}
-        choices={byName(options.customers)}
+        choices={namedOptions(options.customers)}
       >
         <option value="">Pick a customer…</option>
       </Field>
@@ -100,7 +101,7 @@ export function JobForm({ options, job }: { options: JobFormOptions; job?: Editi
         label="Crew"
         hint={job?.scheduleLocked ? 'The crew and day can no longer change.' : 'A crew and a day schedule the job.'}
         disabled={job?.scheduleLocked}
-        choices={byName(options.crews)}
+        choices={namedOptions(options.crews)}
       >
         <option value="">None yet</option>
       </Field>

@@ -4,7 +4,8 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { FormActions } from '@/components/desk/form-actions';
-import { Field, byName } from '@/components/desk/form-field';
+import { Field } from '@/components/desk/form-field';
+import { namedOptions } from '@/lib/domain/vocabulary';
 import { useSaveRecord } from '@/components/desk/use-save-record';
 import { siteInputSchema } from '@/lib/validation/sites';
 import { cardClass } from '@/components/ui/card';
@@ -49,7 +50,7 @@ export function SiteForm({
           name="customerId"
           label="Customer"
           className="md:col-span-2"
-          choices={byName(customers ?? [])}
+          choices={namedOptions(customers ?? [])}
         >
           <option value="">Pick a customer…</option>
         </Field>

@@ -3,7 +3,8 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { FormActions } from '@/components/desk/form-actions';
-import { Field, byName } from '@/components/desk/form-field';
+import { Field } from '@/components/desk/form-field';
+import { namedOptions } from '@/lib/domain/vocabulary';
 import { useSaveRecord } from '@/components/desk/use-save-record';
 import { unitLabels, type UnitSystem } from '@/lib/units';
 import { resinKitFormSchema, type ResinKitFormValues, type ResinKitInput } from '@/lib/validation/resin-kits';
@@ -58,7 +59,7 @@ export function ResinKitForm({
         }}
       />
       <Field form={form} name="lot" label="Lot number" autoFocus />
-      <Field form={form} name="resinSystemId" label="Resin system" choices={byName(systems)} />
+      <Field form={form} name="resinSystemId" label="Resin system" choices={namedOptions(systems)} />
       <Field form={form} name="expiresOn" label="Use by (expiry date)" type="date" />
       <Field form={form} name="receivedOn" label="Received on" type="date" />
       <Field
