@@ -25,13 +25,19 @@ export function recordColumn<Row extends { id: string; archivedAt?: string | Dat
     header,
     enableSorting: true,
     cell: ({ row }) => (
-      <Link
-        href={href(row.original.id)}
-        className={cn(nowrap && 'whitespace-nowrap', 'font-semibold text-brand-700 hover:underline')}
-      >
+      <RecordLink href={href(row.original.id)} className={cn(nowrap && 'whitespace-nowrap')}>
         {text(row.original)}
         {row.original.archivedAt && <span className="ml-2 text-xs font-normal text-slate-500">(archived)</span>}
-      </Link>
+      </RecordLink>
     ),
   };
+}
+
+/** A record's name as the link to its page, in lists and tables on the desk. */
+export function RecordLink({ href, children, className }: { href: string; children: ReactNode; className?: string }) {
+  return (
+    <Link href={href} className={cn(className, 'font-semibold text-brand-700 hover:underline')}>
+      {children}
+    </Link>
+  );
 }

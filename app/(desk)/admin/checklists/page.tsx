@@ -1,5 +1,5 @@
 import type { Metadata } from 'next';
-import Link from 'next/link';
+import { RecordLink } from '@/components/desk/columns';
 import { ListPage } from '@/components/desk/list-page';
 import { Badge } from '@/components/ui/badge';
 import { requirePageUser } from '@/lib/auth/session';
@@ -31,9 +31,7 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
       <ul className="divide-y divide-slate-100 rounded-lg bg-white text-sm ring-1 ring-slate-200">
         {list.items.map((t) => (
           <li key={t.id} className="flex justify-between px-3 py-2">
-            <Link href={`/admin/checklists/${t.id}`} className="font-semibold text-brand-700 hover:underline">
-              {t.name}
-            </Link>
+            <RecordLink href={`/admin/checklists/${t.id}`}>{t.name}</RecordLink>
             <span className="text-slate-600">
               {t.items.length} item(s) {!t.active && <Badge>inactive</Badge>}
             </span>

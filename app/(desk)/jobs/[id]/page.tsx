@@ -1,5 +1,7 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
+import { RecordLink } from '@/components/desk/columns';
+import { PlainTable } from '@/components/ui/plain-table';
 import { ArchiveButton } from '@/components/desk/archive-button';
 import { AuditHistory } from '@/components/desk/audit-history';
 import { StatusBadge } from '@/components/ui/badge';
@@ -93,68 +95,39 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
             </Link>
           )}
         </div>
-        <table className="min-w-full rounded-lg bg-white text-sm ring-1 ring-slate-200">
-          <caption className="sr-only">Repairs of job {job.number}</caption>
-          <thead className="bg-slate-100 text-left text-xs uppercase text-slate-600">
-            <tr>
-              <th scope="col" className="px-3 py-2">
-                #
-              </th>
-              <th scope="col" className="px-3 py-2">
-                Segment
-              </th>
-              <th scope="col" className="px-3 py-2">
-                Distance
-              </th>
-              <th scope="col" className="px-3 py-2">
-                Defect
-              </th>
-              <th scope="col" className="px-3 py-2">
-                Grade
-              </th>
-              <th scope="col" className="px-3 py-2">
-                Clock
-              </th>
-              <th scope="col" className="px-3 py-2">
-                Patch
-              </th>
-              <th scope="col" className="px-3 py-2">
-                Status
-              </th>
+        <PlainTable
+          headClassName="bg-slate-100 text-left text-xs uppercase text-slate-600"
+          caption={`Repairs of job ${job.number}`}
+          headers={['#', 'Segment', 'Distance', 'Defect', 'Grade', 'Clock', 'Patch', 'Status']}
+        >
+          {job.repairs.map((repair) => (
+            <tr key={repair.id}>
+              <td className="px-3 py-2">
+                <RecordLink href={`/repairs/${repair.id}`}>Repair {repair.position}</RecordLink>
+              </td>
+              <td className="px-3 py-2">
+                {repair.segment?.label} · {formatLength(Number(repair.segment?.insideDiameterMm), unitSystem)} ID
+              </td>
+              <td className="px-3 py-2">{formatLength(repair.distanceMm, unitSystem, 'long')}</td>
+              <td className="px-3 py-2">
+                {label(repair.defectType)} ({formatLength(repair.defectLengthMm, unitSystem)})
+              </td>
+              <td className="px-3 py-2">{repair.conditionGrade}</td>
+              <td className="px-3 py-2">{repair.clockPosition ?? '—'}</td>
+              <td className="px-3 py-2">
+                {repair.plannedPatchLengthMm ? formatLength(repair.plannedPatchLengthMm, unitSystem) : '—'}
+              </td>
+              <td className="px-3 py-2">{label(repair.status)}</td>
             </tr>
-          </thead>
-          <tbody className="divide-y divide-slate-100">
-            {job.repairs.map((repair) => (
-              <tr key={repair.id}>
-                <td className="px-3 py-2">
-                  <Link href={`/repairs/${repair.id}`} className="font-semibold text-brand-700 hover:underline">
-                    Repair {repair.position}
-                  </Link>
-                </td>
-                <td className="px-3 py-2">
-                  {repair.segment?.label} · {formatLength(Number(repair.segment?.insideDiameterMm), unitSystem)} ID
-                </td>
-                <td className="px-3 py-2">{formatLength(repair.distanceMm, unitSystem, 'long')}</td>
-                <td className="px-3 py-2">
-                  {label(repair.defectType)} ({formatLength(repair.defectLengthMm, unitSystem)})
-                </td>
-                <td className="px-3 py-2">{repair.conditionGrade}</td>
-                <td className="px-3 py-2">{repair.clockPosition ?? '—'}</td>
-                <td className="px-3 py-2">
-                  {repair.plannedPatchLengthMm ? formatLength(repair.plannedPatchLengthMm, unitSystem) : '—'}
-                </td>
-                <td className="px-3 py-2">{label(repair.status)}</td>
-              </tr>
-            ))}
-            {job.repairs.length === 0 && (
-              <tr>
-                <td colSpan={8} className="px-3 py-6 text-center text-slate-500">
-                  No repairs yet.
-                </td>
-              </tr>
-            )}
-          </tbody>
-        </table>
+          ))}
+          {job.repairs.length === 0 && (
+            <tr>
+              <td colSpan={8} className="px-3 py-6 text-center text-slate-500">
+                No repairs yet.
+              </td>
+            </tr>
+          )}
+        </PlainTable>
       </section>
       <section>
         <h2 className="mb-2 text-lg font-semibold">Access points</h2>

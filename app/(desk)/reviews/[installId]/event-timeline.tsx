@@ -1,3 +1,4 @@
+import { PlainTable } from '@/components/ui/plain-table';
 import { formatInZone } from '@/lib/time/dates';
 import { label, type InstallEventType } from '@/lib/domain/vocabulary';
 import { correctionDetails, eventDetails } from '@/lib/review/event-text';
@@ -37,51 +38,34 @@ export function EventTimeline({
       <p className="px-4 pb-2 text-xs text-slate-500">
         Times in {timeZone}. “Tapped” is the tablet’s clock, “received” the server’s.
       </p>
-      <table className="min-w-full text-sm" data-testid="event-timeline">
-        <thead className="bg-slate-100 text-left text-xs uppercase tracking-wide text-slate-600">
-          <tr>
-            <th scope="col" className="px-3 py-2">
-              Event
-            </th>
-            <th scope="col" className="px-3 py-2">
-              Tapped
-            </th>
-            <th scope="col" className="px-3 py-2">
-              Received
-            </th>
-            <th scope="col" className="px-3 py-2">
-              By
-            </th>
-            <th scope="col" className="px-3 py-2">
-              Recorded
-            </th>
-          </tr>
-        </thead>
-        <tbody className="divide-y divide-slate-100">
-          {log.map((event) => {
-            const isCorrection = event.type === 'correction';
-            const details = isCorrection
-              ? correctionDetails(event.payload, event.corrects, ctx)
-              : eventDetails(event.type, event.payload, ctx);
-            return (
-              <tr key={event.id} data-type={event.type} className={isCorrection ? 'bg-near-100/50' : undefined}>
-                <td className="px-3 py-2 font-medium">
-                  {label(event.type)}
-                  {isCorrection && event.corrects && (
-                    <span className="block text-xs font-normal text-slate-600">
-                      of “{label(event.corrects.type)}” tapped {time(event.corrects.deviceTime)}
-                    </span>
-                  )}
-                </td>
-                <td className="px-3 py-2 font-mono tabular-nums">{time(event.deviceTime)}</td>
-                <td className="px-3 py-2 font-mono tabular-nums">{event.receivedAt ? time(event.receivedAt) : '—'}</td>
-                <td className="px-3 py-2">{event.userName ?? '—'}</td>
-                <td className="px-3 py-2">{details.join(' · ') || '—'}</td>
-              </tr>
-            );
-          })}
-        </tbody>
-      </table>
+      <PlainTable
+        className="min-w-full text-sm"
+        data-testid="event-timeline"
+        headers={['Event', 'Tapped', 'Received', 'By', 'Recorded']}
+      >
+        {log.map((event) => {
+          const isCorrection = event.type === 'correction';
+          const details = isCorrection
+            ? correctionDetails(event.payload, event.corrects, ctx)
+            : eventDetails(event.type, event.payload, ctx);
+          return (
+            <tr key={event.id} data-type={event.type} className={isCorrection ? 'bg-near-100/50' : undefined}>
+              <td className="px-3 py-2 font-medium">
+                {label(event.type)}
+                {isCorrection && event.corrects && (
+                  <span className="block text-xs font-normal text-slate-600">
+                    of “{label(event.corrects.type)}” tapped {time(event.corrects.deviceTime)}
+                  </span>
+                )}
+              </td>
+              <td className="px-3 py-2 font-mono tabular-nums">{time(event.deviceTime)}</td>
+              <td className="px-3 py-2 font-mono tabular-nums">{event.receivedAt ? time(event.receivedAt) : '—'}</td>
+              <td className="px-3 py-2">{event.userName ?? '—'}</td>
+              <td className="px-3 py-2">{details.join(' · ') || '—'}</td>
+            </tr>
+          );
+        })}
+      </PlainTable>
     </section>
   );
 }

@@ -1,5 +1,7 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
+import { RecordLink } from '@/components/desk/columns';
+import { PlainTable } from '@/components/ui/plain-table';
 import { ArchiveButton } from '@/components/desk/archive-button';
 import { AuditHistory } from '@/components/desk/audit-history';
 import { requirePageUser } from '@/lib/auth/session';
@@ -90,57 +92,33 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
         {segment.repairs.length === 0 ? (
           <EmptyState>No repairs planned on this segment.</EmptyState>
         ) : (
-          <table className="min-w-full rounded-lg bg-white text-sm ring-1 ring-slate-200">
-            <caption className="sr-only">Repairs on this segment</caption>
-            <thead className="bg-slate-100 text-left text-xs uppercase tracking-wide text-slate-600">
-              <tr>
-                <th scope="col" className="px-3 py-2">
-                  Repair
-                </th>
-                <th scope="col" className="px-3 py-2">
-                  Job
-                </th>
-                <th scope="col" className="px-3 py-2">
-                  Distance
-                </th>
-                <th scope="col" className="px-3 py-2">
-                  Defect
-                </th>
-                <th scope="col" className="px-3 py-2">
-                  Grade
-                </th>
-                <th scope="col" className="px-3 py-2">
-                  Status
-                </th>
-              </tr>
-            </thead>
-            <tbody className="divide-y divide-slate-100">
-              {segment.repairs.map((repair) => (
-                <tr key={repair.id}>
-                  <td className="px-3 py-2">
-                    <Link href={`/repairs/${repair.id}`} className="font-semibold text-brand-700 hover:underline">
-                      Repair {repair.position}
+          <PlainTable
+            caption="Repairs on this segment"
+            headers={['Repair', 'Job', 'Distance', 'Defect', 'Grade', 'Status']}
+          >
+            {segment.repairs.map((repair) => (
+              <tr key={repair.id}>
+                <td className="px-3 py-2">
+                  <RecordLink href={`/repairs/${repair.id}`}>Repair {repair.position}</RecordLink>
+                </td>
+                <td className="px-3 py-2">
+                  {repair.job ? (
+                    <Link href={`/jobs/${repair.job.id}`} className="hover:underline">
+                      {repair.job.number}
                     </Link>
-                  </td>
-                  <td className="px-3 py-2">
-                    {repair.job ? (
-                      <Link href={`/jobs/${repair.job.id}`} className="hover:underline">
-                        {repair.job.number}
-                      </Link>
-                    ) : (
-                      '—'
-                    )}
-                  </td>
-                  <td className="px-3 py-2">{long(repair.distanceMm)}</td>
-                  <td className="px-3 py-2">
-                    {label(repair.defectType)} ({short(repair.defectLengthMm)})
-                  </td>
-                  <td className="px-3 py-2">{repair.conditionGrade}</td>
-                  <td className="px-3 py-2">{label(repair.status)}</td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
+                  ) : (
+                    '—'
+                  )}
+                </td>
+                <td className="px-3 py-2">{long(repair.distanceMm)}</td>
+                <td className="px-3 py-2">
+                  {label(repair.defectType)} ({short(repair.defectLengthMm)})
+                </td>
+                <td className="px-3 py-2">{repair.conditionGrade}</td>
+                <td className="px-3 py-2">{label(repair.status)}</td>
+              </tr>
+            ))}
+          </PlainTable>
         )}
       </section>
       <AuditHistory user={user} entityType="segment" entityId={segment.id} timeZone={timeZone} />

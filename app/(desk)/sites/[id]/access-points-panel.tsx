@@ -1,6 +1,7 @@
 'use client';
 
 import { zodResolver } from '@hookform/resolvers/zod';
+import { PlainTable } from '@/components/ui/plain-table';
 import { useRouter } from 'next/navigation';
 import { useMemo, useState } from 'react';
 import { useForm } from 'react-hook-form';
@@ -46,77 +47,68 @@ export function AccessPointsPanel({
       <h2 id="access-points-heading" className="text-lg font-semibold">
         Access points
       </h2>
-      <table className="min-w-full rounded-lg bg-white text-sm ring-1 ring-slate-200">
-        <caption className="sr-only">Access points of this site</caption>
-        <thead className="bg-slate-100 text-left text-xs uppercase tracking-wide text-slate-600">
-          <tr>
-            <th scope="col" className="px-3 py-2">
-              Label
-            </th>
-            <th scope="col" className="px-3 py-2">
-              Kind
-            </th>
-            <th scope="col" className="px-3 py-2">
-              Depth
-            </th>
-            <th scope="col" className="px-3 py-2">
-              <span className="sr-only">Actions</span>
-            </th>
-          </tr>
-        </thead>
-        <tbody className="divide-y divide-slate-100">
-          {accessPoints.map((point) =>
-            editing === point.id ? (
-              <tr key={point.id}>
-                <td colSpan={4} className="px-3 py-2">
-                  <AccessPointForm
-                    siteId={siteId}
-                    point={point}
-                    unitSystem={unitSystem}
-                    onDone={() => setEditing(null)}
-                  />
-                </td>
-              </tr>
-            ) : (
-              <tr key={point.id}>
-                <td className="px-3 py-2 font-semibold">{point.label}</td>
-                <td className="px-3 py-2">{label(point.kind)}</td>
-                <td className="px-3 py-2">
-                  {point.depthMm === null ? '—' : formatLength(point.depthMm, unitSystem, 'long')}
-                </td>
-                <td className="px-3 py-2 text-right">
-                  <Button
-                    type="button"
-                    variant="ghost"
-                    onClick={() => {
-                      setMessage(undefined);
-                      setEditing(point.id);
-                    }}
-                    aria-label={`Edit ${point.label}`}
-                  >
-                    Edit
-                  </Button>
-                  <Button
-                    type="button"
-                    variant="ghost"
-                    onClick={() => remove(point)}
-                    aria-label={`Remove ${point.label}`}
-                  >
-                    Remove
-                  </Button>
-                </td>
-              </tr>
-            ),
-          )}
-          {accessPoints.length === 0 && (
-            <tr>
-              <td colSpan={4} className="px-3 py-4 text-slate-500">
-                No access points yet.
+      <PlainTable
+        caption="Access points of this site"
+        headers={[
+          'Label',
+          'Kind',
+          'Depth',
+          <span key="actions" className="sr-only">
+            Actions
+          </span>,
+        ]}
+      >
+        {accessPoints.map((point) =>
+          editing === point.id ? (
+            <tr key={point.id}>
+              <td colSpan={4} className="px-3 py-2">
+                <AccessPointForm
+                  siteId={siteId}
+                  point={point}
+                  unitSystem={unitSystem}
+                  onDone={() => setEditing(null)}
+                />
               </td>
             </tr>
-          )}
-        </tbody>
-      </table>
+          ) : (
+            <tr key={point.id}>
+              <td className="px-3 py-2 font-semibold">{point.label}</td>
+              <td className="px-3 py-2">{label(point.kind)}</td>
+              <td className="px-3 py-2">
+                {point.depthMm === null ? '—' : formatLength(point.depthMm, unitSystem, 'long')}
+              </td>
+              <td className="px-3 py-2 text-right">
+                <Button
+                  type="button"
+                  variant="ghost"
+                  onClick={() => {
+                    setMessage(undefined);
+                    setEditing(point.id);
+                  }}
+                  aria-label={`Edit ${point.label}`}
+                >
+                  Edit
+                </Button>
+                <Button
+                  type="button"
+                  variant="ghost"
+                  onClick={() => remove(point)}
+                  aria-label={`Remove ${point.label}`}
+                >
+                  Remove
+                </Button>
+              </td>
+            </tr>
+          ),
+        )}
+        {accessPoints.length === 0 && (
+          <tr>
+            <td colSpan={4} className="px-3 py-4 text-slate-500">
+              No access points yet.
+            </td>
+          </tr>
+        )}
+      </PlainTable>
       {message && (
         <p role="status" className="text-sm text-slate-700">
           {message}

@@ -1,5 +1,7 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
+import { RecordLink } from '@/components/desk/columns';
+import { PlainTable } from '@/components/ui/plain-table';
 import { ArchiveButton } from '@/components/desk/archive-button';
 import { AuditHistory } from '@/components/desk/audit-history';
 import { buttonVariants } from '@/components/ui/button';
@@ -77,62 +79,38 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
             </Link>
           )}
         </div>
-        <table className="min-w-full rounded-lg bg-white text-sm ring-1 ring-slate-200">
-          <caption className="sr-only">Segments of this site</caption>
-          <thead className="bg-slate-100 text-left text-xs uppercase tracking-wide text-slate-600">
-            <tr>
-              <th scope="col" className="px-3 py-2">
-                Segment
-              </th>
-              <th scope="col" className="px-3 py-2">
-                From → to
-              </th>
-              <th scope="col" className="px-3 py-2">
-                Material
-              </th>
-              <th scope="col" className="px-3 py-2">
-                Nominal
-              </th>
-              <th scope="col" className="px-3 py-2">
-                Inside diameter
-              </th>
-              <th scope="col" className="px-3 py-2">
-                Length
-              </th>
+        <PlainTable
+          caption="Segments of this site"
+          headers={['Segment', 'From → to', 'Material', 'Nominal', 'Inside diameter', 'Length']}
+        >
+          {site.segments.map((segment) => (
+            <tr key={segment.id}>
+              <td className="px-3 py-2">
+                <RecordLink href={`/segments/${segment.id}`}>{segment.label}</RecordLink>
+                {segment.archivedAt && <span className="ml-2 text-xs text-slate-500">(archived)</span>}
+              </td>
+              <td className="px-3 py-2">
+                {pointLabel.get(segment.fromAccessPointId)} →{' '}
+                {segment.toAccessPointId ? pointLabel.get(segment.toAccessPointId) : 'open end'}
+              </td>
+              <td className="px-3 py-2">{label(segment.material)}</td>
+              <td className="px-3 py-2">{formatLength(segment.nominalSizeMm, unitSystem)}</td>
+              <td className="px-3 py-2">
+                {formatLength(Number(segment.insideDiameterMm), unitSystem, 'short', {
+                  decimals: unitSystem === 'imperial' ? 2 : 1,
+                })}
+              </td>
+              <td className="px-3 py-2">{formatLength(segment.lengthMm, unitSystem, 'long')}</td>
             </tr>
-          </thead>
-          <tbody className="divide-y divide-slate-100">
-            {site.segments.map((segment) => (
-              <tr key={segment.id}>
-                <td className="px-3 py-2">
-                  <Link href={`/segments/${segment.id}`} className="font-semibold text-brand-700 hover:underline">
-                    {segment.label}
-                  </Link>
-                  {segment.archivedAt && <span className="ml-2 text-xs text-slate-500">(archived)</span>}
-                </td>
-                <td className="px-3 py-2">
-                  {pointLabel.get(segment.fromAccessPointId)} →{' '}
-                  {segment.toAccessPointId ? pointLabel.get(segment.toAccessPointId) : 'open end'}
-                </td>
-                <td className="px-3 py-2">{label(segment.material)}</td>
-                <td className="px-3 py-2">{formatLength(segment.nominalSizeMm, unitSystem)}</td>
-                <td className="px-3 py-2">
-                  {formatLength(Number(segment.insideDiameterMm), unitSystem, 'short', {
-                    decimals: unitSystem === 'imperial' ? 2 : 1,
-                  })}
-                </td>
-                <td className="px-3 py-2">{formatLength(segment.lengthMm, unitSystem, 'long')}</td>
-              </tr>
-            ))}
-            {site.segments.length === 0 && (
-              <tr>
-                <td colSpan={6} className="px-3 py-4 text-slate-500">
-                  No segments yet. Add the access points at both ends first.
-                </td>
-              </tr>
-            )}
-          </tbody>
-        </table>
+          ))}
+          {site.segments.length === 0 && (
+            <tr>
+              <td colSpan={6} className="px-3 py-4 text-slate-500">
+                No segments yet. Add the access points at both ends first.
+              </td>
+            </tr>
+          )}
+        </PlainTable>
       </section>
       <AuditHistory user={user} entityType="site" entityId={site.id} timeZone={timeZone} />
     </div>
