@@ -62,14 +62,9 @@ const columnsFor = (unitSystem: UnitSystem, timeZone: string): ColumnDef<Row, un
 ];
 
 export function RepairsTable({
-  list,
-  sort,
-  dir,
   unitSystem,
   timeZone,
-}: ListTableProps<Row> & {
-  unitSystem: UnitSystem;
-  timeZone: string;
-}) {
-  return <ListTable caption="Repairs" columns={columnsFor(unitSystem, timeZone)} list={list} sort={sort} dir={dir} />;
+  ...page
+}: ListTableProps<Row> & { unitSystem: UnitSystem; timeZone: string }) {
+  return <ListTable caption="Repairs" columns={columnsFor(unitSystem, timeZone)} {...page} />;
 }

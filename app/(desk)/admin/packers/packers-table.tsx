@@ -38,13 +38,6 @@ const columnsFor = (units: UnitSystem): ColumnDef<Row, unknown>[] => [
   },
 ];
 
-export function PackersTable({
-  list,
-  sort,
-  dir,
-  units,
-}: ListTableProps<Row> & {
-  units: UnitSystem;
-}) {
-  return <ListTable caption="Packers" columns={columnsFor(units)} list={list} sort={sort} dir={dir} />;
+export function PackersTable({ units, ...page }: ListTableProps<Row> & { units: UnitSystem }) {
+  return <ListTable caption="Packers" columns={columnsFor(units)} {...page} />;
 }

@@ -32,13 +32,6 @@ const columnsFor = (units: UnitSystem): ColumnDef<Row, unknown>[] => [
   { id: 'notes', header: 'Notes', cell: ({ row }) => row.original.notes ?? '—' },
 ];
 
-export function ResinKitsTable({
-  list,
-  sort,
-  dir,
-  units,
-}: ListTableProps<Row> & {
-  units: UnitSystem;
-}) {
-  return <ListTable caption="Resin kits" columns={columnsFor(units)} list={list} sort={sort} dir={dir} />;
+export function ResinKitsTable({ units, ...page }: ListTableProps<Row> & { units: UnitSystem }) {
+  return <ListTable caption="Resin kits" columns={columnsFor(units)} {...page} />;
 }

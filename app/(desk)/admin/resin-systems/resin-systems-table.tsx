@@ -32,13 +32,6 @@ const columnsFor = (units: UnitSystem): ColumnDef<Row, unknown>[] => [
   },
 ];
 
-export function ResinSystemsTable({
-  list,
-  sort,
-  dir,
-  units,
-}: ListTableProps<Row> & {
-  units: UnitSystem;
-}) {
-  return <ListTable caption="Resin systems" columns={columnsFor(units)} list={list} sort={sort} dir={dir} />;
+export function ResinSystemsTable({ units, ...page }: ListTableProps<Row> & { units: UnitSystem }) {
+  return <ListTable caption="Resin systems" columns={columnsFor(units)} {...page} />;
 }
