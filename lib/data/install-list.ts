@@ -1,7 +1,7 @@
 import 'server-only';
 // The office's and crews' list of installs (GET /api/installs, the review queue): one page of installs with
 // their flags, sorted in SQL over the derived columns when sorted by severity.
-import { Op, literal, type InferAttributes, type Model, type WhereOptions } from 'sequelize';
+import { Op, type InferAttributes, type Model, type WhereOptions } from 'sequelize';
 import {
   AccessPoint,
   Crew,
@@ -24,7 +24,8 @@ import { deriveInstallState } from '@/lib/install/state';
 import { localisedFlags, worstSeverity } from '@/lib/review/flags';
 import type { InstallListQuery } from '@/lib/validation/reviews';
 import { getCompany } from './company';
-import { ensureDerived, settingsOf, severityRankSql } from './install-derive';
+import { ensureDerived, settingsOf } from './install-derive';
+import { severityPage } from './install-severity';
 import { allOf, pageOf, searchWhere, windowOf } from './list';
 
 type Plain<M extends Model> = InferAttributes<M>;
@@ -34,8 +35,8 @@ export type InstallListResponse = Awaited<ReturnType<typeof listInstalls>>;
 
 /**
  * A page of the company's installs with their quality flags (field users: only their crews').
- * `sort=severity` orders in SQL by the worst flag kept on each install's row (plus the two that time passing
- * raises, against now()) and pages there; the flags of the page itself are worked out from their logs.
+ * `sort=severity` picks the page's ids and the count in lean SQL over the rows' derived columns
+ * (`lib/data/install-severity.ts`), then loads only those rows; the flags of the page are worked out from their logs.
  */
 export async function listInstalls(user: SessionUser, query: InstallListQuery, exportAll = false) {
   const company = await getCompany(user);
@@ -48,18 +49,12 @@ export async function listInstalls(user: SessionUser, query: InstallListQuery, e
   const now = new Date();
   if (query.sort === 'severity') {
     await ensureDerived(user, settingsOf(company));
-    // Ascending (the default) puts the worst first; ties go oldest-finished first.
-    const rank = literal(severityRankSql('"Install"', '"resinKit"'));
-    const { rows, count } = await Install.findAndCountAll({
-      where,
-      include: LIST_INCLUDE,
-      order: [
-        [rank, query.dir === 'asc' ? 'DESC' : 'ASC'],
-        ['finishedAt', 'ASC NULLS LAST'],
-        ['id', 'ASC'],
-      ],
-      ...windowOf(query, exportAll),
-    });
+    const { ids, count } = await severityPage(user, query, exportAll);
+    const rows = ids.length
+      ? await Install.findAll({ where: { id: ids, companyId: user.companyId }, include: LIST_INCLUDE })
+      : [];
+    const at = new Map(ids.map((id, index) => [id, index]));
+    rows.sort((a, b) => at.get(a.id)! - at.get(b.id)!);
     return pageOf(await itemsOf(user, rows, company, now), count, query);
   }
   const { rows, count } = await Install.findAndCountAll({
