@@ -1,13 +1,12 @@
 import 'server-only';
 // The office's and crews' list of installs (GET /api/installs, the review queue): one page of installs with
 // their flags, sorted in SQL over the derived columns when sorted by severity.
-import { Op, type InferAttributes, type Model, type WhereOptions } from 'sequelize';
+import { Op, QueryTypes, type InferAttributes, type Model, type WhereOptions } from 'sequelize';
 import {
   AccessPoint,
   Crew,
   Customer,
   Install,
-  InstallEvent,
   Job,
   Packer,
   Repair,
@@ -15,12 +14,13 @@ import {
   ResinSystem,
   Segment,
   Site,
+  sequelize,
 } from '@/models';
 import type { SessionUser } from '@/lib/auth/session';
 import { resinClockSpec } from '@/lib/cure';
 import { isDeskRole } from '@/lib/auth/roles';
 import { installClock } from '@/lib/install/plan-and-flags';
-import { deriveInstallState } from '@/lib/install/state';
+import { deriveInstallState, type InstallEventInput } from '@/lib/install/state';
 import { localisedFlags, worstSeverity } from '@/lib/review/flags';
 import type { InstallListQuery } from '@/lib/validation/reviews';
 import { getCompany } from './company';
@@ -129,13 +129,19 @@ type ListRow = Plain<Install> & {
 /** List rows with their flags, worked out from each install's event log by the field screen's own rule. */
 async function itemsOf(user: SessionUser, rows: Install[], company: Company, now: Date) {
   const ids = rows.map((row) => row.id);
+  // Plain rows (no model instances): a page of installs can carry thousands of events.
   const events = ids.length
-    ? await InstallEvent.findAll({ where: { companyId: user.companyId, installId: { [Op.in]: ids } } })
+    ? await sequelize.query<InstallEventInput & { installId: string }>(
+        `SELECT id, install_id AS "installId", client_event_id AS "clientEventId", type, device_time AS "deviceTime",
+                received_at AS "receivedAt", payload, corrects_event_id AS "correctsEventId"
+         FROM install_events WHERE company_id = :companyId AND install_id IN (:ids)`,
+        { replacements: { companyId: user.companyId, ids }, type: QueryTypes.SELECT },
+      )
     : [];
-  const byInstall = new Map<string, Plain<InstallEvent>[]>();
+  const byInstall = new Map<string, InstallEventInput[]>();
   for (const event of events) {
     const list = byInstall.get(event.installId) ?? [];
-    list.push(event.get({ plain: true }));
+    list.push(event);
     byInstall.set(event.installId, list);
   }
   return rows.map((model) => {
