@@ -1,4 +1,5 @@
 import 'server-only';
+import { randomUUID } from 'node:crypto';
 import { Op, UniqueConstraintError, type Transaction } from 'sequelize';
 import type { z } from 'zod';
 import { AuditEntry, Install, InstallEvent, Job, Packer, Repair, ResinKit, ResinSystem, sequelize } from '@/models';
@@ -19,7 +20,7 @@ import { correctionTarget, orderProblem, type InstallState } from '@/lib/install
 import { eventPayloadSchemas, parseEventBody } from '@/lib/validation/install-events';
 import { getCompany } from './company';
 import { loadMaterials, rederive, rowOf, settingsOf } from './install-derive';
-import { notifyTap } from './live';
+import { insertAndNotifyTap, notifyTap } from './live';
 import { findInstallFor, type InstallEventRow } from './installs';
 import { dayInZone } from '@/lib/time/dates';
 
@@ -140,34 +141,46 @@ async function recordInTransaction(
     await checkConditions(user, { ...target.payload, ...changes }, kitChanged ? today : null, t);
   }
 
-  const event = await InstallEvent.create(
-    {
-      companyId: user.companyId,
-      installId,
-      clientEventId: body.clientEventId,
-      type: body.type,
-      deviceTime: new Date(body.deviceTime),
-      receivedAt,
-      userId: user.id,
-      payload: body.payload,
-      correctsEventId: target?.id ?? null,
-    },
-    { transaction: t },
-  );
-  const plainEvent = event.get({ plain: true });
-  let next: Next;
+  const plainEvent: InstallEventRow = {
+    id: randomUUID(),
+    companyId: user.companyId,
+    installId,
+    clientEventId: body.clientEventId,
+    type: body.type,
+    deviceTime: new Date(body.deviceTime),
+    receivedAt,
+    userId: user.id,
+    payload: body.payload ?? {},
+    correctsEventId: target?.id ?? null,
+    createdAt: new Date(),
+  };
+  const values = { ...plainEvent, payload: JSON.stringify(plainEvent.payload) };
+  // Inserting the event takes the company's numbering lock until commit (migration 20261203014000). A tap in log
+  // order therefore writes its install row first and inserts last, the NOTIFY in the same statement: taps of one
+  // company wait on each other for one round trip and the commit, not for the whole tap.
   if (body.type !== 'correction' && !stored && foldsInOrder(fold, plainEvent)) {
-    next = await foldIn(user, install, fold, plainEvent, settings, t);
-  } else {
-    // Out of log order (two tablets, a late outbox) or a correction: the whole log again, this tap included.
-    stored = await rederive(user.companyId, installId, settings, t);
-    next = { state: stored.state, kit: stored.kit, derived: rowOf(stored) };
+    const next = await foldIn(user, install, fold, plainEvent, settings, t);
+    await updateSummary(user, install, next, body, t);
+    await writeAudit(user, install, body, target, t);
+    await insertAndNotifyTap(t, INSERT_EVENT_SQL, values, next.state.step);
+    return { event: plainEvent, created: true };
   }
+  // Out of log order (two tablets, a late outbox) or a correction: the whole log again, this tap included.
+  await sequelize.query(INSERT_EVENT_SQL, { replacements: values, transaction: t });
+  stored = await rederive(user.companyId, installId, settings, t);
+  const next: Next = { state: stored.state, kit: stored.kit, derived: rowOf(stored) };
   await updateSummary(user, install, next, body, t);
   await writeAudit(user, install, body, target, t);
-  await notifyTap(t, { eventId: event.id, step: next.state.step });
+  await notifyTap(t, { eventId: plainEvent.id, step: next.state.step });
   return { event: plainEvent, created: true };
 }
+
+const INSERT_EVENT_SQL = `INSERT INTO install_events
+    (id, company_id, install_id, client_event_id, type, device_time, received_at, user_id, payload, corrects_event_id,
+     created_at)
+  VALUES (:id, :companyId, :installId, :clientEventId, :type, :deviceTime, :receivedAt, :userId, CAST(:payload AS jsonb),
+     :correctsEventId, :createdAt)
+  RETURNING *`;
 
 type Next = {
   state: InstallState;
