@@ -14,6 +14,7 @@ import { submitJson } from '@/lib/client/submit-json';
 import { loadOutbox } from '@/lib/client/load-outbox';
 import { useWakeLock } from '@/lib/client/wake-lock';
 import { labelIn } from '@/i18n/labels';
+import { useLibMessage } from '@/i18n/use-lib-message';
 import type { InstallState } from '@/lib/install/state';
 import { groundwaterPressureKpa } from '@/lib/sizing';
 import { formatDuration, formatLength } from '@/lib/units';
@@ -53,6 +54,7 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
   const td = useTranslations('install.deadlines');
   const locale = useLocale();
   const unitSystem = view.company.unitSystem;
+  const say = useLibMessage(unitSystem, view.company.timeZone);
   const { plan, flags } = useMemo(() => liveClock(view, state, now), [view, state, now]);
   const clockRunning = !!state.mixedAt && !state.deflatedAt;
   useWakeLock(clockRunning);
@@ -164,7 +166,7 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
                 flag.severity === 'critical' ? 'bg-missed-100 text-missed-700' : 'bg-near-100 ' + 'text-near-700'
               }`}
             >
-              {locale === 'en' || !tf.has(flag.kind) ? flag.message : tf(flag.kind)}
+              {flag.details ? say(flag.details) : locale === 'en' || !tf.has(flag.kind) ? flag.message : tf(flag.kind)}
             </li>
           ))}
         </ul>
@@ -249,6 +251,7 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
           return (
             <StepGo
               plan={plan}
+              say={say}
               canOverride={canDecide}
               onGo={() => void tap('go_decision', { go: true })}
               onOverride={(overrideReason, makerHoldMin) =>
