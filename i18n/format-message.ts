@@ -1,7 +1,7 @@
 import type { LibMessage, MessageValue } from '@/lib/i18n/message';
 import { minutesToText } from '@/lib/cure/resin-clock';
 import { formatDateTimeIn, formatDay } from '@/lib/time/dates';
-import { formatDuration, formatPressure, formatTemperature, type UnitSystem } from '@/lib/units';
+import { formatDuration, formatLength, formatPressure, formatTemperature, type UnitSystem } from '@/lib/units';
 
 /** A translator of the `lib` namespace (useTranslations('lib'), getTranslations('lib'), translatorFor(l, 'lib')). */
 type LibTranslator = (key: string, values?: Record<string, string | number>) => string;
@@ -36,6 +36,10 @@ function valueText(t: LibTranslator, value: MessageValue, context: MessageContex
   if ('key' in value) return formatMessage(t, value, context);
   if ('temperatureC' in value) return formatTemperature(value.temperatureC, system, english ? {} : { locale });
   if ('pressureKpa' in value) return formatPressure(value.pressureKpa, system, english ? {} : { locale });
+  if ('lengthMm' in value) {
+    const decimals = value.decimals === undefined ? {} : { decimals: value.decimals };
+    return formatLength(value.lengthMm, system, 'short', english ? decimals : { ...decimals, locale });
+  }
   if ('seconds' in value) return formatDuration(value.seconds);
   if ('percent' in value) return String(value.percent);
   if ('minutes' in value) return english ? minutesToText(value.minutes) : minutesIn(value.minutes, locale);

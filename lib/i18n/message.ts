@@ -8,6 +8,8 @@ export type MessageQuantity =
   | { minutes: number }
   | { seconds: number }
   | { pressureKpa: number }
+  /** A short length (pipe, patch), with the decimals its sentence uses. */
+  | { lengthMm: number; decimals?: number }
   | { percent: number }
   | { instant: string }
   | { day: string };

@@ -79,7 +79,13 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
     resinName: k.resinSystem.name,
     prepMinutes: k.resinSystem.prepMinutes ?? null,
   }));
-  const packers = view.options.packers.map((p) => ({ id: p.id, name: p.name, fits: p.fits, reasons: p.reasons }));
+  const packers = view.options.packers.map((p) => ({
+    id: p.id,
+    name: p.name,
+    fits: p.fits,
+    reasons: p.reasons,
+    reasonDetails: p.reasonDetails,
+  }));
   const packer = view.options.packers.find((p) => p.id === state.conditions?.packerId) ?? null;
   const rating = packer
     ? {
