@@ -92,8 +92,7 @@ export function EvidencePanel({
     if (!requested.ok) return patch(key, { phase: 'failed', message: requested.error.message });
     const { attachment, upload } = requested.data;
     const sent = await putFile(upload.url, upload.headers, file, (progress) => patch(key, { progress }));
-    if (!sent)
-      return patch(key, { phase: 'failed', message: t('notSent') });
+    if (!sent) return patch(key, { phase: 'failed', message: t('notSent') });
     patch(key, { phase: 'checking', progress: 1 });
     const completed = await submitJson(`/api/attachments/${attachment.id}/complete`, 'POST');
     if (!completed.ok) return patch(key, { phase: 'failed', message: completed.error.message });
@@ -216,7 +215,12 @@ export function EvidencePanel({
                 </span>
               </div>
               {u.phase !== 'failed' && u.phase !== 'done' && (
-                <progress className="mt-1 h-2 w-full" value={u.progress} max={1} aria-label={t('uploadOf', { name: u.name })} />
+                <progress
+                  className="mt-1 h-2 w-full"
+                  value={u.progress}
+                  max={1}
+                  aria-label={t('uploadOf', { name: u.name })}
+                />
               )}
               {u.message && (
                 <p role="alert" className="mt-1 font-medium">

@@ -46,8 +46,7 @@ export const formatBytes = (bytes: number) =>
       ? `${Math.round(bytes / 1024)} KB`
       : `${bytes} bytes`;
 
-export type UploadRefusal =
-  { kind: 'type'; contentType: string } | { kind: 'size'; type: MediaKind; size: number };
+export type UploadRefusal = { kind: 'type'; contentType: string } | { kind: 'size'; type: MediaKind; size: number };
 
 /** Why a declared file may not be uploaded, as facts a screen words in its reader's language; null when it may. */
 export function refusalOf(contentType: string, byteSize: number): UploadRefusal | null {
@@ -61,7 +60,8 @@ export function refusalOf(contentType: string, byteSize: number): UploadRefusal 
 export function uploadRefusal(contentType: string, byteSize: number): string | null {
   const refusal = refusalOf(contentType, byteSize);
   if (!refusal) return null;
-  if (refusal.kind === 'type') return `Files of type ${contentType || 'unknown'} cannot be uploaded: send ${ALLOWED_SUMMARY}.`;
+  if (refusal.kind === 'type')
+    return `Files of type ${contentType || 'unknown'} cannot be uploaded: send ${ALLOWED_SUMMARY}.`;
   const { type, size } = refusal;
   return `This ${type} is ${formatBytes(size)}; ${type === 'image' ? 'images' : 'videos'} may be at most ${formatBytes(MAX_BYTES[type])}.`;
 }
