@@ -1,12 +1,12 @@
 import fc from 'fast-check';
 import { createTranslator } from 'next-intl';
 import { describe, expect, it } from 'vitest';
-import { flagsFor, planCure, type InstallRecord } from '@/lib/cure';
+import { flagsFor, planCure } from '@/lib/cure';
 import { formatMessage, formatMessages, type MessageContext } from '@/i18n/format-message';
 import { localisedFlags } from '@/lib/review/flags';
 import en from '@/messages/en.json';
 import es from '@/messages/es.json';
-import { at, plusMin, typicalEpoxy } from '../cure/fixtures';
+import { cleanInstall, plusMin, typicalEpoxy } from '../cure/fixtures';
 
 // lib/cure writes each sentence twice: English text for the API and the desk, and a catalogue message for the
 // screens. The English catalogue must give back the English text exactly, whatever the inputs; Spanish gets the
@@ -16,20 +16,8 @@ const tEn = createTranslator({ locale: 'en', messages: en, namespace: 'lib' });
 const tEs = createTranslator({ locale: 'es', messages: es, namespace: 'lib' });
 const metric: MessageContext = { locale: 'en', system: 'metric' };
 
-const mixedAt = at('2026-06-02T08:00:00Z');
-const clean: InstallRecord = {
-  resin: typicalEpoxy,
-  mixedAt,
-  mixTempC: 20,
-  pipeTempC: 20,
-  inflatedAt: plusMin(mixedAt, 20),
-  deflatedAt: plusMin(mixedAt, 20 + 95),
-  dryRunSeconds: 8 * 60,
-  prepMinutes: 6,
-  pressuresKpa: [150, 160, 155],
-  packer: { minPressureKpa: 100, maxPressureKpa: 200 },
-  resinKitExpiresOn: '2026-12-31',
-};
+const clean = cleanInstall;
+const { mixedAt } = cleanInstall;
 
 const temperature = fc.integer({ min: -100, max: 600 }).map((t) => t / 10);
 const record = fc.record({
@@ -45,7 +33,7 @@ const record = fc.record({
   ),
   holdReserve: fc.constantFrom(0, 0.1, 0.25),
   pressures: fc.array(fc.integer({ min: 0, max: 400 }), { maxLength: 4 }),
-  expires: fc.constantFrom('2026-06-01', '2026-06-02', '2026-12-31'),
+  expires: fc.constantFrom('2025-06-01', '2025-06-02', '2025-12-31'),
   mixed: fc.boolean(),
   system: fc.constantFrom('metric' as const, 'imperial' as const),
 });
@@ -151,16 +139,16 @@ describe('lib messages in Spanish', () => {
       inflatedAt: plusMin(mixedAt, 31),
       deflatedAt: plusMin(mixedAt, 200),
       pressuresKpa: [150, 210.5],
-      resinKitExpiresOn: '2026-06-01',
+      resinKitExpiresOn: '2025-06-01',
     });
     const text = Object.fromEntries(flags.map((f) => [f.kind, formatMessages(tEs, f.details ?? [], imperial)]));
     expect(text['late-inflate']).toBe(
-      'Inflado el 2 jun 2026, 02:31 GMT-6, después de la hora límite para inflar (2 jun 2026, 02:30 GMT-6): ' +
+      'Inflado el 2 jun 2025, 02:31 GMT-6, después de la hora límite para inflar (2 jun 2025, 02:30 GMT-6): ' +
         'puede que la resina empezara a fraguar antes de apretar el parche.',
     );
     expect(text['pressure-out-of-range']).toBe(
       '1 de 2 lecturas de presión fuera del rango del empacador, 14,5 psi–29,0 psi (lecturas de 21,8 psi a 30,5 psi).',
     );
-    expect(text['expired-resin']).toBe('El kit de resina caducó el 1 jun 2026, antes de mezclarse el 2 jun 2026.');
+    expect(text['expired-resin']).toBe('El kit de resina caducó el 1 jun 2025, antes de mezclarse el 2 jun 2025.');
   });
 });
