@@ -4,7 +4,7 @@ import { CureInputError, flagsFor, type InstallRecord, type FlagKind } from '@/l
 import { at, cleanInstall, plusMin, typicalEpoxy } from './fixtures';
 
 const clean = cleanInstall;
-const { mixedAt, packer } = cleanInstall;
+const { mixedAt } = cleanInstall;
 
 const kinds = (install: InstallRecord): FlagKind[] => flagsFor(install).map((f) => f.kind);
 
