@@ -1,5 +1,5 @@
 import { expect, test } from '@playwright/test';
-import { signIn } from './helpers';
+import { hydrated, signIn } from './helpers';
 import { controlTime, newInstall, serverView, tap } from './install-helpers';
 
 // Spanish for the crews: signed out the browser's Accept-Language decides; signed in, the user's own setting
@@ -14,6 +14,11 @@ test.describe('signed out, the browser’s language decides', () => {
     await expect(page.locator('html')).toHaveAttribute('lang', 'es');
     await expect(page).toHaveTitle(/Iniciar sesión/);
     await expect(page.getByText('Inicie sesión para ver los trabajos de su empresa')).toBeVisible();
+    // The form's own checks, before anything is sent.
+    await hydrated(page);
+    await page.getByRole('button', { name: 'Iniciar sesión' }).click();
+    await expect(page.locator('#email-error')).toHaveText('Escriba el correo electrónico con el que inicia sesión');
+    await expect(page.locator('#password-error')).toHaveText('Escriba su contraseña');
     await page.getByLabel('Correo electrónico').fill('nadie@demo.test');
     await page.getByLabel('Contraseña').fill('no-es-la-clave');
     await page.getByRole('button', { name: 'Iniciar sesión' }).click();
