@@ -1,5 +1,6 @@
 import { createTranslator } from 'next-intl';
 import { describe, expect, it } from 'vitest';
+import { describeLabel } from '@/lib/scan/label';
 import { tooManyAttempts } from '@/lib/security/throttle';
 import { ALLOWED_SUMMARY, formatBytes, MAX_BYTES, refusalOf, uploadRefusal } from '@/lib/storage/limits';
 import { SIGN_IN_MESSAGES } from '@/lib/validation/sign-in-check';
@@ -63,5 +64,17 @@ describe('evidence panel words', () => {
     expect(tEs('allowed', limits)).toBe(
       'Imágenes JPEG, PNG o WebP de hasta 15 MB; vídeos MP4, WebM o QuickTime de hasta 200 MB.',
     );
+  });
+});
+
+describe('scan words', () => {
+  const tEn = createTranslator({ locale: 'en', messages: en, namespace: 'scan' });
+  const tEs = createTranslator({ locale: 'es', messages: es, namespace: 'scan' });
+
+  it('says what a label gave, in each language', () => {
+    const label = { raw: '', lot: 'SAE-2610-014', expiresOn: '2027-01-31' };
+    expect(describeLabel(label, tEn)).toBe('Read lot SAE-2610-014, use by 2027-01-31.');
+    expect(describeLabel({ raw: '', lot: 'L1' }, tEn)).toBe('Read lot L1.');
+    expect(describeLabel(label, tEs)).toBe('Leído: lote SAE-2610-014, usar antes del 2027-01-31.');
   });
 });
