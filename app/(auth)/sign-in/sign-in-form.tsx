@@ -6,18 +6,23 @@ import { useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { safeCallbackPath } from '@/lib/auth/callback-url';
 import { signInWithPassword } from '@/lib/client/sign-in';
-import { checkSignIn, type SignInFields } from '@/lib/validation/sign-in-check';
+import { checkSignIn, SIGN_IN_MESSAGES, type SignInFields } from '@/lib/validation/sign-in-check';
 
 // One message for every failure (badCredentials), so the form never tells whether an e-mail has an account.
 function failureMessage(
-  result: { status: number; message?: string } | null,
-  t: (key: 'badCredentials' | 'failed') => string,
+  result: { status: number; message?: string; retryAfterSeconds?: number } | null,
+  t: ReturnType<typeof useTranslations<'signIn'>>,
 ): string {
   if (result?.status === 401) return t('badCredentials');
-  // 429: the server's "Too many attempts — try again in N minutes."
+  // 429: the server's "Too many attempts — try again in N minutes.", counted as lib/security/throttle.ts counts.
+  if (result?.status === 429 && result.retryAfterSeconds)
+    return t('tooMany', { minutes: Math.max(1, Math.ceil(result.retryAfterSeconds / 60)) });
   if (result?.status === 429 && result.message) return result.message;
   return t('failed');
 }
+
+/** The check's English message (lib/validation/sign-in-check.ts) as its key in the catalogue. */
+const MESSAGE_KEYS = new Map(Object.entries(SIGN_IN_MESSAGES).map(([key, text]) => [text as string, key]));
 
 export function SignInForm() {
   const t = useTranslations('signIn');
@@ -29,6 +34,10 @@ export function SignInForm() {
   const [errors, setErrors] = useState<Partial<Record<keyof SignInFields, string>>>({});
   const [submitted, setSubmitted] = useState(false);
   const [isSubmitting, setSubmitting] = useState(false);
+  const said = (message: string) => {
+    const key = MESSAGE_KEYS.get(message);
+    return key ? t(`errors.${key as keyof typeof SIGN_IN_MESSAGES}`) : message;
+  };
 
   const recheck = (form: HTMLFormElement | null, field: keyof SignInFields) => {
     if (!submitted || !form) return;
@@ -80,7 +89,7 @@ export function SignInForm() {
         />
         {errors.email && (
           <p id="email-error" className="mt-1 text-sm text-missed-700">
-            {errors.email}
+            {said(errors.email)}
           </p>
         )}
       </div>
@@ -100,7 +109,7 @@ export function SignInForm() {
         />
         {errors.password && (
           <p id="password-error" className="mt-1 text-sm text-missed-700">
-            {errors.password}
+            {said(errors.password)}
           </p>
         )}
       </div>

@@ -14,6 +14,7 @@ import { submitJson } from '@/lib/client/submit-json';
 import { loadOutbox } from '@/lib/client/load-outbox';
 import { useWakeLock } from '@/lib/client/wake-lock';
 import { labelIn } from '@/i18n/labels';
+import { useLibMessage } from '@/i18n/use-lib-message';
 import type { InstallState } from '@/lib/install/state';
 import { groundwaterPressureKpa } from '@/lib/sizing';
 import { formatDuration, formatLength } from '@/lib/units';
@@ -53,6 +54,7 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
   const td = useTranslations('install.deadlines');
   const locale = useLocale();
   const unitSystem = view.company.unitSystem;
+  const say = useLibMessage(unitSystem, view.company.timeZone);
   const { plan, flags } = useMemo(() => liveClock(view, state, now), [view, state, now]);
   const clockRunning = !!state.mixedAt && !state.deflatedAt;
   useWakeLock(clockRunning);
@@ -77,7 +79,13 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
     resinName: k.resinSystem.name,
     prepMinutes: k.resinSystem.prepMinutes ?? null,
   }));
-  const packers = view.options.packers.map((p) => ({ id: p.id, name: p.name, fits: p.fits, reasons: p.reasons }));
+  const packers = view.options.packers.map((p) => ({
+    id: p.id,
+    name: p.name,
+    fits: p.fits,
+    reasons: p.reasons,
+    reasonDetails: p.reasonDetails,
+  }));
   const packer = view.options.packers.find((p) => p.id === state.conditions?.packerId) ?? null;
   const rating = packer
     ? {
@@ -164,7 +172,7 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
                 flag.severity === 'critical' ? 'bg-missed-100 text-missed-700' : 'bg-near-100 ' + 'text-near-700'
               }`}
             >
-              {locale === 'en' || !tf.has(flag.kind) ? flag.message : tf(flag.kind)}
+              {flag.details ? say(flag.details) : locale === 'en' || !tf.has(flag.kind) ? flag.message : tf(flag.kind)}
             </li>
           ))}
         </ul>
@@ -249,6 +257,7 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
           return (
             <StepGo
               plan={plan}
+              say={say}
               canOverride={canDecide}
               onGo={() => void tap('go_decision', { go: true })}
               onOverride={(overrideReason, makerHoldMin) =>
