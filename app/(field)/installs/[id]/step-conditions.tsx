@@ -5,7 +5,7 @@ import { useLocale, useTranslations } from 'next-intl';
 import { useEffect, useMemo } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { z } from 'zod';
-import { formatDay } from '@/lib/time/dates';
+import { formatDay } from '@/lib/time/dates-locale';
 import { lengthFromSi, lengthToSi, temperatureToSi, unitLabels, type UnitSystem } from '@/lib/units';
 import { eventPayloadSchemas } from '@/lib/validation/install-events';
 import { FieldInput, PrimaryAction, StepCard } from './field-ui';
