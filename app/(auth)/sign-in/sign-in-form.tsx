@@ -1,26 +1,24 @@
 'use client';
 
 import { useRouter, useSearchParams } from 'next/navigation';
-import { useTranslations } from 'next-intl';
 import { useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { safeCallbackPath } from '@/lib/auth/callback-url';
 import { signInWithPassword } from '@/lib/client/sign-in';
 import { checkSignIn, type SignInFields } from '@/lib/validation/sign-in-check';
 
+/** The form's words in the reader's language (the `signIn` messages), given by the page: no translation library ships. */
+export type SignInWords = Record<'email' | 'password' | 'submit' | 'submitting' | 'badCredentials' | 'failed', string>;
+
 // One message for every failure (badCredentials), so the form never tells whether an e-mail has an account.
-function failureMessage(
-  result: { status: number; message?: string } | null,
-  t: (key: 'badCredentials' | 'failed') => string,
-): string {
-  if (result?.status === 401) return t('badCredentials');
+function failureMessage(result: { status: number; message?: string } | null, words: SignInWords): string {
+  if (result?.status === 401) return words.badCredentials;
   // 429: the server's "Too many attempts — try again in N minutes."
   if (result?.status === 429 && result.message) return result.message;
-  return t('failed');
+  return words.failed;
 }
 
-export function SignInForm() {
-  const t = useTranslations('signIn');
+export function SignInForm({ words }: { words: SignInWords }) {
   const router = useRouter();
   const params = useSearchParams();
   const [failure, setFailure] = useState<string | null>(null);
@@ -54,7 +52,7 @@ export function SignInForm() {
     const result = await signInWithPassword(check.values.email, check.values.password, next).catch(() => null);
     setSubmitting(false);
     if (!result || !result.ok) {
-      setFailure(failureMessage(result, t));
+      setFailure(failureMessage(result, words));
       return;
     }
     router.replace(next);
@@ -65,7 +63,7 @@ export function SignInForm() {
     <form onSubmit={(event) => void onSubmit(event)} noValidate className="space-y-5">
       <div>
         <label htmlFor="email" className="block text-base font-medium">
-          {t('email')}
+          {words.email}
         </label>
         <input
           id="email"
@@ -86,7 +84,7 @@ export function SignInForm() {
       </div>
       <div>
         <label htmlFor="password" className="block text-base font-medium">
-          {t('password')}
+          {words.password}
         </label>
         <input
           id="password"
@@ -108,7 +106,7 @@ export function SignInForm() {
         {failure && <p className="rounded-md bg-missed-100 px-3 py-2 text-base text-missed-700">{failure}</p>}
       </div>
       <Button type="submit" size="field" className="w-full" disabled={isSubmitting}>
-        {isSubmitting ? t('submitting') : t('submit')}
+        {isSubmitting ? words.submitting : words.submit}
       </Button>
     </form>
   );
