@@ -1,6 +1,6 @@
 import type { LibMessage, MessageValue } from '@/lib/i18n/message';
 import { minutesToText } from '@/lib/cure/resin-clock';
-import { formatDateTimeIn, formatDay } from '@/lib/time/dates';
+import { formatDateTimeIn, formatDay } from '@/lib/time/dates-locale';
 import { formatDuration, formatLength, formatPressure, formatTemperature, type UnitSystem } from '@/lib/units';
 
 /** A translator of the `lib` namespace (useTranslations('lib'), getTranslations('lib'), translatorFor(l, 'lib')). */

@@ -3,7 +3,7 @@
 import { useLocale, useTranslations } from 'next-intl';
 import { useState } from 'react';
 import { ScanLabel, type ScannedLabel } from '@/components/scan/scan-label';
-import { formatDay } from '@/lib/time/dates';
+import { formatDay } from '@/lib/time/dates-locale';
 import type { KitOption } from './step-conditions';
 
 /**

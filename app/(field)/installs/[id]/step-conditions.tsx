@@ -7,7 +7,7 @@ import { useForm, useWatch } from 'react-hook-form';
 import { z } from 'zod';
 import { useLibMessage } from '@/i18n/use-lib-message';
 import type { LibMessage } from '@/lib/i18n/message';
-import { formatDay } from '@/lib/time/dates';
+import { formatDay } from '@/lib/time/dates-locale';
 import {
   formatLength,
   formatTemperature,
