@@ -1,7 +1,7 @@
 import type { Metadata } from 'next';
-import Link from 'next/link';
 import { headers } from 'next/headers';
 import { getTranslations } from 'next-intl/server';
+import { FieldHeading } from '@/components/field/field-heading';
 import { IntlScope } from '@/components/shell/intl-scope';
 import { localeFromAcceptLanguage } from '@/i18n/locales';
 import { requirePageUser } from '@/lib/auth/session';
@@ -21,10 +21,7 @@ export default async function Page() {
   const browser = localeFromAcceptLanguage((await headers()).get('accept-language'));
   return (
     <main className="mx-auto max-w-xl space-y-4 p-6">
-      <Link href="/" className="text-base font-semibold text-brand-700 underline">
-        ← {tc('back')}
-      </Link>
-      <h1 className="text-3xl font-bold">{t('title')}</h1>
+      <FieldHeading back={{ href: '/', label: `← ${tc('back')}` }} title={t('title')} className="space-y-4" />
       <p className="text-slate-700">{t('intro', { name: profile.name, email: profile.email })}</p>
       <IntlScope namespaces={['profile']}>
         <ProfileForm locale={profile.locale} browserLocale={browser} />

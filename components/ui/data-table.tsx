@@ -123,3 +123,18 @@ export function DataTable<Row>({
     </div>
   );
 }
+
+/** A page of a desk list as the API answers it (`{ items, total, page, pageCount }`) with the URL's sort. */
+export type ListTableProps<Row> = {
+  list: { items: Row[]; page: number; pageCount: number; total: number };
+  sort: string;
+  dir: 'asc' | 'desc';
+};
+
+/** A DataTable of one page of a desk list. */
+export function ListTable<Row>({
+  list,
+  ...props
+}: ListTableProps<Row> & { caption: string; columns: ColumnDef<Row, unknown>[] }) {
+  return <DataTable data={list.items} page={list.page} pageCount={list.pageCount} total={list.total} {...props} />;
+}

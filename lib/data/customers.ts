@@ -6,9 +6,9 @@ import { notFound } from '@/lib/server/errors';
 import type { SessionUser } from '@/lib/auth/session';
 import type { CustomerListQuery, customerInputSchema, customerPatchSchema } from '@/lib/validation/customers';
 import type { z } from 'zod';
-import { allOf, archivedWhere, pageOf, searchWhere, windowOf } from './list';
+import { allOf, archivedWhere, searchWhere } from './list';
 import { assertOfficeWriter, crewJobsWhere } from './scope';
-import { archiveOrDelete, createAudited, lockOwnRow, updateAudited } from './records';
+import { archiveOrDelete, createAudited, lockOwnRow, plainPage, updateAudited } from './records';
 
 const ENTITY = 'customer';
 
@@ -23,19 +23,7 @@ export async function listCustomers(user: SessionUser, query: CustomerListQuery,
     searchWhere(query.q, ['name', 'contactName', 'email', 'phone']),
     crewJobsWhere(user, 'id', 'customer_id'),
   );
-  const { rows, count } = await Customer.findAndCountAll({
-    where,
-    order: [
-      [query.sort, query.dir.toUpperCase()],
-      ['id', 'ASC'],
-    ],
-    ...windowOf(query, exportAll),
-  });
-  return pageOf(
-    rows.map((row) => row.get({ plain: true })),
-    count,
-    query,
-  );
+  return plainPage<Customer>(Customer, where, query, exportAll);
 }
 
 /** One customer with its sites; throws 404 when it is not the caller's to see. */

@@ -1,9 +1,12 @@
 import 'server-only';
-import type { Model, ModelStatic, Transaction, WhereOptions } from 'sequelize';
+import type { Attributes, Model, ModelStatic, Transaction, WhereOptions } from 'sequelize';
 import { sequelize } from '@/lib/data/db';
 import { changedFields, recordAudit } from '@/lib/data/audit';
 import { notFound } from '@/lib/server/errors';
 import type { SessionUser } from '@/lib/auth/session';
+import type { ListQuery } from '@/lib/validation/list';
+import { pageOf, windowOf } from './list';
+import { assertAdmin } from './scope';
 
 // The shared steps of writing a company's record: lock it, change it, archive or delete it — each audited.
 
@@ -93,4 +96,74 @@ export async function archiveOrDelete(
     await recordAudit(user, { action: 'archive', entityType, entityId: row.id, reason }, transaction);
   }
   return { id: row.id, archived: true, deleted: false };
+}
+
+/** One page of a company list as plain rows: the query's sort then id (a stable order), and its window. */
+export async function plainPage<M extends Row>(
+  model: ModelStatic<M>,
+  where: WhereOptions,
+  query: ListQuery,
+  exportAll: boolean,
+) {
+  const { rows, count } = await model.findAndCountAll({
+    where,
+    order: [
+      [query.sort, query.dir.toUpperCase()],
+      ['id', 'ASC'],
+    ],
+    ...windowOf(query, exportAll),
+  });
+  return pageOf(
+    rows.map((row) => row.get({ plain: true }) as Attributes<M>),
+    count,
+    query,
+  );
+}
+
+/**
+ * The reads and writes of a company settings record (packers, resin systems, check-list templates), each with
+ * the same checks: writes are an admin's (`assertAdmin`), rows are the company's (another company's is a 404 named
+ * `what`), and every change is audited as `entity` in its own transaction.
+ */
+export function settingsRecord<M extends Row & { name: string }>(model: ModelStatic<M>, entity: string, what: string) {
+  return {
+    /** The company's row, or 404. */
+    async find(user: SessionUser, id: string) {
+      const row = await model.findOne({ where: { id, companyId: user.companyId } as WhereOptions });
+      if (!row) throw notFound(what);
+      return row.get({ plain: true }) as Attributes<M>;
+    },
+    async create(user: SessionUser, values: Record<string, unknown>) {
+      assertAdmin(user);
+      return createAudited(user, model, entity, values) as Promise<Attributes<M>>;
+    },
+    /** `change` turns the locked row into what is written (it may throw to refuse the edit). */
+    async update(user: SessionUser, id: string, change: (row: M) => Record<string, unknown>) {
+      assertAdmin(user);
+      return sequelize.transaction(async (transaction) => {
+        const row = await lockOwnRow(model, user, id, what, transaction);
+        return updateAudited(user, row, entity, change(row), transaction) as Promise<Attributes<M>>;
+      });
+    },
+    /** Archives the row when `uses` counts anything that names it, deletes it otherwise (see archiveOrDelete). */
+    async archive(
+      user: SessionUser,
+      id: string,
+      uses: (transaction: Transaction) => Promise<number>,
+      archiveAs?: (row: M) => { values: Record<string, unknown>; isArchived: boolean },
+    ) {
+      assertAdmin(user);
+      return sequelize.transaction(async (transaction) => {
+        const row = await lockOwnRow(model, user, id, what, transaction);
+        const inUse = (await uses(transaction)) > 0;
+        const archive = archiveAs?.(row);
+        return archiveOrDelete(
+          user,
+          row,
+          { entityType: entity, inUse, summary: { name: row.name }, archive },
+          transaction,
+        );
+      });
+    },
+  };
 }

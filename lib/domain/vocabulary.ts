@@ -155,3 +155,10 @@ export const LABELS: Record<string, string> = {
 };
 
 export const label = (code: string) => LABELS[code] ?? code.replace(/_/g, ' ').replace(/^./, (c) => c.toUpperCase());
+
+/** A closed list as the options of a select or filter: each code with its label. */
+export const labelledOptions = (codes: readonly string[]) => codes.map((code) => ({ value: code, label: label(code) }));
+
+/** Rows with an id and a name (customers, crews, resin systems) as the options of a select or filter. */
+export const namedOptions = (rows: { id: string; name: string }[]) =>
+  rows.map((row) => ({ value: row.id, label: row.name }));

@@ -45,3 +45,12 @@ export function filledParams(raw: Record<string, string | string[] | undefined>)
     ),
   );
 }
+
+/**
+ * A list page's query from its URL: a hand-edited URL with a bad value falls back to the defaults (or `fallback`)
+ * rather than failing the page.
+ */
+export function queryOrDefaults<S extends z.ZodType>(schema: S, params: unknown, fallback: unknown = {}): z.output<S> {
+  const parsed = schema.safeParse(params);
+  return parsed.success ? parsed.data : schema.parse(fallback);
+}

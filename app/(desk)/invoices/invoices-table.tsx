@@ -3,7 +3,7 @@
 import type { ColumnDef } from '@tanstack/react-table';
 import Link from 'next/link';
 import { Badge, StatusBadge } from '@/components/ui/badge';
-import { DataTable } from '@/components/ui/data-table';
+import { ListTable, type ListTableProps } from '@/components/ui/data-table';
 import { formatMoney } from '@/lib/invoice/money';
 import type { InvoiceListResponse } from '@/lib/data/invoices';
 
@@ -48,17 +48,6 @@ const columns: ColumnDef<Row, unknown>[] = [
   { id: 'dueOn', header: 'Due', enableSorting: true, cell: ({ row }) => row.original.dueOn },
 ];
 
-export function InvoicesTable({ list, sort, dir }: { list: InvoiceListResponse; sort: string; dir: 'asc' | 'desc' }) {
-  return (
-    <DataTable
-      caption="Invoices"
-      columns={columns}
-      data={list.items}
-      page={list.page}
-      pageCount={list.pageCount}
-      total={list.total}
-      sort={sort}
-      dir={dir}
-    />
-  );
+export function InvoicesTable({ list, sort, dir }: ListTableProps<Row>) {
+  return <ListTable caption="Invoices" columns={columns} list={list} sort={sort} dir={dir} />;
 }

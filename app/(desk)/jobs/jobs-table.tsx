@@ -1,28 +1,15 @@
 'use client';
 
 import type { ColumnDef } from '@tanstack/react-table';
-import Link from 'next/link';
+import { recordColumn } from '@/components/desk/columns';
 import { StatusBadge } from '@/components/ui/badge';
-import { DataTable } from '@/components/ui/data-table';
+import { ListTable, type ListTableProps } from '@/components/ui/data-table';
 import type { JobListResponse } from '@/lib/data/jobs';
 
 type Row = JobListResponse['items'][number];
 
 const columns: ColumnDef<Row, unknown>[] = [
-  {
-    id: 'number',
-    header: 'Job',
-    enableSorting: true,
-    cell: ({ row }) => (
-      <Link
-        href={`/jobs/${row.original.id}`}
-        className="whitespace-nowrap font-semibold text-brand-700 hover:underline"
-      >
-        {row.original.number}
-        {row.original.archivedAt && <span className="ml-2 text-xs font-normal text-slate-500">(archived)</span>}
-      </Link>
-    ),
-  },
+  recordColumn({ id: 'number', header: 'Job', href: (id) => `/jobs/${id}`, text: (r) => r.number, nowrap: true }),
   { id: 'title', header: 'Title', enableSorting: true, cell: ({ row }) => row.original.title ?? '—' },
   { id: 'customer', header: 'Customer', cell: ({ row }) => row.original.customer?.name },
   { id: 'site', header: 'Site', cell: ({ row }) => `${row.original.site?.addressLine}, ${row.original.site?.city}` },
@@ -41,17 +28,6 @@ const columns: ColumnDef<Row, unknown>[] = [
   { id: 'crew', header: 'Crew', cell: ({ row }) => row.original.crew?.name ?? '—' },
 ];
 
-export function JobsTable({ list, sort, dir }: { list: JobListResponse; sort: string; dir: 'asc' | 'desc' }) {
-  return (
-    <DataTable
-      caption="Jobs"
-      columns={columns}
-      data={list.items}
-      page={list.page}
-      pageCount={list.pageCount}
-      total={list.total}
-      sort={sort}
-      dir={dir}
-    />
-  );
+export function JobsTable({ list, sort, dir }: ListTableProps<Row>) {
+  return <ListTable caption="Jobs" columns={columns} list={list} sort={sort} dir={dir} />;
 }

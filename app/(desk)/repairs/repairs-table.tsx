@@ -2,7 +2,7 @@
 
 import type { ColumnDef } from '@tanstack/react-table';
 import Link from 'next/link';
-import { DataTable } from '@/components/ui/data-table';
+import { ListTable, type ListTableProps } from '@/components/ui/data-table';
 import { formatInZone } from '@/lib/time/dates';
 import { label } from '@/lib/domain/vocabulary';
 import { formatLength, type UnitSystem } from '@/lib/units';
@@ -67,23 +67,9 @@ export function RepairsTable({
   dir,
   unitSystem,
   timeZone,
-}: {
-  list: RepairListResponse;
-  sort: string;
-  dir: 'asc' | 'desc';
+}: ListTableProps<Row> & {
   unitSystem: UnitSystem;
   timeZone: string;
 }) {
-  return (
-    <DataTable
-      caption="Repairs"
-      columns={columnsFor(unitSystem, timeZone)}
-      data={list.items}
-      page={list.page}
-      pageCount={list.pageCount}
-      total={list.total}
-      sort={sort}
-      dir={dir}
-    />
-  );
+  return <ListTable caption="Repairs" columns={columnsFor(unitSystem, timeZone)} list={list} sort={sort} dir={dir} />;
 }

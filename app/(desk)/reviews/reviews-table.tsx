@@ -5,7 +5,7 @@ import Link from 'next/link';
 import type { InstallListResponse } from '@/lib/data/install-list';
 import { FlagBadges } from '@/components/review/flag-badges';
 import { StatusBadge } from '@/components/ui/badge';
-import { DataTable } from '@/components/ui/data-table';
+import { ListTable, type ListTableProps } from '@/components/ui/data-table';
 import { formatInZone } from '@/lib/time/dates';
 import { label } from '@/lib/domain/vocabulary';
 import { formatLength, type UnitSystem } from '@/lib/units';
@@ -62,21 +62,15 @@ export function ReviewsTable({
   dir,
   timeZone,
   unitSystem,
-}: {
-  list: InstallListResponse;
-  sort: string;
-  dir: 'asc' | 'desc';
+}: ListTableProps<Row> & {
   timeZone: string;
   unitSystem: UnitSystem;
 }) {
   return (
-    <DataTable
+    <ListTable
       caption="Installs to review"
       columns={columnsFor(timeZone, unitSystem)}
-      data={list.items}
-      page={list.page}
-      pageCount={list.pageCount}
-      total={list.total}
+      list={list}
       sort={sort}
       dir={dir}
     />

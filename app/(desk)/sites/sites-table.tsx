@@ -2,23 +2,14 @@
 
 import type { ColumnDef } from '@tanstack/react-table';
 import Link from 'next/link';
-import { DataTable } from '@/components/ui/data-table';
+import { recordColumn } from '@/components/desk/columns';
+import { ListTable, type ListTableProps } from '@/components/ui/data-table';
 import type { SiteListResponse } from '@/lib/data/sites';
 
 type Row = SiteListResponse['items'][number];
 
 const columns: ColumnDef<Row, unknown>[] = [
-  {
-    id: 'name',
-    header: 'Site',
-    enableSorting: true,
-    cell: ({ row }) => (
-      <Link href={`/sites/${row.original.id}`} className="font-semibold text-brand-700 hover:underline">
-        {row.original.name}
-        {row.original.archivedAt && <span className="ml-2 text-xs font-normal text-slate-500">(archived)</span>}
-      </Link>
-    ),
-  },
+  recordColumn({ id: 'name', header: 'Site', href: (id) => `/sites/${id}`, text: (r) => r.name }),
   {
     id: 'customer',
     header: 'Customer',
@@ -36,17 +27,6 @@ const columns: ColumnDef<Row, unknown>[] = [
   { id: 'postalCode', header: 'Postal code', cell: ({ row }) => row.original.postalCode ?? '—' },
 ];
 
-export function SitesTable({ list, sort, dir }: { list: SiteListResponse; sort: string; dir: 'asc' | 'desc' }) {
-  return (
-    <DataTable
-      caption="Sites"
-      columns={columns}
-      data={list.items}
-      page={list.page}
-      pageCount={list.pageCount}
-      total={list.total}
-      sort={sort}
-      dir={dir}
-    />
-  );
+export function SitesTable({ list, sort, dir }: ListTableProps<Row>) {
+  return <ListTable caption="Sites" columns={columns} list={list} sort={sort} dir={dir} />;
 }

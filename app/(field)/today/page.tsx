@@ -2,6 +2,7 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { KeepForOffline } from '@/components/shell/keep-for-offline';
 import { getLocale, getTranslations } from 'next-intl/server';
+import { FieldHeading } from '@/components/field/field-heading';
 import { IntlScope } from '@/components/shell/intl-scope';
 import { buttonVariants } from '@/components/ui/button';
 import { labelIn } from '@/i18n/labels';
@@ -34,7 +35,7 @@ export default async function Page() {
     <IntlScope namespaces={['today']}>
       <div className="space-y-4">
         <KeepForOffline urls={keep} userId={user.id} />
-        <h1 className="text-3xl font-bold">{t('title')}</h1>
+        <FieldHeading title={t('title')} />
         {jobs.length === 0 && <p className="rounded-xl bg-white p-6 text-slate-700">{t('none')}</p>}
         {jobs.map((job) => (
           <article

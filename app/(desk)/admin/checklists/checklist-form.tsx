@@ -4,7 +4,8 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useFieldArray, useForm } from 'react-hook-form';
-import { FormField, errorProps } from '@/components/desk/form-field';
+import { FormActions } from '@/components/desk/form-actions';
+import { Field, errorProps } from '@/components/desk/form-field';
 import { Input } from '@/components/ui/input';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
@@ -23,17 +24,18 @@ import { cn } from '@/lib/ui/cn';
 export function ChecklistForm({ id, initial }: { id?: string; initial?: ChecklistTemplateFormValues }) {
   const router = useRouter();
   const [message, setMessage] = useState<string>();
+  const form = useForm<ChecklistTemplateFormValues, unknown, ChecklistTemplateInput>({
+    resolver: zodResolver(checklistTemplateInputSchema),
+    defaultValues: initial ?? { name: '', active: true, items: [{ label: '', required: true }] },
+  });
   const {
     register,
     control,
     handleSubmit,
     setError,
     setFocus,
-    formState: { errors, isSubmitting },
-  } = useForm<ChecklistTemplateFormValues, unknown, ChecklistTemplateInput>({
-    resolver: zodResolver(checklistTemplateInputSchema),
-    defaultValues: initial ?? { name: '', active: true, items: [{ label: '', required: true }] },
-  });
+    formState: { errors },
+  } = form;
   // keyName: our items have an `id` of their own.
   const { fields, append, remove, move } = useFieldArray({ control, name: 'items', keyName: 'key' });
 
@@ -53,11 +55,7 @@ export function ChecklistForm({ id, initial }: { id?: string; initial?: Checklis
   return (
     <form onSubmit={onSubmit} noValidate className={cn(cardClass, 'max-w-3xl space-y-4')}>
       <div className="grid gap-4 md:grid-cols-3">
-        <div className="md:col-span-2">
-          <FormField id="name" label="Name" error={errors.name?.message}>
-            <Input {...register('name')} {...errorProps('name', errors.name?.message)} autoFocus />
-          </FormField>
-        </div>
+        <Field form={form} name="name" label="Name" autoFocus className="md:col-span-2" />
         <label className="flex items-center gap-2 self-end text-sm font-medium">
           <input type="checkbox" {...register('active')} className="h-4 w-4" /> Active (offered to new installs)
         </label>
@@ -149,14 +147,7 @@ export function ChecklistForm({ id, initial }: { id?: string; initial?: Checklis
       <p role="status" aria-live="polite" className="text-sm text-slate-700">
         {message}
       </p>
-      <div className="flex gap-2">
-        <Button type="submit" disabled={isSubmitting}>
-          {isSubmitting ? 'Saving…' : id ? 'Save check-list' : 'Create check-list'}
-        </Button>
-        <Button type="button" variant="secondary" onClick={() => router.back()}>
-          Cancel
-        </Button>
-      </div>
+      <FormActions form={form} className="" submitLabel={id ? 'Save check-list' : 'Create check-list'} cancel />
     </form>
   );
 }

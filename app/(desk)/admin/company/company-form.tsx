@@ -4,9 +4,9 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
-import { FormField, errorProps } from '@/components/desk/form-field';
-import { Input, Select } from '@/components/ui/input';
-import { Button } from '@/components/ui/button';
+import { FormActions, type FormMessage } from '@/components/desk/form-actions';
+import { Field, FormField, errorProps } from '@/components/desk/form-field';
+import { Select } from '@/components/ui/input';
 import { applyServerErrors, submitJson } from '@/lib/client/submit-json';
 import { UNIT_SYSTEMS, type UnitSystemName } from '@/lib/domain/vocabulary';
 import { lengthFromSi, lengthToSi, unitLabels } from '@/lib/units';
@@ -30,20 +30,14 @@ const SERVER_FIELD: Record<string, keyof CompanyFormValues> = {
 /** The company's settings; lengths are entered in the unit system picked here and sent to PATCH /api/company in millimetres. */
 export function CompanyForm({ initial, timeZones }: { initial: CompanyFormValues; timeZones: string[] }) {
   const router = useRouter();
-  const [message, setMessage] = useState<{ ok: boolean; text: string }>();
-  const {
-    register,
-    control,
-    handleSubmit,
-    setError,
-    setValue,
-    getValues,
-    formState: { errors, isSubmitting },
-  } = useForm<CompanyFormValues>({
+  const [message, setMessage] = useState<FormMessage>();
+  const form = useForm<CompanyFormValues>({
     resolver: zodResolver(companyFormSchema),
     defaultValues: initial,
   });
-  const unitSystem = useWatch({ control, name: 'unitSystem' });
+  const { register, setError, setValue, getValues } = form;
+  const { errors } = form.formState;
+  const unitSystem = useWatch({ control: form.control, name: 'unitSystem' });
   const lengthUnit = unitLabels(unitSystem).shortLength;
 
   // Switching the unit system keeps the overlap the same length, shown in the new unit.
@@ -59,7 +53,7 @@ export function CompanyForm({ initial, timeZones }: { initial: CompanyFormValues
     return unitField.onChange(event);
   };
 
-  const onSubmit = handleSubmit(async (values) => {
+  const onSubmit = form.handleSubmit(async (values) => {
     setMessage(undefined);
     const result = await submitJson('/api/company', 'PATCH', formToCompanyPatch(values));
     if (!result.ok) {
@@ -74,23 +68,15 @@ export function CompanyForm({ initial, timeZones }: { initial: CompanyFormValues
 
   return (
     <form onSubmit={onSubmit} noValidate className={cn(cardClass, 'grid max-w-2xl gap-4 md:grid-cols-2')}>
-      <FormField id="name" label="Company name" error={errors.name?.message}>
-        <Input {...register('name')} {...errorProps('name', errors.name?.message)} />
-      </FormField>
-      <FormField
-        id="timeZone"
+      <Field form={form} name="name" label="Company name" />
+      <Field
+        form={form}
+        name="timeZone"
         label="Time zone"
-        error={errors.timeZone?.message}
+
         hint="Times are stored in UTC and shown in this zone."
-      >
-        <Select {...register('timeZone')} {...errorProps('timeZone', errors.timeZone?.message)}>
-          {timeZones.map((zone) => (
-            <option key={zone} value={zone}>
-              {zone}
-            </option>
-          ))}
-        </Select>
-      </FormField>
+        choices={timeZones.map((zone) => ({ value: zone, label: zone }))}
+      />
       <FormField id="unitSystem" label="Units" error={errors.unitSystem?.message}>
         <Select {...unitField} onChange={onUnitChange} {...errorProps('unitSystem', errors.unitSystem?.message)}>
           {UNIT_SYSTEMS.map((system) => (
@@ -100,84 +86,56 @@ export function CompanyForm({ initial, timeZones }: { initial: CompanyFormValues
           ))}
         </Select>
       </FormField>
-      <FormField
-        id="minOverlapPerEnd"
+      <Field
+        form={form}
+        name="minOverlapPerEnd"
         label={`Minimum overlap per end (${lengthUnit})`}
-        error={errors.minOverlapPerEnd?.message}
         hint="Added to each end of a defect to size its patch."
-      >
-        <Input
-          type="number"
-          step="any"
-          min={0}
-          {...register('minOverlapPerEnd', { valueAsNumber: true })}
-          {...errorProps('minOverlapPerEnd', errors.minOverlapPerEnd?.message)}
-        />
-      </FormField>
-      <FormField
-        id="safetyMarginPercent"
+        type="number"
+        step="any"
+        min={0}
+        valueAsNumber
+      />
+      <Field
+        form={form}
+        name="safetyMarginPercent"
         label="Working-window reserve (%)"
-        error={errors.safetyMarginPercent?.message}
         hint={
           'Share of the resin’s working time held back in the go/no-go: at 20 %, the minutes from mixing until the ' +
           'patch is on the packer plus the dry run’s pull must fit in 80 % of the working time. ' +
           'Follow the resin maker’s instructions where they ask for more.'
         }
-      >
-        <Input
-          type="number"
-          step="any"
-          min={0}
-          max={90}
-          {...register('safetyMarginPercent', { valueAsNumber: true })}
-          {...errorProps('safetyMarginPercent', errors.safetyMarginPercent?.message)}
-        />
-      </FormField>
-      <FormField
-        id="holdReservePercent"
+        type="number"
+        step="any"
+        min={0}
+        max={90}
+        valueAsNumber
+      />
+      <Field
+        form={form}
+        name="holdReservePercent"
         label="Hold reserve (%)"
-        error={errors.holdReservePercent?.message}
         hint="Extra time kept inflated on top of the resin’s hold: at 10 %, a 90 min hold means deflate after 99 min. The tablet shows both."
-      >
-        <Input
-          type="number"
-          step="any"
-          min={0}
-          max={100}
-          {...register('holdReservePercent', { valueAsNumber: true })}
-          {...errorProps('holdReservePercent', errors.holdReservePercent?.message)}
-        />
-      </FormField>
-      <FormField
-        id="linerModulus"
+        type="number"
+        step="any"
+        min={0}
+        max={100}
+        valueAsNumber
+      />
+      <Field
+        form={form}
+        name="linerModulus"
         label={`Liner short-term modulus (${unitSystem === 'imperial' ? 'psi' : 'MPa'})`}
-        error={errors.linerModulus?.message}
         hint={
           "The initial flexural modulus of the laminate you install, from its maker's data, for the repair plan's " +
           'ASTM F1216 X1 checks. Leave empty to use the F1216 minimum (250,000 psi / 1,724 MPa).'
         }
-      >
-        <Input
-          type="number"
-          step="any"
-          min={0}
-          {...register('linerModulus', { valueAsNumber: true })}
-          {...errorProps('linerModulus', errors.linerModulus?.message)}
-        />
-      </FormField>
-      {message && (
-        <p
-          role={message.ok ? 'status' : 'alert'}
-          className={cn('text-sm font-medium md:col-span-2', message.ok ? 'text-safe-700' : 'text-missed-700')}
-        >
-          {message.text}
-        </p>
-      )}
-      <div className="md:col-span-2">
-        <Button type="submit" disabled={isSubmitting}>
-          {isSubmitting ? 'Saving…' : 'Save settings'}
-        </Button>
-      </div>
+        type="number"
+        step="any"
+        min={0}
+        valueAsNumber
+      />
+      <FormActions message={message} form={form} submitLabel="Save settings" />
     </form>
   );
 }

@@ -1,13 +1,10 @@
 'use client';
 
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useRouter } from 'next/navigation';
-import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { saveSettings } from '@/components/materials/save-settings';
-import { FormField, errorProps } from '@/components/desk/form-field';
-import { Input } from '@/components/ui/input';
-import { Button } from '@/components/ui/button';
+import { FormActions } from '@/components/desk/form-actions';
+import { Field } from '@/components/desk/form-field';
+import { useSaveRecord } from '@/components/desk/use-save-record';
 import { unitLabels, type UnitSystem } from '@/lib/units';
 import { packerFormSchema, type PackerFormValues, type PackerInput } from '@/lib/validation/packers';
 import { cardClass } from '@/components/ui/card';
@@ -34,50 +31,28 @@ export function PackerForm({
   initial?: PackerFormValues;
   unitSystem: UnitSystem;
 }) {
-  const router = useRouter();
-  const [message, setMessage] = useState<string>();
   const { shortLength: len, pressure } = unitLabels(unitSystem);
-  const {
-    register,
-    handleSubmit,
-    setError,
-    formState: { errors, isSubmitting, dirtyFields },
-  } = useForm<PackerFormValues, unknown, PackerInput>({
+  const form = useForm<PackerFormValues, unknown, PackerInput>({
     resolver: zodResolver(packerFormSchema(unitSystem)),
     defaultValues: initial ?? BLANK,
   });
-  const onSubmit = handleSubmit(async (values) => {
-    const saved = await saveSettings({
+  const { message, save } = useSaveRecord(form.setError);
+  const onSubmit = form.handleSubmit((values) =>
+    save({
       collection: '/api/packers',
       id,
-      values,
-      dirty: dirtyFields,
-      setError,
-      setMessage,
-    });
-    if (!saved) return;
-    router.push(id ? `/admin/packers/${saved}` : '/admin/packers');
-    router.refresh();
-  });
-  const num = (name: keyof PackerFormValues, text: string, hint?: string) => (
-    <FormField id={name} label={text} error={errors[name]?.message} hint={hint}>
-      <Input
-        type="number"
-        step="any"
-        inputMode="decimal"
-        {...register(name, { valueAsNumber: true })}
-        {...errorProps(name, errors[name]?.message)}
-      />
-    </FormField>
+      body: values,
+      dirty: form.formState.dirtyFields,
+      next: (saved) => (id ? `/admin/packers/${saved}` : '/admin/packers'),
+    }),
+  );
+  const num = (name: keyof PackerFormValues, text: string) => (
+    <Field form={form} name={name} label={text} decimal valueAsNumber />
   );
   return (
     <form onSubmit={onSubmit} noValidate className={cn(cardClass, 'grid max-w-3xl gap-4 md:grid-cols-2')}>
-      <FormField id="name" label="Name" error={errors.name?.message}>
-        <Input {...register('name')} {...errorProps('name', errors.name?.message)} autoFocus />
-      </FormField>
-      <FormField id="serial" label="Serial number" error={errors.serial?.message}>
-        <Input {...register('serial')} {...errorProps('serial', errors.serial?.message)} />
-      </FormField>
+      <Field form={form} name="name" label="Name" autoFocus />
+      <Field form={form} name="serial" label="Serial number" />
       {num('minDiameterMm', `Smallest pipe inside diameter (${len})`)}
       {num('maxDiameterMm', `Largest pipe inside diameter (${len})`)}
       {num('bladderLengthMm', `Bladder length (${len})`)}
@@ -88,19 +63,7 @@ export function PackerForm({
         Enter the maker’s rating. A pressurised bladder can burst or move suddenly: never exceed its rating, and follow
         the maker’s instructions and local codes.
       </p>
-      {message && (
-        <p role="alert" className="text-sm font-medium text-missed-700 md:col-span-2">
-          {message}
-        </p>
-      )}
-      <div className="flex gap-2 md:col-span-2">
-        <Button type="submit" disabled={isSubmitting}>
-          {isSubmitting ? 'Saving…' : id ? 'Save changes' : 'Add packer'}
-        </Button>
-        <Button type="button" variant="secondary" onClick={() => router.back()}>
-          Cancel
-        </Button>
-      </div>
+      <FormActions message={message} form={form} submitLabel={id ? 'Save changes' : 'Add packer'} cancel />
     </form>
   );
 }

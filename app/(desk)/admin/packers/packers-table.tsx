@@ -1,25 +1,15 @@
 'use client';
 
 import type { ColumnDef } from '@tanstack/react-table';
-import Link from 'next/link';
-import { DataTable } from '@/components/ui/data-table';
+import { recordColumn } from '@/components/desk/columns';
+import { ListTable, type ListTableProps } from '@/components/ui/data-table';
 import { formatLength, formatPressure, type UnitSystem } from '@/lib/units';
 import type { PackerListResponse } from '@/lib/data/packers';
 
 type Row = PackerListResponse['items'][number];
 
 const columnsFor = (units: UnitSystem): ColumnDef<Row, unknown>[] => [
-  {
-    id: 'name',
-    header: 'Packer',
-    enableSorting: true,
-    cell: ({ row }) => (
-      <Link href={`/admin/packers/${row.original.id}`} className="font-semibold text-brand-700 hover:underline">
-        {row.original.name}
-        {row.original.archivedAt && <span className="ml-2 text-xs font-normal text-slate-500">(archived)</span>}
-      </Link>
-    ),
-  },
+  recordColumn({ id: 'name', header: 'Packer', href: (id) => `/admin/packers/${id}`, text: (r) => r.name }),
   { id: 'serial', header: 'Serial', cell: ({ row }) => row.original.serial ?? '—' },
   {
     id: 'minDiameterMm',
@@ -53,22 +43,8 @@ export function PackersTable({
   sort,
   dir,
   units,
-}: {
-  list: PackerListResponse;
-  sort: string;
-  dir: 'asc' | 'desc';
+}: ListTableProps<Row> & {
   units: UnitSystem;
 }) {
-  return (
-    <DataTable
-      caption="Packers"
-      columns={columnsFor(units)}
-      data={list.items}
-      page={list.page}
-      pageCount={list.pageCount}
-      total={list.total}
-      sort={sort}
-      dir={dir}
-    />
-  );
+  return <ListTable caption="Packers" columns={columnsFor(units)} list={list} sort={sort} dir={dir} />;
 }

@@ -1,13 +1,11 @@
 'use client';
 
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useRouter } from 'next/navigation';
-import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { saveSettings } from '@/components/materials/save-settings';
-import { FormField, errorProps } from '@/components/desk/form-field';
-import { Input, Select, Textarea } from '@/components/ui/input';
-import { Button } from '@/components/ui/button';
+import { FormActions } from '@/components/desk/form-actions';
+import { Field } from '@/components/desk/form-field';
+import { namedOptions } from '@/lib/domain/vocabulary';
+import { useSaveRecord } from '@/components/desk/use-save-record';
 import { unitLabels, type UnitSystem } from '@/lib/units';
 import { resinKitFormSchema, type ResinKitFormValues, type ResinKitInput } from '@/lib/validation/resin-kits';
 import { KitLabelScan } from './kit-label-scan';
@@ -29,15 +27,7 @@ export function ResinKitForm({
   /** Lot and expiry read from a label elsewhere (the new-kit link of the conditions step). */
   scanned?: { lot?: string; expiresOn?: string };
 }) {
-  const router = useRouter();
-  const [message, setMessage] = useState<string>();
-  const {
-    register,
-    handleSubmit,
-    setError,
-    setValue,
-    formState: { errors, isSubmitting, dirtyFields },
-  } = useForm<ResinKitFormValues, unknown, ResinKitInput>({
+  const form = useForm<ResinKitFormValues, unknown, ResinKitInput>({
     resolver: zodResolver(resinKitFormSchema(unitSystem)),
     defaultValues: initial ?? {
       resinSystemId: systems[0]?.id ?? '',
@@ -48,82 +38,50 @@ export function ResinKitForm({
       notes: '',
     },
   });
-  const onSubmit = handleSubmit(async (values) => {
-    const saved = await saveSettings({
+  const { message, save } = useSaveRecord(form.setError);
+  const onSubmit = form.handleSubmit((values) =>
+    save({
       collection: '/api/resin-kits',
       id,
-      values,
-      dirty: dirtyFields,
-      setError,
-      setMessage,
-    });
-    if (!saved) return;
-    router.push(`/admin/resin-kits/${saved}`);
-    router.refresh();
-  });
+      body: values,
+      dirty: form.formState.dirtyFields,
+      next: (saved) => `/admin/resin-kits/${saved}`,
+    }),
+  );
   return (
     <form onSubmit={onSubmit} noValidate className={cn(cardClass, 'grid max-w-3xl gap-4 md:grid-cols-2')}>
       <KitLabelScan
         editingId={id}
         onLabel={(label) => {
-          if (label.lot) setValue('lot', label.lot, { shouldDirty: true, shouldValidate: true });
-          if (label.expiresOn) setValue('expiresOn', label.expiresOn, { shouldDirty: true, shouldValidate: true });
+          const options = { shouldDirty: true, shouldValidate: true };
+          if (label.lot) form.setValue('lot', label.lot, options);
+          if (label.expiresOn) form.setValue('expiresOn', label.expiresOn, options);
         }}
       />
-      <FormField id="lot" label="Lot number" error={errors.lot?.message}>
-        <Input {...register('lot')} {...errorProps('lot', errors.lot?.message)} autoFocus />
-      </FormField>
-      <FormField id="resinSystemId" label="Resin system" error={errors.resinSystemId?.message}>
-        <Select {...register('resinSystemId')} {...errorProps('resinSystemId', errors.resinSystemId?.message)}>
-          {systems.map((s) => (
-            <option key={s.id} value={s.id}>
-              {s.name}
-            </option>
-          ))}
-        </Select>
-      </FormField>
-      <FormField id="expiresOn" label="Use by (expiry date)" error={errors.expiresOn?.message}>
-        <Input type="date" {...register('expiresOn')} {...errorProps('expiresOn', errors.expiresOn?.message)} />
-      </FormField>
-      <FormField id="receivedOn" label="Received on" error={errors.receivedOn?.message}>
-        <Input type="date" {...register('receivedOn')} {...errorProps('receivedOn', errors.receivedOn?.message)} />
-      </FormField>
-      <FormField
-        id="quantityL"
+      <Field form={form} name="lot" label="Lot number" autoFocus />
+      <Field form={form} name="resinSystemId" label="Resin system" choices={namedOptions(systems)} />
+      <Field form={form} name="expiresOn" label="Use by (expiry date)" type="date" />
+      <Field form={form} name="receivedOn" label="Received on" type="date" />
+      <Field
+        form={form}
+        name="quantityL"
         label={`Quantity on hand (${unitLabels(unitSystem).volume})`}
-        error={errors.quantityL?.message}
-      >
-        <Input
-          type="number"
-          step="any"
-          min={0}
-          inputMode="decimal"
-          {...register('quantityL', { valueAsNumber: true })}
-          {...errorProps('quantityL', errors.quantityL?.message)}
-        />
-      </FormField>
-      <div className="md:col-span-2">
-        <FormField id="notes" label="Notes (storage, supplier’s safety data sheet…)" error={errors.notes?.message}>
-          <Textarea {...register('notes')} {...errorProps('notes', errors.notes?.message)} />
-        </FormField>
-      </div>
+        decimal
+        valueAsNumber
+        min={0}
+      />
+      <Field
+        form={form}
+        name="notes"
+        label="Notes (storage, supplier’s safety data sheet…)"
+        as="textarea"
+        className="md:col-span-2"
+      />
       <p className="text-xs text-slate-600 md:col-span-2">
         Resin components are chemicals: store and handle them as their safety data sheet says. The crew cannot pick a
         kit past its use-by date.
       </p>
-      {message && (
-        <p role="alert" className="text-sm font-medium text-missed-700 md:col-span-2">
-          {message}
-        </p>
-      )}
-      <div className="flex gap-2 md:col-span-2">
-        <Button type="submit" disabled={isSubmitting}>
-          {isSubmitting ? 'Saving…' : id ? 'Save changes' : 'Add kit'}
-        </Button>
-        <Button type="button" variant="secondary" onClick={() => router.back()}>
-          Cancel
-        </Button>
-      </div>
+      <FormActions message={message} form={form} submitLabel={id ? 'Save changes' : 'Add kit'} cancel />
     </form>
   );
 }

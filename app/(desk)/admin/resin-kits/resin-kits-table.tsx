@@ -1,26 +1,16 @@
 'use client';
 
 import type { ColumnDef } from '@tanstack/react-table';
-import Link from 'next/link';
+import { recordColumn } from '@/components/desk/columns';
 import { Badge } from '@/components/ui/badge';
-import { DataTable } from '@/components/ui/data-table';
+import { ListTable, type ListTableProps } from '@/components/ui/data-table';
 import { formatVolume, type UnitSystem } from '@/lib/units';
 import type { ResinKitListResponse } from '@/lib/data/resin-kits';
 
 type Row = ResinKitListResponse['items'][number];
 
 const columnsFor = (units: UnitSystem): ColumnDef<Row, unknown>[] => [
-  {
-    id: 'lot',
-    header: 'Lot',
-    enableSorting: true,
-    cell: ({ row }) => (
-      <Link href={`/admin/resin-kits/${row.original.id}`} className="font-semibold text-brand-700 hover:underline">
-        {row.original.lot}
-        {row.original.archivedAt && <span className="ml-2 text-xs font-normal text-slate-500">(archived)</span>}
-      </Link>
-    ),
-  },
+  recordColumn({ id: 'lot', header: 'Lot', href: (id) => `/admin/resin-kits/${id}`, text: (r) => r.lot }),
   { id: 'resinSystem', header: 'Resin system', cell: ({ row }) => row.original.resinSystem.name },
   {
     id: 'expiresOn',
@@ -47,22 +37,8 @@ export function ResinKitsTable({
   sort,
   dir,
   units,
-}: {
-  list: ResinKitListResponse;
-  sort: string;
-  dir: 'asc' | 'desc';
+}: ListTableProps<Row> & {
   units: UnitSystem;
 }) {
-  return (
-    <DataTable
-      caption="Resin kits"
-      columns={columnsFor(units)}
-      data={list.items}
-      page={list.page}
-      pageCount={list.pageCount}
-      total={list.total}
-      sort={sort}
-      dir={dir}
-    />
-  );
+  return <ListTable caption="Resin kits" columns={columnsFor(units)} list={list} sort={sort} dir={dir} />;
 }

@@ -1,14 +1,11 @@
 'use client';
 
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useRouter } from 'next/navigation';
-import { useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
-import { saveSettings } from '@/components/materials/save-settings';
-import { FormField, errorProps } from '@/components/desk/form-field';
-import { Input, Select } from '@/components/ui/input';
-import { Button } from '@/components/ui/button';
-import { RESIN_CHEMISTRIES, label } from '@/lib/domain/vocabulary';
+import { FormActions } from '@/components/desk/form-actions';
+import { Field } from '@/components/desk/form-field';
+import { useSaveRecord } from '@/components/desk/use-save-record';
+import { RESIN_CHEMISTRIES, labelledOptions } from '@/lib/domain/vocabulary';
 import { DEFAULT_EXCESS_PCT, DEFAULT_RESIN_TO_FABRIC_RATIO } from '@/lib/sizing';
 import { unitLabels, type UnitSystem } from '@/lib/units';
 import {
@@ -46,64 +43,33 @@ export function ResinSystemForm({
   initial?: ResinSystemFormValues;
   unitSystem: UnitSystem;
 }) {
-  const router = useRouter();
-  const [message, setMessage] = useState<string>();
   const deg = unitLabels(unitSystem).temperature;
-  const {
-    register,
-    control,
-    handleSubmit,
-    setError,
-    formState: { errors, isSubmitting, dirtyFields },
-  } = useForm<ResinSystemFormValues, unknown, ResinSystemInput>({
+  const form = useForm<ResinSystemFormValues, unknown, ResinSystemInput>({
     resolver: zodResolver(resinSystemFormSchema(unitSystem)),
     defaultValues: initial ?? BLANK,
   });
-  const kind = useWatch({ control, name: 'sensitivityKind' });
+  const kind = useWatch({ control: form.control, name: 'sensitivityKind' });
+  const { message, save } = useSaveRecord(form.setError);
 
-  const onSubmit = handleSubmit(async (values) => {
-    const saved = await saveSettings({
+  const onSubmit = form.handleSubmit((values) =>
+    save({
       collection: '/api/resin-systems',
       id,
-      values,
-      dirty: dirtyFields,
-      setError,
-      setMessage,
+      body: values,
+      dirty: form.formState.dirtyFields,
       together: ['sensitivityKind', 'doublingC', 'activationEnergyKj'],
-    });
-    if (!saved) return;
-    router.push(id ? `/admin/resin-systems/${saved}` : '/admin/resin-systems');
-    router.refresh();
-  });
+      next: (saved) => (id ? `/admin/resin-systems/${saved}` : '/admin/resin-systems'),
+    }),
+  );
 
   const num = (name: keyof ResinSystemFormValues, text: string, hint?: string) => (
-    <FormField id={name} label={text} error={errors[name]?.message} hint={hint}>
-      <Input
-        type="number"
-        step="any"
-        inputMode="decimal"
-        {...register(name, { valueAsNumber: true })}
-        {...errorProps(name, errors[name]?.message)}
-      />
-    </FormField>
+    <Field form={form} name={name} label={text} hint={hint} decimal valueAsNumber />
   );
 
   return (
     <form onSubmit={onSubmit} noValidate className={cn(cardClass, 'grid max-w-3xl gap-4 md:grid-cols-3')}>
-      <div className="md:col-span-2">
-        <FormField id="name" label="Name" error={errors.name?.message}>
-          <Input {...register('name')} {...errorProps('name', errors.name?.message)} autoFocus />
-        </FormField>
-      </div>
-      <FormField id="chemistry" label="Chemistry" error={errors.chemistry?.message}>
-        <Select {...register('chemistry')} {...errorProps('chemistry', errors.chemistry?.message)}>
-          {RESIN_CHEMISTRIES.map((c) => (
-            <option key={c} value={c}>
-              {label(c)}
-            </option>
-          ))}
-        </Select>
-      </FormField>
+      <Field form={form} name="name" label="Name" autoFocus className="md:col-span-2" />
+      <Field form={form} name="chemistry" label="Chemistry" choices={labelledOptions(RESIN_CHEMISTRIES)} />
       <p className="text-xs text-slate-600 md:col-span-3">
         Times as the data sheet gives them at its reference temperature. Always follow the resin maker’s instructions;
         the clock only corrects them for temperature.
@@ -119,12 +85,10 @@ export function ResinSystemForm({
         'Mix to patch on packer (min)',
         'Wet-out and loading: the tablet’s default, counted in the GO / NO-GO',
       )}
-      <FormField id="sensitivityKind" label="Temperature sensitivity" error={errors.sensitivityKind?.message}>
-        <Select {...register('sensitivityKind')} {...errorProps('sensitivityKind', errors.sensitivityKind?.message)}>
-          <option value="doubling">Times halve every step warmer</option>
-          <option value="arrhenius">Activation energy (Arrhenius)</option>
-        </Select>
-      </FormField>
+      <Field form={form} name="sensitivityKind" label="Temperature sensitivity" as="select">
+        <option value="doubling">Times halve every step warmer</option>
+        <option value="arrhenius">Activation energy (Arrhenius)</option>
+      </Field>
       {kind === 'arrhenius'
         ? num('activationEnergyKj', 'Activation energy (kJ/mol)')
         : num(
@@ -138,19 +102,13 @@ export function ResinSystemForm({
       </p>
       {num('resinToFabricRatio', 'Resin to fabric (by volume)', '1 = as much resin as fabric')}
       {num('resinExcessPct', 'Extra mixed (%)', 'Left in the pot and on the wet-out sheet')}
-      {message && (
-        <p role="alert" className="text-sm font-medium text-missed-700 md:col-span-3">
-          {message}
-        </p>
-      )}
-      <div className="flex gap-2 md:col-span-3">
-        <Button type="submit" disabled={isSubmitting}>
-          {isSubmitting ? 'Saving…' : id ? 'Save changes' : 'Add resin system'}
-        </Button>
-        <Button type="button" variant="secondary" onClick={() => router.back()}>
-          Cancel
-        </Button>
-      </div>
+      <FormActions
+        message={message}
+        form={form}
+        submitLabel={id ? 'Save changes' : 'Add resin system'}
+        cancel
+        className="md:col-span-3"
+      />
     </form>
   );
 }

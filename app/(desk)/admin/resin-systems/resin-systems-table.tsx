@@ -1,8 +1,8 @@
 'use client';
 
 import type { ColumnDef } from '@tanstack/react-table';
-import Link from 'next/link';
-import { DataTable } from '@/components/ui/data-table';
+import { recordColumn } from '@/components/desk/columns';
+import { ListTable, type ListTableProps } from '@/components/ui/data-table';
 import { label } from '@/lib/domain/vocabulary';
 import { formatTemperature, type UnitSystem } from '@/lib/units';
 import type { ResinSystemListResponse } from '@/lib/data/resin-systems';
@@ -10,17 +10,7 @@ import type { ResinSystemListResponse } from '@/lib/data/resin-systems';
 type Row = ResinSystemListResponse['items'][number];
 
 const columnsFor = (units: UnitSystem): ColumnDef<Row, unknown>[] => [
-  {
-    id: 'name',
-    header: 'Resin system',
-    enableSorting: true,
-    cell: ({ row }) => (
-      <Link href={`/admin/resin-systems/${row.original.id}`} className="font-semibold text-brand-700 hover:underline">
-        {row.original.name}
-        {row.original.archivedAt && <span className="ml-2 text-xs font-normal text-slate-500">(archived)</span>}
-      </Link>
-    ),
-  },
+  recordColumn({ id: 'name', header: 'Resin system', href: (id) => `/admin/resin-systems/${id}`, text: (r) => r.name }),
   { id: 'chemistry', header: 'Chemistry', enableSorting: true, cell: ({ row }) => label(row.original.chemistry) },
   {
     id: 'refTempC',
@@ -47,22 +37,8 @@ export function ResinSystemsTable({
   sort,
   dir,
   units,
-}: {
-  list: ResinSystemListResponse;
-  sort: string;
-  dir: 'asc' | 'desc';
+}: ListTableProps<Row> & {
   units: UnitSystem;
 }) {
-  return (
-    <DataTable
-      caption="Resin systems"
-      columns={columnsFor(units)}
-      data={list.items}
-      page={list.page}
-      pageCount={list.pageCount}
-      total={list.total}
-      sort={sort}
-      dir={dir}
-    />
-  );
+  return <ListTable caption="Resin systems" columns={columnsFor(units)} list={list} sort={sort} dir={dir} />;
 }

@@ -2,7 +2,7 @@
 
 import type { ColumnDef } from '@tanstack/react-table';
 import Link from 'next/link';
-import { DataTable } from '@/components/ui/data-table';
+import { ListTable, type ListTableProps } from '@/components/ui/data-table';
 import { Badge } from '@/components/ui/badge';
 import { label } from '@/lib/domain/vocabulary';
 import type { UserListResponse } from '@/lib/data/users';
@@ -15,10 +15,7 @@ export function UsersTable({
   sort,
   dir,
   selfId,
-}: {
-  list: UserListResponse;
-  sort: string;
-  dir: 'asc' | 'desc';
+}: ListTableProps<Row> & {
   selfId: string;
 }) {
   const columns: ColumnDef<Row, unknown>[] = [
@@ -47,16 +44,5 @@ export function UsersTable({
       cell: ({ row }) => <UserActions user={row.original} isSelf={row.original.id === selfId} />,
     },
   ];
-  return (
-    <DataTable
-      caption="Users"
-      columns={columns}
-      data={list.items}
-      page={list.page}
-      pageCount={list.pageCount}
-      total={list.total}
-      sort={sort}
-      dir={dir}
-    />
-  );
+  return <ListTable caption="Users" columns={columns} list={list} sort={sort} dir={dir} />;
 }

@@ -6,6 +6,7 @@ import { useRouter } from 'next/navigation';
 import { useLocale, useTranslations } from 'next-intl';
 import { useEffect, useMemo, useState } from 'react';
 import type { InstallViewResponse } from '@/lib/data/installs';
+import { FieldHeading } from '@/components/field/field-heading';
 import { useNow } from '@/components/install/countdown';
 import { resinClockSpec, type CurePlan, type QualityFlag } from '@/lib/cure';
 import { installClock } from '@/lib/install/plan-and-flags';
@@ -126,13 +127,10 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
 
   return (
     <div className="space-y-4">
-      <header>
-        <Link href="/today" className="text-base font-semibold text-brand-700 underline">
-          {t('backToToday')}
-        </Link>
-        <h1 className="mt-1 text-3xl font-bold">
-          {t('heading', { position: view.repair.position, number: view.job.number })}
-        </h1>
+      <FieldHeading
+        back={{ href: '/today', label: t('backToToday') }}
+        title={t('heading', { position: view.repair.position, number: view.job.number })}
+      >
         <p className="text-lg text-slate-700">
           {t('where', {
             address: view.job.site.addressLine,
@@ -142,7 +140,7 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
           })}
           {view.repair.clockPosition ? t('clockPosition', { position: view.repair.clockPosition }) : ''}
         </p>
-      </header>
+      </FieldHeading>
       {view.chain.replaces && !state.signedOffAt && state.inspection?.result !== 'fail' && (
         <p className="rounded-lg bg-slate-100 px-4 py-2 text-lg" data-testid="redo-of">
           {t.rich('redoOf', {
