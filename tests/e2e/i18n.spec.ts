@@ -188,3 +188,23 @@ test.describe('a Spanish-speaking technician', () => {
     await expect(page.getByRole('heading', { level: 1 })).toHaveText('El trabajo de hoy');
   });
 });
+
+test('an office user who reads Spanish gets the desk’s navigation and common actions in Spanish', async ({ page }) => {
+  await signIn(page, 'office@demo.test');
+  await expect(page).toHaveURL('/jobs');
+  expect((await page.request.patch('/api/profile', { data: { locale: 'es' } })).status()).toBe(200);
+  try {
+    await page.goto('/jobs');
+    await expect(page.locator('html')).toHaveAttribute('lang', 'es');
+    await expect(page.getByRole('navigation').getByRole('link', { name: 'Trabajos' })).toBeVisible();
+    const search = page.getByRole('search');
+    await expect(search.getByText('Buscar', { exact: true })).toBeVisible();
+    await expect(search.getByRole('button', { name: 'Filtrar' })).toBeVisible();
+    await expect(page.getByRole('link', { name: 'Exportar CSV' })).toBeVisible();
+    await expect(page.getByText(/^\d+ en total · página 1 de \d+$/)).toBeVisible();
+    await expect(page.getByRole('button', { name: 'Siguiente' })).toBeVisible();
+  } finally {
+    // The demo's office user follows the browser's language.
+    expect((await page.request.patch('/api/profile', { data: { locale: null } })).status()).toBe(200);
+  }
+});

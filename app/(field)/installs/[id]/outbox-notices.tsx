@@ -1,7 +1,6 @@
 'use client';
 
 import { useTranslations } from 'next-intl';
-import { labelIn } from '@/i18n/labels';
 import type { OutboxEntry } from '@/lib/client/outbox';
 
 /**
@@ -11,7 +10,6 @@ import type { OutboxEntry } from '@/lib/client/outbox';
  */
 export function OutboxNotices({ waiting, parked }: { waiting: OutboxEntry[]; parked: OutboxEntry[] }) {
   const t = useTranslations('sync');
-  const tl = useTranslations('labels');
   const byUser = new Map<string, { name: string; count: number }>();
   for (const entry of waiting) {
     const key = entry.userId ?? '';
@@ -40,7 +38,7 @@ export function OutboxNotices({ waiting, parked }: { waiting: OutboxEntry[]; par
           <ul className="mt-2 space-y-1">
             {parked.map((entry) => (
               <li key={entry.clientEventId} className="text-base" data-testid="outbox-parked-entry">
-                <span className="font-semibold">{labelIn(tl, entry.type)}</span>: {entry.lastError}
+                <span className="font-semibold">{entry.type.replace(/_/g, ' ')}</span>: {entry.lastError}
               </li>
             ))}
           </ul>
