@@ -2,7 +2,7 @@
 
 import { useRouter, useSearchParams } from 'next/navigation';
 import { useState, type FormEvent } from 'react';
-import { Button } from '@/components/ui/button';
+import { buttonVariants } from '@/components/ui/button-variants';
 import { safeCallbackPath } from '@/lib/auth/callback-url';
 import { signInWithPassword } from '@/lib/client/sign-in';
 import { checkSignIn, SIGN_IN_MESSAGES, type SignInFields } from '@/lib/validation/sign-in-check';
@@ -126,9 +126,9 @@ export function SignInForm({ words }: { words: SignInWords }) {
       <div role="alert" aria-live="assertive">
         {failure && <p className="rounded-md bg-missed-100 px-3 py-2 text-base text-missed-700">{failure}</p>}
       </div>
-      <Button type="submit" size="field" className="w-full" disabled={isSubmitting}>
+      <button type="submit" className={buttonVariants({ size: 'field', className: 'w-full' })} disabled={isSubmitting}>
         {isSubmitting ? words.submitting : words.submit}
-      </Button>
+      </button>
     </form>
   );
 }

@@ -17,6 +17,7 @@ import { useWakeLock } from '@/lib/client/wake-lock';
 import { labelIn } from '@/i18n/labels';
 import { useLibMessage } from '@/i18n/use-lib-message';
 import type { InstallState } from '@/lib/install/state';
+import type { OutboxEntry } from '@/lib/client/outbox';
 import { groundwaterPressureKpa } from '@/lib/sizing';
 import { formatDuration, formatLength } from '@/lib/units';
 import { ClockStrip, deadlinesOf } from '@/app/(field)/installs/[id]/countdown-strip';
@@ -106,24 +107,7 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
   if (step === 'dry_run' && (skipDryRun || state.conditions)) step = state.conditions ? 'mix' : 'conditions';
   if (editingConditions && !state.mixedAt) step = 'conditions';
 
-  const synced = new Set(view.events.map((e) => e.clientEventId));
-  const logged = [
-    ...view.events.map((e) => ({
-      clientEventId: e.clientEventId,
-      type: e.type,
-      deviceTime: String(e.deviceTime),
-      synced: true,
-      userName: e.userName,
-    })),
-    ...local
-      .filter((e) => !synced.has(e.clientEventId))
-      .map((e) => ({
-        clientEventId: e.clientEventId,
-        type: e.type,
-        deviceTime: e.deviceTime,
-        synced: e.status === 'synced',
-      })),
-  ].sort((a, b) => Date.parse(a.deviceTime) - Date.parse(b.deviceTime));
+  const logged = useMemo(() => loggedEvents(view.events, local), [view.events, local]);
 
   return (
     <div className="space-y-4">
@@ -391,3 +375,25 @@ const groundwaterKpaOf = (headMm: number | null | undefined) => (headMm ? ground
 /** A redo is offered after a failed inspection or a send-back (here, not in the record, which loads only when shown). */
 const mayOfferRedo = (state: InstallState, status: string) =>
   state.inspection?.result === 'fail' || status === 'sent_back';
+
+/** The server's events and this tablet's taps not yet among them, in device-time order, for the event log. */
+function loggedEvents(events: InstallViewResponse['events'], local: OutboxEntry[]) {
+  const synced = new Set(events.map((e) => e.clientEventId));
+  return [
+    ...events.map((e) => ({
+      clientEventId: e.clientEventId,
+      type: e.type,
+      deviceTime: String(e.deviceTime),
+      synced: true,
+      userName: e.userName,
+    })),
+    ...local
+      .filter((e) => !synced.has(e.clientEventId))
+      .map((e) => ({
+        clientEventId: e.clientEventId,
+        type: e.type,
+        deviceTime: e.deviceTime,
+        synced: e.status === 'synced',
+      })),
+  ].sort((a, b) => Date.parse(a.deviceTime) - Date.parse(b.deviceTime));
+}
