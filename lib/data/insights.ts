@@ -10,6 +10,7 @@ import { AppError, forbidden, notFound } from '@/lib/server/errors';
 import { MAX_INSIGHTS_DAYS, type InsightsQuery } from '@/lib/validation/insights';
 import { FLAG_LABELS } from '@/lib/review/flags';
 import { getCompany } from './company';
+import { cachedForCompany } from './insights-cache';
 
 /** What the installs of a period teach: GET /api/insights and the /insights page. */
 export type Insights = {
@@ -95,16 +96,18 @@ export async function getInsights(user: SessionUser, query: InsightsQuery, now =
     if (!row) throw notFound('Crew');
     crew = { id: row.id, name: row.name };
   }
-  const rows = await sequelize.query<GroupRow>(INSIGHTS_SQL, {
-    type: QueryTypes.SELECT,
-    replacements: {
-      companyId: user.companyId,
-      tz: timeZone,
-      from: period.from,
-      to: period.to,
-      crewId: crew?.id ?? null,
-    },
-  });
+  const rows = await cachedForCompany(user.companyId, `${timeZone}|${period.from}|${period.to}|${crew?.id ?? ''}`, () =>
+    sequelize.query<GroupRow>(INSIGHTS_SQL, {
+      type: QueryTypes.SELECT,
+      replacements: {
+        companyId: user.companyId,
+        tz: timeZone,
+        from: period.from,
+        to: period.to,
+        crewId: crew?.id ?? null,
+      },
+    }),
+  );
   // One row for the whole period (always there, even with no install), one per week and one per crew that has any.
   const all = rows.find((r) => r.part === 'all')!;
   const weeks = new Map(rows.filter((r) => r.part === 'week').map((r) => [r.week_start, r]));
