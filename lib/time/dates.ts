@@ -1,10 +1,19 @@
 /** A calendar day (YYYY-MM-DD) in a time zone, `offsetDays` from the given instant. */
 export function dayInZone(instant: Date, timeZone: string, offsetDays = 0): string {
   const shifted = new Date(instant.getTime() + offsetDays * 86_400_000);
-  // en-CA formats as YYYY-MM-DD.
-  return new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).format(
-    shifted,
-  );
+  return dayFormatter(timeZone).format(shifted);
+}
+
+// Building an Intl formatter costs far more than using one, and lists call this per row: one per zone.
+const dayFormatters = new Map<string, Intl.DateTimeFormat>();
+function dayFormatter(timeZone: string): Intl.DateTimeFormat {
+  let formatter = dayFormatters.get(timeZone);
+  if (!formatter) {
+    // en-CA formats as YYYY-MM-DD.
+    formatter = new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' });
+    dayFormatters.set(timeZone, formatter);
+  }
+  return formatter;
 }
 
 /**
