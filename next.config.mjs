@@ -1,8 +1,12 @@
 import { withSerwist } from '@serwist/turbopack';
 import createNextIntlPlugin from 'next-intl/plugin';
 
-// Points next-intl at i18n/request.ts (the locale and catalogue of each request).
-const withNextIntl = createNextIntlPlugin('./i18n/request.ts');
+// Points next-intl at i18n/request.ts (the locale and catalogue of each request). The catalogues are compiled at
+// build time: pages then ship a small formatter instead of the ICU message parser, and format without parsing.
+const withNextIntl = createNextIntlPlugin({
+  requestConfig: './i18n/request.ts',
+  experimental: { messages: { path: './messages', format: 'json', locales: 'infer', precompile: true } },
+});
 
 /** @type {import('next').NextConfig} */
 const nextConfig = {

@@ -20,6 +20,11 @@ export const envSchema = z.object({
     .min(1, 'DATABASE_URL is missing: run `npm run db:start` and set DATABASE_URL to the URL it prints')
     .regex(/^postgres(ql)?:\/\//, 'DATABASE_URL must be a postgres:// URL'),
   NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
+  /**
+   * Connections each app server keeps to PostgreSQL. A tap holds one for its whole transaction, so fewer than the
+   * requests in flight makes them queue for a connection; servers × this must stay under max_connections (100).
+   */
+  DATABASE_POOL_MAX: int('DATABASE_POOL_MAX', 1, 100).default(20),
   // Sessions (next-auth) and the customer's report links: two separate keys.
   NEXTAUTH_SECRET: secret('NEXTAUTH_SECRET').optional(),
   REPORT_LINK_SECRET: secret('REPORT_LINK_SECRET').optional(),

@@ -48,6 +48,8 @@ export class Install extends Model<InferAttributes<Install>, InferCreationAttrib
   declare maxPressureKpa: CreationOptional<number | null>;
   declare flagKinds: CreationOptional<string[]>;
   declare worstSeverity: CreationOptional<'critical' | 'warning' | null>;
+  /** 2 critical, 1 warning, 0 clean: `worstSeverity` as a number the review list orders by (20261203017000). */
+  declare severityRank: CreationOptional<number>;
   declare derivedAt: CreationOptional<Date | null>;
   /** The step machine's compact state a tap folds into (lib/install/derived.ts); migration 20261203011000. */
   declare derivedFold: CreationOptional<StoredFold | null>;
@@ -97,6 +99,7 @@ export function initInstall(sequelize: Sequelize) {
       maxPressureKpa: decimal(8, 2),
       flagKinds: { type: DataTypes.ARRAY(DataTypes.STRING(32)), allowNull: false, defaultValue: [] },
       worstSeverity: DataTypes.STRING(10),
+      severityRank: { type: DataTypes.SMALLINT, allowNull: false, defaultValue: 0 },
       derivedAt: DataTypes.DATE,
       derivedFold: DataTypes.JSONB,
       createdAt: DataTypes.DATE,

@@ -6,6 +6,7 @@
 # could not be measured). Loopback only; the server, the floor server and every load stop with the script.
 #   BENCH_SMOKE=1   short run for the test suite: 1 s loads, fewer installs, Lighthouse skipped
 #   BENCH_BUILD=auto  reuse an existing .next build (default for the smoke); BENCH_BUILD=always (default) rebuilds
+#   BENCH_ONLY=c,f,i  measure only these figures (plus (a), the reference of the ratios); default all
 #   BENCH_PURE=1    also run the vitest micro-benchmarks of the pure computations (tests/bench)
 set -euo pipefail
 source "$(dirname "${BASH_SOURCE[0]}")/common.sh"

@@ -36,7 +36,10 @@ export default async function DeskLayout({ children }: { children: React.ReactNo
           </div>
         </IntlScope>
       </aside>
-      <main className="min-w-0 flex-1 p-6">{children}</main>
+      <main className="min-w-0 flex-1 p-6">
+        {/* The common actions of every desk page (lists, record forms) read `common`. */}
+        <IntlScope namespaces={[]}>{children}</IntlScope>
+      </main>
     </div>
   );
 }

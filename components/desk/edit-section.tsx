@@ -1,6 +1,7 @@
 'use client';
 
 import { createContext, useContext, useId, useState, type ReactNode } from 'react';
+import { useTranslations } from 'next-intl';
 import { Button } from '@/components/ui/button';
 
 const CloseContext = createContext<(() => void) | undefined>(undefined);
@@ -12,12 +13,13 @@ const CloseContext = createContext<(() => void) | undefined>(undefined);
  * after saving.
  */
 export function EditSection({ label, children }: { label: string; children: ReactNode }) {
+  const t = useTranslations('common');
   const [open, setOpen] = useState(false);
   const id = useId();
   return (
     <section aria-label={label} className="space-y-3">
       <Button type="button" variant="secondary" aria-expanded={open} aria-controls={id} onClick={() => setOpen(!open)}>
-        {open ? 'Close the form' : label}
+        {open ? t('closeForm') : label}
       </Button>
       <div id={id} hidden={!open}>
         <CloseContext.Provider value={() => setOpen(false)}>{open && children}</CloseContext.Provider>

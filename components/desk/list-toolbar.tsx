@@ -1,4 +1,5 @@
 import Link from 'next/link';
+import { useTranslations } from 'next-intl';
 import type { ReactNode } from 'react';
 import { buttonVariants } from '@/components/ui/button';
 import { Input, Select } from '@/components/ui/input';
@@ -22,25 +23,26 @@ export function ListToolbar({
   newLabel?: string;
   children?: ReactNode;
 }) {
+  const t = useTranslations('common');
   return (
     <div className="flex flex-wrap items-end justify-between gap-3">
       <form className="flex flex-wrap items-end gap-3 text-sm" role="search">
         <label className="flex flex-col">
-          <span className="font-medium">Search</span>
+          <span className="font-medium">{t('search')}</span>
           <Input name="q" type="search" defaultValue={search ?? ''} placeholder={placeholder} className="w-64" />
         </label>
         {children}
         <button type="submit" className={buttonVariants({ variant: 'secondary' })}>
-          Filter
+          {t('filter')}
         </button>
       </form>
       <div className="flex gap-2">
         <a href={exportHref} className={buttonVariants({ variant: 'secondary' })} download>
-          Export CSV
+          {t('export')}
         </a>
         {newHref && (
           <Link href={newHref} className={buttonVariants({ variant: 'primary' })}>
-            {newLabel ?? 'New'}
+            {newLabel ?? t('new')}
           </Link>
         )}
       </div>
@@ -70,11 +72,12 @@ export function FilterSelect({
   value?: string;
   options: { value: string; label: string }[];
 }) {
+  const t = useTranslations('common');
   return (
     <label className="flex flex-col">
       <span className="font-medium">{label}</span>
       <Select name={name} defaultValue={value ?? ''}>
-        <option value="">Any</option>
+        <option value="">{t('any')}</option>
         {options.map((option) => (
           <option key={option.value} value={option.value}>
             {option.label}

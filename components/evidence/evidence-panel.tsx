@@ -1,13 +1,14 @@
 'use client';
 
+import { useTranslations } from 'next-intl';
 import { useId, useRef, useState } from 'react';
 import useSWR from 'swr';
 import { buttonVariants } from '@/components/ui/button';
 import type { AttachmentListResponse, UploadRequestResponse } from '@/lib/data/attachments';
 import { fetchJson } from '@/lib/client/fetch-json';
 import { submitJson } from '@/lib/client/submit-json';
-import { ATTACHMENT_KINDS, label } from '@/lib/domain/vocabulary';
-import { ALLOWED_SUMMARY, typeOfFile, uploadRefusal } from '@/lib/storage/limits';
+import { ATTACHMENT_KINDS } from '@/lib/domain/vocabulary';
+import { formatBytes, MAX_BYTES, refusalOf, typeOfFile } from '@/lib/storage/limits';
 import { cn } from '@/lib/ui/cn';
 
 type Target = { repairId: string } | { installId: string };
@@ -19,14 +20,6 @@ type Upload = {
   progress: number;
   phase: 'sending' | 'checking' | 'done' | 'failed';
   message?: string;
-};
-
-const KIND_LABELS: Record<Kind, string> = {
-  before: 'Before',
-  after: 'After',
-  inspection: 'Inspection',
-  document: 'Document',
-  other: 'Other',
 };
 
 /**
@@ -46,6 +39,7 @@ export function EvidencePanel({
   size?: 'desk' | 'field';
   defaultKind?: Kind;
 }) {
+  const t = useTranslations('evidence');
   const id = useId();
   const listUrl = `/api/attachments?${new URLSearchParams(target).toString()}`;
   // Signed links last five minutes: fetch fresh ones before they run out.
@@ -85,8 +79,8 @@ export function EvidencePanel({
 
   async function sendOne(file: File, key: string) {
     const contentType = typeOfFile(file);
-    const refusal = uploadRefusal(contentType, file.size);
-    if (refusal) return patch(key, { phase: 'failed', message: refusal });
+    const refusal = refusalOf(contentType, file.size);
+    if (refusal) return patch(key, { phase: 'failed', message: refusalText(refusal) });
     const requested = await submitJson<UploadRequestResponse>('/api/attachments', 'POST', {
       ...target,
       kind,
@@ -98,8 +92,7 @@ export function EvidencePanel({
     if (!requested.ok) return patch(key, { phase: 'failed', message: requested.error.message });
     const { attachment, upload } = requested.data;
     const sent = await putFile(upload.url, upload.headers, file, (progress) => patch(key, { progress }));
-    if (!sent)
-      return patch(key, { phase: 'failed', message: 'The upload did not go through. Check the signal and try again.' });
+    if (!sent) return patch(key, { phase: 'failed', message: t('notSent') });
     patch(key, { phase: 'checking', progress: 1 });
     const completed = await submitJson(`/api/attachments/${attachment.id}/complete`, 'POST');
     if (!completed.ok) return patch(key, { phase: 'failed', message: completed.error.message });
@@ -107,15 +100,23 @@ export function EvidencePanel({
   }
 
   async function remove(item: Item) {
-    if (!window.confirm(`Remove ${item.originalName ?? 'this file'}? This cannot be undone.`)) return;
+    if (!window.confirm(t('removeConfirm', { name: item.originalName ?? t('thisFile') }))) return;
     setRemoving(item.id);
     const answer = await submitJson(`/api/attachments/${item.id}`, 'DELETE');
     setRemoving(null);
-    setNotice(answer.ok ? `${item.originalName ?? 'The file'} was removed.` : answer.error.message);
+    setNotice(answer.ok ? t('removed', { name: item.originalName ?? t('theFile') }) : answer.error.message);
     await mutate();
   }
 
   const items = data?.items ?? [];
+  const limits = { image: MAX_BYTES.image / 1024 / 1024, video: MAX_BYTES.video / 1024 / 1024 };
+  const refusalText = (refusal: NonNullable<ReturnType<typeof refusalOf>>) =>
+    refusal.kind === 'type'
+      ? t('badType', { type: refusal.contentType || t('unknownType'), ...limits })
+      : t(refusal.type === 'image' ? 'imageTooBig' : 'videoTooBig', {
+          size: formatBytes(refusal.size),
+          max: formatBytes(MAX_BYTES[refusal.type]),
+        });
   const pickerClass = cn(
     buttonVariants({ variant: 'secondary', size }),
     'cursor-pointer focus-within:ring-2 focus-within:ring-brand-700',
@@ -134,7 +135,7 @@ export function EvidencePanel({
       <div className={`grid gap-3 ${field ? 'sm:grid-cols-2' : 'sm:grid-cols-[10rem_1fr]'}`}>
         <div>
           <label htmlFor={`${id}-kind`} className={field ? 'block text-lg font-semibold' : 'block text-sm font-medium'}>
-            Kind
+            {t('kind')}
           </label>
           <select
             id={`${id}-kind`}
@@ -144,7 +145,7 @@ export function EvidencePanel({
           >
             {ATTACHMENT_KINDS.map((k) => (
               <option key={k} value={k}>
-                {KIND_LABELS[k]}
+                {t(`kinds.${k}`)}
               </option>
             ))}
           </select>
@@ -154,7 +155,7 @@ export function EvidencePanel({
             htmlFor={`${id}-caption`}
             className={field ? 'block text-lg font-semibold' : 'block text-sm font-medium'}
           >
-            Caption (optional)
+            {t('caption')}
           </label>
           <input
             id={`${id}-caption`}
@@ -173,13 +174,13 @@ export function EvidencePanel({
             accept="image/*,video/*"
             capture="environment"
             className="sr-only"
-            aria-label="Take a photo or video"
+            aria-label={t('takePhoto')}
             onChange={(e) => {
               void sendAll(e.target.files);
               e.target.value = '';
             }}
           />
-          Take a photo or video
+          {t('takePhoto')}
         </label>
         <label className={pickerClass}>
           <input
@@ -187,19 +188,19 @@ export function EvidencePanel({
             accept="image/*,video/*"
             multiple
             className="sr-only"
-            aria-label="Choose files"
+            aria-label={t('chooseFiles')}
             onChange={(e) => {
               void sendAll(e.target.files);
               e.target.value = '';
             }}
           />
-          Choose files
+          {t('chooseFiles')}
         </label>
       </div>
-      <p className={field ? 'text-base text-slate-600' : 'text-xs text-slate-600'}>{ALLOWED_SUMMARY}.</p>
+      <p className={field ? 'text-base text-slate-600' : 'text-xs text-slate-600'}>{t('allowed', limits)}</p>
 
       {uploads.length > 0 && (
-        <ul className="space-y-2" aria-label="Uploads">
+        <ul className="space-y-2" aria-label={t('uploads')}>
           {uploads.map((u) => (
             <li
               key={u.key}
@@ -209,12 +210,17 @@ export function EvidencePanel({
               <div className="flex items-center justify-between gap-2">
                 <span className="truncate font-medium">{u.name}</span>
                 <span role="status">
-                  {PHASE_TEXT[u.phase]}
+                  {t(`phase.${u.phase}`)}
                   {u.phase === 'sending' ? ` ${Math.round(u.progress * 100)} %` : ''}
                 </span>
               </div>
               {u.phase !== 'failed' && u.phase !== 'done' && (
-                <progress className="mt-1 h-2 w-full" value={u.progress} max={1} aria-label={`Upload of ${u.name}`} />
+                <progress
+                  className="mt-1 h-2 w-full"
+                  value={u.progress}
+                  max={1}
+                  aria-label={t('uploadOf', { name: u.name })}
+                />
               )}
               {u.message && (
                 <p role="alert" className="mt-1 font-medium">
@@ -233,15 +239,15 @@ export function EvidencePanel({
       )}
       {error && (
         <p role="alert" className="font-medium text-missed-700">
-          Could not load the evidence: {error.message}
+          {t('loadFailed', { message: error.message })}
         </p>
       )}
       {items.length === 0 && !error ? (
-        <p className={field ? 'text-lg text-slate-600' : 'text-sm text-slate-600'}>No images or videos yet.</p>
+        <p className={field ? 'text-lg text-slate-600' : 'text-sm text-slate-600'}>{t('none')}</p>
       ) : (
         <ul
           className={`grid gap-3 ${field ? 'grid-cols-2 md:grid-cols-3' : 'grid-cols-2 sm:grid-cols-3 lg:grid-cols-4'}`}
-          aria-label={`${title}: files`}
+          aria-label={t('files', { title })}
         >
           {items.map((item) => (
             <li key={item.id} className="overflow-hidden rounded-lg ring-1 ring-slate-200" data-testid="evidence-item">
@@ -250,19 +256,19 @@ export function EvidencePanel({
                   // eslint-disable-next-line @next/next/no-img-element -- short-lived signed links from storage, not optimisable
                   <img
                     src={item.thumbnailUrl}
-                    alt={item.caption ?? item.originalName ?? `${label(item.kind)} image`}
+                    alt={item.caption ?? item.originalName ?? t('imageOf', { kind: t(`kinds.${item.kind}`) })}
                     className="aspect-[4/3] w-full object-cover"
                   />
                 ) : (
                   <span className="flex aspect-[4/3] items-center justify-center p-2 text-center text-sm font-medium text-slate-700">
-                    ▶ {item.originalName ?? 'Video'}
+                    ▶ {item.originalName ?? t('video')}
                   </span>
                 )}
               </a>
               <div className={`space-y-1 p-2 ${field ? 'text-base' : 'text-xs'}`}>
                 <p>
                   <span className="rounded bg-brand-50 px-1.5 py-0.5 font-semibold text-brand-800">
-                    {KIND_LABELS[item.kind]}
+                    {t(`kinds.${item.kind}`)}
                   </span>
                   {item.caption ? ` ${item.caption}` : ''}
                 </p>
@@ -273,9 +279,9 @@ export function EvidencePanel({
                     onClick={() => void remove(item)}
                     disabled={removing === item.id}
                     className={cn(buttonVariants({ variant: 'ghost', size }), 'w-full text-missed-700')}
-                    aria-label={`Remove ${item.originalName ?? 'file'}`}
+                    aria-label={t('removeName', { name: item.originalName ?? t('file') })}
                   >
-                    {removing === item.id ? 'Removing…' : 'Remove'}
+                    {removing === item.id ? t('removing') : t('remove')}
                   </button>
                 )}
               </div>
@@ -286,13 +292,6 @@ export function EvidencePanel({
     </section>
   );
 }
-
-const PHASE_TEXT: Record<Upload['phase'], string> = {
-  sending: 'Uploading',
-  checking: 'Checking…',
-  done: 'Added',
-  failed: 'Not added',
-};
 
 /** PUT with XMLHttpRequest: fetch cannot report upload progress. Resolves false on any failure. */
 function putFile(

@@ -1,4 +1,6 @@
 import 'server-only';
+import { getTranslations } from 'next-intl/server';
+import { IntlScope } from '@/components/shell/intl-scope';
 import { requirePageUser } from '@/lib/auth/session';
 import { listAttachments } from '@/lib/data/attachments';
 import { DESK_ROLES } from '@/lib/domain/vocabulary';
@@ -18,5 +20,10 @@ export async function RepairEvidence({ repairId }: { repairId: string }) {
     // Storage not reachable or not set up: the panel fetches again and shows the reason where the files would be.
     console.error('[evidence] listing failed', error);
   }
-  return <EvidencePanel target={{ repairId }} initial={initial} title="Evidence" defaultKind="before" />;
+  const t = await getTranslations('evidence');
+  return (
+    <IntlScope namespaces={['evidence']}>
+      <EvidencePanel target={{ repairId }} initial={initial} title={t('title')} defaultKind="before" />
+    </IntlScope>
+  );
 }

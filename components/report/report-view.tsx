@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import { translatorFor } from '@/i18n/translator';
-import { formatDay } from '@/lib/time/dates';
+import { formatDay } from '@/lib/time/dates-locale';
 import type { ReportData, ReportImage } from '@/lib/data/report';
 import { TimelineSvg } from './timeline-svg';
 import { cardClass } from '@/components/ui/card';

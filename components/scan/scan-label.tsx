@@ -1,5 +1,6 @@
 'use client';
 
+import { useTranslations } from 'next-intl';
 import { useEffect, useRef, useState } from 'react';
 import { buttonVariants } from '@/components/ui/button';
 import { decodeImageFile, startCameraScan, type CameraScan } from '@/lib/client/barcode';
@@ -19,6 +20,7 @@ export function ScanLabel({
   onScan: (label: ScannedLabel) => void;
   size?: 'desk' | 'field';
 }) {
+  const t = useTranslations('scan');
   const [scanning, setScanning] = useState(false);
   const [message, setMessage] = useState<{ text: string; problem: boolean } | null>(null);
   const video = useRef<HTMLVideoElement>(null);
@@ -30,12 +32,11 @@ export function ScanLabel({
   const accept = (raw: string) => {
     try {
       const label = labelOf(raw);
-      setMessage({ text: describeLabel(label), problem: false });
+      setMessage({ text: describeLabel(label, t), problem: false });
       onScan(label);
     } catch (error) {
       setMessage({
-        text:
-          error instanceof Gs1Error ? `The label could not be read: ${error.message}` : 'The label could not be read.',
+        text: error instanceof Gs1Error ? t('unreadableWhy', { reason: error.message }) : t('unreadable'),
         problem: true,
       });
     }
@@ -55,7 +56,7 @@ export function ScanLabel({
     } catch {
       setScanning(false);
       setMessage({
-        text: 'The camera could not be opened. Allow the camera, scan from a photo, or type the lot.',
+        text: t('noCamera'),
         problem: true,
       });
     }
@@ -69,12 +70,12 @@ export function ScanLabel({
 
   const fromPhoto = async (file: File | undefined) => {
     if (!file) return;
-    setMessage({ text: 'Reading the photo…', problem: false });
+    setMessage({ text: t('reading'), problem: false });
     try {
       accept(await decodeImageFile(file));
     } catch {
       setMessage({
-        text: 'No barcode found in that photo. Try again closer and sharper, or type the lot.',
+        text: t('noBarcode'),
         problem: true,
       });
     } finally {
@@ -90,14 +91,14 @@ export function ScanLabel({
           className={buttonVariants({ variant: 'secondary', size })}
           onClick={() => void (scanning ? closeCamera() : openCamera())}
         >
-          {scanning ? 'Stop scanning' : 'Scan label'}
+          {scanning ? t('stop') : t('scan')}
         </button>
         <button
           type="button"
           className={buttonVariants({ variant: 'ghost', size })}
           onClick={() => photo.current?.click()}
         >
-          Scan from photo
+          {t('fromPhoto')}
         </button>
         <input
           ref={photo}
@@ -106,7 +107,7 @@ export function ScanLabel({
           capture="environment"
           className="sr-only"
           tabIndex={-1}
-          aria-label="Photo of the kit's label"
+          aria-label={t('photoLabel')}
           data-testid="scan-photo-input"
           onChange={(event) => void fromPhoto(event.target.files?.[0])}
         />
@@ -117,7 +118,7 @@ export function ScanLabel({
           className="aspect-video w-full max-w-md rounded-md bg-slate-900"
           muted
           playsInline
-          aria-label="Camera view of the label"
+          aria-label={t('cameraView')}
         />
       )}
       {message && (

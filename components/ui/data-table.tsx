@@ -1,5 +1,6 @@
 'use client';
 
+import { useTranslations } from 'next-intl';
 import { flexRender, getCoreRowModel, useReactTable, type ColumnDef } from '@tanstack/react-table';
 import { usePathname, useRouter, useSearchParams } from 'next/navigation';
 
@@ -26,6 +27,7 @@ export function DataTable<Row>({
   dir?: 'asc' | 'desc';
   caption: string;
 }) {
+  const t = useTranslations('common');
   const router = useRouter();
   const pathname = usePathname();
   const params = useSearchParams();
@@ -98,9 +100,7 @@ export function DataTable<Row>({
         </tbody>
       </table>
       <div className="flex items-center justify-between border-t border-slate-200 px-3 py-2 text-sm text-slate-600">
-        <span>
-          {total} in all · page {page} of {pageCount}
-        </span>
+        <span>{t('pageOf', { total, page, pageCount })}</span>
         <div className="flex gap-2">
           <button
             type="button"
@@ -108,7 +108,7 @@ export function DataTable<Row>({
             disabled={page <= 1}
             onClick={() => go({ page: String(page - 1) })}
           >
-            Previous
+            {t('previous')}
           </button>
           <button
             type="button"
@@ -116,7 +116,7 @@ export function DataTable<Row>({
             disabled={page >= pageCount}
             onClick={() => go({ page: String(page + 1) })}
           >
-            Next
+            {t('next')}
           </button>
         </div>
       </div>

@@ -1,6 +1,5 @@
 import { Dexie, liveQuery } from 'dexie';
-import { uuidSchema } from '@/lib/validation/common';
-import { parseEventBody } from '@/lib/validation/install-events';
+import { checkEventBody, isUuid } from '@/lib/validation/install-events-check';
 import { deleteOutboxDb, firstSendable, mayBeSentBy, outboxDb, type OutboxEntry } from './outbox-db';
 import { sendEntry } from './outbox-send';
 
@@ -73,7 +72,7 @@ const DEFAULT_TIMEOUT_MS = 20_000;
 /**
  * Stores a tap as 'pending' and returns it; nothing is sent here. Enqueueing the same
  * clientEventId again returns the stored entry, so a double tap is one event.
- * Throws OutboxInputError for a malformed event (the same schemas as the server), and Dexie's
+ * Throws OutboxInputError for a malformed event (the server's rules: install-events-check.ts), and Dexie's
  * error when the tablet's storage refuses the write — the UI must then say it was NOT saved.
  */
 export async function enqueueEvent(body: NewOutboxEvent): Promise<OutboxEntry> {
@@ -282,16 +281,11 @@ async function keepStorage(): Promise<void> {
 }
 
 function validate(body: NewOutboxEvent): Omit<OutboxEntry, 'seq' | 'status' | 'attempts'> {
-  if (!uuidSchema.safeParse(body?.installId).success) throw new OutboxInputError('installId: Not a valid id');
-  const parsed = parseEventBody(body);
-  if (!parsed.success) {
-    const issue = parsed.error.issues[0];
-    const path = ['path' in parsed ? parsed.path : undefined, ...issue.path].filter((p) => p !== undefined).join('.');
-    throw new OutboxInputError(path ? `${path}: ${issue.message}` : issue.message);
-  }
-  const { clientEventId, type, deviceTime, payload, correctsEventId } = parsed.data;
-  if (body.userId !== undefined && !uuidSchema.safeParse(body.userId).success)
-    throw new OutboxInputError('userId: Not a valid id');
+  if (!isUuid(body?.installId)) throw new OutboxInputError('installId: Not a valid id');
+  const checked = checkEventBody(body);
+  if (!checked.ok) throw new OutboxInputError(checked.path ? `${checked.path}: ${checked.message}` : checked.message);
+  const { clientEventId, type, deviceTime, payload, correctsEventId } = checked.data;
+  if (body.userId !== undefined && !isUuid(body.userId)) throw new OutboxInputError('userId: Not a valid id');
   const who = body.userId === undefined ? {} : { userId: body.userId, userName: body.userName ?? '' };
   return {
     installId: body.installId,

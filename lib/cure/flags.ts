@@ -3,7 +3,8 @@ import { addMinutes, cureMinutes, workingWindowMinutes } from '@/lib/cure/resin-
 import { CureInputError } from './errors';
 import { calendarDay } from './expiry';
 import { DEFAULT_PREP_MINUTES, DEFAULT_SAFETY_MARGIN } from './limits';
-import { noDryRunText, slowPullText } from './reasons';
+import { noDryRunText, slowPullText, type Said } from './reasons';
+import { instant, message } from '@/lib/i18n/message';
 import type { InstallRecord, QualityFlag } from './types';
 import {
   requireDate,
@@ -66,12 +67,14 @@ export function flagsFor(install: InstallRecord): QualityFlag[] {
         message:
           `Inflated at ${timeText(inflatedAt)}, after the inflate-by time ${timeText(inflateBy)}: the resin may have begun to set before the ` +
           `patch was pressed home.`,
+        details: [message('flag.lateInflate', { at: instant(inflatedAt), by: instant(inflateBy) })],
       });
     } else if (inflatedAt == null && now !== undefined && now.getTime() > inflateBy.getTime()) {
       flags.push({
         kind: 'late-inflate',
         severity: 'critical',
         message: `Not inflated and the inflate-by time ${timeText(inflateBy)} has passed: the working window of this mix is over.`,
+        details: [message('flag.notInflated', { by: instant(inflateBy) })],
       });
     }
   }
@@ -90,11 +93,15 @@ export function flagsFor(install: InstallRecord): QualityFlag[] {
     const holdEnds = addMinutes(inflatedAt, holdMin);
     const reserveEnds = addMinutes(inflatedAt, holdMin * (1 + holdReserve));
     const whose = pipeInRange ? 'the hold time' : "the resin maker's hold time";
+    const whoseDetail = message(pipeInRange ? 'flag.whoseResin' : 'flag.whoseMaker');
     if (deflatedAt.getTime() < holdEnds.getTime()) {
       flags.push({
         kind: 'early-deflate',
         severity: 'critical',
         message: `Deflated at ${timeText(deflatedAt)}, before ${whose} was up at ${timeText(holdEnds)}: the patch may not have held its shape.`,
+        details: [
+          message('flag.earlyDeflate', { at: instant(deflatedAt), whose: whoseDetail, ends: instant(holdEnds) }),
+        ],
       });
     } else if (deflatedAt.getTime() < reserveEnds.getTime()) {
       flags.push({
@@ -103,56 +110,68 @@ export function flagsFor(install: InstallRecord): QualityFlag[] {
         message:
           `Deflated at ${timeText(deflatedAt)}: after ${whose} (${timeText(holdEnds)}) but inside the company's ` +
           `${Math.round(holdReserve * 100)} % hold reserve, which ran to ${timeText(reserveEnds)}.`,
+        details: [
+          message('flag.insideReserve', {
+            at: instant(deflatedAt),
+            whose: whoseDetail,
+            ends: instant(holdEnds),
+            pct: { percent: Math.round(holdReserve * 100) },
+            reserveEnds: instant(reserveEnds),
+          }),
+        ],
       });
     }
   }
 
   // Outside the resin's rated range the published times do not apply and the cure is uncertain, whether the
   // pipe or the mix was out of range: one cold-cure / hot-cure flag says which (both when both were).
-  const cold: string[] = [];
-  const hot: string[] = [];
+  const cold: Said[] = [];
+  const hot: Said[] = [];
+  const t = (c: number) => formatTemperature(c, system);
+  const temps = (c: number, limit: number) => ({ temp: { temperatureC: c }, limit: { temperatureC: limit } });
   if (pipeTempC !== undefined && pipeTempC < resin.minTempC) {
-    cold.push(
-      `Cured in a pipe at ${formatTemperature(pipeTempC, system)}, below the resin's minimum of ${formatTemperature(resin.minTempC, system)}.`,
-    );
+    cold.push({
+      text: `Cured in a pipe at ${t(pipeTempC)}, below the resin's minimum of ${t(resin.minTempC)}.`,
+      detail: message('flag.coldPipe', temps(pipeTempC, resin.minTempC)),
+    });
   }
   if (mixTempC !== undefined && mixTempC < resin.minTempC) {
-    cold.push(
-      `Resin mixed at ${formatTemperature(mixTempC, system)}, below the resin's minimum of ${formatTemperature(resin.minTempC, system)}.`,
-    );
+    cold.push({
+      text: `Resin mixed at ${t(mixTempC)}, below the resin's minimum of ${t(resin.minTempC)}.`,
+      detail: message('flag.coldMix', temps(mixTempC, resin.minTempC)),
+    });
   }
   if (pipeTempC !== undefined && pipeTempC > resin.maxTempC) {
-    hot.push(
-      `Cured in a pipe at ${formatTemperature(pipeTempC, system)}, above the resin's maximum of ${formatTemperature(resin.maxTempC, system)}.`,
-    );
+    hot.push({
+      text: `Cured in a pipe at ${t(pipeTempC)}, above the resin's maximum of ${t(resin.maxTempC)}.`,
+      detail: message('flag.hotPipe', temps(pipeTempC, resin.maxTempC)),
+    });
   }
   if (windowTempC !== undefined && windowTempC > resin.maxTempC) {
-    hot.push(
-      `Mixed at ${formatTemperature(windowTempC, system)}, above the resin's maximum of ${formatTemperature(resin.maxTempC, system)}.`,
-    );
+    hot.push({
+      text: `Mixed at ${t(windowTempC)}, above the resin's maximum of ${t(resin.maxTempC)}.`,
+      detail: message('flag.hotMix', temps(windowTempC, resin.maxTempC)),
+    });
   }
-  if (cold.length) flags.push({ kind: 'cold-cure', severity: 'critical', message: cold.join(' ') });
-  if (hot.length) flags.push({ kind: 'hot-cure', severity: 'critical', message: hot.join(' ') });
+  if (cold.length) flags.push({ kind: 'cold-cure', severity: 'critical', ...joined(cold) });
+  if (hot.length) flags.push({ kind: 'hot-cure', severity: 'critical', ...joined(hot) });
 
   if (dryRunSeconds === undefined) {
-    flags.push({ kind: 'no-dry-run', severity: 'warning', message: noDryRunText() });
+    flags.push({ kind: 'no-dry-run', severity: 'warning', ...joined([noDryRunText()]) });
   } else if (workingWindowMin !== undefined && windowTempC !== undefined) {
     const safeWindowMin = workingWindowMin * (1 - safetyMargin);
     const neededMin = prepMinutes + dryRunSeconds / 60;
     if (neededMin > safeWindowMin) {
-      flags.push({
-        kind: 'slow-dry-run',
-        severity: 'warning',
-        message: slowPullText({
-          dryRunSeconds,
-          prepMinutes,
-          neededMin,
-          safeWindowMin,
-          safetyMargin,
-          mixTempC: windowTempC,
-          system,
-        }),
+      const slow = slowPullText({
+        dryRunSeconds,
+        prepMinutes,
+        neededMin,
+        safeWindowMin,
+        safetyMargin,
+        mixTempC: windowTempC,
+        system,
       });
+      flags.push({ kind: 'slow-dry-run', severity: 'warning', ...joined([slow]) });
     }
   }
 
@@ -170,6 +189,16 @@ export function flagsFor(install: InstallRecord): QualityFlag[] {
           `${outside.length} of ${pressures.length} pressure readings outside the packer's rating of ` +
           `${formatPressure(packer.minPressureKpa, system)}–${formatPressure(packer.maxPressureKpa, system)} ` +
           `(readings from ${formatPressure(low, system)} to ${formatPressure(high, system)}).`,
+        details: [
+          message('flag.pressure', {
+            count: outside.length,
+            total: pressures.length,
+            min: { pressureKpa: packer.minPressureKpa },
+            max: { pressureKpa: packer.maxPressureKpa },
+            low: { pressureKpa: low },
+            high: { pressureKpa: high },
+          }),
+        ],
       });
     }
   }
@@ -185,9 +214,18 @@ export function flagsFor(install: InstallRecord): QualityFlag[] {
         kind: 'expired-resin',
         severity: 'critical',
         message: `The resin kit expired on ${expires}, before it was ${mixedAt != null ? 'mixed' : 'to be mixed'} on ${used}.`,
+        details: [
+          message(mixedAt != null ? 'flag.expiredMixed' : 'flag.expiredToMix', {
+            expires: { day: expires },
+            used: { day: used },
+          }),
+        ],
       });
     }
   }
 
   return flags;
 }
+
+/** Sentences of one flag: the English joined by spaces, the messages in order. */
+const joined = (said: Said[]) => ({ message: said.map((s) => s.text).join(' '), details: said.map((s) => s.detail) });

@@ -10,6 +10,7 @@ import {
   noClockText,
   noDryRunText,
   slowPullText,
+  type Said,
 } from './reasons';
 import type { CurePlan, CurePlanInput, ResinClockSpec } from './types';
 import {
@@ -81,26 +82,29 @@ export function planCure(resin: ResinClockSpec, input: CurePlanInput): CurePlan 
     ...(holdSource === 'maker' ? { makerHoldMin } : {}),
     prepMinutes,
     ...(neededMin === undefined ? {} : { neededMin }),
-    counted: countedText({
-      prepMinutes,
-      dryRunSeconds,
-      neededMin,
-      workingWindowMin,
-      safeWindowMin: safeWorkingWindowMin,
-      safetyMargin,
-      mixTempC,
-      airTempC,
-      system,
-    }),
+    ...counted(
+      countedText({
+        prepMinutes,
+        dryRunSeconds,
+        neededMin,
+        workingWindowMin,
+        safeWindowMin: safeWorkingWindowMin,
+        safetyMargin,
+        mixTempC,
+        airTempC,
+        system,
+      }),
+    ),
     go: false,
     reasons: [],
+    reasonDetails: [],
   };
   if (input.inflatedAt != null) {
     if (keepInflatedMin !== null) plan.deflateAfter = addMinutes(input.inflatedAt, keepInflatedMin);
     if (cure) plan.returnToService = addMinutes(input.inflatedAt, cure.fullCureMin);
   }
 
-  const reasons: string[] = [];
+  const reasons: Said[] = [];
   if (pipeTempC < resin.minTempC) reasons.push(coldPipeText(resin, pipeTempC, system));
   if (pipeTempC > resin.maxTempC) reasons.push(hotPipeText(resin, pipeTempC, system));
   if (!pipeInRange) reasons.push(noClockText());
@@ -121,7 +125,10 @@ export function planCure(resin: ResinClockSpec, input: CurePlanInput): CurePlan 
       }),
     );
   }
-  plan.reasons = reasons;
+  plan.reasons = reasons.map((r) => r.text);
+  plan.reasonDetails = reasons.map((r) => r.detail);
   plan.go = reasons.length === 0;
   return plan;
 }
+
+const counted = (said: Said) => ({ counted: said.text, countedDetail: said.detail });

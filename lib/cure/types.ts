@@ -1,3 +1,4 @@
+import type { LibMessage } from '@/lib/i18n/message';
 import type { UnitSystem } from '@/lib/units';
 
 /**
@@ -80,11 +81,15 @@ export interface CurePlan {
   neededMin?: number;
   /** What was counted for GO / NO-GO, in words. */
   counted: string;
+  /** `counted` as a catalogue message, for a screen in the reader's language. */
+  countedDetail: LibMessage;
   deflateAfter?: Date;
   returnToService?: Date;
   go: boolean;
   /** Why not, in words, with what would help; empty when go. */
   reasons: string[];
+  /** `reasons` as catalogue messages, one each, for a screen in the reader's language. */
+  reasonDetails: LibMessage[];
 }
 
 export type FlagKind =
@@ -103,6 +108,8 @@ export interface QualityFlag {
   kind: FlagKind;
   severity: FlagSeverity;
   message: string;
+  /** `message` as catalogue messages (its sentences, in order), for a screen in the reader's language. */
+  details?: LibMessage[];
 }
 
 export interface PackerPressureRating {

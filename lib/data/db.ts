@@ -12,7 +12,7 @@ function createSequelize() {
     dialectModule: pg,
     logging: false,
     timezone: '+00:00',
-    pool: { max: 10, min: 0, idle: 10_000 },
+    pool: { max: env().DATABASE_POOL_MAX, min: 0, idle: 10_000 },
     define: { underscored: true },
   });
 }

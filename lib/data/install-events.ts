@@ -1,5 +1,6 @@
 import 'server-only';
-import { Op, UniqueConstraintError, type Transaction } from 'sequelize';
+import { randomUUID } from 'node:crypto';
+import { Op, UniqueConstraintError, literal, type Transaction } from 'sequelize';
 import type { z } from 'zod';
 import { AuditEntry, Install, InstallEvent, Job, Packer, Repair, ResinKit, ResinSystem, sequelize } from '@/models';
 import type { InstallAccess, SessionUser } from '@/lib/auth/session';
@@ -17,14 +18,12 @@ import { correctsDecision, deviceTimeProblem, isClosedInstall } from '@/lib/inst
 import { isSameEvent } from '@/lib/install/same-event';
 import { correctionTarget, orderProblem, type InstallState } from '@/lib/install/state';
 import { eventPayloadSchemas, parseEventBody } from '@/lib/validation/install-events';
-import { getCompany } from './company';
-import { loadMaterials, rederive, rowOf, settingsOf } from './install-derive';
-import { notifyTap } from './live';
+import { loadMaterials, rederive, rowOf, settingsOf, type CompanySettings } from './install-derive';
+import { insertAndNotifyTap, notifyTap } from './live';
 import { findInstallFor, type InstallEventRow } from './installs';
 import { dayInZone } from '@/lib/time/dates';
 
 type ParsedEvent = Extract<ReturnType<typeof parseEventBody>, { success: true }>['data'];
-type Company = Awaited<ReturnType<typeof getCompany>>;
 
 /** What the route already read in its first query (`requireUserWithInstall`); absent, it is read here. */
 export type TapContext = { install: InstallAccess | null };
@@ -57,13 +56,7 @@ export async function recordEvent(
   if (body.type === 'go_decision' && body.payload.overrideReason !== undefined && !mayDecide(user)) {
     throw forbidden('Only the foreman can override a no-go.');
   }
-  // Read before the transaction: inside it, every query must use its connection, or ten taps
-  // waiting on the lock could hold the whole pool while the eleventh query waits for one.
-  // The company's settings are read once for the whole tap.
-  const company = await getCompany(user);
-  const today = dayInZone(new Date(), company.timeZone);
-  const run = () =>
-    sequelize.transaction((t) => recordInTransaction(user, installId, body, { today, receivedAt, company }, t));
+  const run = () => sequelize.transaction((t) => recordInTransaction(user, installId, body, receivedAt, t));
   try {
     return await run();
   } catch (error) {
@@ -74,25 +67,27 @@ export async function recordEvent(
   }
 }
 
-type TapRun = { today: string; receivedAt: Date; company: Company };
-
 async function recordInTransaction(
   user: SessionUser,
   installId: string,
   body: ParsedEvent,
-  run: TapRun,
+  receivedAt: Date,
   t: Transaction,
 ) {
-  const { today, receivedAt, company } = run;
-  const settings = settingsOf(company);
+  // The install's row, locked (taps on one install are serialised), with the company's settings the clock reads.
   const install = await Install.findOne({
     where: { id: installId, companyId: user.companyId },
+    attributes: { include: [[literal(COMPANY_SETTINGS_SQL), 'tapCompany']] },
     lock: t.LOCK.UPDATE,
     transaction: t,
   });
   if (!install) throw new AppError(404, 'Install was not found.');
+  const company = install.getDataValue('tapCompany' as never) as CompanySettings & { timeZone: string };
+  const settings = settingsOf(company);
+  const today = dayInZone(new Date(), company.timeZone);
 
-  // Indexed reads only: the tap's own id (a replay?) and, for a correction, the event it names.
+  // Indexed reads only, after the lock (so they see a tap that held it): the tap's own id (a replay?) and, for a
+  // correction, the event it names.
   const [existing, named] = await Promise.all([
     InstallEvent.findOne({ where: { companyId: user.companyId, clientEventId: body.clientEventId }, transaction: t }),
     body.type === 'correction' && body.correctsEventId ? namedEvent(user, installId, body.correctsEventId, t) : null,
@@ -140,34 +135,51 @@ async function recordInTransaction(
     await checkConditions(user, { ...target.payload, ...changes }, kitChanged ? today : null, t);
   }
 
-  const event = await InstallEvent.create(
-    {
-      companyId: user.companyId,
-      installId,
-      clientEventId: body.clientEventId,
-      type: body.type,
-      deviceTime: new Date(body.deviceTime),
-      receivedAt,
-      userId: user.id,
-      payload: body.payload,
-      correctsEventId: target?.id ?? null,
-    },
-    { transaction: t },
-  );
-  const plainEvent = event.get({ plain: true });
-  let next: Next;
+  const plainEvent: InstallEventRow = {
+    id: randomUUID(),
+    companyId: user.companyId,
+    installId,
+    clientEventId: body.clientEventId,
+    type: body.type,
+    deviceTime: new Date(body.deviceTime),
+    receivedAt,
+    userId: user.id,
+    payload: body.payload ?? {},
+    correctsEventId: target?.id ?? null,
+    createdAt: new Date(),
+  };
+  const values = { ...plainEvent, payload: JSON.stringify(plainEvent.payload) };
+  // Inserting the event takes the company's numbering lock until commit (migration 20261203014000). A tap in log
+  // order therefore writes its install row first and inserts last, the NOTIFY in the same statement: taps of one
+  // company wait on each other for one round trip and the commit, not for the whole tap.
   if (body.type !== 'correction' && !stored && foldsInOrder(fold, plainEvent)) {
-    next = await foldIn(user, install, fold, plainEvent, settings, t);
-  } else {
-    // Out of log order (two tablets, a late outbox) or a correction: the whole log again, this tap included.
-    stored = await rederive(user.companyId, installId, settings, t);
-    next = { state: stored.state, kit: stored.kit, derived: rowOf(stored) };
+    const next = await foldIn(user, install, fold, plainEvent, settings, t);
+    await updateSummary(user, install, next, body, t);
+    await writeAudit(user, install, body, target, t);
+    await insertAndNotifyTap(t, INSERT_EVENT_SQL, values, next.state.step);
+    return { event: plainEvent, created: true };
   }
+  // Out of log order (two tablets, a late outbox) or a correction: the whole log again, this tap included.
+  await sequelize.query(INSERT_EVENT_SQL, { replacements: values, transaction: t });
+  stored = await rederive(user.companyId, installId, settings, t);
+  const next: Next = { state: stored.state, kit: stored.kit, derived: rowOf(stored) };
   await updateSummary(user, install, next, body, t);
   await writeAudit(user, install, body, target, t);
-  await notifyTap(t, { eventId: event.id, step: next.state.step });
+  await notifyTap(t, { eventId: plainEvent.id, step: next.state.step });
   return { event: plainEvent, created: true };
 }
+
+// The company's settings as a column of the install's read (numbers as JSON numbers, as the model reads them).
+const COMPANY_SETTINGS_SQL = `(SELECT json_build_object('timeZone', c.time_zone, 'unitSystem', c.unit_system,
+  'workingWindowSafetyMargin', c.working_window_safety_margin::float8, 'holdReserve', c.hold_reserve::float8)
+  FROM companies c WHERE c.id = "Install"."company_id")`;
+
+const INSERT_EVENT_SQL = `INSERT INTO install_events
+    (id, company_id, install_id, client_event_id, type, device_time, received_at, user_id, payload, corrects_event_id,
+     created_at)
+  VALUES (:id, :companyId, :installId, :clientEventId, :type, :deviceTime, :receivedAt, :userId, CAST(:payload AS jsonb),
+     :correctsEventId, :createdAt)
+  RETURNING *`;
 
 type Next = {
   state: InstallState;

@@ -1,13 +1,12 @@
 import 'server-only';
 // The office's and crews' list of installs (GET /api/installs, the review queue): one page of installs with
 // their flags, sorted in SQL over the derived columns when sorted by severity.
-import { Op, literal, type InferAttributes, type Model, type WhereOptions } from 'sequelize';
+import { Op, QueryTypes, type InferAttributes, type Model, type WhereOptions } from 'sequelize';
 import {
   AccessPoint,
   Crew,
   Customer,
   Install,
-  InstallEvent,
   Job,
   Packer,
   Repair,
@@ -15,16 +14,18 @@ import {
   ResinSystem,
   Segment,
   Site,
+  sequelize,
 } from '@/models';
 import type { SessionUser } from '@/lib/auth/session';
 import { resinClockSpec } from '@/lib/cure';
 import { isDeskRole } from '@/lib/auth/roles';
 import { installClock } from '@/lib/install/plan-and-flags';
-import { deriveInstallState } from '@/lib/install/state';
+import { deriveInstallState, type InstallEventInput } from '@/lib/install/state';
 import { localisedFlags, worstSeverity } from '@/lib/review/flags';
 import type { InstallListQuery } from '@/lib/validation/reviews';
 import { getCompany } from './company';
-import { ensureDerived, settingsOf, severityRankSql } from './install-derive';
+import { ensureDerived, settingsOf } from './install-derive';
+import { severityPage } from './install-severity';
 import { allOf, pageOf, searchWhere, windowOf } from './list';
 
 type Plain<M extends Model> = InferAttributes<M>;
@@ -34,8 +35,8 @@ export type InstallListResponse = Awaited<ReturnType<typeof listInstalls>>;
 
 /**
  * A page of the company's installs with their quality flags (field users: only their crews').
- * `sort=severity` orders in SQL by the worst flag kept on each install's row (plus the two that time passing
- * raises, against now()) and pages there; the flags of the page itself are worked out from their logs.
+ * `sort=severity` picks the page's ids and the count in lean SQL over the rows' derived columns
+ * (`lib/data/install-severity.ts`), then loads only those rows; the flags of the page are worked out from their logs.
  */
 export async function listInstalls(user: SessionUser, query: InstallListQuery, exportAll = false) {
   const company = await getCompany(user);
@@ -48,18 +49,12 @@ export async function listInstalls(user: SessionUser, query: InstallListQuery, e
   const now = new Date();
   if (query.sort === 'severity') {
     await ensureDerived(user, settingsOf(company));
-    // Ascending (the default) puts the worst first; ties go oldest-finished first.
-    const rank = literal(severityRankSql('"Install"', '"resinKit"'));
-    const { rows, count } = await Install.findAndCountAll({
-      where,
-      include: LIST_INCLUDE,
-      order: [
-        [rank, query.dir === 'asc' ? 'DESC' : 'ASC'],
-        ['finishedAt', 'ASC NULLS LAST'],
-        ['id', 'ASC'],
-      ],
-      ...windowOf(query, exportAll),
-    });
+    const { ids, count } = await severityPage(user, query, exportAll);
+    const rows = ids.length
+      ? await Install.findAll({ where: { id: ids, companyId: user.companyId }, include: LIST_INCLUDE })
+      : [];
+    const at = new Map(ids.map((id, index) => [id, index]));
+    rows.sort((a, b) => at.get(a.id)! - at.get(b.id)!);
     return pageOf(await itemsOf(user, rows, company, now), count, query);
   }
   const { rows, count } = await Install.findAndCountAll({
@@ -134,13 +129,19 @@ type ListRow = Plain<Install> & {
 /** List rows with their flags, worked out from each install's event log by the field screen's own rule. */
 async function itemsOf(user: SessionUser, rows: Install[], company: Company, now: Date) {
   const ids = rows.map((row) => row.id);
+  // Plain rows (no model instances): a page of installs can carry thousands of events.
   const events = ids.length
-    ? await InstallEvent.findAll({ where: { companyId: user.companyId, installId: { [Op.in]: ids } } })
+    ? await sequelize.query<InstallEventInput & { installId: string }>(
+        `SELECT id, install_id AS "installId", client_event_id AS "clientEventId", type, device_time AS "deviceTime",
+                received_at AS "receivedAt", payload, corrects_event_id AS "correctsEventId"
+         FROM install_events WHERE company_id = :companyId AND install_id IN (:ids)`,
+        { replacements: { companyId: user.companyId, ids }, type: QueryTypes.SELECT },
+      )
     : [];
-  const byInstall = new Map<string, Plain<InstallEvent>[]>();
+  const byInstall = new Map<string, InstallEventInput[]>();
   for (const event of events) {
     const list = byInstall.get(event.installId) ?? [];
-    list.push(event.get({ plain: true }));
+    list.push(event);
     byInstall.set(event.installId, list);
   }
   return rows.map((model) => {

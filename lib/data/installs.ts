@@ -258,6 +258,7 @@ function packerFits(packers: Packer[], insideDiameterMm: number, patchLengthMm: 
       fits: fits[i].fits,
       endMarginEachMm: fits[i].endMarginEachMm,
       reasons: fits[i].reasons,
+      reasonDetails: fits[i].reasonDetails,
     }));
   } catch (error) {
     // A packer row or repair the sizing cannot read must not take the install screen down.

@@ -47,27 +47,35 @@ export async function listJobs(
     searchWhere(query.q, ['number', 'title', '$customer.name$', '$site.address_line$', '$site.city$']),
     crewJobsWhere(user, 'id', 'id'),
   );
-  const { rows, count } = await Job.findAndCountAll({
-    where,
-    include: [
-      { model: Customer, as: 'customer', attributes: ['id', 'name'] },
-      { model: Site, as: 'site', attributes: ['id', 'name', 'addressLine', 'city'] },
-      { model: Crew, as: 'crew', attributes: ['id', 'name'] },
-    ],
-    // NULLS LAST keeps undated drafts out of the way whichever direction the office sorts.
-    order: [
-      [query.sort, `${query.dir.toUpperCase()} NULLS LAST`],
-      ['number', 'DESC'],
-    ],
-    ...windowOf(query, exportAll),
-    distinct: true,
-  });
+  // The count joins only what the search reads; the page loads its few rows with their customer, site and crew.
+  const [count, rows] = await Promise.all([
+    Job.count({ where, include: query.q ? LIST_SEARCH_INCLUDE : [], distinct: true, col: 'id' }),
+    Job.findAll({
+      where,
+      include: [
+        { model: Customer, as: 'customer', attributes: ['id', 'name'] },
+        { model: Site, as: 'site', attributes: ['id', 'name', 'addressLine', 'city'] },
+        { model: Crew, as: 'crew', attributes: ['id', 'name'] },
+      ],
+      // NULLS LAST keeps undated drafts out of the way whichever direction the office sorts.
+      order: [
+        [query.sort, `${query.dir.toUpperCase()} NULLS LAST`],
+        ['number', 'DESC'],
+      ],
+      ...windowOf(query, exportAll),
+    }),
+  ]);
   return pageOf(
     rows.map((row) => row.get({ plain: true }) as JobListItem),
     count,
     query,
   );
 }
+
+const LIST_SEARCH_INCLUDE = [
+  { model: Customer, as: 'customer', attributes: [] },
+  { model: Site, as: 'site', attributes: [] },
+];
 
 /** One job of the caller's (field users: of their crews) with its site, customer, crew and repairs; null when it is not theirs. */
 export async function getJob(user: SessionUser, id: string) {

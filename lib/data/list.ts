@@ -24,7 +24,7 @@ export function windowOf(query: Pick<ListQuery, 'page' | 'pageSize'>, exportAll 
 }
 
 /** An ILIKE pattern that matches the text literally (%, _ and \ escaped). */
-const likePattern = (q: string) => `%${q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+export const likePattern = (q: string) => `%${q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
 
 /** Search `q` over several columns (use '$alias.column$' for joined ones). */
 export function searchWhere(q: string | undefined, columns: string[]): WhereOptions | undefined {

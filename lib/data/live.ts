@@ -40,21 +40,37 @@ export type LiveNotice = LiveEvent & { companyId: string; crewIds: string[] };
  * after the tap, as the tap path derived it.
  */
 export async function notifyTap(t: Transaction, tap: { eventId: string; step: InstallStep }): Promise<void> {
-  await sequelize.query(
-    `SELECT pg_notify(:channel, json_build_object(
-        'seq', e.seq::text, 'id', e.install_id, 'installId', e.install_id, 'eventId', e.id, 'type', e.type,
-        'step', CAST(:step AS text), 'status', i.status, 'jobId', i.job_id,
-        'deviceTime', e.device_time, 'receivedAt', e.received_at,
-        'companyId', e.company_id, 'crewIds', json_build_array(i.crew_id, j.crew_id))::text)
-       FROM install_events e JOIN installs i ON i.id = e.install_id JOIN jobs j ON j.id = i.job_id
-      WHERE e.id = :eventId`,
-    {
-      replacements: { channel: LIVE_CHANNEL, step: tap.step, eventId: tap.eventId },
-      transaction: t,
-      type: QueryTypes.SELECT,
-    },
-  );
+  await sequelize.query(`SELECT ${NOTICE_SQL} FROM install_events e ${NOTICE_JOINS} WHERE e.id = :eventId`, {
+    replacements: { channel: LIVE_CHANNEL, step: tap.step, eventId: tap.eventId },
+    transaction: t,
+    type: QueryTypes.SELECT,
+  });
 }
+
+/**
+ * The same NOTIFY for a tap inserted by `insertSql` (an `INSERT INTO install_events … RETURNING *`) in the same
+ * statement: one round trip while the company's numbering lock is held (migration 20261203014000).
+ */
+export async function insertAndNotifyTap(
+  t: Transaction,
+  insertSql: string,
+  replacements: Record<string, unknown>,
+  step: InstallStep,
+): Promise<void> {
+  await sequelize.query(`WITH e AS (${insertSql}) SELECT ${NOTICE_SQL} FROM e ${NOTICE_JOINS}`, {
+    replacements: { ...replacements, channel: LIVE_CHANNEL, step },
+    transaction: t,
+    type: QueryTypes.SELECT,
+  });
+}
+
+// Over a stored tap `e`, its install `i` and job `j`.
+const NOTICE_SQL = `pg_notify(:channel, json_build_object(
+    'seq', e.seq::text, 'id', e.install_id, 'installId', e.install_id, 'eventId', e.id, 'type', e.type,
+    'step', CAST(:step AS text), 'status', i.status, 'jobId', i.job_id,
+    'deviceTime', e.device_time, 'receivedAt', e.received_at,
+    'companyId', e.company_id, 'crewIds', json_build_array(i.crew_id, j.crew_id))::text)`;
+const NOTICE_JOINS = 'JOIN installs i ON i.id = e.install_id JOIN jobs j ON j.id = i.job_id';
 
 /** Whether this user's stream may carry the notice: their company, and for field users their crews' installs. */
 export function mayReceive(user: Pick<SessionUser, 'companyId' | 'role' | 'crewIds'>, notice: LiveNotice): boolean {

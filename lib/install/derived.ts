@@ -46,6 +46,8 @@ export type DerivedColumns = {
   maxPressureKpa: number | null;
   flagKinds: string[];
   worstSeverity: 'critical' | 'warning' | null;
+  /** `worstSeverity` as 2 / 1 / 0 (migration 20261203017000), what the review list orders by. */
+  severityRank: 0 | 1 | 2;
 };
 
 const NO_MATERIALS: DeriveMaterials = { resin: null, packer: null, resinKitExpiresOn: null };
@@ -151,6 +153,7 @@ export function deriveRow(fold: StoredFold, settings: DeriveSettings): { columns
     maxPressureKpa: fold.pressure?.max ?? null,
     flagKinds: flags.map((f) => f.kind),
     worstSeverity: critical ? 'critical' : flags.length ? 'warning' : null,
+    severityRank: critical ? 2 : flags.length ? 1 : 0,
   };
   return { columns, fold: { ...fold, clockOk: materials.resin !== null && problem === null } };
 }

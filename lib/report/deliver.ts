@@ -1,7 +1,7 @@
 import 'server-only';
 import nodemailer from 'nodemailer';
 import { env } from '@/lib/env';
-import { formatInZone } from '@/lib/time/dates';
+import { formatInZoneIn } from '@/lib/time/dates-locale';
 import {
   CLAIM_LEASE_SECONDS,
   claimReportSend,
@@ -47,7 +47,7 @@ export async function deliverReportSend(sendId: string, attempt: Attempt): Promi
     );
     const mail = reportEmail(data, {
       link: url,
-      expiresOn: formatInZone(
+      expiresOn: formatInZoneIn(
         link.expiresAt,
         data.company.timeZone,
         data.locale === 'es' ? "d 'de' MMMM 'de' yyyy" : 'd MMMM yyyy',

@@ -1,5 +1,5 @@
 import { translatorFor } from '@/i18n/translator';
-import { formatDay } from '@/lib/time/dates';
+import { formatDay } from '@/lib/time/dates-locale';
 import type { ReportData } from '@/lib/data/report';
 
 // The e-mail that carries the report: plain, inline-styled HTML (mail clients drop <style>) and a

@@ -1,6 +1,8 @@
 import 'server-only';
 import { isLinkLive } from '@/lib/data/report-links';
 import { companyNameOf, getReportDataForLink } from '@/lib/data/report';
+import { localeFromAcceptLanguage } from '@/i18n/locales';
+import { translatorFor } from '@/i18n/translator';
 import { verifyReportLink, type LinkCheck } from './link';
 
 // What a customer link opens. Every refusal looks the same from outside: no word on whether the job
@@ -44,6 +46,8 @@ export async function refusalCompanyName(token: string): Promise<string | null> 
   return check.ok || check.reason === 'expired' ? companyNameOf(check.companyId) : null;
 }
 
-/** The sentence shown for every refused link. */
-export const refusedLinkText = (companyName: string | null) =>
-  `This link is not valid or has expired — ask ${companyName ?? 'the company that sent it'} for a new one.`;
+/** The sentence shown for every refused link, in the language of the browser's Accept-Language (English without). */
+export function refusedLinkText(companyName: string | null, acceptLanguage?: string | null): string {
+  const t = translatorFor(localeFromAcceptLanguage(acceptLanguage), 'report');
+  return t('refused.text', { company: companyName ?? t('refused.theCompany') });
+}

@@ -13,7 +13,8 @@ import {
   renderToBuffer,
 } from '@react-pdf/renderer';
 import { translatorFor } from '@/i18n/translator';
-import { formatDay, formatInZone } from '@/lib/time/dates';
+import { formatInZone } from '@/lib/time/dates';
+import { formatDay } from '@/lib/time/dates-locale';
 import type { ReportData, ReportRepair } from '@/lib/data/report';
 import type { ReportImage } from './images';
 import { timelineLayout } from './timeline';

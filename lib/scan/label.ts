@@ -15,8 +15,10 @@ export function labelOf(raw: string, today = new Date()): ScannedLabel {
   return { raw, lot };
 }
 
-/** "Read lot X, use by Y." */
-export function describeLabel(label: ScannedLabel) {
-  const parts = [label.lot && `lot ${label.lot}`, label.expiresOn && `use by ${label.expiresOn}`].filter(Boolean);
-  return `Read ${parts.join(', ')}.`;
+type ScanWords = (key: 'read' | 'lot' | 'useBy', values: Record<string, string>) => string;
+
+/** "Read lot X, use by Y.", in the words of the `scan` catalogue namespace (useTranslations('scan')). */
+export function describeLabel(label: ScannedLabel, t: ScanWords) {
+  const parts = [label.lot && t('lot', { lot: label.lot }), label.expiresOn && t('useBy', { date: label.expiresOn })];
+  return t('read', { parts: parts.filter(Boolean).join(', ') });
 }

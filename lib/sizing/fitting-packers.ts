@@ -1,3 +1,4 @@
+import { message, type LibMessage } from '@/lib/i18n/message';
 import { formatLength, type UnitSystem } from '@/lib/units';
 import { SizingInputError } from './errors';
 import { pressureRange } from './pressure-range';
@@ -35,16 +36,25 @@ export function fittingPackers(
     validatePacker(packer);
     const endMarginEachMm = (packer.bladderLengthMm - patch) / 2;
     const reasons: string[] = [];
-    const len = (mm: number) => formatLength(mm, system, 'short', { decimals: system === 'imperial' ? 1 : 0 });
-    if (d < packer.minDiameterMm)
+    const reasonDetails: LibMessage[] = [];
+    const decimals = system === 'imperial' ? 1 : 0;
+    const len = (mm: number) => formatLength(mm, system, 'short', { decimals });
+    const q = (mm: number) => ({ lengthMm: mm, decimals });
+    if (d < packer.minDiameterMm) {
       reasons.push(`Pipe ${len(d)} is smaller than the packer's minimum of ${len(packer.minDiameterMm)}.`);
-    if (d > packer.maxDiameterMm)
+      reasonDetails.push(message('fit.tooSmall', { pipe: q(d), limit: q(packer.minDiameterMm) }));
+    }
+    if (d > packer.maxDiameterMm) {
       reasons.push(`Pipe ${len(d)} is larger than the packer's maximum of ${len(packer.maxDiameterMm)}.`);
+      reasonDetails.push(message('fit.tooLarge', { pipe: q(d), limit: q(packer.maxDiameterMm) }));
+    }
     if (endMarginEachMm < packer.endMarginMm) {
       reasons.push(
         `The ${len(patch)} patch leaves ${len(endMarginEachMm)} of bladder at each end; this packer needs at least ${len(packer.endMarginMm)}.`,
       );
+      const values = { patch: q(patch), margin: q(endMarginEachMm), needed: q(packer.endMarginMm) };
+      reasonDetails.push(message('fit.endMargin', values));
     }
-    return { ...packer, packer, fits: reasons.length === 0, endMarginEachMm, reasons };
+    return { ...packer, packer, fits: reasons.length === 0, endMarginEachMm, reasons, reasonDetails };
   });
 }

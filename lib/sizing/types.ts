@@ -1,3 +1,4 @@
+import type { LibMessage } from '@/lib/i18n/message';
 /** A packer (inflatable bladder) of the company's fleet, all in SI. */
 export interface Packer {
   id: string | number;
@@ -22,6 +23,8 @@ export interface PackerFit extends Packer {
   endMarginEachMm: number;
   /** Why it does not fit; empty when it fits. */
   reasons: string[];
+  /** `reasons` as catalogue messages, for a screen in the reader's language. */
+  reasonDetails: LibMessage[];
 }
 
 export interface PressureRange {

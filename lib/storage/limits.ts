@@ -46,14 +46,24 @@ export const formatBytes = (bytes: number) =>
       ? `${Math.round(bytes / 1024)} KB`
       : `${bytes} bytes`;
 
+export type UploadRefusal = { kind: 'type'; contentType: string } | { kind: 'size'; type: MediaKind; size: number };
+
+/** Why a declared file may not be uploaded, as facts a screen words in its reader's language; null when it may. */
+export function refusalOf(contentType: string, byteSize: number): UploadRefusal | null {
+  const type = allowedType(contentType);
+  if (!type) return { kind: 'type', contentType };
+  if (byteSize > MAX_BYTES[type.kind]) return { kind: 'size', type: type.kind, size: byteSize };
+  return null;
+}
+
 /** Why a declared file may not be uploaded (type or size), or null when it may. */
 export function uploadRefusal(contentType: string, byteSize: number): string | null {
-  const type = allowedType(contentType);
-  if (!type) return `Files of type ${contentType || 'unknown'} cannot be uploaded: send ${ALLOWED_SUMMARY}.`;
-  if (byteSize > MAX_BYTES[type.kind]) {
-    return `This ${type.kind} is ${formatBytes(byteSize)}; ${type.kind === 'image' ? 'images' : 'videos'} may be at most ${formatBytes(MAX_BYTES[type.kind])}.`;
-  }
-  return null;
+  const refusal = refusalOf(contentType, byteSize);
+  if (!refusal) return null;
+  if (refusal.kind === 'type')
+    return `Files of type ${contentType || 'unknown'} cannot be uploaded: send ${ALLOWED_SUMMARY}.`;
+  const { type, size } = refusal;
+  return `This ${type} is ${formatBytes(size)}; ${type === 'image' ? 'images' : 'videos'} may be at most ${formatBytes(MAX_BYTES[type])}.`;
 }
 
 /**

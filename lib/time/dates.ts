@@ -1,20 +1,19 @@
-import { format } from 'date-fns';
-import { es } from 'date-fns/locale/es';
-import { TZDate } from '@date-fns/tz';
-
-// Month names and word order per language (date-fns locales); the English forms stay the ISO-like ones the
-// office and the tests have always read.
-const DATE_LOCALES = { es } as const;
-const DATE_TIME_PATTERNS: Record<string, string> = { es: 'd MMM yyyy, HH:mm zzz' };
-const DAY_PATTERNS: Record<string, string> = { es: 'd MMM yyyy' };
-
 /** A calendar day (YYYY-MM-DD) in a time zone, `offsetDays` from the given instant. */
 export function dayInZone(instant: Date, timeZone: string, offsetDays = 0): string {
   const shifted = new Date(instant.getTime() + offsetDays * 86_400_000);
-  // en-CA formats as YYYY-MM-DD.
-  return new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).format(
-    shifted,
-  );
+  return dayFormatter(timeZone).format(shifted);
+}
+
+// Building an Intl formatter costs far more than using one, and lists call this per row: one per zone.
+const dayFormatters = new Map<string, Intl.DateTimeFormat>();
+function dayFormatter(timeZone: string): Intl.DateTimeFormat {
+  let formatter = dayFormatters.get(timeZone);
+  if (!formatter) {
+    // en-CA formats as YYYY-MM-DD.
+    formatter = new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' });
+    dayFormatters.set(timeZone, formatter);
+  }
+  return formatter;
 }
 
 /**
@@ -24,15 +23,7 @@ export function dayInZone(instant: Date, timeZone: string, offsetDays = 0): stri
  * date-fns `format` over an @date-fns/tz TZDate gives (a unit test compares the two); any other
  * letter is refused rather than printed wrong.
  */
-export function formatInZone(
-  instant: Date | string,
-  timeZone: string,
-  pattern = 'yyyy-MM-dd HH:mm zzz',
-  locale?: string,
-): string {
-  // Another language's month names and word order come from date-fns's locale (server and Spanish screens only).
-  const dateLocale = locale ? DATE_LOCALES[locale as keyof typeof DATE_LOCALES] : undefined;
-  if (dateLocale) return format(new TZDate(new Date(instant).getTime(), timeZone), pattern, { locale: dateLocale });
+export function formatInZone(instant: Date | string, timeZone: string, pattern = 'yyyy-MM-dd HH:mm zzz'): string {
   const time = new Date(instant).getTime();
   if (Number.isNaN(time)) throw new RangeError('Invalid time value');
   const p = partsInZone(time, timeZone);
@@ -116,19 +107,4 @@ function partsInZone(time: number, timeZone: string): ZoneParts {
   const wall = Date.UTC(year, month - 1, day, hour, minute, second);
   const offsetMin = Math.round((wall - Math.floor(time / 1000) * 1000) / 60_000);
   return { year, month, day, hour, minute, second, offsetMin };
-}
-
-/** Date and time in a zone as a reader of `locale` writes them: "2026-12-01 14:05 MST", "1 dic 2026, 14:05 MST". */
-export function formatDateTimeIn(instant: Date | string, timeZone: string, locale?: string): string {
-  return formatInZone(instant, timeZone, DATE_TIME_PATTERNS[locale ?? ''] ?? 'yyyy-MM-dd HH:mm zzz', locale);
-}
-
-/** A calendar day "YYYY-MM-DD" as a reader of `locale` writes it ("2026-12-31", "31 dic 2026"). */
-export function formatDay(day: string, locale?: string): string {
-  const pattern = DAY_PATTERNS[locale ?? ''];
-  const match = /^(\d{4})-(\d{2})-(\d{2})$/.exec(day);
-  if (!pattern || !match) return day;
-  return format(new Date(Number(match[1]), Number(match[2]) - 1, Number(match[3])), pattern, {
-    locale: DATE_LOCALES[locale as keyof typeof DATE_LOCALES],
-  });
 }

@@ -27,9 +27,7 @@ export function formatNumber(value: number, decimals: number, locale?: string): 
   const text = value.toFixed(digits);
   const rounded = Number(text) === 0 ? 0 : Number(text);
   if (locale && locale !== 'en') {
-    return new Intl.NumberFormat(locale, { minimumFractionDigits: digits, maximumFractionDigits: digits }).format(
-      rounded,
-    );
+    return numberFormatter(locale, digits).format(rounded);
   }
   return Number(text) === 0 ? (0).toFixed(digits) : text;
 }
@@ -67,4 +65,16 @@ export function formatVolume(litres: number, system: UnitSystem, options: Format
 export function formatForce(newtons: number, system: UnitSystem, options: FormatOptions = {}): string {
   const unit = unitLabels(system).force;
   return `${formatNumber(forceFromSi(newtons, system), options.decimals ?? (unit === 'kN' ? 1 : 0), options.locale)} ${unit}`;
+}
+
+// One formatter per language and number of decimals: building one costs far more than using it.
+const numberFormatters = new Map<string, Intl.NumberFormat>();
+function numberFormatter(locale: string, digits: number): Intl.NumberFormat {
+  const key = `${locale}|${digits}`;
+  let formatter = numberFormatters.get(key);
+  if (!formatter) {
+    formatter = new Intl.NumberFormat(locale, { minimumFractionDigits: digits, maximumFractionDigits: digits });
+    numberFormatters.set(key, formatter);
+  }
+  return formatter;
 }

@@ -102,3 +102,16 @@ export async function loadSame(base, { connections, duration, amount, path, head
 }
 
 export const round = (value, digits = 0) => (Number.isFinite(value) ? Number(value.toFixed(digits)) : null);
+
+/** A load's rate and latency percentiles, as one cell of the table. */
+export function rate(r) {
+  return `${round(r.rps)} req/s, p50 ${round(r.p50, 1)} / p95 ${round(r.p95, 1)} / p99 ${round(r.p99, 1)} ms`;
+}
+
+/** The table of rows as Markdown on stdout. */
+export function printTable(rows) {
+  const mark = (pass) => (pass === null ? '—' : pass ? 'pass' : 'FAIL');
+  console.log('| figure | what | goal | measured | pass/fail |');
+  console.log('| --- | --- | --- | --- | --- |');
+  for (const r of rows) console.log(`| ${r.figure} | ${r.name} | ${r.goal} | ${r.measured} | ${mark(r.pass)} |`);
+}

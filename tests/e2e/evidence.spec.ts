@@ -30,6 +30,14 @@ test.describe('inspection images', () => {
       .png()
       .toBuffer();
     await panel.getByLabel('Choose files').setInputFiles({ name: 'patch-end.png', mimeType: 'image/png', buffer: png });
+    // The upload runs its phases (sending, checking, done); a failure names its reason in an alert, so a run that
+    // goes wrong says why instead of only finding no item.
+    await expect(panel.getByRole('list', { name: 'Uploads' }).locator('li').first()).toHaveAttribute(
+      'data-phase',
+      /done|failed/,
+      { timeout: 30_000 },
+    );
+    expect(await panel.getByRole('alert').allTextContents()).toEqual([]);
     const item = panel.getByTestId('evidence-item');
     await expect(item).toHaveCount(1, { timeout: 20_000 });
     await expect(item).toContainText('Inspection');

@@ -21,7 +21,7 @@ test.describe('insights', () => {
     }
 
     await hydrated(page);
-    await page.getByLabel('Crew').selectOption({ label: 'North crew' });
+    await page.getByLabel('Crew', { exact: true }).selectOption({ label: 'North crew' });
     await page.getByRole('button', { name: 'Show' }).click();
     await expect(page).toHaveURL(/crewId=/);
     await expect(page.getByTestId('insights-summary')).toContainText('by North crew');

@@ -9,7 +9,7 @@ import { deriveInstallState } from '@/lib/install/state';
 import { worstRank } from '@/lib/review/flags';
 import { installListQuerySchema } from '@/lib/validation/reviews';
 import { Company, Install, InstallEvent, Packer, Repair, ResinKit, ResinSystem, sequelize } from '@/models';
-import { T0, body, cleanInstall, postAll, postEvent, startInstall } from './helpers/installs';
+import { T0, at, body, cleanInstall, postAll, postEvent, startInstall } from './helpers/installs';
 import { signInAs } from './helpers/session';
 import { makeInstallWorld, type InstallWorld } from './helpers/world';
 
@@ -34,6 +34,15 @@ const freshRepair = () =>
     defectLengthMm: 300,
   });
 
+const officeUser = () => ({
+  id: w.office.id,
+  companyId: w.company.id,
+  role: 'office' as const,
+  name: w.office.name,
+  email: w.office.email,
+  crewIds: [],
+});
+
 /** The stored row next to what the log says now (both read at one database instant). */
 async function compare(installId: string) {
   const [row] = await sequelize.query<Record<string, unknown> & { now: Date; kinds: string[]; rank: number }>(
@@ -50,16 +59,20 @@ async function compare(installId: string) {
     install.resinKitId ? ResinKit.findByPk(install.resinKitId) : null,
     Company.findByPk(install.companyId),
   ]);
-  const { plan, flags } = installClock({
-    state,
-    resin: resin ? resinClockSpec(resin) : null,
-    packer: packer ? { minPressureKpa: packer.minPressureKpa, maxPressureKpa: packer.maxPressureKpa } : null,
-    resinKitExpiresOn: kit?.expiresOn ?? null,
-    safetyMargin: company!.workingWindowSafetyMargin,
-    holdReserve: company!.holdReserve,
-    unitSystem: company!.unitSystem,
-    now: new Date(row.now),
-  });
+  const clockAt = (now: Date | null) =>
+    installClock({
+      state,
+      resin: resin ? resinClockSpec(resin) : null,
+      packer: packer ? { minPressureKpa: packer.minPressureKpa, maxPressureKpa: packer.maxPressureKpa } : null,
+      resinKitExpiresOn: kit?.expiresOn ?? null,
+      safetyMargin: company!.workingWindowSafetyMargin,
+      holdReserve: company!.holdReserve,
+      unitSystem: company!.unitSystem,
+      now,
+    });
+  const { plan, flags } = clockAt(new Date(row.now));
+  // What holds whatever the time: the rank the row keeps for the severity list.
+  const timeless = clockAt(null);
   const mixedPlan = plan && !plan.preview ? plan : null;
   const ms = (value: unknown) => (value == null ? null : new Date(value as string).getTime());
   const stored = {
@@ -75,6 +88,7 @@ async function compare(installId: string) {
     maxPressureKpa: install.maxPressureKpa,
     kindsNow: [...row.kinds].sort(),
     rankNow: Number(row.rank),
+    storedRank: install.severityRank,
     derived: install.derivedAt !== null,
   };
   const fromLog = {
@@ -90,9 +104,10 @@ async function compare(installId: string) {
     maxPressureKpa: state.pressuresKpa.length ? Math.max(...state.pressuresKpa) : null,
     kindsNow: flags.map((f) => f.kind).sort(),
     rankNow: worstRank(flags),
+    storedRank: worstRank(timeless.flags),
     derived: true,
   };
-  return { stored, fromLog, flags };
+  return { stored, fromLog, flags, finishedAt: ms(install.finishedAt) };
 }
 
 async function expectStoredMatchesLog(installId: string, context: string) {
@@ -237,14 +252,7 @@ describe('the derived state on the install row', () => {
     for (const [i, id] of ids.entries()) expect((await compare(id)).stored).toEqual(before[i].stored);
 
     await Install.update({ derivedAt: null }, { where: { id: ids } });
-    const office = {
-      id: w.office.id,
-      companyId: w.company.id,
-      role: 'office' as const,
-      name: w.office.name,
-      email: w.office.email,
-      crewIds: [],
-    };
+    const office = officeUser();
     const page = await listInstalls(office, installListQuerySchema.parse({ sort: 'severity', pageSize: '100' }));
     expect(await Install.count({ where: { companyId: w.company.id, derivedAt: null } })).toBe(0);
     const ranks = page.items.map((item) => worstRank(item.flags));
@@ -253,6 +261,80 @@ describe('the derived state on the install row', () => {
     const cleanFirst = await listInstalls(office, installListQuerySchema.parse({ sort: '-severity', pageSize: '100' }));
     const cleanRanks = cleanFirst.items.map((item) => worstRank(item.flags));
     expect(cleanRanks).toEqual([...cleanRanks].sort((a, b) => a - b));
+  });
+});
+
+describe('the severity list', () => {
+  /** Every install of the company in the order its flags worked out from its own log give now. */
+  async function orderFromLogs(dir: 'asc' | 'desc') {
+    const installs = await Install.findAll({ where: { companyId: w.company.id }, attributes: ['id'] });
+    const rows = await Promise.all(installs.map(async ({ id }) => ({ id, ...(await compare(id)) })));
+    const sign = dir === 'asc' ? -1 : 1;
+    return rows
+      .sort(
+        (a, b) =>
+          sign * (a.fromLog.rankNow - b.fromLog.rankNow) ||
+          (a.finishedAt ?? Infinity) - (b.finishedAt ?? Infinity) ||
+          (a.id < b.id ? -1 : a.id > b.id ? 1 : 0),
+      )
+      .map((row) => row.id);
+  }
+  const listed = async (sort: string, pageSize: number, page = 1) =>
+    listInstalls(officeUser(), installListQuerySchema.parse({ sort, pageSize: String(pageSize), page: String(page) }));
+
+  it('orders and pages from the stored rank exactly as the flags of each log, running clocks and corrections included', async () => {
+    await signInAs(w.foreman);
+    const minutesAgo = (min: number) => (Date.now() - T0) / 60_000 - min;
+    const made: Record<string, string> = {};
+    for (const [name, bend] of Object.entries({
+      clean: {},
+      late: { bladder_inflated: 70 },
+      early: { bladder_deflated: 100 },
+    })) {
+      made[name] = await startInstall({ ...w, repair: await freshRepair() });
+      await postAll(made[name], cleanInstall(w, bend));
+    }
+    const mixedOnly = (mixedMinAgo: number) =>
+      cleanInstall(w, { resin_mixed: minutesAgo(mixedMinAgo) }).filter((t) =>
+        ['safety_acknowledged', 'conditions_recorded', 'resin_mixed'].includes(t.type),
+      );
+    // Running: one mixed an hour ago and never inflated (its inflate-by has passed), one mixed just now.
+    made.overdue = await startInstall({ ...w, repair: await freshRepair() });
+    await postAll(made.overdue, mixedOnly(60));
+    made.fresh = await startInstall({ ...w, repair: await freshRepair() });
+    await postAll(made.fresh, mixedOnly(1));
+    made.notStarted = await startInstall({ ...w, repair: await freshRepair() });
+
+    const overdue = await compare(made.overdue);
+    expect(overdue.fromLog.rankNow).toBe(2);
+    expect(overdue.stored.storedRank).toBeLessThan(2); // time passing, not the stored kinds, makes it critical
+    for (const dir of ['asc', 'desc'] as const) {
+      const expected = await orderFromLogs(dir);
+      const sort = dir === 'asc' ? 'severity' : '-severity';
+      expect((await listed(sort, 100)).items.map((item) => item.id)).toEqual(expected);
+      // Page by page, the same order (the page's end is taken from each side before merging).
+      const pages = [];
+      for (let page = 1; page <= Math.ceil(expected.length / 3); page++)
+        pages.push(...(await listed(sort, 3, page)).items.map((item) => item.id));
+      expect(pages).toEqual(expected);
+      expect((await listed(sort, 3)).total).toBe(expected.length);
+    }
+
+    // A correction moves the late inflate back inside the working window: its stored rank follows.
+    const late = await compare(made.late);
+    expect(late.stored.storedRank).toBe(2);
+    const inflated = await InstallEvent.findOne({ where: { installId: made.late, type: 'bladder_inflated' } });
+    const fix = body(
+      'correction',
+      300,
+      { reason: 'Wrong time', deviceTime: at(40) },
+      { correctsEventId: inflated!.clientEventId },
+    );
+    expect((await postEvent(made.late, fix)).status).toBe(201);
+    const corrected = await compare(made.late);
+    expect(corrected.stored).toEqual(corrected.fromLog);
+    expect(corrected.stored.storedRank).toBeLessThan(2);
+    expect((await listed('severity', 100)).items.map((item) => item.id)).toEqual(await orderFromLogs('asc'));
   });
 });
 

@@ -51,6 +51,13 @@ describe('the customer link /r/<token>', () => {
     const gone = await pdf(expired);
     expect(gone.status).toBe(410);
     expect(await gone.text()).toBe(`This link is not valid or has expired — ask ${w.company.name} for a new one.`);
+    // A Spanish browser reads the same refusal in Spanish.
+    const spanish = await pdfRoute(
+      new Request(`http://localhost/r/${expired}/pdf`, { headers: { 'accept-language': 'es-MX,es;q=0.9' } }),
+      { params: Promise.resolve({ token: expired }) },
+    );
+    expect(spanish.status).toBe(410);
+    expect(await spanish.text()).toBe(`Este enlace no es válido o ha caducado: pida uno nuevo a ${w.company.name}.`);
   });
 
   it('answers a signed link to a job that does not exist or is not approved exactly like a forged one', async () => {

@@ -1,17 +1,27 @@
 import type { Metadata } from 'next';
 import { getTranslations } from 'next-intl/server';
 import { Suspense } from 'react';
-import { IntlScope } from '@/components/shell/intl-scope';
 import { Logo } from '@/components/shell/logo';
 import { siteConfig } from '@/config/site';
-import { SignInForm } from './sign-in-form';
+import { SignInForm, type SignInWords } from './sign-in-form';
 
 export async function generateMetadata(): Promise<Metadata> {
   return { title: (await getTranslations('signIn'))('metaTitle') };
 }
 
+const WORDS = ['email', 'password', 'submit', 'submitting', 'badCredentials', 'failed'] as const;
+const ERRORS = ['email', 'passwordMissing', 'passwordTooLong'] as const;
+// A number no message holds, swapped for `{minutes}` so the form fills in the count itself.
+const MARK = 987654;
+
 export default async function Page() {
   const t = await getTranslations('signIn');
+  const words: SignInWords = {
+    ...(Object.fromEntries(WORDS.map((key) => [key, t(key)])) as Record<(typeof WORDS)[number], string>),
+    tooManyOne: t('tooMany', { minutes: 1 }),
+    tooManyOther: t('tooMany', { minutes: MARK }).replace(String(MARK), '{minutes}'),
+    errors: Object.fromEntries(ERRORS.map((key) => [key, t(`errors.${key}`)])) as SignInWords['errors'],
+  };
   return (
     <main className="flex min-h-screen items-center justify-center bg-slate-900 p-4">
       <div className="w-full max-w-md rounded-xl bg-white p-8 shadow-xl">
@@ -22,11 +32,9 @@ export default async function Page() {
             <p className="text-sm text-slate-600">{t('subtitle')}</p>
           </div>
         </div>
-        <IntlScope namespaces={['signIn']}>
-          <Suspense>
-            <SignInForm />
-          </Suspense>
-        </IntlScope>
+        <Suspense>
+          <SignInForm words={words} />
+        </Suspense>
       </div>
     </main>
   );

@@ -1,26 +1,41 @@
 'use client';
 
 import { useRouter, useSearchParams } from 'next/navigation';
-import { useTranslations } from 'next-intl';
 import { useState, type FormEvent } from 'react';
-import { Button } from '@/components/ui/button';
+import { buttonVariants } from '@/components/ui/button-variants';
 import { safeCallbackPath } from '@/lib/auth/callback-url';
 import { signInWithPassword } from '@/lib/client/sign-in';
-import { checkSignIn, type SignInFields } from '@/lib/validation/sign-in-check';
+import { checkSignIn, SIGN_IN_MESSAGES, type SignInFields } from '@/lib/validation/sign-in-check';
+
+/**
+ * The form's words in the reader's language (the `signIn` messages), given by the page: no translation library
+ * ships. `tooManyOne` and `tooManyOther` are the two plural forms English and Spanish have; the latter holds
+ * `{minutes}` for the number.
+ */
+export type SignInWords = Record<
+  'email' | 'password' | 'submit' | 'submitting' | 'badCredentials' | 'failed' | 'tooManyOne' | 'tooManyOther',
+  string
+> & { errors: Record<keyof typeof SIGN_IN_MESSAGES, string> };
 
 // One message for every failure (badCredentials), so the form never tells whether an e-mail has an account.
 function failureMessage(
-  result: { status: number; message?: string } | null,
-  t: (key: 'badCredentials' | 'failed') => string,
+  result: { status: number; message?: string; retryAfterSeconds?: number } | null,
+  words: SignInWords,
 ): string {
-  if (result?.status === 401) return t('badCredentials');
-  // 429: the server's "Too many attempts — try again in N minutes."
+  if (result?.status === 401) return words.badCredentials;
+  // 429: "Too many attempts — try again in N minutes.", counted as lib/security/throttle.ts counts.
+  if (result?.status === 429 && result.retryAfterSeconds) {
+    const minutes = Math.max(1, Math.ceil(result.retryAfterSeconds / 60));
+    return minutes === 1 ? words.tooManyOne : words.tooManyOther.replace('{minutes}', String(minutes));
+  }
   if (result?.status === 429 && result.message) return result.message;
-  return t('failed');
+  return words.failed;
 }
 
-export function SignInForm() {
-  const t = useTranslations('signIn');
+/** The check's English message (lib/validation/sign-in-check.ts) as its key in the catalogue. */
+const MESSAGE_KEYS = new Map(Object.entries(SIGN_IN_MESSAGES).map(([key, text]) => [text as string, key]));
+
+export function SignInForm({ words }: { words: SignInWords }) {
   const router = useRouter();
   const params = useSearchParams();
   const [failure, setFailure] = useState<string | null>(null);
@@ -29,6 +44,10 @@ export function SignInForm() {
   const [errors, setErrors] = useState<Partial<Record<keyof SignInFields, string>>>({});
   const [submitted, setSubmitted] = useState(false);
   const [isSubmitting, setSubmitting] = useState(false);
+  const said = (message: string) => {
+    const key = MESSAGE_KEYS.get(message);
+    return key ? words.errors[key as keyof typeof SIGN_IN_MESSAGES] : message;
+  };
 
   const recheck = (form: HTMLFormElement | null, field: keyof SignInFields) => {
     if (!submitted || !form) return;
@@ -54,7 +73,7 @@ export function SignInForm() {
     const result = await signInWithPassword(check.values.email, check.values.password, next).catch(() => null);
     setSubmitting(false);
     if (!result || !result.ok) {
-      setFailure(failureMessage(result, t));
+      setFailure(failureMessage(result, words));
       return;
     }
     router.replace(next);
@@ -65,7 +84,7 @@ export function SignInForm() {
     <form onSubmit={(event) => void onSubmit(event)} noValidate className="space-y-5">
       <div>
         <label htmlFor="email" className="block text-base font-medium">
-          {t('email')}
+          {words.email}
         </label>
         <input
           id="email"
@@ -80,13 +99,13 @@ export function SignInForm() {
         />
         {errors.email && (
           <p id="email-error" className="mt-1 text-sm text-missed-700">
-            {errors.email}
+            {said(errors.email)}
           </p>
         )}
       </div>
       <div>
         <label htmlFor="password" className="block text-base font-medium">
-          {t('password')}
+          {words.password}
         </label>
         <input
           id="password"
@@ -100,16 +119,16 @@ export function SignInForm() {
         />
         {errors.password && (
           <p id="password-error" className="mt-1 text-sm text-missed-700">
-            {errors.password}
+            {said(errors.password)}
           </p>
         )}
       </div>
       <div role="alert" aria-live="assertive">
         {failure && <p className="rounded-md bg-missed-100 px-3 py-2 text-base text-missed-700">{failure}</p>}
       </div>
-      <Button type="submit" size="field" className="w-full" disabled={isSubmitting}>
-        {isSubmitting ? t('submitting') : t('submit')}
-      </Button>
+      <button type="submit" className={buttonVariants({ size: 'field', className: 'w-full' })} disabled={isSubmitting}>
+        {isSubmitting ? words.submitting : words.submit}
+      </button>
     </form>
   );
 }

@@ -45,27 +45,30 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
         className="flex flex-wrap items-end gap-3 rounded-lg bg-white p-3 ring-1 ring-slate-200"
         aria-label="Period and crew"
       >
-        <label className="text-sm font-medium">
-          From
+        <div className="text-sm font-medium">
+          <label htmlFor="insights-from">From</label>
           <input
+            id="insights-from"
             type="date"
             name="from"
             defaultValue={period.from}
             className="mt-1 block h-9 rounded-md border border-slate-300 px-2"
           />
-        </label>
-        <label className="text-sm font-medium">
-          To
+        </div>
+        <div className="text-sm font-medium">
+          <label htmlFor="insights-to">To</label>
           <input
+            id="insights-to"
             type="date"
             name="to"
             defaultValue={period.to}
             className="mt-1 block h-9 rounded-md border border-slate-300 px-2"
           />
-        </label>
-        <label className="text-sm font-medium">
-          Crew
+        </div>
+        <div className="text-sm font-medium">
+          <label htmlFor="insights-crewId">Crew</label>
           <select
+            id="insights-crewId"
             name="crewId"
             defaultValue={crew?.id ?? ''}
             className="mt-1 block h-9 rounded-md border border-slate-300 px-2"
@@ -77,7 +80,7 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
               </option>
             ))}
           </select>
-        </label>
+        </div>
         <button type="submit" className={buttonVariants()}>
           Show
         </button>

@@ -1,26 +1,10 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { CureInputError, flagsFor, type InstallRecord, type FlagKind } from '@/lib/cure';
-import { at, plusMin, typicalEpoxy } from './fixtures';
+import { at, cleanInstall, plusMin, typicalEpoxy } from './fixtures';
 
-const mixedAt = at('2025-06-02T08:00:00Z');
-const packer = { minPressureKpa: 100, maxPressureKpa: 200 };
-
-// A finished install that did everything right: at 20 °C the window is 30 min (24 min safe),
-// the hold 90 min.
-const clean: InstallRecord = {
-  resin: typicalEpoxy,
-  mixedAt,
-  mixTempC: 20,
-  pipeTempC: 20,
-  inflatedAt: plusMin(mixedAt, 20),
-  deflatedAt: plusMin(mixedAt, 20 + 95),
-  dryRunSeconds: 8 * 60,
-  prepMinutes: 6,
-  pressuresKpa: [150, 160, 155],
-  packer,
-  resinKitExpiresOn: '2025-12-31',
-};
+const clean = cleanInstall;
+const { mixedAt } = cleanInstall;
 
 const kinds = (install: InstallRecord): FlagKind[] => flagsFor(install).map((f) => f.kind);
 

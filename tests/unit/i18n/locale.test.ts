@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { isLocale, localeFromAcceptLanguage } from '@/i18n/locales';
-import { formatDateTimeIn, formatDay } from '@/lib/time/dates';
+import { formatDateTimeIn, formatDay } from '@/lib/time/dates-locale';
 import { formatLength, formatNumber, formatPressure, formatTemperature } from '@/lib/units';
 
 describe('localeFromAcceptLanguage', () => {

@@ -1,6 +1,7 @@
 'use client';
 
 import { useTranslations } from 'next-intl';
+import { memo } from 'react';
 import { labelIn } from '@/i18n/labels';
 
 type LoggedEvent = {
@@ -11,8 +12,11 @@ type LoggedEvent = {
   userName?: string | null;
 };
 
-/** Every tap of this install, newest first, with where it is (this tablet or the server). */
-export function EventLog({ events, timeZone }: { events: LoggedEvent[]; timeZone: string }) {
+/**
+ * Every tap of this install, newest first, with where it is (this tablet or the server). Memoised: the install
+ * screen re-renders every second for its clocks, the log only when a tap arrives.
+ */
+export const EventLog = memo(function EventLog({ events, timeZone }: { events: LoggedEvent[]; timeZone: string }) {
   const t = useTranslations('install.log');
   const tl = useTranslations('labels');
   const time = new Intl.DateTimeFormat('en-US', {
@@ -41,4 +45,4 @@ export function EventLog({ events, timeZone }: { events: LoggedEvent[]; timeZone
       </ol>
     </section>
   );
-}
+});

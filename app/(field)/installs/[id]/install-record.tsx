@@ -4,7 +4,7 @@ import Link from 'next/link';
 import { useLocale, useTranslations } from 'next-intl';
 import { useState } from 'react';
 import type { CurePlan } from '@/lib/cure';
-import { formatDateTimeIn } from '@/lib/time/dates';
+import { formatDateTimeIn } from '@/lib/time/dates-locale';
 import type { InstallState } from '@/lib/install/state';
 import { formatDuration, formatPressure, formatTemperature, type UnitSystem } from '@/lib/units';
 import { Callout, PrimaryAction } from './field-ui';

@@ -15,7 +15,9 @@ import { submitJson } from '@/lib/client/submit-json';
 import { loadOutbox } from '@/lib/client/load-outbox';
 import { useWakeLock } from '@/lib/client/wake-lock';
 import { labelIn } from '@/i18n/labels';
+import { useLibMessage } from '@/i18n/use-lib-message';
 import type { InstallState } from '@/lib/install/state';
+import type { OutboxEntry } from '@/lib/client/outbox';
 import { groundwaterPressureKpa } from '@/lib/sizing';
 import { formatDuration, formatLength } from '@/lib/units';
 import { ClockStrip, deadlinesOf } from '@/app/(field)/installs/[id]/countdown-strip';
@@ -54,6 +56,7 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
   const td = useTranslations('install.deadlines');
   const locale = useLocale();
   const unitSystem = view.company.unitSystem;
+  const say = useLibMessage(unitSystem, view.company.timeZone);
   const { plan, flags } = useMemo(() => liveClock(view, state, now), [view, state, now]);
   const clockRunning = !!state.mixedAt && !state.deflatedAt;
   useWakeLock(clockRunning);
@@ -78,7 +81,13 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
     resinName: k.resinSystem.name,
     prepMinutes: k.resinSystem.prepMinutes ?? null,
   }));
-  const packers = view.options.packers.map((p) => ({ id: p.id, name: p.name, fits: p.fits, reasons: p.reasons }));
+  const packers = view.options.packers.map((p) => ({
+    id: p.id,
+    name: p.name,
+    fits: p.fits,
+    reasons: p.reasons,
+    reasonDetails: p.reasonDetails,
+  }));
   const packer = view.options.packers.find((p) => p.id === state.conditions?.packerId) ?? null;
   const rating = packer
     ? {
@@ -98,24 +107,7 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
   if (step === 'dry_run' && (skipDryRun || state.conditions)) step = state.conditions ? 'mix' : 'conditions';
   if (editingConditions && !state.mixedAt) step = 'conditions';
 
-  const synced = new Set(view.events.map((e) => e.clientEventId));
-  const logged = [
-    ...view.events.map((e) => ({
-      clientEventId: e.clientEventId,
-      type: e.type,
-      deviceTime: String(e.deviceTime),
-      synced: true,
-      userName: e.userName,
-    })),
-    ...local
-      .filter((e) => !synced.has(e.clientEventId))
-      .map((e) => ({
-        clientEventId: e.clientEventId,
-        type: e.type,
-        deviceTime: e.deviceTime,
-        synced: e.status === 'synced',
-      })),
-  ].sort((a, b) => Date.parse(a.deviceTime) - Date.parse(b.deviceTime));
+  const logged = useMemo(() => loggedEvents(view.events, local), [view.events, local]);
 
   return (
     <div className="space-y-4">
@@ -162,7 +154,7 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
                 flag.severity === 'critical' ? 'bg-missed-100 text-missed-700' : 'bg-near-100 ' + 'text-near-700'
               }`}
             >
-              {locale === 'en' || !tf.has(flag.kind) ? flag.message : tf(flag.kind)}
+              {flag.details ? say(flag.details) : locale === 'en' || !tf.has(flag.kind) ? flag.message : tf(flag.kind)}
             </li>
           ))}
         </ul>
@@ -247,6 +239,7 @@ export function InstallScreen({ initial, viewer }: { initial: InstallViewRespons
           return (
             <StepGo
               plan={plan}
+              say={say}
               canOverride={canDecide}
               onGo={() => void tap('go_decision', { go: true })}
               onOverride={(overrideReason, makerHoldMin) =>
@@ -382,3 +375,25 @@ const groundwaterKpaOf = (headMm: number | null | undefined) => (headMm ? ground
 /** A redo is offered after a failed inspection or a send-back (here, not in the record, which loads only when shown). */
 const mayOfferRedo = (state: InstallState, status: string) =>
   state.inspection?.result === 'fail' || status === 'sent_back';
+
+/** The server's events and this tablet's taps not yet among them, in device-time order, for the event log. */
+function loggedEvents(events: InstallViewResponse['events'], local: OutboxEntry[]) {
+  const synced = new Set(events.map((e) => e.clientEventId));
+  return [
+    ...events.map((e) => ({
+      clientEventId: e.clientEventId,
+      type: e.type,
+      deviceTime: String(e.deviceTime),
+      synced: true,
+      userName: e.userName,
+    })),
+    ...local
+      .filter((e) => !synced.has(e.clientEventId))
+      .map((e) => ({
+        clientEventId: e.clientEventId,
+        type: e.type,
+        deviceTime: e.deviceTime,
+        synced: e.status === 'synced',
+      })),
+  ].sort((a, b) => Date.parse(a.deviceTime) - Date.parse(b.deviceTime));
+}

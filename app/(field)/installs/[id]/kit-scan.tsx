@@ -1,7 +1,9 @@
 'use client';
 
+import { useLocale, useTranslations } from 'next-intl';
 import { useState } from 'react';
 import { ScanLabel, type ScannedLabel } from '@/components/scan/scan-label';
+import { formatDay } from '@/lib/time/dates-locale';
 import type { KitOption } from './step-conditions';
 
 /**
@@ -17,6 +19,8 @@ export function KitScan({
   onPick: (kitId: string) => void;
   canAddKit?: boolean;
 }) {
+  const t = useTranslations('install.kitScan');
+  const locale = useLocale();
   const [unknown, setUnknown] = useState<ScannedLabel | null>(null);
   const [note, setNote] = useState<string | null>(null);
 
@@ -30,14 +34,15 @@ export function KitScan({
     }
     setUnknown(null);
     if (kit.expired) {
-      setNote(`Kit ${kit.lot} is past its use-by date (${kit.expiresOn}): it cannot be used. Pick another kit.`);
+      setNote(t('expired', { lot: kit.lot, date: formatDay(kit.expiresOn, locale) }));
       return;
     }
     onPick(kit.id);
     const differs = label.expiresOn && label.expiresOn !== kit.expiresOn;
-    setNote(
-      `Kit ${kit.lot} chosen.${differs ? ` The label says use by ${label.expiresOn}; the kit on file says ${kit.expiresOn}: tell the office.` : ''}`,
-    );
+    const dates = differs
+      ? t('differs', { label: formatDay(label.expiresOn!, locale), file: formatDay(kit.expiresOn, locale) })
+      : '';
+    setNote(t('chosen', { lot: kit.lot, differs: dates }));
   };
 
   const addHref =
@@ -54,13 +59,15 @@ export function KitScan({
       {unknown && (
         <div role="alert" className="rounded-md bg-near-100 p-3 text-base" data-testid="kit-scan-unknown">
           <p>
-            Lot <strong>{unknown.lot ?? '(none on the label)'}</strong>
-            {unknown.expiresOn ? `, use by ${unknown.expiresOn},` : ''} is not among the company&apos;s kits. Pick the
-            kit from the list below, or ask the office to add this lot.
+            {t.rich('unknown', {
+              lot: unknown.lot ?? t('noLot'),
+              useBy: unknown.expiresOn ? t('unknownUseBy', { date: formatDay(unknown.expiresOn, locale) }) : '',
+              strong: (chunks) => <strong>{chunks}</strong>,
+            })}
           </p>
           {canAddKit && addHref && (
             <a href={addHref} className="mt-1 inline-block font-semibold text-brand-700 underline">
-              Add this kit
+              {t('add')}
             </a>
           )}
         </div>

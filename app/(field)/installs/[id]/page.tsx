@@ -15,7 +15,7 @@ export async function generateMetadata(): Promise<Metadata> {
 }
 
 /** The message namespaces the install screen's client code reads. */
-const NAMESPACES = ['install', 'labels', 'safety', 'alarms', 'sync', 'flags'];
+const NAMESPACES = ['install', 'labels', 'safety', 'alarms', 'sync', 'flags', 'lib', 'evidence', 'scan'];
 
 export default async function Page({ params }: { params: Promise<{ id: string }> }) {
   const user = await requirePageUser(FIELD_ROLES);

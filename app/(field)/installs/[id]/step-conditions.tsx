@@ -5,8 +5,18 @@ import { useLocale, useTranslations } from 'next-intl';
 import { useEffect, useMemo } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { z } from 'zod';
-import { formatDay } from '@/lib/time/dates';
-import { lengthFromSi, lengthToSi, temperatureToSi, unitLabels, type UnitSystem } from '@/lib/units';
+import { useLibMessage } from '@/i18n/use-lib-message';
+import type { LibMessage } from '@/lib/i18n/message';
+import { formatDay } from '@/lib/time/dates-locale';
+import {
+  formatLength,
+  formatTemperature,
+  lengthFromSi,
+  lengthToSi,
+  temperatureToSi,
+  unitLabels,
+  type UnitSystem,
+} from '@/lib/units';
 import { eventPayloadSchemas } from '@/lib/validation/install-events';
 import { FieldInput, PrimaryAction, StepCard } from './field-ui';
 import { KitScan } from './kit-scan';
@@ -19,7 +29,13 @@ export type KitOption = {
   resinName: string;
   prepMinutes: number | null;
 };
-export type PackerOption = { id: string; name: string; fits: boolean; reasons: string[] };
+export type PackerOption = {
+  id: string;
+  name: string;
+  fits: boolean;
+  reasons: string[];
+  reasonDetails?: LibMessage[];
+};
 export type Conditions = z.infer<(typeof eventPayloadSchemas)['conditions_recorded']>;
 
 type Messages = (
@@ -60,6 +76,7 @@ export function StepConditions({
 }) {
   const t = useTranslations('install.conditions');
   const locale = useLocale();
+  const say = useLibMessage(unitSystem);
   const formSchema = useMemo(() => formSchemaOf(t), [t]);
   const units = unitLabels(unitSystem);
   const { register, handleSubmit, setError, setValue, getFieldState, control, formState } = useForm<
@@ -114,12 +131,29 @@ export function StepConditions({
               patchLengthMm: 'patchLength',
             } as const
           )[issue.path[0] as 'mixTempC'] ?? 'mixTemp';
-        setError(field, { message: t('errOutOfRange', { message: issue.message }) });
+        setError(field, { message: t('errOutOfRange', { message: rangeText(issue) }) });
       }
       return;
     }
     onSave(checked.data);
   });
+
+  /**
+   * The SI schema's limit in the reader's words and the company's units; English keeps the schema's own
+   * message ("below −20 °C"), which the server answers with too.
+   */
+  function rangeText(issue: z.core.$ZodIssue): string {
+    if (locale === 'en') return issue.message;
+    const field = String(issue.path[0]);
+    const limit = Number(issue.code === 'too_small' ? issue.minimum : issue.code === 'too_big' ? issue.maximum : NaN);
+    if (!Number.isFinite(limit)) return t('range.check');
+    const side = issue.code === 'too_small' ? 'below' : 'above';
+    if (field.endsWith('TempC')) return t(`range.${side}`, { limit: formatTemperature(limit, unitSystem, { locale }) });
+    if (field === 'prepMinutes') return t(`range.${side}`, { limit: `${limit} min` });
+    if (field === 'patchLengthMm')
+      return t(`range.${side}`, { limit: formatLength(limit, unitSystem, 'short', { locale, decimals: 0 }) });
+    return t('range.check');
+  }
 
   return (
     <StepCard title={t('title')} testId="step-conditions">
@@ -191,7 +225,11 @@ export function StepConditions({
             {packers.map((packer) => (
               <option key={packer.id} value={packer.id}>
                 {packer.name}
-                {packer.fits ? t('fits') : t('doesNotFit', { reasons: packer.reasons.join('; ') })}
+                {packer.fits
+                  ? t('fits')
+                  : t('doesNotFit', {
+                      reasons: packer.reasonDetails?.map((r) => say(r)).join('; ') ?? packer.reasons.join('; '),
+                    })}
               </option>
             ))}
           </select>

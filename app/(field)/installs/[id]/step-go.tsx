@@ -3,6 +3,7 @@
 import { useTranslations } from 'next-intl';
 import { useState } from 'react';
 import type { CurePlan } from '@/lib/cure';
+import type { LibMessage } from '@/lib/i18n/message';
 import { formatDuration } from '@/lib/units';
 import { Callout, FieldInput, PrimaryAction, StepCard } from './field-ui';
 
@@ -12,12 +13,15 @@ import { Callout, FieldInput, PrimaryAction, StepCard } from './field-ui';
  */
 export function StepGo({
   plan,
+  say,
   canOverride,
   onGo,
   onOverride,
   onChangeConditions,
 }: {
   plan: CurePlan;
+  /** Writes the plan's messages in the reader's language (useLibMessage). */
+  say: (message: LibMessage | readonly LibMessage[]) => string;
   canOverride: boolean;
   onGo: () => void;
   onOverride: (reason: string, makerHoldMin: number | null) => void;
@@ -60,7 +64,7 @@ export function StepGo({
         </div>
       </dl>
       <p className="text-base text-slate-700" data-testid="plan-counted">
-        {plan.counted}
+        {say(plan.countedDetail)}
       </p>
       {plan.go ? (
         <>
@@ -79,8 +83,8 @@ export function StepGo({
               {t('noGo')}
             </p>
             <ul className="mt-2 list-disc space-y-1 pl-6">
-              {plan.reasons.map((r) => (
-                <li key={r}>{r}</li>
+              {plan.reasonDetails.map((r) => (
+                <li key={r.key}>{say(r)}</li>
               ))}
             </ul>
           </Callout>

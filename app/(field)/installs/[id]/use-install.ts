@@ -63,7 +63,11 @@ export function useInstall(id: string, fallbackData: InstallViewResponse, viewer
   const serverIds = useMemo(() => new Set(view.events.map((e) => e.clientEventId)), [view.events]);
   // Taps the server's view does not show yet count as happened, the crew's screen must move on at
   // once: those still queued, and those just sent whose echo has not come back through SWR.
-  const local = entries.filter((e) => e.status !== 'rejected' && !serverIds.has(e.clientEventId));
+  // Memoised, so the screen's per-second tick neither folds the log again nor re-renders the event log.
+  const local = useMemo(
+    () => entries.filter((e) => e.status !== 'rejected' && !serverIds.has(e.clientEventId)),
+    [entries, serverIds],
+  );
   // Taps of someone else on this tablet wait for them to sign in again; they are not "about to sync".
   const isOthers = (e: OutboxEntry) => e.userId !== undefined && e.userId !== viewer.id;
   const queued = entries.filter((e) => e.status === 'pending' && !isOthers(e));

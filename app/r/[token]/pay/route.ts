@@ -16,7 +16,7 @@ export const POST = handle(async (request: Request, { params }: { params: Promis
   const token = (await params).token;
   const check = await checkLiveLink(token);
   if (!check.ok)
-    return new Response(refusedLinkText(null), {
+    return new Response(refusedLinkText(null, request.headers.get('accept-language')), {
       status: 404,
       headers: { 'content-type': 'text/plain; charset=utf-8' },
     });

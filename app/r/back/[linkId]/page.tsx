@@ -1,6 +1,8 @@
 import type { Metadata } from 'next';
-import { cookies } from 'next/headers';
+import { cookies, headers } from 'next/headers';
 import { redirect } from 'next/navigation';
+import { localeFromAcceptLanguage } from '@/i18n/locales';
+import { translatorFor } from '@/i18n/translator';
 import { checkLiveLink } from '@/lib/report/link-access';
 import { RETURN_COOKIE } from '@/lib/report/payment-return';
 
@@ -28,15 +30,13 @@ export default async function Page({
     const check = await checkLiveLink(token);
     if (check.ok && check.linkId === linkId) redirect(`/r/${encodeURIComponent(token)}${paid ? '?paid=1' : ''}`);
   }
+  // Nothing here names the customer, so the page speaks the browser's language.
+  const t = translatorFor(localeFromAcceptLanguage((await headers()).get('accept-language')), 'report');
   return (
     <main className="min-h-screen bg-slate-50">
       <div className="mx-auto max-w-lg p-8 text-center">
-        <h1 className="text-2xl font-bold">{paid ? 'Thank you' : 'Payment not completed'}</h1>
-        <p className="mt-3 text-slate-700">
-          {paid
-            ? 'Your payment is being confirmed. Open your repair report again from the link in your e-mail to see the invoice marked paid.'
-            : 'No payment was taken. Open your repair report again from the link in your e-mail to pay when you are ready.'}
-        </p>
+        <h1 className="text-2xl font-bold">{paid ? t('payBack.paidTitle') : t('payBack.notPaidTitle')}</h1>
+        <p className="mt-3 text-slate-700">{paid ? t('payBack.paidText') : t('payBack.notPaidText')}</p>
       </div>
     </main>
   );

@@ -13,6 +13,7 @@ import { recordForPage } from '@/lib/server/page-record';
 import { formatVolume } from '@/lib/units';
 import { resinKitToForm } from '@/lib/validation/resin-kits';
 import { resinSystemListQuerySchema } from '@/lib/validation/resin-systems';
+import { IntlScope } from '@/components/shell/intl-scope';
 import { ResinKitForm } from '../resin-kit-form';
 import { PageHeader } from '@/components/ui/page-header';
 
@@ -76,7 +77,9 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
           {kit.installs.length === 0 && <li className="px-3 py-4 text-slate-500">No install has used this kit yet.</li>}
         </ul>
       </section>
-      <ResinKitForm id={kit.id} initial={resinKitToForm(kit, unitSystem)} unitSystem={unitSystem} systems={choices} />
+      <IntlScope namespaces={['scan']}>
+        <ResinKitForm id={kit.id} initial={resinKitToForm(kit, unitSystem)} unitSystem={unitSystem} systems={choices} />
+      </IntlScope>
       <AuditHistory user={user} entityType="resin_kit" entityId={kit.id} timeZone={timeZone} />
     </div>
   );

@@ -9,6 +9,7 @@ import { resinSystemListQuerySchema } from '@/lib/validation/resin-systems';
 import { ResinKitForm } from '../resin-kit-form';
 import { ADMIN_ONLY } from '@/lib/domain/vocabulary';
 import { PageHeader } from '@/components/ui/page-header';
+import { IntlScope } from '@/components/shell/intl-scope';
 
 export const metadata: Metadata = { title: 'New resin kit' };
 
@@ -42,7 +43,9 @@ export default async function Page({ searchParams }: { searchParams: Promise<Rec
           first: every kit belongs to one.
         </p>
       ) : (
-        <ResinKitForm unitSystem={unitSystem} systems={systems.items} scanned={scanned} />
+        <IntlScope namespaces={['scan']}>
+          <ResinKitForm unitSystem={unitSystem} systems={systems.items} scanned={scanned} />
+        </IntlScope>
       )}
     </div>
   );
