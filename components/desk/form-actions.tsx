@@ -1,5 +1,6 @@
 'use client';
 
+import { useTranslations } from 'next-intl';
 import { useRouter } from 'next/navigation';
 import { useCloseEditSection } from '@/components/desk/edit-section';
 import { Button } from '@/components/ui/button';
@@ -10,16 +11,16 @@ export type FormMessage = string | { ok: boolean; text: string } | undefined;
 
 /**
  * The foot of every desk form: the message of the last save, the submit button (its pending label while the
- * request runs, "Saving…" unless told) and, with `cancel`, a Cancel button that closes the EditSection around the
+ * request runs, the catalogue's "Saving…" unless told) and, with `cancel`, a Cancel button that closes the EditSection around the
  * form, or goes back on a page of its own. `className` places both in the form's grid (two columns unless told).
  */
 export function FormActions({
   form,
   message,
   submitLabel,
-  pendingLabel = 'Saving…',
+  pendingLabel,
   cancel,
-  cancelLabel = 'Cancel',
+  cancelLabel,
   className = 'md:col-span-2',
 }: {
   form: { formState: { isSubmitting: boolean } };
@@ -31,7 +32,9 @@ export function FormActions({
   cancelLabel?: string;
   className?: string;
 }) {
+  const t = useTranslations('common');
   const submitting = form.formState.isSubmitting;
+  const pending = pendingLabel === undefined ? t('saving') : pendingLabel;
   const router = useRouter();
   const closeEdit = useCloseEditSection();
   const { ok, text } = typeof message === 'string' ? { ok: false, text: message } : (message ?? { ok: false });
@@ -47,11 +50,11 @@ export function FormActions({
       )}
       <div className={cn('flex gap-2', className)}>
         <Button type="submit" disabled={submitting}>
-          {submitting && pendingLabel ? pendingLabel : submitLabel}
+          {submitting && pending ? pending : submitLabel}
         </Button>
         {cancel && (
           <Button type="button" variant="secondary" onClick={() => (closeEdit ? closeEdit() : router.back())}>
-            {cancelLabel}
+            {cancelLabel ?? t('cancel')}
           </Button>
         )}
       </div>

@@ -6,6 +6,7 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { z } from 'zod';
 import { FormActions, type FormMessage } from '@/components/desk/form-actions';
 import { Field } from '@/components/desk/form-field';
+import { IntlWrapper } from '../i18n/intl';
 
 const back = vi.fn();
 vi.mock('next/navigation', () => ({ useRouter: () => ({ back, push: vi.fn(), refresh: vi.fn() }) }));
@@ -28,7 +29,7 @@ function Sample({ message }: { message?: FormMessage }) {
 
 describe('Field', () => {
   it('labels its control by name, shows the hint, then the error tied by aria-describedby', async () => {
-    render(<Sample />);
+    render(<Sample />, { wrapper: IntlWrapper });
     const name = screen.getByLabelText('Name');
     expect(name.id).toBe('name');
     expect(screen.getByText('What the crew calls it')).toBeTruthy();
@@ -47,7 +48,7 @@ describe('Field', () => {
 
 describe('FormActions', () => {
   it('shows a failure as an alert and a success as a status', () => {
-    const { rerender } = render(<Sample message="Could not save." />);
+    const { rerender } = render(<Sample message="Could not save." />, { wrapper: IntlWrapper });
     expect(screen.getByRole('alert').textContent).toBe('Could not save.');
     rerender(<Sample message={{ ok: true, text: 'Saved.' }} />);
     expect(screen.getByRole('status').textContent).toBe('Saved.');
@@ -55,7 +56,7 @@ describe('FormActions', () => {
   });
 
   it('cancels by going back on a page of its own', () => {
-    render(<Sample />);
+    render(<Sample />, { wrapper: IntlWrapper });
     fireEvent.click(screen.getByRole('button', { name: 'Cancel' }));
     expect(back).toHaveBeenCalledTimes(1);
   });
