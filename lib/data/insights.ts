@@ -10,7 +10,10 @@ import { AppError, forbidden, notFound } from '@/lib/server/errors';
 import { MAX_INSIGHTS_DAYS, type InsightsQuery } from '@/lib/validation/insights';
 import { FLAG_LABELS } from '@/lib/review/flags';
 import { getCompany } from './company';
-import { cachedForCompany } from './insights-cache';
+import { cachedForCompany } from './company-cache';
+
+/** How long an insights answer may be served again while the company's installs have not changed. */
+export const INSIGHTS_CACHE_MS = 15_000;
 
 /** What the installs of a period teach: GET /api/insights and the /insights page. */
 export type Insights = {
@@ -96,17 +99,21 @@ export async function getInsights(user: SessionUser, query: InsightsQuery, now =
     if (!row) throw notFound('Crew');
     crew = { id: row.id, name: row.name };
   }
-  const rows = await cachedForCompany(user.companyId, `${timeZone}|${period.from}|${period.to}|${crew?.id ?? ''}`, () =>
-    sequelize.query<GroupRow>(INSIGHTS_SQL, {
-      type: QueryTypes.SELECT,
-      replacements: {
-        companyId: user.companyId,
-        tz: timeZone,
-        from: period.from,
-        to: period.to,
-        crewId: crew?.id ?? null,
-      },
-    }),
+  const rows = await cachedForCompany(
+    user.companyId,
+    `insights|${timeZone}|${period.from}|${period.to}|${crew?.id ?? ''}`,
+    INSIGHTS_CACHE_MS,
+    () =>
+      sequelize.query<GroupRow>(INSIGHTS_SQL, {
+        type: QueryTypes.SELECT,
+        replacements: {
+          companyId: user.companyId,
+          tz: timeZone,
+          from: period.from,
+          to: period.to,
+          crewId: crew?.id ?? null,
+        },
+      }),
   );
   // One row for the whole period (always there, even with no install), one per week and one per crew that has any.
   const all = rows.find((r) => r.part === 'all')!;

@@ -24,6 +24,7 @@ import { deriveInstallState, type InstallEventInput } from '@/lib/install/state'
 import { localisedFlags, worstSeverity } from '@/lib/review/flags';
 import type { InstallListQuery } from '@/lib/validation/reviews';
 import { getCompany } from './company';
+import { cachedForCompany } from './company-cache';
 import { ensureDerived, settingsOf } from './install-derive';
 import { severityPage } from './install-severity';
 import { allOf, pageOf, searchWhere, windowOf } from './list';
@@ -32,6 +33,9 @@ type Plain<M extends Model> = InferAttributes<M>;
 type Company = Awaited<ReturnType<typeof getCompany>>;
 
 export type InstallListResponse = Awaited<ReturnType<typeof listInstalls>>;
+
+/** How long a page of the list by severity may be served again while the company's installs have not changed. */
+export const SEVERITY_CACHE_MS = 5_000;
 
 /**
  * A page of the company's installs with their quality flags (field users: only their crews').
@@ -49,13 +53,25 @@ export async function listInstalls(user: SessionUser, query: InstallListQuery, e
   const now = new Date();
   if (query.sort === 'severity') {
     await ensureDerived(user, settingsOf(company));
-    const { ids, count } = await severityPage(user, query, exportAll);
-    const rows = ids.length
-      ? await Install.findAll({ where: { id: ids, companyId: user.companyId }, include: LIST_INCLUDE })
-      : [];
-    const at = new Map(ids.map((id, index) => [id, index]));
-    rows.sort((a, b) => at.get(a.id)! - at.get(b.id)!);
-    return pageOf(await itemsOf(user, rows, company, now), count, query);
+    const bySeverity = async () => {
+      const { ids, count } = await severityPage(user, query, exportAll);
+      const rows = ids.length
+        ? await Install.findAll({ where: { id: ids, companyId: user.companyId }, include: LIST_INCLUDE })
+        : [];
+      const at = new Map(ids.map((id, index) => [id, index]));
+      rows.sort((a, b) => at.get(a.id)! - at.get(b.id)!);
+      return pageOf(await itemsOf(user, rows, company, now), count, query);
+    };
+    // The review queue is opened again and again over unchanged data: a page is served again while the company's
+    // installs are the same, for SEVERITY_CACHE_MS at most (lib/data/company-cache.ts). Exports always read afresh.
+    if (exportAll) return bySeverity();
+    const scope = isDeskRole(user.role) ? 'desk' : [...user.crewIds].sort().join(',');
+    return cachedForCompany(
+      user.companyId,
+      `severity|${scope}|${JSON.stringify(query)}`,
+      SEVERITY_CACHE_MS,
+      bySeverity,
+    );
   }
   const { rows, count } = await Install.findAndCountAll({
     where,
