@@ -1,0 +1,44 @@
+import { createTranslator } from 'next-intl';
+import { describe, expect, it } from 'vitest';
+import { formatMessage } from '@/i18n/format-message';
+import { deviceTimeRefusal } from '@/lib/install/record-rules';
+import { REFUSAL_KEYS, refusal, type RefusalKey } from '@/lib/install/refusals';
+import en from '@/messages/en.json';
+import es from '@/messages/es.json';
+
+// The tap route answers a refusal's English as it always did (tests and desks compare it) and, for a Spanish
+// user, the catalogue message beside it: the English catalogue must give back that English exactly.
+
+const tEn = createTranslator({ locale: 'en', messages: en, namespace: 'lib' });
+const tEs = createTranslator({ locale: 'es', messages: es, namespace: 'lib' });
+
+/** Every refusal with each of the values it is made with. */
+const cases = REFUSAL_KEYS.flatMap((key) => {
+  const make = refusal as (k: RefusalKey, v?: Record<string, string>) => ReturnType<typeof refusal>;
+  if (key === 'closed') return ['approved', 'abandoned'].map((status) => make(key, { status }));
+  if (key.startsWith('time')) return ['deviceTime', 'The corrected time'].map((what) => make(key, { what }));
+  return [make(key)];
+});
+
+describe('tap refusals', () => {
+  it('read in the English catalogue exactly as the English the API answers', () => {
+    for (const r of cases) expect(formatMessage(tEn, r.detail, { locale: 'en', system: 'metric' })).toBe(r.text);
+  });
+
+  it('have Spanish of their own, with every value filled in', () => {
+    for (const r of cases) {
+      const text = formatMessage(tEs, r.detail, { locale: 'es', system: 'metric' });
+      expect(text, r.detail.key).not.toBe(r.text);
+      expect(text, r.detail.key).not.toMatch(/[{}]|approved|abandoned|deviceTime/);
+    }
+  });
+
+  it('word the device time bound the tap broke', () => {
+    const received = new Date('2026-12-02T12:00:00Z');
+    const ahead = deviceTimeRefusal('2026-12-02T12:06:00Z', received);
+    expect(ahead?.detail).toEqual({ key: 'refusal.timeAhead', values: { what: 'deviceTime' } });
+    expect(formatMessage(tEs, ahead!.detail, { locale: 'es', system: 'metric' })).toMatch(
+      /^La hora del toque es más de 5/,
+    );
+  });
+});
