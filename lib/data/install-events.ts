@@ -15,7 +15,7 @@ import {
   type StoredFold,
 } from '@/lib/install/derived';
 import { correctsDecision, deviceTimeRefusal, isClosedInstall } from '@/lib/install/record-rules';
-import { refusal } from '@/lib/install/refusals';
+import { refusal } from '@/lib/i18n/refusals';
 import { isSameEvent } from '@/lib/install/same-event';
 import { correctionTarget, orderRefusal, type InstallState } from '@/lib/install/state';
 import { eventPayloadSchemas, parseEventBody } from '@/lib/validation/install-events';

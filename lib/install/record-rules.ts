@@ -1,5 +1,5 @@
 import type { InstallStatus } from '@/lib/domain/vocabulary';
-import { refusal, type Refusal } from './refusals';
+import { refusal, type Refusal } from '@/lib/i18n/refusals';
 
 // Rules of the install record that do not depend on the log's order (that is lib/install/state.ts):
 // how far a device's clock may be from the server's, which installs are closed, which corrections

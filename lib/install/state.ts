@@ -1,5 +1,5 @@
 import type { InstallEventType } from '@/lib/domain/vocabulary';
-import { refusal, type Refusal } from './refusals';
+import { refusal, type Refusal } from '@/lib/i18n/refusals';
 import { applyCorrection, sortEvents, toDate, type EffectiveEvent, type InstallEventInput } from './log';
 
 // The install's step machine: what has happened (from the stored events, corrections applied)

@@ -1,8 +1,8 @@
-import { message, type LibMessage } from '@/lib/i18n/message';
+import { message, type LibMessage, type MessageValue } from '@/lib/i18n/message';
 
-// Why the server refuses a tap, as a sentence for the crew: the English the API has always answered (tests and
-// desks read it byte for byte) beside the same sentence as a `lib.refusal.*` message, which the tap route writes
-// in the signed-in user's language. tests/unit/install/refusals.test.ts holds the English catalogue equal to it.
+// Why the server refuses a tap or an upload, as a sentence for the crew: the English the API has always answered
+// (tests and desks read it byte for byte) beside the same sentence as a `lib.refusal.*` message, which the route
+// writes in the signed-in user's language. tests/unit/i18n/refusals.test.ts holds the English catalogue equal to it.
 
 const ENGLISH = {
   alreadySignedOff: () => 'This install is already signed off.',
@@ -38,6 +38,25 @@ const ENGLISH = {
     `${v.what} is more than 5 minutes after the server's time: check the tablet's date and time`,
   timeBehind: (v: { what: string }) =>
     `${v.what} is more than 14 days before the server's time: such a tap can no longer be recorded`,
+  // Uploads (lib/data/attachments.ts completeUpload): what really arrived is checked against what was declared.
+  thisFile: () => 'This file',
+  thisImage: () => 'This image',
+  fileOfType: (v: { ext: string }) => `a ${v.ext} file`,
+  unreadableFile: () => 'not an image or video we can read',
+  allowed: (v: { image: string; video: string }) =>
+    `JPEG, PNG or WebP images up to ${v.image} MB, MP4, WebM or QuickTime videos up to ${v.video} MB`,
+  uploadMissing: () => 'The upload was not found: send the file first, then complete it.',
+  uploadClosed: (v: { status: string }) => `This install is closed (${v.status}): no more files can be added to it.`,
+  uploadSize: (v: { arrived: string; declared: string }) =>
+    `The file that arrived is ${v.arrived}, not the ${v.declared} declared. Nothing was kept; upload it again.`,
+  uploadType: (v: { name: string; what: string; allowed: string }) =>
+    `${v.name} is ${v.what}, whatever its name says. Send ${v.allowed}. Nothing was kept.`,
+  imageTooLarge: (v: { size: string; max: string }) =>
+    `This image is ${v.size}; images may be at most ${v.max}. Nothing was kept.`,
+  videoTooLarge: (v: { size: string; max: string }) =>
+    `This video is ${v.size}; videos may be at most ${v.max}. Nothing was kept.`,
+  imageUnreadable: (v: { name: string; format: string }) =>
+    `${v.name} could not be read as a ${v.format} image (damaged or cut short). Nothing was kept.`,
 } satisfies Record<string, (values: never) => string>;
 
 export type RefusalKey = keyof typeof ENGLISH;
@@ -45,15 +64,23 @@ export type RefusalKey = keyof typeof ENGLISH;
 /** A refusal in English and as a catalogue message. */
 export type Refusal = { text: string; detail: LibMessage };
 
-type ValuesOf<K extends RefusalKey> = Parameters<(typeof ENGLISH)[K]>[0];
+/** A value of a refusal: a plain string, or a refusal of its own (a nested sentence: "This file", the allowed types). */
+type ValuesOf<K extends RefusalKey> = { [V in keyof Parameters<(typeof ENGLISH)[K]>[0]]: string | Refusal };
 
 export function refusal<K extends RefusalKey>(
   key: K,
-  ...values: ValuesOf<K> extends undefined ? [] : [ValuesOf<K>]
+  ...values: Parameters<(typeof ENGLISH)[K]>[0] extends undefined ? [] : [ValuesOf<K>]
 ): Refusal {
   const english = ENGLISH[key] as (v?: Record<string, string>) => string;
-  const given = values[0] as Record<string, string> | undefined;
-  return { text: english(given), detail: message(`refusal.${key}`, given) };
+  const given = values[0] as Record<string, string | Refusal> | undefined;
+  if (!given) return { text: english(), detail: message(`refusal.${key}`) };
+  const texts: Record<string, string> = {};
+  const details: Record<string, MessageValue> = {};
+  for (const [name, value] of Object.entries(given)) {
+    texts[name] = typeof value === 'string' ? value : value.text;
+    details[name] = typeof value === 'string' ? value : value.detail;
+  }
+  return { text: english(texts), detail: message(`refusal.${key}`, details) };
 }
 
 export const REFUSAL_KEYS = Object.keys(ENGLISH) as RefusalKey[];
