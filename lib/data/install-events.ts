@@ -98,7 +98,7 @@ async function recordInTransaction(
   const correctsEventId = namedOriginal?.id ?? body.correctsEventId ?? null;
   if (existing) {
     const same = isSameEvent(existing, { ...body, installId, correctsEventId });
-    if (!same) throw new AppError(409, 'That event id was already used for a different event');
+    if (!same) throw refused(409, refusal('eventIdReused'));
     return { event: existing.get({ plain: true }), created: false };
   }
   // Only a replay (above) passes a closed record, so tablets can still drain their outboxes.
@@ -319,15 +319,15 @@ async function checkConditions(
     Packer.findOne({ where: { id: String(conditions.packerId), companyId: user.companyId }, transaction: t }),
   ]);
   if (!kit)
-    throw new AppError(422, 'That resin kit was not found; choose one from the list.', {
+    throw refused(422, refusal('kitUnknown'), {
       'payload.resinKitId': ['Unknown resin kit'],
     });
   if (!packer)
-    throw new AppError(422, 'That packer was not found; choose one from the list.', {
+    throw refused(422, refusal('packerUnknown'), {
       'payload.packerId': ['Unknown packer'],
     });
   if (today !== null && kit.expiresOn < today) {
-    throw new AppError(422, `Resin kit lot ${kit.lot} expired on ${kit.expiresOn}; choose another kit`, {
+    throw refused(422, refusal('kitExpired', { lot: kit.lot, day: kit.expiresOn }), {
       'payload.resinKitId': ['Expired kit'],
     });
   }
@@ -353,13 +353,9 @@ async function checkMakerHold(
   });
   const resin = (kit as (ResinKit & { resinSystem?: ResinSystem }) | null)?.resinSystem;
   if (!resin || (pipeTempC >= resin.minTempC && pipeTempC <= resin.maxTempC)) return;
-  throw new AppError(
-    422,
-    "The pipe is outside the resin's rated range: going on needs the hold time from the resin maker's sheet.",
-    {
-      'payload.makerHoldMin': ["Enter the hold time from the resin maker's sheet"],
-    },
-  );
+  throw refused(422, refusal('makerHoldNeeded'), {
+    'payload.makerHoldMin': ["Enter the hold time from the resin maker's sheet"],
+  });
 }
 
 async function writeAudit(

@@ -38,6 +38,12 @@ const ENGLISH = {
     `${v.what} is more than 5 minutes after the server's time: check the tablet's date and time`,
   timeBehind: (v: { what: string }) =>
     `${v.what} is more than 14 days before the server's time: such a tap can no longer be recorded`,
+  eventIdReused: () => 'That event id was already used for a different event',
+  kitUnknown: () => 'That resin kit was not found; choose one from the list.',
+  packerUnknown: () => 'That packer was not found; choose one from the list.',
+  kitExpired: (v: { lot: string; day: string }) => `Resin kit lot ${v.lot} expired on ${v.day}; choose another kit`,
+  makerHoldNeeded: () =>
+    "The pipe is outside the resin's rated range: going on needs the hold time from the resin maker's sheet.",
   // Uploads (lib/data/attachments.ts completeUpload): what really arrived is checked against what was declared.
   thisFile: () => 'This file',
   thisImage: () => 'This image',

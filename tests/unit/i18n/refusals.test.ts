@@ -19,6 +19,7 @@ const VALUES: Partial<Record<RefusalKey, Record<string, string | Refusal>[]>> = 
   closed: [{ status: 'approved' }, { status: 'abandoned' }],
   uploadClosed: [{ status: 'approved' }, { status: 'abandoned' }],
   fileOfType: [{ ext: 'PDF' }],
+  kitExpired: [{ lot: 'L-204', day: '2026-11-30' }],
   allowed: [{ image: '15', video: '200' }],
   uploadSize: [{ arrived: '2 KB', declared: '1.3 MB' }],
   uploadType: [
