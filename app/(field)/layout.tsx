@@ -40,7 +40,10 @@ export default async function FieldLayout({ children }: { children: React.ReactN
           </IntlScope>
         </div>
       </header>
-      <main className="mx-auto max-w-3xl p-4">{children}</main>
+      {/* The section's error page speaks the reader's language; a page's own scope replaces this one. */}
+      <main className="mx-auto max-w-3xl p-4">
+        <IntlScope namespaces={[]}>{children}</IntlScope>
+      </main>
     </div>
   );
 }

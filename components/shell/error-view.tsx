@@ -1,16 +1,31 @@
 'use client';
 
+import { useTranslations } from 'next-intl';
+
+type Words = { title: string; body: string; retry: string };
+
+/** The English of the page, for a section with no catalogue at hand (the root and the profile page). */
+const ENGLISH: Words = {
+  title: 'Something went wrong',
+  body: 'Nothing you entered was lost. Try again; if it keeps happening, tell your office.',
+  retry: 'Try again',
+};
+
 /** The friendly failure page of every section: says nothing was lost, offers a retry, shows no internals. */
-export function ErrorView({ reset }: { reset: () => void }) {
+export function ErrorView({ reset, words = ENGLISH }: { reset: () => void; words?: Words }) {
   return (
     <main className="mx-auto max-w-lg p-8 text-center">
-      <h1 className="text-2xl font-bold">Something went wrong</h1>
-      <p className="mt-2 text-slate-600">
-        Nothing you entered was lost. Try again; if it keeps happening, tell your office.
-      </p>
+      <h1 className="text-2xl font-bold">{words.title}</h1>
+      <p className="mt-2 text-slate-600">{words.body}</p>
       <button type="button" onClick={reset} className="mt-6 rounded-md bg-brand-700 px-4 py-2 font-semibold text-white">
-        Try again
+        {words.retry}
       </button>
     </main>
   );
+}
+
+/** The same page in the reader's language, for a section whose layout hands its children the `common` words. */
+export function SectionErrorView({ reset }: { reset: () => void }) {
+  const t = useTranslations('common.error');
+  return <ErrorView reset={reset} words={{ title: t('title'), body: t('body'), retry: t('retry') }} />;
 }

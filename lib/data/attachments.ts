@@ -6,19 +6,21 @@ import { sequelize } from '@/lib/data/db';
 import { recordAudit } from '@/lib/data/audit';
 import { isDeskRole } from '@/lib/auth/roles';
 import type { SessionUser } from '@/lib/auth/session';
-import { AppError, forbidden, notFound } from '@/lib/server/errors';
+import { AppError, forbidden, notFound, refused } from '@/lib/server/errors';
+import { refusal, type Refusal } from '@/lib/i18n/refusals';
 import { mayWorkOn } from '@/lib/install/access';
 import { isClosedInstall } from '@/lib/install/record-rules';
 import { makeThumbnail, sniffType } from '@/lib/storage/inspect';
 import {
-  ALLOWED_SUMMARY,
+  MAX_BYTES,
   PENDING_UPLOAD_MAX_AGE_MS,
   SNIFF_BYTES,
   allowedType,
+  allowedTypes,
   formatBytes,
   objectKey,
+  refusalOf,
   thumbnailKey,
-  uploadRefusal,
 } from '@/lib/storage/limits';
 import { deleteObjects, headObject, presignUpload, putObject, readObject, signedDownloadUrl } from '@/lib/storage/s3';
 import type { AttachmentListQuery, UploadRequest } from '@/lib/validation/attachments';
@@ -82,24 +84,27 @@ export async function completeUpload(user: SessionUser, id: string) {
     );
 
   const head = await headObject(row.storageKey);
-  if (!head) throw new AppError(409, 'The upload was not found: send the file first, then complete it.');
+  if (!head) throw refused(409, refusal('uploadMissing'));
   if (head.byteSize !== row.byteSize) {
     await refuse(
       row,
-      `The file that arrived is ${formatBytes(head.byteSize)}, not the ${formatBytes(row.byteSize)} declared. Nothing was kept; upload it again.`,
+      refusal('uploadSize', { arrived: formatBytes(head.byteSize), declared: formatBytes(row.byteSize) }),
     );
   }
   const sniffed = await sniffType(await readObject(row.storageKey, SNIFF_BYTES));
   const type = sniffed && allowedType(sniffed.mime);
   if (!sniffed || !type) {
-    const what = sniffed ? `a ${sniffed.ext.toUpperCase()} file` : 'not an image or video we can read';
+    const what = sniffed ? refusal('fileOfType', { ext: sniffed.ext.toUpperCase() }) : refusal('unreadableFile');
     await refuse(
       row,
-      `${row.originalName ?? 'This file'} is ${what}, whatever its name says. Send ${ALLOWED_SUMMARY}. Nothing was kept.`,
+      refusal('uploadType', { name: row.originalName ?? refusal('thisFile'), what, allowed: allowedTypes() }),
     );
   }
-  const tooLarge = uploadRefusal(type!.mime, head.byteSize);
-  if (tooLarge) await refuse(row, `${tooLarge} Nothing was kept.`);
+  const tooLarge = refusalOf(type!.mime, head.byteSize);
+  if (tooLarge?.kind === 'size') {
+    const sizes = { size: formatBytes(tooLarge.size), max: formatBytes(MAX_BYTES[tooLarge.type]) };
+    await refuse(row, refusal(tooLarge.type === 'image' ? 'imageTooLarge' : 'videoTooLarge', sizes));
+  }
 
   let picture: { thumbnailKey: string; width: number; height: number } | null = null;
   if (type!.kind === 'image') {
@@ -109,7 +114,7 @@ export async function completeUpload(user: SessionUser, id: string) {
     } catch {
       await refuse(
         row,
-        `${row.originalName ?? 'This image'} could not be read as a ${type!.name} image (damaged or cut short). Nothing was kept.`,
+        refusal('imageUnreadable', { name: row.originalName ?? refusal('thisImage'), format: type!.name }),
       );
     }
     const key = thumbnailKey(row.companyId, row.jobId!, row.id);
@@ -311,15 +316,14 @@ async function targetOf(
 
 /** An approved or abandoned install's evidence is closed: nothing new is added to it (409). */
 function refuseClosedInstall(status: string | null | undefined) {
-  if (status && isClosedInstall(status))
-    throw new AppError(409, `This install is closed (${status}): no more files can be added to it.`);
+  if (status && isClosedInstall(status)) throw refused(409, refusal('uploadClosed', { status }));
 }
 
 /** Deletes what arrived and the row, then answers 422: a refused upload leaves nothing behind. */
-async function refuse(row: Attachment, message: string): Promise<never> {
+async function refuse(row: Attachment, why: Refusal): Promise<never> {
   await deleteObjects([row.storageKey, row.thumbnailKey]);
   await Attachment.destroy({ where: { id: row.id, companyId: row.companyId } });
-  throw new AppError(422, message);
+  throw refused(422, why);
 }
 
 async function itemOf(

@@ -4,7 +4,7 @@ import { Op, UniqueConstraintError, literal, type Transaction } from 'sequelize'
 import type { z } from 'zod';
 import { AuditEntry, Install, InstallEvent, Job, Packer, Repair, ResinKit, ResinSystem, sequelize } from '@/models';
 import type { InstallAccess, SessionUser } from '@/lib/auth/session';
-import { AppError, forbidden, notFound } from '@/lib/server/errors';
+import { AppError, notFound, refused } from '@/lib/server/errors';
 import { mayDecide, mayWorkOn } from '@/lib/install/access';
 import {
   deriveRow,
@@ -14,9 +14,10 @@ import {
   type DeriveSettings,
   type StoredFold,
 } from '@/lib/install/derived';
-import { correctsDecision, deviceTimeProblem, isClosedInstall } from '@/lib/install/record-rules';
+import { correctsDecision, deviceTimeRefusal, isClosedInstall } from '@/lib/install/record-rules';
+import { refusal } from '@/lib/i18n/refusals';
 import { isSameEvent } from '@/lib/install/same-event';
-import { correctionTarget, orderProblem, type InstallState } from '@/lib/install/state';
+import { correctionTarget, orderRefusal, type InstallState } from '@/lib/install/state';
 import { eventPayloadSchemas, parseEventBody } from '@/lib/validation/install-events';
 import { loadMaterials, rederive, rowOf, settingsOf, type CompanySettings } from './install-derive';
 import { insertAndNotifyTap, notifyTap } from './live';
@@ -50,11 +51,11 @@ export async function recordEvent(
   const body = parseBodyOrThrow(input);
   // A queued tap carries who tapped it: it must never be stored under someone else's name.
   if (body.userId !== undefined && body.userId !== user.id) {
-    throw forbidden('This tap was made by another user: it is sent only while they are signed in.');
+    throw refused(403, refusal('otherUser'));
   }
-  if (body.type === 'signed_off' && !mayDecide(user)) throw forbidden('Only the foreman can sign off an install.');
+  if (body.type === 'signed_off' && !mayDecide(user)) throw refused(403, refusal('foremanSignsOff'));
   if (body.type === 'go_decision' && body.payload.overrideReason !== undefined && !mayDecide(user)) {
-    throw forbidden('Only the foreman can override a no-go.');
+    throw refused(403, refusal('foremanOverrides'));
   }
   const run = () => sequelize.transaction((t) => recordInTransaction(user, installId, body, receivedAt, t));
   try {
@@ -97,12 +98,12 @@ async function recordInTransaction(
   const correctsEventId = namedOriginal?.id ?? body.correctsEventId ?? null;
   if (existing) {
     const same = isSameEvent(existing, { ...body, installId, correctsEventId });
-    if (!same) throw new AppError(409, 'That event id was already used for a different event');
+    if (!same) throw refused(409, refusal('eventIdReused'));
     return { event: existing.get({ plain: true }), created: false };
   }
   // Only a replay (above) passes a closed record, so tablets can still drain their outboxes.
   if (isClosedInstall(install.status)) {
-    throw new AppError(409, `This install is closed (${install.status}): nothing more can be recorded on it.`);
+    throw refused(409, refusal('closed', { status: install.status }));
   }
   checkDeviceTimes(body, receivedAt);
   if (
@@ -110,7 +111,7 @@ async function recordInTransaction(
     !mayDecide(user) &&
     correctsDecision(namedOriginal?.type, correctionChanges(body.payload))
   ) {
-    throw forbidden('Only the foreman can correct a go / no-go decision or a sign-off.');
+    throw refused(403, refusal('foremanCorrectsDecision'));
   }
 
   // The state before this tap: the whole log for a correction (it may change anything), else the row's fold
@@ -123,8 +124,8 @@ async function recordInTransaction(
   const state = stored?.state ?? stateOfFold(fold);
   const target = body.type === 'correction' ? correctionTarget(state, body.correctsEventId) : undefined;
 
-  const problem = orderProblem(state, { ...body, correctsEventId }, { reopened: install.status === 'sent_back' });
-  if (problem) throw new AppError(422, problem);
+  const problem = orderRefusal(state, { ...body, correctsEventId }, { reopened: install.status === 'sent_back' });
+  if (problem) throw refused(422, problem);
   if (target) checkCorrectedPayload(target.type, { ...target.payload, ...correctionChanges(body.payload) });
   if (body.type === 'conditions_recorded') await checkConditions(user, body.payload, today, t);
   if (body.type === 'go_decision') await checkMakerHold(user, state, body.payload, t);
@@ -279,7 +280,7 @@ async function namedEvent(user: SessionUser, installId: string, ref: string, t: 
 /** 404 for an install the company does not have, 403 for a field user of another crew (as `findInstallFor`). */
 function checkAccess(user: SessionUser, install: InstallAccess | null) {
   if (!install) throw notFound('Install');
-  if (!mayWorkOn(user, [install.crewId, install.jobCrewId])) throw forbidden('This install belongs to another crew.');
+  if (!mayWorkOn(user, [install.crewId, install.jobCrewId])) throw refused(403, refusal('otherCrew'));
 }
 
 const isUuid = (value: string) => /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(value);
@@ -318,15 +319,15 @@ async function checkConditions(
     Packer.findOne({ where: { id: String(conditions.packerId), companyId: user.companyId }, transaction: t }),
   ]);
   if (!kit)
-    throw new AppError(422, 'That resin kit was not found; choose one from the list.', {
+    throw refused(422, refusal('kitUnknown'), {
       'payload.resinKitId': ['Unknown resin kit'],
     });
   if (!packer)
-    throw new AppError(422, 'That packer was not found; choose one from the list.', {
+    throw refused(422, refusal('packerUnknown'), {
       'payload.packerId': ['Unknown packer'],
     });
   if (today !== null && kit.expiresOn < today) {
-    throw new AppError(422, `Resin kit lot ${kit.lot} expired on ${kit.expiresOn}; choose another kit`, {
+    throw refused(422, refusal('kitExpired', { lot: kit.lot, day: kit.expiresOn }), {
       'payload.resinKitId': ['Expired kit'],
     });
   }
@@ -352,13 +353,9 @@ async function checkMakerHold(
   });
   const resin = (kit as (ResinKit & { resinSystem?: ResinSystem }) | null)?.resinSystem;
   if (!resin || (pipeTempC >= resin.minTempC && pipeTempC <= resin.maxTempC)) return;
-  throw new AppError(
-    422,
-    "The pipe is outside the resin's rated range: going on needs the hold time from the resin maker's sheet.",
-    {
-      'payload.makerHoldMin': ["Enter the hold time from the resin maker's sheet"],
-    },
-  );
+  throw refused(422, refusal('makerHoldNeeded'), {
+    'payload.makerHoldMin': ["Enter the hold time from the resin maker's sheet"],
+  });
 }
 
 async function writeAudit(
@@ -421,11 +418,11 @@ async function writeAudit(
 
 /** The tap's time, and a correction's corrected time, must be near the server's receive time (422). */
 function checkDeviceTimes(body: ParsedEvent, receivedAt: Date) {
-  const own = deviceTimeProblem(body.deviceTime, receivedAt);
-  if (own) throw new AppError(422, own, { deviceTime: [own] });
+  const own = deviceTimeRefusal(body.deviceTime, receivedAt);
+  if (own) throw refused(422, own, { deviceTime: [own.text] });
   if (body.type === 'correction' && typeof body.payload.deviceTime === 'string') {
-    const corrected = deviceTimeProblem(body.payload.deviceTime, receivedAt, 'The corrected time');
-    if (corrected) throw new AppError(422, corrected, { 'payload.deviceTime': [corrected] });
+    const corrected = deviceTimeRefusal(body.payload.deviceTime, receivedAt, 'The corrected time');
+    if (corrected) throw refused(422, corrected, { 'payload.deviceTime': [corrected.text] });
   }
 }
 

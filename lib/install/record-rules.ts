@@ -1,4 +1,5 @@
 import type { InstallStatus } from '@/lib/domain/vocabulary';
+import { refusal, type Refusal } from '@/lib/i18n/refusals';
 
 // Rules of the install record that do not depend on the log's order (that is lib/install/state.ts):
 // how far a device's clock may be from the server's, which installs are closed, which corrections
@@ -16,14 +17,15 @@ export const isClosedInstall = (status: string) => (CLOSED_INSTALL_STATUSES as r
 
 /** Null when `deviceTime` is within the bounds around `receivedAt`, else a message naming the bound. */
 export function deviceTimeProblem(deviceTime: Date | string, receivedAt: Date, what = 'deviceTime'): string | null {
+  return deviceTimeRefusal(deviceTime, receivedAt, what)?.text ?? null;
+}
+
+/** deviceTimeProblem's sentence in English and as a catalogue message (lib/install/refusals.ts). */
+export function deviceTimeRefusal(deviceTime: Date | string, receivedAt: Date, what = 'deviceTime'): Refusal | null {
   const ms = new Date(deviceTime).getTime();
-  if (!Number.isFinite(ms)) return `${what} is not a date`;
-  if (ms - receivedAt.getTime() > DEVICE_TIME_MAX_AHEAD_MS) {
-    return `${what} is more than 5 minutes after the server's time: check the tablet's date and time`;
-  }
-  if (receivedAt.getTime() - ms > DEVICE_TIME_MAX_BEHIND_MS) {
-    return `${what} is more than 14 days before the server's time: such a tap can no longer be recorded`;
-  }
+  if (!Number.isFinite(ms)) return refusal('timeNotDate', { what });
+  if (ms - receivedAt.getTime() > DEVICE_TIME_MAX_AHEAD_MS) return refusal('timeAhead', { what });
+  if (receivedAt.getTime() - ms > DEVICE_TIME_MAX_BEHIND_MS) return refusal('timeBehind', { what });
   return null;
 }
 

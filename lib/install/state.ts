@@ -1,4 +1,5 @@
 import type { InstallEventType } from '@/lib/domain/vocabulary';
+import { refusal, type Refusal } from '@/lib/i18n/refusals';
 import { applyCorrection, sortEvents, toDate, type EffectiveEvent, type InstallEventInput } from './log';
 
 // The install's step machine: what has happened (from the stored events, corrections applied)
@@ -109,49 +110,54 @@ export function deriveInstallState(events: readonly InstallEventInput[]): Instal
 export function orderProblem(
   state: InstallState,
   event: NewEvent,
-  { reopened = false }: { reopened?: boolean } = {},
+  options: { reopened?: boolean } = {},
 ): string | null {
+  return orderRefusal(state, event, options)?.text ?? null;
+}
+
+/** orderProblem's sentence in English and as a catalogue message (lib/install/refusals.ts). */
+export function orderRefusal(
+  state: InstallState,
+  event: NewEvent,
+  { reopened = false }: { reopened?: boolean } = {},
+): Refusal | null {
   const at = toDate(event.deviceTime);
   // Sent back by the office (`reopened`): the crew may inspect again, add notes and corrections, and sign off
   // once more to resubmit; the clock events themselves stay as they happened.
   const afterSignOff = reopened ? ['note', 'correction', 'inspection_recorded', 'signed_off'] : ['note', 'correction'];
-  if (state.signedOffAt && event.type === 'signed_off' && !reopened) return 'This install is already signed off.';
+  if (state.signedOffAt && event.type === 'signed_off' && !reopened) return refusal('alreadySignedOff');
   if (state.signedOffAt && !afterSignOff.includes(event.type)) {
-    return reopened
-      ? 'This install was sent back: add notes, corrections or a new inspection, then sign off again.'
-      : 'This install is signed off: only a note or a correction can be added now.';
+    return reopened ? refusal('sentBack') : refusal('signedOff');
   }
   switch (event.type) {
     case 'safety_acknowledged':
-      return state.safetyAcknowledged ? 'Safety was already acknowledged on this install.' : null;
+      return state.safetyAcknowledged ? refusal('safetyTwice') : null;
     case 'dry_run_finished':
-      return state.dryRunStartedAt ? null : 'Start the dry run before recording its end.';
+      return state.dryRunStartedAt ? null : refusal('dryRunNotStarted');
     case 'resin_mixed':
-      return state.mixedAt ? 'The resin was already mixed on this install; a new mix needs a new install.' : null;
+      return state.mixedAt ? refusal('mixedTwice') : null;
     case 'patch_loaded':
-      return state.mixedAt ? null : 'Record "resin mixed" before "patch loaded".';
+      return state.mixedAt ? null : refusal('loadBeforeMix');
     case 'packer_in_position':
-      return state.mixedAt ? null : 'Record "resin mixed" before "packer in position".';
+      return state.mixedAt ? null : refusal('positionBeforeMix');
     case 'bladder_inflated':
-      if (!state.mixedAt) return 'Record "resin mixed" before "bladder inflated".';
-      if (state.inflatedAt) return 'The bladder was already inflated on this install.';
-      if (at < state.mixedAt)
-        return 'The bladder cannot be inflated before the resin was mixed: check the time on the device.';
+      if (!state.mixedAt) return refusal('inflateBeforeMix');
+      if (state.inflatedAt) return refusal('inflatedTwice');
+      if (at < state.mixedAt) return refusal('inflatedBeforeMixed');
       return null;
     case 'pressure_reading':
-      if (!state.inflatedAt) return 'Record "bladder inflated" before a pressure reading.';
-      if (state.deflatedAt) return 'The bladder is already deflated: a pressure reading no longer applies.';
+      if (!state.inflatedAt) return refusal('pressureBeforeInflate');
+      if (state.deflatedAt) return refusal('pressureAfterDeflate');
       return null;
     case 'bladder_deflated':
-      if (!state.inflatedAt) return 'Record "bladder inflated" before "bladder deflated".';
-      if (state.deflatedAt) return 'The bladder was already deflated on this install.';
-      if (at < state.inflatedAt)
-        return 'The bladder cannot be deflated before it was inflated: check the time on the device.';
+      if (!state.inflatedAt) return refusal('deflateBeforeInflate');
+      if (state.deflatedAt) return refusal('deflatedTwice');
+      if (at < state.inflatedAt) return refusal('deflatedBeforeInflated');
       return null;
     case 'inspection_recorded':
-      return state.deflatedAt ? null : 'Record "bladder deflated" before the inspection.';
+      return state.deflatedAt ? null : refusal('inspectBeforeDeflate');
     case 'signed_off':
-      return state.inspection ? null : 'Record the inspection before signing off.';
+      return state.inspection ? null : refusal('signBeforeInspect');
     case 'correction':
       return correctionProblem(state, event);
     default:
@@ -165,12 +171,12 @@ export function correctionTarget(state: InstallState, ref: string | null | undef
   return state.log.find((e) => e.id === ref || e.clientEventId === ref);
 }
 
-function correctionProblem(state: InstallState, event: NewEvent): string | null {
+function correctionProblem(state: InstallState, event: NewEvent): Refusal | null {
   const target = correctionTarget(state, event.correctsEventId);
   if (!target) {
     return state.correctionIds.includes(event.correctsEventId ?? '')
-      ? 'Correct the original event, not an earlier correction.'
-      : 'That correction names an event that is not on this install.';
+      ? refusal('correctOriginal')
+      : refusal('correctUnknown');
   }
   // A correction may not leave the clock in an order that cannot have happened.
   const fixed = applyCorrection(target, event.payload ?? {});
@@ -179,10 +185,10 @@ function correctionProblem(state: InstallState, event: NewEvent): string | null 
     state.correctionIds,
   );
   if (next.mixedAt && next.inflatedAt && next.inflatedAt < next.mixedAt) {
-    return 'With that correction the bladder would be inflated before the resin was mixed.';
+    return refusal('correctionInflatesEarly');
   }
   if (next.inflatedAt && next.deflatedAt && next.deflatedAt < next.inflatedAt) {
-    return 'With that correction the bladder would be deflated before it was inflated.';
+    return refusal('correctionDeflatesEarly');
   }
   return null;
 }

@@ -1,5 +1,6 @@
 // What evidence may be uploaded, and how large: the one place these limits are stated.
 // Shared by the zod schema (request time), the server's check of the stored bytes and the browser.
+import { refusal } from '@/lib/i18n/refusals';
 
 const MB = 1024 * 1024;
 
@@ -28,6 +29,10 @@ export const THUMBNAIL_WIDTH = 320;
 
 /** The sentence shown wherever a type is refused. */
 export const ALLOWED_SUMMARY = `JPEG, PNG or WebP images up to ${MAX_BYTES.image / MB} MB, MP4, WebM or QuickTime videos up to ${MAX_BYTES.video / MB} MB`;
+
+/** ALLOWED_SUMMARY as a refusal's nested sentence (lib/i18n/refusals.ts), for a refusal in the reader's language. */
+export const allowedTypes = () =>
+  refusal('allowed', { image: String(MAX_BYTES.image / MB), video: String(MAX_BYTES.video / MB) });
 
 export const allowedType = (mime: string): AllowedType | undefined =>
   ALLOWED_TYPES.find((t) => t.mime === mime.toLowerCase());

@@ -149,6 +149,30 @@ describe('attachments: presigned upload, server-side check, signed links', () =>
     await expectNothingStored(id, key);
   });
 
+  it('words the refusal in the uploader’s language: Spanish for a Spanish technician, the same English otherwise', async () => {
+    const text = Buffer.from('Not a picture.\n'.repeat(20));
+    const upload = { installId, kind: 'inspection', fileName: 'notes.jpg', contentType: 'image/jpeg' };
+    await a.technician.update({ locale: 'es' });
+    await signInAs(a.technician);
+    const spanish = await complete((await send(upload, text)).id);
+    await a.technician.update({ locale: null });
+    expect(spanish).toEqual({
+      status: 422,
+      body: {
+        error: {
+          message:
+            'notes.jpg es algo que no es una imagen ni un vídeo legible, diga lo que diga su nombre. Envíe imágenes JPEG, ' +
+            'PNG o WebP de hasta 15 MB; vídeos MP4, WebM o QuickTime de hasta 200 MB. No se guardó nada.',
+        },
+      },
+    });
+    await signInAs(a.foreman);
+    expect((await complete((await send(upload, text)).id)).body.error.message).toBe(
+      'notes.jpg is not an image or video we can read, whatever its name says. Send JPEG, PNG or WebP images up to ' +
+        '15 MB, MP4, WebM or QuickTime videos up to 200 MB. Nothing was kept.',
+    );
+  });
+
   it('refuses a Windows program claiming to be image/jpeg with 422 naming what it really is', async () => {
     await signInAs(a.foreman);
     const exe = Buffer.alloc(2048);

@@ -3,6 +3,7 @@ import { requireUserWithInstall } from '@/lib/auth/session';
 import { recordEvent } from '@/lib/data/install-events';
 import type { RecordEventResponse } from '@/lib/data/installs';
 import { bodyOrUndefined, handle } from '@/lib/server/http';
+import { inLanguage, localeOf } from '@/lib/server/in-language';
 import { uuidSchema } from '@/lib/validation/common';
 
 /** Records one tap; a replay of the same tap answers 200 with the stored event and writes nothing. */
@@ -12,6 +13,7 @@ export const POST = handle(async (request: Request, { params }: { params: Promis
   const { user, install } = await requireUserWithInstall(uuidSchema.safeParse(id).success ? id : null);
   // Unreadable JSON is validated like an empty body: a 400 with the fields it lacks.
   const body: unknown = await bodyOrUndefined(request);
-  const { event, created } = await recordEvent(user, id, body, { install });
+  // Its refusals are read by the crew on the tablet ("Needs attention"): in the user's language.
+  const { event, created } = await inLanguage(localeOf(user, request), () => recordEvent(user, id, body, { install }));
   return NextResponse.json({ event } satisfies RecordEventResponse, { status: created ? 201 : 200 });
 });

@@ -1,0 +1,33 @@
+// @vitest-environment jsdom
+import { cleanup, render, screen } from '@testing-library/react';
+import { afterEach, describe, expect, it } from 'vitest';
+import { ErrorView, SectionErrorView } from '@/components/shell/error-view';
+import { IntlWrapper } from '../i18n/intl';
+
+afterEach(cleanup);
+
+const noop = () => undefined;
+
+describe('the section error page', () => {
+  it('reads in English as the page without a catalogue does', () => {
+    const { container: plain } = render(<ErrorView reset={noop} />);
+    const english = plain.innerHTML;
+    cleanup();
+    const { container } = render(
+      <IntlWrapper>
+        <SectionErrorView reset={noop} />
+      </IntlWrapper>,
+    );
+    expect(container.innerHTML).toBe(english);
+  });
+
+  it('reads in Spanish for a Spanish reader', () => {
+    render(
+      <IntlWrapper locale="es">
+        <SectionErrorView reset={noop} />
+      </IntlWrapper>,
+    );
+    expect(screen.getByRole('heading').textContent).toBe('Algo salió mal');
+    expect(screen.getByRole('button').textContent).toBe('Volver a intentar');
+  });
+});
