@@ -1,9 +1,2 @@
-export default function Loading() {
-  return (
-    <div aria-busy="true" aria-label="Loading" className="animate-pulse space-y-4">
-      {Array.from({ length: 3 }, (_, i) => (
-        <div key={i} className="h-32 rounded-xl bg-slate-200" />
-      ))}
-    </div>
-  );
-}
+// The profile page waits like the field screens it belongs to.
+export { default } from '../(field)/today/loading';

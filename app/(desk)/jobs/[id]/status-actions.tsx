@@ -6,6 +6,7 @@ import { Button } from '@/components/ui/button';
 import { submitJson } from '@/lib/client/submit-json';
 import { label, type JobStatus } from '@/lib/domain/vocabulary';
 import { OFFICE_TRANSITIONS } from '@/lib/jobs/status';
+import { InlineActions } from '@/components/desk/inline-actions';
 
 // Scheduling is done by giving the job a crew and a day, not by a button here.
 const VERBS: Partial<Record<JobStatus, string>> = {
@@ -30,17 +31,12 @@ export function JobStatusActions({ jobId, status }: { jobId: string; status: Job
     router.refresh();
   };
   return (
-    <span className="inline-flex items-center gap-2">
+    <InlineActions message={message}>
       {moves.map((to) => (
         <Button key={to} type="button" variant="secondary" disabled={busy} onClick={() => move(to)}>
           {VERBS[to]}
         </Button>
       ))}
-      {message && (
-        <span role="alert" className="text-sm text-missed-700">
-          {message}
-        </span>
-      )}
-    </span>
+    </InlineActions>
   );
 }

@@ -4,6 +4,7 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { submitJson } from '@/lib/client/submit-json';
+import { InlineActions } from '@/components/desk/inline-actions';
 
 /** Brings an archived crew back into the lists (PATCH { archived: false }). */
 export function RestoreCrewButton({ crewId }: { crewId: string }) {
@@ -15,15 +16,10 @@ export function RestoreCrewButton({ crewId }: { crewId: string }) {
     router.refresh();
   };
   return (
-    <span className="inline-flex items-center gap-2">
+    <InlineActions message={message}>
       <Button type="button" variant="secondary" onClick={restore}>
         Restore
       </Button>
-      {message && (
-        <span role="alert" className="text-sm text-missed-700">
-          {message}
-        </span>
-      )}
-    </span>
+    </InlineActions>
   );
 }
