@@ -1,7 +1,7 @@
 'use client';
 
 import { useTranslations } from 'next-intl';
-import { flexRender, getCoreRowModel, useReactTable, type ColumnDef } from '@tanstack/react-table';
+import { flexRender, getCoreRowModel, useReactTable, type Cell, type ColumnDef } from '@tanstack/react-table';
 import { usePathname, useRouter, useSearchParams } from 'next/navigation';
 
 /**
@@ -85,7 +85,7 @@ export function DataTable<Row>({
             <tr key={row.id} className="hover:bg-slate-50">
               {row.getVisibleCells().map((cell) => (
                 <td key={cell.id} className="px-3 py-2 align-top">
-                  {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                  {cellContent(cell)}
                 </td>
               ))}
             </tr>
@@ -137,4 +137,14 @@ export function ListTable<Row>({
   ...props
 }: ListTableProps<Row> & { caption: string; columns: ColumnDef<Row, unknown>[] }) {
   return <DataTable data={list.items} page={list.page} pageCount={list.pageCount} total={list.total} {...props} />;
+}
+
+/**
+ * A cell's content, its column's function called rather than mounted: flexRender mounts a function as a component,
+ * and the tables build their columns on every render, so each render would be a new component type and React
+ * would remount the cell, dropping its state (a row action's "… is deactivated" message after router.refresh()).
+ */
+function cellContent<Row>(cell: Cell<Row, unknown>) {
+  const render = cell.column.columnDef.cell;
+  return typeof render === 'function' ? render(cell.getContext()) : render;
 }
