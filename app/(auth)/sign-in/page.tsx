@@ -11,8 +11,9 @@ export async function generateMetadata(): Promise<Metadata> {
 
 const WORDS = ['email', 'password', 'submit', 'submitting', 'badCredentials', 'failed'] as const;
 const ERRORS = ['email', 'passwordMissing', 'passwordTooLong'] as const;
-// A number no message holds, swapped for `{minutes}` so the form fills in the count itself.
-const MARK = 987654;
+// A number no message holds (and none writes with a group separator, as ICU would write 987,654), swapped for
+// `{minutes}` so the form fills in the count itself.
+const MARK = 99;
 
 export default async function Page() {
   const t = await getTranslations('signIn');
