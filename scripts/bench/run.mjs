@@ -163,9 +163,11 @@ if (only('f')) {
   );
 }
 
+// The running install's page: (g) weighs it, (h) runs Lighthouse on it.
+const installId = seeded.templateIds.running;
+
 if (only('g')) {
   // (g) first-load JavaScript of four pages, gzipped, from the production build
-  const installId = seeded.templateIds.running;
   const pages = [
     ['sign-in', '/sign-in', null, 120],
     ['today', '/today', foreman, null],
