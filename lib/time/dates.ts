@@ -1,20 +1,15 @@
+import { memoByKey } from '@/lib/i18n/memo';
+
 /** A calendar day (YYYY-MM-DD) in a time zone, `offsetDays` from the given instant. */
 export function dayInZone(instant: Date, timeZone: string, offsetDays = 0): string {
   const shifted = new Date(instant.getTime() + offsetDays * 86_400_000);
   return dayFormatter(timeZone).format(shifted);
 }
 
-// Building an Intl formatter costs far more than using one, and lists call this per row: one per zone.
-const dayFormatters = new Map<string, Intl.DateTimeFormat>();
-function dayFormatter(timeZone: string): Intl.DateTimeFormat {
-  let formatter = dayFormatters.get(timeZone);
-  if (!formatter) {
-    // en-CA formats as YYYY-MM-DD.
-    formatter = new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' });
-    dayFormatters.set(timeZone, formatter);
-  }
-  return formatter;
-}
+// en-CA formats as YYYY-MM-DD; one formatter per zone.
+const dayFormatter = memoByKey(
+  (timeZone) => new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }),
+);
 
 /**
  * An instant as the office reads it in the company's zone, e.g. "2026-12-01 14:05 GMT-7".
@@ -83,12 +78,9 @@ function gmtOffset(offsetMin: number): string {
   return `GMT${sign}${hours}${minutes ? `:${pad(minutes)}` : ''}`;
 }
 
-const formatters = new Map<string, Intl.DateTimeFormat>();
-
-function partsInZone(time: number, timeZone: string): ZoneParts {
-  let formatter = formatters.get(timeZone);
-  if (!formatter) {
-    formatter = new Intl.DateTimeFormat('en-US', {
+const zoneFormatter = memoByKey(
+  (timeZone) =>
+    new Intl.DateTimeFormat('en-US', {
       timeZone,
       hourCycle: 'h23',
       year: 'numeric',
@@ -97,9 +89,11 @@ function partsInZone(time: number, timeZone: string): ZoneParts {
       hour: 'numeric',
       minute: 'numeric',
       second: 'numeric',
-    });
-    formatters.set(timeZone, formatter);
-  }
+    }),
+);
+
+function partsInZone(time: number, timeZone: string): ZoneParts {
+  const formatter = zoneFormatter(timeZone);
   const parts: Record<string, number> = {};
   for (const part of formatter.formatToParts(time)) if (part.type !== 'literal') parts[part.type] = Number(part.value);
   const { year, month, day, hour, minute, second } = parts;

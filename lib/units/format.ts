@@ -1,3 +1,4 @@
+import { memoByKey } from '@/lib/i18n/memo';
 import { requireFinite } from './errors';
 import {
   forceFromSi,
@@ -67,14 +68,12 @@ export function formatForce(newtons: number, system: UnitSystem, options: Format
   return `${formatNumber(forceFromSi(newtons, system), options.decimals ?? (unit === 'kN' ? 1 : 0), options.locale)} ${unit}`;
 }
 
-// One formatter per language and number of decimals: building one costs far more than using it.
-const numberFormatters = new Map<string, Intl.NumberFormat>();
-function numberFormatter(locale: string, digits: number): Intl.NumberFormat {
-  const key = `${locale}|${digits}`;
-  let formatter = numberFormatters.get(key);
-  if (!formatter) {
-    formatter = new Intl.NumberFormat(locale, { minimumFractionDigits: digits, maximumFractionDigits: digits });
-    numberFormatters.set(key, formatter);
-  }
-  return formatter;
-}
+// One formatter per language and number of decimals.
+const numberFormatterFor = memoByKey((key) => {
+  const [locale, digits] = key.split('|');
+  return new Intl.NumberFormat(locale, {
+    minimumFractionDigits: Number(digits),
+    maximumFractionDigits: Number(digits),
+  });
+});
+const numberFormatter = (locale: string, digits: number) => numberFormatterFor(`${locale}|${digits}`);
