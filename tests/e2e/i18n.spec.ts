@@ -143,6 +143,8 @@ test.describe('a Spanish-speaking technician', () => {
     await tap(page, 'Registrar inspección');
     await expect(page.getByTestId('step-sign-off')).toContainText('El capataz firma la instalación');
     await expect(page.getByTestId('sync-status')).toHaveText('Todos los toques sincronizados', { timeout: 20_000 });
+    // Nothing refused on the way: a refused tap leaves the queue too, into the "needs attention" list.
+    await expect(page.getByTestId('outbox-parked')).toHaveCount(0);
     await expect(page.getByTestId('event-log')).toContainText('Vejiga inflada');
     await expect(page.getByTestId('event-log')).toContainText('sincronizado');
     await expect(page.locator('main')).not.toContainText(

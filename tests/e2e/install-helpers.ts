@@ -38,9 +38,13 @@ export async function controlTime(page: Page) {
     }
   });
   return {
+    // The page's clock first, then the Date header. An answer sent in between then carries the old server time
+    // to a page already moved on: a clock sample whose bounds still hold the true offset. The other way round,
+    // a moved-on Date reaching a page not yet moved says the server runs hours ahead; the tablet then stamps
+    // its next taps hours in the future and the server refuses them (seen in CI: deflate and inspection refused).
     advance: async (minutes: number) => {
-      advancedMs += minutes * 60_000;
       await page.clock.fastForward(minutes * 60_000);
+      advancedMs += minutes * 60_000;
     },
   };
 }
