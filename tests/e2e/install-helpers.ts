@@ -24,10 +24,16 @@ export async function controlTime(page: Page) {
   // The fake time starts hours in the past, so taps stamped after moving it on are still not ahead
   // of the server's real clock (it refuses device times over 5 minutes ahead).
   let advancedMs = -FAKE_TIME_BEHIND_MS;
+  // While the page's clock and the Date header move, answers wait: none may carry a moved-on Date to a page whose
+  // clock has not moved yet. Such a sample says the server runs hours ahead, the tablet then stamps its next taps
+  // hours in the future and the server refuses them (seen in CI: a deflate and an inspection refused). An answer
+  // already on its way with the old Date is harmless: its bounds still hold the true offset.
+  let moving: Promise<void> = Promise.resolve();
   await page.clock.install({ time: Date.now() - FAKE_TIME_BEHIND_MS });
   await page.route('**/api/**', async (route) => {
     try {
       const response = await route.fetch();
+      await moving;
       await route.fulfill({
         response,
         headers: { ...response.headers(), date: new Date(Date.now() + advancedMs).toUTCString() },
@@ -38,13 +44,15 @@ export async function controlTime(page: Page) {
     }
   });
   return {
-    // The page's clock first, then the Date header. An answer sent in between then carries the old server time
-    // to a page already moved on: a clock sample whose bounds still hold the true offset. The other way round,
-    // a moved-on Date reaching a page not yet moved says the server runs hours ahead; the tablet then stamps
-    // its next taps hours in the future and the server refuses them (seen in CI: deflate and inspection refused).
     advance: async (minutes: number) => {
-      await page.clock.fastForward(minutes * 60_000);
-      advancedMs += minutes * 60_000;
+      let moved!: () => void;
+      moving = new Promise((resolve) => (moved = resolve));
+      try {
+        await page.clock.fastForward(minutes * 60_000);
+        advancedMs += minutes * 60_000;
+      } finally {
+        moved();
+      }
     },
   };
 }
@@ -107,4 +115,35 @@ export async function recordConditions(page: Page, pipeF = '57') {
   const lot = await page.locator('#resinKitId option', { hasText: 'SAE-2610-014' }).getAttribute('value');
   await page.locator('#resinKitId').selectOption(lot!);
   await tap(page, 'Save conditions');
+}
+
+/** An entry of the tablet's outbox (IndexedDB `setline-outbox`, lib/client/outbox-db.ts) as a test reads it. */
+export type OutboxRecord = {
+  seq: number;
+  clientEventId: string;
+  type: string;
+  deviceTime: string;
+  status: 'pending' | 'synced' | 'rejected';
+  attempts: number;
+  lastError?: string;
+};
+
+/** The install's entries in the tablet's outbox, in insertion order. */
+export function outboxEntries(page: Page, installId: string): Promise<OutboxRecord[]> {
+  return page.evaluate(
+    (wanted) =>
+      new Promise<OutboxRecord[]>((resolve, reject) => {
+        const open = indexedDB.open('setline-outbox');
+        open.onerror = () => reject(open.error);
+        open.onsuccess = () => {
+          const read = open.result.transaction('entries').objectStore('entries').getAll();
+          read.onerror = () => reject(read.error);
+          read.onsuccess = () => {
+            const all = read.result as (OutboxRecord & { installId: string })[];
+            resolve(all.filter((e) => e.installId === wanted).sort((a, b) => a.seq - b.seq));
+          };
+        };
+      }),
+    installId,
+  );
 }

@@ -5,6 +5,7 @@ import {
   controlTime,
   mixAndInflate,
   newInstall,
+  outboxEntries,
   prepareToMix,
   recordConditions,
   serverView,
@@ -133,23 +134,6 @@ test('with no signal, five taps are kept through a reload and reach the server w
   ]);
   expect(stored).toEqual(queued.map((e) => [e.clientEventId, e.type, new Date(e.deviceTime).toISOString()]));
 });
-
-async function outboxEntries(page: import('@playwright/test').Page, installId: string) {
-  return page.evaluate(
-    (id) =>
-      new Promise<{ clientEventId: string; type: string; deviceTime: string; seq: number }[]>((resolve, reject) => {
-        const open = indexedDB.open('setline-outbox');
-        open.onerror = () => reject(open.error);
-        open.onsuccess = () => {
-          const request = open.result.transaction('entries').objectStore('entries').getAll();
-          request.onsuccess = () =>
-            resolve(request.result.filter((e) => e.installId === id).sort((x, y) => x.seq - y.seq));
-          request.onerror = () => reject(request.error);
-        };
-      }),
-    installId,
-  );
-}
 
 function toSeconds(text: string): number {
   const match = /(\d+):(\d{2}):(\d{2})/.exec(text);

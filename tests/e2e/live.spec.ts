@@ -5,10 +5,7 @@ import { newInstall, tap, waitForSync } from './install-helpers';
 // The live board and the tablets, each in a browser of its own, fed by the live stream (server-sent events):
 // while a stream is open the screens poll only once a minute, so an update within 2 s came through the stream.
 
-// One retry: in 2 of 4 full-suite runs (never alone) the board still lacked the first tap's install 5 s after it
-// synced, with its stream open. Not yet diagnosed (see DEVELOPERS.md, "Live stream and board"); a retry keeps CI
-// honest about everything else while it is.
-test.describe.configure({ timeout: 180_000, retries: 1 });
+test.describe.configure({ timeout: 180_000 });
 // The tablets' taps go straight to the network (as in the other multi-tablet specs).
 test.use({ serviceWorkers: 'block' });
 
@@ -20,9 +17,10 @@ async function expectStreamOpen(page: Page) {
 }
 
 test('the live board updates from the stream when a tablet in another browser taps', async ({ browser }) => {
-  const officeContext = await browser.newContext();
+  const officeContext = await trackStreams(await browser.newContext());
   const foremanContext = await browser.newContext();
   const office = await officeContext.newPage();
+  const trail = boardTrail(office);
   const foreman = await foremanContext.newPage();
   await signIn(office, 'office@demo.test');
   await expect(office).toHaveURL(/\/jobs/, { timeout: 30_000 });
@@ -41,8 +39,16 @@ test('the live board updates from the stream when a tablet in another browser ta
 
   // The first tap starts the install: it appears on the board with what the crew is at now.
   await tap(foreman, 'Understood — start');
+  await expect(foreman.getByTestId('step-checks')).toBeVisible();
   await waitForSync(foreman);
-  await expect(card).toHaveAttribute('data-step', 'checks', { timeout: 5_000 });
+  trail.mark(`first tap synced (install ${id})`);
+  await expect(card)
+    .toHaveAttribute('data-step', 'checks', { timeout: 5_000 })
+    .catch(async (error: unknown) => {
+      // What the board saw, so a failure names its cause: the stream's messages and the board's refetches.
+      console.log(await trail.dump());
+      throw error;
+    });
   await expect(card).toContainText('Pre-install checks');
   await expect(card).toContainText('Job ');
 
@@ -105,6 +111,38 @@ test('the live board passes an accessibility check', async ({ page }) => {
   expect(results.violations.map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`)).toEqual([]);
 });
 
+/**
+ * A timeline of what the board's page saw: every message its EventSources delivered (recorded in the page by
+ * trackStreams) and every answer of /api/live/board with the ids in progress. Printed when the board misses a tap.
+ */
+function boardTrail(page: Page) {
+  const started = Date.now();
+  const lines: string[] = [];
+  const at = () => `+${((Date.now() - started) / 1000).toFixed(2)}s`;
+  page.on('response', async (response) => {
+    if (!response.url().includes('/api/live/board')) return;
+    const body = await response.json().catch(() => null);
+    const ids = (body?.inProgress ?? []).map((i: { id: string; step: string }) => `${i.id.slice(0, 8)}:${i.step}`);
+    lines.push(`${at()} board ${response.status()} in progress [${ids.join(' ')}]`);
+  });
+  page.on('console', (message) => {
+    if (message.text().startsWith('[stream]')) lines.push(`${at()} ${message.text()}`);
+  });
+  return {
+    mark: (text: string) => lines.push(`${at()} ${text}`),
+    dump: async () => {
+      const sources = await page
+        .evaluate(() =>
+          ((window as unknown as { __liveSources?: EventSource[] }).__liveSources ?? []).map(
+            (s) => `${s.url} readyState ${s.readyState}`,
+          ),
+        )
+        .catch(() => ['(page gone)']);
+      return ['board trail:', ...lines, `sources: ${sources.join('; ')}`].join('\n');
+    },
+  };
+}
+
 /** EventSources of the page that are open (readyState 1), counted by wrapping the constructor at start-up. */
 async function openStreams(page: Page) {
   return page.evaluate(
@@ -125,6 +163,13 @@ async function trackStreams(context: BrowserContext) {
       constructor(url: string | URL, init?: EventSourceInit) {
         super(url, init);
         sources.push(this);
+        // Read by boardTrail when a board misses a tap.
+        const say = (what: string) => console.log(`[stream] ${sources.length} ${what}`);
+        this.addEventListener('open', () => say('open'));
+        this.addEventListener('error', () => say(`error, readyState ${this.readyState}`));
+        this.addEventListener('ready', (e) => say(`ready ${(e as MessageEvent).data}`));
+        this.addEventListener('reset', (e) => say(`reset ${(e as MessageEvent).data}`));
+        this.addEventListener('message', (e) => say(`message ${(e as MessageEvent).data.slice(0, 160)}`));
       }
     } as typeof EventSource;
   });

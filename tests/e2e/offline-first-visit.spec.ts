@@ -1,9 +1,9 @@
 import http from 'node:http';
 import type { AddressInfo, Socket } from 'node:net';
-import { expect, request as playwrightRequest, test, type BrowserContext, type Page } from '@playwright/test';
+import { expect, request as playwrightRequest, test, type BrowserContext } from '@playwright/test';
 import { BASE_URL } from '../../playwright.config';
 import { signIn } from './helpers';
-import { newInstall, recordConditions, tap } from './install-helpers';
+import { newInstall, outboxEntries, recordConditions, tap } from './install-helpers';
 
 // An install opened once — here the very first page after sign-in — reloads without signal with its
 // clock running and its queued taps listed; 50 taps queued offline across a reload all arrive once, in
@@ -14,7 +14,6 @@ import { newInstall, recordConditions, tap } from './install-helpers';
 // forwarding proxy started by this test on loopback, and "offline" makes that proxy drop every
 // connection. The page's emulation is switched too, so the page sees `navigator.onLine` as a tablet would.
 
-type Entry = { seq: number; clientEventId: string; type: string; deviceTime: string };
 type ServerEvent = { clientEventId: string; type: string; deviceTime: string };
 
 const TAPS = 50;
@@ -131,31 +130,6 @@ async function serverEvents(
   const response = await api.get(`/api/installs/${id}`);
   expect(response.status()).toBe(200);
   return (await response.json()).events;
-}
-
-/** The install's entries in the tablet's outbox (IndexedDB), in insertion order. */
-function outboxEntries(page: Page, installId: string): Promise<Entry[]> {
-  return page.evaluate(
-    (wanted) =>
-      new Promise<Entry[]>((resolve, reject) => {
-        const open = indexedDB.open('setline-outbox');
-        open.onerror = () => reject(open.error);
-        open.onsuccess = () => {
-          const read = open.result.transaction('entries').objectStore('entries').getAll();
-          read.onerror = () => reject(read.error);
-          read.onsuccess = () => {
-            const all = read.result as (Entry & { installId: string })[];
-            resolve(
-              all
-                .filter((e) => e.installId === wanted)
-                .sort((a, b) => a.seq - b.seq)
-                .map(({ seq, clientEventId, type, deviceTime }) => ({ seq, clientEventId, type, deviceTime })),
-            );
-          };
-        };
-      }),
-    installId,
-  );
 }
 
 type SignalProxy = {

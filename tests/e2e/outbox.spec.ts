@@ -1,6 +1,6 @@
 import { expect, test, type Page } from '@playwright/test';
 import { signIn } from './helpers';
-import { newInstall, prepareToMix, serverView, tap, waitForSync } from './install-helpers';
+import { newInstall, outboxEntries, prepareToMix, serverView, tap, waitForSync } from './install-helpers';
 
 // The tablet keeps going: a tap the server refuses is parked on the screen and the next ones still
 // sync; a tap waits on the tablet for the user who made it, whoever signs in meanwhile.
@@ -72,6 +72,11 @@ test('a tap waits on the tablet for the user who made it, not whoever signs in n
   await context.setOffline(true);
   await tap(page, 'Understood — start');
   await expect(page.getByTestId('sync-status')).toHaveText(/^1 tap saved on this tablet/);
+  // The queue shows the tap at once, before its first sending has failed; a page closed with that request still
+  // open may let it out, with the foreman's cookie, when the signal returns. Close once the attempt has failed.
+  await expect
+    .poll(async () => (await outboxEntries(page, id)).map((e) => [e.status, e.attempts > 0]), { timeout: 30_000 })
+    .toEqual([['pending', true]]);
   await page.close();
   // The foreman's session ends while the tablet has no signal (any page of his would rightly send his tap the
   // moment the signal returns); the technician then signs in on the same tablet.
