@@ -189,6 +189,15 @@ test.describe('a Spanish-speaking technician', () => {
     await page.goto('/today');
     await expect(page.getByRole('heading', { level: 1 })).toHaveText('El trabajo de hoy');
   });
+
+  test('a page that is not there says so in Spanish', async ({ page }) => {
+    await signIn(page, 'tecnico@demo.test');
+    await expect(page).toHaveURL('/today');
+    const response = await page.goto('/installs/00000000-0000-4000-8000-000000000000');
+    expect(response?.status()).toBe(404);
+    await expect(page.getByRole('heading', { level: 1 })).toHaveText('No encontrado');
+    await expect(page.getByRole('link', { name: 'Ir a su página de inicio' })).toBeVisible();
+  });
 });
 
 test('an office user who reads Spanish gets the desk’s navigation and common actions in Spanish', async ({ page }) => {
