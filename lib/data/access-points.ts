@@ -9,6 +9,7 @@ import type { SessionUser } from '@/lib/auth/session';
 import type { accessPointInputSchema, accessPointPatchSchema } from '@/lib/validation/access-points';
 import { assertOfficeWriter } from './scope';
 import { findVisibleSite } from './sites';
+import { lockOwnRow } from './records';
 
 const ENTITY = 'access_point';
 
@@ -51,12 +52,7 @@ export async function createAccessPoint(
 export async function updateAccessPoint(user: SessionUser, id: string, patch: z.output<typeof accessPointPatchSchema>) {
   assertOfficeWriter(user);
   return sequelize.transaction(async (transaction) => {
-    const point = await AccessPoint.findOne({
-      where: { id, companyId: user.companyId },
-      transaction,
-      lock: transaction.LOCK.UPDATE,
-    });
-    if (!point) throw notFound('Access point');
+    const point = await lockOwnRow(AccessPoint, user, id, 'Access point', transaction);
     if (patch.label !== undefined) await assertLabelFree(point.siteId, patch.label, id, transaction);
     const changes = changedFields(point.get({ plain: true }), patch);
     if (Object.keys(changes).length) {
@@ -74,12 +70,7 @@ export async function updateAccessPoint(user: SessionUser, id: string, patch: z.
 export async function deleteAccessPoint(user: SessionUser, id: string, reason?: string | null) {
   assertOfficeWriter(user);
   return sequelize.transaction(async (transaction) => {
-    const point = await AccessPoint.findOne({
-      where: { id, companyId: user.companyId },
-      transaction,
-      lock: transaction.LOCK.UPDATE,
-    });
-    if (!point) throw notFound('Access point');
+    const point = await lockOwnRow(AccessPoint, user, id, 'Access point', transaction);
     const [segments, repairs] = await Promise.all([
       Segment.findAll({
         where: { companyId: user.companyId, [Op.or]: [{ fromAccessPointId: id }, { toAccessPointId: id }] },

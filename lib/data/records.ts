@@ -12,7 +12,21 @@ import { assertAdmin } from './scope';
 
 type Row = Model & { id: string; get(options: { plain: true }): Record<string, unknown>; get(key: string): unknown };
 
-/** One of the company's rows, locked for a change in this transaction; 404 when missing or another company's. */
+/** One of the company's rows, locked for a change in this transaction; null when missing or another company's. */
+export async function findOwnRowLocked<M extends Row>(
+  model: ModelStatic<M>,
+  user: SessionUser,
+  id: string,
+  transaction: Transaction,
+): Promise<M | null> {
+  return model.findOne({
+    where: { id, companyId: user.companyId } as WhereOptions,
+    transaction,
+    lock: transaction.LOCK.UPDATE,
+  });
+}
+
+/** As findOwnRowLocked, with a 404 (named `what`) for a missing row or another company's. */
 export async function lockOwnRow<M extends Row>(
   model: ModelStatic<M>,
   user: SessionUser,
@@ -20,11 +34,7 @@ export async function lockOwnRow<M extends Row>(
   what: string,
   transaction: Transaction,
 ): Promise<M> {
-  const row = await model.findOne({
-    where: { id, companyId: user.companyId } as WhereOptions,
-    transaction,
-    lock: transaction.LOCK.UPDATE,
-  });
+  const row = await findOwnRowLocked(model, user, id, transaction);
   if (!row) throw notFound(what);
   return row;
 }
