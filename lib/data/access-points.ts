@@ -9,7 +9,7 @@ import type { SessionUser } from '@/lib/auth/session';
 import type { accessPointInputSchema, accessPointPatchSchema } from '@/lib/validation/access-points';
 import { assertOfficeWriter } from './scope';
 import { findVisibleSite } from './sites';
-import { lockOwnRow } from './records';
+import { deleteAudited, lockOwnRow } from './records';
 
 const ENTITY = 'access_point';
 
@@ -89,19 +89,12 @@ export async function deleteAccessPoint(user: SessionUser, id: string, reason?: 
         409,
         `${repairs} repair${repairs === 1 ? ' is' : 's are'} measured from ${point.label}: it cannot be removed.`,
       );
-    await point.destroy({ transaction });
-    await recordAudit(
+    return deleteAudited(
       user,
-      {
-        action: 'delete',
-        entityType: ENTITY,
-        entityId: id,
-        changes: { siteId: point.siteId, label: point.label },
-        reason,
-      },
+      point,
+      { entityType: ENTITY, summary: { siteId: point.siteId, label: point.label }, reason },
       transaction,
     );
-    return { id, archived: false, deleted: true };
   });
 }
 

@@ -69,6 +69,18 @@ export async function createAudited<M extends Row>(
   });
 }
 
+/** Deletes the row and audits it, `summary` saying what it was, in the caller's transaction. */
+export async function deleteAudited(
+  user: SessionUser,
+  row: Row,
+  { entityType, summary, reason }: { entityType: string; summary: Record<string, unknown>; reason?: string | null },
+  transaction: Transaction,
+) {
+  await row.destroy({ transaction });
+  await recordAudit(user, { action: 'delete', entityType, entityId: row.id, changes: summary, reason }, transaction);
+  return { id: row.id, archived: false, deleted: true };
+}
+
 /**
  * The DELETE of any record: archived (kept, hidden from lists) when something uses it, so the history that
  * names it stays readable; deleted otherwise. Audited either way, in the caller's transaction.
@@ -92,11 +104,7 @@ export async function archiveOrDelete(
   },
   transaction: Transaction,
 ) {
-  if (!inUse) {
-    await row.destroy({ transaction });
-    await recordAudit(user, { action: 'delete', entityType, entityId: row.id, changes: summary, reason }, transaction);
-    return { id: row.id, archived: false, deleted: true };
-  }
+  if (!inUse) return deleteAudited(user, row, { entityType, summary, reason }, transaction);
   const { values, isArchived } = archive ?? {
     values: { archivedAt: new Date() },
     isArchived: row.get('archivedAt') != null,

@@ -13,7 +13,7 @@ import type { RepairInput, RepairListQuery, RepairPatch, RepairPlanQuery } from 
 import { unprocessable } from './jobs';
 import { allOf, pageOf, searchWhere, windowOf } from './list';
 import { assertOfficeWriter, crewJobsWhere } from './scope';
-import { findOwnRowLocked, lockOwnRow } from './records';
+import { deleteAudited, findOwnRowLocked, lockOwnRow } from './records';
 import { packerSizesOf } from './packers';
 
 type Plain<M extends Model> = InferAttributes<M>;
@@ -237,24 +237,18 @@ export async function removeRepair(user: SessionUser, id: string, reason?: strin
       return { id, archived: true, deleted: false, status: 'cancelled' as const };
     }
     await Job.findOne({ where: { id: repair.jobId }, transaction, lock: transaction.LOCK.UPDATE });
-    await repair.destroy({ transaction });
+    const deleted = await deleteAudited(
+      user,
+      repair,
+      { entityType: ENTITY, summary: { jobId: repair.jobId, position: repair.position }, reason },
+      transaction,
+    );
     await Repair.decrement('position', {
       by: 1,
       where: { jobId: repair.jobId, position: { [Op.gt]: repair.position } },
       transaction,
     });
-    await recordAudit(
-      user,
-      {
-        action: 'delete',
-        entityType: ENTITY,
-        entityId: id,
-        changes: { jobId: repair.jobId, position: repair.position },
-        reason,
-      },
-      transaction,
-    );
-    return { id, archived: false, deleted: true };
+    return deleted;
   });
 }
 
