@@ -24,14 +24,8 @@ export interface ResinClockSpec {
   sensitivity: CureSensitivity;
 }
 
-export interface CurePlanInput {
-  mixedAt: Date;
-  /** Temperature of the resin at the bucket, °C; with `airTempC` it sets the working window. */
-  mixTempC: number;
-  /** Air at the mixing place, °C; the warmer of this and `mixTempC` sets the working window. */
-  airTempC?: number | null;
-  /** Temperature inside the host pipe, °C; sets hold and full cure. */
-  pipeTempC: number;
+/** What a cure plan and an install record may both know past the mix: the packer's times, the prep, the margins. */
+export interface CureDetails {
   inflatedAt?: Date | null;
   deflatedAt?: Date | null;
   /** Length of the dry pull of the packer to the damage, seconds; stands for the loaded pull. */
@@ -40,7 +34,10 @@ export interface CurePlanInput {
   prepMinutes?: number | null;
   /** Share of the working window held back, 0–0.9 (default 0.2). */
   safetyMargin?: number | null;
-  /** Extra share of the hold kept inflated, 0–1 (default 0): deflate after hold × (1 + holdReserve). */
+  /**
+   * Extra share of the hold kept inflated, 0–1 (default 0; a company setting): deflate after
+   * hold × (1 + holdReserve). A record that deflated inside it gets a warning.
+   */
   holdReserve?: number | null;
   /**
    * Hold time from the resin maker's sheet for this pipe temperature, minutes. Used only when the
@@ -48,6 +45,16 @@ export interface CurePlanInput {
    * deflate-after countdown runs to it, since the resin's own times no longer apply.
    */
   makerHoldMin?: number | null;
+}
+
+export interface CurePlanInput extends CureDetails {
+  mixedAt: Date;
+  /** Temperature of the resin at the bucket, °C; with `airTempC` it sets the working window. */
+  mixTempC: number;
+  /** Air at the mixing place, °C; the warmer of this and `mixTempC` sets the working window. */
+  airTempC?: number | null;
+  /** Temperature inside the host pipe, °C; sets hold and full cure. */
+  pipeTempC: number;
   /** Units used in the words of `reasons` (default 'metric'); the numbers returned stay SI. */
   unitSystem?: UnitSystem;
 }
@@ -121,22 +128,13 @@ export interface PackerPressureRating {
  * A running or finished install, as far as it is known. Every field but `resin` may be
  * missing (or null, as a database row gives it); a flag is raised only from what is known.
  */
-export interface InstallRecord {
+export interface InstallRecord extends CureDetails {
   resin: ResinClockSpec;
   mixedAt?: Date | null;
   mixTempC?: number | null;
   /** Air at the mixing place; the warmer of this and `mixTempC` sets the working window. */
   airTempC?: number | null;
   pipeTempC?: number | null;
-  inflatedAt?: Date | null;
-  deflatedAt?: Date | null;
-  dryRunSeconds?: number | null;
-  prepMinutes?: number | null;
-  safetyMargin?: number | null;
-  /** Extra share of the hold kept inflated (company setting); deflating inside it is a warning. */
-  holdReserve?: number | null;
-  /** Hold from the maker's sheet, used when the pipe is outside the rated range. */
-  makerHoldMin?: number | null;
   /** Pressures logged while inflated, kPa. */
   pressuresKpa?: number[] | null;
   packer?: PackerPressureRating | null;

@@ -9,6 +9,7 @@ import type { SessionUser } from '@/lib/auth/session';
 import type { accessPointInputSchema, accessPointPatchSchema } from '@/lib/validation/access-points';
 import { assertOfficeWriter } from './scope';
 import { findVisibleSite } from './sites';
+import { deleteAudited, lockOwnRow } from './records';
 
 const ENTITY = 'access_point';
 
@@ -51,12 +52,7 @@ export async function createAccessPoint(
 export async function updateAccessPoint(user: SessionUser, id: string, patch: z.output<typeof accessPointPatchSchema>) {
   assertOfficeWriter(user);
   return sequelize.transaction(async (transaction) => {
-    const point = await AccessPoint.findOne({
-      where: { id, companyId: user.companyId },
-      transaction,
-      lock: transaction.LOCK.UPDATE,
-    });
-    if (!point) throw notFound('Access point');
+    const point = await lockOwnRow(AccessPoint, user, id, 'Access point', transaction);
     if (patch.label !== undefined) await assertLabelFree(point.siteId, patch.label, id, transaction);
     const changes = changedFields(point.get({ plain: true }), patch);
     if (Object.keys(changes).length) {
@@ -74,12 +70,7 @@ export async function updateAccessPoint(user: SessionUser, id: string, patch: z.
 export async function deleteAccessPoint(user: SessionUser, id: string, reason?: string | null) {
   assertOfficeWriter(user);
   return sequelize.transaction(async (transaction) => {
-    const point = await AccessPoint.findOne({
-      where: { id, companyId: user.companyId },
-      transaction,
-      lock: transaction.LOCK.UPDATE,
-    });
-    if (!point) throw notFound('Access point');
+    const point = await lockOwnRow(AccessPoint, user, id, 'Access point', transaction);
     const [segments, repairs] = await Promise.all([
       Segment.findAll({
         where: { companyId: user.companyId, [Op.or]: [{ fromAccessPointId: id }, { toAccessPointId: id }] },
@@ -98,19 +89,12 @@ export async function deleteAccessPoint(user: SessionUser, id: string, reason?: 
         409,
         `${repairs} repair${repairs === 1 ? ' is' : 's are'} measured from ${point.label}: it cannot be removed.`,
       );
-    await point.destroy({ transaction });
-    await recordAudit(
+    return deleteAudited(
       user,
-      {
-        action: 'delete',
-        entityType: ENTITY,
-        entityId: id,
-        changes: { siteId: point.siteId, label: point.label },
-        reason,
-      },
+      point,
+      { entityType: ENTITY, summary: { siteId: point.siteId, label: point.label }, reason },
       transaction,
     );
-    return { id, archived: false, deleted: true };
   });
 }
 

@@ -2,22 +2,7 @@ import 'server-only';
 import type { Model, ModelStatic, WhereOptions } from 'sequelize';
 import type { SessionUser } from '@/lib/auth/session';
 import { idOf } from '@/lib/server/http';
-import {
-  AccessPoint,
-  ChecklistTemplate,
-  Crew,
-  Customer,
-  Install,
-  Invoice,
-  Job,
-  Packer,
-  Repair,
-  ResinKit,
-  ResinSystem,
-  Segment,
-  Site,
-  User,
-} from '@/models';
+import * as models from '@/models';
 import { notFound } from '@/lib/server/errors';
 
 // Authorization comes before validation: a handler that reads a body for one row first makes sure the row is
@@ -25,20 +10,20 @@ import { notFound } from '@/lib/server/errors';
 // tells them their body was wrong for a row they cannot see). The data function checks again when it writes.
 
 const MODELS = {
-  accessPoint: AccessPoint,
-  checklistTemplate: ChecklistTemplate,
-  crew: Crew,
-  customer: Customer,
-  install: Install,
-  invoice: Invoice,
-  job: Job,
-  packer: Packer,
-  repair: Repair,
-  resinKit: ResinKit,
-  resinSystem: ResinSystem,
-  segment: Segment,
-  site: Site,
-  user: User,
+  accessPoint: models.AccessPoint,
+  checklistTemplate: models.ChecklistTemplate,
+  crew: models.Crew,
+  customer: models.Customer,
+  install: models.Install,
+  invoice: models.Invoice,
+  job: models.Job,
+  packer: models.Packer,
+  repair: models.Repair,
+  resinKit: models.ResinKit,
+  resinSystem: models.ResinSystem,
+  segment: models.Segment,
+  site: models.Site,
+  user: models.User,
 } as const;
 
 export type OwnRowKind = keyof typeof MODELS;

@@ -26,6 +26,7 @@ import type { CreateInstallInput } from '@/lib/validation/install-events';
 import { getCompany } from './company';
 import { emptyDerived, settingsOf } from './install-derive';
 import { redoChainOf } from './redo';
+import { packerSizesOf } from './packers';
 import { dayInZone } from '@/lib/time/dates';
 
 type Plain<M extends Model> = InferAttributes<M>;
@@ -240,17 +241,7 @@ async function findExisting(user: SessionUser, input: CreateInstallInput): Promi
 }
 
 function packerFits(packers: Packer[], insideDiameterMm: number, patchLengthMm: number, system: UnitSystem) {
-  const fleet = packers.map((p) => ({
-    id: p.id,
-    name: p.name,
-    serial: p.serial,
-    minDiameterMm: p.minDiameterMm,
-    maxDiameterMm: p.maxDiameterMm,
-    bladderLengthMm: p.bladderLengthMm,
-    endMarginMm: p.endMarginMm,
-    minPressureKpa: p.minPressureKpa,
-    maxPressureKpa: p.maxPressureKpa,
-  }));
+  const fleet = packers.map((p) => ({ id: p.id, name: p.name, serial: p.serial, ...packerSizesOf(p) }));
   try {
     const fits = fittingPackers(fleet, { insideDiameterMm, patchLengthMm }, system);
     return fleet.map((packer, i) => ({

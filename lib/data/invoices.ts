@@ -17,7 +17,7 @@ import type { z } from 'zod';
 import { allOf, pageOf, searchWhere, windowOf } from './list';
 import { assertOfficeWriter } from './scope';
 import { closeCheckoutOf } from './payments';
-import { lockOwnRow } from './records';
+import { findOwnRowLocked, lockOwnRow } from './records';
 
 const ENTITY = 'invoice';
 type Line = z.output<typeof invoiceLineSchema>;
@@ -140,11 +140,7 @@ async function assertRepairsOfJob(job: Job, lines: Line[], transaction: Transact
 export async function createInvoice(user: SessionUser, input: InvoiceInput) {
   assertOfficeWriter(user);
   return sequelize.transaction(async (transaction) => {
-    const job = await Job.findOne({
-      where: { id: input.jobId, companyId: user.companyId },
-      transaction,
-      lock: transaction.LOCK.UPDATE,
-    });
+    const job = await findOwnRowLocked(Job, user, input.jobId, transaction);
     if (!job) throw new AppError(422, 'That job was not found.', { jobId: ['Pick a job of your company'] });
     if (job.status === 'cancelled') throw new AppError(409, 'A cancelled job is not invoiced.');
     if (await Invoice.count({ where: { jobId: job.id, status: { [Op.ne]: 'void' } }, transaction })) {

@@ -11,7 +11,7 @@ import type { SessionUser } from '@/lib/auth/session';
 import type { JobListQuery, JobPatch, jobInputSchema } from '@/lib/validation/jobs';
 import { allOf, archivedWhere, pageOf, searchWhere, windowOf } from './list';
 import { assertOfficeWriter, crewJobsWhere } from './scope';
-import { archiveOrDelete } from './records';
+import { archiveOrDelete, lockOwnRow } from './records';
 
 type Plain<M extends Model> = InferAttributes<M>;
 const ENTITY = 'job';
@@ -179,12 +179,7 @@ export async function createJob(user: SessionUser, input: z.output<typeof jobInp
 export async function updateJob(user: SessionUser, id: string, patch: JobPatch) {
   assertOfficeWriter(user);
   return sequelize.transaction(async (transaction) => {
-    const job = await Job.findOne({
-      where: { id, companyId: user.companyId },
-      transaction,
-      lock: transaction.LOCK.UPDATE,
-    });
-    if (!job) throw notFound('Job');
+    const job = await lockOwnRow(Job, user, id, 'Job', transaction);
     if (job.archivedAt) throw new AppError(409, 'This job is archived; it can no longer be changed.');
     const { status: requested, ...fields } = patch;
     const changes = changedFields(job.get({ plain: true }), fields);
@@ -234,12 +229,7 @@ export async function updateJob(user: SessionUser, id: string, patch: JobPatch) 
 export async function archiveJob(user: SessionUser, id: string, reason?: string | null) {
   assertOfficeWriter(user);
   return sequelize.transaction(async (transaction) => {
-    const job = await Job.findOne({
-      where: { id, companyId: user.companyId },
-      transaction,
-      lock: transaction.LOCK.UPDATE,
-    });
-    if (!job) throw notFound('Job');
+    const job = await lockOwnRow(Job, user, id, 'Job', transaction);
     const [repairs, installs] = await Promise.all([
       Repair.count({ where: { jobId: id, companyId: user.companyId }, transaction }),
       Install.count({ where: { jobId: id, companyId: user.companyId }, transaction }),

@@ -17,6 +17,18 @@ const packers = settingsRecord(Packer, 'packer', 'Packer');
 const installsOf = (user: SessionUser, packerId: string, transaction?: Transaction) =>
   Install.count({ where: { companyId: user.companyId, packerId }, transaction });
 
+/** A packer's sizes and pressure rating, as lib/sizing and lib/planning read them (SI). */
+export function packerSizesOf(packer: Packer) {
+  return {
+    minDiameterMm: packer.minDiameterMm,
+    maxDiameterMm: packer.maxDiameterMm,
+    bladderLengthMm: packer.bladderLengthMm,
+    endMarginMm: packer.endMarginMm,
+    minPressureKpa: packer.minPressureKpa,
+    maxPressureKpa: packer.maxPressureKpa,
+  };
+}
+
 export type PackerListResponse = Awaited<ReturnType<typeof listPackers>>;
 
 /** A page of the company's packers; every signed-in user of the company may read them (the crew picks one on site). */

@@ -12,7 +12,21 @@ import { assertAdmin } from './scope';
 
 type Row = Model & { id: string; get(options: { plain: true }): Record<string, unknown>; get(key: string): unknown };
 
-/** One of the company's rows, locked for a change in this transaction; 404 when missing or another company's. */
+/** One of the company's rows, locked for a change in this transaction; null when missing or another company's. */
+export async function findOwnRowLocked<M extends Row>(
+  model: ModelStatic<M>,
+  user: SessionUser,
+  id: string,
+  transaction: Transaction,
+): Promise<M | null> {
+  return model.findOne({
+    where: { id, companyId: user.companyId } as WhereOptions,
+    transaction,
+    lock: transaction.LOCK.UPDATE,
+  });
+}
+
+/** As findOwnRowLocked, with a 404 (named `what`) for a missing row or another company's. */
 export async function lockOwnRow<M extends Row>(
   model: ModelStatic<M>,
   user: SessionUser,
@@ -20,11 +34,7 @@ export async function lockOwnRow<M extends Row>(
   what: string,
   transaction: Transaction,
 ): Promise<M> {
-  const row = await model.findOne({
-    where: { id, companyId: user.companyId } as WhereOptions,
-    transaction,
-    lock: transaction.LOCK.UPDATE,
-  });
+  const row = await findOwnRowLocked(model, user, id, transaction);
   if (!row) throw notFound(what);
   return row;
 }
@@ -59,6 +69,18 @@ export async function createAudited<M extends Row>(
   });
 }
 
+/** Deletes the row and audits it, `summary` saying what it was, in the caller's transaction. */
+export async function deleteAudited(
+  user: SessionUser,
+  row: Row,
+  { entityType, summary, reason }: { entityType: string; summary: Record<string, unknown>; reason?: string | null },
+  transaction: Transaction,
+) {
+  await row.destroy({ transaction });
+  await recordAudit(user, { action: 'delete', entityType, entityId: row.id, changes: summary, reason }, transaction);
+  return { id: row.id, archived: false, deleted: true };
+}
+
 /**
  * The DELETE of any record: archived (kept, hidden from lists) when something uses it, so the history that
  * names it stays readable; deleted otherwise. Audited either way, in the caller's transaction.
@@ -82,11 +104,7 @@ export async function archiveOrDelete(
   },
   transaction: Transaction,
 ) {
-  if (!inUse) {
-    await row.destroy({ transaction });
-    await recordAudit(user, { action: 'delete', entityType, entityId: row.id, changes: summary, reason }, transaction);
-    return { id: row.id, archived: false, deleted: true };
-  }
+  if (!inUse) return deleteAudited(user, row, { entityType, summary, reason }, transaction);
   const { values, isArchived } = archive ?? {
     values: { archivedAt: new Date() },
     isArchived: row.get('archivedAt') != null,

@@ -13,6 +13,8 @@ import type { RepairInput, RepairListQuery, RepairPatch, RepairPlanQuery } from 
 import { unprocessable } from './jobs';
 import { allOf, pageOf, searchWhere, windowOf } from './list';
 import { assertOfficeWriter, crewJobsWhere } from './scope';
+import { deleteAudited, findOwnRowLocked, lockOwnRow } from './records';
+import { packerSizesOf } from './packers';
 
 type Plain<M extends Model> = InferAttributes<M>;
 const ENTITY = 'repair';
@@ -120,11 +122,7 @@ export async function createRepair(user: SessionUser, input: RepairInput) {
   assertOfficeWriter(user);
   return sequelize.transaction(async (transaction) => {
     // The job row's lock makes concurrent adds queue, so positions stay 1, 2, 3…
-    const job = await Job.findOne({
-      where: { id: input.jobId, companyId: user.companyId },
-      transaction,
-      lock: transaction.LOCK.UPDATE,
-    });
+    const job = await findOwnRowLocked(Job, user, input.jobId, transaction);
     if (!job) throw unprocessable('jobId', 'Pick one of your jobs.');
     assertJobOpen(job);
     const segment = await segmentOnSite(user, input.segmentId, job.siteId, transaction);
@@ -151,12 +149,7 @@ export async function createRepair(user: SessionUser, input: RepairInput) {
 export async function updateRepair(user: SessionUser, id: string, patch: RepairPatch) {
   assertOfficeWriter(user);
   return sequelize.transaction(async (transaction) => {
-    const repair = await Repair.findOne({
-      where: { id, companyId: user.companyId },
-      transaction,
-      lock: transaction.LOCK.UPDATE,
-    });
-    if (!repair) throw notFound('Repair');
+    const repair = await lockOwnRow(Repair, user, id, 'Repair', transaction);
     const job = await Job.findOne({ where: { id: repair.jobId, companyId: user.companyId }, transaction });
     if (!job) throw notFound('Repair');
     const changes = changedFields(repair.get({ plain: true }), patch);
@@ -225,12 +218,7 @@ export async function updateRepair(user: SessionUser, id: string, patch: RepairP
 export async function removeRepair(user: SessionUser, id: string, reason?: string | null) {
   assertOfficeWriter(user);
   return sequelize.transaction(async (transaction) => {
-    const repair = await Repair.findOne({
-      where: { id, companyId: user.companyId },
-      transaction,
-      lock: transaction.LOCK.UPDATE,
-    });
-    if (!repair) throw notFound('Repair');
+    const repair = await lockOwnRow(Repair, user, id, 'Repair', transaction);
     if (await Install.count({ where: { repairId: id }, transaction })) {
       if (repair.status !== 'cancelled') {
         await repair.update({ status: 'cancelled' }, { transaction });
@@ -249,24 +237,18 @@ export async function removeRepair(user: SessionUser, id: string, reason?: strin
       return { id, archived: true, deleted: false, status: 'cancelled' as const };
     }
     await Job.findOne({ where: { id: repair.jobId }, transaction, lock: transaction.LOCK.UPDATE });
-    await repair.destroy({ transaction });
+    const deleted = await deleteAudited(
+      user,
+      repair,
+      { entityType: ENTITY, summary: { jobId: repair.jobId, position: repair.position }, reason },
+      transaction,
+    );
     await Repair.decrement('position', {
       by: 1,
       where: { jobId: repair.jobId, position: { [Op.gt]: repair.position } },
       transaction,
     });
-    await recordAudit(
-      user,
-      {
-        action: 'delete',
-        entityType: ENTITY,
-        entityId: id,
-        changes: { jobId: repair.jobId, position: repair.position },
-        reason,
-      },
-      transaction,
-    );
-    return { id, archived: false, deleted: true };
+    return deleted;
   });
 }
 
@@ -324,16 +306,7 @@ export async function getRepairPlan(user: SessionUser, id: string, query: Repair
           excessPct: resin.resinExcessPct,
         }
       : null,
-    packers: packers.map((p) => ({
-      id: p.id,
-      name: p.name,
-      minDiameterMm: p.minDiameterMm,
-      maxDiameterMm: p.maxDiameterMm,
-      bladderLengthMm: p.bladderLengthMm,
-      endMarginMm: p.endMarginMm,
-      minPressureKpa: p.minPressureKpa,
-      maxPressureKpa: p.maxPressureKpa,
-    })),
+    packers: packers.map((p) => ({ id: p.id, name: p.name, ...packerSizesOf(p) })),
   });
   return {
     repairId: repair.id,

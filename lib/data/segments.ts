@@ -3,7 +3,7 @@ import { Op, type InferAttributes, type Transaction } from 'sequelize';
 import type { z } from 'zod';
 import { AccessPoint, Customer, Job, Repair, Segment, Site } from '@/models';
 import { sequelize } from '@/lib/data/db';
-import { changedFields, recordAudit } from '@/lib/data/audit';
+import { recordAudit } from '@/lib/data/audit';
 import { AppError, notFound } from '@/lib/server/errors';
 import type { SessionUser } from '@/lib/auth/session';
 import {
@@ -14,7 +14,7 @@ import {
 } from '@/lib/validation/segments';
 import { allOf, archivedWhere, pageOf, searchWhere, windowOf } from './list';
 import { assertOfficeWriter, crewJobsWhere } from './scope';
-import { archiveOrDelete } from './records';
+import { archiveOrDelete, lockOwnRow, updateAudited } from './records';
 
 const ENTITY = 'segment';
 
@@ -102,36 +102,21 @@ export async function createSegment(user: SessionUser, input: z.output<typeof se
 export async function updateSegment(user: SessionUser, id: string, patch: z.output<typeof segmentPatchSchema>) {
   assertOfficeWriter(user);
   return sequelize.transaction(async (transaction) => {
-    const segment = await Segment.findOne({
-      where: { id, companyId: user.companyId },
-      transaction,
-      lock: transaction.LOCK.UPDATE,
-    });
-    if (!segment) throw notFound('Segment');
+    const segment = await lockOwnRow(Segment, user, id, 'Segment', transaction);
     const merged = { ...segment.get({ plain: true }), ...definedOf(patch) };
     // The patch alone may be sound while the segment it makes is not (a new nominal size against the old diameter).
     const issues = segmentShapeIssues(merged);
     if (Object.keys(issues).length) throw new AppError(422, Object.values(issues)[0][0], issues);
     await assertEndsOnSite(user, merged, transaction);
-    const changes = changedFields(segment.get({ plain: true }), patch);
-    if (Object.keys(changes).length) {
-      await segment.update(patch, { transaction });
-      await recordAudit(user, { action: 'update', entityType: ENTITY, entityId: id, changes }, transaction);
-    }
-    return segment.get({ plain: true });
-  });
+    return updateAudited(user, segment, ENTITY, patch, transaction);
+  }) as Promise<InferAttributes<Segment>>;
 }
 
 /** Archives a segment that repairs are planned on (the repair record needs it) and deletes one without. */
 export async function archiveSegment(user: SessionUser, id: string, reason?: string | null) {
   assertOfficeWriter(user);
   return sequelize.transaction(async (transaction) => {
-    const segment = await Segment.findOne({
-      where: { id, companyId: user.companyId },
-      transaction,
-      lock: transaction.LOCK.UPDATE,
-    });
-    if (!segment) throw notFound('Segment');
+    const segment = await lockOwnRow(Segment, user, id, 'Segment', transaction);
     const repairs = await Repair.count({ where: { segmentId: id, companyId: user.companyId }, transaction });
     return archiveOrDelete(
       user,

@@ -3,13 +3,13 @@ import type { InferAttributes } from 'sequelize';
 import type { z } from 'zod';
 import { AccessPoint, Customer, Job, Segment, Site } from '@/models';
 import { sequelize } from '@/lib/data/db';
-import { changedFields, recordAudit } from '@/lib/data/audit';
+import { recordAudit } from '@/lib/data/audit';
 import { AppError, notFound } from '@/lib/server/errors';
 import type { SessionUser } from '@/lib/auth/session';
 import type { SiteListQuery, siteInputSchema, sitePatchSchema } from '@/lib/validation/sites';
 import { allOf, archivedWhere, pageOf, searchWhere, windowOf } from './list';
 import { assertOfficeWriter, crewJobsWhere } from './scope';
-import { archiveOrDelete } from './records';
+import { archiveOrDelete, lockOwnRow, updateAudited } from './records';
 
 const ENTITY = 'site';
 
@@ -109,19 +109,9 @@ export async function createSite(user: SessionUser, input: z.output<typeof siteI
 export async function updateSite(user: SessionUser, id: string, patch: z.output<typeof sitePatchSchema>) {
   assertOfficeWriter(user);
   return sequelize.transaction(async (transaction) => {
-    const site = await Site.findOne({
-      where: { id, companyId: user.companyId },
-      transaction,
-      lock: transaction.LOCK.UPDATE,
-    });
-    if (!site) throw notFound('Site');
-    const changes = changedFields(site.get({ plain: true }), patch);
-    if (Object.keys(changes).length) {
-      await site.update(patch, { transaction });
-      await recordAudit(user, { action: 'update', entityType: ENTITY, entityId: id, changes }, transaction);
-    }
-    return site.get({ plain: true });
-  });
+    const site = await lockOwnRow(Site, user, id, 'Site', transaction);
+    return updateAudited(user, site, ENTITY, patch, transaction);
+  }) as Promise<InferAttributes<Site>>;
 }
 
 /**
@@ -131,12 +121,7 @@ export async function updateSite(user: SessionUser, id: string, patch: z.output<
 export async function archiveSite(user: SessionUser, id: string, reason?: string | null) {
   assertOfficeWriter(user);
   return sequelize.transaction(async (transaction) => {
-    const site = await Site.findOne({
-      where: { id, companyId: user.companyId },
-      transaction,
-      lock: transaction.LOCK.UPDATE,
-    });
-    if (!site) throw notFound('Site');
+    const site = await lockOwnRow(Site, user, id, 'Site', transaction);
     const [segments, jobs] = await Promise.all([
       Segment.count({ where: { siteId: id, companyId: user.companyId }, transaction }),
       Job.count({ where: { siteId: id, companyId: user.companyId }, transaction }),

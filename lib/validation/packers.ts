@@ -39,16 +39,10 @@ const packerFieldsIn = (system: UnitSystem) => {
 };
 
 // No defaults here: a PATCH must leave out what it does not change.
-const packerFields = packerFieldsIn('metric');
+const packerObject = z.object(packerFieldsIn('metric'));
 
-export type PackerValues = {
-  minDiameterMm: number;
-  maxDiameterMm: number;
-  bladderLengthMm: number;
-  endMarginMm: number;
-  minPressureKpa: number;
-  maxPressureKpa: number;
-};
+/** What the cross-field rules read: the packer's sizes and pressures, as the schema gives them. */
+export type PackerValues = Omit<z.output<typeof packerObject>, 'name' | 'serial'>;
 
 export function packerProblems(v: PackerValues): Problems {
   const problems: Problems = {};
@@ -66,7 +60,7 @@ const packerSchemaIn = (system: UnitSystem) =>
 export const packerInputSchema = packerSchemaIn('metric');
 export type PackerInput = z.output<typeof packerInputSchema>;
 
-export const packerPatchSchema = z.object(packerFields).partial().strict();
+export const packerPatchSchema = packerObject.partial().strict();
 
 export const PACKER_SORT_KEYS = ['name', 'minDiameterMm', 'maxDiameterMm', 'bladderLengthMm', 'createdAt'] as const;
 export const packerListQuerySchema = listQuerySchema(PACKER_SORT_KEYS, { sort: 'minDiameterMm' });

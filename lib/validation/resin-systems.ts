@@ -57,19 +57,17 @@ const fieldsIn = (system: UnitSystem) => ({
   // Minutes from mixing until the patch is on the packer (wet-out and loading); the tablet's default for the GO / NO-GO.
   prepMinutes: quantity({ min: 0, max: 240, scale: 2, bounds: 'From 0 to 240 minutes' }),
 });
-const resinSystemFields = fieldsIn('metric');
+const resinSystemObject = z.object(fieldsIn('metric'));
+type ResinSystemFields = z.output<typeof resinSystemObject>;
+/** The data sheet's times and temperature range. */
+type DataSheetTimes = Pick<
+  ResinSystemFields,
+  'refTempC' | 'potLifeMin' | 'holdMin' | 'fullCureMin' | 'minTempC' | 'maxTempC'
+>;
 
-export type ResinSystemValues = {
-  refTempC: number;
-  potLifeMin: number;
-  holdMin: number;
-  fullCureMin: number;
-  minTempC: number;
-  maxTempC: number;
-  sensitivityKind: (typeof SENSITIVITY_KINDS)[number];
-  doublingC?: number | null;
-  activationEnergyKj?: number | null;
-};
+/** What the cross-field rules read: the data sheet's numbers, as the schema gives them. */
+export type ResinSystemValues = DataSheetTimes &
+  Pick<ResinSystemFields, 'sensitivityKind' | 'doublingC' | 'activationEnergyKj'>;
 
 /** What a careful hand checks on a data sheet before trusting the clock with it. */
 export function resinSystemProblems(v: ResinSystemValues): Problems {
@@ -104,7 +102,7 @@ export const resinSystemInputSchema = inputSchemaIn('metric');
 export type ResinSystemInput = z.output<typeof resinSystemInputSchema>;
 
 /** Partial; the cross-field rules run in lib/data on the record as it will be after the change. */
-export const resinSystemPatchSchema = z.object(resinSystemFields).partial().strict();
+export const resinSystemPatchSchema = resinSystemObject.partial().strict();
 
 export const RESIN_SYSTEM_SORT_KEYS = ['name', 'chemistry', 'refTempC', 'potLifeMin', 'createdAt'] as const;
 export const resinSystemListQuerySchema = listQuerySchema(RESIN_SYSTEM_SORT_KEYS, { sort: 'name' }).and(
@@ -115,15 +113,9 @@ export type ResinSystemListQuery = z.infer<typeof resinSystemListQuerySchema>;
 // ——— The desk form: the same fields in the company's units (°F and °F steps for imperial) ———
 
 /** What the form holds: numbers in the company's units (NaN while a box is empty). */
-export type ResinSystemFormValues = {
+export type ResinSystemFormValues = DataSheetTimes & {
   name: string;
   chemistry: string;
-  refTempC: number;
-  potLifeMin: number;
-  holdMin: number;
-  fullCureMin: number;
-  minTempC: number;
-  maxTempC: number;
   sensitivityKind: string;
   doublingC: number | null;
   activationEnergyKj: number | null;
