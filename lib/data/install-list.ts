@@ -2,20 +2,8 @@ import 'server-only';
 // The office's and crews' list of installs (GET /api/installs, the review queue): one page of installs with
 // their flags, sorted in SQL over the derived columns when sorted by severity.
 import { Op, QueryTypes, type InferAttributes, type Model, type WhereOptions } from 'sequelize';
-import {
-  AccessPoint,
-  Crew,
-  Customer,
-  Install,
-  Job,
-  Packer,
-  Repair,
-  ResinKit,
-  ResinSystem,
-  Segment,
-  Site,
-  sequelize,
-} from '@/models';
+import { AccessPoint, Crew, Customer, Install, Job, Repair, Segment, Site, sequelize } from '@/models';
+import { CLOCK_MATERIALS_INCLUDE, type ClockMaterials } from './install-materials';
 import type { SessionUser } from '@/lib/auth/session';
 import { resinClockSpec } from '@/lib/cure';
 import { isDeskRole } from '@/lib/auth/roles';
@@ -121,26 +109,22 @@ const LIST_INCLUDE = [
       { model: AccessPoint, as: 'fromAccessPoint', attributes: ['label'] },
     ],
   },
-  { model: ResinSystem, as: 'resinSystem' },
-  { model: ResinKit, as: 'resinKit', attributes: ['id', 'lot', 'expiresOn'] },
-  { model: Packer, as: 'packer', attributes: ['id', 'minPressureKpa', 'maxPressureKpa'] },
+  ...CLOCK_MATERIALS_INCLUDE,
 ];
 
-type ListRow = Plain<Install> & {
-  job: Pick<Plain<Job>, 'id' | 'number' | 'title' | 'status' | 'crewId'> & {
-    customer: Pick<Plain<Customer>, 'id' | 'name'>;
-    site: Pick<Plain<Site>, 'id' | 'name' | 'addressLine' | 'city'>;
+type ListRow = Plain<Install> &
+  ClockMaterials & {
+    job: Pick<Plain<Job>, 'id' | 'number' | 'title' | 'status' | 'crewId'> & {
+      customer: Pick<Plain<Customer>, 'id' | 'name'>;
+      site: Pick<Plain<Site>, 'id' | 'name' | 'addressLine' | 'city'>;
+      crew: Pick<Plain<Crew>, 'id' | 'name'> | null;
+    };
     crew: Pick<Plain<Crew>, 'id' | 'name'> | null;
+    repair: Pick<Plain<Repair>, 'id' | 'position' | 'distanceMm' | 'defectType' | 'clockPosition'> & {
+      segment: { id: string; label: string; fromAccessPoint: { label: string } | null } | null;
+      fromAccessPoint: { label: string } | null;
+    };
   };
-  crew: Pick<Plain<Crew>, 'id' | 'name'> | null;
-  repair: Pick<Plain<Repair>, 'id' | 'position' | 'distanceMm' | 'defectType' | 'clockPosition'> & {
-    segment: { id: string; label: string; fromAccessPoint: { label: string } | null } | null;
-    fromAccessPoint: { label: string } | null;
-  };
-  resinSystem: Plain<ResinSystem> | null;
-  resinKit: Pick<Plain<ResinKit>, 'id' | 'lot' | 'expiresOn'> | null;
-  packer: Pick<Plain<Packer>, 'id' | 'minPressureKpa' | 'maxPressureKpa'> | null;
-};
 
 /** List rows with their flags, worked out from each install's event log by the field screen's own rule. */
 async function itemsOf(user: SessionUser, rows: Install[], company: Company, now: Date) {

@@ -1,6 +1,7 @@
 import 'server-only';
 import { Op, type WhereOptions } from 'sequelize';
-import { Crew, Install, InstallEvent, Job, Packer, Repair, ResinKit, ResinSystem, Segment } from '@/models';
+import { Crew, Install, InstallEvent, Job, Repair, Segment } from '@/models';
+import { CLOCK_MATERIALS_INCLUDE, type ClockMaterials } from './install-materials';
 import type { SessionUser } from '@/lib/auth/session';
 import { isDeskRole } from '@/lib/auth/roles';
 import { resinClockSpec } from '@/lib/cure';
@@ -81,9 +82,7 @@ export async function getLiveBoard(user: SessionUser, now = new Date()): Promise
         include: [{ model: Segment, as: 'segment', attributes: ['label'] }],
       },
       { model: InstallEvent, as: 'events' },
-      { model: ResinSystem, as: 'resinSystem' },
-      { model: ResinKit, as: 'resinKit', attributes: ['expiresOn'] },
-      { model: Packer, as: 'packer', attributes: ['minPressureKpa', 'maxPressureKpa'] },
+      ...CLOCK_MATERIALS_INCLUDE,
     ],
     order: [['createdAt', 'ASC']],
   });
@@ -158,10 +157,7 @@ type BoardRow = Install & {
   crew: Crew | null;
   repair: Repair & { segment: Segment | null };
   events: InstallEvent[];
-  resinSystem: ResinSystem | null;
-  resinKit: ResinKit | null;
-  packer: Packer | null;
-};
+} & ClockMaterials;
 
 const iso = (date: Date | string | null | undefined) => (date ? new Date(date).toISOString() : null);
 

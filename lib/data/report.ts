@@ -8,13 +8,11 @@ import {
   Install,
   InstallEvent,
   Job,
-  Packer,
   Repair,
-  ResinKit,
-  ResinSystem,
   Segment,
   Site,
 } from '@/models';
+import { CLOCK_MATERIALS_INCLUDE, type ClockMaterials } from './install-materials';
 import type { SessionUser } from '@/lib/auth/session';
 import { resinClockSpec } from '@/lib/cure';
 import { labelIn } from '@/i18n/labels';
@@ -102,12 +100,7 @@ export async function buildReportData(companyId: string, jobId: string, { images
 
   const installs = await Install.findAll({
     where: { companyId, jobId, status: 'approved' },
-    include: [
-      { model: ResinSystem, as: 'resinSystem' },
-      { model: ResinKit, as: 'resinKit', attributes: ['lot', 'expiresOn'] },
-      { model: Packer, as: 'packer', attributes: ['minPressureKpa', 'maxPressureKpa'] },
-      { model: InstallEvent, as: 'events' },
-    ],
+    include: [...CLOCK_MATERIALS_INCLUDE, { model: InstallEvent, as: 'events' }],
     order: [['finishedAt', 'DESC']],
   });
   // Every attempt of the job, for the redo chain: a patch that was redone names the attempts before it.
@@ -220,12 +213,7 @@ function installSummary(
   zone: string,
 ) {
   const units = { locale };
-  const row = install as Install & {
-    resinSystem: ResinSystem | null;
-    resinKit: ResinKit | null;
-    packer: Packer | null;
-    events: InstallEvent[];
-  };
+  const row = install as Install & ClockMaterials & { events: InstallEvent[] };
   const state = deriveInstallState(row.events.map((e) => e.get({ plain: true })));
   const { plan } = installClock({
     state,
