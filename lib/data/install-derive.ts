@@ -14,6 +14,7 @@ import {
 } from '@/lib/install/derived';
 import { deriveInstallState, type InstallConditions, type InstallState } from '@/lib/install/state';
 import type { UnitSystem } from '@/lib/units';
+import { CLOSED_INSTALL_STATUSES } from '@/lib/install/record-rules';
 
 // The install's derived state on its row (migrations 20261203001000 and 20261203011000). The tap folds its one
 // event in (lib/data/install-events.ts); a correction, a tap out of log order, and a row never derived (made
@@ -104,6 +105,34 @@ export async function ensureDerived(user: Pick<SessionUser, 'companyId'>, settin
     });
   }
   return rows.length;
+}
+
+/** What an edit changed that installs' stored state was derived from: one material, or the company's settings. */
+export type DerivedFrom =
+  { resinSystemId: string } | { resinKitId: string } | { packerId: string } | { companySettings: true };
+
+const STALE_COLUMN = { resinSystemId: 'resin_system_id', resinKitId: 'resin_kit_id', packerId: 'packer_id' } as const;
+
+/**
+ * An edit of what the clock and the flags read (a resin system's data sheet, a kit's expiry, a packer's rating, the
+ * company's margins) leaves the stored state of the open installs that read it stale, while their screen already
+ * computes with the new values. In the edit's transaction they are marked underived; their next read
+ * (`ensureDerived`) or tap derives them again from the log. Approved and abandoned installs keep the state they were
+ * closed with. Returns how many were marked.
+ */
+export async function markDerivedStale(companyId: string, from: DerivedFrom, t: Transaction): Promise<number> {
+  const [key, id] = Object.entries(from)[0] as [keyof typeof STALE_COLUMN | 'companySettings', string | true];
+  const which = key === 'companySettings' ? '' : `AND ${STALE_COLUMN[key]} = :id`;
+  const [, affected] = await sequelize.query(
+    `UPDATE installs SET derived_at = NULL, updated_at = now()
+      WHERE company_id = :companyId AND derived_at IS NOT NULL AND status NOT IN (:closed) ${which}`,
+    {
+      replacements: { companyId, id: typeof id === 'string' ? id : null, closed: [...CLOSED_INSTALL_STATUSES] },
+      transaction: t,
+      type: QueryTypes.UPDATE,
+    },
+  );
+  return affected;
 }
 
 /** The columns a re-derivation writes. */

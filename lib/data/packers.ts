@@ -11,6 +11,7 @@ import {
 } from '@/lib/validation/packers';
 import { throwProblems } from '@/lib/validation/rules';
 import { allOf, archivedWhere, searchWhere } from './list';
+import { markDerivedStale } from './install-derive';
 import { plainPage, settingsRecord } from './records';
 
 const packers = settingsRecord(Packer, 'packer', 'Packer');
@@ -54,10 +55,19 @@ export async function createPacker(user: SessionUser, input: PackerInput) {
 
 /** A partial edit; ranges are checked on the packer as it will be (400 and nothing written otherwise). */
 export async function updatePacker(user: SessionUser, id: string, patch: z.output<typeof packerPatchSchema>) {
-  return packers.update(user, id, (row) => {
-    throwProblems(packerProblems({ ...row.get({ plain: true }), ...patch }));
-    return patch;
-  });
+  return packers.update(
+    user,
+    id,
+    (row) => {
+      throwProblems(packerProblems({ ...row.get({ plain: true }), ...patch }));
+      return patch;
+    },
+    async (_values, transaction) => {
+      // Only the rating is read by the flags (pressure readings against it).
+      if (patch.minPressureKpa !== undefined || patch.maxPressureKpa !== undefined)
+        await markDerivedStale(user.companyId, { packerId: id }, transaction);
+    },
+  );
 }
 
 /** Archives a packer an install used, deletes an unused one. */

@@ -155,12 +155,23 @@ export function settingsRecord<M extends Row & { name: string }>(model: ModelSta
       assertAdmin(user);
       return createAudited(user, model, entity, values) as Promise<Attributes<M>>;
     },
-    /** `change` turns the locked row into what is written (it may throw to refuse the edit). */
-    async update(user: SessionUser, id: string, change: (row: M) => Record<string, unknown>) {
+    /**
+     * `change` turns the locked row into what is written (it may throw to refuse the edit); `afterChange`, given
+     * the values written, runs in the same transaction (what else the edit makes stale).
+     */
+    async update(
+      user: SessionUser,
+      id: string,
+      change: (row: M) => Record<string, unknown>,
+      afterChange?: (values: Record<string, unknown>, transaction: Transaction) => Promise<unknown>,
+    ) {
       assertAdmin(user);
       return sequelize.transaction(async (transaction) => {
         const row = await lockOwnRow(model, user, id, what, transaction);
-        return updateAudited(user, row, entity, change(row), transaction) as Promise<Attributes<M>>;
+        const values = change(row);
+        const updated = (await updateAudited(user, row, entity, values, transaction)) as Attributes<M>;
+        await afterChange?.(values, transaction);
+        return updated;
       });
     },
     /** Archives the row when `uses` counts anything that names it, deletes it otherwise (see archiveOrDelete). */

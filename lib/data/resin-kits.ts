@@ -18,6 +18,7 @@ import { throwProblems } from '@/lib/validation/rules';
 import { getCompany } from './company';
 import { allOf, archivedWhere, pageOf, searchWhere, windowOf } from './list';
 import { assertAdmin } from './scope';
+import { markDerivedStale } from './install-derive';
 import { archiveOrDelete, lockOwnRow, updateAudited } from './records';
 
 const ENTITY = 'resin_kit';
@@ -113,7 +114,11 @@ export async function updateResinKit(user: SessionUser, id: string, patch: z.out
           );
       }
       if (patch.lot && patch.lot !== row.lot) await assertLotFree(user, patch.lot, id, transaction);
-      return updateAudited(user, row, ENTITY, patch, transaction);
+      const updated = await updateAudited(user, row, ENTITY, patch, transaction);
+      // The expiry is read by the flags (a kit past its date); the resin system by the clock.
+      if (patch.expiresOn !== undefined || patch.resinSystemId !== undefined)
+        await markDerivedStale(user.companyId, { resinKitId: id }, transaction);
+      return updated;
     }),
   );
 }

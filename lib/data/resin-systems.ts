@@ -11,6 +11,7 @@ import {
 } from '@/lib/validation/resin-systems';
 import { throwProblems } from '@/lib/validation/rules';
 import { allOf, archivedWhere, searchWhere } from './list';
+import { markDerivedStale } from './install-derive';
 import { plainPage, settingsRecord } from './records';
 
 const resinSystems = settingsRecord(ResinSystem, 'resin_system', 'Resin system');
@@ -49,12 +50,17 @@ export async function createResinSystem(user: SessionUser, input: ResinSystemInp
 
 /** A partial edit; the cross-field rules are checked on the record as it will be (400 and nothing written otherwise). */
 export async function updateResinSystem(user: SessionUser, id: string, patch: z.output<typeof resinSystemPatchSchema>) {
-  return resinSystems.update(user, id, (row) => {
-    const next = { ...row.get({ plain: true }), ...patch };
-    throwProblems(resinSystemProblems(next));
-    const sensitivity = withOneSensitivity(next);
-    return { ...patch, doublingC: sensitivity.doublingC, activationEnergyKj: sensitivity.activationEnergyKj };
-  });
+  return resinSystems.update(
+    user,
+    id,
+    (row) => {
+      const next = { ...row.get({ plain: true }), ...patch };
+      throwProblems(resinSystemProblems(next));
+      const sensitivity = withOneSensitivity(next);
+      return { ...patch, doublingC: sensitivity.doublingC, activationEnergyKj: sensitivity.activationEnergyKj };
+    },
+    (_values, transaction) => markDerivedStale(user.companyId, { resinSystemId: id }, transaction),
+  );
 }
 
 /** Archives a resin system that kits or installs name (their history must stay readable), deletes an unused one. */
