@@ -1,7 +1,7 @@
 'use client';
 
-import { ErrorView } from '@/components/shell/error-view';
+import { SectionErrorView } from '@/components/shell/error-view';
 
 export default function Error({ reset }: { error: Error & { digest?: string }; reset: () => void }) {
-  return <ErrorView reset={reset} />;
+  return <SectionErrorView reset={reset} />;
 }

@@ -4,7 +4,7 @@ import { useTranslations } from 'next-intl';
 
 type Words = { title: string; body: string; retry: string };
 
-/** The English of the page, for a section with no catalogue at hand (the root and the profile page). */
+/** The English of the page, for the one section with no catalogue at hand (the root). */
 const ENGLISH: Words = {
   title: 'Something went wrong',
   body: 'Nothing you entered was lost. Try again; if it keeps happening, tell your office.',
