@@ -1,11 +1,12 @@
 import type { Metadata, Viewport } from 'next';
 import { connection } from 'next/server';
-import { getLocale } from 'next-intl/server';
+import { getLocale, getTranslations } from 'next-intl/server';
 import '@fontsource/inter/400.css';
 import '@fontsource/inter/500.css';
 import '@fontsource/inter/600.css';
 import '@fontsource/inter/700.css';
 import './globals.css';
+import { ErrorWordsProvider } from '@/components/shell/error-words';
 import { OfflineProvider } from '@/components/shell/offline-provider';
 import { siteConfig } from '@/config/site';
 
@@ -21,10 +22,13 @@ export default async function RootLayout({ children }: { children: React.ReactNo
   // Every page is rendered per request: its scripts carry that request's CSP nonce (proxy.ts), which a
   // page prerendered at build time could not.
   await connection();
+  const [locale, t] = await Promise.all([getLocale(), getTranslations('common.error')]);
   return (
-    <html lang={await getLocale()}>
+    <html lang={locale}>
       <body className="min-h-screen font-sans">
-        <OfflineProvider>{children}</OfflineProvider>
+        <ErrorWordsProvider words={{ title: t('title'), body: t('body'), retry: t('retry') }}>
+          <OfflineProvider>{children}</OfflineProvider>
+        </ErrorWordsProvider>
       </body>
     </html>
   );

@@ -1,18 +1,17 @@
 'use client';
 
 import { useTranslations } from 'next-intl';
+import type { ErrorWords } from './error-words';
 
-type Words = { title: string; body: string; retry: string };
-
-/** The English of the page, for the one section with no catalogue at hand (the root). */
-const ENGLISH: Words = {
+/** The English of the page, should no words be handed down (a failure above the root layout's provider). */
+const ENGLISH: ErrorWords = {
   title: 'Something went wrong',
   body: 'Nothing you entered was lost. Try again; if it keeps happening, tell your office.',
   retry: 'Try again',
 };
 
 /** The friendly failure page of every section: says nothing was lost, offers a retry, shows no internals. */
-export function ErrorView({ reset, words = ENGLISH }: { reset: () => void; words?: Words }) {
+export function ErrorView({ reset, words = ENGLISH }: { reset: () => void; words?: ErrorWords }) {
   return (
     <main className="mx-auto max-w-lg p-8 text-center">
       <h1 className="text-2xl font-bold">{words.title}</h1>

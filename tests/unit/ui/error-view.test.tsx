@@ -1,7 +1,10 @@
 // @vitest-environment jsdom
 import { cleanup, render, screen } from '@testing-library/react';
 import { afterEach, describe, expect, it } from 'vitest';
+import RootError from '@/app/error';
 import { ErrorView, SectionErrorView } from '@/components/shell/error-view';
+import { ErrorWordsProvider } from '@/components/shell/error-words';
+import es from '@/messages/es.json';
 import { IntlWrapper } from '../i18n/intl';
 
 afterEach(cleanup);
@@ -29,5 +32,16 @@ describe('the section error page', () => {
     );
     expect(screen.getByRole('heading').textContent).toBe('Algo salió mal');
     expect(screen.getByRole('button').textContent).toBe('Volver a intentar');
+  });
+
+  it("the root's page takes the words the root layout hands down (a Spanish reader's here)", () => {
+    render(
+      <ErrorWordsProvider words={es.common.error}>
+        <RootError error={new Error('boom')} reset={noop} />
+      </ErrorWordsProvider>,
+    );
+    expect(screen.getByRole('heading').textContent).toBe('Algo salió mal');
+    expect(screen.getByRole('button').textContent).toBe('Volver a intentar');
+    expect(document.body.textContent).not.toContain('boom');
   });
 });
