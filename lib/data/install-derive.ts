@@ -124,8 +124,11 @@ export async function markDerivedStale(companyId: string, from: DerivedFrom, t: 
   const [key, id] = Object.entries(from)[0] as [keyof typeof STALE_COLUMN | 'companySettings', string | true];
   const which = key === 'companySettings' ? '' : `AND ${STALE_COLUMN[key]} = :id`;
   const [, affected] = await sequelize.query(
-    `UPDATE installs SET derived_at = NULL, updated_at = now()
-      WHERE company_id = :companyId AND derived_at IS NOT NULL AND status NOT IN (:closed) ${which}`,
+    // Rows locked in id order: two edits marking overlapping installs at once wait for each other, never deadlock.
+    `UPDATE installs SET derived_at = NULL, updated_at = now() WHERE id IN (
+       SELECT id FROM installs
+        WHERE company_id = :companyId AND derived_at IS NOT NULL AND status NOT IN (:closed) ${which}
+        ORDER BY id FOR UPDATE)`,
     {
       replacements: { companyId, id: typeof id === 'string' ? id : null, closed: [...CLOSED_INSTALL_STATUSES] },
       transaction: t,
