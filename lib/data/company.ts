@@ -5,10 +5,8 @@ import { changedFields, recordAudit } from '@/lib/data/audit';
 import type { SessionUser } from '@/lib/auth/session';
 import { notFound } from '@/lib/server/errors';
 import type { CompanyPatch } from '@/lib/validation/company';
-import { markDerivedStale } from './install-derive';
+import { CLOCK_SETTINGS, markDerivedStale } from './install-derive';
 import { assertAdmin } from './scope';
-
-const CLOCK_SETTINGS = ['workingWindowSafetyMargin', 'holdReserve', 'unitSystem'];
 
 const ENTITY = 'company';
 
@@ -31,9 +29,8 @@ export async function updateCompany(user: SessionUser, patch: CompanyPatch) {
     if (Object.keys(changes).length) {
       await company.update(patch, { transaction });
       await recordAudit(user, { action: 'update', entityType: ENTITY, entityId: company.id, changes }, transaction);
-      // The clock's margins and the units the flags are told in (settingsOf in install-derive.ts).
       if (CLOCK_SETTINGS.some((key) => key in changes))
-        await markDerivedStale(user.companyId, { companySettings: true }, transaction);
+        await markDerivedStale(user.companyId, 'companySettings', transaction);
     }
     return company.get({ plain: true });
   });

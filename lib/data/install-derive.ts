@@ -107,11 +107,13 @@ export async function ensureDerived(user: Pick<SessionUser, 'companyId'>, settin
   return rows.length;
 }
 
-/** What an edit changed that installs' stored state was derived from: one material, or the company's settings. */
-export type DerivedFrom =
-  { resinSystemId: string } | { resinKitId: string } | { packerId: string } | { companySettings: true };
+/** The company's settings that `settingsOf` hands the clock: an edit of one of them re-derives the open installs. */
+export const CLOCK_SETTINGS = ['workingWindowSafetyMargin', 'holdReserve', 'unitSystem'] as const;
 
 const STALE_COLUMN = { resinSystemId: 'resin_system_id', resinKitId: 'resin_kit_id', packerId: 'packer_id' } as const;
+
+/** What an edit changed that installs' stored state was derived from: one material, or the company's settings. */
+export type DerivedFrom = { column: keyof typeof STALE_COLUMN; id: string } | 'companySettings';
 
 /**
  * An edit of what the clock and the flags read (a resin system's data sheet, a kit's expiry, a packer's rating, the
@@ -121,8 +123,7 @@ const STALE_COLUMN = { resinSystemId: 'resin_system_id', resinKitId: 'resin_kit_
  * closed with. Returns how many were marked.
  */
 export async function markDerivedStale(companyId: string, from: DerivedFrom, t: Transaction): Promise<number> {
-  const [key, id] = Object.entries(from)[0] as [keyof typeof STALE_COLUMN | 'companySettings', string | true];
-  const which = key === 'companySettings' ? '' : `AND ${STALE_COLUMN[key]} = :id`;
+  const which = from === 'companySettings' ? '' : `AND ${STALE_COLUMN[from.column]} = :id`;
   const [, affected] = await sequelize.query(
     // Rows locked in id order: two edits marking overlapping installs at once wait for each other, never deadlock.
     `UPDATE installs SET derived_at = NULL, updated_at = now() WHERE id IN (
@@ -130,7 +131,11 @@ export async function markDerivedStale(companyId: string, from: DerivedFrom, t: 
         WHERE company_id = :companyId AND derived_at IS NOT NULL AND status NOT IN (:closed) ${which}
         ORDER BY id FOR UPDATE)`,
     {
-      replacements: { companyId, id: typeof id === 'string' ? id : null, closed: [...CLOSED_INSTALL_STATUSES] },
+      replacements: {
+        companyId,
+        id: from === 'companySettings' ? null : from.id,
+        closed: [...CLOSED_INSTALL_STATUSES],
+      },
       transaction: t,
       type: QueryTypes.UPDATE,
     },

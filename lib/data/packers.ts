@@ -62,10 +62,10 @@ export async function updatePacker(user: SessionUser, id: string, patch: z.outpu
       throwProblems(packerProblems({ ...row.get({ plain: true }), ...patch }));
       return patch;
     },
-    async (_values, transaction) => {
+    async (transaction) => {
       // Only the rating is read by the flags (pressure readings against it).
       if (patch.minPressureKpa !== undefined || patch.maxPressureKpa !== undefined)
-        await markDerivedStale(user.companyId, { packerId: id }, transaction);
+        await markDerivedStale(user.companyId, { column: 'packerId', id }, transaction);
     },
   );
 }

@@ -156,21 +156,20 @@ export function settingsRecord<M extends Row & { name: string }>(model: ModelSta
       return createAudited(user, model, entity, values) as Promise<Attributes<M>>;
     },
     /**
-     * `change` turns the locked row into what is written (it may throw to refuse the edit); `afterChange`, given
-     * the values written, runs in the same transaction (what else the edit makes stale).
+     * `change` turns the locked row into what is written (it may throw to refuse the edit); `afterChange` runs in the
+     * same transaction (what else the edit makes stale).
      */
     async update(
       user: SessionUser,
       id: string,
       change: (row: M) => Record<string, unknown>,
-      afterChange?: (values: Record<string, unknown>, transaction: Transaction) => Promise<unknown>,
+      afterChange?: (transaction: Transaction) => Promise<unknown>,
     ) {
       assertAdmin(user);
       return sequelize.transaction(async (transaction) => {
         const row = await lockOwnRow(model, user, id, what, transaction);
-        const values = change(row);
-        const updated = (await updateAudited(user, row, entity, values, transaction)) as Attributes<M>;
-        await afterChange?.(values, transaction);
+        const updated = (await updateAudited(user, row, entity, change(row), transaction)) as Attributes<M>;
+        await afterChange?.(transaction);
         return updated;
       });
     },

@@ -117,7 +117,7 @@ export async function updateResinKit(user: SessionUser, id: string, patch: z.out
       const updated = await updateAudited(user, row, ENTITY, patch, transaction);
       // The expiry is read by the flags (a kit past its date); the resin system by the clock.
       if (patch.expiresOn !== undefined || patch.resinSystemId !== undefined)
-        await markDerivedStale(user.companyId, { resinKitId: id }, transaction);
+        await markDerivedStale(user.companyId, { column: 'resinKitId', id }, transaction);
       return updated;
     }),
   );

@@ -59,7 +59,11 @@ export async function updateResinSystem(user: SessionUser, id: string, patch: z.
       const sensitivity = withOneSensitivity(next);
       return { ...patch, doublingC: sensitivity.doublingC, activationEnergyKj: sensitivity.activationEnergyKj };
     },
-    (_values, transaction) => markDerivedStale(user.companyId, { resinSystemId: id }, transaction),
+    async (transaction) => {
+      // Its name and chemistry are only words; every other field is read by the clock.
+      if (Object.keys(patch).some((key) => key !== 'name' && key !== 'chemistry'))
+        await markDerivedStale(user.companyId, { column: 'resinSystemId', id }, transaction);
+    },
   );
 }
 

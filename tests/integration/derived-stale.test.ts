@@ -101,6 +101,8 @@ describe('an edit of what the clock reads derives the open installs again', () =
   });
 
   it("a data sheet corrected moves the inflate-by and deflate-after to the new sheet's", async () => {
+    await updateResinSystem(admin(), w.resinSystem.id, { name: 'Epoxy (renamed)' });
+    expect((await row(open)).derivedAt).not.toBeNull();
     const before = await row(open);
     await updateResinSystem(admin(), w.resinSystem.id, { potLifeMin: 40, holdMin: 100 });
     expect((await row(open)).derivedAt).toBeNull();
