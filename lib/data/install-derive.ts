@@ -29,6 +29,11 @@ export const settingsOf = (company: CompanySettings): DeriveSettings => ({
   unitSystem: company.unitSystem as UnitSystem,
 });
 
+/** The install's company's settings as one JSON column of a read of its row (alias `install`); numbers as numbers. */
+export const companySettingsSql = (install: string) => `(SELECT json_build_object('timeZone', c.time_zone,
+  'unitSystem', c.unit_system, 'workingWindowSafetyMargin', c.working_window_safety_margin::float8,
+  'holdReserve', c.hold_reserve::float8) FROM companies c WHERE c.id = ${install}."company_id")`;
+
 /** The kit, its resin system and the packer of recorded conditions, as the flags need them (null when unknown). */
 export async function loadMaterials(companyId: string, conditions: InstallConditions | null, t?: Transaction) {
   if (!conditions)

@@ -19,10 +19,11 @@ import { refusal } from '@/lib/i18n/refusals';
 import { isSameEvent } from '@/lib/install/same-event';
 import { correctionTarget, orderRefusal, type InstallState } from '@/lib/install/state';
 import { eventPayloadSchemas, parseEventBody } from '@/lib/validation/install-events';
-import { loadMaterials, rederive, rowOf, settingsOf, type CompanySettings } from './install-derive';
+import { companySettingsSql, loadMaterials, rederive, rowOf, settingsOf, type CompanySettings } from './install-derive';
 import { insertAndNotifyTap, notifyTap } from './live';
 import { findInstallFor, type InstallEventRow } from './installs';
 import { dayInZone } from '@/lib/time/dates';
+import type { InstallStatus } from '@/lib/domain/vocabulary';
 
 type ParsedEvent = Extract<ReturnType<typeof parseEventBody>, { success: true }>['data'];
 
@@ -78,7 +79,7 @@ async function recordInTransaction(
   // The install's row, locked (taps on one install are serialised), with the company's settings the clock reads.
   const install = await Install.findOne({
     where: { id: installId, companyId: user.companyId },
-    attributes: { include: [[literal(COMPANY_SETTINGS_SQL), 'tapCompany']] },
+    attributes: { include: [[literal(companySettingsSql('"Install"')), 'tapCompany']] },
     lock: t.LOCK.UPDATE,
     transaction: t,
   });
@@ -170,23 +171,71 @@ async function recordInTransaction(
   return { event: plainEvent, created: true };
 }
 
-// The company's settings as a column of the install's read (numbers as JSON numbers, as the model reads them).
-const COMPANY_SETTINGS_SQL = `(SELECT json_build_object('timeZone', c.time_zone, 'unitSystem', c.unit_system,
-  'workingWindowSafetyMargin', c.working_window_safety_margin::float8, 'holdReserve', c.hold_reserve::float8)
-  FROM companies c WHERE c.id = "Install"."company_id")`;
+/**
+ * The insert of one event, `value(key)` the SQL of each value: a placeholder, or a literal where the statement is
+ * sent whole with others (the quick tap path, lib/data/tap-in-order.ts).
+ */
+export function insertEventSql(value: (key: keyof typeof EVENT_COLUMNS) => string) {
+  const keys = Object.keys(EVENT_COLUMNS) as (keyof typeof EVENT_COLUMNS)[];
+  return `INSERT INTO install_events (${keys.map((key) => EVENT_COLUMNS[key]).join(', ')})
+    VALUES (${keys.map((key) => (key === 'payload' ? `CAST(${value(key)} AS jsonb)` : value(key))).join(', ')})
+    RETURNING *`;
+}
 
-const INSERT_EVENT_SQL = `INSERT INTO install_events
-    (id, company_id, install_id, client_event_id, type, device_time, received_at, user_id, payload, corrects_event_id,
-     created_at)
-  VALUES (:id, :companyId, :installId, :clientEventId, :type, :deviceTime, :receivedAt, :userId, CAST(:payload AS jsonb),
-     :correctsEventId, :createdAt)
-  RETURNING *`;
+const EVENT_COLUMNS = {
+  id: 'id',
+  companyId: 'company_id',
+  installId: 'install_id',
+  clientEventId: 'client_event_id',
+  type: 'type',
+  deviceTime: 'device_time',
+  receivedAt: 'received_at',
+  userId: 'user_id',
+  payload: 'payload',
+  correctsEventId: 'corrects_event_id',
+  createdAt: 'created_at',
+} as const satisfies Partial<Record<keyof InstallEventRow, string>>;
 
-type Next = {
+const INSERT_EVENT_SQL = insertEventSql((key) => `:${key}`);
+
+export type Next = {
   state: InstallState;
   kit: { id: string; resinSystemId: string } | null;
   derived: Record<string, unknown>;
 };
+
+/** The install row's columns after a tap: its derived state and the summary lists and reports read. */
+export function summaryOf(
+  install: Pick<Install, 'status' | 'signedOffById'>,
+  next: Next,
+  type: ParsedEvent['type'],
+  userId: string,
+) {
+  const { state, kit } = next;
+  const signedOff = type === 'signed_off';
+  return {
+    ...next.derived,
+    status: (signedOff
+      ? 'awaiting_review'
+      : install.status === 'not_started'
+        ? 'in_progress'
+        : install.status) as InstallStatus,
+    startedAt: state.startedAt,
+    mixTempC: state.conditions?.mixTempC ?? null,
+    pipeTempC: state.conditions?.pipeTempC ?? null,
+    resinKitId: state.conditions ? (kit?.id ?? null) : null,
+    resinSystemId: state.conditions ? (kit?.resinSystemId ?? null) : null,
+    packerId: state.conditions?.packerId ?? null,
+    patchLengthMm: state.conditions?.patchLengthMm ?? null,
+    dryRunSeconds: state.dryRunSeconds === null ? null : Math.round(state.dryRunSeconds),
+    noGoOverrideReason: state.goDecision?.overrideReason ?? null,
+    inspectionResult: state.inspection?.result ?? null,
+    inspectionNotes: state.inspection?.notes ?? null,
+    signedOffById: signedOff ? userId : install.signedOffById,
+    signedOffAt: state.signedOffAt,
+    finishedAt: state.signedOffAt,
+  };
+}
 
 /** The state after one tap in log order: its event folded into the stored fold; materials re-read if it names them. */
 async function foldIn(
@@ -197,16 +246,21 @@ async function foldIn(
   settings: DeriveSettings,
   t: Transaction,
 ): Promise<Next> {
-  let folded = foldEvent(fold, event);
-  let kit =
-    install.resinKitId && install.resinSystemId
-      ? { id: install.resinKitId, resinSystemId: install.resinSystemId }
-      : null;
-  if (event.type === 'conditions_recorded') {
-    const loaded = await loadMaterials(user.companyId, stateOfFold(folded).conditions, t);
-    folded = { ...folded, materials: loaded.materials };
-    kit = loaded.kit;
-  }
+  const folded = foldEvent(fold, event);
+  if (event.type !== 'conditions_recorded') return nextOfFold(install, folded, settings);
+  const loaded = await loadMaterials(user.companyId, stateOfFold(folded).conditions, t);
+  return nextOfFold(install, { ...folded, materials: loaded.materials }, settings, loaded.kit);
+}
+
+/** The row's derived state from a fold that has the tap in it; the kit stays the row's unless conditions changed it. */
+export function nextOfFold(
+  install: Pick<Install, 'resinKitId' | 'resinSystemId' | 'eventCount'>,
+  folded: StoredFold,
+  settings: DeriveSettings,
+  kit: Next['kit'] = install.resinKitId && install.resinSystemId
+    ? { id: install.resinKitId, resinSystemId: install.resinSystemId }
+    : null,
+): Next {
   const { columns, fold: stored } = deriveRow(folded, settings);
   return {
     state: stateOfFold(stored),
@@ -217,30 +271,9 @@ async function foldIn(
 
 /** The install row keeps a summary of its log for lists and reports; the job and repair follow it. */
 async function updateSummary(user: SessionUser, install: Install, next: Next, body: ParsedEvent, t: Transaction) {
-  const { state, kit } = next;
   const firstEvent = install.status === 'not_started';
   const signedOff = body.type === 'signed_off';
-  await install.update(
-    {
-      ...next.derived,
-      status: signedOff ? 'awaiting_review' : firstEvent ? 'in_progress' : install.status,
-      startedAt: state.startedAt,
-      mixTempC: state.conditions?.mixTempC ?? null,
-      pipeTempC: state.conditions?.pipeTempC ?? null,
-      resinKitId: state.conditions ? (kit?.id ?? null) : null,
-      resinSystemId: state.conditions ? (kit?.resinSystemId ?? null) : null,
-      packerId: state.conditions?.packerId ?? null,
-      patchLengthMm: state.conditions?.patchLengthMm ?? null,
-      dryRunSeconds: state.dryRunSeconds === null ? null : Math.round(state.dryRunSeconds),
-      noGoOverrideReason: state.goDecision?.overrideReason ?? null,
-      inspectionResult: state.inspection?.result ?? null,
-      inspectionNotes: state.inspection?.notes ?? null,
-      signedOffById: signedOff ? user.id : install.signedOffById,
-      signedOffAt: state.signedOffAt,
-      finishedAt: state.signedOffAt,
-    },
-    { transaction: t },
-  );
+  await install.update(summaryOf(install, next, body.type, user.id), { transaction: t });
   if (!firstEvent && !signedOff) return;
 
   const job = await Job.findOne({

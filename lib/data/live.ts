@@ -40,8 +40,8 @@ export type LiveNotice = LiveEvent & { companyId: string; crewIds: string[] };
  * after the tap, as the tap path derived it.
  */
 export async function notifyTap(t: Transaction, tap: { eventId: string; step: InstallStep }): Promise<void> {
-  await sequelize.query(`SELECT ${NOTICE_SQL} FROM install_events e ${NOTICE_JOINS} WHERE e.id = :eventId`, {
-    replacements: { channel: LIVE_CHANNEL, step: tap.step, eventId: tap.eventId },
+  await sequelize.query(`SELECT ${noticeSql()} FROM install_events e ${NOTICE_JOINS} WHERE e.id = :eventId`, {
+    replacements: { step: tap.step, eventId: tap.eventId },
     transaction: t,
     type: QueryTypes.SELECT,
   });
@@ -57,17 +57,24 @@ export async function insertAndNotifyTap(
   replacements: Record<string, unknown>,
   step: InstallStep,
 ): Promise<void> {
-  await sequelize.query(`WITH e AS (${insertSql}) SELECT ${NOTICE_SQL} FROM e ${NOTICE_JOINS}`, {
-    replacements: { ...replacements, channel: LIVE_CHANNEL, step },
+  await sequelize.query(insertAndNotifySql(insertSql), {
+    replacements: { ...replacements, step },
     transaction: t,
     type: QueryTypes.SELECT,
   });
 }
 
+/**
+ * The statement of `insertAndNotifyTap`; `step` a SQL text expression (a placeholder, or a literal where the
+ * statement is sent whole, as the quick tap path does).
+ */
+export const insertAndNotifySql = (insertSql: string, step = ':step') =>
+  `WITH e AS (${insertSql}) SELECT ${noticeSql(step)} FROM e ${NOTICE_JOINS}`;
+
 // Over a stored tap `e`, its install `i` and job `j`.
-const NOTICE_SQL = `pg_notify(:channel, json_build_object(
+const noticeSql = (step = ':step') => `pg_notify('${LIVE_CHANNEL}', json_build_object(
     'seq', e.seq::text, 'id', e.install_id, 'installId', e.install_id, 'eventId', e.id, 'type', e.type,
-    'step', CAST(:step AS text), 'status', i.status, 'jobId', i.job_id,
+    'step', CAST(${step} AS text), 'status', i.status, 'jobId', i.job_id,
     'deviceTime', e.device_time, 'receivedAt', e.received_at,
     'companyId', e.company_id, 'crewIds', json_build_array(i.crew_id, j.crew_id))::text)`;
 const NOTICE_JOINS = 'JOIN installs i ON i.id = e.install_id JOIN jobs j ON j.id = i.job_id';

@@ -1,4 +1,5 @@
 import { randomUUID } from 'node:crypto';
+import pg from 'pg';
 import { QueryTypes } from 'sequelize';
 import { afterEach, beforeAll, describe, expect, it, vi } from 'vitest';
 import { resinClockSpec } from '@/lib/cure';
@@ -339,19 +340,32 @@ describe('the severity list', () => {
 });
 
 describe('the cost of a tap', () => {
-  /** Runs `fn` counting the queries it sends and the rows each brought back. */
+  /**
+   * Runs `fn` counting the round trips to PostgreSQL (every query of the driver, Sequelize's and the quick tap
+   * path's) and the most rows any statement of each brought back.
+   */
   async function measured(fn: () => Promise<unknown>) {
     const queries: { sql: string; rows: number }[] = [];
-    const original = sequelize.query.bind(sequelize) as (...args: unknown[]) => Promise<unknown>;
-    const spy = vi.spyOn(sequelize, 'query').mockImplementation((async (...args: unknown[]) => {
-      const result = await original(...args);
-      const rows = Array.isArray(result) ? (Array.isArray(result[0]) ? result[0].length : result.length) : 0;
-      queries.push({
-        sql: String(typeof args[0] === 'string' ? args[0] : (args[0] as { query?: string })?.query),
-        rows,
+    type Query = (this: pg.Client, ...args: unknown[]) => unknown;
+    const original = pg.Client.prototype.query as unknown as Query;
+    const record = (sql: string, result: unknown) => {
+      const results = (Array.isArray(result) ? result : [result]) as ({ rows?: unknown[] } | undefined)[];
+      queries.push({ sql, rows: Math.max(0, ...results.map((r) => r?.rows?.length ?? 0)) });
+    };
+    const spy = vi.spyOn(pg.Client.prototype, 'query').mockImplementation(function (this: pg.Client, ...args) {
+      const sql = String(typeof args[0] === 'string' ? args[0] : (args[0] as { text?: string })?.text);
+      const callback = args.at(-1);
+      if (typeof callback === 'function') {
+        return original.call(this, ...args.slice(0, -1), (error: unknown, result: unknown) => {
+          if (!error) record(sql, result);
+          callback(error, result);
+        });
+      }
+      return (original.apply(this, args) as Promise<unknown>).then((result) => {
+        record(sql, result);
+        return result;
       });
-      return result;
-    }) as never);
+    } as Query as never);
     await fn();
     spy.mockRestore();
     return queries;
@@ -393,11 +407,12 @@ describe('the cost of a tap', () => {
     const shape = (qs: typeof a) => qs.map((q) => q.rows);
     expect(a.length, a.map((q) => q.sql).join('\n')).toBe(b.length);
     expect(shape(a)).toEqual(shape(b));
-    // User, crews and install in one query; then the lock, the replay check, the insert, the update, and the
-    // live stream's NOTIFY (one indexed row) inside the same transaction.
-    expect(a.length, a.map((q) => q.sql).join('\n')).toBeLessThanOrEqual(9);
-    expect(a[0].sql).toMatch(/FROM users u[\s\S]*LEFT JOIN installs i/);
-    for (const q of b) if (/FROM "install_events"/.test(q.sql)) expect(q.rows, q.sql).toBeLessThanOrEqual(1);
+    // Two round trips (lib/data/tap-in-order.ts): BEGIN, user, crews and install, its lock and the replay check; then
+    // the row's update, the insert with the live stream's NOTIFY, and COMMIT.
+    expect(a.map((q) => q.sql.trim().split(/\s+/)[0])).toEqual(['BEGIN;', 'UPDATE']);
+    expect(a[0].sql).toMatch(/FROM users u[\s\S]*LEFT JOIN installs i[\s\S]*FOR UPDATE[\s\S]*FROM install_events/);
+    expect(a[1].sql).toMatch(/INSERT INTO install_events[\s\S]*pg_notify[\s\S]*COMMIT$/);
+    for (const q of b) if (/FROM "?install_events/.test(q.sql)) expect(q.rows, q.sql).toBeLessThanOrEqual(1);
     await expectStoredMatchesLog(long, 'long log after a tap');
 
     // A correction may read the log (corrections are rare) and still leaves the row right.

@@ -1,0 +1,190 @@
+import 'server-only';
+import { randomUUID } from 'node:crypto';
+import type { Client, QueryResult } from 'pg';
+import { Install, sequelize } from '@/models';
+import { accessOf, userWithInstallSql, type UserWithInstallRow } from '@/lib/auth/session';
+import type { SessionClaims } from '@/lib/auth/claims';
+import type { InstallEventType, InstallStatus } from '@/lib/domain/vocabulary';
+import { mayWorkOn } from '@/lib/install/access';
+import { foldEvent, foldsInOrder, stateOfFold, type StoredFold } from '@/lib/install/derived';
+import { deviceTimeRefusal, isClosedInstall } from '@/lib/install/record-rules';
+import { orderRefusal } from '@/lib/install/state';
+import { parseEventBody } from '@/lib/validation/install-events';
+import { companySettingsSql, settingsOf, type CompanySettings } from './install-derive';
+import { insertEventSql, nextOfFold, summaryOf } from './install-events';
+import type { InstallEventRow } from './installs';
+import { insertAndNotifySql } from './live';
+
+// The tap's quick path. Most taps at the manhole (a pressure reading, inflated, deflated, a note) come in log order,
+// on an install already started, and touch nothing but the install's row and its log. Such a tap is recorded here
+// in two round trips on one pooled connection, each a few statements sent as one:
+//   1. BEGIN; who is asking (user, crews, the install's crews); the install's row, locked; is the tap's id stored?
+//   2. the row's new derived state; the event inserted with its live NOTIFY; COMMIT.
+// Anything else — a replay, a refusal, a correction, conditions, a decision, a sign-off, the first tap, a tap out of
+// log order, any database error — rolls back and returns null, and `recordEvent` (lib/data/install-events.ts) does
+// the whole work and gives the answer. The two write the same rows: tests/integration/tap-in-order.test.ts.
+
+/** Taps that change only the install's row and log (no kit, packer, job, repair or audit read or written). */
+const QUICK_TYPES: ReadonlySet<InstallEventType> = new Set<InstallEventType>([
+  'safety_acknowledged',
+  'checks_done',
+  'dry_run_started',
+  'dry_run_finished',
+  'resin_mixed',
+  'patch_loaded',
+  'packer_in_position',
+  'bladder_inflated',
+  'pressure_reading',
+  'bladder_deflated',
+  'inspection_recorded',
+  'note',
+]);
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+type LockedInstall = {
+  status: InstallStatus;
+  eventCount: number;
+  derived: boolean;
+  fold: string | null;
+  resinKitId: string | null;
+  resinSystemId: string | null;
+  signedOffById: string | null;
+  company: string;
+};
+
+/** Records a tap in log order and answers as `recordEvent` would (201 and the event), or null to hand it over. */
+export async function recordTapInOrder(
+  claims: SessionClaims,
+  installId: string,
+  input: unknown,
+): Promise<{ event: InstallEventRow; created: true } | null> {
+  const receivedAt = new Date();
+  const parsed = parseEventBody(input);
+  if (!UUID.test(installId) || !parsed.success || !QUICK_TYPES.has(parsed.data.type)) return null;
+  const body = parsed.data;
+  if (deviceTimeRefusal(body.deviceTime, receivedAt)) return null;
+
+  const client = (await sequelize.connectionManager.getConnection({ type: 'write' })) as Client;
+  const sql = (value: unknown) => literal(client, value);
+  let usable = true;
+  try {
+    const read = await client.query(
+      `BEGIN;
+       ${userWithInstallSql(sql(claims.sub), sql(claims.companyId), sql(installId))};
+       SELECT i.status, i.event_count AS "eventCount", i.derived_at IS NOT NULL AS derived,
+              i.derived_fold::text AS fold, i.resin_kit_id AS "resinKitId", i.resin_system_id AS "resinSystemId",
+              i.signed_off_by_id AS "signedOffById", ${companySettingsSql('i')}::text AS company
+         FROM installs i WHERE i.id = ${sql(installId)} AND i.company_id = ${sql(claims.companyId)} FOR UPDATE;
+       SELECT 1 FROM install_events WHERE company_id = ${sql(claims.companyId)}
+          AND client_event_id = ${sql(body.clientEventId)}`,
+    );
+    const [, who, row, replay] = read as unknown as QueryResult[];
+    const planned = plan(
+      claims,
+      who.rows[0] as UserWithInstallRow | undefined,
+      row.rows[0] as LockedInstall | undefined,
+      replay.rowCount === 0,
+      { installId, body, receivedAt },
+    );
+    if (!planned) {
+      await client.query('ROLLBACK');
+      return null;
+    }
+    const { event, columns, step } = planned;
+    await client.query(
+      `UPDATE installs SET ${setClause(columns, sql)}, updated_at = now()
+        WHERE id = ${sql(installId)} AND company_id = ${sql(claims.companyId)};
+       ${insertAndNotifySql(
+         insertEventSql((key) => sql(event[key])),
+         sql(step),
+       )};
+       COMMIT`,
+    );
+    return { event, created: true };
+  } catch (error) {
+    // A database refusal (the same id stored meanwhile under another install, a constraint) or a lost connection:
+    // nothing was committed, or — a commit whose answer was lost — the full path finds the tap and replays it.
+    usable = await client.query('ROLLBACK').then(
+      () => true,
+      () => false,
+    );
+    if (!(error instanceof Error) || !('severity' in error || 'code' in error)) throw error;
+    return null;
+  } finally {
+    if (usable) sequelize.connectionManager.releaseConnection(client);
+    else await sequelize.connectionManager.destroyConnection(client).catch(() => undefined);
+  }
+}
+
+type Tap = {
+  installId: string;
+  body: Extract<ReturnType<typeof parseEventBody>, { success: true }>['data'];
+  receivedAt: Date;
+};
+
+/** The event and the row's new columns, or null when the tap is not one for the quick path. */
+function plan(
+  claims: SessionClaims,
+  who: UserWithInstallRow | undefined,
+  install: LockedInstall | undefined,
+  isNew: boolean,
+  { installId, body, receivedAt }: Tap,
+) {
+  const access = accessOf(who, claims);
+  if (!access?.install || !install || !isNew || !install.derived || install.fold === null) return null;
+  const { user } = access;
+  if (!mayWorkOn(user, [access.install.crewId, access.install.jobCrewId])) return null;
+  if (body.userId !== undefined && body.userId !== user.id) return null;
+  if (isClosedInstall(install.status) || install.status === 'not_started') return null;
+
+  const fold = JSON.parse(install.fold) as StoredFold;
+  const event: InstallEventRow = {
+    id: randomUUID(),
+    companyId: user.companyId,
+    installId,
+    clientEventId: body.clientEventId,
+    type: body.type,
+    deviceTime: new Date(body.deviceTime),
+    receivedAt,
+    userId: user.id,
+    payload: body.payload ?? {},
+    correctsEventId: null,
+    createdAt: new Date(),
+  };
+  if (!foldsInOrder(fold, event)) return null;
+  const reopened = install.status === 'sent_back';
+  if (orderRefusal(stateOfFold(fold), { ...body, correctsEventId: null }, { reopened })) return null;
+
+  const settings = settingsOf(JSON.parse(install.company) as CompanySettings);
+  const next = nextOfFold(install, foldEvent(fold, event), settings);
+  return { event, columns: summaryOf(install, next, body.type, user.id), step: next.state.step };
+}
+
+/** `column = literal, …` for the install's attributes, by the model's own column names. */
+function setClause(values: Record<string, unknown>, sql: (value: unknown) => string) {
+  const attributes = Install.getAttributes();
+  return Object.entries(values)
+    .map(([key, value]) => `${attributes[key as keyof typeof attributes].field} = ${sql(value)}`)
+    .join(', ');
+}
+
+/**
+ * A value as a SQL literal (quoted by the driver's own `escapeLiteral`); PostgreSQL casts it to its column's type.
+ * Dates go as ISO instants, text arrays as array literals, objects as JSON.
+ */
+function literal(client: Client, value: unknown): string {
+  if (value === null || value === undefined) return 'NULL';
+  if (typeof value === 'number') {
+    if (!Number.isFinite(value)) throw new Error(`not a finite number: ${value}`);
+    return String(value);
+  }
+  if (typeof value === 'boolean') return value ? 'TRUE' : 'FALSE';
+  if (value instanceof Date) return client.escapeLiteral(value.toISOString());
+  if (Array.isArray(value)) return client.escapeLiteral(`{${value.map(arrayElement).join(',')}}`);
+  if (typeof value === 'object') return client.escapeLiteral(JSON.stringify(value));
+  return client.escapeLiteral(String(value));
+}
+
+/** One element of an array literal: double-quoted, with backslashes and quotes escaped (PostgreSQL manual, 8.15.6). */
+const arrayElement = (value: unknown) => `"${String(value).replace(/[\\"]/g, (c) => `\\${c}`)}"`;
