@@ -1,5 +1,6 @@
 import { NextResponse, type NextRequest } from 'next/server';
-import { getToken } from 'next-auth/jwt';
+import { getToken, type JWT } from 'next-auth/jwt';
+import { decodeSessionToken } from '@/lib/auth/session-token';
 import { authSecret } from '@/lib/auth/secret';
 import { IS_DEVELOPMENT } from '@/lib/env-public';
 import { MAX_BODY_BYTES } from '@/lib/server/http-limits';
@@ -54,7 +55,12 @@ export async function proxy(request: NextRequest) {
   }
 
   if (NEEDS_SESSION.test(pathname) && !HAS_EXTENSION.test(pathname)) {
-    const token = await getToken({ req: request, secret: authSecret() });
+    const token = await getToken({
+      req: request,
+      secret: authSecret(),
+      // The key derived once per secret (lib/auth/session-token.ts), not again on every page request.
+      decode: ({ token: raw, secret }) => (raw ? (decodeSessionToken(raw, String(secret)) as Promise<JWT>) : null),
+    });
     if (!token) {
       const signIn = new URL('/sign-in', request.url);
       signIn.searchParams.set('callbackUrl', `${pathname}${search}`);

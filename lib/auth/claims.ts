@@ -1,7 +1,7 @@
 import 'server-only';
 import { cookies } from 'next/headers';
-import { decode } from 'next-auth/jwt';
 import { authSecret } from './secret';
+import { decodeSessionToken } from './session-token';
 
 // next-auth names the cookie with a __Secure- prefix when served over https.
 const COOKIE_NAMES = ['__Secure-next-auth.session-token', 'next-auth.session-token'];
@@ -14,7 +14,7 @@ export async function getSessionClaims(): Promise<SessionClaims | null> {
   const raw = COOKIE_NAMES.map((name) => jar.get(name)?.value).find(Boolean);
   if (!raw) return null;
   try {
-    const token = await decode({ token: raw, secret: authSecret() });
+    const token = await decodeSessionToken(raw, authSecret());
     if (!token || typeof token.sub !== 'string' || typeof token.companyId !== 'string') return null;
     return {
       sub: token.sub,
