@@ -17,7 +17,7 @@ import { insertAndNotifySql } from './live';
 
 // The tap's quick path. Most taps at the manhole (a pressure reading, inflated, deflated, a note) come in log order,
 // on an install already started, and touch nothing but the install's row and its log. Such a tap is recorded here
-// in two round trips on one pooled connection, each a few statements sent as one:
+// in two round trips on one pooled connection, each a few prepared statements sent as one:
 //   1. BEGIN; who is asking (user, crews, the install's crews); the install's row, locked; is the tap's id stored?
 //   2. the row's new derived state; the event inserted with its live NOTIFY; COMMIT.
 // Anything else — a replay, a refusal, a correction, conditions, a decision, a sign-off, the first tap, a tap out of
@@ -67,19 +67,18 @@ export async function recordTapInOrder(
 
   const client = (await sequelize.connectionManager.getConnection({ type: 'write' })) as Client;
   const sql = (value: unknown) => literal(client, value);
+  const run = (name: keyof typeof STATEMENTS | string, args: unknown[]) =>
+    `EXECUTE ${name}(${args.map(sql).join(', ')})`;
   let usable = true;
   try {
-    const read = await client.query(
-      `BEGIN;
-       ${userWithInstallSql(sql(claims.sub), sql(claims.companyId), sql(installId))};
-       SELECT i.status, i.event_count AS "eventCount", i.derived_at IS NOT NULL AS derived,
-              i.derived_fold::text AS fold, i.resin_kit_id AS "resinKitId", i.resin_system_id AS "resinSystemId",
-              i.signed_off_by_id AS "signedOffById", ${companySettingsSql('i')}::text AS company
-         FROM installs i WHERE i.id = ${sql(installId)} AND i.company_id = ${sql(claims.companyId)} FOR UPDATE;
-       SELECT 1 FROM install_events WHERE company_id = ${sql(claims.companyId)}
-          AND client_event_id = ${sql(body.clientEventId)}`,
-    );
-    const [, who, row, replay] = read as unknown as QueryResult[];
+    const read = (await client.query(
+      `${prepare(client, Object.keys(STATEMENTS))}
+       BEGIN;
+       ${run('setline_tap_who', [claims.sub, claims.companyId, installId])};
+       ${run('setline_tap_install', [installId, claims.companyId])};
+       ${run('setline_tap_replay', [claims.companyId, body.clientEventId])}`,
+    )) as unknown as QueryResult[];
+    const [who, row, replay] = read.slice(-3);
     const planned = plan(
       claims,
       who.rows[0] as UserWithInstallRow | undefined,
@@ -92,29 +91,65 @@ export async function recordTapInOrder(
       return null;
     }
     const { event, columns, step } = planned;
+    const update = updateStatement(Object.keys(columns));
     await client.query(
-      `UPDATE installs SET ${setClause(columns, sql)}, updated_at = now()
-        WHERE id = ${sql(installId)} AND company_id = ${sql(claims.companyId)};
-       ${insertAndNotifySql(
-         insertEventSql((key) => sql(event[key])),
-         sql(step),
-       )};
+      `${prepare(client, [update])}
+       ${run(update, [installId, claims.companyId, ...Object.values(columns)])};
+       ${run('setline_tap_insert', [...INSERT_KEYS.map((key) => event[key]), step])};
        COMMIT`,
     );
     return { event, created: true };
   } catch (error) {
     // A database refusal (the same id stored meanwhile under another install, a constraint) or a lost connection:
-    // nothing was committed, or — a commit whose answer was lost — the full path finds the tap and replays it.
-    usable = await client.query('ROLLBACK').then(
-      () => true,
-      () => false,
-    );
+    // nothing was committed, or — a commit whose answer was lost — the full path finds the tap and replays it. The
+    // connection is closed, not pooled: which of its statements got prepared is no longer known.
+    usable = false;
+    await client.query('ROLLBACK').catch(() => undefined);
     if (!(error instanceof Error) || !('severity' in error || 'code' in error)) throw error;
     return null;
   } finally {
     if (usable) sequelize.connectionManager.releaseConnection(client);
     else await sequelize.connectionManager.destroyConnection(client).catch(() => undefined);
   }
+}
+
+// The quick path's statements are prepared once per connection, in the round trip that first needs them, so
+// PostgreSQL plans them once rather than on every tap; each tap then sends EXECUTEs with its values as literals.
+const INSERT_KEYS: (keyof InstallEventRow & string)[] = [];
+const STATEMENTS: Record<string, string> = {
+  setline_tap_who: userWithInstallSql('$1', '$2', '$3'),
+  setline_tap_install: `SELECT i.status, i.event_count AS "eventCount", i.derived_at IS NOT NULL AS derived,
+      i.derived_fold::text AS fold, i.resin_kit_id AS "resinKitId", i.resin_system_id AS "resinSystemId",
+      i.signed_off_by_id AS "signedOffById", ${companySettingsSql('i')}::text AS company
+    FROM installs i WHERE i.id = $1 AND i.company_id = $2 FOR UPDATE`,
+  setline_tap_replay: 'SELECT 1 FROM install_events WHERE company_id = $1 AND client_event_id = $2',
+  setline_tap_insert: insertAndNotifySql(
+    insertEventSql((key) => `$${INSERT_KEYS.push(key)}`),
+    `$${INSERT_KEYS.length + 1}`,
+  ),
+};
+const prepared = new WeakMap<Client, Set<string>>();
+
+/** The install row's update for these attributes (always the same set, from `summaryOf`), named once. */
+function updateStatement(keys: string[]): string {
+  const attributes = Install.getAttributes();
+  const set = keys.map((key, i) => `${attributes[key as keyof typeof attributes].field} = $${i + 3}`).join(', ');
+  const text = `UPDATE installs SET ${set}, updated_at = now() WHERE id = $1 AND company_id = $2`;
+  let name = Object.keys(STATEMENTS).find((known) => STATEMENTS[known] === text);
+  if (!name) {
+    name = `setline_tap_update_${Object.keys(STATEMENTS).length}`;
+    STATEMENTS[name] = text;
+  }
+  return name;
+}
+
+/** The PREPAREs of those statements not yet prepared on this connection ('' when all are). */
+function prepare(client: Client, names: string[]): string {
+  let done = prepared.get(client);
+  if (!done) prepared.set(client, (done = new Set()));
+  const missing = names.filter((name) => !done.has(name));
+  for (const name of missing) done.add(name);
+  return missing.map((name) => `PREPARE ${name} AS ${STATEMENTS[name]};`).join('\n');
 }
 
 type Tap = {
@@ -159,14 +194,6 @@ function plan(
   const settings = settingsOf(JSON.parse(install.company) as CompanySettings);
   const next = nextOfFold(install, foldEvent(fold, event), settings);
   return { event, columns: summaryOf(install, next, body.type, user.id), step: next.state.step };
-}
-
-/** `column = literal, …` for the install's attributes, by the model's own column names. */
-function setClause(values: Record<string, unknown>, sql: (value: unknown) => string) {
-  const attributes = Install.getAttributes();
-  return Object.entries(values)
-    .map(([key, value]) => `${attributes[key as keyof typeof attributes].field} = ${sql(value)}`)
-    .join(', ');
 }
 
 /**
