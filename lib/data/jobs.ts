@@ -1,5 +1,5 @@
 import 'server-only';
-import { Op, QueryTypes, type InferAttributes, type Model, type Transaction } from 'sequelize';
+import { Op, QueryTypes, literal, type InferAttributes, type Model, type Transaction } from 'sequelize';
 import type { z } from 'zod';
 import { AccessPoint, Company, Crew, Customer, Install, Job, Repair, Segment, Site } from '@/models';
 import { sequelize } from '@/lib/data/db';
@@ -47,26 +47,33 @@ export async function listJobs(
     searchWhere(query.q, ['number', 'title', '$customer.name$', '$site.address_line$', '$site.city$']),
     crewJobsWhere(user, 'id', 'id'),
   );
-  // The count joins only what the search reads; the page loads its few rows with their customer, site and crew.
-  const [count, rows] = await Promise.all([
-    Job.count({ where, include: query.q ? LIST_SEARCH_INCLUDE : [], distinct: true, col: 'id' }),
-    Job.findAll({
-      where,
-      include: [
-        { model: Customer, as: 'customer', attributes: ['id', 'name'] },
-        { model: Site, as: 'site', attributes: ['id', 'name', 'addressLine', 'city'] },
-        { model: Crew, as: 'crew', attributes: ['id', 'name'] },
-      ],
-      // NULLS LAST keeps undated drafts out of the way whichever direction the office sorts.
-      order: [
-        [query.sort, `${query.dir.toUpperCase()} NULLS LAST`],
-        ['number', 'DESC'],
-      ],
-      ...windowOf(query, exportAll),
-    }),
-  ]);
+  // One query: the page's few rows with their customer, site and crew (each at most one per job, so the joins add no
+  // rows) and the count of every match beside each row. A page past the end has no row to carry it: counted apart.
+  const rows = await Job.findAll({
+    where,
+    attributes: { include: [[literal('count(*) OVER ()'), 'matchCount']] },
+    include: [
+      { model: Customer, as: 'customer', attributes: ['id', 'name'] },
+      { model: Site, as: 'site', attributes: ['id', 'name', 'addressLine', 'city'] },
+      { model: Crew, as: 'crew', attributes: ['id', 'name'] },
+    ],
+    // NULLS LAST keeps undated drafts out of the way whichever direction the office sorts.
+    order: [
+      [query.sort, `${query.dir.toUpperCase()} NULLS LAST`],
+      ['number', 'DESC'],
+    ],
+    subQuery: false,
+    ...windowOf(query, exportAll),
+  });
+  const count = rows.length
+    ? Number(rows[0].get('matchCount' as never))
+    : await Job.count({ where, include: query.q ? LIST_SEARCH_INCLUDE : [], distinct: true, col: 'id' });
   return pageOf(
-    rows.map((row) => row.get({ plain: true }) as JobListItem),
+    rows.map((row) => {
+      const item = row.get({ plain: true }) as JobListItem & { matchCount?: unknown };
+      delete item.matchCount;
+      return item as JobListItem;
+    }),
     count,
     query,
   );

@@ -316,6 +316,12 @@ describe('jobs list: the common list contract', () => {
     expect(numbers(desc.body)).toEqual(['2026-0103', '2026-0102']);
     const dir = await call(listRoute, '/api/jobs?pageSize=1&sort=scheduledDate&dir=asc');
     expect(numbers(dir.body)).toEqual(['2026-0104']);
+    // The count rides on the rows (a window count): a row carries no trace of it, and a page past the end, with no
+    // row to carry it, still says how many there are.
+    expect(Object.keys(first.body.items[0])).not.toContain('matchCount');
+    const past = await call(listRoute, '/api/jobs?pageSize=2&page=9&sort=number');
+    expect(past.body).toMatchObject({ items: [], total: 5, page: 9, pageCount: 3 });
+    expect((await call(listRoute, '/api/jobs?pageSize=2&page=9&q=offset')).body.total).toBe(1);
   });
 
   it('keeps its filters: q, status (a comma list), crewId, from and to', async () => {
