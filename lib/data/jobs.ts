@@ -49,7 +49,7 @@ export async function listJobs(
   );
   // One query: the page's few rows with their customer, site and crew (each at most one per job, so the joins add no
   // rows) and the count of every match beside each row. A page past the end has no row to carry it: counted apart.
-  const rows = await Job.findAll({
+  const rows = (await Job.findAll({
     where,
     attributes: { include: [[literal('count(*) OVER ()'), 'matchCount']] },
     include: [
@@ -64,19 +64,23 @@ export async function listJobs(
     ],
     subQuery: false,
     ...windowOf(query, exportAll),
-  });
+    // Plain rows, not model instances: building 25 instances with three includes cost more than the query.
+    raw: true,
+    nest: true,
+  })) as unknown as (JobListItem & { matchCount: string })[];
   const count = rows.length
-    ? Number(rows[0].get('matchCount' as never))
+    ? Number(rows[0].matchCount)
     : await Job.count({ where, include: query.q ? LIST_SEARCH_INCLUDE : [], distinct: true, col: 'id' });
-  return pageOf(
-    rows.map((row) => {
-      const item = row.get({ plain: true }) as JobListItem & { matchCount?: unknown };
-      delete item.matchCount;
-      return item as JobListItem;
-    }),
-    count,
-    query,
-  );
+  return pageOf(rows.map(listItemOf), count, query);
+}
+
+/** A plain row as the model would give it: a missing customer, site or crew is null, not an object of nulls. */
+function listItemOf(row: JobListItem & { matchCount?: string }): JobListItem {
+  const orNull = <T extends { id: string | null } | null | undefined>(joined: T) =>
+    joined?.id == null ? null : joined;
+  const item = { ...row, customer: orNull(row.customer), site: orNull(row.site), crew: orNull(row.crew) };
+  delete item.matchCount;
+  return item;
 }
 
 const LIST_SEARCH_INCLUDE = [

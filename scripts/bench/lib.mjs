@@ -27,12 +27,21 @@ export function percentile(values, p) {
   return sorted[Math.min(sorted.length - 1, Math.max(0, Math.ceil((p / 100) * sorted.length) - 1))];
 }
 
+// Every timed load first runs the same requests for BENCH_WARMUP seconds (default 2, none in the smoke), unmeasured:
+// the figures are the server's steady state, not its first requests through cold code.
+const WARMUP_S = Number(process.env.BENCH_WARMUP ?? (process.env.BENCH_SMOKE === '1' ? 0 : 2));
+
 /**
  * Closed-loop load: `streams` independent connections, each its own autocannon instance (so each can keep
  * its own state, e.g. one install per simulated tablet), for `duration` seconds or `amount` requests each.
  * `request(i)` gives stream i's { method, path, headers, body, setupRequest }.
  */
 export async function load(base, { streams = 1, duration, amount, request }) {
+  if (duration && WARMUP_S > 0) await timedLoad(base, { streams, duration: WARMUP_S, request });
+  return timedLoad(base, { streams, duration, amount, request });
+}
+
+async function timedLoad(base, { streams, duration, amount, request }) {
   const latencies = [];
   let non2xx = 0;
   let errors = 0;
@@ -71,6 +80,8 @@ export async function load(base, { streams = 1, duration, amount, request }) {
 
 /** Many connections with the same request (one autocannon instance). */
 export async function loadSame(base, { connections, duration, amount, path, headers, method = 'GET', body }) {
+  if (duration && WARMUP_S > 0)
+    await autocannon({ url: base + path, connections, duration: WARMUP_S, headers, method, body });
   const latencies = [];
   let non2xx = 0;
   const started = performance.now();
