@@ -1,7 +1,6 @@
 import 'server-only';
 import { redirect } from 'next/navigation';
-import { QueryTypes } from 'sequelize';
-import { sequelize } from '@/models';
+import { definePrepared, queryPrepared } from '@/lib/data/prepared';
 import { AppError, forbidden, unauthorized } from '@/lib/server/errors';
 import type { Locale } from '@/i18n/locales';
 import type { Role } from '@/lib/domain/vocabulary';
@@ -46,14 +45,8 @@ export async function requirePageUser(roles?: readonly Role[]): Promise<SessionU
 
 /** Checks the claims against the user row: the row, not the token, decides (deactivation and role changes bite at once). */
 export async function userFromClaims(claims: SessionClaims | null): Promise<SessionUser | null> {
-  if (!claims) return null;
-  const [row] = await sequelize.query<UserRow>(
-    `${USER_SQL} FROM users u WHERE u.id = :sub AND u.company_id = :companyId`,
-    {
-      replacements: { sub: claims.sub, companyId: claims.companyId },
-      type: QueryTypes.SELECT,
-    },
-  );
+  if (!claims || !isUuid(claims.sub) || !isUuid(claims.companyId)) return null;
+  const [row] = await queryPrepared<UserRow>(USER, [claims.sub, claims.companyId]);
   return sessionUserOf(row, claims);
 }
 
@@ -69,26 +62,12 @@ export async function requireUserWithInstall(
   sessionClaims?: SessionClaims,
 ): Promise<{ user: SessionUser; install: InstallAccess | null }> {
   const claims = sessionClaims ?? (await getSessionClaims());
-  if (!claims) throw unauthorized();
-  const [row] = await sequelize.query<UserWithInstallRow>(userWithInstallSql(), {
-    replacements: { sub: claims.sub, companyId: claims.companyId, installId },
-    type: QueryTypes.SELECT,
-  });
+  if (!claims || !isUuid(claims.sub) || !isUuid(claims.companyId)) throw unauthorized();
+  const [row] = await queryPrepared<UserWithInstallRow>(USER_WITH_INSTALL, [claims.sub, claims.companyId, installId]);
   const access = accessOf(row, claims);
   if (!access) throw unauthorized();
   return access;
 }
-
-/**
- * The statement of `requireUserWithInstall`. Its arguments are SQL expressions: placeholders, or literals where the
- * statement is sent whole with others (the quick tap path, lib/data/tap-in-order.ts).
- */
-export const userWithInstallSql = (sub = ':sub', companyId = ':companyId', installId = ':installId') =>
-  `${USER_SQL}, i.id AS "installId", i.crew_id AS "installCrewId", j.crew_id AS "jobCrewId"
-     FROM users u
-     LEFT JOIN installs i ON i.id = ${installId} AND i.company_id = u.company_id
-     LEFT JOIN jobs j ON j.id = i.job_id AND j.company_id = u.company_id
-     WHERE u.id = ${sub} AND u.company_id = ${companyId}`;
 
 export type UserWithInstallRow = UserRow & {
   installId: string | null;
@@ -96,7 +75,7 @@ export type UserWithInstallRow = UserRow & {
   jobCrewId: string | null;
 };
 
-/** The user and the install's crews from a row of `userWithInstallSql`; null when the session is not live. */
+/** The user and the install's crews from a row of `USER_WITH_INSTALL`; null when the session is not live. */
 export function accessOf(
   row: UserWithInstallRow | undefined,
   claims: SessionClaims,
@@ -122,6 +101,21 @@ type UserRow = {
 const USER_SQL = `SELECT u.id, u.company_id AS "companyId", u.role, u.name, u.email, u.active, u.token_version AS "tokenVersion", u.locale,
   ARRAY(SELECT cm.crew_id FROM crew_members cm WHERE cm.user_id = u.id AND cm.company_id = u.company_id ORDER BY cm.crew_id)
     AS "crewIds"`;
+
+// Read on every request: prepared once per connection (lib/data/prepared.ts).
+const USER = definePrepared('setline_user', `${USER_SQL} FROM users u WHERE u.id = $1 AND u.company_id = $2`);
+/** The user, their crews and one install's crews ($1 user, $2 company, $3 install); the quick tap path sends it too. */
+export const USER_WITH_INSTALL = definePrepared(
+  'setline_user_install',
+  `${USER_SQL}, i.id AS "installId", i.crew_id AS "installCrewId", j.crew_id AS "jobCrewId"
+     FROM users u
+     LEFT JOIN installs i ON i.id = $3 AND i.company_id = u.company_id
+     LEFT JOIN jobs j ON j.id = i.job_id AND j.company_id = u.company_id
+     WHERE u.id = $1 AND u.company_id = $2`,
+);
+
+const isUuid = (value: unknown) =>
+  typeof value === 'string' && /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(value);
 
 function sessionUserOf(row: UserRow | undefined, claims: SessionClaims): SessionUser | null {
   if (!row || !row.active || row.tokenVersion !== claims.tokenVersion) return null;

@@ -1,8 +1,8 @@
 import 'server-only';
 import { randomUUID } from 'node:crypto';
-import type { Client, QueryResult } from 'pg';
-import { Install, sequelize } from '@/models';
-import { accessOf, userWithInstallSql, type UserWithInstallRow } from '@/lib/auth/session';
+import type { QueryResult } from 'pg';
+import { Install } from '@/models';
+import { USER_WITH_INSTALL, accessOf, type UserWithInstallRow } from '@/lib/auth/session';
 import type { SessionClaims } from '@/lib/auth/claims';
 import type { InstallEventType, InstallStatus } from '@/lib/domain/vocabulary';
 import { mayWorkOn } from '@/lib/install/access';
@@ -14,6 +14,7 @@ import { companySettingsSql, settingsOf, type CompanySettings } from './install-
 import { insertEventSql, nextOfFold, summaryOf } from './install-events';
 import type { InstallEventRow } from './installs';
 import { insertAndNotifySql } from './live';
+import { definePrepared, executeSql, prepareSql, withPooledClient } from './prepared';
 
 // The tap's quick path. Most taps at the manhole (a pressure reading, inflated, deflated, a note) come in log order,
 // on an install already started, and touch nothing but the install's row and its log. Such a tap is recorded here
@@ -65,91 +66,85 @@ export async function recordTapInOrder(
   const body = parsed.data;
   if (deviceTimeRefusal(body.deviceTime, receivedAt)) return null;
 
-  const client = (await sequelize.connectionManager.getConnection({ type: 'write' })) as Client;
-  const sql = (value: unknown) => literal(client, value);
-  const run = (name: keyof typeof STATEMENTS | string, args: unknown[]) =>
-    `EXECUTE ${name}(${args.map(sql).join(', ')})`;
-  let usable = true;
   try {
-    const read = (await client.query(
-      `${prepare(client, Object.keys(STATEMENTS))}
-       BEGIN;
-       ${run('setline_tap_who', [claims.sub, claims.companyId, installId])};
-       ${run('setline_tap_install', [installId, claims.companyId])};
-       ${run('setline_tap_replay', [claims.companyId, body.clientEventId])}`,
-    )) as unknown as QueryResult[];
-    const [who, row, replay] = read.slice(-3);
-    const planned = plan(
-      claims,
-      who.rows[0] as UserWithInstallRow | undefined,
-      row.rows[0] as LockedInstall | undefined,
-      replay.rowCount === 0,
-      { installId, body, receivedAt },
-    );
-    if (!planned) {
-      await client.query('ROLLBACK');
-      return null;
-    }
-    const { event, columns, step } = planned;
-    const update = updateStatement(Object.keys(columns));
-    await client.query(
-      `${prepare(client, [update])}
-       ${run(update, [installId, claims.companyId, ...Object.values(columns)])};
-       ${run('setline_tap_insert', [...INSERT_KEYS.map((key) => event[key]), step])};
-       COMMIT`,
-    );
-    return { event, created: true };
+    return await withPooledClient(async (client) => {
+      const run = (name: string, args: unknown[]) => executeSql(client, name, args);
+      const read = (await client.query(
+        `${prepareSql(client, [WHO, LOCKED, REPLAY])}
+         BEGIN;
+         ${run(WHO, [claims.sub, claims.companyId, installId])};
+         ${run(LOCKED, [installId, claims.companyId])};
+         ${run(REPLAY, [claims.companyId, body.clientEventId])}`,
+      )) as unknown as QueryResult[];
+      const [who, row, replay] = read.slice(-3);
+      const planned = plan(
+        claims,
+        who.rows[0] as UserWithInstallRow | undefined,
+        row.rows[0] as LockedInstall | undefined,
+        replay.rowCount === 0,
+        { installId, body, receivedAt },
+      );
+      if (!planned) {
+        await client.query('ROLLBACK');
+        return null;
+      }
+      const { event, columns, step } = planned;
+      const update = updateStatement(Object.keys(columns));
+      await client.query(
+        `${prepareSql(client, [update, INSERT])}
+         ${run(update, [installId, claims.companyId, ...Object.values(columns)])};
+         ${run(INSERT, [...INSERT_KEYS.map((key) => event[key]), step])};
+         COMMIT`,
+      );
+      return { event, created: true as const };
+    });
   } catch (error) {
-    // A database refusal (the same id stored meanwhile under another install, a constraint) or a lost connection:
-    // nothing was committed, or — a commit whose answer was lost — the full path finds the tap and replays it. The
-    // connection is closed, not pooled: which of its statements got prepared is no longer known.
-    usable = false;
-    await client.query('ROLLBACK').catch(() => undefined);
+    // A database refusal (the same id stored meanwhile under another install, a constraint) or a lost connection
+    // (closed, not pooled, by withPooledClient: nothing is left open): nothing was committed, or — a commit whose
+    // answer was lost — the full path finds the tap and replays it.
     if (!(error instanceof Error) || !('severity' in error || 'code' in error)) throw error;
     return null;
-  } finally {
-    if (usable) sequelize.connectionManager.releaseConnection(client);
-    else await sequelize.connectionManager.destroyConnection(client).catch(() => undefined);
   }
 }
 
-// The quick path's statements are prepared once per connection, in the round trip that first needs them, so
-// PostgreSQL plans them once rather than on every tap; each tap then sends EXECUTEs with its values as literals.
-const INSERT_KEYS: (keyof InstallEventRow & string)[] = [];
-const STATEMENTS: Record<string, string> = {
-  setline_tap_who: userWithInstallSql('$1', '$2', '$3'),
-  setline_tap_install: `SELECT i.status, i.event_count AS "eventCount", i.derived_at IS NOT NULL AS derived,
+// The quick path's statements (lib/data/prepared.ts). The reads run inside the tap's transaction; the install's row
+// is locked, so the replay probe sees any tap that held the lock before.
+const WHO = USER_WITH_INSTALL;
+const LOCKED = definePrepared(
+  'setline_tap_install',
+  `SELECT i.status, i.event_count AS "eventCount", i.derived_at IS NOT NULL AS derived,
       i.derived_fold::text AS fold, i.resin_kit_id AS "resinKitId", i.resin_system_id AS "resinSystemId",
       i.signed_off_by_id AS "signedOffById", ${companySettingsSql('i')}::text AS company
     FROM installs i WHERE i.id = $1 AND i.company_id = $2 FOR UPDATE`,
-  setline_tap_replay: 'SELECT 1 FROM install_events WHERE company_id = $1 AND client_event_id = $2',
-  setline_tap_insert: insertAndNotifySql(
+);
+const REPLAY = definePrepared(
+  'setline_tap_replay',
+  'SELECT 1 FROM install_events WHERE company_id = $1 AND client_event_id = $2',
+);
+const INSERT_KEYS: (keyof InstallEventRow & string)[] = [];
+const INSERT = definePrepared(
+  'setline_tap_insert',
+  insertAndNotifySql(
     insertEventSql((key) => `$${INSERT_KEYS.push(key)}`),
     `$${INSERT_KEYS.length + 1}`,
   ),
-};
-const prepared = new WeakMap<Client, Set<string>>();
+);
+const updates = new Map<string, string>();
 
 /** The install row's update for these attributes (always the same set, from `summaryOf`), named once. */
 function updateStatement(keys: string[]): string {
-  const attributes = Install.getAttributes();
-  const set = keys.map((key, i) => `${attributes[key as keyof typeof attributes].field} = $${i + 3}`).join(', ');
-  const text = `UPDATE installs SET ${set}, updated_at = now() WHERE id = $1 AND company_id = $2`;
-  let name = Object.keys(STATEMENTS).find((known) => STATEMENTS[known] === text);
+  const columns = keys.join(',');
+  let name = updates.get(columns);
   if (!name) {
-    name = `setline_tap_update_${Object.keys(STATEMENTS).length}`;
-    STATEMENTS[name] = text;
+    const attributes = Install.getAttributes();
+    const set = keys.map((key, i) => `${attributes[key as keyof typeof attributes].field} = $${i + 3}`).join(', ');
+    name = definePrepared(
+      `setline_tap_update_${updates.size}`,
+      `UPDATE installs SET ${set}, updated_at = now() WHERE id = $1 AND company_id = $2`,
+    );
+    updates.set(columns, name);
   }
   return name;
-}
-
-/** The PREPAREs of those statements not yet prepared on this connection ('' when all are). */
-function prepare(client: Client, names: string[]): string {
-  let done = prepared.get(client);
-  if (!done) prepared.set(client, (done = new Set()));
-  const missing = names.filter((name) => !done.has(name));
-  for (const name of missing) done.add(name);
-  return missing.map((name) => `PREPARE ${name} AS ${STATEMENTS[name]};`).join('\n');
 }
 
 type Tap = {
@@ -195,23 +190,3 @@ function plan(
   const next = nextOfFold(install, foldEvent(fold, event), settings);
   return { event, columns: summaryOf(install, next, body.type, user.id), step: next.state.step };
 }
-
-/**
- * A value as a SQL literal (quoted by the driver's own `escapeLiteral`); PostgreSQL casts it to its column's type.
- * Dates go as ISO instants, text arrays as array literals, objects as JSON.
- */
-function literal(client: Client, value: unknown): string {
-  if (value === null || value === undefined) return 'NULL';
-  if (typeof value === 'number') {
-    if (!Number.isFinite(value)) throw new Error(`not a finite number: ${value}`);
-    return String(value);
-  }
-  if (typeof value === 'boolean') return value ? 'TRUE' : 'FALSE';
-  if (value instanceof Date) return client.escapeLiteral(value.toISOString());
-  if (Array.isArray(value)) return client.escapeLiteral(`{${value.map(arrayElement).join(',')}}`);
-  if (typeof value === 'object') return client.escapeLiteral(JSON.stringify(value));
-  return client.escapeLiteral(String(value));
-}
-
-/** One element of an array literal: double-quoted, with backslashes and quotes escaped (PostgreSQL manual, 8.15.6). */
-const arrayElement = (value: unknown) => `"${String(value).replace(/[\\"]/g, (c) => `\\${c}`)}"`;

@@ -411,7 +411,7 @@ describe('the cost of a tap', () => {
     // the row's update, the insert with the live stream's NOTIFY, and COMMIT (prepared statements, planned once).
     expect(a).toHaveLength(2);
     expect(a[0].sql).toMatch(
-      /BEGIN;\s*EXECUTE setline_tap_who\([^)]*\);\s*EXECUTE setline_tap_install[^;]*;\s*EXECUTE setline_tap_replay/,
+      /BEGIN;\s*EXECUTE setline_user_install\([^)]*\);\s*EXECUTE setline_tap_install[^;]*;\s*EXECUTE setline_tap_replay/,
     );
     expect(a[1].sql).toMatch(/EXECUTE setline_tap_update_\d+\([^;]*;\s*EXECUTE setline_tap_insert\([^;]*;\s*COMMIT$/);
     for (const q of b) if (/FROM "?install_events/.test(q.sql)) expect(q.rows, q.sql).toBeLessThanOrEqual(1);
