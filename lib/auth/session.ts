@@ -2,6 +2,7 @@ import 'server-only';
 import { redirect } from 'next/navigation';
 import { definePrepared, queryPrepared } from '@/lib/data/prepared';
 import { AppError, forbidden, unauthorized } from '@/lib/server/errors';
+import { isUuid } from '@/lib/validation/common';
 import type { Locale } from '@/i18n/locales';
 import type { Role } from '@/lib/domain/vocabulary';
 import { getSessionClaims, type SessionClaims } from './claims';
@@ -113,9 +114,6 @@ export const USER_WITH_INSTALL = definePrepared(
      LEFT JOIN jobs j ON j.id = i.job_id AND j.company_id = u.company_id
      WHERE u.id = $1 AND u.company_id = $2`,
 );
-
-const isUuid = (value: unknown) =>
-  typeof value === 'string' && /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(value);
 
 function sessionUserOf(row: UserRow | undefined, claims: SessionClaims): SessionUser | null {
   if (!row || !row.active || row.tokenVersion !== claims.tokenVersion) return null;

@@ -9,6 +9,7 @@ import { mayWorkOn } from '@/lib/install/access';
 import { foldEvent, foldsInOrder, stateOfFold, type StoredFold } from '@/lib/install/derived';
 import { deviceTimeRefusal, isClosedInstall } from '@/lib/install/record-rules';
 import { orderRefusal } from '@/lib/install/state';
+import { isUuid } from '@/lib/validation/common';
 import { parseEventBody } from '@/lib/validation/install-events';
 import { companySettingsSql, settingsOf, type CompanySettings } from './install-derive';
 import { insertEventSql, nextOfFold, summaryOf } from './install-events';
@@ -41,8 +42,6 @@ const QUICK_TYPES: ReadonlySet<InstallEventType> = new Set<InstallEventType>([
   'note',
 ]);
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
-
 type LockedInstall = {
   status: InstallStatus;
   eventCount: number;
@@ -62,7 +61,7 @@ export async function recordTapInOrder(
 ): Promise<{ event: InstallEventRow; created: true } | null> {
   const receivedAt = new Date();
   const parsed = parseEventBody(input);
-  if (!UUID.test(installId) || !parsed.success || !QUICK_TYPES.has(parsed.data.type)) return null;
+  if (!isUuid(installId) || !parsed.success || !QUICK_TYPES.has(parsed.data.type)) return null;
   const body = parsed.data;
   if (deviceTimeRefusal(body.deviceTime, receivedAt)) return null;
 
@@ -70,9 +69,9 @@ export async function recordTapInOrder(
     return await withPooledClient(async (client) => {
       const run = (name: string, args: unknown[]) => executeSql(client, name, args);
       const read = (await client.query(
-        `${prepareSql(client, [WHO, LOCKED, REPLAY])}
+        `${prepareSql(client, [USER_WITH_INSTALL, LOCKED, REPLAY])}
          BEGIN;
-         ${run(WHO, [claims.sub, claims.companyId, installId])};
+         ${run(USER_WITH_INSTALL, [claims.sub, claims.companyId, installId])};
          ${run(LOCKED, [installId, claims.companyId])};
          ${run(REPLAY, [claims.companyId, body.clientEventId])}`,
       )) as unknown as QueryResult[];
@@ -109,7 +108,6 @@ export async function recordTapInOrder(
 
 // The quick path's statements (lib/data/prepared.ts). The reads run inside the tap's transaction; the install's row
 // is locked, so the replay probe sees any tap that held the lock before.
-const WHO = USER_WITH_INSTALL;
 const LOCKED = definePrepared(
   'setline_tap_install',
   `SELECT i.status, i.event_count AS "eventCount", i.derived_at IS NOT NULL AS derived,

@@ -2,6 +2,9 @@ import { z } from 'zod';
 
 export const uuidSchema = z.uuid('Not a valid id');
 
+/** True for a string `uuidSchema` accepts. */
+export const isUuid = (value: unknown): value is string => uuidSchema.safeParse(value).success;
+
 /** Page and size from a query string, with sane bounds. */
 export const paginationSchema = z.object({
   page: z.coerce.number().int().min(1, 'page starts at 1').default(1),
